@@ -1,0 +1,39 @@
+/** `npm start`: database up, migrate, seed, build the client, serve API and client from one process. */
+import path from 'node:path';
+import { build } from 'vite';
+import { resolveDatabaseUrl } from './database-url';
+import { loadConfig } from '../server/config';
+import { openServices, prepareDatabase } from '../server/boot';
+import { createApp } from '../server/app';
+import { DEMO_ACCOUNTS } from '../server/seeders/demo-accounts';
+
+const started = Date.now();
+const db = await resolveDatabaseUrl('postgres', Number(process.env.PG_PORT ?? 54329), 'hearthswap');
+process.env.DATABASE_URL = db.url;
+const config = loadConfig(process.env, { clientDir: path.resolve('dist/client') });
+
+const services = await openServices(config);
+const report = await prepareDatabase(config, services);
+console.log(`Database ready (${db.private ? 'private cluster in .data/postgres' : 'DATABASE_URL'}); seeded: ${JSON.stringify(report)}`);
+
+if (!process.env.SKIP_BUILD) {
+  console.log('Building the client…');
+  await build({ logLevel: 'warn' });
+}
+
+const app = createApp({ config, ...services });
+const server = app.listen(config.port, config.host, () => {
+  console.log(`\nHearthswap is serving on http://${config.host}:${config.port}  (ready in ${((Date.now() - started) / 1000).toFixed(1)} s)`);
+  if (config.env !== 'production') {
+    console.log('Demo sign-in:');
+    for (const a of DEMO_ACCOUNTS) console.log(`  ${a.role.padEnd(6)} ${a.email} / ${a.password}`);
+  }
+  console.log('Press Ctrl-C to stop.');
+});
+
+const shutdown = () => {
+  server.close();
+  services.close().finally(() => process.exit(0));
+};
+process.on('SIGINT', shutdown);
+process.on('SIGTERM', shutdown);

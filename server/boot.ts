@@ -1,0 +1,57 @@
+import pg from 'pg';
+import type { Sequelize } from 'sequelize';
+import type { Server } from 'node:http';
+import { createSequelize } from './db';
+import { createApp } from './app';
+import type { AppConfig } from './config';
+import { migrate } from './migrations';
+import { seed } from './seeders';
+
+// Sequelize models are bound to one instance per process, so apps in one process (tests) share it.
+const shared = new Map<string, { sequelize: Sequelize; users: number }>();
+
+/** Everything a running server holds, so that tests and scripts can start and stop it cleanly. */
+export async function openServices(config: AppConfig) {
+  let entry = shared.get(config.databaseUrl);
+  if (!entry) {
+    entry = { sequelize: createSequelize(config.databaseUrl), users: 0 };
+    shared.set(config.databaseUrl, entry);
+  }
+  entry.users++;
+  const { sequelize } = entry;
+  await sequelize.authenticate();
+  const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5 });
+  let closed = false;
+  const close = async () => {
+    if (closed) return;
+    closed = true;
+    await sessionPool.end().catch(() => {});
+    if (--entry.users === 0) {
+      shared.delete(config.databaseUrl);
+      await sequelize.close().catch(() => {});
+    }
+  };
+  return { sequelize, sessionPool, close };
+}
+
+export async function prepareDatabase(config: AppConfig, services: Awaited<ReturnType<typeof openServices>>) {
+  await migrate(services.sequelize);
+  return seed(services.sequelize, { demo: config.env !== 'production' });
+}
+
+export async function startServer(config: AppConfig) {
+  const services = await openServices(config);
+  const app = createApp({ config, ...services });
+  const server = await new Promise<Server>((resolve) => {
+    const s = app.listen(config.port, config.host, () => resolve(s));
+  });
+  return {
+    app,
+    server,
+    services,
+    close: async () => {
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      await services.close();
+    },
+  };
+}

@@ -1,0 +1,23 @@
+import type { Sequelize } from 'sequelize';
+import { Umzug, SequelizeStorage } from 'umzug';
+import * as m0001 from './0001-users-and-sessions';
+import * as m0002 from './0002-catalogue';
+
+/** Every migration in order; add new ones at the end and never edit one that has shipped. */
+const MIGRATIONS = [
+  { name: '0001-users-and-sessions', ...m0001 },
+  { name: '0002-catalogue', ...m0002 },
+];
+
+export function createMigrator(sequelize: Sequelize) {
+  return new Umzug({
+    migrations: MIGRATIONS.map(({ name, up, down }) => ({ name, up, down })),
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
+    logger: undefined,
+  });
+}
+
+export async function migrate(sequelize: Sequelize) {
+  return createMigrator(sequelize).up();
+}

@@ -1,0 +1,65 @@
+import { Router, type Request } from 'express';
+import passport from 'passport';
+import { loginSchema, registerSchema, updateMeSchema } from '../../shared/schemas/auth';
+import { parse } from '../middleware/validate';
+import { requireAuth } from '../middleware/auth';
+import { createUser, updateProfile } from '../services/users';
+import { HttpError } from '../lib/http-error';
+import type { RateLimits } from '../middleware/rate-limits';
+import type { User } from '../models';
+
+function logIn(req: Request, user: User) {
+  // passport regenerates the session id on login; keepSessionInfo carries the CSRF token across.
+  return new Promise<void>((resolve, reject) => {
+    req.login(user, { session: true, keepSessionInfo: true }, (error) => (error ? reject(error) : resolve()));
+  });
+}
+
+export function authRouter(limits: RateLimits, generateCsrfToken: (req: Request) => string) {
+  const router = Router();
+
+  router.get('/csrf', (req, res) => {
+    res.json({ token: generateCsrfToken(req) });
+  });
+
+  router.post('/register', limits.signups, async (req, res) => {
+    const input = parse(registerSchema, req.body);
+    const user = await createUser(input);
+    await logIn(req, user);
+    res.status(201).json(user.toPublic());
+  });
+
+  router.post('/login', ...limits.login, async (req, res) => {
+    req.body = parse(loginSchema, req.body);
+    const user = await new Promise<User | false>((resolve, reject) => {
+      passport.authenticate('local', { session: false }, (error: unknown, found: User | false) =>
+        error ? reject(error) : resolve(found),
+      )(req, res, reject);
+    });
+    if (!user) throw new HttpError(401, 'invalid_credentials', 'That e-mail and password do not match an account.');
+    await logIn(req, user);
+    res.json(user.toPublic());
+  });
+
+  router.post('/logout', (req, res, next) => {
+    req.logout((error) => {
+      if (error) return next(error);
+      req.session.destroy(() => {
+        res.clearCookie('hearthswap.sid');
+        res.status(204).end();
+      });
+    });
+  });
+
+  router.get('/me', requireAuth, (req, res) => {
+    res.json(req.user!.toPublic());
+  });
+
+  router.patch('/me', requireAuth, async (req, res) => {
+    const input = parse(updateMeSchema, req.body);
+    const user = await updateProfile(req.user!.id, input);
+    res.json(user.toPublic());
+  });
+
+  return router;
+}

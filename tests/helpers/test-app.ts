@@ -1,0 +1,45 @@
+import { inject } from 'vitest';
+import request from 'supertest';
+import type { Express } from 'express';
+import { loadConfig, type RateLimitConfig } from '../../server/config';
+import { openServices } from '../../server/boot';
+import { createApp } from '../../server/app';
+
+export interface TestApp {
+  app: Express;
+  close: () => Promise<void>;
+}
+
+/** The real app on the test database; each call is a fresh process-like instance. */
+export async function createTestApp(limits: Partial<RateLimitConfig> = {}): Promise<TestApp> {
+  const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl') });
+  config.limits = { ...config.limits, loginFailuresPer15Min: 1000, signupsPerHour: 1000, anonymousComputePerMin: 10_000, ...limits };
+  const services = await openServices(config);
+  const app = createApp({ config, ...services });
+  return { app, close: services.close };
+}
+
+let counter = 0;
+export function uniqueEmail(prefix = 'user') {
+  counter++;
+  return `${prefix}-${Date.now().toString(36)}-${process.pid}-${counter}@example.test`;
+}
+
+/** A supertest agent that keeps cookies and sends the CSRF token like the client does. */
+export async function agentWithCsrf(app: Express) {
+  const agent = request.agent(app);
+  const res = await agent.get('/api/auth/csrf').expect(200);
+  return { agent, csrf: res.body.token as string };
+}
+
+export async function signUp(app: Express, role: 'cook' | 'coach' = 'cook') {
+  const { agent, csrf } = await agentWithCsrf(app);
+  const email = uniqueEmail(role);
+  const password = 'correct horse battery';
+  const res = await agent
+    .post('/api/auth/register')
+    .set('X-CSRF-Token', csrf)
+    .send({ email, password, displayName: `Test ${role}`, role })
+    .expect(201);
+  return { agent, csrf, email, password, user: res.body };
+}
