@@ -1,0 +1,81 @@
+import { createBrowserRouter, type RouteObject } from 'react-router';
+import { RouterProvider } from 'react-router/dom';
+import { LoadingState } from '../components/ui/spinner';
+import { PAGE_ROLES } from './access';
+import { RequireAuth, RequireRole } from './guards';
+import { NotFoundPage } from './routes/not-found';
+import { RouteErrorPage } from './routes/route-error';
+import { RootLayout } from './shell/root-layout';
+
+// The shell and the not-found page ship with the first load; each page's code loads on its first visit.
+export const routes: RouteObject[] = [
+  {
+    element: <RootLayout />,
+    children: [
+      {
+        // Pathless: a crash in a page shows inside the layout, with the header still there.
+        errorElement: <RouteErrorPage />,
+        // Shown inside the layout on the very first load while that page's code arrives.
+        hydrateFallbackElement: <LoadingState label="Opening the page…" className="justify-center py-24" />,
+        children: [
+          { index: true, lazy: () => import('./routes/kitchen').then((m) => ({ Component: m.KitchenPage })) },
+          { path: 'foods', lazy: () => import('./routes/foods').then((m) => ({ Component: m.FoodsPage })) },
+          { path: 'sign-in', lazy: () => import('./routes/sign-in').then((m) => ({ Component: m.SignInPage })) },
+          { path: 'sign-up', lazy: () => import('./routes/sign-up').then((m) => ({ Component: m.SignUpPage })) },
+          {
+            element: <RequireAuth />,
+            children: [
+              { path: 'account', lazy: () => import('./routes/account').then((m) => ({ Component: m.AccountPage })) },
+            ],
+          },
+          {
+            element: <RequireRole roles={PAGE_ROLES.recipeBook} />,
+            children: [
+              {
+                path: 'recipes',
+                lazy: () => import('./routes/recipe-book').then((m) => ({ Component: m.RecipeBookPage })),
+              },
+            ],
+          },
+          {
+            element: <RequireRole roles={PAGE_ROLES.myCoach} />,
+            children: [
+              { path: 'coach', lazy: () => import('./routes/my-coach').then((m) => ({ Component: m.MyCoachPage })) },
+            ],
+          },
+          {
+            element: <RequireRole roles={PAGE_ROLES.swapLibrary} />,
+            children: [
+              {
+                path: 'swaps',
+                lazy: () => import('./routes/swap-library').then((m) => ({ Component: m.SwapLibraryPage })),
+              },
+            ],
+          },
+          {
+            element: <RequireRole roles={PAGE_ROLES.clients} />,
+            children: [
+              { path: 'clients', lazy: () => import('./routes/clients').then((m) => ({ Component: m.ClientsPage })) },
+            ],
+          },
+          {
+            path: 'admin',
+            element: <RequireRole roles={PAGE_ROLES.admin} />,
+            children: [
+              { path: 'users', lazy: () => import('./routes/people').then((m) => ({ Component: m.PeoplePage })) },
+              { path: 'outbox', lazy: () => import('./routes/outbox').then((m) => ({ Component: m.OutboxPage })) },
+              { index: true, element: <NotFoundPage /> },
+            ],
+          },
+          { path: '*', element: <NotFoundPage /> },
+        ],
+      },
+    ],
+  },
+];
+
+const router = createBrowserRouter(routes);
+
+export function AppRouter() {
+  return <RouterProvider router={router} />;
+}

@@ -1,0 +1,24 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { UpdateMeInput } from '../../../../shared/schemas/auth';
+import { api } from '../../../lib/api-client';
+import { queryKeys } from '../../../lib/query-keys';
+import type { User } from '../../../lib/user';
+
+export type { UpdateMeInput };
+
+export function updateMe(input: UpdateMeInput): Promise<User> {
+  return api.patch<User>('/api/auth/me', input);
+}
+
+export function useUpdateMe() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateMe,
+    onSuccess: (user, input) => {
+      queryClient.setQueryData<User | null>(queryKeys.auth.me, (previous) =>
+        // Keep what was sent even if the server answers with fewer fields.
+        previous ? { ...previous, ...input, ...user } : user,
+      );
+    },
+  });
+}

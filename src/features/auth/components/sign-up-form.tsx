@@ -1,0 +1,90 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { Button } from '../../../components/ui/button';
+import { ChoiceCards, TextField } from '../../../components/ui/field';
+import { PasswordField } from '../../../components/ui/password-field';
+import { applyServerFieldErrors } from '../../../lib/form-errors';
+import type { User } from '../../../lib/user';
+import { useSignUp } from '../api/sign-up';
+import { PASSWORD_MIN_LENGTH, registerSchema, type RegisterInput } from '../schemas';
+import { FormErrorAlert } from './form-error-alert';
+
+const ROLE_CHOICES = [
+  {
+    value: 'cook' as const,
+    label: 'I cook for myself or my household',
+    description:
+      'Paste the recipes you love, see what is in a serving, get a lighter version that keeps the portion size, and keep the ones you like in your recipe book. If a coach invites you, their approved swaps and targets come with you.',
+  },
+  {
+    value: 'coach' as const,
+    label: 'I coach other people',
+    description:
+      'Build a library of swaps you approve, with cooking notes, publish it to your clients, invite them by e-mail, set their targets and look over the versions they save. Coaching here does not replace a licensed dietitian.',
+  },
+];
+
+const FIELDS = ['displayName', 'email', 'password', 'role'] as const;
+
+export function SignUpForm({ onSignedUp }: { onSignedUp: (user: User) => void }) {
+  const signUp = useSignUp();
+  const [fieldsShown, setFieldsShown] = useState(false);
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors },
+  } = useForm({
+    resolver: zodResolver(registerSchema),
+    defaultValues: { displayName: '', email: '', password: '', role: undefined },
+  });
+
+  const submit = handleSubmit((values: RegisterInput) => {
+    signUp.mutate(values, {
+      onSuccess: onSignedUp,
+      onError: (error) => setFieldsShown(applyServerFieldErrors(error, setError, FIELDS)),
+    });
+  });
+
+  return (
+    <form onSubmit={submit} noValidate className="flex flex-col gap-6">
+      <FormErrorAlert error={signUp.error} fieldsShown={fieldsShown} />
+      <ChoiceCards
+        legend="How will you use Hearthswap?"
+        options={ROLE_CHOICES}
+        columns={2}
+        error={errors.role?.message}
+        inputProps={register('role')}
+      />
+      <TextField
+        label="Display name"
+        hint="Shown to your coach or clients. A first name is plenty."
+        autoComplete="nickname"
+        maxLength={80}
+        error={errors.displayName?.message}
+        {...register('displayName')}
+      />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        inputMode="email"
+        autoCapitalize="none"
+        spellCheck={false}
+        error={errors.email?.message}
+        {...register('email')}
+      />
+      <PasswordField
+        label="Password"
+        hint={`At least ${PASSWORD_MIN_LENGTH} characters. A short sentence you will remember works well.`}
+        autoComplete="new-password"
+        error={errors.password?.message}
+        {...register('password')}
+      />
+      <Button type="submit" size="lg" fullWidth loading={signUp.isPending} loadingLabel="Creating your account…">
+        Create account
+      </Button>
+    </form>
+  );
+}

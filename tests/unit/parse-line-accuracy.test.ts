@@ -1,0 +1,185 @@
+/**
+ * Parser accuracy against labelled ingredient lines.
+ * Source: ../shared/reference/ingredient-lines/tastecooking-2024.csv — 6,320 lines labelled by hand
+ * (input, name, quantity, unit, size, preparation, comment, purpose), from the MIT-licensed
+ * ingredient-parser project (S. Tom Strange), recipes published in 2024.
+ *
+ * Which lines are scored: those whose label gives exactly one quantity and exactly one unit
+ * (no space in either field), where the quantity is a number, a fraction "#1$2", a mixed number
+ * "1#1$4", a range of those "2-3" (scored against its midpoint, as the parser returns midpoints),
+ * or a number word ("one", "half", "dozen"). Lines whose quantity label is not a number ("few")
+ * and lines with several quantities or units ("200 7" / "g oz": a metric and a US amount) are
+ * left out, because their single right answer is not defined.
+ *
+ * Scores:
+ * - quantity: exact (within 1e-9) equality with the labelled value;
+ * - unit: the labelled unit and the parsed unit map to the same canonical id (normaliseUnit spells
+ *   "c", "cup", "cups" alike; a label no unit table knows counts as a miss);
+ * - name: token overlap F1 between the labelled name and the parsed name, after lower-casing,
+ *   dropping punctuation and folding plurals ("leaves" ~ "leaf"), averaged over the lines.
+ */
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { parseLine } from '../../shared/parse-line';
+import { normaliseUnit } from '../../shared/units';
+
+const CSV_PATH = path.resolve(process.cwd(), '../shared/reference/ingredient-lines/tastecooking-2024.csv');
+
+/** RFC 4180: quoted fields may hold commas, doubled quotes and line breaks. */
+function readCsv(text: string): string[][] {
+  const rows: string[][] = [];
+  let row: string[] = [];
+  let field = '';
+  let quoted = false;
+  for (let i = 0; i < text.length; i++) {
+    const ch = text[i];
+    if (quoted) {
+      if (ch === '"' && text[i + 1] === '"') {
+        field += '"';
+        i++;
+      } else if (ch === '"') quoted = false;
+      else field += ch;
+    } else if (ch === '"' && field === '') quoted = true;
+    else if (ch === ',') {
+      row.push(field);
+      field = '';
+    } else if (ch === '\n' || ch === '\r') {
+      if (ch === '\r' && text[i + 1] === '\n') i++;
+      row.push(field);
+      rows.push(row);
+      row = [];
+      field = '';
+    } else field += ch;
+  }
+  if (field !== '' || row.length) {
+    row.push(field);
+    rows.push(row);
+  }
+  return rows;
+}
+
+const WORD_QUANTITIES: Record<string, number> = { one: 1, two: 2, three: 3, four: 4, half: 0.5, dozen: 12 };
+
+/** "#1$2" → 0.5, "1#1$4" → 1.25, "2-3" → 2.5, "one" → 1; null when the label is not a number. */
+function labelledQuantity(label: string): number | null {
+  const one = (t: string): number | null => {
+    const word = WORD_QUANTITIES[t.toLowerCase()];
+    if (word !== undefined) return word;
+    const m = t.match(/^(\d+)?(?:#(\d+)\$(\d+))?$/) ?? null;
+    if (m && (m[1] || m[2])) return (m[1] ? Number(m[1]) : 0) + (m[2] ? Number(m[2]) / Number(m[3]) : 0);
+    return /^\d*\.?\d+$/.test(t) ? Number(t) : null;
+  };
+  const range = label.match(/^([^-]+)-([^-]+)$/);
+  if (range) {
+    const lo = one(range[1]);
+    const hi = one(range[2]);
+    return lo !== null && hi !== null ? (lo + hi) / 2 : null;
+  }
+  return one(label);
+}
+
+function stem(token: string): string {
+  if (token.endsWith('ves') && token.length > 4) return token.slice(0, -3) + 'f';
+  if (token.endsWith('ies') && token.length > 4) return token.slice(0, -3) + 'y';
+  if (/(?:ch|sh|s|x|z|o)es$/.test(token) && token.length > 4) return token.slice(0, -2);
+  if (token.endsWith('s') && !token.endsWith('ss') && token.length > 3) return token.slice(0, -1);
+  return token;
+}
+
+function tokens(text: string): string[] {
+  return text
+    .toLowerCase()
+    .normalize('NFC')
+    .split(/[^\p{L}\p{N}]+/u)
+    .filter(Boolean)
+    .map(stem);
+}
+
+/** Token overlap F1 of two phrases (1 when both are empty). */
+function tokenF1(expected: string, actual: string): number {
+  const e = tokens(expected);
+  const a = tokens(actual);
+  if (e.length === 0 && a.length === 0) return 1;
+  if (e.length === 0 || a.length === 0) return 0;
+  const remaining = [...a];
+  let common = 0;
+  for (const t of e) {
+    const at = remaining.indexOf(t);
+    if (at >= 0) {
+      common++;
+      remaining.splice(at, 1);
+    }
+  }
+  if (common === 0) return 0;
+  const precision = common / a.length;
+  const recall = common / e.length;
+  return (2 * precision * recall) / (precision + recall);
+}
+
+interface Labelled {
+  input: string;
+  name: string;
+  quantity: number;
+  unit: string;
+}
+
+function loadScoredLines(): { all: number; scored: Labelled[] } {
+  const [header, ...rows] = readCsv(readFileSync(CSV_PATH, 'utf8')).filter((r) => r.length > 1);
+  const col = (name: string) => header.indexOf(name);
+  const [iInput, iName, iQuantity, iUnit] = ['input', 'name', 'quantity', 'unit'].map(col);
+  const scored: Labelled[] = [];
+  for (const r of rows) {
+    const quantityLabel = r[iQuantity].trim();
+    const unitLabel = r[iUnit].trim();
+    if (!quantityLabel || !unitLabel || /\s/.test(quantityLabel) || /\s/.test(unitLabel)) continue;
+    const quantity = labelledQuantity(quantityLabel);
+    if (quantity === null) continue;
+    scored.push({ input: r[iInput], name: r[iName], quantity, unit: unitLabel });
+  }
+  return { all: rows.length, scored };
+}
+
+describe('parseLine accuracy on labelled lines (tastecooking-2024.csv, ingredient-parser project)', () => {
+  const { all, scored } = loadScoredLines();
+
+  it('reads the whole labelled file with a quoting-aware CSV reader', () => {
+    // The reference README states 6,320 labelled lines.
+    expect(all).toBe(6320);
+    expect(scored.length).toBeGreaterThan(4000);
+  });
+
+  it('meets the accuracy thresholds: quantity ≥ 95 %, unit ≥ 95 %, name token overlap ≥ 85 %', () => {
+    let quantityHits = 0;
+    let unitHits = 0;
+    let nameOverlap = 0;
+    const misses: string[] = [];
+    for (const line of scored) {
+      const parsed = parseLine(line.input);
+      const quantityOk = parsed.quantity !== null && Math.abs(parsed.quantity - line.quantity) < 1e-9;
+      const expectedUnit = normaliseUnit(line.unit);
+      const unitOk = expectedUnit !== null && parsed.unit === expectedUnit;
+      const f1 = tokenF1(line.name, parsed.name);
+      if (quantityOk) quantityHits++;
+      if (unitOk) unitHits++;
+      nameOverlap += f1;
+      if (process.env.PARSE_MISSES && (!quantityOk || !unitOk || f1 < 0.5)) {
+        misses.push(
+          `${line.input} | want ${line.quantity} ${line.unit} "${line.name}" | got ${parsed.quantity} ${parsed.unit} "${parsed.name}"`,
+        );
+      }
+    }
+    const n = scored.length;
+    const quantityPct = (100 * quantityHits) / n;
+    const unitPct = (100 * unitHits) / n;
+    const namePct = (100 * nameOverlap) / n;
+    if (misses.length) console.log(misses.join('\n'));
+    console.log(
+      `parse-line accuracy over ${n} single-quantity single-unit lines: ` +
+        `quantity ${quantityPct.toFixed(2)} %, unit ${unitPct.toFixed(2)} %, name token overlap ${namePct.toFixed(2)} %`,
+    );
+    expect(quantityPct).toBeGreaterThanOrEqual(95);
+    expect(unitPct).toBeGreaterThanOrEqual(95);
+    expect(namePct).toBeGreaterThanOrEqual(85);
+  });
+});
