@@ -30,6 +30,21 @@ const NOT_BRANDS = new Set([
 ]);
 /** Brands USDA writes in mixed case in Long_Desc (so the capitals test misses them) though ManufacName names the maker. */
 const MIXED_CASE_BRANDS = ['VITASOY', 'NASOYA', 'AZUMAYA', 'V8', 'HORMEL', 'POWERADE', 'ROCKSTAR', 'BUTTERFINGER', 'CREAMSICLE', 'NATREON', 'CORNNUTS', 'NESTLE'];
+/** Pairs that only branded SR28 foods happen to use but that describe a generic food ("CORN FLAKES"). */
+const GENERIC_PAIRS = new Set([
+  'CORN FLAKES', 'RAISIN BRAN', 'HONEY NUT', 'BRAN FLAKES', 'OF OATS', 'OF RICE', 'OF WHEAT', 'WITH ALMOND',
+  'HONEY GRAHAM', 'CRISP RICE', 'CRUNCHY NUT', 'GRAHAM SQUARES', 'NUT CLUSTERS', 'CINN TOAST', 'PIZZA THIN',
+  'MUFFIN TOPS', 'FLATBREAD CRISPS', 'FRUIT GRANOLA', 'MINI CRISPS', 'CHERRY BITS', 'CHERRY BITES', 'BERRY BERRY',
+  'POT OF', 'TO HEART', 'HEART TO', 'OVER CHOC', 'BUTTER TOAST', 'BUTTER CRUNCH', 'HONEY CLUSTERS', 'HONEY CRUNCH',
+  'BRAN CLUSTERS', 'BRAN CRUNCH', 'CRUNCHY BRAN', 'NUT BRAN', 'OAT CINN', 'OATS HONEY', 'OATMEAL CRISP',
+  'ALMOND BITES', 'BITES CHIPS', 'BITES FUDGE', 'RANCH SNACK', 'EX CRISPY', 'FRSTD FLAKES', 'FRSTD RICE',
+  'FRSTD TOAST', 'GOLDEN ALMOND', 'LN CRUNCH', 'MEDLEY CRUNCH', 'CRUNCH CORN', 'TOAST CRUNCH', 'ISLAND VANILLA',
+  'CINN HARVEST', 'CANOLA HARVEST', 'CRL BARS', 'SWT BABY', 'DOUBLE NOODLE', 'CLASSIC DOUBLE', 'CLASSIC SINGLE',
+  'KING DOUBLE', 'DOUBLE QUARTER', 'WHITE FOODS', 'BIG BRKFST', 'BURRITO SUPREME', 'FOODS SHAKE', 'JUC BLUE',
+  'JUC GRN', 'JUC KALE', 'HOUSE FLATBREAD', 'SNACK WRAP', 'MEAL KITS', 'STEAM MEAL', 'SUPPER MEAL', 'REAL MEDLEYS',
+  'DAILY GRNS', 'FARMS DAILY', 'FARMS GRN', 'FARMS BERRY', 'FARMS BBQ', 'WHL HEARTS', 'BRANDS CORP', 'BY TEXAS',
+  'OF GOLD', 'THE BORDER', 'DORA THE', 'ONE HONEY', 'ONE RAISIN', 'STRAWBERRY FIELDS', 'SOUTHERN KITCHEN',
+]);
 const words = abbreviations.words as Record<string, string>;
 
 function capsInLongDesc(longDesc: string): Set<string> {
@@ -84,8 +99,7 @@ const pairs = [...isCap].filter(
     g.includes(' ') &&
     mostlyBranded(g) &&
     !writtenLowercase(g) &&
-    // "CORN FLAKES", "HONEY NUT": both words ordinary, so the pair could name a generic food
-    g.split(' ').some((t) => !ordinary(t)) &&
+    !GENERIC_PAIRS.has(g) &&
     g.split(' ').every((t) => !singleSet.has(t) && !/^\d/.test(t) && !['USDA', 'ARA', 'DHA', 'US', 'USA'].includes(t)),
 );
 
