@@ -2,14 +2,18 @@
 import path from 'node:path';
 import { build } from 'vite';
 import { resolveDatabaseUrl } from './database-url';
+import { ensureS3 } from './local-s3';
 import { loadConfig } from '../server/config';
 import { openServices, prepareDatabase } from '../server/boot';
 import { createApp } from '../server/app';
 import { DEMO_ACCOUNTS } from '../server/seeders/demo-accounts';
+import { getFoodEngine } from '../server/services/food-engine';
+import { createMailContext } from '../server/mail-context';
 
 const started = Date.now();
 const db = await resolveDatabaseUrl('postgres', Number(process.env.PG_PORT ?? 54329), 'hearthswap');
 process.env.DATABASE_URL = db.url;
+const s3 = await ensureS3('.data/s3', Number(process.env.S3_LOCAL_PORT ?? 54331));
 const config = loadConfig(process.env, { clientDir: path.resolve('dist/client') });
 
 const services = await openServices(config);
@@ -21,7 +25,10 @@ if (!process.env.SKIP_BUILD) {
   await build({ logLevel: 'warn' });
 }
 
-const app = createApp({ config, ...services });
+const engine = await getFoodEngine(services.sequelize);
+console.log(`Catalogue loaded: ${engine.foods.length} foods, indexes built in ${engine.builtMs.toFixed(0)} ms`);
+const mail = await createMailContext(config);
+const app = createApp({ config, ...services, mail: mail.mail });
 const server = app.listen(config.port, config.host, () => {
   console.log(`\nHearthswap is serving on http://${config.host}:${config.port}  (ready in ${((Date.now() - started) / 1000).toFixed(1)} s)`);
   if (config.env !== 'production') {
@@ -33,7 +40,7 @@ const server = app.listen(config.port, config.host, () => {
 
 const shutdown = () => {
   server.close();
-  services.close().finally(() => process.exit(0));
+  Promise.allSettled([services.close(), s3.close(), mail.close()]).finally(() => process.exit(0));
 };
 process.on('SIGINT', shutdown);
 process.on('SIGTERM', shutdown);

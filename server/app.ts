@@ -15,19 +15,39 @@ import { apiNotFound, errorHandler } from './middleware/errors';
 import { authRouter } from './routes/auth';
 import { healthRouter } from './routes/health';
 import { adminRouter } from './routes/admin';
+import { analyzeRouter } from './routes/analyze';
+import { foodsRouter } from './routes/foods';
+import { rewriteRouter } from './routes/rewrite';
+import { recipesRouter } from './routes/recipes';
+import { clientsRouter, commentsRouter, customFoodsRoute, invitationsRouter, myCoachRouter, outboxQuery, swapsRouter, targetsRouter } from './routes/coaching';
+import { requireRole } from './middleware/auth';
+import { prepRouter, shoppingListsRouter } from './routes/prep';
+import { parse } from './middleware/validate';
+import { HttpError } from './lib/http-error';
+import type { Mailer, StoredMail } from './mail';
 
 export interface AppContext {
   config: AppConfig;
   sequelize: Sequelize;
   /** pg pool for the session store */
   sessionPool: pg.Pool;
+  /** outgoing mail; the development outbox is readable when `outbox` is given */
+  mail?: { mailer: Mailer; appUrl: string; outbox?: () => StoredMail[] };
 }
+
+/** Without SMTP settings mail is refused with a clear 503 rather than silently dropped. */
+const NO_MAILER: Mailer = {
+  send: async () => {
+    throw new HttpError(503, 'mail_unavailable', 'E-mail is not configured on this server (set SMTP_HOST and SMTP_PORT).');
+  },
+};
 
 /** Routes that compute and change nothing: callable without a CSRF token (anonymous API use). */
 const CSRF_EXEMPT = new Set(['/api/analyze', '/api/rewrite', '/api/targets/estimate']);
 
 export function createApp(context: AppContext) {
   const { config, sequelize, sessionPool } = context;
+  const mail = { mailer: context.mail?.mailer ?? NO_MAILER, appUrl: context.mail?.appUrl ?? `http://${config.host}:${config.port}` };
   initModels(sequelize);
   const passport = configurePassport();
   const app = express();
@@ -71,14 +91,34 @@ export function createApp(context: AppContext) {
     getTokenFromRequest: (req) => req.headers['x-csrf-token'] as string | undefined,
   });
   const csrf: RequestHandler = (req, res, next) =>
-    CSRF_EXEMPT.has(req.path) ? next() : csrfSynchronisedProtection(req, res, next);
+    CSRF_EXEMPT.has(req.originalUrl.split('?')[0]) ? next() : csrfSynchronisedProtection(req, res, next);
 
   const limits = createRateLimits(config.limits);
   const api = express.Router();
   api.use(csrf);
   api.use('/health', healthRouter(sequelize));
-  api.use('/auth', authRouter(limits, (req) => generateToken(req)));
+  api.use('/auth', authRouter(limits, (req) => generateToken(req), mail));
   api.use('/admin', adminRouter());
+  api.use('/analyze', analyzeRouter(sequelize, limits.compute));
+  api.use('/foods', foodsRouter(sequelize));
+  api.use('/rewrite', rewriteRouter(sequelize, limits.compute));
+  api.use('/recipes/:id/versions/:number/comments', commentsRouter());
+  api.use('/recipes/:id/versions/:number/prep', prepRouter(sequelize));
+  api.use('/shopping-lists', shoppingListsRouter(sequelize));
+  api.use('/recipes', recipesRouter(sequelize, config));
+  api.post('/foods', ...customFoodsRoute(sequelize));
+  api.use('/swaps', swapsRouter(sequelize));
+  api.use('/clients', clientsRouter(sequelize, mail));
+  api.use('/invitations', invitationsRouter(sequelize));
+  api.use('/coach', myCoachRouter(sequelize));
+  api.use('/targets', targetsRouter());
+  if (config.env !== 'production' && context.mail?.outbox) {
+    const outbox = context.mail.outbox;
+    api.get('/dev/outbox', requireRole('admin'), (req, res) => {
+      const { limit } = parse(outboxQuery, req.query);
+      res.json({ messages: outbox().slice(-limit).reverse() });
+    });
+  }
   api.use(apiNotFound);
   app.use('/api', api);
 

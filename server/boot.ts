@@ -6,6 +6,9 @@ import { createApp } from './app';
 import type { AppConfig } from './config';
 import { migrate } from './migrations';
 import { seed } from './seeders';
+import { getFoodEngine } from './services/food-engine';
+import { closeSolverPool } from './services/solver-pool';
+import { createMailContext } from './mail-context';
 
 // Sequelize models are bound to one instance per process, so apps in one process (tests) share it.
 const shared = new Map<string, { sequelize: Sequelize; users: number }>();
@@ -28,6 +31,7 @@ export async function openServices(config: AppConfig) {
     await sessionPool.end().catch(() => {});
     if (--entry.users === 0) {
       shared.delete(config.databaseUrl);
+      await closeSolverPool().catch(() => {});
       await sequelize.close().catch(() => {});
     }
   };
@@ -41,7 +45,9 @@ export async function prepareDatabase(config: AppConfig, services: Awaited<Retur
 
 export async function startServer(config: AppConfig) {
   const services = await openServices(config);
-  const app = createApp({ config, ...services });
+  const mail = await createMailContext(config);
+  const app = createApp({ config, ...services, mail: mail.mail });
+  await getFoodEngine(services.sequelize);
   const server = await new Promise<Server>((resolve) => {
     const s = app.listen(config.port, config.host, () => resolve(s));
   });
@@ -49,8 +55,10 @@ export async function startServer(config: AppConfig) {
     app,
     server,
     services,
+    mail,
     close: async () => {
       await new Promise<void>((resolve) => server.close(() => resolve()));
+      await mail.close();
       await services.close();
     },
   };

@@ -12,6 +12,29 @@ export interface AppConfig {
   clientDir: string | null;
   /** request-per-window limits; tests raise or lower them */
   limits: RateLimitConfig;
+  /** S3-compatible photo storage; null when none is configured */
+  s3: S3Config | null;
+}
+
+export interface S3Config {
+  endpoint: string | undefined;
+  region: string;
+  bucket: string;
+  accessKeyId: string;
+  secretAccessKey: string;
+  forcePathStyle: boolean;
+}
+
+export function s3FromEnv(env: NodeJS.ProcessEnv): S3Config | null {
+  if (!env.S3_BUCKET) return null;
+  return {
+    endpoint: env.S3_ENDPOINT || undefined,
+    region: env.S3_REGION ?? 'us-east-1',
+    bucket: env.S3_BUCKET,
+    accessKeyId: env.S3_ACCESS_KEY_ID ?? '',
+    secretAccessKey: env.S3_SECRET_ACCESS_KEY ?? '',
+    forcePathStyle: env.S3_FORCE_PATH_STYLE !== 'false',
+  };
 }
 
 export interface RateLimitConfig {
@@ -49,6 +72,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     secureCookies: env.COOKIE_SECURE === 'true' ? true : env.COOKIE_SECURE === 'false' ? false : 'auto',
     clientDir: null,
     limits: { ...DEFAULT_LIMITS },
+    s3: s3FromEnv(env),
     ...overrides,
   };
   if (config.env === 'production' && config.sessionSecret === DEFAULT_SESSION_SECRET) {

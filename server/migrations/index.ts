@@ -2,11 +2,15 @@ import type { Sequelize } from 'sequelize';
 import { Umzug, SequelizeStorage } from 'umzug';
 import * as m0001 from './0001-users-and-sessions';
 import * as m0002 from './0002-catalogue';
+import * as m0003 from './0003-recipes';
+import * as m0004 from './0004-coaching';
 
 /** Every migration in order; add new ones at the end and never edit one that has shipped. */
 const MIGRATIONS = [
   { name: '0001-users-and-sessions', ...m0001 },
   { name: '0002-catalogue', ...m0002 },
+  { name: '0003-recipes', ...m0003 },
+  { name: '0004-coaching', ...m0004 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

@@ -1,7 +1,9 @@
 import type { Sequelize } from 'sequelize';
 import { User, initUser } from './user';
+import { Recipe, RecipeVersion, initRecipes } from './recipe';
+import { Swap, Invitation, ClientTarget, VersionComment, PasswordReset, initCoaching } from './coaching';
 
-export { User };
+export { User, Recipe, RecipeVersion, Swap, Invitation, ClientTarget, VersionComment, PasswordReset };
 
 let initialised: Sequelize | null = null;
 
@@ -9,5 +11,7 @@ let initialised: Sequelize | null = null;
 export function initModels(sequelize: Sequelize) {
   if (initialised === sequelize) return;
   initUser(sequelize);
+  initRecipes(sequelize);
+  initCoaching(sequelize);
   initialised = sequelize;
 }

@@ -1,6 +1,9 @@
 import { Router, type Request } from 'express';
 import passport from 'passport';
 import { loginSchema, registerSchema, updateMeSchema } from '../../shared/schemas/auth';
+import { passwordResetConfirmSchema, passwordResetRequestSchema } from '../../shared/schemas/coaching';
+import { confirmPasswordReset, requestPasswordReset } from '../services/password-reset';
+import type { Mailer } from '../mail';
 import { parse } from '../middleware/validate';
 import { requireAuth } from '../middleware/auth';
 import { createUser, updateProfile } from '../services/users';
@@ -15,7 +18,7 @@ function logIn(req: Request, user: User) {
   });
 }
 
-export function authRouter(limits: RateLimits, generateCsrfToken: (req: Request) => string) {
+export function authRouter(limits: RateLimits, generateCsrfToken: (req: Request) => string, mail: { mailer: Mailer; appUrl: string }) {
   const router = Router();
 
   router.get('/csrf', (req, res) => {
@@ -49,6 +52,18 @@ export function authRouter(limits: RateLimits, generateCsrfToken: (req: Request)
         res.status(204).end();
       });
     });
+  });
+
+  router.post('/password-reset', limits.signups, async (req, res) => {
+    const { email } = parse(passwordResetRequestSchema, req.body);
+    await requestPasswordReset(email, mail);
+    res.status(202).json({ ok: true, message: 'If that address has an account, a reset link is on its way.' });
+  });
+
+  router.post('/password-reset/confirm', async (req, res) => {
+    const { token, password } = parse(passwordResetConfirmSchema, req.body);
+    await confirmPasswordReset(token, password);
+    res.json({ ok: true });
   });
 
   router.get('/me', requireAuth, (req, res) => {

@@ -4,7 +4,7 @@ import { User } from '../models';
 import { conflict, notFound } from '../lib/http-error';
 import type { RegisterInput, UpdateMeInput, UserRole } from '../../shared/schemas/auth';
 
-export const BCRYPT_COST = 12;
+export const BCRYPT_COST = 11;
 
 export async function hashPassword(password: string) {
   return bcrypt.hash(password, BCRYPT_COST);

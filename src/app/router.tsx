@@ -20,6 +20,7 @@ export const routes: RouteObject[] = [
         children: [
           { index: true, lazy: () => import('./routes/kitchen').then((m) => ({ Component: m.KitchenPage })) },
           { path: 'foods', lazy: () => import('./routes/foods').then((m) => ({ Component: m.FoodsPage })) },
+          { path: 'foods/:id', lazy: () => import('./routes/food-detail').then((m) => ({ Component: m.FoodDetailPage })) },
           { path: 'sign-in', lazy: () => import('./routes/sign-in').then((m) => ({ Component: m.SignInPage })) },
           { path: 'sign-up', lazy: () => import('./routes/sign-up').then((m) => ({ Component: m.SignUpPage })) },
           {
@@ -34,6 +35,18 @@ export const routes: RouteObject[] = [
               {
                 path: 'recipes',
                 lazy: () => import('./routes/recipe-book').then((m) => ({ Component: m.RecipeBookPage })),
+              },
+              {
+                path: 'recipes/:id',
+                lazy: () => import('./routes/recipe-detail').then((m) => ({ Component: m.RecipeDetailPage })),
+              },
+              {
+                path: 'recipes/:id/compare',
+                lazy: () => import('./routes/recipe-compare').then((m) => ({ Component: m.RecipeComparePage })),
+              },
+              {
+                path: 'recipes/:id/print',
+                lazy: () => import('./routes/recipe-print').then((m) => ({ Component: m.RecipePrintPage })),
               },
             ],
           },

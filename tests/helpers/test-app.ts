@@ -4,19 +4,31 @@ import type { Express } from 'express';
 import { loadConfig, type RateLimitConfig } from '../../server/config';
 import { openServices } from '../../server/boot';
 import { createApp } from '../../server/app';
+import { createMailContext } from '../../server/mail-context';
+import type { StoredMail } from '../../server/mail';
 
 export interface TestApp {
   app: Express;
+  /** every message the app sent, through a fake SMTP server on loopback */
+  outbox: () => StoredMail[];
   close: () => Promise<void>;
 }
 
 /** The real app on the test database; each call is a fresh process-like instance. */
 export async function createTestApp(limits: Partial<RateLimitConfig> = {}): Promise<TestApp> {
-  const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl') });
+  const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), ...inject('s3Env') });
   config.limits = { ...config.limits, loginFailuresPer15Min: 1000, signupsPerHour: 1000, anonymousComputePerMin: 10_000, ...limits };
   const services = await openServices(config);
-  const app = createApp({ config, ...services });
-  return { app, close: services.close };
+  const mail = await createMailContext(config, { APP_URL: 'http://hearthswap.test' });
+  const app = createApp({ config, ...services, mail: mail.mail });
+  return {
+    app,
+    outbox: () => mail.mail?.outbox?.() ?? [],
+    close: async () => {
+      await mail.close();
+      await services.close();
+    },
+  };
 }
 
 let counter = 0;

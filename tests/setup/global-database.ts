@@ -7,6 +7,7 @@ import pg from 'pg';
 import { startPrivatePostgres } from '../../scripts/postgres';
 import { loadConfig } from '../../server/config';
 import { openServices, prepareDatabase } from '../../server/boot';
+import { ensureS3 } from '../../scripts/local-s3';
 
 export default async function setup(project: TestProject) {
   let stop = () => {};
@@ -23,7 +24,18 @@ export default async function setup(project: TestProject) {
   await prepareDatabase(config, services);
   await services.close();
   project.provide('databaseUrl', url);
-  return () => stop();
+  const s3 = await ensureS3('.data/s3-test', 0);
+  project.provide('s3Env', {
+    S3_ENDPOINT: process.env.S3_ENDPOINT ?? '',
+    S3_BUCKET: process.env.S3_BUCKET ?? '',
+    S3_REGION: process.env.S3_REGION ?? '',
+    S3_ACCESS_KEY_ID: process.env.S3_ACCESS_KEY_ID ?? '',
+    S3_SECRET_ACCESS_KEY: process.env.S3_SECRET_ACCESS_KEY ?? '',
+  });
+  return async () => {
+    await s3.close();
+    stop();
+  };
 }
 
 async function recreateDatabase(adminUrl: string, name: string) {
@@ -40,5 +52,6 @@ async function recreateDatabase(adminUrl: string, name: string) {
 declare module 'vitest' {
   export interface ProvidedContext {
     databaseUrl: string;
+    s3Env: Record<string, string>;
   }
 }

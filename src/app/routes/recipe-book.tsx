@@ -1,24 +1,166 @@
-import { Link } from 'react-router';
-import { buttonClasses } from '../../components/ui/button';
+import { useEffect, useState } from 'react';
+import { Link, useLocation, useNavigate, useSearchParams } from 'react-router';
+import { ActionToast } from '../../components/ui/action-toast';
+import { Button, buttonClasses } from '../../components/ui/button';
 import { EmptyState } from '../../components/ui/empty-state';
+import { ErrorState } from '../../components/ui/error-state';
 import { Page } from '../../components/ui/page';
+import { LoadingState } from '../../components/ui/spinner';
+import { useToast } from '../../components/ui/toast';
+import { isRecipeSort, useRecipes, type RecipeSort } from '../../features/recipes/api/list-recipes';
+import { useUndeleteRecipe } from '../../features/recipes/api/undelete-recipe';
+import { ImportRecipeDialog } from '../../features/recipes/components/import-recipe-dialog';
+import { RecipeList } from '../../features/recipes/components/recipe-list';
+import { RecipeListControls } from '../../features/recipes/components/recipe-list-controls';
+import { recipePath } from '../../features/recipes/recipe-links';
+import { useDebouncedValue } from '../../features/recipes/use-debounced-value';
+import { deletedRecipeFrom } from '../../features/recipes/deleted-recipe-state';
+import { errorMessage } from '../../lib/api-client';
+
+function UndoDelete() {
+  const location = useLocation();
+  const navigate = useNavigate();
+  const toast = useToast();
+  const undelete = useUndeleteRecipe();
+  const deleted = deletedRecipeFrom(location.state);
+  if (!deleted) return null;
+
+  // Forget the deletion in history, so going back and forth doesn't offer the undo again.
+  const forget = () => navigate(`${location.pathname}${location.search}`, { replace: true, state: null });
+
+  return (
+    <ActionToast
+      message={<>“{deleted.title}” was deleted.</>}
+      actionLabel="Undo"
+      busy={undelete.isPending}
+      onDismiss={forget}
+      onAction={() =>
+        undelete.mutate(deleted.id, {
+          onSuccess: (recipe) => {
+            toast.show(`“${recipe.title}” is back in the book.`, 'success');
+            navigate(recipePath(recipe.id), { replace: true });
+          },
+          onError: (error) => {
+            toast.show(`Couldn't bring it back: ${errorMessage(error)}`, 'danger');
+            forget();
+          },
+        })
+      }
+    />
+  );
+}
 
 export function RecipeBookPage() {
-  return (
-    <Page
-      title="Recipe book"
-      description="The recipes you keep, each with the versions you saved along the way: the original, the lighter rewrites, and the one you settled on. From here you can scale a version into a week of batch prep with gram weights per portion and a shopping list."
-    >
+  const [params, setParams] = useSearchParams();
+  const location = useLocation();
+  const navigate = useNavigate();
+  const toast = useToast();
+  const [importing, setImporting] = useState(false);
+  const [typed, setTyped] = useState(params.get('q') ?? '');
+  const sortParam = params.get('sort');
+  const sort: RecipeSort = isRecipeSort(sortParam) ? sortParam : 'updated';
+  const q = useDebouncedValue(typed.trim(), 250);
+  const recipes = useRecipes(q, sort);
+
+  function updateParams(next: { q?: string; sort?: RecipeSort }) {
+    const merged = new URLSearchParams(params);
+    const nextQ = next.q ?? q;
+    const nextSort = next.sort ?? sort;
+    if (nextQ) merged.set('q', nextQ);
+    else merged.delete('q');
+    if (nextSort !== 'updated') merged.set('sort', nextSort);
+    else merged.delete('sort');
+    if (merged.toString() === params.toString()) return;
+    // Keep what the history entry carries (the undo offer) while the search changes.
+    setParams(merged, { replace: true, preventScrollReset: true, state: location.state });
+  }
+
+  // The settled search goes into the address, so a reload or a shared link shows the same list.
+  useEffect(() => {
+    updateParams({ q });
+  }, [q]);
+
+  const importButton = (
+    <Button onClick={() => setImporting(true)} aria-haspopup="dialog">
+      Import a recipe
+    </Button>
+  );
+
+  let body;
+  if (recipes.isPending) {
+    body = <LoadingState label="Opening the recipe book…" />;
+  } else if (recipes.isError) {
+    body = <ErrorState title="The recipe book didn't load" error={recipes.error} onRetry={() => void recipes.refetch()} retrying={recipes.isFetching} />;
+  } else if (recipes.data.length === 0 && !q) {
+    body = (
       <EmptyState
-        title="No recipes saved yet"
+        title="No recipes in the book yet"
         action={
-          <Link to="/" className={buttonClasses()}>
-            Start in the Kitchen
-          </Link>
+          <div className="flex flex-wrap justify-center gap-2">
+            <Button onClick={() => setImporting(true)} aria-haspopup="dialog">
+              Import a recipe
+            </Button>
+            <Link to="/" className={buttonClasses({ variant: 'secondary' })}>
+              Start in the Kitchen
+            </Link>
+          </div>
         }
       >
-        Analyse a recipe in the Kitchen, keep the version you like, and it lands here.
+        Bring in a recipe you already cook, from a file or by pasting it, or work one out in the Kitchen and keep the
+        version you like. Each recipe you keep lands here with every version you saved.
       </EmptyState>
-    </Page>
+    );
+  } else {
+    const count = recipes.data.length;
+    body = (
+      <div className="flex flex-col gap-4">
+        <RecipeListControls
+          query={typed}
+          onQueryChange={setTyped}
+          sort={sort}
+          onSortChange={(next) => updateParams({ sort: next })}
+        />
+        <p className="text-sm text-ink-soft" aria-live="polite">
+          {q ? `${count} recipe${count === 1 ? '' : 's'} with “${q}” in the title.` : `${count} recipe${count === 1 ? '' : 's'} in the book.`}
+          {recipes.isFetching && !recipes.isPending && <span className="ml-2">Updating…</span>}
+        </p>
+        {count === 0 ? (
+          <EmptyState
+            title={`No titles with “${q}”`}
+            action={
+              <Button variant="secondary" onClick={() => setTyped('')}>
+                Show every recipe
+              </Button>
+            }
+          >
+            Try a shorter word, or check the spelling.
+          </EmptyState>
+        ) : (
+          <RecipeList recipes={recipes.data} caption="Your recipes, with energy and protein per serving of each one's newest version" />
+        )}
+      </div>
+    );
+  }
+
+  return (
+    <>
+      <UndoDelete />
+      <Page
+        title="Recipe book"
+        description="The recipes you keep, each with the versions you saved along the way: the original as written, the lighter rewrites, and your own edits. Figures are per serving of each recipe's newest version."
+        actions={importButton}
+      >
+        {body}
+      </Page>
+      <ImportRecipeDialog
+        open={importing}
+        onClose={() => setImporting(false)}
+        onImported={(recipe) => {
+          setImporting(false);
+          toast.show(`“${recipe.title}” is in the book, with its ingredients as version 1.`, 'success');
+          navigate(recipePath(recipe.id));
+        }}
+      />
+    </>
   );
 }

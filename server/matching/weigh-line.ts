@@ -1,0 +1,296 @@
+/**
+ * Weigh a parsed ingredient line in grams (PRODUCT.md "The computation", step 3).
+ *
+ * - Mass units convert exactly (NIST Handbook 44, in shared/units.ts).
+ * - Volume units convert to mL exactly, then to grams through the food's volume portion that fits the
+ *   line best ("2 cups shredded mozzarella" → "1 cup, shredded" = 112 g), else the food's density.
+ * - Counts and household pieces ("3 large eggs", "2 cloves garlic", "1 stick butter", "2 (8-inch)
+ *   tortillas") use the household portions; a package with a stated size ("1 (15 oz) can") weighs
+ *   its size.
+ * Every line also gets its volume in mL (grams ÷ density when it was not given as a volume).
+ * Nothing here throws or returns NaN, a negative or an infinite number.
+ */
+import type { CatalogueFood, Portion } from '../../shared/food';
+import type { ParsedLine } from '../../shared/parse-line';
+import { massToGrams, unitKind, volumeToMl } from '../../shared/units';
+import { inchesOf, parseMeasure, sizeWordOf, stem, type MeasureInfo, type SizeWord } from './measure-text';
+import { words } from './normalise-phrase';
+
+export interface WeighedLine {
+  grams: number;
+  volumeMl: number | null;
+  /** the household portion the grams came from, e.g. "1 cup, shredded" */
+  portionUsed: string | null;
+  warnings: string[];
+}
+
+export interface WeighOptions {
+  /** size word a bare count of this food means ("large" for eggs); see countDefaultFor */
+  countDefault?: string | null;
+}
+
+export const WARNING_SET_AMOUNT = 'No amount given: set an amount to weigh this line.';
+export const WARNING_NO_FOOD = 'No catalogue food matched: choose a food to weigh this line.';
+
+interface ReadPortion {
+  portion: Portion;
+  info: MeasureInfo;
+}
+
+/** Qualifiers that describe the usual state of a measured food, not a preparation. */
+const NEUTRAL_QUALIFIERS = new Set(['fluid', 'whole', 'ground', 'unsift', 'raw', 'not', 'purchased', 'as', 'yield']);
+/** Qualifiers whose cut sizes pack alike in a cup. */
+const CUT_SMALL = new Set(['chop', 'dice', 'mince', 'cube']);
+/** Pieces of a food, never what a bare count ("2 onions") means. */
+const SUB_PIECES = new Set([
+  'slice', 'strip', 'ring', 'wedge', 'cube', 'cubic', 'spear', 'floret', 'leaf', 'sprig', 'stalk', 'pat', 'dash',
+  'packet', 'package', 'container', 'can', 'bunch', 'head', 'pinch', 'piece', 'rings', 'inch', 'cup', 'tbsp',
+  'tsp', 'stick', 'jar', 'bottle', 'box', 'bag', 'envelope', 'sheet', 'section', 'segment', 'enchilada',
+  'serving', 'pint', 'quart', 'order', 'patty', 'clove',
+]);
+const SIZE_UNITS = new Set(['large', 'medium', 'small', 'extra-large', 'jumbo']);
+
+function finite(n: number): number {
+  return Number.isFinite(n) && n > 0 ? n : 0;
+}
+
+function gramsText(g: number): string {
+  return `${Number(g.toPrecision(4))} g`;
+}
+
+function read(portions: Portion[]): ReadPortion[] {
+  return portions
+    .filter((p) => p.grams > 0 && p.amount > 0 && Number.isFinite(p.grams) && Number.isFinite(p.amount))
+    .map((portion) => ({ portion, info: parseMeasure(portion.measure) }));
+}
+
+/** Millilitres in one portion's measure, or null when it is not a volume. */
+function portionMl(r: ReadPortion): number | null {
+  if (r.info.kind !== 'volume' || !r.info.unit) return null;
+  const ml = volumeToMl(r.portion.amount, r.info.unit);
+  return ml !== null && ml > 0 ? ml : null;
+}
+
+function lineStems(parsed: ParsedLine): { prep: Set<string>; name: Set<string> } {
+  const prep = new Set(words(`${parsed.preparation ?? ''} ${parsed.comment ?? ''}`).map(stem));
+  const name = new Set(words(parsed.name ?? '').map(stem));
+  return { prep, name };
+}
+
+/**
+ * The volume portion that fits the line best: one whose measure names the line's preparation
+ * ("cup, shredded" for shredded cheese), else a plain one, in the line's own unit when there is one.
+ */
+function bestVolumePortion(all: ReadPortion[], parsed: ParsedLine, unit: string | null): { r: ReadPortion; gPerMl: number } | null {
+  const { prep, name } = lineStems(parsed);
+  const prepCut = [...prep].some((s) => CUT_SMALL.has(s));
+  let best: { r: ReadPortion; gPerMl: number; score: number } | null = null;
+  for (const r of all) {
+    const ml = portionMl(r);
+    if (ml === null) continue;
+    // The best-fitting qualifier counts; one that fits nothing costs a little ("cup, whipped" for cream).
+    let fit = 0;
+    let misfit = 0;
+    for (const q of r.info.qualifiers) {
+      if (prep.has(q)) fit = Math.max(fit, 2);
+      else if (prepCut && CUT_SMALL.has(q)) fit = Math.max(fit, 1.5);
+      else if (name.has(q)) fit = Math.max(fit, 1);
+      else if (NEUTRAL_QUALIFIERS.has(q)) continue;
+      else misfit += q === 'pack' ? 0.2 : 0.5;
+    }
+    let score = fit - misfit;
+    if (unit && r.info.unit === unit) score += 0.3;
+    else if (!unit && r.info.unit === 'cup') score += 0.3;
+    if (r.portion.amount === 1) score += 0.05;
+    if (!best || score > best.score) best = { r, gPerMl: r.portion.grams / ml, score };
+  }
+  return best ? { r: best.r, gPerMl: best.gPerMl } : null;
+}
+
+interface CountAsk {
+  size: SizeWord | null;
+  piece: string | null;
+  diameter: number | null;
+}
+
+function countAsk(parsed: ParsedLine): CountAsk {
+  const unit = parsed.unit;
+  const size = (unit && SIZE_UNITS.has(unit) ? sizeWordOf(unit) : null) ?? sizeWordOf(parsed.sizeText);
+  const piece = unit && !SIZE_UNITS.has(unit) && unitKind(unit) === 'count' ? unit : null;
+  const diameter = inchesOf(parsed.sizeText);
+  return { size, piece, diameter };
+}
+
+const SIZE_PREFERENCE: Record<SizeWord, number> = {
+  medium: 1.5,
+  large: 0.5,
+  small: 0.2,
+  'extra-large': 0,
+  jumbo: 0,
+  'extra-small': -0.2,
+};
+
+/** Piece words that mean the food itself when a recipe counts it: "1 fruit" is one lemon. */
+const WHOLE_PIECES = new Set(['whole', 'fruit', 'each', 'item', 'medium', 'large', 'small']);
+
+/** Pieces a household measure may name for the unit a recipe wrote: "4 strips bacon" → "slice raw". */
+const PIECE_EQUIVALENTS: Record<string, string[]> = {
+  strip: ['slice'],
+  slice: ['strip'],
+  fillet: ['piece'],
+  link: ['piece', 'sausage'],
+  piece: ['each'],
+  ball: ['piece'],
+  square: ['piece'],
+};
+
+/** The count portion that fits the line; `guessed` when the line left its size open. */
+function bestCountPortion(all: ReadPortion[], ask: CountAsk, countDefault: string | null, nameWords: Set<string>): { r: ReadPortion; guessed: boolean } | null {
+  let best: { r: ReadPortion; score: number } | null = null;
+  for (const r of all) {
+    if (r.info.kind !== 'count' || r.info.serving) continue;
+    const pieces = r.info.pieces;
+    let score = 0;
+    if (ask.piece) {
+      if (pieces.includes(ask.piece)) score += 4;
+      else if ((PIECE_EQUIVALENTS[ask.piece] ?? []).some((p) => pieces.includes(p))) score += 3;
+      else if (ask.piece === 'piece' || ask.piece === 'serving') score += 0;
+      else continue;
+    } else if (pieces.some((p) => SUB_PIECES.has(p))) {
+      if (pieces.includes('piece') && pieces.length === 1) score -= 0.5;
+      else score -= 3;
+    }
+    if (ask.size) {
+      if (r.info.size === ask.size) score += 3;
+      else if (r.info.size) score -= 2;
+      else score -= 0.5;
+    } else if (countDefault && r.info.size === countDefault) score += 3;
+    else if (r.info.size) score += SIZE_PREFERENCE[r.info.size];
+    // USDA's unsized piece named like the food ("1 tortilla") is its usual one.
+    else score += pieces.length > 0 && pieces.every((p) => nameWords.has(p)) ? 1.6 : 1;
+    if (ask.diameter !== null) {
+      const d = r.info.diameter;
+      if (d) {
+        const off = ask.diameter < d.lo ? d.lo - ask.diameter : ask.diameter > d.hi ? ask.diameter - d.hi : 0;
+        score += 3 - Math.min(4, off);
+      } else score -= 1;
+    }
+    if (!best || score > best.score) best = { r, score };
+  }
+  if (!best) return null;
+  const chosen = best.r;
+  let guessed: boolean;
+  if (ask.size !== null) guessed = chosen.info.size !== ask.size;
+  else if (ask.diameter !== null) {
+    const d = chosen.info.diameter;
+    guessed = !d || ask.diameter < d.lo - 0.5 || ask.diameter > d.hi + 0.5;
+  } else if (ask.piece !== null) guessed = chosen.info.size !== null;
+  else {
+    // "2 chicken breasts" weighed as "1 piece": a portion the line did not name.
+    const named = chosen.info.pieces.every((p) => WHOLE_PIECES.has(p) || nameWords.has(p));
+    guessed = chosen.info.size !== null || !named;
+  }
+  return { r: chosen, guessed };
+}
+
+/** Grams per mL for a food's volume, preparation considered; null when nothing gives one. */
+function densityFor(all: ReadPortion[], parsed: ParsedLine, food: CatalogueFood | null): number | null {
+  const v = bestVolumePortion(all, parsed, null);
+  if (v && v.gPerMl > 0 && Number.isFinite(v.gPerMl)) return v.gPerMl;
+  if (food && food.densityGPerMl > 0 && Number.isFinite(food.densityGPerMl)) return food.densityGPerMl;
+  return null;
+}
+
+function result(grams: number, volumeMl: number | null, portionUsed: string | null, warnings: string[]): WeighedLine {
+  const g = finite(grams);
+  const v = volumeMl === null || !Number.isFinite(volumeMl) || volumeMl < 0 ? null : volumeMl;
+  return { grams: g, volumeMl: v, portionUsed, warnings };
+}
+
+export function weighLine(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion[], opts: WeighOptions = {}): WeighedLine {
+  try {
+    return weigh(parsed, food, portions ?? [], opts);
+  } catch {
+    return result(0, null, null, ['This line could not be weighed: set its amount in grams.']);
+  }
+}
+
+function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion[], opts: WeighOptions): WeighedLine {
+  const warnings: string[] = [];
+  const quantity = parsed.quantity;
+  if (quantity === null || !Number.isFinite(quantity) || quantity <= 0 || parsed.flags?.includes('to-taste')) {
+    return result(0, 0, null, [WARNING_SET_AMOUNT]);
+  }
+  const all = read(portions);
+  const unit = parsed.unit;
+  const kind = unitKind(unit);
+  const density = () => densityFor(all, parsed, food);
+  const roleDensityNote = () => {
+    if (food && food.densitySource === 'role-default') {
+      warnings.push(`No household volume weight for this food: used the usual density of its kind (${Number(food.densityGPerMl.toPrecision(3))} g/mL).`);
+    }
+  };
+  // The recipe's own weight ("10 tbsp (140 g) butter") beats any density.
+  const statedMass = parsed.equivalents?.find((e) => unitKind(e.unit) === 'mass');
+
+  if (kind === 'mass' && unit) {
+    const grams = massToGrams(quantity, unit) ?? 0;
+    if (!food) return result(grams, null, null, [WARNING_NO_FOOD]);
+    const d = density();
+    return result(grams, d ? grams / d : null, null, warnings);
+  }
+
+  if (kind === 'volume' && unit) {
+    const ml = volumeToMl(quantity, unit) ?? 0;
+    if (statedMass) return result(massToGrams(statedMass.quantity, statedMass.unit) ?? 0, ml, null, warnings);
+    if (!food) return result(0, ml, null, [WARNING_NO_FOOD]);
+    const v = bestVolumePortion(all, parsed, unit);
+    if (v) return result(ml * v.gPerMl, ml, v.r.portion.label, warnings);
+    if (food.densityGPerMl > 0 && Number.isFinite(food.densityGPerMl)) {
+      roleDensityNote();
+      return result(ml * food.densityGPerMl, ml, null, warnings);
+    }
+    return result(0, ml, null, ['No density for this food: give the amount in grams.']);
+  }
+
+  // A package or piece of stated size: "1 (15 oz) can", "2 (8 fl oz) cartons".
+  const size = parsed.size;
+  if (size && Number.isFinite(size.quantity) && size.quantity > 0) {
+    const sizeKind = unitKind(size.unit);
+    if (sizeKind === 'mass') {
+      const grams = quantity * (massToGrams(size.quantity, size.unit) ?? 0);
+      if (!food) return result(grams, null, null, [WARNING_NO_FOOD]);
+      const d = density();
+      return result(grams, d ? grams / d : null, null, warnings);
+    }
+    if (sizeKind === 'volume') {
+      const ml = quantity * (volumeToMl(size.quantity, size.unit) ?? 0);
+      if (!food) return result(0, ml, null, [WARNING_NO_FOOD]);
+      const v = bestVolumePortion(all, parsed, size.unit);
+      if (v) return result(ml * v.gPerMl, ml, v.r.portion.label, warnings);
+      roleDensityNote();
+      return result(ml * food.densityGPerMl, ml, null, warnings);
+    }
+  }
+  if (statedMass) {
+    const grams = massToGrams(statedMass.quantity, statedMass.unit) ?? 0;
+    const d = food ? density() : null;
+    return result(grams, d ? grams / d : null, null, food ? warnings : [WARNING_NO_FOOD]);
+  }
+  if (!food) return result(0, null, null, [WARNING_NO_FOOD]);
+
+  const ask = countAsk(parsed);
+  const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, new Set(words(parsed.name ?? '')));
+  if (!chosen) {
+    const what = ask.piece ? `"${parsed.unitText ?? ask.piece}"` : 'one piece';
+    return result(0, null, null, [`No household weight for ${what} of this food: give the amount in grams, ounces or cups.`]);
+  }
+  const each = chosen.r.portion.grams / chosen.r.portion.amount;
+  const grams = quantity * each;
+  if (chosen.guessed) {
+    const asked = ask.size ? `No "${ask.size}" weight` : ask.diameter !== null ? `No ${ask.diameter}-inch weight` : 'No size given';
+    warnings.push(`${asked}: weighed as ${chosen.r.portion.label} (${gramsText(each)} each).`);
+  }
+  const d = density();
+  return result(grams, d ? grams / d : null, chosen.r.portion.label, warnings);
+}

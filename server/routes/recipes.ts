@@ -1,0 +1,175 @@
+import { Router, type RequestHandler } from 'express';
+import multer from 'multer';
+import type { Sequelize } from 'sequelize';
+import type { AppConfig } from '../config';
+import {
+  createRecipeSchema,
+  createVersionSchema,
+  deleteRecipeSchema,
+  idParam,
+  recipeListQuerySchema,
+  updateRecipeSchema,
+  versionParam,
+} from '../../shared/schemas/recipes';
+import { parse } from '../middleware/validate';
+import { requireAuth } from '../middleware/auth';
+import { getFoodEngine } from '../services/food-engine';
+import {
+  addVersion,
+  createRecipe,
+  deleteRecipe,
+  duplicateRecipe,
+  findReadableRecipe,
+  getVersion,
+  listRecipes,
+  listVersions,
+  recipeDetail,
+  restoreVersion,
+  undeleteRecipe,
+  updateRecipe,
+  versionDetail,
+} from '../services/recipes';
+import { parseRecipeFile } from '../services/recipe-import';
+import { toJsonLd } from '../services/recipe-export';
+import { MAX_PHOTO_BYTES, processPhoto, readPhoto, removePhoto, storePhoto } from '../services/photo-storage';
+import { HttpError, badRequest } from '../lib/http-error';
+import { Recipe } from '../models';
+
+const MAX_IMPORT_BYTES = 1024 * 1024;
+
+/** multer with its errors mapped to ours: too large → 413, anything else → 400 naming the field. */
+function singleFile(maxBytes: number, what: string): RequestHandler {
+  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1 } }).single('file');
+  return (req, res, next) =>
+    upload(req, res, (error: unknown) => {
+      if (!error) return next();
+      if (error instanceof multer.MulterError && error.code === 'LIMIT_FILE_SIZE') {
+        return next(new HttpError(413, 'payload_too_large', `The ${what} is larger than ${(maxBytes / 1024 / 1024).toFixed(0)} MB.`));
+      }
+      if (error instanceof multer.MulterError) return next(badRequest(`file: ${error.message}. Send one file in the form field "file".`));
+      next(error);
+    });
+}
+
+export function recipesRouter(sequelize: Sequelize, config: AppConfig) {
+  const router = Router();
+  router.use(requireAuth);
+  const engine = () => getFoodEngine(sequelize);
+
+  router.get('/', async (req, res) => {
+    const query = parse(recipeListQuerySchema, req.query);
+    res.json({ recipes: await listRecipes(req.user!, query) });
+  });
+
+  router.post('/', async (req, res) => {
+    const input = parse(createRecipeSchema, req.body);
+    const recipe = await createRecipe(sequelize, await engine(), req.user!, input);
+    res.status(201).json(await recipeDetail(recipe));
+  });
+
+  router.post('/import', singleFile(MAX_IMPORT_BYTES, 'recipe file'), async (req, res) => {
+    if (!req.file) throw badRequest('file: attach the recipe in the form field "file".', { fieldErrors: { file: ['Required.'] } });
+    const imported = parseRecipeFile(req.file.buffer);
+    const recipe = await createRecipe(sequelize, await engine(), req.user!, {
+      title: imported.title,
+      servings: imported.servings,
+      notes: imported.notes,
+      method: imported.method,
+      lines: imported.ingredients.map((input) => ({ input })),
+    });
+    res.status(201).json({ ...(await recipeDetail(recipe)), importedFrom: imported.format });
+  });
+
+  router.get('/:id', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    res.json(await recipeDetail(await findReadableRecipe(req.user!, id)));
+  });
+
+  router.patch('/:id', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    const input = parse(updateRecipeSchema, req.body);
+    res.json(await recipeDetail(await updateRecipe(sequelize, req.user!, id, input)));
+  });
+
+  router.delete('/:id', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    const { revision } = parse(deleteRecipeSchema, { ...req.query, ...(req.body ?? {}) });
+    const recipe = await deleteRecipe(sequelize, req.user!, id, revision);
+    res.json({ id: recipe.id, deleted: true, revision: recipe.revision });
+  });
+
+  router.post('/:id/undelete', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    res.json(await recipeDetail(await undeleteRecipe(sequelize, req.user!, id)));
+  });
+
+  router.post('/:id/duplicate', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    res.status(201).json(await recipeDetail(await duplicateRecipe(sequelize, await engine(), req.user!, id)));
+  });
+
+  router.get('/:id/versions', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    res.json({ versions: await listVersions(await findReadableRecipe(req.user!, id)) });
+  });
+
+  router.post('/:id/versions', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    const input = parse(createVersionSchema, req.body);
+    const version = await addVersion(sequelize, await engine(), req.user!, id, input);
+    res.status(201).json(versionDetail(await engine(), version));
+  });
+
+  router.get('/:id/versions/:number', async (req, res) => {
+    const { id, number } = parse(versionParam, req.params);
+    const recipe = await findReadableRecipe(req.user!, id);
+    res.json(versionDetail(await engine(), await getVersion(recipe, number)));
+  });
+
+  router.post('/:id/restore/:number', async (req, res) => {
+    const { id, number } = parse(versionParam, req.params);
+    const version = await restoreVersion(sequelize, await engine(), req.user!, id, number);
+    res.status(201).json(versionDetail(await engine(), version));
+  });
+
+  router.get('/:id/export.jsonld', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    const recipe = await findReadableRecipe(req.user!, id);
+    const versions = await listVersions(recipe);
+    const number = req.query.version ? Number(req.query.version) : versions.at(-1)?.number;
+    if (!number || !Number.isInteger(number)) throw badRequest('version must be a version number.');
+    const version = await getVersion(recipe, number);
+    const slug = recipe.title.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'recipe';
+    res.type('application/ld+json');
+    res.setHeader('Content-Disposition', `attachment; filename="${slug}-v${version.number}.jsonld"`);
+    res.send(JSON.stringify(toJsonLd(recipe, version), null, 2));
+  });
+
+  router.post('/:id/photo', singleFile(MAX_PHOTO_BYTES, 'photo'), async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    const recipe = await Recipe.findOne({ where: { id, ownerId: req.user!.id, deletedAt: null } });
+    if (!recipe) throw new HttpError(404, 'not_found', 'No recipe with that id.');
+    if (!req.file) throw badRequest('file: attach the photo in the form field "file".', { fieldErrors: { file: ['Required.'] } });
+    const image = await processPhoto(req.file.buffer);
+    const stored = await storePhoto(config.s3, recipe.id, image);
+    const previous = recipe.photoKey;
+    recipe.photoKey = stored.key;
+    recipe.photoType = stored.type;
+    recipe.revision += 1;
+    await recipe.save();
+    if (previous) await removePhoto(config.s3, previous);
+    res.status(201).json(await recipeDetail(recipe));
+  });
+
+  router.get('/:id/photo', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    const recipe = await findReadableRecipe(req.user!, id);
+    if (!recipe.photoKey) throw new HttpError(404, 'not_found', 'This recipe has no photo.');
+    const image = await readPhoto(config.s3, recipe.photoKey);
+    res.type(recipe.photoType ?? 'image/webp');
+    res.setHeader('Cache-Control', 'private, max-age=86400');
+    res.send(image);
+  });
+
+  return router;
+}

@@ -1,0 +1,19 @@
+import { Router, type RequestHandler } from 'express';
+import type { Sequelize } from 'sequelize';
+import { rewriteRequestSchema } from '../../shared/schemas/rewrite';
+import { parse } from '../middleware/validate';
+import { getFoodEngine } from '../services/food-engine';
+import { rewriteRecipe } from '../services/rewrite';
+import { publishedSwapsForClient as approvedSwapsFor } from '../services/coaching';
+
+export function rewriteRouter(sequelize: Sequelize, limit: RequestHandler) {
+  const router = Router();
+  router.post('/', limit, async (req, res) => {
+    const input = parse(rewriteRequestSchema, req.body);
+    const engine = await getFoodEngine(sequelize);
+    const approvedSwaps = await approvedSwapsFor(req.user ?? null);
+    const explain = req.query.explain === '1' || req.query.explain === 'true';
+    res.json(await rewriteRecipe(engine, input, { approvedSwaps }, explain));
+  });
+  return router;
+}

@@ -1,0 +1,48 @@
+import type { Sequelize } from 'sequelize';
+import { readAllFoods, type StoredFood } from './catalogue';
+import { createFoodMatcher, type FoodMatcher } from '../matching/food-matcher';
+import { DEFAULT_ALIASES } from '../matching/alias-index';
+import { countDefaultFor, loadCuratedPortions, portionsFor } from '../matching/portions';
+
+/** The catalogue in memory with its search indexes: built once per database at start-up. */
+export interface FoodEngine {
+  foods: StoredFood[];
+  byId: Map<number, StoredFood>;
+  /** catalogue foods (USDA); custom foods are matched per viewer */
+  matcher: FoodMatcher;
+  /** the size word a bare count means for a food ("3 eggs" → large) */
+  countDefaults: Map<number, string>;
+  builtMs: number;
+}
+
+const engines = new WeakMap<Sequelize, Promise<FoodEngine>>();
+
+export function getFoodEngine(sequelize: Sequelize): Promise<FoodEngine> {
+  let engine = engines.get(sequelize);
+  if (!engine) {
+    engine = buildEngine(sequelize);
+    engine.catch(() => engines.delete(sequelize));
+    engines.set(sequelize, engine);
+  }
+  return engine;
+}
+
+/** Call after a custom food is added or changed. */
+export function invalidateFoodEngine(sequelize: Sequelize) {
+  engines.delete(sequelize);
+}
+
+async function buildEngine(sequelize: Sequelize): Promise<FoodEngine> {
+  const started = performance.now();
+  const foods = await readAllFoods(sequelize);
+  const curated = loadCuratedPortions();
+  const countDefaults = new Map<number, string>();
+  for (const food of foods) {
+    food.portions = portionsFor(food, curated);
+    const countDefault = countDefaultFor(food, curated);
+    if (countDefault) countDefaults.set(food.id, countDefault);
+  }
+  const catalogue = foods.filter((f) => f.source === 'usda-sr28');
+  const matcher = createFoodMatcher(catalogue, DEFAULT_ALIASES);
+  return { foods, byId: new Map(foods.map((f) => [f.id, f])), matcher, countDefaults, builtMs: performance.now() - started };
+}

@@ -1,0 +1,153 @@
+import { badRequest } from '../lib/http-error';
+
+export interface ImportedRecipe {
+  title: string;
+  servings: number;
+  ingredients: string[];
+  method: string;
+  notes: string;
+  format: 'json-ld' | 'text';
+}
+
+const MAX_SERVINGS = 100;
+
+function clampServings(n: number | null): number {
+  if (n === null || !Number.isFinite(n) || n < 1) return 4;
+  return Math.min(MAX_SERVINGS, Math.round(n));
+}
+
+/** "6 servings", "Serves 4-6", 8, ["4", "4 portions"] → a whole number of servings (a range takes its low end). */
+export function servingsFrom(value: unknown): number | null {
+  if (typeof value === 'number') return value;
+  if (Array.isArray(value)) {
+    for (const v of value) {
+      const n = servingsFrom(v);
+      if (n !== null) return n;
+    }
+    return null;
+  }
+  if (typeof value === 'string') {
+    const m = value.match(/(\d+(?:\.\d+)?)/);
+    return m ? Number(m[1]) : null;
+  }
+  return null;
+}
+
+function textOf(value: unknown): string {
+  if (typeof value === 'string') return value;
+  if (Array.isArray(value)) return value.map(textOf).filter(Boolean).join('\n');
+  if (value && typeof value === 'object') {
+    const o = value as Record<string, unknown>;
+    if (o['@type'] === 'HowToSection') return textOf(o.itemListElement);
+    return textOf(o.text ?? o.name ?? '');
+  }
+  return '';
+}
+
+function isRecipeNode(node: unknown): node is Record<string, unknown> {
+  if (!node || typeof node !== 'object') return false;
+  const type = (node as Record<string, unknown>)['@type'];
+  return type === 'Recipe' || (Array.isArray(type) && type.includes('Recipe'));
+}
+
+function findRecipeNode(doc: unknown): Record<string, unknown> | null {
+  if (isRecipeNode(doc)) return doc;
+  if (Array.isArray(doc)) {
+    for (const d of doc) {
+      const found = findRecipeNode(d);
+      if (found) return found;
+    }
+  }
+  if (doc && typeof doc === 'object' && '@graph' in doc) return findRecipeNode((doc as { '@graph': unknown })['@graph']);
+  return null;
+}
+
+function fromJsonLd(doc: unknown): ImportedRecipe {
+  const node = findRecipeNode(doc);
+  if (!node) throw badRequest('file: the JSON has no schema.org Recipe in it (no object with "@type": "Recipe").');
+  const ingredients = (Array.isArray(node.recipeIngredient) ? node.recipeIngredient : Array.isArray(node.ingredients) ? node.ingredients : [])
+    .map((s) => String(s).trim())
+    .filter(Boolean);
+  if (ingredients.length === 0) throw badRequest('file: the Recipe has no recipeIngredient list.');
+  return {
+    title: String(node.name ?? 'Imported recipe').trim().slice(0, 200) || 'Imported recipe',
+    servings: clampServings(servingsFrom(node.recipeYield)),
+    ingredients,
+    method: textOf(node.recipeInstructions).trim(),
+    notes: typeof node.description === 'string' ? node.description.trim() : '',
+    format: 'json-ld',
+  };
+}
+
+const HEADING = /^\s*(?:#{1,6}\s*)?([A-Za-z][A-Za-z ]{1,40}?)\s*:?\s*$/;
+const INGREDIENT_HEADINGS = /^(ingredients?|you(?:'|’)ll need|what you need|shopping)$/i;
+const METHOD_HEADINGS = /^(method|instructions?|directions?|steps?|preparation)$/i;
+const SERVINGS_LINE = /\b(?:serves|servings?|makes|yield|portions?)\b\s*:?\s*(\d+)/i;
+
+/** A plain-text or Markdown recipe: a title, an Ingredients section, an optional Method section. */
+function fromText(text: string): ImportedRecipe {
+  const lines = text.split(/\r\n|\r|\n/);
+  let title = '';
+  let servings: number | null = null;
+  let section: 'head' | 'ingredients' | 'method' | 'notes' = 'head';
+  const ingredients: string[] = [];
+  const method: string[] = [];
+  const notes: string[] = [];
+  for (const raw of lines) {
+    const line = raw.trim();
+    if (!line) continue;
+    const servingsMatch = line.match(SERVINGS_LINE);
+    if (servingsMatch && servings === null && line.length < 60) {
+      servings = Number(servingsMatch[1]);
+      continue;
+    }
+    const heading = line.match(HEADING);
+    if (heading && INGREDIENT_HEADINGS.test(heading[1].trim())) {
+      section = 'ingredients';
+      continue;
+    }
+    if (heading && METHOD_HEADINGS.test(heading[1].trim())) {
+      section = 'method';
+      continue;
+    }
+    if (!title && section === 'head') {
+      title = line.replace(/^#+\s*/, '').trim();
+      continue;
+    }
+    const item = line.replace(/^\s*(?:[-*•]|\[[ x]\])\s*/i, '').trim();
+    if (section === 'ingredients') ingredients.push(item);
+    else if (section === 'method') method.push(line.replace(/^\s*(?:\d+[.)]|[-*•])\s*/, '').trim());
+    else if (/^\s*[-*•]\s+/.test(line) || /^\s*[\d½¼¾⅓⅔]/.test(line)) ingredients.push(item);
+    else notes.push(line);
+  }
+  if (ingredients.length === 0) {
+    throw badRequest('file: no ingredient lines found. Put them under an "Ingredients" heading, or one per line starting with "-" or an amount.');
+  }
+  return {
+    title: (title || 'Imported recipe').slice(0, 200),
+    servings: clampServings(servings),
+    ingredients,
+    method: method.join('\n'),
+    notes: notes.join('\n'),
+    format: 'text',
+  };
+}
+
+/** Decides the type by content, never by the file name: JSON with a schema.org Recipe, or UTF-8 text. */
+export function parseRecipeFile(buffer: Buffer): ImportedRecipe {
+  if (buffer.length === 0) throw badRequest('file: the file is empty.');
+  if (buffer.includes(0)) throw badRequest('file: this is a binary file; upload a .txt or .md recipe or a schema.org Recipe .json/.jsonld file.');
+  const text = new TextDecoder('utf-8', { fatal: false }).decode(buffer).replace(/^\uFEFF/, '');
+  if (text.includes('\uFFFD')) throw badRequest('file: the file is not UTF-8 text; upload a .txt or .md recipe or a schema.org Recipe .json/.jsonld file.');
+  const trimmed = text.trim();
+  if (trimmed.startsWith('{') || trimmed.startsWith('[')) {
+    let doc: unknown;
+    try {
+      doc = JSON.parse(trimmed);
+    } catch {
+      throw badRequest('file: the file looks like JSON but does not parse.');
+    }
+    return fromJsonLd(doc);
+  }
+  return fromText(text);
+}

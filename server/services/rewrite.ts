@@ -1,0 +1,105 @@
+import type { RewriteRequest } from '../../shared/schemas/rewrite';
+import type { RewriteLine, RewriteResult, Plan, Change, FoodRef } from '../../shared/rewrite/types';
+import { RewriteSolverError } from '../../shared/rewrite/solve-log';
+import type { FoodEngine } from './food-engine';
+import { analyzeLines, requestLines } from './analysis';
+import { candidatesFor, type ApprovedSwap } from './candidates';
+import { foodSummary } from './foods';
+import { runRewrite } from './solver-pool';
+import { HttpError, badRequest } from '../lib/http-error';
+
+const DEFAULT_K = 8;
+
+export interface RewriteViewer {
+  approvedSwaps: ApprovedSwap[];
+}
+
+function publicFood(engine: FoodEngine, ref: FoodRef) {
+  const food = engine.byId.get(ref.foodId);
+  return food ? foodSummary(food) : { id: ref.foodId, source: 'usda-sr28' as const, sourceId: '', name: ref.name };
+}
+
+function publicPlan(engine: FoodEngine, plan: Plan) {
+  return { ...plan, lines: plan.lines.map((l) => ({ ...l, food: publicFood(engine, l.food) })) };
+}
+
+function publicChange(engine: FoodEngine, change: Change) {
+  return { ...change, from: publicFood(engine, change.from), to: publicFood(engine, change.to) };
+}
+
+/**
+ * Analyses the recipe, builds each line's candidates and solves the rewrite in the worker pool.
+ * Lines with no matched food or no weight cannot take part; they are listed in `skippedLines`.
+ */
+export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, viewer: RewriteViewer, explain: boolean) {
+  const lines = requestLines(input);
+  const locked = new Set(input.lockedLines ?? []);
+  for (const index of locked) {
+    if (index >= lines.length) throw badRequest(`lockedLines: line ${index} does not exist (the recipe has ${lines.length}).`, { fieldErrors: { lockedLines: ['Unknown line index.'] } });
+  }
+  const analysis = analyzeLines(engine, lines, input.servings);
+  const options = {
+    k: input.candidatesPerLine ?? DEFAULT_K,
+    diet: input.diet ?? [],
+    excludedFoodIds: new Set(input.excludedFoodIds ?? []),
+    approved: viewer.approvedSwaps,
+  };
+  const modelLines: RewriteLine[] = [];
+  const skippedLines: { line: number; input: string; reason: string }[] = [];
+  analysis.lines.forEach((line, index) => {
+    if (!line.matchedFood) return skippedLines.push({ line: index, input: line.input, reason: 'no food matched' });
+    if (line.grams <= 0) return skippedLines.push({ line: index, input: line.input, reason: 'no amount' });
+    modelLines.push({
+      index,
+      foodId: line.matchedFood.id,
+      grams: line.grams,
+      volumeMl: line.volumeMl,
+      locked: locked.has(index),
+      candidates: locked.has(index) ? candidatesFor(engine, line.matchedFood, { ...options, k: 0, approved: [] }) : candidatesFor(engine, line.matchedFood, options),
+    });
+  });
+  if (modelLines.length === 0) {
+    throw new HttpError(422, 'nothing_to_rewrite', 'No line has both a matched food and an amount, so there is nothing to rewrite.', { skippedLines });
+  }
+
+  let result: RewriteResult;
+  try {
+    result = await runRewrite({
+      lines: modelLines,
+      targets: input.targets,
+      servings: input.servings,
+      options: {
+        objective: input.objective ?? 'closest',
+        volumeTolerancePct: input.volumeTolerancePct,
+        lineTolerancePct: input.lineTolerancePct,
+        maxSwaps: input.maxSwaps,
+        explain,
+      },
+    });
+  } catch (error) {
+    if (error instanceof RewriteSolverError || (error as Error)?.name === 'RewriteSolverError') {
+      throw new HttpError(503, 'solver_failed', `The solver could not finish this rewrite: ${(error as Error).message}.`);
+    }
+    throw error;
+  }
+
+  if (result.status === 'infeasible') {
+    throw new HttpError(422, 'infeasible', result.message, {
+      bestReachable: result.bestReachable,
+      binding: result.binding,
+      suggestions: result.suggestions,
+      before: publicPlan(engine, result.before),
+      closest: publicPlan(engine, result.closest),
+      skippedLines,
+      solver: result.solver,
+    });
+  }
+  return {
+    status: result.status,
+    before: publicPlan(engine, result.before),
+    after: publicPlan(engine, result.after),
+    changes: result.changes.map((c) => publicChange(engine, c)),
+    skippedLines,
+    solver: result.solver,
+  };
+}

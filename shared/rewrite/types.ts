@@ -1,0 +1,145 @@
+import type { Nutrients } from '../nutrition';
+
+/** A coach's approval of a swap, with an optional cooking note and volume ratio. */
+export interface SwapApproval {
+  /** who approved it (the coach's display name or id) */
+  by: string;
+  note?: string;
+  /** mL of the swap per mL of the original food; the band is centred on V·ratio */
+  volumeRatio?: number;
+}
+
+/** One food a line may use: the original food or a lighter one sharing its role. */
+export interface Candidate {
+  foodId: number;
+  name: string;
+  /** ρ, grams per mL */
+  densityGPerMl: number;
+  per100g: Nutrients;
+  /** the food the recipe was written with; exactly one candidate per line carries it */
+  original?: boolean;
+  approved?: SwapApproval;
+}
+
+export interface RewriteLine {
+  /** the line's position in the recipe, used in the explanation */
+  index: number;
+  foodId: number;
+  grams: number;
+  /** V_i, the line's volume as written (mL) */
+  volumeMl: number;
+  /** a locked line stays exactly as written */
+  locked: boolean;
+  candidates: Candidate[];
+}
+
+/** Per-serving targets. */
+export interface Targets {
+  proteinMinG: number;
+  kcalMax: number;
+  fiberMinG?: number;
+  fatMaxG?: number;
+  satFatMaxG?: number;
+  sodiumMaxMg?: number;
+  sugarMaxG?: number;
+}
+
+export type TargetName = keyof Targets;
+
+export type RewriteObjective = 'closest' | 'max-protein' | 'min-kcal';
+
+export interface RewriteOptions {
+  /** t, whole-dish volume tolerance in percent (default 10) */
+  volumeTolerancePct?: number;
+  /** a, per-line volume tolerance in percent (default 25) */
+  lineTolerancePct?: number;
+  /** M, the most swaps allowed; no limit when absent */
+  maxSwaps?: number;
+  /** default 'closest' */
+  objective?: RewriteObjective;
+  /** include the solved model as CPLEX LP text in the result */
+  explain?: boolean;
+  /** wall-clock budget per MILP solve in ms (default 2000) */
+  timeoutMs?: number;
+  /** drop candidates that can never be needed (default true) */
+  pruneDominated?: boolean;
+}
+
+export interface FoodRef {
+  foodId: number;
+  name: string;
+}
+
+export interface PlanLine {
+  index: number;
+  food: FoodRef;
+  grams: number;
+  volumeMl: number;
+  nutrients: Nutrients;
+}
+
+export interface Plan {
+  lines: PlanLine[];
+  totals: Nutrients;
+  perServing: Nutrients;
+  volumeMl: number;
+}
+
+/** What a change is for: a target it moves toward, the dish's volume, or the chosen objective. */
+export type ChangePurpose = TargetName | 'volume' | 'objective';
+
+export interface Change {
+  line: number;
+  from: FoodRef;
+  to: FoodRef;
+  gramsBefore: number;
+  gramsAfter: number;
+  swapped: boolean;
+  approvedBy?: string;
+  note?: string;
+  serves: ChangePurpose[];
+  reason: string;
+}
+
+export interface SolverInfo {
+  objective: RewriteObjective;
+  objectiveValue: number;
+  /** wall-clock time of every solve made for this answer */
+  ms: number;
+  solves: number;
+  /** false when a solve ran into its time budget and kept its best plan found so far */
+  provenOptimal: boolean;
+  /** the model solved for the answer, in CPLEX LP text (with `explain`) */
+  model?: string;
+}
+
+export interface Suggestion {
+  kind: 'more-swaps' | 'target' | 'volume-tolerance';
+  /** for kind 'target' */
+  target?: TargetName;
+  /** the value that makes the targets reachable: swaps allowed, the new target, or tolerance % */
+  value: number;
+  message: string;
+}
+
+export interface OptimalRewrite {
+  status: 'optimal';
+  before: Plan;
+  after: Plan;
+  changes: Change[];
+  solver: SolverInfo;
+}
+
+export interface InfeasibleRewrite {
+  status: 'infeasible';
+  message: string;
+  before: Plan;
+  /** the plan closest to the targets (weighted relative shortfall) */
+  closest: Plan;
+  bestReachable: Nutrients;
+  binding: TargetName[];
+  suggestions: Suggestion[];
+  solver: SolverInfo;
+}
+
+export type RewriteResult = OptimalRewrite | InfeasibleRewrite;

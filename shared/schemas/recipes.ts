@@ -1,0 +1,108 @@
+import { z } from 'zod';
+import { MAX_LINES, MAX_TEXT_CHARS, servingsSchema } from './analyze';
+import { targetsSchema } from './rewrite';
+import type { Nutrients } from '../nutrition';
+
+export const VERSION_KINDS = ['original', 'rewrite', 'edit'] as const;
+export type VersionKind = (typeof VERSION_KINDS)[number];
+
+/** A version's line as stored: the text as written (or generated for a rewrite), the food and its grams. */
+export interface StoredLine {
+  input: string;
+  foodId: number | null;
+  foodName: string | null;
+  grams: number;
+}
+
+const title = z.string({ message: 'Give the recipe a title.' }).trim().min(1, { message: 'Give the recipe a title.' }).max(200, { message: 'title is at most 200 characters.' });
+const notes = z.string().max(20_000, { message: 'notes are at most 20,000 characters.' });
+const revision = z.number({ message: 'revision is required: send the revision you read.' }).int().min(1);
+
+/** A line to save: as typed ({ input, foodId?, grams? }) or as a rewrite returns it ({ food: { id }, grams }). */
+export const versionLineSchema = z.union([
+  z.object({
+    input: z.string().max(1_000),
+    foodId: z.number().int().positive().nullable().optional(),
+    grams: z.number().min(0).max(100_000).optional(),
+  }),
+  z.object({
+    food: z.object({ id: z.number().int().positive(), name: z.string().max(500).optional() }),
+    grams: z.number({ message: 'grams must be a number.' }).min(0).max(100_000),
+    input: z.string().max(1_000).optional(),
+  }),
+]);
+export type VersionLineInput = z.infer<typeof versionLineSchema>;
+
+export const createRecipeSchema = z
+  .object({
+    title,
+    servings: servingsSchema,
+    notes: notes.optional(),
+    method: notes.optional(),
+    text: z.string().max(MAX_TEXT_CHARS).optional(),
+    lines: z.array(versionLineSchema).max(MAX_LINES).optional(),
+  })
+  .refine((v) => v.text !== undefined || v.lines !== undefined, { message: 'Send the ingredients as text or as lines.', path: ['text'] });
+
+export const updateRecipeSchema = z.object({
+  revision,
+  title: title.optional(),
+  servings: servingsSchema.optional(),
+  notes: notes.optional(),
+  method: notes.optional(),
+});
+
+export const deleteRecipeSchema = z.object({ revision: z.coerce.number({ message: 'revision is required: send the revision you read.' }).int().min(1) });
+
+export const createVersionSchema = z.object({
+  kind: z.enum(VERSION_KINDS, { message: 'kind is one of original, rewrite, edit.' }),
+  lines: z.array(versionLineSchema).min(1, { message: 'A version needs at least one line.' }).max(MAX_LINES),
+  servings: servingsSchema.optional(),
+  targets: targetsSchema.nullable().optional(),
+  note: z.string().max(2_000, { message: 'note is at most 2,000 characters.' }).optional(),
+  parentNumber: z.number().int().min(1).optional(),
+});
+
+export const recipeListQuerySchema = z.object({
+  q: z.string().max(200).optional(),
+  sort: z.enum(['updated', 'title', 'kcal', 'protein'], { message: 'sort is one of updated, title, kcal, protein.' }).default('updated'),
+});
+
+export const idParam = z.object({ id: z.coerce.number({ message: 'id must be a number.' }).int().positive({ message: 'id must be positive.' }) });
+export const versionParam = idParam.extend({ number: z.coerce.number({ message: 'number must be a number.' }).int().min(1) });
+
+export interface VersionSummary {
+  number: number;
+  kind: VersionKind;
+  parentNumber: number | null;
+  servings: number;
+  perServing: Nutrients;
+  note: string;
+  createdAt: string;
+}
+
+export interface VersionDetail extends VersionSummary {
+  lines: (StoredLine & { nutrients: Nutrients; volumeMl: number })[];
+  targets: z.infer<typeof targetsSchema> | null;
+  totals: Nutrients;
+  volumeMl: number;
+}
+
+export interface RecipeSummary {
+  id: number;
+  title: string;
+  servings: number;
+  revision: number;
+  versionCount: number;
+  latest: VersionSummary | null;
+  hasPhoto: boolean;
+  updatedAt: string;
+  createdAt: string;
+}
+
+export interface RecipeDetail extends RecipeSummary {
+  notes: string;
+  method: string;
+  photoUrl: string | null;
+  versions: VersionSummary[];
+}

@@ -1,0 +1,40 @@
+import { z } from 'zod';
+import { DIET_FLAGS } from '../food';
+import { lineInputSchema, MAX_LINES, MAX_TEXT_CHARS, servingsSchema } from './analyze';
+
+const positive = (field: string, max: number) =>
+  z
+    .number({ message: `${field} must be a number.` })
+    .min(0, { message: `${field} cannot be negative.` })
+    .max(max, { message: `${field} is at most ${max.toLocaleString('en-US')}.` });
+
+export const targetsSchema = z.object({
+  proteinMinG: positive('proteinMinG', 500),
+  kcalMax: positive('kcalMax', 10_000).refine((v) => v > 0, { message: 'kcalMax must be above 0.' }),
+  fiberMinG: positive('fiberMinG', 200).optional(),
+  fatMaxG: positive('fatMaxG', 500).optional(),
+  satFatMaxG: positive('satFatMaxG', 200).optional(),
+  sodiumMaxMg: positive('sodiumMaxMg', 20_000).optional(),
+  sugarMaxG: positive('sugarMaxG', 500).optional(),
+});
+export type TargetsInput = z.infer<typeof targetsSchema>;
+
+export const OBJECTIVES = ['closest', 'max-protein', 'min-kcal'] as const;
+
+export const rewriteRequestSchema = z
+  .object({
+    text: z.string().max(MAX_TEXT_CHARS).optional(),
+    lines: z.array(lineInputSchema).max(MAX_LINES).optional(),
+    servings: servingsSchema,
+    targets: targetsSchema,
+    volumeTolerancePct: z.number({ message: 'volumeTolerancePct must be a number.' }).min(0).max(50, { message: 'volumeTolerancePct is at most 50.' }).optional(),
+    lineTolerancePct: z.number({ message: 'lineTolerancePct must be a number.' }).min(0).max(100, { message: 'lineTolerancePct is at most 100.' }).optional(),
+    maxSwaps: z.number({ message: 'maxSwaps must be a whole number.' }).int().min(0).max(MAX_LINES).optional(),
+    lockedLines: z.array(z.number().int().min(0, { message: 'lockedLines holds line indexes from 0.' })).max(MAX_LINES).optional(),
+    excludedFoodIds: z.array(z.number().int().positive()).max(500).optional(),
+    diet: z.array(z.enum(DIET_FLAGS, { message: `diet holds ${DIET_FLAGS.join(', ')}.` })).max(DIET_FLAGS.length).optional(),
+    objective: z.enum(OBJECTIVES, { message: `objective is one of ${OBJECTIVES.join(', ')}.` }).optional(),
+    candidatesPerLine: z.number().int().min(1).max(20).optional(),
+  })
+  .refine((v) => v.text !== undefined || v.lines !== undefined, { message: 'Send the recipe as text or as lines.', path: ['text'] });
+export type RewriteRequest = z.infer<typeof rewriteRequestSchema>;

@@ -1,0 +1,178 @@
+import { useRef } from 'react';
+import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
+import type { RecipeDetail } from '../../../shared/schemas/recipes';
+import { buttonClasses } from '../../components/ui/button';
+import { Card } from '../../components/ui/card';
+import { EmptyState } from '../../components/ui/empty-state';
+import { ErrorState } from '../../components/ui/error-state';
+import { Page } from '../../components/ui/page';
+import { LoadingState } from '../../components/ui/spinner';
+import { useToast } from '../../components/ui/toast';
+import { useDeleteRecipe } from '../../features/recipes/api/delete-recipe';
+import { useDuplicateRecipe } from '../../features/recipes/api/duplicate-recipe';
+import { useRecipe } from '../../features/recipes/api/get-recipe';
+import { useRestoreVersion } from '../../features/recipes/api/restore-version';
+import { isRevisionConflict } from '../../features/recipes/api/update-recipe';
+import { ComparePicker } from '../../features/recipes/components/compare-picker';
+import { RecipeActions } from '../../features/recipes/components/recipe-actions';
+import { RecipeDetailsCard } from '../../features/recipes/components/recipe-details-card';
+import { RecipeNotFound } from '../../features/recipes/components/recipe-not-found';
+import { RecipeFigures } from '../../features/recipes/components/recipe-figures';
+import { RecipePhotoCard } from '../../features/recipes/components/recipe-photo-card';
+import { VersionLinesCard } from '../../features/recipes/components/version-lines-card';
+import { VersionTimeline } from '../../features/recipes/components/version-timeline';
+import type { DeletedRecipeState } from '../../features/recipes/deleted-recipe-state';
+import { formatWhen } from '../../features/recipes/format-when';
+import { positiveInt, recipePath } from '../../features/recipes/recipe-links';
+import { errorMessage, isApiError } from '../../lib/api-client';
+
+const backToBook = (
+  <Link to="/recipes" className={buttonClasses({ variant: 'secondary', size: 'sm' })}>
+    ← Recipe book
+  </Link>
+);
+
+function RecipeView({ recipe, onReload }: { recipe: RecipeDetail; onReload: () => Promise<RecipeDetail | undefined> }) {
+  const [params, setParams] = useSearchParams();
+  const navigate = useNavigate();
+  const toast = useToast();
+  const duplicate = useDuplicateRecipe();
+  const remove = useDeleteRecipe();
+  const restore = useRestoreVersion();
+
+  const newest = recipe.versions.at(-1) ?? null;
+  const asked = positiveInt(params.get('version'));
+  const selected = recipe.versions.find((v) => v.number === asked) ?? newest;
+
+  const linesRef = useRef<HTMLDivElement>(null);
+
+  function select(number: number) {
+    setParams(number === newest?.number ? {} : { version: String(number) }, { replace: true, preventScrollReset: true });
+    // In one column the lines sit below the timeline, out of sight: bring them up.
+    const lines = linesRef.current;
+    if (lines && lines.getBoundingClientRect().top > window.innerHeight * 0.6) {
+      requestAnimationFrame(() => lines.scrollIntoView({ block: 'start', behavior: 'smooth' }));
+    }
+  }
+
+  function onDelete() {
+    remove.mutate(
+      { id: recipe.id, revision: recipe.revision },
+      {
+        onSuccess: () => {
+          const state: DeletedRecipeState = { deletedRecipe: { id: recipe.id, title: recipe.title } };
+          navigate('/recipes', { state });
+        },
+        onError: (error) =>
+          toast.show(
+            isRevisionConflict(error)
+              ? 'This recipe changed elsewhere — reload before deleting it.'
+              : `Not deleted: ${errorMessage(error)}`,
+            'danger',
+          ),
+      },
+    );
+  }
+
+  function onDuplicate() {
+    duplicate.mutate(recipe.id, {
+      onSuccess: (copy) => {
+        toast.show(`Copied as “${copy.title}”.`, 'success');
+        navigate(recipePath(copy.id));
+      },
+      onError: (error) => toast.show(`Not copied: ${errorMessage(error)}`, 'danger'),
+    });
+  }
+
+  function onRestore(number: number) {
+    restore.mutate(
+      { recipeId: recipe.id, number },
+      {
+        onSuccess: (version) => {
+          toast.show(`Version ${number} restored as version ${version.number}, the newest.`, 'success');
+          setParams({}, { replace: true, preventScrollReset: true });
+        },
+        onError: (error) => toast.show(`Not restored: ${errorMessage(error)}`, 'danger'),
+      },
+    );
+  }
+
+  const versionCount = recipe.versions.length;
+  return (
+    <Page
+      title={recipe.title}
+      description={
+        <>
+          {versionCount} version{versionCount === 1 ? '' : 's'} saved · changed {formatWhen(recipe.updatedAt).toLowerCase()}
+        </>
+      }
+      actions={
+        <RecipeActions
+          recipe={recipe}
+          version={selected?.number ?? null}
+          onDuplicate={onDuplicate}
+          duplicating={duplicate.isPending}
+          onDelete={onDelete}
+          deleting={remove.isPending}
+        />
+      }
+    >
+      <div className="-mt-4">{backToBook}</div>
+      <RecipeFigures version={newest} servings={recipe.servings} versionCount={versionCount} />
+      {/* The timeline comes before the lines it picks, in reading order and in focus order. */}
+      <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
+        <div className="flex min-w-0 flex-col gap-6">
+          <RecipePhotoCard recipe={recipe} />
+          <Card title="Versions" description="Newest first. Restoring copies an older version forward; nothing is lost.">
+            <div className="flex flex-col gap-6">
+              <VersionTimeline
+                versions={recipe.versions}
+                selected={selected?.number ?? null}
+                onSelect={select}
+                onRestore={onRestore}
+                restoring={restore.isPending ? (restore.variables?.number ?? null) : null}
+              />
+              <section aria-labelledby="compare-heading" className="flex flex-col gap-3 border-t border-line pt-5">
+                <h3 id="compare-heading" className="font-extrabold text-ink">
+                  Compare two versions
+                </h3>
+                <ComparePicker key={versionCount} recipeId={recipe.id} versions={recipe.versions} />
+              </section>
+            </div>
+          </Card>
+        </div>
+        <div ref={linesRef} className="flex min-w-0 scroll-mt-24 flex-col gap-6">
+          {selected ? (
+            <VersionLinesCard recipeId={recipe.id} version={selected} />
+          ) : (
+            <EmptyState title="No versions yet">This recipe has no saved ingredients.</EmptyState>
+          )}
+          <RecipeDetailsCard recipe={recipe} onReload={onReload} />
+        </div>
+      </div>
+    </Page>
+  );
+}
+
+export function RecipeDetailPage() {
+  const { id: idParam } = useParams();
+  const id = positiveInt(idParam);
+  const recipe = useRecipe(id);
+
+  if (id === null || (recipe.isError && isApiError(recipe.error) && recipe.error.status === 404)) return <RecipeNotFound />;
+  if (recipe.isPending) {
+    return (
+      <Page title="Recipe" actions={backToBook}>
+        <LoadingState label="Opening the recipe…" />
+      </Page>
+    );
+  }
+  if (recipe.isError && !recipe.data) {
+    return (
+      <Page title="Recipe" actions={backToBook}>
+        <ErrorState title="This recipe didn't load" error={recipe.error} onRetry={() => void recipe.refetch()} retrying={recipe.isFetching} />
+      </Page>
+    );
+  }
+  return <RecipeView recipe={recipe.data} onReload={async () => (await recipe.refetch()).data} />;
+}

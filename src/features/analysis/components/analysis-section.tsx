@@ -1,0 +1,105 @@
+import { useEffect, useRef, type ReactNode } from 'react';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { ErrorState } from '../../../components/ui/error-state';
+import { LoadingState, Spinner } from '../../../components/ui/spinner';
+import type { UnitSystem } from '../../../lib/user';
+import type { Kitchen } from '../use-kitchen';
+import { AnalysisLines, type FoodSearchSlotArgs } from './analysis-lines';
+import { DishPanels, ServingHeadline } from './dish-figures';
+import { ServingsField } from './servings-field';
+
+export interface AnalysisSectionProps {
+  kitchen: Kitchen;
+  unitSystem: UnitSystem;
+  renderFoodSearch?: (args: FoodSearchSlotArgs) => ReactNode;
+  foodHref?: (id: number) => string;
+}
+
+/** What Hearthswap read from the recipe: every line, its food and weight, and the dish per serving. */
+export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHref }: AnalysisSectionProps) {
+  const headingRef = useRef<HTMLHeadingElement>(null);
+  const { analysis, lines, pastesAnswered } = kitchen;
+
+  // A freshly pasted recipe: take keyboard and screen-reader users to what was read.
+  useEffect(() => {
+    if (pastesAnswered === 0) return;
+    headingRef.current?.focus({ preventScroll: true });
+    headingRef.current?.scrollIntoView({ behavior: 'smooth', block: 'start' });
+  }, [pastesAnswered]);
+
+  const heading = (
+    <h2 ref={headingRef} id="kitchen-analysis" tabIndex={-1} className="scroll-mt-24 text-2xl font-extrabold focus:outline-none">
+      What’s in it
+    </h2>
+  );
+
+  if (lines.length === 0) {
+    return (
+      <section aria-labelledby="kitchen-analysis" className="flex flex-col gap-4">
+        {heading}
+        {kitchen.analysingText ? (
+          <LoadingState label="Reading and weighing every line…" />
+        ) : kitchen.error != null ? (
+          <ErrorState title="The recipe wasn't analysed" error={kitchen.error} onRetry={kitchen.retry} />
+        ) : (
+          <EmptyState title="Nothing on the board yet">
+            Paste an ingredient list and press Analyse recipe, or add foods one by one. Every line shows up here with its weight in
+            grams, and the dish with its calories and protein per serving.
+          </EmptyState>
+        )}
+      </section>
+    );
+  }
+
+  return (
+    <section aria-labelledby="kitchen-analysis" className="flex flex-col gap-5">
+      <div className="flex flex-wrap items-end justify-between gap-4">
+        <div className="flex flex-col gap-1">
+          {heading}
+          <p className="text-ink-soft">
+            {lines.length} line{lines.length === 1 ? '' : 's'}. Change a food or a weight and the numbers follow.
+          </p>
+        </div>
+        <div className="flex flex-wrap items-end gap-4">
+          <p aria-live="polite" className="flex min-h-9 items-center gap-2 text-sm font-semibold text-ink-soft">
+            {kitchen.analysing && analysis && (
+              <>
+                <Spinner className="size-4 text-accent" /> Updating the numbers…
+              </>
+            )}
+          </p>
+          <ServingsField servings={kitchen.servings} onChange={kitchen.setServings} />
+        </div>
+      </div>
+
+      {kitchen.error != null && (
+        <ErrorState
+          title={analysis ? 'The numbers didn’t update' : "The recipe wasn't analysed"}
+          error={kitchen.error}
+          onRetry={kitchen.retry}
+        />
+      )}
+
+      {analysis ? (
+        <ServingHeadline analysis={analysis} />
+      ) : (
+        kitchen.error == null && <LoadingState label="Reading and weighing every line…" />
+      )}
+
+      <AnalysisLines
+        lines={lines}
+        analysedLine={kitchen.analysedLine}
+        unitSystem={unitSystem}
+        stale={kitchen.stale}
+        totals={analysis ? { grams: analysis.totalGrams, kcal: analysis.totals.kcal, proteinG: analysis.totals.proteinG } : null}
+        onChooseFood={kitchen.chooseFood}
+        onSetGrams={kitchen.setGrams}
+        onRemove={kitchen.removeLine}
+        renderFoodSearch={renderFoodSearch}
+        foodHref={foodHref}
+      />
+
+      {analysis && <DishPanels analysis={analysis} unitSystem={unitSystem} />}
+    </section>
+  );
+}

@@ -1,0 +1,37 @@
+import { Link } from 'react-router';
+import type { RecipeDetail } from '../../../../shared/schemas/recipes';
+import { Button, buttonClasses } from '../../../components/ui/button';
+import { exportHref, printPath } from '../recipe-links';
+
+export interface RecipeActionsProps {
+  recipe: RecipeDetail;
+  /** the version print and export use */
+  version: number | null;
+  onDuplicate: () => void;
+  duplicating: boolean;
+  onDelete: () => void;
+  deleting: boolean;
+}
+
+/** What can be done with the whole recipe: print a card, download it, copy it, delete it. */
+export function RecipeActions({ recipe, version, onDuplicate, duplicating, onDelete, deleting }: RecipeActionsProps) {
+  const busy = duplicating || deleting;
+  return (
+    <div className="flex flex-wrap gap-2">
+      <Link to={printPath(recipe.id, version)} className={buttonClasses({ variant: 'secondary', size: 'sm' })}>
+        Print
+        {version && <span className="sr-only"> version {version}</span>}
+      </Link>
+      <a href={exportHref(recipe.id, version)} download className={buttonClasses({ variant: 'secondary', size: 'sm' })}>
+        Export JSON-LD
+        {version && <span className="sr-only"> of version {version}</span>}
+      </a>
+      <Button variant="secondary" size="sm" onClick={onDuplicate} loading={duplicating} loadingLabel="Copying…" disabled={busy}>
+        Duplicate
+      </Button>
+      <Button variant="danger" size="sm" onClick={onDelete} loading={deleting} loadingLabel="Deleting…" disabled={busy}>
+        Delete
+      </Button>
+    </div>
+  );
+}

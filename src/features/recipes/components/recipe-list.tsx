@@ -1,0 +1,110 @@
+import { Link } from 'react-router';
+import type { RecipeSummary } from '../../../../shared/schemas/recipes';
+import { formatKcal, formatMacroG } from '../../../lib/format';
+import { formatDateTime, formatWhen } from '../format-when';
+import { recipePath } from '../recipe-links';
+
+function perServing(recipe: RecipeSummary) {
+  const figures = recipe.latest?.perServing;
+  return {
+    kcal: figures ? formatKcal(figures.kcal) : '—',
+    protein: figures ? formatMacroG(figures.proteinG) : '—',
+  };
+}
+
+function versionsText(count: number): string {
+  return `${count} version${count === 1 ? '' : 's'}`;
+}
+
+function Updated({ iso }: { iso: string }) {
+  return (
+    <time dateTime={iso} title={formatDateTime(iso)}>
+      {formatWhen(iso)}
+    </time>
+  );
+}
+
+/** Every recipe in the book: a table from tablets up, a list of cards on a phone. */
+export function RecipeList({ recipes, caption }: { recipes: RecipeSummary[]; caption: string }) {
+  return (
+    <>
+      <div className="hidden overflow-x-auto rounded-card border border-line bg-surface sm:block">
+        <table className="w-full border-collapse text-base">
+          <caption className="sr-only">{caption}</caption>
+          <thead>
+            <tr className="border-b border-line bg-oat-100 text-left">
+              <th scope="col" className="px-4 py-2.5 font-bold">
+                Recipe
+              </th>
+              <th scope="col" className="px-4 py-2.5 text-right font-bold">
+                Servings
+              </th>
+              <th scope="col" className="px-4 py-2.5 text-right font-bold">
+                Energy <span className="font-semibold text-ink-soft">/ serving</span>
+              </th>
+              <th scope="col" className="px-4 py-2.5 text-right font-bold">
+                Protein <span className="font-semibold text-ink-soft">/ serving</span>
+              </th>
+              <th scope="col" className="px-4 py-2.5 text-right font-bold">
+                Versions
+              </th>
+              <th scope="col" className="px-4 py-2.5 font-bold">
+                Changed
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {recipes.map((recipe) => {
+              const figures = perServing(recipe);
+              return (
+                <tr key={recipe.id} className="border-b border-line last:border-b-0 even:bg-oat-50 hover:bg-ember-50">
+                  <th scope="row" className="px-4 py-3 text-left font-bold">
+                    <Link to={recipePath(recipe.id)} className="rounded-field text-accent-strong underline-offset-2 hover:underline">
+                      {recipe.title}
+                    </Link>
+                  </th>
+                  <td className="px-4 py-3 text-right tabular-nums">{recipe.servings}</td>
+                  <td className="px-4 py-3 text-right font-bold tabular-nums">{figures.kcal}</td>
+                  <td className="px-4 py-3 text-right font-bold tabular-nums">{figures.protein}</td>
+                  <td className="px-4 py-3 text-right tabular-nums">{recipe.versionCount}</td>
+                  <td className="px-4 py-3 whitespace-nowrap text-ink-soft">
+                    <Updated iso={recipe.updatedAt} />
+                  </td>
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
+      </div>
+
+      <ul aria-label={caption} className="flex flex-col gap-3 sm:hidden">
+        {recipes.map((recipe) => {
+          const figures = perServing(recipe);
+          return (
+            <li key={recipe.id}>
+              <Link
+                to={recipePath(recipe.id)}
+                className="flex flex-col gap-2 rounded-card border border-line bg-surface p-4 shadow-card active:bg-oat-100"
+              >
+                <span className="text-lg font-extrabold text-accent-strong">{recipe.title}</span>
+                <span className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
+                  <span>
+                    <strong className="tabular-nums">{figures.kcal}</strong> · <strong className="tabular-nums">{figures.protein}</strong> protein
+                    <span className="text-ink-soft"> per serving</span>
+                  </span>
+                </span>
+                <span className="flex flex-wrap gap-x-3 text-sm text-ink-soft">
+                  <span>{recipe.servings} servings</span>
+                  <span aria-hidden="true">·</span>
+                  <span>{versionsText(recipe.versionCount)}</span>
+                  <span aria-hidden="true">·</span>
+                  <Updated iso={recipe.updatedAt} />
+                </span>
+              </Link>
+            </li>
+          );
+        })}
+      </ul>
+    </>
+  );
+}

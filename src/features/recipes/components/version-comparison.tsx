@@ -1,0 +1,291 @@
+import type { Nutrients } from '../../../../shared/nutrition';
+import type { VersionDetail } from '../../../../shared/schemas/recipes';
+import { Badge, type BadgeTone } from '../../../components/ui/badge';
+import { Card } from '../../../components/ui/card';
+import { NUTRIENT_ROWS } from '../../../components/ui/nutrient-table';
+import { cx } from '../../../lib/cx';
+import { formatGrams, formatKcal, formatMacroG, formatNumber } from '../../../lib/format';
+import { compareLines, type LineChange, type LineChangeKind } from '../compare-lines';
+import { formatWhen } from '../format-when';
+import { nutrientChange, type ChangeTone, type NutrientChange } from '../nutrient-change';
+import { versionKindLabel, versionNote } from '../version-words';
+
+const MINUS = '\u2212';
+
+const KIND_WORDS: Record<LineChangeKind, { label: string; tone: BadgeTone }> = {
+  same: { label: 'Same', tone: 'neutral' },
+  more: { label: 'More', tone: 'honey' },
+  less: { label: 'Less', tone: 'honey' },
+  swapped: { label: 'Swapped', tone: 'ember' },
+  added: { label: 'Added', tone: 'herb' },
+  removed: { label: 'Removed', tone: 'beet' },
+};
+
+const TONE_CLASSES: Record<ChangeTone, string> = {
+  better: 'bg-herb-50 text-herb-800 border-herb-200',
+  worse: 'bg-beet-50 text-beet-800 border-beet-200',
+  neutral: 'bg-oat-100 text-ink-soft border-oat-200',
+};
+const TONE_WORDS: Record<ChangeTone, string> = {
+  better: 'lighter or more filling',
+  worse: 'the other way',
+  neutral: '',
+};
+
+/** A signed difference in its colour; the sign and the words carry it without the colour. */
+function ChangeChip({ change, className }: { change: NutrientChange; className?: string }) {
+  return (
+    <span className={cx('inline-flex items-center rounded-pill border px-2 py-0.5 text-sm font-extrabold whitespace-nowrap tabular-nums', TONE_CLASSES[change.tone], className)}>
+      {change.text}
+      {change.tone !== 'neutral' && <span className="sr-only"> ({TONE_WORDS[change.tone]})</span>}
+    </span>
+  );
+}
+
+function VersionHeading({ version, side }: { version: VersionDetail; side: 'Before' | 'After' }) {
+  const note = versionNote(version);
+  return (
+    <div className={cx('flex flex-col gap-1 rounded-card border bg-surface p-4 shadow-card', side === 'After' ? 'border-accent' : 'border-line')}>
+      <p className="text-sm font-bold tracking-wide text-ink-soft uppercase">{side}</p>
+      <h2 className="text-lg font-extrabold text-ink">
+        Version {version.number} · {versionKindLabel(version.kind)}
+      </h2>
+      {note && <p className="text-ink">{note}</p>}
+      <p className="text-sm text-ink-soft">
+        {version.servings} servings · saved {formatWhen(version.createdAt).toLowerCase()}
+      </p>
+      <p className="mt-1 text-2xl font-black tabular-nums">
+        {formatKcal(version.perServing.kcal)}
+        <span className="text-base font-bold text-ink-soft"> · </span>
+        {formatMacroG(version.perServing.proteinG)} <span className="text-base font-bold text-ink-soft">protein per serving</span>
+      </p>
+    </div>
+  );
+}
+
+function NutrientDifferences({ a, b }: { a: VersionDetail; b: VersionDetail }) {
+  const volumeA = a.volumeMl / a.servings;
+  const volumeB = b.volumeMl / b.servings;
+  const volumeChange = volumeA > 0 ? ((volumeB - volumeA) / volumeA) * 100 : 0;
+  const volumeChip: NutrientChange =
+    Math.abs(volumeChange) < 0.5
+      ? { text: 'No change', direction: 'same', tone: 'neutral' }
+      : { text: `${volumeChange > 0 ? '+' : MINUS}${formatNumber(Math.abs(volumeChange), 0)}%`, direction: volumeChange > 0 ? 'more' : 'less', tone: 'neutral' };
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full border-collapse text-sm sm:text-base">
+        <caption className="sr-only">Nutrients per serving, before and after, with the difference</caption>
+        <thead>
+          <tr className="border-b-2 border-ink text-sm text-ink-soft">
+            <th scope="col" className="py-1.5 pr-2 text-left sm:pr-3 font-bold">
+              Per serving
+            </th>
+            <th scope="col" className="px-2 py-1.5 sm:px-3 text-right font-bold">
+              v{a.number}
+            </th>
+            <th scope="col" className="px-2 py-1.5 text-right font-bold sm:px-3">
+              v{b.number}
+              <span className="sm:hidden"> and change</span>
+            </th>
+            <th scope="col" className="hidden py-1.5 pl-3 text-right font-bold sm:table-cell">
+              Difference
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {NUTRIENT_ROWS.map((row) => {
+            const key = row.key as keyof Nutrients;
+            const change = nutrientChange(key, a.perServing[key], b.perServing[key], row.format);
+            return (
+              <tr key={row.key} className="border-b border-line">
+                <th scope="row" className={cx('py-1.5 pr-2 text-left sm:pr-3', row.part ? 'pl-4 font-semibold text-ink-soft' : 'font-bold text-ink')}>
+                  {row.label}
+                </th>
+                <td className="px-2 py-1.5 sm:px-3 text-right whitespace-nowrap tabular-nums">{row.format(a.perServing[key])}</td>
+                <td className="px-2 py-1.5 text-right font-bold whitespace-nowrap tabular-nums sm:px-3">
+                  {row.format(b.perServing[key])}
+                  <span className="mt-0.5 block sm:hidden">
+                    <ChangeChip change={change} />
+                  </span>
+                </td>
+                <td className="hidden py-1.5 pl-3 text-right sm:table-cell">
+                  <ChangeChip change={change} />
+                </td>
+              </tr>
+            );
+          })}
+          <tr>
+            <th scope="row" className="py-1.5 pr-2 text-left sm:pr-3 font-semibold text-ink-soft">
+              Volume
+            </th>
+            <td className="px-2 py-1.5 sm:px-3 text-right whitespace-nowrap tabular-nums">{formatNumber(volumeA, 0)} mL</td>
+            <td className="px-2 py-1.5 text-right whitespace-nowrap tabular-nums sm:px-3">
+              {formatNumber(volumeB, 0)} mL
+              <span className="mt-0.5 block sm:hidden">
+                <ChangeChip change={volumeChip} />
+              </span>
+            </td>
+            <td className="hidden py-1.5 pl-3 text-right sm:table-cell">
+              <ChangeChip change={volumeChip} />
+            </td>
+          </tr>
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
+
+function gramsText(change: LineChange): string {
+  const before = change.before ? formatGrams(change.before.grams) : null;
+  const after = change.after ? formatGrams(change.after.grams) : null;
+  if (change.kind === 'same') return after ?? '';
+  if (!before) return after ?? '';
+  if (!after) return before;
+  return `${before} → ${after}`;
+}
+
+function foodName(line: LineChange['before']): string {
+  if (!line) return '';
+  return line.foodName ?? `“${line.input}” (no food matched)`;
+}
+
+function FoodText({ change }: { change: LineChange }) {
+  if (change.kind === 'swapped') {
+    return (
+      <span className="flex flex-col">
+        <span className="text-ink-soft line-through decoration-oat-400">{foodName(change.before)}</span>
+        <span className="font-bold text-ink">
+          <span aria-hidden="true">→ </span>
+          <span className="sr-only">replaced by </span>
+          {foodName(change.after)}
+        </span>
+      </span>
+    );
+  }
+  if (change.kind === 'removed') return <span className="text-ink-soft line-through decoration-oat-400">{foodName(change.before)}</span>;
+  return <span className={cx(change.kind === 'same' ? 'text-ink-soft' : 'font-bold text-ink')}>{foodName(change.after)}</span>;
+}
+
+function lineDelta(change: LineChange, a: VersionDetail, b: VersionDetail, key: 'kcal' | 'proteinG') {
+  const before = change.before ? change.before.nutrients[key] / a.servings : 0;
+  const after = change.after ? change.after.nutrients[key] / b.servings : 0;
+  return nutrientChange(key, before, after, key === 'kcal' ? formatKcal : formatMacroG);
+}
+
+/** "+4 g protein", or "protein same" when it did not move. */
+function labelled(change: NutrientChange, what: string): NutrientChange {
+  return { ...change, text: change.direction === 'same' ? `${what} same` : `${change.text} ${what}` };
+}
+
+function summary(changes: LineChange[]): string {
+  const counts = new Map<LineChangeKind, number>();
+  for (const c of changes) counts.set(c.kind, (counts.get(c.kind) ?? 0) + 1);
+  const changed = changes.length - (counts.get('same') ?? 0);
+  if (changed === 0) return 'The ingredients are the same in both versions.';
+  const parts = (['swapped', 'more', 'less', 'added', 'removed'] as const)
+    .filter((k) => counts.get(k))
+    .map((k) => `${counts.get(k)} ${KIND_WORDS[k].label.toLowerCase()}`);
+  return `${changed} of ${changes.length} lines changed: ${parts.join(', ')}.`;
+}
+
+function LineChanges({ a, b }: { a: VersionDetail; b: VersionDetail }) {
+  const changes = compareLines(a.lines, b.lines);
+  return (
+    <div className="flex flex-col gap-3">
+      <p className="font-semibold text-ink" aria-live="polite">
+        {summary(changes)}
+      </p>
+
+      <div className="hidden overflow-x-auto rounded-field border border-line md:block">
+        <table className="w-full border-collapse">
+          <caption className="sr-only">
+            Lines of version {a.number} against version {b.number}
+          </caption>
+          <thead>
+            <tr className="border-b border-line bg-oat-100 text-left text-sm">
+              <th scope="col" className="px-3 py-2 font-bold">
+                Change
+              </th>
+              <th scope="col" className="px-3 py-2 font-bold">
+                Food
+              </th>
+              <th scope="col" className="px-3 py-2 text-right font-bold">
+                Grams
+              </th>
+              <th scope="col" className="px-3 py-2 text-right font-bold">
+                Energy <span className="font-semibold text-ink-soft">/ serving</span>
+              </th>
+              <th scope="col" className="px-3 py-2 text-right font-bold">
+                Protein <span className="font-semibold text-ink-soft">/ serving</span>
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {changes.map((change, i) => (
+              <tr key={i} className={cx('border-b border-line align-top last:border-b-0', change.kind === 'same' ? 'bg-surface' : 'bg-oat-50')}>
+                <td className="px-3 py-2.5">
+                  <Badge tone={KIND_WORDS[change.kind].tone}>{KIND_WORDS[change.kind].label}</Badge>
+                </td>
+                <th scope="row" className="px-3 py-2.5 text-left font-normal">
+                  <FoodText change={change} />
+                </th>
+                <td className="px-3 py-2.5 text-right whitespace-nowrap tabular-nums">{gramsText(change)}</td>
+                <td className="px-3 py-2.5 text-right">
+                  {change.kind === 'same' ? <span className="text-ink-soft">—</span> : <ChangeChip change={lineDelta(change, a, b, 'kcal')} />}
+                </td>
+                <td className="px-3 py-2.5 text-right">
+                  {change.kind === 'same' ? <span className="text-ink-soft">—</span> : <ChangeChip change={lineDelta(change, a, b, 'proteinG')} />}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+
+      <ul aria-label={`Lines of version ${a.number} against version ${b.number}`} className="flex flex-col gap-2 md:hidden">
+        {changes.map((change, i) => (
+          <li key={i} className={cx('flex flex-col gap-1.5 rounded-field border border-line p-3', change.kind === 'same' ? 'bg-surface' : 'bg-oat-50')}>
+            <div className="flex items-start justify-between gap-2">
+              <FoodText change={change} />
+              <Badge tone={KIND_WORDS[change.kind].tone}>{KIND_WORDS[change.kind].label}</Badge>
+            </div>
+            <p className="text-sm font-bold tabular-nums">{gramsText(change)}</p>
+            {change.kind !== 'same' && (
+              <p className="flex flex-wrap items-center gap-1.5 text-sm">
+                <span className="text-ink-soft">Per serving:</span>
+                <ChangeChip change={lineDelta(change, a, b, 'kcal')} />
+                <ChangeChip change={labelled(lineDelta(change, a, b, 'proteinG'), 'protein')} />
+              </p>
+            )}
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}
+
+/** Two versions side by side: what changed line by line, and what it does per serving. */
+export function VersionComparison({ a, b }: { a: VersionDetail; b: VersionDetail }) {
+  return (
+    <div className="flex flex-col gap-6">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 sm:grid-cols-2">
+        <VersionHeading version={a} side="Before" />
+        <VersionHeading version={b} side="After" />
+      </div>
+      <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(22rem,26rem)]">
+        <Card title="Lines" description="Ingredients kept in both line up; a food that changed shows what replaced it.">
+          <LineChanges a={a} b={b} />
+        </Card>
+        <Card title="Per serving" description="After minus before.">
+          <NutrientDifferences a={a} b={b} />
+          <p className="mt-3 text-sm text-ink-soft">
+            <span className="font-bold text-herb-800">Green</span> marks a change toward a lighter, more filling plate
+            (fewer kcal; more protein or fiber; less fat, sugar or sodium), <span className="font-bold text-beet-800">red</span>{' '}
+            the other way. The sign says which way each figure moved: + more, {MINUS} less.
+          </p>
+        </Card>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,24 @@
+/** Addresses of the recipe pages and downloads, in one place. */
+export function recipePath(id: number, version?: number | null): string {
+  return version ? `/recipes/${id}?version=${version}` : `/recipes/${id}`;
+}
+
+export function comparePath(id: number, a: number, b: number): string {
+  return `/recipes/${id}/compare?${new URLSearchParams({ a: String(a), b: String(b) })}`;
+}
+
+export function printPath(id: number, version?: number | null): string {
+  return version ? `/recipes/${id}/print?version=${version}` : `/recipes/${id}/print`;
+}
+
+/** The JSON-LD download of one version (the newest when none is named). */
+export function exportHref(id: number, version?: number | null): string {
+  return version ? `/api/recipes/${id}/export.jsonld?version=${version}` : `/api/recipes/${id}/export.jsonld`;
+}
+
+/** A whole positive number from a path or search parameter, else null. */
+export function positiveInt(value: string | null | undefined): number | null {
+  if (!value || !/^\d+$/.test(value)) return null;
+  const n = Number(value);
+  return Number.isSafeInteger(n) && n > 0 ? n : null;
+}

@@ -1,0 +1,35 @@
+import type { VersionKind, VersionSummary } from '../../../shared/schemas/recipes';
+
+/** Kinds of version in the cook's words. */
+export const VERSION_KIND_LABELS: Record<VersionKind, string> = {
+  original: 'As written',
+  rewrite: 'Lighter rewrite',
+  edit: 'Your edit',
+};
+
+export function versionKindLabel(kind: VersionKind): string {
+  return VERSION_KIND_LABELS[kind] ?? kind;
+}
+
+/** "Version 2 · Lighter rewrite" */
+export function versionTitle(version: Pick<VersionSummary, 'number' | 'kind'>): string {
+  return `Version ${version.number} · ${versionKindLabel(version.kind)}`;
+}
+
+/** The version's note, unless it only repeats the kind ("As written" on an original). */
+export function versionNote(version: Pick<VersionSummary, 'kind' | 'note'>): string | null {
+  const note = version.note.trim();
+  if (!note || note.toLowerCase() === versionKindLabel(version.kind).toLowerCase()) return null;
+  return note;
+}
+
+/**
+ * The line as the cook wrote it, or null when the server wrote it from the grams and the food
+ * ("400 g Pasta, whole-wheat, dry") and it would only repeat them.
+ */
+export function writtenLine(line: { input: string; foodName: string | null }): string | null {
+  const input = line.input.trim();
+  if (!input) return null;
+  if (line.foodName && /^\d+(?:\.\d+)? g /.test(input) && input.endsWith(line.foodName)) return null;
+  return input;
+}

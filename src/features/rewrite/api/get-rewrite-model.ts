@@ -1,0 +1,32 @@
+import { useQuery } from '@tanstack/react-query';
+import type { RewriteRequest } from '../../../../shared/schemas/rewrite';
+import { isApiError } from '../../../lib/api-client';
+import { infeasibleDetailsOf } from '../rewrite-types';
+import { rewriteRecipe } from './rewrite-recipe';
+import { rewriteKeys } from './rewrite-keys';
+
+/**
+ * The exact model the solver ran for a request, in CPLEX LP text. Targets that cannot be met still
+ * have a model: the elastic one behind the closest plan, sent with the 422.
+ */
+export async function fetchRewriteModel(request: RewriteRequest, signal?: AbortSignal): Promise<string> {
+  try {
+    const answer = await rewriteRecipe(request, { explain: true, signal });
+    return answer.solver.model ?? '';
+  } catch (error) {
+    const model = infeasibleDetailsOf(error)?.solver?.model;
+    if (model) return model;
+    throw error;
+  }
+}
+
+/** Asked only while the disclosure is open; the same request is solved once. */
+export function useRewriteModel(request: RewriteRequest | null, signature: string, enabled: boolean) {
+  return useQuery({
+    queryKey: rewriteKeys.model(signature),
+    queryFn: ({ signal }) => fetchRewriteModel(request as RewriteRequest, signal),
+    enabled: enabled && request !== null,
+    staleTime: Infinity,
+    retry: (count, error) => count < 1 && !(isApiError(error) && error.status < 500),
+  });
+}

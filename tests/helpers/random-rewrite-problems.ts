@@ -1,0 +1,163 @@
+import { divideNutrients, nutrientsForGrams, sumNutrients, type Nutrients } from '../../shared/nutrition';
+import type { Candidate, RewriteLine, RewriteObjective, RewriteOptions, Targets } from '../../shared/rewrite/types';
+
+/** Small seeded generator (mulberry32), so every run builds the same problems. */
+export function seededRandom(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+type Rng = () => number;
+const between = (rng: Rng, lo: number, hi: number) => lo + (hi - lo) * rng();
+const pick = <T>(rng: Rng, items: readonly T[]): T => items[Math.floor(rng() * items.length)];
+
+/**
+ * Synthetic foods with plausible values per 100 g: macros that leave room for water, energy by the
+ * general factors 4/4/9 (USDA Handbook 74), saturated fat a share of fat, fiber and sugar shares of
+ * carbohydrate, densities between dry pasta and oil-free sauces. Invented, not catalogue values.
+ */
+function syntheticNutrients(rng: Rng, kind: 'protein' | 'fat' | 'carb' | 'mixed'): Nutrients {
+  const [p, f, c] =
+    kind === 'protein'
+      ? [between(rng, 12, 32), between(rng, 1, 25), between(rng, 0, 6)]
+      : kind === 'fat'
+        ? [between(rng, 0, 25), between(rng, 15, 60), between(rng, 0, 10)]
+        : kind === 'carb'
+          ? [between(rng, 2, 15), between(rng, 0, 8), between(rng, 8, 75)]
+          : [between(rng, 1, 12), between(rng, 0, 15), between(rng, 3, 25)];
+  return {
+    kcal: 4 * p + 9 * f + 4 * c,
+    proteinG: p,
+    fatG: f,
+    satFatG: f * between(rng, 0.1, 0.6),
+    carbsG: c,
+    fiberG: c * between(rng, 0, 0.25),
+    sugarG: c * between(rng, 0, 0.5),
+    sodiumMg: between(rng, 0, 900),
+  };
+}
+
+/** A lighter (or merely different) food in the same part of the dish: leaner, more protein, some noise. */
+function variantOf(rng: Rng, base: Nutrients): Nutrients {
+  const p = base.proteinG * between(rng, 0.7, 1.8);
+  const f = base.fatG * between(rng, 0.05, 1.1);
+  const carbs = base.carbsG * between(rng, 0.5, 1.3);
+  return {
+    kcal: 4 * p + 9 * f + 4 * carbs,
+    proteinG: p,
+    fatG: f,
+    satFatG: f * between(rng, 0.1, 0.6),
+    carbsG: carbs,
+    fiberG: carbs * between(rng, 0, 0.3),
+    sugarG: carbs * between(rng, 0, 0.5),
+    sodiumMg: base.sodiumMg * between(rng, 0.4, 1.5),
+  };
+}
+
+export interface RandomRecipeShape {
+  lines: number;
+  /** candidates per line besides the original */
+  candidates: number;
+  /** share of lines that are locked */
+  lockedShare?: number;
+  /** share of candidates a coach approved */
+  approvedShare?: number;
+  /** add one line with no grams ("salt to taste") */
+  withEmptyLine?: boolean;
+}
+
+export function randomRecipe(rng: Rng, shape: RandomRecipeShape): RewriteLine[] {
+  let nextFoodId = 1;
+  const lines: RewriteLine[] = [];
+  for (let i = 0; i < shape.lines; i++) {
+    const kind = pick(rng, ['protein', 'fat', 'carb', 'mixed'] as const);
+    const density = between(rng, 0.4, 1.1);
+    const volumeMl = kind === 'fat' ? between(rng, 10, 80) : between(rng, 60, 500);
+    const per100g = syntheticNutrients(rng, kind);
+    const original: Candidate = { foodId: nextFoodId++, name: `food ${i} as written`, densityGPerMl: density, per100g, original: true };
+    const candidates: Candidate[] = [original];
+    for (let k = 0; k < shape.candidates; k++) {
+      const c: Candidate = {
+        foodId: nextFoodId++,
+        name: `food ${i} option ${k + 1}`,
+        densityGPerMl: density * between(rng, 0.7, 1.3),
+        per100g: variantOf(rng, per100g),
+      };
+      if (rng() < (shape.approvedShare ?? 0)) {
+        c.approved = { by: 'Coach Wren', note: 'invented test note' };
+        if (rng() < 0.5) c.approved.volumeRatio = Number(between(rng, 0.8, 1.2).toFixed(2));
+      }
+      candidates.push(c);
+    }
+    lines.push({
+      index: i,
+      foodId: original.foodId,
+      grams: volumeMl * density,
+      volumeMl,
+      locked: rng() < (shape.lockedShare ?? 0),
+      candidates,
+    });
+  }
+  if (shape.withEmptyLine) {
+    const salt: Candidate = {
+      foodId: nextFoodId++,
+      name: 'salt to taste',
+      densityGPerMl: 1.2,
+      per100g: { kcal: 0, proteinG: 0, fatG: 0, satFatG: 0, carbsG: 0, fiberG: 0, sugarG: 0, sodiumMg: 38758 },
+      original: true,
+    };
+    lines.push({ index: lines.length, foodId: salt.foodId, grams: 0, volumeMl: 0, locked: false, candidates: [salt] });
+  }
+  return lines;
+}
+
+export function perServingAsWritten(lines: RewriteLine[], servings: number): Nutrients {
+  const totals = sumNutrients(
+    lines.map((l) => nutrientsForGrams(l.candidates.find((c) => c.original)!.per100g, Math.max(0, l.grams))),
+  );
+  return divideNutrients(totals, servings);
+}
+
+export interface RandomProblem {
+  seed: number;
+  lines: RewriteLine[];
+  targets: Targets;
+  servings: number;
+  options: RewriteOptions;
+}
+
+/** A recipe with targets drawn around its own values: some reachable, some not. */
+export function randomProblem(seed: number, shape?: Partial<RandomRecipeShape>): RandomProblem {
+  const rng = seededRandom(seed);
+  const lines = randomRecipe(rng, {
+    lines: shape?.lines ?? 3 + Math.floor(rng() * 8),
+    candidates: shape?.candidates ?? 1 + Math.floor(rng() * 5),
+    lockedShare: shape?.lockedShare ?? 0.15,
+    approvedShare: shape?.approvedShare ?? 0.2,
+    withEmptyLine: shape?.withEmptyLine ?? rng() < 0.3,
+  });
+  const servings = pick(rng, [1, 2, 4, 6, 8]);
+  const written = perServingAsWritten(lines, servings);
+  const targets: Targets = {
+    proteinMinG: written.proteinG * between(rng, 0.95, 1.5),
+    kcalMax: written.kcal * between(rng, 0.6, 1.02),
+  };
+  if (rng() < 0.25) targets.fiberMinG = written.fiberG * between(rng, 0.8, 1.2);
+  if (rng() < 0.25) targets.fatMaxG = written.fatG * between(rng, 0.5, 1);
+  if (rng() < 0.2) targets.sodiumMaxMg = written.sodiumMg * between(rng, 0.7, 1.1);
+  if (rng() < 0.15) targets.satFatMaxG = written.satFatG * between(rng, 0.5, 1);
+  if (rng() < 0.15) targets.sugarMaxG = written.sugarG * between(rng, 0.7, 1.1);
+  const options: RewriteOptions = {
+    objective: pick(rng, ['closest', 'max-protein', 'min-kcal'] as RewriteObjective[]),
+    volumeTolerancePct: pick(rng, [5, 10, 10, 15]),
+    lineTolerancePct: pick(rng, [15, 25, 25, 35]),
+  };
+  if (rng() < 0.6) options.maxSwaps = Math.floor(rng() * 4);
+  return { seed, lines, targets, servings, options };
+}
