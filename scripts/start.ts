@@ -13,7 +13,7 @@ import { createMailContext } from '../server/mail-context';
 const started = Date.now();
 const db = await resolveDatabaseUrl('postgres', Number(process.env.PG_PORT ?? 54329), 'hearthswap');
 process.env.DATABASE_URL = db.url;
-const s3 = await ensureS3('.data/s3', Number(process.env.S3_LOCAL_PORT ?? 54331));
+const s3 = await ensureS3('.data/s3', Number(process.env.S3_LOCAL_PORT ?? 0));
 const config = loadConfig(process.env, { clientDir: path.resolve('dist/client') });
 
 const services = await openServices(config);
