@@ -4,13 +4,16 @@ import { analyzeRequestSchema } from '../../shared/schemas/analyze';
 import { parse } from '../middleware/validate';
 import { getFoodEngine } from '../services/food-engine';
 import { analyzeLines, requestLines, toAnalyzeResponse } from '../services/analysis';
+import { canSeeFood } from '../services/custom-foods';
+import type { StoredFood } from '../services/catalogue';
 
 export function analyzeRouter(sequelize: Sequelize, limit: RequestHandler) {
   const router = Router();
   router.post('/', limit, async (req, res) => {
     const input = parse(analyzeRequestSchema, req.body);
     const engine = await getFoodEngine(sequelize);
-    res.json(toAnalyzeResponse(analyzeLines(engine, requestLines(input), input.servings)));
+    const canUse = (food: StoredFood) => canSeeFood(food, req.user ?? null);
+    res.json(toAnalyzeResponse(analyzeLines(engine, requestLines(input), input.servings, (f) => canUse(f as StoredFood))));
   });
   return router;
 }

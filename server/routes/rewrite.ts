@@ -5,6 +5,8 @@ import { parse } from '../middleware/validate';
 import { getFoodEngine } from '../services/food-engine';
 import { rewriteRecipe } from '../services/rewrite';
 import { publishedSwapsForClient as approvedSwapsFor } from '../services/coaching';
+import { canSeeFood } from '../services/custom-foods';
+import type { StoredFood } from '../services/catalogue';
 
 export function rewriteRouter(sequelize: Sequelize, limit: RequestHandler) {
   const router = Router();
@@ -13,7 +15,8 @@ export function rewriteRouter(sequelize: Sequelize, limit: RequestHandler) {
     const engine = await getFoodEngine(sequelize);
     const approvedSwaps = await approvedSwapsFor(req.user ?? null);
     const explain = req.query.explain === '1' || req.query.explain === 'true';
-    res.json(await rewriteRecipe(engine, input, { approvedSwaps }, explain));
+    const canUse = (food: unknown) => canSeeFood(food as StoredFood, req.user ?? null);
+    res.json(await rewriteRecipe(engine, input, { approvedSwaps, canUse }, explain));
   });
   return router;
 }

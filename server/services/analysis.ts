@@ -34,7 +34,11 @@ function finite(n: number): number {
   return Number.isFinite(n) && n > 0 ? n : 0;
 }
 
-export function analyzeLine(engine: FoodEngine, line: LineInput): AnalyzedLineWithFood {
+/** Which foods a viewer may pin: catalogue foods always; a coach's custom foods for that coach and their clients. */
+export type FoodVisibility = (food: CatalogueFood) => boolean;
+const catalogueOnly: FoodVisibility = (food) => food.source === 'usda-sr28';
+
+export function analyzeLine(engine: FoodEngine, line: LineInput, canUse: FoodVisibility = catalogueOnly): AnalyzedLineWithFood {
   const parsed: ParsedLine = parseLine(line.input);
   const warnings: string[] = [];
   const match = engine.matcher.match(parsed.name || line.input);
@@ -42,7 +46,8 @@ export function analyzeLine(engine: FoodEngine, line: LineInput): AnalyzedLineWi
   let confidence = match.confidence;
   let alternatives = match.alternatives;
   if (line.foodId !== undefined) {
-    const pinned = engine.byId.get(line.foodId);
+    const found = engine.byId.get(line.foodId);
+    const pinned = found && canUse(found) ? found : undefined;
     if (pinned) {
       if (food && food.id !== pinned.id) alternatives = [food, ...alternatives.filter((f) => f.id !== pinned.id)];
       food = pinned;
@@ -86,8 +91,8 @@ export function analyzeLine(engine: FoodEngine, line: LineInput): AnalyzedLineWi
   };
 }
 
-export function analyzeLines(engine: FoodEngine, lines: LineInput[], servings: number) {
-  const analyzed = lines.map((line) => analyzeLine(engine, line));
+export function analyzeLines(engine: FoodEngine, lines: LineInput[], servings: number, canUse: FoodVisibility = catalogueOnly) {
+  const analyzed = lines.map((line) => analyzeLine(engine, line, canUse));
   const totals = sumNutrients(analyzed.map((l) => l.nutrients));
   return {
     servings,

@@ -12,7 +12,9 @@ import type {
 } from '../../shared/schemas/recipes';
 import type { TargetsInput } from '../../shared/schemas/rewrite';
 import type { LineInput } from '../../shared/schemas/analyze';
-import { analyzeLine, textToLines } from './analysis';
+import { analyzeLine, textToLines, type FoodVisibility } from './analysis';
+import { canSeeFood } from './custom-foods';
+import type { StoredFood } from './catalogue';
 import type { FoodEngine } from './food-engine';
 import { HttpError, badRequest, conflict, notFound } from '../lib/http-error';
 
@@ -21,17 +23,18 @@ function formatGramsForText(grams: number) {
 }
 
 /** Turns lines as typed or as a rewrite returns them into stored lines, each weighed and matched. */
-export function normaliseLines(engine: FoodEngine, lines: VersionLineInput[]): StoredLine[] {
+export function normaliseLines(engine: FoodEngine, lines: VersionLineInput[], canUse: FoodVisibility = (f) => f.source === 'usda-sr28'): StoredLine[] {
   return lines.map((line, i) => {
     if ('food' in line) {
-      const food = engine.byId.get(line.food.id);
+      const found = engine.byId.get(line.food.id);
+      const food = found && canUse(found) ? found : undefined;
       if (!food) throw badRequest(`lines.${i}.food.id: no food ${line.food.id} in the catalogue.`, { fieldErrors: { [`lines.${i}.food.id`]: ['Unknown food.'] } });
       return { input: line.input ?? `${formatGramsForText(line.grams)} g ${food.name}`, foodId: food.id, foodName: food.name, grams: line.grams };
     }
     const typed: LineInput = { input: line.input };
     if (line.foodId != null) typed.foodId = line.foodId;
     if (line.grams !== undefined) typed.grams = line.grams;
-    const analysed = analyzeLine(engine, typed);
+    const analysed = analyzeLine(engine, typed, canUse);
     return { input: line.input, foodId: analysed.matchedFood?.id ?? null, foodName: analysed.matchedFood?.name ?? null, grams: analysed.grams };
   });
 }
@@ -181,7 +184,7 @@ export async function createRecipe(
 ) {
   const lineInputs: VersionLineInput[] = input.lines ?? textToLines(input.text ?? '');
   if (lineInputs.length === 0) throw badRequest('text: the recipe has no ingredient lines.', { fieldErrors: { text: ['No ingredient lines.'] } });
-  const lines = normaliseLines(engine, lineInputs);
+  const lines = normaliseLines(engine, lineInputs, (f) => canSeeFood(f as StoredFood, viewer));
   return sequelize.transaction(async (transaction) => {
     const recipe = await Recipe.create(
       { ownerId: viewer.id, title: input.title, servings: input.servings, notes: input.notes ?? '', method: input.method ?? '' },
@@ -260,7 +263,7 @@ export async function addVersion(
   id: number,
   input: { kind: VersionKind; lines: VersionLineInput[]; servings?: number; targets?: TargetsInput | null; note?: string; parentNumber?: number },
 ) {
-  const lines = normaliseLines(engine, input.lines);
+  const lines = normaliseLines(engine, input.lines, (f) => canSeeFood(f as StoredFood, viewer));
   return sequelize.transaction(async (transaction) => {
     const recipe = await findOwnRecipe(viewer, id, transaction);
     return insertVersion(engine, recipe, { ...input, lines, servings: input.servings ?? recipe.servings }, viewer.id, transaction);

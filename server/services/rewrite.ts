@@ -2,7 +2,7 @@ import type { RewriteRequest } from '../../shared/schemas/rewrite';
 import type { RewriteLine, RewriteResult, Plan, Change, FoodRef } from '../../shared/rewrite/types';
 import { RewriteSolverError } from '../../shared/rewrite/solve-log';
 import type { FoodEngine } from './food-engine';
-import { analyzeLines, requestLines } from './analysis';
+import { analyzeLines, requestLines, type FoodVisibility } from './analysis';
 import { candidatesFor, type ApprovedSwap } from './candidates';
 import { foodSummary } from './foods';
 import { runRewrite } from './solver-pool';
@@ -12,6 +12,7 @@ const DEFAULT_K = 8;
 
 export interface RewriteViewer {
   approvedSwaps: ApprovedSwap[];
+  canUse?: FoodVisibility;
 }
 
 function publicFood(engine: FoodEngine, ref: FoodRef) {
@@ -37,7 +38,7 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
   for (const index of locked) {
     if (index >= lines.length) throw badRequest(`lockedLines: line ${index} does not exist (the recipe has ${lines.length}).`, { fieldErrors: { lockedLines: ['Unknown line index.'] } });
   }
-  const analysis = analyzeLines(engine, lines, input.servings);
+  const analysis = analyzeLines(engine, lines, input.servings, viewer.canUse);
   const options = {
     k: input.candidatesPerLine ?? DEFAULT_K,
     diet: input.diet ?? [],

@@ -181,6 +181,10 @@ describe('custom foods from a label', () => {
     await request(t.app).get(`/api/foods/${res.body.id}`).expect(404);
     const found = await client.agent.get('/api/foods/search').query({ q: 'house test' }).expect(200);
     expect(found.body.results[0].id).toBe(res.body.id);
+    const pinned = await client.agent.post('/api/analyze').send({ lines: [{ input: '1 wrap', foodId: res.body.id, grams: 50 }], servings: 1 }).expect(200);
+    expect(pinned.body.lines[0].food.id).toBe(res.body.id);
+    const leaked = await request(t.app).post('/api/analyze').send({ lines: [{ input: '1 wrap', foodId: res.body.id, grams: 50 }], servings: 1 }).expect(200);
+    expect(leaked.body.lines[0].food?.id).not.toBe(res.body.id);
     await client.agent.post('/api/foods').set('X-CSRF-Token', client.csrf).send({ name: 'x food', servingSizeG: 10, proteinG: 1, carbsG: 1, fatG: 1 }).expect(403);
     const bad = await coach.agent.post('/api/foods').set('X-CSRF-Token', coach.csrf).send({ name: 'No size', proteinG: 1, carbsG: 1, fatG: 1 }).expect(400);
     expect(bad.body.error.details.fieldErrors.servingSizeG).toBeDefined();
