@@ -20,6 +20,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { to: '/', label: 'Kitchen', roles: null },
   { to: '/foods', label: 'Foods', roles: null },
   { to: '/recipes', label: 'Recipe book', roles: PAGE_ROLES.recipeBook },
+  { to: '/shopping', label: 'Shopping', roles: PAGE_ROLES.recipeBook },
   { to: '/coach', label: 'My coach', roles: PAGE_ROLES.myCoach },
   { to: '/swaps', label: 'Swap library', roles: PAGE_ROLES.swapLibrary },
   { to: '/clients', label: 'Clients', roles: PAGE_ROLES.clients },

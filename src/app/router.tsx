@@ -27,6 +27,8 @@ export const routes: RouteObject[] = [
             element: <RequireAuth />,
             children: [
               { path: 'account', lazy: () => import('./routes/account').then((m) => ({ Component: m.AccountPage })) },
+              // owner or their coach: the server decides who may read the version
+              { path: 'recipes/:id/versions/:number/prep', lazy: () => import('./routes/prep').then((m) => ({ Component: m.PrepPage })) },
             ],
           },
           {
@@ -48,6 +50,7 @@ export const routes: RouteObject[] = [
                 path: 'recipes/:id/print',
                 lazy: () => import('./routes/recipe-print').then((m) => ({ Component: m.RecipePrintPage })),
               },
+              { path: 'shopping', lazy: () => import('./routes/shopping-list').then((m) => ({ Component: m.ShoppingListPage })) },
             ],
           },
           {

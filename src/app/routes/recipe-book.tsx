@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { Link, useLocation, useNavigate, useSearchParams } from 'react-router';
 import { ActionToast } from '../../components/ui/action-toast';
 import { Button, buttonClasses } from '../../components/ui/button';
@@ -62,6 +62,15 @@ export function RecipeBookPage() {
   const q = useDebouncedValue(typed.trim(), 250);
   const recipes = useRecipes(q, sort);
 
+  // The address can change under the page (the "Recipe book" link, back and forward): follow it.
+  const urlQ = params.get('q') ?? '';
+  const urlQuery = useRef(urlQ);
+  useEffect(() => {
+    if (urlQ === urlQuery.current) return;
+    urlQuery.current = urlQ;
+    setTyped(urlQ);
+  }, [urlQ]);
+
   function updateParams(next: { q?: string; sort?: RecipeSort }) {
     const merged = new URLSearchParams(params);
     const nextQ = next.q ?? q;
@@ -70,6 +79,7 @@ export function RecipeBookPage() {
     else merged.delete('q');
     if (nextSort !== 'updated') merged.set('sort', nextSort);
     else merged.delete('sort');
+    urlQuery.current = nextQ;
     if (merged.toString() === params.toString()) return;
     // Keep what the history entry carries (the undo offer) while the search changes.
     setParams(merged, { replace: true, preventScrollReset: true, state: location.state });
@@ -86,6 +96,7 @@ export function RecipeBookPage() {
     </Button>
   );
 
+  const bookIsEmpty = recipes.isSuccess && recipes.data.length === 0 && !q;
   let body;
   if (recipes.isPending) {
     body = <LoadingState label="Opening the recipe book…" />;
@@ -148,7 +159,7 @@ export function RecipeBookPage() {
       <Page
         title="Recipe book"
         description="The recipes you keep, each with the versions you saved along the way: the original as written, the lighter rewrites, and your own edits. Figures are per serving of each recipe's newest version."
-        actions={importButton}
+        actions={bookIsEmpty ? undefined : importButton}
       >
         {body}
       </Page>

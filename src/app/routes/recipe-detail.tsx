@@ -174,5 +174,11 @@ export function RecipeDetailPage() {
       </Page>
     );
   }
-  return <RecipeView recipe={recipe.data} onReload={async () => (await recipe.refetch()).data} />;
+  // Keyed by id: going from a recipe to its copy starts the page afresh (no half-done edit carried over).
+  const reload = async () => {
+    const fresh = await recipe.refetch();
+    if (fresh.isError) throw fresh.error;
+    return fresh.data;
+  };
+  return <RecipeView key={recipe.data.id} recipe={recipe.data} onReload={reload} />;
 }

@@ -48,8 +48,9 @@ export function ActionToast({ message, actionLabel, onAction, onDismiss, duratio
         if (!event.currentTarget.contains(event.relatedTarget as Node | null)) setPaused(false);
       }}
       className={cx(
-        'fixed inset-x-4 bottom-4 z-50 mx-auto flex max-w-md flex-wrap items-center gap-x-3 gap-y-2 rounded-field bg-oat-900 px-4 py-3 text-oat-50 shadow-pop',
-        'sm:inset-x-auto sm:left-6 sm:mx-0',
+        'fixed inset-x-4 top-20 z-50 mx-auto flex max-w-md flex-wrap items-center gap-x-3 gap-y-2 rounded-field bg-oat-900 px-4 py-3 text-oat-50 shadow-pop',
+        // Plain toasts stack at the bottom (centred on a phone, right from sm up): keep clear of them.
+        'sm:inset-x-auto sm:top-auto sm:bottom-4 sm:left-6 sm:mx-0',
         'print:hidden',
         className,
       )}

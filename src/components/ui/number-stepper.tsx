@@ -1,4 +1,4 @@
-import { useId, useState, type ReactNode } from 'react';
+import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
 import { cx } from '../../lib/cx';
 
 export interface NumberStepperProps {
@@ -41,11 +41,18 @@ export function NumberStepper({ label, value, min, max, onChange, hint, error, u
   const [draft, setDraft] = useState({ text: String(value), forValue: value });
   const text = draft.forValue === value ? draft.text : String(value);
 
+  // Two quick presses step twice, even before the first change has come back as `value`.
+  const latest = useRef(value);
+  useEffect(() => {
+    latest.current = value;
+  }, [value]);
+
   const commit = (next: number) => {
     setDraft({ text: String(next), forValue: next });
-    if (next !== value) onChange(next);
+    if (next !== latest.current) onChange(next);
+    latest.current = next;
   };
-  const step = (by: number) => commit(Math.min(max, Math.max(min, Math.round(value) + by)));
+  const step = (by: number) => commit(Math.min(max, Math.max(min, Math.round(latest.current) + by)));
   const described = [hint ? `${id}-hint` : '', error ? `${id}-error` : ''].filter(Boolean).join(' ') || undefined;
 
   return (
@@ -73,7 +80,8 @@ export function NumberStepper({ label, value, min, max, onChange, hint, error, u
             const next = Number(raw);
             if (raw.trim() !== '' && Number.isFinite(next)) {
               setDraft({ text: raw, forValue: next });
-              if (next !== value) onChange(next);
+              if (next !== latest.current) onChange(next);
+              latest.current = next;
             } else {
               setDraft({ text: raw, forValue: value });
             }

@@ -48,12 +48,38 @@ function commonPairs(a: string[], b: string[]): Array<[number, number]> {
   return pairs;
 }
 
+/** Words of a food's name that say what it is, not how it is sold or cooked. */
+const PLAIN_WORDS = new Set([
+  'raw', 'cooked', 'dry', 'fat', 'lean', 'meat', 'with', 'and', 'without', 'the', 'plain', 'ready', 'serve',
+  'added', 'salt', 'enriched', 'unenriched', 'prepared', 'frozen', 'canned', 'fresh', 'regular', 'commercial',
+]);
+
+function nameWords(line: VersionLine): Set<string> {
+  const name = (line.foodName ?? line.input).toLowerCase();
+  return new Set(name.split(/[^a-z]+/).filter((w) => w.length >= 3 && !PLAIN_WORDS.has(w)));
+}
+
+function shareAWord(a: VersionLine, b: VersionLine): boolean {
+  const words = nameWords(a);
+  for (const w of nameWords(b)) if (words.has(w)) return true;
+  return false;
+}
+
+export interface CompareOptions {
+  /**
+   * The newer version was made from the older one line by line (a rewrite against its parent):
+   * a line that changed food was swapped in place.
+   */
+  inPlace?: boolean;
+}
+
 /**
- * Lines of two versions side by side. Ingredients kept in both line up first; between two kept
- * ingredients, lines that left and lines that arrived pair up in order as swaps (a rewrite swaps a
- * line's food in place), and whatever is left over was removed or added.
+ * Lines of two versions side by side. Ingredients kept in both line up first. Between two kept
+ * ingredients, a line that left and a line that arrived count as one swap when the newer version
+ * was rewritten line by line from the older, or else when their foods share a word ("Cheese,
+ * ricotta" → "Cheese, cottage"); whatever is left over was removed or added.
  */
-export function compareLines(before: VersionLine[], after: VersionLine[]): LineChange[] {
+export function compareLines(before: VersionLine[], after: VersionLine[], options: CompareOptions = {}): LineChange[] {
   const pairs = commonPairs(before.map(identity), after.map(identity));
   const changes: LineChange[] = [];
   let i = 0;
@@ -62,10 +88,17 @@ export function compareLines(before: VersionLine[], after: VersionLine[]): LineC
   const flushGap = (untilI: number, untilJ: number) => {
     const gone = before.slice(i, untilI);
     const arrived = after.slice(j, untilJ);
-    const paired = Math.min(gone.length, arrived.length);
-    for (let k = 0; k < paired; k++) changes.push({ kind: 'swapped', before: gone[k], after: arrived[k] });
-    for (const line of gone.slice(paired)) changes.push({ kind: 'removed', before: line, after: null });
-    for (const line of arrived.slice(paired)) changes.push({ kind: 'added', before: null, after: line });
+    const taken = new Set<number>();
+    for (const [k, line] of gone.entries()) {
+      const match = options.inPlace
+        ? k < arrived.length ? k : -1
+        : arrived.findIndex((candidate, m) => !taken.has(m) && shareAWord(line, candidate));
+      if (match >= 0) {
+        taken.add(match);
+        changes.push({ kind: 'swapped', before: line, after: arrived[match] });
+      } else changes.push({ kind: 'removed', before: line, after: null });
+    }
+    for (const [m, line] of arrived.entries()) if (!taken.has(m)) changes.push({ kind: 'added', before: null, after: line });
     i = untilI;
     j = untilJ;
   };
@@ -78,6 +111,14 @@ export function compareLines(before: VersionLine[], after: VersionLine[]): LineC
   }
   flushGap(before.length, after.length);
   return changes;
+}
+
+/** Whether `after` was rewritten line by line from `before`, so swaps sit in place. */
+export function rewrittenInPlace(
+  before: Pick<VersionDetail, 'number' | 'lines'>,
+  after: Pick<VersionDetail, 'kind' | 'parentNumber' | 'lines'>,
+): boolean {
+  return after.kind === 'rewrite' && after.parentNumber === before.number && after.lines.length === before.lines.length;
 }
 
 /** How many lines changed in any way. */

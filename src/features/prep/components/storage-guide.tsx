@@ -1,3 +1,4 @@
+import { useId } from 'react';
 import type { StorageGuidance } from '../../../../shared/food-safety';
 import { cx } from '../../../lib/cx';
 
@@ -19,9 +20,10 @@ function Figure({ label, value, note }: { label: string; value: string; note: st
 /** Fridge and freezer life, the reheat temperature and every caution that comes with them. */
 export function StorageGuide({ storage, headingLevel = 2, className }: { storage: StorageGuidance; headingLevel?: 2 | 3; className?: string }) {
   const Heading = headingLevel === 2 ? 'h2' : 'h3';
+  const id = useId();
   return (
-    <section aria-labelledby="prep-storage" className={cx('flex flex-col gap-3', className)}>
-      <Heading id="prep-storage" className="text-xl font-extrabold">
+    <section aria-labelledby={id} className={cx('flex flex-col gap-3', className)}>
+      <Heading id={id} className="text-xl font-extrabold">
         Storing and reheating
       </Heading>
       <dl className="grid grid-cols-1 gap-2 min-[420px]:grid-cols-3 print:grid-cols-3">

@@ -55,11 +55,11 @@ function SavedElsewhere({ value }: { value: string }) {
 }
 
 type Field = (typeof FIELDS)[number];
-type Conflict = null | { stage: 'refused' } | { stage: 'reloaded'; saved: Details; changed: Field[] };
+type Conflict = null | { stage: 'refused' } | { stage: 'reloaded'; saved: Details; clashes: Field[]; taken: Field[] };
 
 export interface RecipeDetailsCardProps {
   recipe: RecipeDetail;
-  /** fetches the recipe again and resolves with the fresh copy */
+  /** fetches the recipe again and resolves with the fresh copy; rejects when that fails */
   onReload: () => Promise<RecipeDetail | undefined>;
 }
 
@@ -84,6 +84,8 @@ export function RecipeDetailsCard({ recipe, onReload }: RecipeDetailsCardProps) 
     handleSubmit,
     reset,
     setError,
+    setValue,
+    getValues,
     control,
     formState: { errors },
   } = useForm<Details>({ resolver: zodResolver(detailsSchema), defaultValues: detailsOf(recipe) });
@@ -114,16 +116,35 @@ export function RecipeDetailsCard({ recipe, onReload }: RecipeDetailsCardProps) 
     requestAnimationFrame(() => document.getElementById(editButtonId)?.focus());
   }
 
+  /**
+   * Fetches the saved copy and merges it with the form: a field only the other save changed takes
+   * the saved text; a field only the cook changed keeps what was typed; a field both changed keeps
+   * what was typed and shows the saved text under it.
+   */
   async function reload() {
     setReloading(true);
+    setFormProblem(null);
     try {
       const fresh = await onReload();
       if (!fresh) return;
+      const original = startedFrom.current;
+      const typedNow = getValues();
       const saved = detailsOf(fresh);
-      const changed = FIELDS.filter((f) => saved[f] !== startedFrom.current[f]);
+      const taken: Field[] = [];
+      const clashes: Field[] = [];
+      for (const field of FIELDS) {
+        const cookChanged = typedNow[field] !== original[field];
+        const savedChanged = saved[field] !== original[field];
+        if (savedChanged && !cookChanged) {
+          setValue(field, saved[field], { shouldDirty: true });
+          taken.push(field);
+        } else if (savedChanged && typedNow[field] !== saved[field]) clashes.push(field);
+      }
       setBaseRevision(fresh.revision);
       startedFrom.current = saved;
-      setConflict({ stage: 'reloaded', saved, changed });
+      setConflict({ stage: 'reloaded', saved, clashes, taken });
+    } catch (error) {
+      setFormProblem(error);
     } finally {
       setReloading(false);
     }
@@ -176,7 +197,7 @@ export function RecipeDetailsCard({ recipe, onReload }: RecipeDetailsCardProps) 
 
   const saved = conflict?.stage === 'reloaded' ? conflict.saved : null;
   // Fields the other save changed and that now differ from what the cook typed.
-  const changedElsewhere = conflict?.stage === 'reloaded' ? conflict.changed.filter((f) => String(conflict.saved[f]) !== String(typed[f] ?? '')) : [];
+  const changedElsewhere = conflict?.stage === 'reloaded' ? conflict.clashes.filter((f) => String(conflict.saved[f]) !== String(typed[f] ?? '')) : [];
   const titleField = register('title');
 
   return (
@@ -197,11 +218,17 @@ export function RecipeDetailsCard({ recipe, onReload }: RecipeDetailsCardProps) 
             here: reload to see the saved copy, then save again to keep your words.
           </Alert>
         )}
-        {saved && (
+        {conflict?.stage === 'reloaded' && (
           <Alert tone="info" title={`Loaded the saved copy (revision ${baseRevision})`}>
-            {changedElsewhere.length > 0
-              ? `What differs from your text: ${changedElsewhere.map((f) => FIELD_LABELS[f]).join(', ')}. The saved text is under each field. Save to keep yours, or discard your changes to keep the saved copy.`
-              : 'Your text matches the saved copy. Save to keep it.'}
+            {[
+              conflict.taken.length > 0 &&
+                `What changed elsewhere is now in the form (${conflict.taken.map((f) => FIELD_LABELS[f]).join(', ')}).`,
+              changedElsewhere.length > 0
+                ? `You and the other save both changed the ${changedElsewhere.map((f) => FIELD_LABELS[f]).join(' and ')}: your text is kept, the saved text is under the field. Save to keep yours, or discard your changes.`
+                : 'Your edits are kept. Save to keep both.',
+            ]
+              .filter(Boolean)
+              .join(' ')}
           </Alert>
         )}
         <TextField

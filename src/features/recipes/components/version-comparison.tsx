@@ -5,7 +5,7 @@ import { Card } from '../../../components/ui/card';
 import { NUTRIENT_ROWS } from '../../../components/ui/nutrient-table';
 import { cx } from '../../../lib/cx';
 import { formatGrams, formatKcal, formatMacroG, formatNumber } from '../../../lib/format';
-import { compareLines, type LineChange, type LineChangeKind } from '../compare-lines';
+import { compareLines, rewrittenInPlace, type LineChange, type LineChangeKind } from '../compare-lines';
 import { formatWhen } from '../format-when';
 import { nutrientChange, type ChangeTone, type NutrientChange } from '../nutrient-change';
 import { versionKindLabel, versionNote } from '../version-words';
@@ -72,22 +72,22 @@ function NutrientDifferences({ a, b }: { a: VersionDetail; b: VersionDetail }) {
       ? { text: 'No change', direction: 'same', tone: 'neutral' }
       : { text: `${volumeChange > 0 ? '+' : MINUS}${formatNumber(Math.abs(volumeChange), 0)}%`, direction: volumeChange > 0 ? 'more' : 'less', tone: 'neutral' };
   return (
-    <div className="overflow-x-auto">
-      <table className="w-full border-collapse text-sm sm:text-base">
+    <div className="@container overflow-x-auto">
+      <table className="w-full border-collapse text-sm @md:text-base">
         <caption className="sr-only">Nutrients per serving, before and after, with the difference</caption>
         <thead>
           <tr className="border-b-2 border-ink text-sm text-ink-soft">
-            <th scope="col" className="py-1.5 pr-2 text-left sm:pr-3 font-bold">
+            <th scope="col" className="py-1.5 pr-2 text-left @md:pr-3 font-bold">
               Per serving
             </th>
-            <th scope="col" className="px-2 py-1.5 sm:px-3 text-right font-bold">
+            <th scope="col" className="px-2 py-1.5 @md:px-3 text-right font-bold">
               v{a.number}
             </th>
-            <th scope="col" className="px-2 py-1.5 text-right font-bold sm:px-3">
+            <th scope="col" className="px-2 py-1.5 text-right font-bold @md:px-3">
               v{b.number}
-              <span className="sm:hidden"> and change</span>
+              <span className="@md:hidden"> and change</span>
             </th>
-            <th scope="col" className="hidden py-1.5 pl-3 text-right font-bold sm:table-cell">
+            <th scope="col" className="hidden py-1.5 pl-3 text-right font-bold @md:table-cell">
               Difference
             </th>
           </tr>
@@ -98,34 +98,34 @@ function NutrientDifferences({ a, b }: { a: VersionDetail; b: VersionDetail }) {
             const change = nutrientChange(key, a.perServing[key], b.perServing[key], row.format);
             return (
               <tr key={row.key} className="border-b border-line">
-                <th scope="row" className={cx('py-1.5 pr-2 text-left sm:pr-3', row.part ? 'pl-4 font-semibold text-ink-soft' : 'font-bold text-ink')}>
+                <th scope="row" className={cx('py-1.5 pr-2 text-left @md:pr-3', row.part ? 'pl-4 font-semibold text-ink-soft' : 'font-bold text-ink')}>
                   {row.label}
                 </th>
-                <td className="px-2 py-1.5 sm:px-3 text-right whitespace-nowrap tabular-nums">{row.format(a.perServing[key])}</td>
-                <td className="px-2 py-1.5 text-right font-bold whitespace-nowrap tabular-nums sm:px-3">
+                <td className="px-2 py-1.5 @md:px-3 text-right whitespace-nowrap tabular-nums">{row.format(a.perServing[key])}</td>
+                <td className="px-2 py-1.5 text-right font-bold whitespace-nowrap tabular-nums @md:px-3">
                   {row.format(b.perServing[key])}
-                  <span className="mt-0.5 block sm:hidden">
+                  <span className="mt-0.5 block @md:hidden">
                     <ChangeChip change={change} />
                   </span>
                 </td>
-                <td className="hidden py-1.5 pl-3 text-right sm:table-cell">
+                <td className="hidden py-1.5 pl-3 text-right @md:table-cell">
                   <ChangeChip change={change} />
                 </td>
               </tr>
             );
           })}
           <tr>
-            <th scope="row" className="py-1.5 pr-2 text-left sm:pr-3 font-semibold text-ink-soft">
+            <th scope="row" className="py-1.5 pr-2 text-left @md:pr-3 font-semibold text-ink-soft">
               Volume
             </th>
-            <td className="px-2 py-1.5 sm:px-3 text-right whitespace-nowrap tabular-nums">{formatNumber(volumeA, 0)} mL</td>
-            <td className="px-2 py-1.5 text-right whitespace-nowrap tabular-nums sm:px-3">
+            <td className="px-2 py-1.5 @md:px-3 text-right whitespace-nowrap tabular-nums">{formatNumber(volumeA, 0)} mL</td>
+            <td className="px-2 py-1.5 text-right whitespace-nowrap tabular-nums @md:px-3">
               {formatNumber(volumeB, 0)} mL
-              <span className="mt-0.5 block sm:hidden">
+              <span className="mt-0.5 block @md:hidden">
                 <ChangeChip change={volumeChip} />
               </span>
             </td>
-            <td className="hidden py-1.5 pl-3 text-right sm:table-cell">
+            <td className="hidden py-1.5 pl-3 text-right @md:table-cell">
               <ChangeChip change={volumeChip} />
             </td>
           </tr>
@@ -190,7 +190,7 @@ function summary(changes: LineChange[]): string {
 }
 
 function LineChanges({ a, b }: { a: VersionDetail; b: VersionDetail }) {
-  const changes = compareLines(a.lines, b.lines);
+  const changes = compareLines(a.lines, b.lines, { inPlace: rewrittenInPlace(a, b) });
   return (
     <div className="flex flex-col gap-3">
       <p className="font-semibold text-ink" aria-live="polite">
