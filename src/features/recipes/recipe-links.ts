@@ -11,6 +11,11 @@ export function printPath(id: number, version?: number | null): string {
   return version ? `/recipes/${id}/print?version=${version}` : `/recipes/${id}/print`;
 }
 
+/** The batch-prep page of one version: grams per portion, shopping, storage. */
+export function prepPath(id: number, version: number): string {
+  return `/recipes/${id}/versions/${version}/prep`;
+}
+
 /** The JSON-LD download of one version (the newest when none is named). */
 export function exportHref(id: number, version?: number | null): string {
   return version ? `/api/recipes/${id}/export.jsonld?version=${version}` : `/api/recipes/${id}/export.jsonld`;

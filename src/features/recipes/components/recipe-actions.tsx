@@ -1,7 +1,7 @@
 import { Link } from 'react-router';
 import type { RecipeDetail } from '../../../../shared/schemas/recipes';
 import { Button, buttonClasses } from '../../../components/ui/button';
-import { exportHref, printPath } from '../recipe-links';
+import { exportHref, prepPath, printPath } from '../recipe-links';
 
 export interface RecipeActionsProps {
   recipe: RecipeDetail;
@@ -16,8 +16,15 @@ export interface RecipeActionsProps {
 /** What can be done with the whole recipe: print a card, download it, copy it, delete it. */
 export function RecipeActions({ recipe, version, onDuplicate, duplicating, onDelete, deleting }: RecipeActionsProps) {
   const busy = duplicating || deleting;
+  const prepVersion = version ?? recipe.latest?.number ?? null;
   return (
     <div className="flex flex-wrap gap-2">
+      {prepVersion && (
+        <Link to={prepPath(recipe.id, prepVersion)} className={buttonClasses({ variant: 'primary', size: 'sm' })}>
+          Batch prep
+          <span className="sr-only"> of version {prepVersion}</span>
+        </Link>
+      )}
       <Link to={printPath(recipe.id, version)} className={buttonClasses({ variant: 'secondary', size: 'sm' })}>
         Print
         {version && <span className="sr-only"> version {version}</span>}
