@@ -1,4 +1,5 @@
-import { useState } from 'react';
+import { useMemo, useRef, useState } from 'react';
+import { useLocation, useNavigate } from 'react-router';
 import { Button } from '../../components/ui/button';
 import { Card } from '../../components/ui/card';
 import { Page } from '../../components/ui/page';
@@ -8,6 +9,14 @@ import { CurrentAnalysisContext } from '../../features/analysis/current-analysis
 import { useKitchen } from '../../features/analysis/use-kitchen';
 import { AddFoodLineForm } from '../../features/foods/components/add-food-line-form';
 import { FoodCombobox } from '../../features/foods/components/food-combobox';
+import { useCreateRecipe } from '../../features/recipes/api/create-recipe';
+import { useSaveVersion } from '../../features/recipes/api/save-version';
+import { RewritePanel, type RewriteRecipe } from '../../features/rewrite/components/rewrite-panel';
+import type { RewriteSaveAction } from '../../features/rewrite/components/save-rewrite';
+import type { RewriteDraft } from '../../features/rewrite/save-draft';
+import { signInPathFor } from '../../lib/safe-redirect';
+import type { UnitSystem } from '../../lib/user';
+import { hasRole, PAGE_ROLES } from '../access';
 import { unitSystemOf } from '../../lib/user';
 import { useAuth } from '../auth-context';
 
@@ -77,8 +86,67 @@ export function KitchenPage() {
             cook's pins, the servings, and the server's answer to exactly those (see
             src/features/analysis/current-analysis.tsx). Pass it to the panel as props.
             ─────────────────────────────────────────────────────────────────────── */}
+        <KitchenRewrite recipe={kitchen.current} unitSystem={unitSystem} />
         {/* ─────────────────────────── end of rewrite slot ─────────────────────────── */}
       </CurrentAnalysisContext.Provider>
     </Page>
+  );
+}
+
+/**
+ * The rewrite panel with saving wired to the recipe book: the recipe as written becomes version 1,
+ * the rewrite version 2, then the recipe opens. Signed out, the panel asks to sign in first (the
+ * Kitchen and the panel keep their state in sessionStorage, so the rewrite is still there after).
+ */
+function KitchenRewrite({ recipe, unitSystem }: { recipe: RewriteRecipe | null; unitSystem: UnitSystem }) {
+  const auth = useAuth();
+  const location = useLocation();
+  const navigate = useNavigate();
+  const { mutateAsync: createRecipe } = useCreateRecipe();
+  const { mutateAsync: saveVersion } = useSaveVersion();
+  // A recipe created for a draft whose version then failed: a retry adds the version to it, not a second recipe.
+  const created = useRef<{ draft: string; id: number } | null>(null);
+
+  const saveAction = useMemo((): RewriteSaveAction => {
+    if (auth.status === 'checking') return { kind: 'unavailable', reason: 'Checking your sign-in…' };
+    if (auth.status !== 'signed-in' || !auth.user) {
+      const signInHref = signInPathFor(location);
+      return { kind: 'sign-in', signInHref, signUpHref: signInHref.replace('/sign-in', '/sign-up') };
+    }
+    if (!hasRole(auth.user, PAGE_ROLES.recipeBook)) {
+      return { kind: 'unavailable', reason: 'The recipe book is for home cook accounts; this rewrite stays on this page.' };
+    }
+    return {
+      kind: 'save',
+      save: async (draft: RewriteDraft) => {
+        const key = JSON.stringify([draft.title, draft.servings, draft.originalLines]);
+        let id = created.current?.draft === key ? created.current.id : null;
+        if (id === null) {
+          const recipe = await createRecipe({ title: draft.title, servings: draft.servings, lines: draft.originalLines });
+          id = recipe.id;
+          created.current = { draft: key, id };
+        }
+        await saveVersion({ recipeId: id, kind: 'rewrite', lines: draft.rewrittenLines, servings: draft.servings, targets: draft.targets, note: draft.note });
+        created.current = null;
+        navigate(`/recipes/${id}`);
+      },
+    };
+  }, [auth.status, auth.user, location, createRecipe, saveVersion, navigate]);
+
+  return (
+    <RewritePanel
+      recipe={recipe}
+      unitSystem={unitSystem}
+      signedIn={auth.status === 'signed-in'}
+      saveAction={saveAction}
+      renderFoodSearch={({ label, onChoose, onClose }) => (
+        <div className="flex flex-col gap-1">
+          <FoodCombobox label={label} autoFocus onChoose={onChoose} onCancel={onClose} />
+          <Button variant="quiet" size="sm" onClick={onClose} className="self-start">
+            Never mind
+          </Button>
+        </div>
+      )}
+    />
   );
 }

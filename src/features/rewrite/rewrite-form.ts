@@ -153,11 +153,16 @@ export function initialFormInput(defaults: DefaultTargets): RewriteFormInput {
   };
 }
 
+/** The lines as the request sends them: the text and the cook's pins, nothing else. */
+export function requestLines(lines: LineInput[]): LineInput[] {
+  return lines.map(({ input, foodId, grams }) => ({ input, ...(foodId !== undefined && { foodId }), ...(grams !== undefined && { grams }) }));
+}
+
 /** The request for the recipe's lines (with the cook's pins) and the form's values. */
 export function rewriteRequestFor(recipe: { lines: LineInput[]; servings: number }, values: RewriteFormValues): RewriteRequest {
   const lockedLines = [...new Set(values.lockedLines)].filter((i) => i < recipe.lines.length).sort((a, b) => a - b);
   const request: RewriteRequest = {
-    lines: recipe.lines.map(({ input, foodId, grams }) => ({ input, ...(foodId !== undefined && { foodId }), ...(grams !== undefined && { grams }) })),
+    lines: requestLines(recipe.lines),
     servings: recipe.servings,
     targets: cleanTargets(values.targets),
     volumeTolerancePct: values.volumeTolerancePct,
@@ -180,8 +185,8 @@ export function requestSignature(request: unknown): string {
 }
 
 /** The recipe the rewrite is for: the lines as sent and the servings. */
-export function recipeSignature(recipe: { lines: LineInput[]; servings: number }): string {
-  return requestSignature({ lines: recipe.lines, servings: recipe.servings });
+export function recipeSignature(recipe: { lines?: LineInput[]; servings: number }): string {
+  return requestSignature({ lines: requestLines(recipe.lines ?? []), servings: recipe.servings });
 }
 
 /**

@@ -1,0 +1,104 @@
+import { Badge } from '../../../components/ui/badge';
+import { Button } from '../../../components/ui/button';
+import { formatWeight } from '../../../lib/format';
+import type { UnitSystem } from '../../../lib/user';
+import type { RewriteChange } from '../rewrite-types';
+import { MINUS, orderedChanges } from '../rewrite-words';
+
+export interface ChangeListProps {
+  changes: RewriteChange[];
+  /** the recipe lines as written, to name each line the way the cook wrote it */
+  lineInputs: string[];
+  unitSystem: UnitSystem;
+  /** leave a swapped-in food out and rewrite again */
+  onExclude?: (food: { id: number; name: string }) => void;
+  excluding?: boolean;
+}
+
+function gramsChange(change: RewriteChange, unitSystem: UnitSystem) {
+  const diff = change.gramsAfter - change.gramsBefore;
+  const sign = diff >= 0 ? '+' : MINUS;
+  return (
+    <span className="tabular-nums">
+      {formatWeight(change.gramsBefore, unitSystem)} <span aria-hidden="true">→</span>
+      <span className="sr-only">to</span> <strong>{formatWeight(change.gramsAfter, unitSystem)}</strong>{' '}
+      <span className="whitespace-nowrap text-ink-soft">
+        ({sign}
+        {formatWeight(Math.abs(diff), 'metric')})
+      </span>
+    </span>
+  );
+}
+
+function ChangeItem({ change, lineInput, unitSystem, onExclude, excluding }: { change: RewriteChange; lineInput: string | undefined } & Omit<ChangeListProps, 'changes' | 'lineInputs'>) {
+  return (
+    <li className="flex flex-col gap-2 rounded-field border border-line bg-surface p-4">
+      <div className="flex flex-wrap items-center gap-2">
+        <Badge tone={change.swapped ? 'ember' : 'neutral'}>{change.swapped ? 'Swap' : 'Amount'}</Badge>
+        <span className="text-sm font-semibold text-ink-soft">
+          Line {change.line + 1}
+          {lineInput && <>: “{lineInput}”</>}
+        </span>
+      </div>
+      {change.swapped ? (
+        <p className="font-bold">
+          {change.from.name} <span aria-hidden="true">→</span>
+          <span className="sr-only">becomes</span> <span className="text-herb-800">{change.to.name}</span>
+        </p>
+      ) : (
+        <p className="font-bold">{change.to.name}</p>
+      )}
+      <p>{gramsChange(change, unitSystem)}</p>
+      <p className="text-ink-soft">{change.reason}</p>
+      {change.approvedBy && (
+        <div className="flex flex-col gap-1 rounded-field bg-herb-50 px-3 py-2 text-herb-900">
+          <p className="flex flex-wrap items-center gap-2 text-sm font-bold">
+            <Badge tone="herb">Coach approved</Badge> {change.approvedBy}
+          </p>
+          {change.note && <p className="text-sm">Note: {change.note}</p>}
+        </div>
+      )}
+      {change.swapped && onExclude && (
+        <Button variant="quiet" size="sm" className="self-start underline underline-offset-2" disabled={excluding} onClick={() => onExclude({ id: change.to.id, name: change.to.name })}>
+          Don’t use {change.to.name}; rewrite again
+        </Button>
+      )}
+    </li>
+  );
+}
+
+/** What the rewrite changed and why: swaps first, then amounts, each in recipe order. */
+export function ChangeList({ changes, lineInputs, unitSystem, onExclude, excluding }: ChangeListProps) {
+  const ordered = orderedChanges(changes);
+  const swaps = ordered.filter((c) => c.swapped);
+  const amounts = ordered.filter((c) => !c.swapped);
+  if (ordered.length === 0) {
+    return <p className="text-ink-soft">The dish already meets these targets as written; nothing needs to change.</p>;
+  }
+  const group = (title: string, list: RewriteChange[]) =>
+    list.length > 0 && (
+      <section className="flex flex-col gap-3" aria-label={title}>
+        <h4 className="font-extrabold">
+          {title} <span className="font-semibold text-ink-soft">({list.length})</span>
+        </h4>
+        <ol className="flex flex-col gap-3">
+          {list.map((change) => (
+            <ChangeItem
+              key={`${change.line}-${change.to.id}`}
+              change={change}
+              lineInput={lineInputs[change.line]}
+              unitSystem={unitSystem}
+              onExclude={onExclude}
+              excluding={excluding}
+            />
+          ))}
+        </ol>
+      </section>
+    );
+  return (
+    <div className="flex flex-col gap-5">
+      {group('Swaps', swaps)}
+      {group('Amounts adjusted', amounts)}
+    </div>
+  );
+}

@@ -1,0 +1,86 @@
+import type { RewriteRequest } from '../../../../shared/schemas/rewrite';
+import { Alert } from '../../../components/ui/alert';
+import { Card } from '../../../components/ui/card';
+import { formatNumber } from '../../../lib/format';
+import type { UnitSystem } from '../../../lib/user';
+import { DEFAULT_VOLUME_TOLERANCE_PCT } from '../rewrite-form';
+import type { RewriteAnswer, SkippedLine } from '../rewrite-types';
+import { LazyBeforeAfterChart as BeforeAfterChart } from './lazy-before-after-chart';
+import { BeforeAfterHeadline, BeforeAfterNumbers } from './before-after-numbers';
+import { ChangeList } from './change-list';
+
+export interface RewriteResultProps {
+  request: RewriteRequest;
+  answer: RewriteAnswer;
+  unitSystem: UnitSystem;
+  onExclude: (food: { id: number; name: string }) => void;
+  busy: boolean;
+}
+
+function solverNote(answer: RewriteAnswer): string {
+  const { ms, solves, provenOptimal } = answer.solver;
+  const time = ms < 1000 ? `${formatNumber(ms, 0)} ms` : `${formatNumber(ms / 1000, 1)} s`;
+  const tries = `${solves} solve${solves === 1 ? '' : 's'}`;
+  return provenOptimal
+    ? `Solved in ${time} (${tries}); no better plan exists for the goal you chose.`
+    : `Solved in ${time} (${tries}). The solver ran out of time and kept the best plan it had found; a better one may exist.`;
+}
+
+export function SkippedLinesNote({ skipped }: { skipped: SkippedLine[] }) {
+  if (skipped.length === 0) return null;
+  return (
+    <Alert tone="caution" title="Left as written" announce={false}>
+      <ul className="list-inside list-disc">
+        {skipped.map((s) => (
+          <li key={s.line}>
+            Line {s.line + 1}, “{s.input}”: {s.reason}.
+          </li>
+        ))}
+      </ul>
+    </Alert>
+  );
+}
+
+/** The rewrite beside the dish as written: headline figures, the chart, every number and every change. */
+export function RewriteResult({ request, answer, unitSystem, onExclude, busy }: RewriteResultProps) {
+  const { before, after } = answer;
+  const lineInputs = (request.lines ?? []).map((l) => l.input);
+  return (
+    <div className="flex flex-col gap-6">
+      <BeforeAfterHeadline
+        before={before.perServing}
+        after={after.perServing}
+        beforeVolumeMl={before.volumeMl}
+        afterVolumeMl={after.volumeMl}
+        volumeTolerancePct={request.volumeTolerancePct ?? DEFAULT_VOLUME_TOLERANCE_PCT}
+        unitSystem={unitSystem}
+      />
+      <Card title="Before and after" headingLevel={3} description={`Per serving; one serving is 1/${request.servings} of the dish.`}>
+        <BeforeAfterChart
+          before={before.perServing}
+          after={after.perServing}
+          afterLabel="Rewritten"
+          kcalMax={request.targets.kcalMax}
+          proteinMinG={request.targets.proteinMinG}
+        />
+      </Card>
+      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
+        <Card title="The numbers" headingLevel={3} description="Rounded for display; ▲ helps the dish, ▼ works against it.">
+          <BeforeAfterNumbers
+            before={before.perServing}
+            after={after.perServing}
+            afterLabel="Rewritten"
+            targets={request.targets}
+            caption="Nutrients per serving as written and rewritten, with the change"
+          />
+        </Card>
+        <Card title="What changes, and why" headingLevel={3} description={solverNote(answer)}>
+          <div className="flex flex-col gap-4">
+            <SkippedLinesNote skipped={answer.skippedLines} />
+            <ChangeList changes={answer.changes} lineInputs={lineInputs} unitSystem={unitSystem} onExclude={onExclude} excluding={busy} />
+          </div>
+        </Card>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,63 @@
+/** What "Save to my recipe book" sends: the recipe as written (version 1) and the rewrite (version 2). */
+import type { LineInput } from '../../../shared/schemas/analyze';
+import type { RewriteRequest, TargetsInput } from '../../../shared/schemas/rewrite';
+import { orderedChanges } from './rewrite-words';
+import type { RewriteAnswer } from './rewrite-types';
+
+export type WrittenLine = { input: string; foodId?: number; grams?: number };
+export type RewrittenLine = { food: { id: number; name: string }; grams: number } | { input: string };
+
+export interface RewriteDraft {
+  title: string;
+  servings: number;
+  /** the lines as the cook wrote them, pinned to the foods and grams the rewrite started from */
+  originalLines: WrittenLine[];
+  /** the rewrite in recipe order; a line it could not read is kept as written */
+  rewrittenLines: RewrittenLine[];
+  targets: TargetsInput;
+  /** one line for the recipe's timeline */
+  note: string;
+}
+
+const NOTE_MAX = 2_000;
+
+/** The food a version 1 line keeps: the one the rewrite read it as, so the book shows the same "before". */
+export function originalLinesOf(request: RewriteRequest, answer: RewriteAnswer): WrittenLine[] {
+  const read = new Map(answer.before.lines.map((l) => [l.index, l]));
+  return (request.lines ?? []).map((line: LineInput, index) => {
+    const plan = read.get(index);
+    return plan ? { input: line.input, foodId: plan.food.id, grams: plan.grams } : { input: line.input };
+  });
+}
+
+export function rewrittenLinesOf(answer: RewriteAnswer): RewrittenLine[] {
+  const rows: { index: number; line: RewrittenLine }[] = [
+    ...answer.after.lines.map((l) => ({ index: l.index, line: { food: { id: l.food.id, name: l.food.name }, grams: l.grams } })),
+    ...answer.skippedLines.map((s) => ({ index: s.line, line: { input: s.input } })),
+  ];
+  return rows.sort((a, b) => a.index - b.index).map((r) => r.line);
+}
+
+/** "Lighter rewrite: Beef, ground … → Ground turkey …; less pasta." */
+export function rewriteNote(answer: RewriteAnswer): string {
+  const changes = orderedChanges(answer.changes);
+  const swaps = changes.filter((c) => c.swapped).map((c) => `${c.from.name} → ${c.to.name}`);
+  const amounts = changes.filter((c) => !c.swapped).length;
+  const parts = [
+    swaps.length > 0 ? swaps.join('; ') : 'No swaps',
+    amounts > 0 ? `${amounts} amount${amounts === 1 ? '' : 's'} adjusted` : '',
+  ].filter(Boolean);
+  const note = `Lighter rewrite: ${parts.join('. ')}.`;
+  return note.length > NOTE_MAX ? `${note.slice(0, NOTE_MAX - 1)}…` : note;
+}
+
+export function rewriteDraft(title: string, request: RewriteRequest, answer: RewriteAnswer): RewriteDraft {
+  return {
+    title: title.trim(),
+    servings: request.servings,
+    originalLines: originalLinesOf(request, answer),
+    rewrittenLines: rewrittenLinesOf(answer),
+    targets: request.targets,
+    note: rewriteNote(answer),
+  };
+}
