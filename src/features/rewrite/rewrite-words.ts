@@ -6,6 +6,9 @@ import { ML_PER_CUP } from '../../../shared/units';
 import { formatKcal, formatMacroG, formatMg, formatNumber } from '../../lib/format';
 import type { UnitSystem } from '../../lib/user';
 import type { RewriteChange } from './rewrite-types';
+import { difference, NUTRIENT_GOALS, type Difference } from '../../lib/nutrient-difference';
+
+export type { Difference };
 
 export const MINUS = '\u2212';
 
@@ -39,40 +42,8 @@ export function purposeWords(purpose: ChangePurpose): string {
   return `the ${targetRowOf(purpose).label}`;
 }
 
-/** Which way a nutrient should move in a lighter, more filling dish; carbohydrate is left to the cook. */
-const GOALS: Record<keyof Nutrients, 'lower' | 'higher' | 'either'> = {
-  kcal: 'lower',
-  proteinG: 'higher',
-  carbsG: 'either',
-  fiberG: 'higher',
-  sugarG: 'lower',
-  fatG: 'lower',
-  satFatG: 'lower',
-  sodiumMg: 'lower',
-};
-
-export type DifferenceTone = 'better' | 'worse' | 'neutral';
-
-export interface Difference {
-  /** "+9 g", "−106 kcal", or "No change" when it rounds to nothing */
-  text: string;
-  /** spoken beside the sign: "more", "less" */
-  direction: 'more' | 'less' | 'same';
-  tone: DifferenceTone;
-}
-
-/** after − before as shown: its sign, and whether it helps a lighter, more filling dish. */
-export function difference(before: number, after: number, format: (v: number) => string, goal: 'lower' | 'higher' | 'either'): Difference {
-  const diff = after - before;
-  const shown = format(Math.abs(diff));
-  if (shown === format(0)) return { text: 'No change', direction: 'same', tone: 'neutral' };
-  const direction = diff > 0 ? 'more' : 'less';
-  const tone: DifferenceTone = goal === 'either' ? 'neutral' : (goal === 'lower') === (direction === 'less') ? 'better' : 'worse';
-  return { text: `${direction === 'more' ? '+' : MINUS}${shown}`, direction, tone };
-}
-
 export function nutrientDifference(key: keyof Nutrients, before: Nutrients, after: Nutrients): Difference {
-  return difference(before[key], after[key], (v) => formatNutrient(key, v), GOALS[key]);
+  return difference(before[key], after[key], (v) => formatNutrient(key, v), NUTRIENT_GOALS[key]);
 }
 
 export function densityDifference(before: Nutrients, after: Nutrients): Difference {

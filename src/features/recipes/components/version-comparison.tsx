@@ -7,7 +7,7 @@ import { cx } from '../../../lib/cx';
 import { formatGrams, formatKcal, formatMacroG, formatNumber } from '../../../lib/format';
 import { compareLines, rewrittenInPlace, type LineChange, type LineChangeKind } from '../compare-lines';
 import { formatWhen } from '../format-when';
-import { nutrientChange, type ChangeTone, type NutrientChange } from '../nutrient-change';
+import { nutrientChange, type DifferenceTone as ChangeTone, type Difference as NutrientChange } from '../../../lib/nutrient-difference';
 import { versionKindLabel, versionNote } from '../version-words';
 
 const MINUS = '\u2212';
