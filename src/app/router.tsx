@@ -23,6 +23,9 @@ export const routes: RouteObject[] = [
           { path: 'foods/:id', lazy: () => import('./routes/food-detail').then((m) => ({ Component: m.FoodDetailPage })) },
           { path: 'sign-in', lazy: () => import('./routes/sign-in').then((m) => ({ Component: m.SignInPage })) },
           { path: 'sign-up', lazy: () => import('./routes/sign-up').then((m) => ({ Component: m.SignUpPage })) },
+          { path: 'forgot-password', lazy: () => import('./routes/forgot-password').then((m) => ({ Component: m.ForgotPasswordPage })) },
+          { path: 'reset-password/:token', lazy: () => import('./routes/reset-password').then((m) => ({ Component: m.ResetPasswordPage })) },
+          { path: 'invitations/:token', lazy: () => import('./routes/invitation').then((m) => ({ Component: m.InvitationPage })) },
           {
             element: <RequireAuth />,
             children: [
@@ -72,6 +75,11 @@ export const routes: RouteObject[] = [
             element: <RequireRole roles={PAGE_ROLES.clients} />,
             children: [
               { path: 'clients', lazy: () => import('./routes/clients').then((m) => ({ Component: m.ClientsPage })) },
+              { path: 'clients/:id', lazy: () => import('./routes/client-detail').then((m) => ({ Component: m.ClientDetailPage })) },
+              {
+                path: 'clients/:id/versions/:recipeId/:number',
+                lazy: () => import('./routes/client-version').then((m) => ({ Component: m.ClientVersionPage })),
+              },
             ],
           },
           {

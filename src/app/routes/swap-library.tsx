@@ -1,15 +1,20 @@
-import { EmptyState } from '../../components/ui/empty-state';
 import { Page } from '../../components/ui/page';
+import { SwapLibrary } from '../../features/coach/components/swap-library';
+import type { RenderFoodSearch } from '../../features/coach/food-search-slot';
+import { FoodCombobox } from '../../features/foods/components/food-combobox';
+import { roleWords } from '../../features/foods/food-words';
+
+const renderFoodSearch: RenderFoodSearch = ({ label, hint, onChoose, onCancel, autoFocus }) => (
+  <FoodCombobox label={label} hint={hint} onChoose={onChoose} onCancel={onCancel} autoFocus={autoFocus} placeholder="Search the catalogue, e.g. mozzarella" />
+);
 
 export function SwapLibraryPage() {
   return (
     <Page
       title="Swap library"
-      description="The swaps you stand behind: a lighter food in place of another, or for a whole role such as melting cheese, each with a cooking note like 'bake 5 minutes longer for melt'. Publish the library and your clients' rewrites try your swaps first."
+      description="The swaps you stand behind: a lighter food in place of another, or for a whole role such as melting cheese, each with a cooking note like “bake 5 minutes longer for melt”. Publish a swap and your clients' rewrites try it first."
     >
-      <EmptyState title="No approved swaps yet">
-        Add a swap by choosing the food it replaces and the one to use instead, with a note on how to cook it.
-      </EmptyState>
+      <SwapLibrary renderFoodSearch={renderFoodSearch} roleLabel={roleWords} />
     </Page>
   );
 }

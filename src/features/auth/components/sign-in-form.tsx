@@ -1,6 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { Link } from 'react-router';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { PasswordField } from '../../../components/ui/password-field';
@@ -41,6 +42,9 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (user: User) => void })
         {...register('email')}
       />
       <PasswordField label="Password" autoComplete="current-password" error={errors.password?.message} {...register('password')} />
+      <Link to="/forgot-password" className="-mt-3 self-end text-sm font-bold text-accent-strong underline underline-offset-4">
+        Forgot your password?
+      </Link>
       <Button type="submit" size="lg" fullWidth loading={signIn.isPending} loadingLabel="Signing in…">
         Sign in
       </Button>

@@ -1,0 +1,90 @@
+import { useId, useState, type FormEvent } from 'react';
+import { Alert } from '../../../components/ui/alert';
+import { Badge } from '../../../components/ui/badge';
+import { Button } from '../../../components/ui/button';
+import { TextAreaField } from '../../../components/ui/field';
+import { ErrorState } from '../../../components/ui/error-state';
+import { LoadingState } from '../../../components/ui/spinner';
+import { errorMessage, isApiError } from '../../../lib/api-client';
+import { useAddVersionComment, useVersionComments } from '../api/version-comments';
+import { formatDayTime } from '../when';
+
+const MAX_COMMENT_CHARS = 4_000;
+
+/** The comments on one saved version, oldest first, and a box to add one. */
+export function CommentThread({ recipeId, number, viewerId, clientName }: { recipeId: number; number: number; viewerId: number; clientName: string }) {
+  const id = useId();
+  const comments = useVersionComments(recipeId, number);
+  const add = useAddVersionComment(recipeId, number);
+  const [body, setBody] = useState('');
+  const [error, setError] = useState<string | undefined>();
+
+  function submit(event: FormEvent) {
+    event.preventDefault();
+    const text = body.trim();
+    if (!text) {
+      setError('Write a comment first.');
+      return;
+    }
+    setError(undefined);
+    add.mutate(text, {
+      onSuccess: () => setBody(''),
+      onError: (e) => setError(isApiError(e) ? e.fieldErrors.body : undefined),
+    });
+  }
+
+  return (
+    <div className="flex flex-col gap-5">
+      {comments.isPending ? (
+        <LoadingState label="Loading the comments…" />
+      ) : comments.isError ? (
+        <ErrorState title="The comments didn't load" error={comments.error} onRetry={() => void comments.refetch()} retrying={comments.isFetching} />
+      ) : comments.data.length === 0 ? (
+        <p className="text-ink-soft">No comments yet. {clientName} sees what you write here on the recipe's page.</p>
+      ) : (
+        <ol aria-label="Comments" className="flex flex-col gap-3">
+          {comments.data.map((comment) => {
+            const mine = comment.author.id === viewerId;
+            return (
+              <li key={comment.id} className={mine ? 'rounded-card border border-ember-200 bg-ember-50 p-4 sm:ml-10' : 'rounded-card border border-line bg-surface p-4 sm:mr-10'}>
+                <p className="flex flex-wrap items-center gap-x-2 gap-y-1 text-sm">
+                  <span className="font-bold text-ink">{mine ? 'You' : comment.author.displayName}</span>
+                  {comment.author.role === 'coach' && <Badge tone="ember">Coach</Badge>}
+                  <time dateTime={comment.createdAt} className="text-ink-soft">
+                    {formatDayTime(comment.createdAt)}
+                  </time>
+                </p>
+                <p className="mt-1.5 whitespace-pre-line text-ink">{comment.body}</p>
+              </li>
+            );
+          })}
+        </ol>
+      )}
+      <form onSubmit={submit} noValidate className="flex flex-col gap-3" aria-labelledby={`${id}-label`}>
+        <span id={`${id}-label`} className="sr-only">
+          Leave a comment
+        </span>
+        {add.isError && !error && (
+          <Alert tone="danger" title="The comment wasn't posted" assertive>
+            {errorMessage(add.error)}
+          </Alert>
+        )}
+        <TextAreaField
+          label="Your comment"
+          hint={`Only ${clientName} and you can read it.`}
+          maxLength={MAX_COMMENT_CHARS}
+          value={body}
+          onChange={(e) => {
+            setBody(e.target.value);
+            if (error) setError(undefined);
+          }}
+          error={error}
+          className="min-h-28"
+        />
+        <Button type="submit" loading={add.isPending} loadingLabel="Posting…" className="self-start">
+          Post the comment
+        </Button>
+      </form>
+    </div>
+  );
+}

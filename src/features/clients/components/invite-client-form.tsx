@@ -1,0 +1,63 @@
+import { useState, type FormEvent } from 'react';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { TextField } from '../../../components/ui/field';
+import { errorMessage, isApiError } from '../../../lib/api-client';
+import { useInviteClient } from '../api/clients';
+
+// The shape the server accepts is checked there; this catches the obvious slips before sending.
+const LOOKS_LIKE_EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
+
+/** Sends an invitation e-mail with a link the client opens to link with the coach. */
+export function InviteClientForm({ onInvited }: { onInvited: (email: string) => void }) {
+  const invite = useInviteClient();
+  const [email, setEmail] = useState('');
+  const [error, setError] = useState<string | undefined>();
+
+  function submit(event: FormEvent) {
+    event.preventDefault();
+    const address = email.trim().toLowerCase();
+    if (!LOOKS_LIKE_EMAIL.test(address)) {
+      setError('Enter the e-mail address your client signs in with, like name@example.com.');
+      return;
+    }
+    setError(undefined);
+    invite.mutate(address, {
+      onSuccess: () => {
+        setEmail('');
+        onInvited(address);
+      },
+      onError: (e) => setError(isApiError(e) ? (e.fieldErrors.email ?? undefined) : undefined),
+    });
+  }
+
+  const formError = invite.isError && !error ? errorMessage(invite.error) : null;
+
+  return (
+    <form onSubmit={submit} noValidate className="flex flex-col gap-4">
+      {formError && (
+        <Alert tone={isApiError(invite.error) && invite.error.status === 409 ? 'caution' : 'danger'} title="No invitation was sent" assertive>
+          {formError}
+        </Alert>
+      )}
+      <TextField
+          label="Client's e-mail"
+          hint="They get a link that works for 7 days. They sign in with a cook account — or create one — and accept."
+          type="email"
+          inputMode="email"
+          autoComplete="off"
+          autoCapitalize="none"
+          spellCheck={false}
+          value={email}
+          onChange={(e) => {
+            setEmail(e.target.value);
+            if (error) setError(undefined);
+          }}
+          error={error}
+        />
+      <Button type="submit" loading={invite.isPending} loadingLabel="Sending…" className="self-start">
+        Send the invitation
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,117 @@
+import type { VersionDetail } from '../../../../shared/schemas/recipes';
+import { NutrientTable } from '../../../components/ui/nutrient-table';
+import { Stat } from '../../../components/ui/stat';
+import { formatKcal, formatMacroG, formatMg, formatNumber, formatProteinDensity, formatWeight } from '../../../lib/format';
+import type { UnitSystem } from '../../../lib/user';
+import type { ClientTargets } from '../api/clients';
+import { meetsPerMeal } from '../targets-form';
+
+function TargetsUsed({ targets }: { targets: NonNullable<VersionDetail['targets']> }) {
+  const parts = [
+    `protein at least ${formatMacroG(targets.proteinMinG)}`,
+    `energy at most ${formatKcal(targets.kcalMax)}`,
+    targets.fiberMinG !== undefined && `fiber at least ${formatMacroG(targets.fiberMinG)}`,
+    targets.fatMaxG !== undefined && `fat at most ${formatMacroG(targets.fatMaxG)}`,
+    targets.satFatMaxG !== undefined && `saturated fat at most ${formatMacroG(targets.satFatMaxG)}`,
+    targets.sodiumMaxMg !== undefined && `sodium at most ${formatMg(targets.sodiumMaxMg)}`,
+    targets.sugarMaxG !== undefined && `sugars at most ${formatMacroG(targets.sugarMaxG)}`,
+  ].filter(Boolean);
+  return <p className="text-ink-soft">Rewritten for, per serving: {parts.join(', ')}.</p>;
+}
+
+/** One saved version, read-only: its lines with weights and figures, and its nutrients per serving. */
+export function VersionReview({ version, unitSystem, clientTargets }: { version: VersionDetail; unitSystem: UnitSystem; clientTargets: ClientTargets | null }) {
+  const per = version.perServing;
+  const density = per.kcal > 0 ? (per.proteinG * 100) / per.kcal : null;
+  const servings = version.servings;
+  const meets = meetsPerMeal(per, clientTargets);
+
+  return (
+    <div className="flex flex-col gap-6">
+      <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+        <Stat
+          label="Energy / serving"
+          value={formatKcal(per.kcal)}
+          note={clientTargets ? `target at most ${formatKcal(clientTargets.perMeal.kcal)}` : undefined}
+          className={meets && !meets.kcal ? 'border-ember-300 bg-ember-50' : undefined}
+        />
+        <Stat
+          label="Protein / serving"
+          value={formatMacroG(per.proteinG)}
+          note={clientTargets ? `target at least ${formatMacroG(clientTargets.perMeal.proteinG)}` : undefined}
+          className={meets && !meets.protein ? 'border-honey-200 bg-honey-50' : undefined}
+        />
+        <Stat label="Protein density" value={density === null ? '—' : formatNumber(density, 1)} note="g protein / 100 kcal" />
+        <Stat label="Servings" value={formatNumber(servings)} note={`${formatWeight(version.lines.reduce((sum, l) => sum + l.grams, 0) / Math.max(1, servings), unitSystem)} each`} />
+      </dl>
+
+      {version.note && (
+        <p className="rounded-field border-l-4 border-accent bg-oat-100 px-4 py-3 text-ink">
+          <span className="font-bold">Their note: </span>
+          {version.note}
+        </p>
+      )}
+      {version.targets && <TargetsUsed targets={version.targets} />}
+
+      <section aria-labelledby="review-lines" className="flex flex-col gap-3">
+        <h2 id="review-lines" className="text-xl font-extrabold text-ink">
+          Ingredients
+        </h2>
+        <div className="hidden overflow-x-auto rounded-card border border-line bg-surface sm:block">
+          <table className="w-full border-collapse text-base">
+            <caption className="sr-only">Ingredient lines with weight, energy and protein for the whole dish</caption>
+            <thead>
+              <tr className="border-b border-line bg-oat-100 text-left">
+                <th scope="col" className="px-4 py-2.5 font-bold">Line</th>
+                <th scope="col" className="px-4 py-2.5 font-bold">Food</th>
+                <th scope="col" className="px-4 py-2.5 text-right font-bold">Weight</th>
+                <th scope="col" className="px-4 py-2.5 text-right font-bold">Energy</th>
+                <th scope="col" className="px-4 py-2.5 text-right font-bold">Protein</th>
+              </tr>
+            </thead>
+            <tbody>
+              {version.lines.map((line, index) => (
+                <tr key={index} className="border-b border-line align-top last:border-b-0 even:bg-oat-50">
+                  <th scope="row" className="px-4 py-2.5 text-left font-semibold">{line.input}</th>
+                  <td className="px-4 py-2.5 text-ink-soft">{line.foodName ?? 'Not matched'}</td>
+                  <td className="px-4 py-2.5 text-right whitespace-nowrap tabular-nums">{formatWeight(line.grams, unitSystem)}</td>
+                  <td className="px-4 py-2.5 text-right whitespace-nowrap tabular-nums">{formatKcal(line.nutrients.kcal)}</td>
+                  <td className="px-4 py-2.5 text-right whitespace-nowrap tabular-nums">{formatMacroG(line.nutrients.proteinG)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+        <ul aria-label="Ingredient lines" className="flex flex-col gap-2 sm:hidden">
+          {version.lines.map((line, index) => (
+            <li key={index} className="flex flex-col gap-0.5 rounded-field border border-line bg-surface px-3.5 py-2.5">
+              <span className="font-semibold text-ink">{line.input}</span>
+              {line.foodName && line.foodName !== line.input && <span className="text-sm text-ink-soft">{line.foodName}</span>}
+              <span className="text-sm tabular-nums">
+                {formatWeight(line.grams, unitSystem)} · {formatKcal(line.nutrients.kcal)} · {formatMacroG(line.nutrients.proteinG)} protein
+              </span>
+            </li>
+          ))}
+        </ul>
+        <p className="text-sm text-ink-soft">Weights and figures are for the whole dish.</p>
+      </section>
+
+      <section aria-labelledby="review-nutrients" className="flex flex-col gap-3">
+        <h2 id="review-nutrients" className="text-xl font-extrabold text-ink">
+          Nutrients
+        </h2>
+        <div className="rounded-card border border-line bg-surface p-4 sm:max-w-lg">
+          <NutrientTable
+            caption="Nutrients per serving and for the whole dish"
+            captionHidden
+            columns={[
+              { key: 'serving', header: 'Per serving', values: per },
+              { key: 'dish', header: `Whole dish (${servings})`, values: version.totals },
+            ]}
+          />
+        </div>
+        {density !== null && <p className="text-sm text-ink-soft">{formatProteinDensity(density)} per serving.</p>}
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,32 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { ClientTargets } from '../../../../shared/schemas/coaching';
+import { api } from '../../../lib/api-client';
+import { queryKeys } from '../../../lib/query-keys';
+import { coachKeys } from '../coach-keys';
+import type { Swap } from './swaps';
+
+export interface MyCoach {
+  coach: { id: number; displayName: string } | null;
+  targets: ClientTargets | null;
+  swaps: Swap[];
+}
+
+export function useMyCoach() {
+  return useQuery({
+    queryKey: coachKeys.myCoach,
+    queryFn: ({ signal }) => api.get<MyCoach>('/api/coach', { signal }),
+  });
+}
+
+/** Leaving changes who the person is linked to: the session user, their coach and their swaps. */
+export function useLeaveCoach() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => api.delete<void>('/api/coach'),
+    onSuccess: () => {
+      queryClient.setQueryData<MyCoach>(coachKeys.myCoach, { coach: null, targets: null, swaps: [] });
+      void queryClient.invalidateQueries({ queryKey: queryKeys.auth.me });
+      void queryClient.invalidateQueries({ queryKey: coachKeys.swaps });
+    },
+  });
+}

@@ -1,0 +1,14 @@
+import { Badge } from '../../../components/ui/badge';
+
+export function SwapTags({ tags }: { tags: string[] }) {
+  if (tags.length === 0) return null;
+  return (
+    <ul aria-label="Tags" className="flex flex-wrap gap-1.5">
+      {tags.map((tag) => (
+        <li key={tag}>
+          <Badge>{tag}</Badge>
+        </li>
+      ))}
+    </ul>
+  );
+}
