@@ -25,7 +25,7 @@ describe('navItemsFor', () => {
   const labels = (u: User | null) => navItemsFor(u).map((i) => i.label);
   it('shows each role its own pages', () => {
     expect(labels(null)).toEqual(['Kitchen', 'Foods']);
-    expect(labels(user('cook'))).toEqual(['Kitchen', 'Foods', 'Recipe book', 'My coach']);
+    expect(labels(user('cook'))).toEqual(['Kitchen', 'Foods', 'Recipe book', 'Shopping', 'My coach']);
     expect(labels(user('coach'))).toEqual(['Kitchen', 'Foods', 'Swap library', 'Clients']);
     expect(labels(user('admin'))).toEqual(['Kitchen', 'Foods', 'People', 'Outbox']);
   });
