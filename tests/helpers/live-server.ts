@@ -15,5 +15,5 @@ export async function startLiveServer() {
   config.limits = { ...config.limits, loginFailuresPer15Min: 1000, signupsPerHour: 1000 };
   const running = await startServer(config);
   const { port } = running.server.address() as AddressInfo;
-  return { url: `http://127.0.0.1:${port}`, close: running.close };
+  return { url: `http://127.0.0.1:${port}`, outbox: () => running.mail.mail?.outbox?.() ?? [], close: running.close };
 }
