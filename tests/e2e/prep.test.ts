@@ -1,25 +1,15 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot } from '../helpers/browser';
-import { startLiveServer } from '../helpers/live-server';
+import { describe, expect, it } from 'vitest';
+import { screenshot } from '../helpers/browser';
+import { useLiveBrowser } from '../helpers/e2e-harness';
 import { signInAs } from '../helpers/e2e-session';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startLiveServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const live = useLiveBrowser();
 
 describe('batch prep in the browser', () => {
   it('opens prep for a saved version, changes portions, and shows the print view', async () => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-    await signInAs(page, server.url, 'cook');
-    await page.goto(`${server.url}/recipes`);
+    const page = await live.browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await signInAs(page, live.server.url, 'cook');
+    await page.goto(`${live.server.url}/recipes`);
     await page.getByRole('link', { name: 'Weeknight baked ziti' }).first().click();
     await page.getByRole('link', { name: /Batch prep/ }).click();
     await expect.poll(() => page.url()).toMatch(/\/versions\/\d+\/prep/);

@@ -1,20 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot } from '../helpers/browser';
-import { startLiveServer } from '../helpers/live-server';
+import { describe, expect, it } from 'vitest';
+import { screenshot } from '../helpers/browser';
+import { useLiveBrowser } from '../helpers/e2e-harness';
 import { signIn } from '../helpers/e2e-session';
 import { uniqueEmail } from '../helpers/test-app';
 
-let server: Awaited<ReturnType<typeof startLiveServer>>;
-let browser: Browser;
-beforeAll(async () => {
-  server = await startLiveServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const live = useLiveBrowser();
 
 const LASAGNA = `9 oz lasagna noodles
 1 lb ground beef
@@ -27,10 +17,10 @@ const LASAGNA = `9 oz lasagna noodles
 
 describe('paste, rewrite, save, compare', () => {
   it('takes a pasted lasagna through a rewrite into the recipe book and compares the two versions', async () => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    const page = await live.browser.newPage({ viewport: { width: 1280, height: 900 } });
     // A fresh cook with no coach, so the defaults are +30 % protein and −20 % kcal.
     const email = uniqueEmail('e2e-rewrite');
-    await page.goto(`${server.url}/sign-up`);
+    await page.goto(`${live.server.url}/sign-up`);
     await page.getByRole('textbox', { name: 'Display name' }).fill('Tamsin Oakley');
     await page.getByRole('textbox', { name: 'E-mail' }).fill(email);
     await page.getByLabel('Password', { exact: true }).fill('a sturdy kitchen password');
@@ -38,7 +28,7 @@ describe('paste, rewrite, save, compare', () => {
     await page.getByRole('button', { name: /create/i }).click();
     await expect.poll(() => page.getByRole('button', { name: /account menu/i }).isVisible(), { timeout: 15_000 }).toBe(true);
 
-    await page.goto(`${server.url}/`);
+    await page.goto(`${live.server.url}/`);
     await page.getByRole('textbox', { name: /ingredients/i }).fill(LASAGNA);
     await page.getByRole('spinbutton').first().fill('8');
     await page.getByRole('button', { name: /analyse/i }).click();
@@ -54,7 +44,7 @@ describe('paste, rewrite, save, compare', () => {
     await page.getByRole('button', { name: 'Save to my recipe book' }).click();
     await expect.poll(() => page.url(), { timeout: 15_000 }).toMatch(/\/recipes\/\d+/);
 
-    await page.goto(`${server.url}/recipes`);
+    await page.goto(`${live.server.url}/recipes`);
     await expect.poll(() => page.getByRole('link', { name: 'Lighter lasagna' }).first().isVisible(), { timeout: 10_000 }).toBe(true);
     await page.getByRole('link', { name: 'Lighter lasagna' }).first().click();
     await page.getByRole('link', { name: /Compare/ }).first().click();
