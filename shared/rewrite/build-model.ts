@@ -1,133 +1,56 @@
 import { nutrientsForGrams, sumNutrients, zeroNutrients, type NutrientKey, type Nutrients } from '../nutrition';
-import { keptCandidates } from './candidate-pruning';
+import { closestWeights, lineSlots, type ClosestWeights, type LineSlot } from './line-slots';
 import { FEASIBILITY_TOLERANCE, type LpModel } from './lp-model';
-import { activeTargets, type TargetRow } from './targets';
+import { resolveOptions, type ResolvedOptions } from './rewrite-options';
+import { activeTargets } from './targets';
 import type { Candidate, RewriteLine, RewriteObjective, RewriteOptions, TargetName, Targets } from './types';
 
-export interface ResolvedOptions {
-  /** t as a fraction */
-  volumeTolerance: number;
-  /** a as a fraction */
-  lineTolerance: number;
-  maxSwaps: number | null;
-  objective: RewriteObjective;
-  explain: boolean;
-  timeoutMs: number;
-  pruneDominated: boolean;
-}
-
-export function resolveOptions(options: RewriteOptions = {}): ResolvedOptions {
-  const pct = (v: number | undefined, fallback: number, name: string) => {
-    const value = v ?? fallback;
-    if (!Number.isFinite(value) || value < 0 || value >= 100) throw new RangeError(`${name} must be in [0, 100)`);
-    return value / 100;
-  };
-  const maxSwaps = options.maxSwaps ?? null;
-  if (maxSwaps !== null && (!Number.isInteger(maxSwaps) || maxSwaps < 0)) {
-    throw new RangeError('maxSwaps must be a whole number ≥ 0');
-  }
-  return {
-    volumeTolerance: pct(options.volumeTolerancePct, 10, 'volumeTolerancePct'),
-    lineTolerance: pct(options.lineTolerancePct, 25, 'lineTolerancePct'),
-    maxSwaps,
-    objective: options.objective ?? 'closest',
-    explain: options.explain ?? false,
-    timeoutMs: options.timeoutMs ?? 2000,
-    pruneDominated: options.pruneDominated ?? true,
-  };
-}
-
-/**
- * One candidate of a free line as it appears in the model. Amounts are written as deviations from
- * the recipe as written (see buildModel): grams = centre − below + above, for a swap only when y = 1.
- */
-export interface CandidateSlot {
-  candidate: Candidate;
-  /** index in line.candidates */
-  position: number;
-  original: boolean;
-  /** binary "this swap is made"; the original has none (it is kept when no swap is made) */
-  y?: string;
-  /** grams below the band centre */
-  below: string;
-  /** grams above the band centre */
-  above: string;
-  /** ρ used in the model; the original food's comes from the line itself (grams ÷ volumeMl) */
-  densityGPerMl: number;
-  /** V_i, or V_i·r for an approved swap with volume ratio r */
-  centreMl: number;
-  centreGrams: number;
-  /** a·centreGrams: how far grams may go either way */
-  spanGrams: number;
-  /** rank for pruning: 0 original, 1 approved swap, 2 unapproved swap */
-  rank: number;
-}
-
-export interface LineSlot {
-  line: RewriteLine;
-  /** position in the lines array */
-  position: number;
-  original: Candidate;
-  /** fixed lines (locked, no grams or no volume) are constants, with no slots */
-  fixed: boolean;
-  /** the original's slot first */
-  slots: CandidateSlot[];
-  /** candidates left out because another one is never worse */
-  pruned: Candidate[];
-}
-
-/** What the builder wants optimised; the last four serve the infeasibility analysis. */
+/** What the builder wants optimised; the last three serve the infeasibility analysis. */
 export type ModelObjective =
   | { kind: RewriteObjective }
-  | { kind: 'slack' }
   | { kind: 'nutrient'; key: NutrientKey; sense: 'min' | 'max' }
   | { kind: 'swaps' }
   | { kind: 'dish-volume' };
 
-export type TargetMode = 'hard' | 'elastic' | 'off';
-
 export interface ModelVariant {
   objective: ModelObjective;
-  /** how each target enters (default hard) */
-  targetModes?: Partial<Record<TargetName, TargetMode>>;
+  /**
+   * Targets as hard rows (absent) or elastic: every target then has slack, priced at
+   * `penaltyFactor` × the objective's scale per unit of relative shortfall, on top of the objective.
+   */
+  penaltyFactor?: number;
+  /** targets left out of the model */
+  dropTargets?: TargetName[];
   /** overrides options.maxSwaps; null for no limit */
   maxSwaps?: number | null;
-  /** overrides a target's value */
-  targetValues?: Partial<Targets>;
-  /** an extra row bounding the weighted slack (second stage of the elastic solve) */
-  slackCap?: number;
 }
 
-export interface ClosestWeights {
-  /** cost of an unapproved swap */
-  swap: number;
-  /** cost of a coach-approved swap */
-  approvedSwap: number;
-  /** cost per mL of volume away from the band centre */
-  perMl: number;
+/** Slack of one elastic target: shortfall − repair + extra (see buildModel). */
+export interface TargetSlack {
+  /** how far the written recipe misses the target (per serving, ≥ 0) */
+  shortfall: number;
+  /** how much of that shortfall the plan makes good (≤ shortfall); absent when it is 0 */
+  repair?: string;
+  /** shortfall beyond the written recipe's */
+  extra: string;
+  /** 1 / target: slack is priced in relative units */
+  weight: number;
+}
+
+export function slackOf(slack: TargetSlack, values: Record<string, number>): number {
+  return slack.shortfall - (slack.repair ? (values[slack.repair] ?? 0) : 0) + (values[slack.extra] ?? 0);
 }
 
 export interface RewriteModelMeta {
   lines: LineSlot[];
-  servings: number;
-  targets: Targets;
-  options: ResolvedOptions;
-  variant: ModelVariant;
-  /** per-serving nutrients of the recipe as written */
-  writtenPerServing: Nutrients;
-  /** per-serving nutrients of the fixed lines */
-  constantPerServing: Nutrients;
-  constantVolumeMl: number;
   /** ΣV over all lines */
   originalVolumeMl: number;
   volumeRangeMl: [number, number];
   weights: ClosestWeights;
-  /** slack variable per elastic target, with its weight */
-  slack: Partial<Record<TargetName, { variable: string; weight: number }>>;
+  /** slack per elastic target */
+  slack: Partial<Record<TargetName, TargetSlack>>;
   /** the objective's constant part, so that solver objective + constant = the plan's value */
   objectiveConstant: number;
-  /** the dish-volume deviation variable ('dish-volume' objective) */
-  dishDeviation?: string;
 }
 
 export interface BuiltRewriteModel {
@@ -135,89 +58,37 @@ export interface BuiltRewriteModel {
   variables: RewriteModelMeta;
 }
 
-const SWAP_COST = 1000;
-
-function originalOf(line: RewriteLine): Candidate {
-  const originals = line.candidates.filter((c) => c.original);
-  if (originals.length !== 1) throw new RangeError(`line ${line.index}: needs exactly one original candidate`);
-  return originals[0];
-}
-
-function isFixed(line: RewriteLine): boolean {
-  return line.locked || !(line.grams > 0) || !(line.volumeMl > 0);
-}
-
-function usable(c: Candidate): boolean {
-  return c.original === true || (Number.isFinite(c.densityGPerMl) && c.densityGPerMl > 0);
-}
+/** the first slack price tried by solveElastic */
+export const FIRST_PENALTY_FACTOR = 1e4;
 
 /**
- * Weights of the 'closest' objective, chosen so that its order is lexicographic:
- * fewest swaps first, then approved swaps before unapproved ones, then the smallest volume changes.
- * With at most k swaps possible, an approved swap costs S − δ and an unapproved one S, δ = S/(k+1),
- * and all volume change together costs at most δ/2 (λ = δ / (2·Dmax), Dmax the largest total
- * deviation the line bands allow). Then n swaps always cost less than n + 1 (n·S + δ/2 < (n+1)(S − δ)
- * for n < k), at equal swap counts one more approved swap saves δ, more than any volume term.
- * (Fixed costs like 1000 and 600 would not do this: four approved swaps, 2400, would beat three
- * unapproved ones, 3000.)
+ * A typical size of the objective's values, so that a slack penalty can be set relative to it:
+ * the swap costs for 'closest', the recipe's own value of the nutrient optimised, the swap count,
+ * the dish volume.
  */
-function closestWeights(lines: LineSlot[], maxSwaps: number | null, lineTolerance: number): ClosestWeights {
-  const swappable = lines.filter((l) => l.slots.some((s) => !s.original)).length;
-  const k = Math.max(1, Math.min(swappable, maxSwaps ?? swappable));
-  const delta = SWAP_COST / (k + 1);
-  const maxDeviation = lines.reduce(
-    (sum, l) => sum + Math.max(0, ...l.slots.map((s) => lineTolerance * s.centreMl)),
-    0,
-  );
-  return { swap: SWAP_COST, approvedSwap: SWAP_COST - delta, perMl: maxDeviation > 0 ? delta / (2 * maxDeviation) : 0 };
-}
-
-function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: readonly TargetRow[]): LineSlot[] {
-  const a = options.lineTolerance;
-  return lines.map((line, position) => {
-    const original = originalOf(line);
-    if (isFixed(line)) return { line, position, original, fixed: true, slots: [], pruned: [] };
-    const all = line.candidates.flatMap((candidate, j): CandidateSlot[] => {
-      if (!usable(candidate)) return [];
-      const isOriginal = candidate.original === true;
-      const densityGPerMl = isOriginal ? line.grams / line.volumeMl : candidate.densityGPerMl;
-      const ratio = !isOriginal && candidate.approved?.volumeRatio ? candidate.approved.volumeRatio : 1;
-      const centreMl = line.volumeMl * ratio;
-      const centreGrams = isOriginal ? line.grams : centreMl * densityGPerMl;
-      return [
-        {
-          candidate,
-          position: j,
-          original: isOriginal,
-          y: isOriginal ? undefined : `y_${position}_${j}`,
-          below: `b_${position}_${j}`,
-          above: `h_${position}_${j}`,
-          densityGPerMl,
-          centreMl,
-          centreGrams,
-          spanGrams: a * centreGrams,
-          rank: isOriginal ? 0 : candidate.approved ? 1 : 2,
-        },
-      ];
-    });
-    all.sort((p, q) => p.rank - q.rank);
-    const keep = options.pruneDominated
-      ? new Set(
-          keptCandidates(
-            all.map((s) => ({ ...s, per100g: s.candidate.per100g, cost: s.rank })),
-            rows,
-          ),
-        )
-      : new Set(all.map((_, i) => i));
-    return {
-      line,
-      position,
-      original,
-      fixed: false,
-      slots: all.filter((_, i) => keep.has(i)),
-      pruned: all.filter((_, i) => !keep.has(i)).map((s) => s.candidate),
-    };
-  });
+function objectiveScale(
+  objective: ModelObjective,
+  weights: ClosestWeights,
+  maxSwaps: number | null,
+  lines: LineSlot[],
+  written: Nutrients,
+  volumeMl: number,
+): number {
+  const swappable = lines.filter((l) => l.slots.length > 1).length;
+  switch (objective.kind) {
+    case 'closest':
+      return weights.swap * (Math.min(swappable, maxSwaps ?? swappable) + 1);
+    case 'max-protein':
+      return Math.max(1, written.proteinG);
+    case 'min-kcal':
+      return Math.max(1, written.kcal);
+    case 'nutrient':
+      return Math.max(1, written[objective.key]);
+    case 'swaps':
+      return swappable + 1;
+    case 'dish-volume':
+      return Math.max(1, volumeMl);
+  }
 }
 
 /**
@@ -247,17 +118,24 @@ function add(column: Record<string, number>, row: string, value: number): void {
  *
  * The product's model, for free line i and candidate c: binary y_ic, grams x_ic, Σ_c y_ic = 1,
  * (1−a)·C_ic·ρ_c·y_ic ≤ x_ic ≤ (1+a)·C_ic·ρ_c·y_ic (C_ic = V_i, or V_i·r for an approved swap),
- * dish volume Σ x_ic/ρ_c within (1 ± t)·ΣV, per-serving targets, Σ_{c swapped} y_ic ≤ M.
- * Here it is the same model after two exact substitutions:
- *  - y_i,original = 1 − Σ_{c≠original} y_ic, so "one food per line" is Σ_{c≠original} y_ic ≤ 1;
- *  - x_ic = centre_ic·y_ic − b_ic + h_ic with 0 ≤ b_ic, h_ic ≤ a·centre_ic·y_ic (grams below and
- *    above the band centre); for the original centre = the written grams and y the keep-indicator.
- * |volume change| of a line is (b + h)/ρ at the optimum of 'closest' (which pays for both, so never
- * uses both at once): the deviation variables d_ic of the product's model are not needed.
- * Why: javascript-lp-solver starts its simplex at all zeros; from x = 0 its phase 1 has to repair
- * every line's Σy = 1 and the dish volume at once and, on these degenerate rows, its pivoting
- * can blow up numerically. From the written recipe only the unmet targets need repair.
- * Fixed lines (locked, no grams, no volume) are constants on the right-hand sides.
+ * dish volume Σ x_ic/ρ_c within (1 ± t)·ΣV, per-serving targets, Σ_{c swapped} y_ic ≤ M, and for
+ * 'closest' the volume deviations |x_ic/ρ_c − C_ic·y_ic|. Here it is the same model after exact
+ * substitutions:
+ *  - y_i,orig = 1 − Σ_{c swapped} y_ic (Σ_c y_ic = 1 becomes Σ_{swapped} y_ic ≤ 1, implied by the
+ *    next row when a > 0);
+ *  - x_i,orig = g_i·y_i,orig − b_i + h_i with b_i, h_i ≤ a·g_i·y_i,orig (g_i the written grams): rows
+ *    b_i + a·g_i·Σ y ≤ a·g_i and h_i + a·g_i·Σ y ≤ a·g_i;
+ *  - x_ic = (1−a)·C_ic·ρ_c·y_ic + z_ic with z_ic ≤ 2a·C_ic·ρ_c·y_ic, one row per swap;
+ *  - for 'closest', one deviation per line, dev_i ≥ ±[(h_i − b_i)/ρ_orig + Σ_c (z_ic/ρ_c − a·C_ic·y_ic)]:
+ *    at most one food of a line is used, so this is that food's |volume − centre|.
+ * Every nutrient, volume and objective row then reads as "change from the written recipe", the
+ * written values moving to the right-hand sides. Fixed lines are constants there too.
+ * Why: javascript-lp-solver keeps a dense tableau, has no variable bounds (each bound is a row) and
+ * starts its simplex at all zeros. Starting from x = 0 its phase 1 had to repair every line's
+ * Σy = 1 and the dish volume at once and, on these degenerate rows, its pivoting blew up
+ * numerically; from the written recipe only unmet targets need repair, and with elastic targets
+ * (below) nothing does. Fewer rows and columns (K + 2 rows and 2K + 2 columns a line for K swaps,
+ * instead of 4K + 5 and 3K + 3) make each pivot cheaper.
  */
 export function buildModel(
   lines: RewriteLine[],
@@ -267,23 +145,18 @@ export function buildModel(
   variant: ModelVariant = { objective: { kind: options.objective } },
 ): BuiltRewriteModel {
   if (!(servings > 0)) throw new RangeError('servings must be > 0');
-  const effectiveTargets: Targets = { ...targets, ...variant.targetValues };
-  const active = activeTargets(effectiveTargets);
-  const modes = variant.targetModes ?? {};
+  const objective = variant.objective;
+  const dropped = new Set(variant.dropTargets ?? []);
+  const active = activeTargets(targets).filter(({ row }) => !dropped.has(row.target));
+  const elastic = variant.penaltyFactor !== undefined;
   const slots = lineSlots(lines, options, activeTargets(targets).map((t) => t.row));
   const maxSwaps = variant.maxSwaps === undefined ? options.maxSwaps : variant.maxSwaps;
   const weights = closestWeights(slots, maxSwaps, options.lineTolerance);
-  const objective = variant.objective;
 
   const writtenTotals = sumNutrients(slots.map((l) => nutrientsForGrams(l.original.per100g, Math.max(0, l.line.grams))));
   const writtenPerServing = zeroNutrients();
   for (const k of Object.keys(writtenTotals) as NutrientKey[]) writtenPerServing[k] = writtenTotals[k] / servings;
-  const fixedTotals = sumNutrients(slots.filter((l) => l.fixed).map((l) => nutrientsForGrams(l.original.per100g, Math.max(0, l.line.grams))));
-  const constantPerServing = zeroNutrients();
-  for (const k of Object.keys(fixedTotals) as NutrientKey[]) constantPerServing[k] = fixedTotals[k] / servings;
-  const volumeOf = (l: LineSlot) => (l.line.volumeMl > 0 ? l.line.volumeMl : 0);
-  const constantVolumeMl = slots.filter((l) => l.fixed).reduce((s, l) => s + volumeOf(l), 0);
-  const originalVolumeMl = slots.reduce((s, l) => s + volumeOf(l), 0);
+  const originalVolumeMl = slots.reduce((s, l) => s + Math.max(0, l.line.volumeMl), 0);
   const t = options.volumeTolerance;
   const volumeRangeMl: [number, number] = [(1 - t) * originalVolumeMl, (1 + t) * originalVolumeMl];
 
@@ -296,8 +169,8 @@ export function buildModel(
   const objectiveKey: NutrientKey | null =
     objective.kind === 'max-protein' ? 'proteinG' : objective.kind === 'min-kcal' ? 'kcal' : objective.kind === 'nutrient' ? objective.key : null;
   const maximise = objective.kind === 'max-protein' || (objective.kind === 'nutrient' && objective.sense === 'max');
-  const objectiveConstant = objectiveKey ? writtenPerServing[objectiveKey] : 0;
-  const rowsInModel = active.filter(({ row }) => (modes[row.target] ?? 'hard') !== 'off').map((t) => t.row);
+  let objectiveConstant = objectiveKey ? writtenPerServing[objectiveKey] : 0;
+  const rowsInModel = active.map((t) => t.row);
   const volumeRows = objective.kind === 'dish-volume' ? ['vol_over', 'vol_under'] : ['volume'];
 
   /** Adds the effect of `grams` more of a food (per gram of it) to a column: nutrients, volume, objective. */
@@ -309,49 +182,56 @@ export function buildModel(
 
   for (const l of free) {
     const [orig, ...swaps] = l.slots;
-    const pick = `pick_${l.position}`;
-    const keepBelow = `kb_${l.position}`;
-    const keepAbove = `ka_${l.position}`;
-    // b, h ≤ a·written·y_original = a·written·(1 − Σ y_swap)
+    const p = l.position;
+    const keepBelow = `kb_${p}`;
+    const keepAbove = `ka_${p}`;
     constraints[keepBelow] = { max: orig.spanGrams };
     constraints[keepAbove] = { max: orig.spanGrams };
+    if (swaps.length && !(orig.spanGrams > 0)) constraints[`pick_${p}`] = { max: 1 };
+    const deviationUp = `dvu_${p}`;
+    const deviationDown = `dvd_${p}`;
+    const closest = objective.kind === 'closest';
+    if (closest) {
+      // dev − Δ ≥ 0 and dev + Δ ≥ 0, Δ the line's volume away from its centre
+      constraints[deviationUp] = { min: 0 };
+      constraints[deviationDown] = { min: 0 };
+      variables[`dev_${p}`] = { [deviationUp]: 1, [deviationDown]: 1, [OBJ]: weights.perMl };
+    }
     const below: Record<string, number> = { [keepBelow]: 1 };
     const above: Record<string, number> = { [keepAbove]: 1 };
     addFood(below, orig.candidate, orig.densityGPerMl, -1);
     addFood(above, orig.candidate, orig.densityGPerMl, 1);
-    if (objective.kind === 'closest') {
-      add(below, OBJ, weights.perMl / orig.densityGPerMl);
-      add(above, OBJ, weights.perMl / orig.densityGPerMl);
+    if (closest) {
+      add(below, deviationUp, 1 / orig.densityGPerMl);
+      add(below, deviationDown, -1 / orig.densityGPerMl);
+      add(above, deviationUp, -1 / orig.densityGPerMl);
+      add(above, deviationDown, 1 / orig.densityGPerMl);
     }
-    variables[orig.below] = below;
+    variables[orig.below!] = below;
     variables[orig.above] = above;
-    if (swaps.length) constraints[pick] = { max: 1 };
 
     for (const s of swaps) {
-      const y: Record<string, number> = { [pick]: 1, [keepBelow]: orig.spanGrams, [keepAbove]: orig.spanGrams };
-      // choosing the swap removes the written food and adds the swap at its centre
+      const y: Record<string, number> = { [keepBelow]: orig.spanGrams, [keepAbove]: orig.spanGrams };
+      if (constraints[`pick_${p}`]) add(y, `pick_${p}`, 1);
+      // making the swap removes the written food and adds the swap at the low end of its band
       addFood(y, orig.candidate, orig.densityGPerMl, -orig.centreGrams);
-      addFood(y, s.candidate, s.densityGPerMl, s.centreGrams);
+      addFood(y, s.candidate, s.densityGPerMl, s.centreGrams - s.spanGrams);
       add(y, 'swaps', 1);
       if (objective.kind === 'swaps') add(y, OBJ, 1);
-      if (objective.kind === 'closest') add(y, OBJ, s.candidate.approved ? weights.approvedSwap : weights.swap);
-      const sb = `sb_${l.position}_${s.position}`;
-      const sa = `sa_${l.position}_${s.position}`;
-      add(y, sb, -s.spanGrams);
-      add(y, sa, -s.spanGrams);
-      constraints[sb] = { max: 0 };
-      constraints[sa] = { max: 0 };
-      const b: Record<string, number> = { [sb]: 1 };
-      const h: Record<string, number> = { [sa]: 1 };
-      addFood(b, s.candidate, s.densityGPerMl, -1);
-      addFood(h, s.candidate, s.densityGPerMl, 1);
-      if (objective.kind === 'closest') {
-        add(b, OBJ, weights.perMl / s.densityGPerMl);
-        add(h, OBJ, weights.perMl / s.densityGPerMl);
+      const band = `zb_${p}_${s.position}`;
+      add(y, band, -2 * s.spanGrams);
+      constraints[band] = { max: 0 };
+      const z: Record<string, number> = { [band]: 1 };
+      addFood(z, s.candidate, s.densityGPerMl, 1);
+      if (closest) {
+        add(y, OBJ, s.candidate.approved ? weights.approvedSwap : weights.swap);
+        add(y, deviationUp, s.spanGrams / s.densityGPerMl);
+        add(y, deviationDown, -s.spanGrams / s.densityGPerMl);
+        add(z, deviationUp, -1 / s.densityGPerMl);
+        add(z, deviationDown, 1 / s.densityGPerMl);
       }
       variables[s.y!] = y;
-      variables[s.below] = b;
-      variables[s.above] = h;
+      variables[s.above] = z;
       ints[s.y!] = 1;
     }
   }
@@ -368,22 +248,36 @@ export function buildModel(
   }
 
   const slack: RewriteModelMeta['slack'] = {};
+  const penalty = elastic ? variant.penaltyFactor! * objectiveScale(objective, weights, maxSwaps, slots, writtenPerServing, originalVolumeMl) : 0;
+  // In a maximisation the objective rewards, so slack enters with the opposite sign.
+  const price = maximise ? -penalty : penalty;
   for (const { row, value } of active) {
-    const mode = modes[row.target] ?? 'hard';
-    if (mode === 'off') continue;
     const rhs = value - writtenPerServing[row.key];
-    constraints[row.row] = row.sense === 'min' ? { min: rhs } : { max: rhs };
-    if (mode === 'elastic') {
-      // Slack in relative units, so a 10 % protein shortfall weighs as much as 10 % too many kcal.
-      const variable = `s_${row.row}`;
-      const weight = 1 / Math.max(Math.abs(value), 1);
-      slack[row.target] = { variable, weight };
-      variables[variable] = { [row.row]: row.sense === 'min' ? 1 : -1 };
-      if (objective.kind === 'slack') variables[variable][OBJ] = weight;
-      if (variant.slackCap !== undefined) variables[variable].slack_cap = weight;
+    const floor = row.sense === 'min';
+    if (!elastic) {
+      constraints[row.row] = floor ? { min: rhs } : { max: rhs };
+      continue;
     }
+    // Slack s = shortfall − repair + extra with 0 ≤ repair ≤ shortfall, extra ≥ 0, where the shortfall
+    // is the written recipe's: the all-zero start (the written recipe, repair = extra = 0) then
+    // meets every row, and the simplex needs no phase 1 at the root.
+    const shortfall = Math.max(0, floor ? rhs : -rhs);
+    const weight = 1 / Math.max(Math.abs(value), 1);
+    const sign = floor ? 1 : -1;
+    constraints[row.row] = floor ? { min: rhs - shortfall } : { max: rhs + shortfall };
+    const extra = `s_${row.row}`;
+    variables[extra] = { [row.row]: sign, [OBJ]: price * weight };
+    const entry: TargetSlack = { shortfall, extra, weight };
+    if (shortfall > 0) {
+      const repair = `r_${row.row}`;
+      const cap = `rcap_${row.row}`;
+      constraints[cap] = { max: shortfall };
+      variables[repair] = { [row.row]: -sign, [cap]: 1, [OBJ]: -price * weight };
+      entry.repair = repair;
+      objectiveConstant += price * weight * shortfall;
+    }
+    slack[row.target] = entry;
   }
-  if (variant.slackCap !== undefined) constraints.slack_cap = { max: variant.slackCap };
 
   const anySwap = Object.keys(ints).length > 0;
   if (maxSwaps !== null && anySwap && objective.kind !== 'swaps') constraints.swaps = { max: maxSwaps };
@@ -396,31 +290,26 @@ export function buildModel(
   const model: LpModel = { optimize: OBJ, opType: maximise ? 'max' : 'min', constraints, variables, ints };
   return {
     model,
-    variables: {
-      lines: slots,
-      servings,
-      targets: effectiveTargets,
-      options,
-      variant,
-      writtenPerServing,
-      constantPerServing,
-      constantVolumeMl,
-      originalVolumeMl,
-      volumeRangeMl,
-      weights,
-      slack,
-      objectiveConstant,
-      dishDeviation: objective.kind === 'dish-volume' && free.length ? 'dish_dev' : undefined,
-    },
+    variables: { lines: slots, originalVolumeMl, volumeRangeMl, weights, slack, objectiveConstant },
   };
 }
 
-/** The model solved for `solveRewrite`, with a map to read its solution back. */
+/**
+ * The model `solveRewrite` solves first, and a map to read its solution back: the rewrite with
+ * elastic targets (slack priced at FIRST_PENALTY_FACTOR × the objective's scale), whose optimum is
+ * the product's model's whenever all slack comes out 0. `{ hardTargets: true }` gives the product's
+ * model itself, targets as hard rows (what the HiGHS cross-check solves).
+ */
 export function buildRewriteModel(
   lines: RewriteLine[],
   targets: Targets,
   servings: number,
   options: RewriteOptions = {},
+  form: { hardTargets?: boolean } = {},
 ): BuiltRewriteModel {
-  return buildModel(lines, targets, servings, resolveOptions(options));
+  const resolved = resolveOptions(options);
+  return buildModel(lines, targets, servings, resolved, {
+    objective: { kind: resolved.objective },
+    penaltyFactor: form.hardTargets ? undefined : FIRST_PENALTY_FACTOR,
+  });
 }

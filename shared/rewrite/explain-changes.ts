@@ -29,8 +29,13 @@ export function explainChanges(
   targets: Targets,
   servings: number,
   objective: RewriteObjective,
+  volumeRangeMl: [number, number],
 ): Change[] {
   const rows = activeTargets(targets).map((t) => t.row);
+  // When the dish ends at a volume bound, a line that moves the other way helps keep it there.
+  const dishVolume = after.reduce((s, c) => s + c.volumeMl, 0);
+  const atCeiling = dishVolume >= volumeRangeMl[1] * (1 - 1e-6);
+  const atFloor = dishVolume <= volumeRangeMl[0] * (1 + 1e-6);
   const changes: Change[] = [];
   before.forEach((was, i) => {
     const now = after[i];
@@ -52,18 +57,21 @@ export function explainChanges(
       }
     }
     const volumeDelta = now.volumeMl - was.volumeMl;
-    if (serves.length === 0) serves.push(Math.abs(volumeDelta) >= 0.5 ? 'volume' : 'objective');
+    const keepsVolume = (atCeiling && volumeDelta <= -0.5) || (atFloor && volumeDelta >= 0.5);
+    if (keepsVolume || (serves.length === 0 && Math.abs(volumeDelta) >= 0.5)) serves.push('volume');
+    if (serves.length === 0) serves.push('objective');
     const what = swapped
       ? `Swap ${was.food.name} for ${now.food.name}`
       : `${now.grams > was.grams ? 'More' : 'Less'} ${was.food.name}`;
     const amounts = `(${grams(was.grams)} → ${grams(now.grams)})`;
     const per = effects.length ? `: ${listed(effects)} per serving` : '';
+    const volumeNote = `keep the dish's volume (${signed(volumeDelta, 0, 'mL')})`;
     const why =
-      serves[0] === 'volume'
-        ? `keeps the dish's volume (${signed(volumeDelta, 0, 'mL')})`
-        : serves[0] === 'objective'
-          ? `for the ${objective === 'closest' ? 'closest match' : objective === 'max-protein' ? 'most protein' : 'fewest calories'}`
-          : `for ${listed(servedLabels)}`;
+      serves[0] === 'objective'
+        ? `for the ${objective === 'closest' ? 'closest match' : objective === 'max-protein' ? 'most protein' : 'fewest calories'}`
+        : servedLabels.length === 0
+          ? `to ${volumeNote}`
+          : `for ${listed(servedLabels)}${serves.includes('volume') ? ` and to ${volumeNote}` : ''}`;
     const approval = swapped ? now.food.approved : undefined;
     const change: Change = {
       line: was.line.line.index,

@@ -1,8 +1,8 @@
-import { divideNutrients, nutrientsForGrams, sumNutrients, type Nutrients } from '../nutrition';
-import { buildModel, type BuiltRewriteModel, type ModelVariant, type ResolvedOptions, type TargetMode } from './build-model';
-import type { LpModel } from './lp-model';
-import { solvedChoices, type PlanChoice } from './read-plan';
-import { hasSolution, RewriteSolverError, type SolveLog } from './solve-log';
+import type { Nutrients } from '../nutrition';
+import type { ResolvedOptions } from './rewrite-options';
+import { solveElastic, type ElasticOutcome } from './elastic-solve';
+import { planOf, solvedChoices, type PlanChoice } from './read-plan';
+import type { SolveLog } from './solve-log';
 import { activeTargets, type TargetRow } from './targets';
 import type { RewriteLine, Suggestion, TargetName, Targets } from './types';
 
@@ -12,9 +12,6 @@ export interface InfeasibilityReport {
   perServing: Nutrients;
   binding: TargetName[];
   suggestions: Suggestion[];
-  /** the model that produced `closest` */
-  model: LpModel;
-  objectiveValue: number;
 }
 
 /** Solver values land within ~1e-9 of a true optimum; snap before rounding so 520.0000001 stays 520. */
@@ -29,100 +26,88 @@ function roundOutward(v: number, row: TargetRow): number {
   return Number(rounded.toFixed(step < 1 ? 1 : 0));
 }
 
-function perServingOf(choices: PlanChoice[], servings: number): Nutrients {
-  return divideNutrients(sumNutrients(choices.map((c) => nutrientsForGrams(c.food.per100g, c.grams))), servings);
-}
-
 function misses(perServing: Nutrients, row: TargetRow, value: number): boolean {
   const tol = 1e-6 * Math.max(1, Math.abs(value));
   return row.sense === 'min' ? perServing[row.key] < value - tol : perServing[row.key] > value + tol;
 }
 
-function formatValue(v: number, row: TargetRow): string {
+function relaxation(row: TargetRow, value: number): string {
+  return `${row.sense === 'min' ? 'lower' : 'raise'} the ${row.label} to ${formatTargetValue(value, row)}`;
+}
+
+export function formatTargetValue(v: number, row: TargetRow): string {
   const digits = row.unit === 'g' && Math.abs(v) < 10 ? 1 : 0;
   return `${v.toFixed(digits)}${row.unit === 'kcal' ? ' kcal' : ` ${row.unit}`}`;
 }
 
 /**
- * When the targets cannot all be met: an elastic re-solve (slack on every target, weighted by the
- * target's size, minimised), then the cook's own objective among the plans with that least slack.
- * Each suggestion comes from a re-solve of the hard model with one thing let go: the swap limit
- * (fewest swaps that reach every target), one binding target (the best value of it reachable with
- * the others met), or the dish-volume tolerance (the least volume change that reaches every target).
+ * When the targets cannot all be met. `elastic` is the plan with the least weighted slack (best
+ * for the cook's objective among those). Each suggestion comes from a re-solve with one thing let
+ * go, the other targets still met: the swap limit (the fewest swaps that reach every target), one
+ * binding target (the best value of it reachable), or the dish-volume tolerance (the least volume
+ * change that reaches every target). A re-solve that cannot meet the other targets gives none.
+ * With several targets binding, one more suggestion moves them all to what the closest plan reaches.
  */
 export function analyseInfeasible(
   lines: RewriteLine[],
   targets: Targets,
   servings: number,
   options: ResolvedOptions,
+  elastic: ElasticOutcome,
   log: SolveLog,
 ): InfeasibilityReport {
   const active = activeTargets(targets);
-  const elasticModes: Partial<Record<TargetName, TargetMode>> = {};
-  for (const { row } of active) elasticModes[row.target] = 'elastic';
-  const build = (variant: ModelVariant): BuiltRewriteModel => buildModel(lines, targets, servings, options, variant);
-
-  const slackStage = build({ objective: { kind: 'slack' }, targetModes: elasticModes });
-  const leastSlack = log.solve(slackStage.model);
-  if (!hasSolution(leastSlack)) {
-    throw new RewriteSolverError('the elastic re-solve found no plan', leastSlack.status);
-  }
-  // Second stage: keep the slack at its least (up to solver precision), then the cook's objective.
-  const cap = leastSlack.objective * (1 + 1e-7) + 1e-9;
-  let chosen = build({ objective: { kind: options.objective }, targetModes: elasticModes, slackCap: cap });
-  let solution = log.solve(chosen.model);
-  if (!hasSolution(solution)) {
-    chosen = slackStage;
-    solution = leastSlack;
-  }
-  const closest = solvedChoices(chosen.variables, solution.values);
-  const perServing = perServingOf(closest, servings);
+  const closest = solvedChoices(elastic.built.variables, elastic.solution.values);
+  const { perServing } = planOf(closest, servings);
   const binding = active.filter(({ row, value }) => misses(perServing, row, value)).map(({ row }) => row.target);
+  // Each suggestion gets at most a quarter of the budget; a plan found when time runs out still
+  // shows the change works (for the swap count it may then not be the fewest).
+  const resolve = (variant: Parameters<typeof solveElastic>[4]) => {
+    const outcome = solveElastic(lines, targets, servings, options, variant, log, log.budgetMs / 4);
+    return outcome?.meetsTargets ? outcome : null;
+  };
 
   const suggestions: Suggestion[] = [];
-  const maxSwaps = options.maxSwaps;
-  if (maxSwaps !== null) {
-    const fewest = log.solve(build({ objective: { kind: 'swaps' }, maxSwaps: null }).model);
-    if (hasSolution(fewest)) {
-      const needed = Math.round(fewest.objective);
-      if (needed > maxSwaps) {
-        const more = needed - maxSwaps;
-        suggestions.push({
-          kind: 'more-swaps',
-          value: needed,
-          message: `allow ${more} more swap${more === 1 ? '' : 's'} (${needed} in all)`,
-        });
+  if (options.maxSwaps !== null) {
+    const fewest = resolve({ objective: { kind: 'swaps' }, maxSwaps: null });
+    if (fewest) {
+      const needed = solvedChoices(fewest.built.variables, fewest.solution.values).filter((c) => c.food !== c.line.original).length;
+      if (needed > options.maxSwaps) {
+        const more = needed - options.maxSwaps;
+        suggestions.push({ kind: 'more-swaps', value: needed, message: `allow ${more} more swap${more === 1 ? '' : 's'} (${needed} in all)` });
       }
     }
   }
   for (const target of binding) {
     const { row } = active.find((t) => t.row.target === target)!;
-    const variant: ModelVariant = {
+    const best = resolve({
       objective: { kind: 'nutrient', key: row.key, sense: row.sense === 'min' ? 'max' : 'min' },
-      targetModes: { [target]: 'off' },
-    };
-    const built = build(variant);
-    const best = log.solve(built.model);
-    if (!hasSolution(best)) continue;
-    const reachable = roundOutward(best.objective + built.variables.objectiveConstant, row);
-    const verb = row.sense === 'min' ? 'lower' : 'raise';
-    suggestions.push({
-      kind: 'target',
-      target,
-      value: reachable,
-      message: `${verb} the ${row.label} to ${formatValue(reachable, row)}`,
+      dropTargets: [target],
     });
+    if (!best) continue;
+    const reached = planOf(solvedChoices(best.built.variables, best.solution.values), servings).perServing[row.key];
+    const value = roundOutward(reached, row);
+    suggestions.push({ kind: 'target', target, value, message: relaxation(row, value) });
   }
-  const volumeBuilt = build({ objective: { kind: 'dish-volume' } });
-  if (volumeBuilt.variables.originalVolumeMl > 0) {
-    const least = log.solve(volumeBuilt.model);
-    if (hasSolution(least)) {
-      const pct = Math.ceil(snap((100 * least.objective) / volumeBuilt.variables.originalVolumeMl));
-      if (pct > options.volumeTolerance * 100 + 1e-9) {
-        suggestions.push({ kind: 'volume-tolerance', value: pct, message: `let the dish's volume change by up to ${pct} %` });
-      }
+  if (binding.length > 1) {
+    // The closest plan itself meets every target moved to what it reaches (rounded outward).
+    const moved: Partial<Targets> = {};
+    const parts: string[] = [];
+    for (const target of binding) {
+      const { row } = active.find((t) => t.row.target === target)!;
+      moved[target] = roundOutward(perServing[row.key], row);
+      parts.push(relaxation(row, moved[target]!));
+    }
+    suggestions.push({ kind: 'targets', value: binding.length, targets: moved, message: `${parts.slice(0, -1).join(', ')} and ${parts[parts.length - 1]}` });
+  }
+  const volume = resolve({ objective: { kind: 'dish-volume' } });
+  const written = elastic.built.variables.originalVolumeMl;
+  if (volume && written > 0) {
+    const changed = planOf(solvedChoices(volume.built.variables, volume.solution.values), servings).volumeMl;
+    const pct = Math.ceil(snap((100 * Math.abs(changed - written)) / written));
+    if (pct > options.volumeTolerance * 100 + 1e-9) {
+      suggestions.push({ kind: 'volume-tolerance', value: pct, message: `let the dish's volume change by up to ${pct} %` });
     }
   }
-
-  return { closest, perServing, binding, suggestions, model: chosen.model, objectiveValue: solution.objective };
+  return { closest, perServing, binding, suggestions };
 }

@@ -150,3 +150,33 @@ export function fixVariables(
   if (unrestricted && Object.keys(unrestricted).length) out.unrestricted = unrestricted as LpModel['unrestricted'];
   return { model: out, objectiveConstant, violations };
 }
+
+/**
+ * The same model with every row divided by its largest coefficient magnitude: the same solutions
+ * and objective, but a different pivoting path for javascript-lp-solver (used when it cycles).
+ */
+export function scaleRows(model: LpModel): LpModel {
+  const objective = objectiveAttribute(model);
+  const scale: Record<string, number> = {};
+  for (const column of Object.values(model.variables)) {
+    for (const [row, c] of Object.entries(column)) {
+      if (row !== objective && row in model.constraints) scale[row] = Math.max(scale[row] ?? 0, Math.abs(c));
+    }
+  }
+  const factor = (row: string) => (scale[row] > 0 ? scale[row] : 1);
+  const constraints: LpModel['constraints'] = {};
+  for (const name of Object.keys(model.constraints)) {
+    const { min, max } = constraintBounds(model, name);
+    const f = factor(name);
+    constraints[name] = min !== undefined && min === max ? { equal: min / f } : { min: min === undefined ? undefined : min / f, max: max === undefined ? undefined : max / f };
+    if (min === undefined) delete (constraints[name] as LpBound).min;
+    if (max === undefined) delete (constraints[name] as LpBound).max;
+  }
+  const variables: LpModel['variables'] = {};
+  for (const [variable, column] of Object.entries(model.variables)) {
+    variables[variable] = Object.fromEntries(
+      Object.entries(column).map(([row, c]) => [row, row !== objective && row in model.constraints ? c / factor(row) : c]),
+    );
+  }
+  return { ...model, constraints, variables };
+}

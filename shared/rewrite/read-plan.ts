@@ -1,5 +1,6 @@
 import { divideNutrients, nutrientsForGrams, sumNutrients } from '../nutrition';
-import type { CandidateSlot, LineSlot, RewriteModelMeta } from './build-model';
+import type { RewriteModelMeta } from './build-model';
+import { slotGrams, type LineSlot } from './line-slots';
 import type { Candidate, Plan, PlanLine } from './types';
 
 export interface PlanChoice {
@@ -7,8 +8,6 @@ export interface PlanChoice {
   food: Candidate;
   grams: number;
   volumeMl: number;
-  /** the model slot chosen; absent for fixed lines */
-  slot?: CandidateSlot;
 }
 
 function writtenVolume(line: LineSlot): number {
@@ -31,8 +30,8 @@ export function solvedChoices(meta: RewriteModelMeta, values: Record<string, num
     if (line.fixed) return { line, food: line.original, grams: Math.max(0, line.line.grams), volumeMl: writtenVolume(line) };
     // The written food stays unless a swap's indicator is on.
     const chosen = line.slots.find((s) => s.y !== undefined && (values[s.y] ?? 0) > 0.5) ?? line.slots[0];
-    const grams = Math.max(0, chosen.centreGrams - (values[chosen.below] ?? 0) + (values[chosen.above] ?? 0));
-    return { line, food: chosen.candidate, grams, volumeMl: grams / chosen.densityGPerMl, slot: chosen };
+    const grams = Math.max(0, slotGrams(chosen, values));
+    return { line, food: chosen.candidate, grams, volumeMl: grams / chosen.densityGPerMl };
   });
 }
 

@@ -12,19 +12,25 @@ export class RewriteSolverError extends Error {
   }
 }
 
-/** Runs solves for one rewrite and adds up their time. */
+/** Least time a solve gets once the budget is spent: enough for the root LP of a small model. */
+const FLOOR_MS = 50;
+
+/**
+ * Runs the solves of one rewrite within one budget: each solve gets what is left of it (or less,
+ * when asked), and at least FLOOR_MS; the time of every solve is added up.
+ */
 export class SolveLog {
   ms = 0;
   solves = 0;
-  allProven = true;
 
-  constructor(private readonly timeoutMs: number) {}
+  constructor(readonly budgetMs: number) {}
 
-  solve(model: LpModel): LpSolution {
-    const solution = solveLp(model, { timeoutMs: this.timeoutMs });
+  /** `floorMs` raises the least time for a solve that must run even when the budget is spent. */
+  solve(model: LpModel, capMs = Infinity, floorMs = FLOOR_MS): LpSolution {
+    const remaining = Math.max(floorMs, this.budgetMs - this.ms);
+    const solution = solveLp(model, { timeoutMs: Math.min(capMs, remaining) });
     this.ms += solution.ms;
     this.solves += 1;
-    if (solution.status === 'time-limit' && solution.route !== 'none') this.allProven = false;
     if (solution.status === 'failed') {
       throw new RewriteSolverError(`the solver's answer failed the feasibility check: ${solution.violations.slice(0, 3).join('; ')}`, 'failed');
     }

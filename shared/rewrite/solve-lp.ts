@@ -1,12 +1,17 @@
 import solver, { type SolveResult } from 'javascript-lp-solver';
-import { findViolations, fixVariables, isIntegerVariable, objectiveValue, type LpModel } from './lp-model';
+import { findViolations, fixVariables, isIntegerVariable, objectiveValue, scaleRows, type LpModel } from './lp-model';
+import { guarded, SolverStalled } from './pivot-guard';
 
 export type LpStatus = 'optimal' | 'infeasible' | 'unbounded' | 'time-limit' | 'failed';
 
 export interface LpSolveOptions {
   /** wall-clock budget for branch and bound, ms (default 2000) */
   timeoutMs?: number;
-  /** relative MIP gap at which branch and bound may stop (default 0: prove optimality) */
+  /**
+   * javascript-lp-solver's `tolerance` (default 0: prove optimality). It stops once the incumbent
+   * is within this share of the root relaxation's bound, not of the live bound, so on the rewrite
+   * models (root bounds far below the optimum) a small gap saves nothing and a large one is blind.
+   */
   relativeGap?: number;
   /** javascript-lp-solver's presolve (default off, see below) */
   presolve?: boolean;
@@ -40,6 +45,7 @@ interface RawRun {
   raw: SolveResult | null;
   values: Record<string, number>;
   error?: string;
+  stalled?: SolverStalled['reason'];
 }
 
 function runSolver(model: LpModel, options: Required<LpSolveOptions>): RawRun {
@@ -50,13 +56,16 @@ function runSolver(model: LpModel, options: Required<LpSolveOptions>): RawRun {
       timeout: options.timeoutMs,
       tolerance: options.relativeGap,
       presolve: options.presolve,
+      // Its own detector declares a model infeasible on a cycle; the pivot guard handles cycles.
+      exitOnCycles: false,
     },
   };
   let raw: SolveResult;
   try {
-    raw = solver.Solve(withOptions) as SolveResult;
+    // The guard's deadline leaves branch and bound room to stop at its own timeout with a plan.
+    raw = guarded(options.timeoutMs * 1.25 + 50, () => solver.Solve(withOptions) as SolveResult);
   } catch (e) {
-    return { raw: null, values: {}, error: e instanceof Error ? e.message : String(e) };
+    return { raw: null, values: {}, error: e instanceof Error ? e.message : String(e), stalled: e instanceof SolverStalled ? e.reason : undefined };
   }
   const values: Record<string, number> = {};
   for (const v of Object.keys(model.variables)) {
@@ -83,7 +92,8 @@ function polish(model: LpModel, values: Record<string, number>, options: Require
  * javascript-lp-solver's answers are never taken on trust: the values are checked against every
  * row, bound and integrality within 1e-6 (scaled), and the objective is recomputed from them.
  * When the check fails, the integer choice is kept and the continuous part re-solved as an LP
- * ("polished"); failing that, the whole model is solved again with presolve switched the other way.
+ * ("polished"); failing that, or when the simplex cycles (see pivot-guard), the model is solved
+ * again with its rows scaled, then with presolve switched the other way ("retried").
  *
  * Presolve is off by default: javascript-lp-solver's presolve zeroes the cost of variables it fixes
  * and assumes integer variables without an explicit bound lie in [0, 1], so its reported objective
@@ -112,24 +122,34 @@ export function solveLp(model: LpModel, options: LpSolveOptions = {}): LpSolutio
     };
   };
 
-  const first = runSolver(model, opts);
-  if (!first.raw) return finish('failed', {}, 'none', [first.error ?? 'solver error']);
-  if (first.raw.bounded === false) return finish('unbounded', {}, 'none');
-  if (!first.raw.feasible) {
-    const timedOut = integer && now() - started >= opts.timeoutMs;
-    return finish(timedOut ? 'time-limit' : 'infeasible', {}, 'none');
-  }
-  const violations = findViolations(model, first.values);
-  if (violations.length === 0) return finish('optimal', first.values, 'direct');
-
-  if (integer) {
-    const polished = polish(model, first.values, opts);
-    if (polished && findViolations(model, polished).length === 0) return finish('optimal', polished, 'polished');
-  }
-  const second = runSolver(model, { ...opts, presolve: !opts.presolve });
-  if (second.raw?.feasible && second.raw.bounded !== false) {
-    const again = findViolations(model, second.values);
-    if (again.length === 0) return finish('optimal', second.values, 'retried');
+  // Attempts in turn, each with what is left of the budget: the model itself, then the same model
+  // with its rows scaled (another pivoting path), then with presolve switched the other way.
+  const attempts: { model: LpModel; presolve: boolean }[] = [
+    { model, presolve: opts.presolve },
+    { model: scaleRows(model), presolve: opts.presolve },
+    { model, presolve: !opts.presolve },
+  ];
+  let violations: string[] = [];
+  for (const [i, attempt] of attempts.entries()) {
+    const remaining = opts.timeoutMs - (now() - started);
+    if (i > 0 && remaining <= 0) break;
+    const run = runSolver(attempt.model, { ...opts, presolve: attempt.presolve, timeoutMs: Math.max(remaining, 1) });
+    if (!run.raw) {
+      violations = [run.error ?? 'solver error'];
+      if (run.stalled === 'deadline') return finish('time-limit', {}, 'none', violations);
+      continue;
+    }
+    if (run.raw.bounded === false) return finish('unbounded', {}, 'none');
+    if (!run.raw.feasible) {
+      const timedOut = integer && now() - started >= opts.timeoutMs;
+      return finish(timedOut ? 'time-limit' : 'infeasible', {}, 'none');
+    }
+    violations = findViolations(model, run.values);
+    if (violations.length === 0) return finish('optimal', run.values, i === 0 ? 'direct' : 'retried');
+    if (integer) {
+      const polished = polish(model, run.values, { ...opts, timeoutMs: Math.max(opts.timeoutMs - (now() - started), 1) });
+      if (polished && findViolations(model, polished).length === 0) return finish('optimal', polished, 'polished');
+    }
   }
   return finish('failed', {}, 'none', violations);
 }

@@ -1,11 +1,32 @@
-import { buildModel, resolveOptions } from './build-model';
+import { resolveOptions } from './rewrite-options';
+import { solveElastic } from './elastic-solve';
 import { explainChanges } from './explain-changes';
-import { analyseInfeasible } from './infeasibility';
+import { analyseInfeasible, formatTargetValue } from './infeasibility';
 import { toLpFormat } from './lp-format';
+import type { LpModel } from './lp-model';
 import { planOf, solvedChoices, writtenChoices } from './read-plan';
-import { hasSolution, RewriteSolverError, SolveLog } from './solve-log';
+import { RewriteSolverError, SolveLog } from './solve-log';
 import { activeTargets } from './targets';
-import type { RewriteLine, RewriteOptions, RewriteResult, SolverInfo, Targets } from './types';
+import type { Nutrients } from '../nutrition';
+import type { RewriteLine, RewriteObjective, RewriteOptions, RewriteResult, SolverInfo, Suggestion, Targets } from './types';
+
+/** The request with a suggestion taken. */
+export function applySuggestion(
+  targets: Targets,
+  options: RewriteOptions,
+  suggestion: Suggestion,
+): { targets: Targets; options: RewriteOptions } {
+  switch (suggestion.kind) {
+    case 'more-swaps':
+      return { targets, options: { ...options, maxSwaps: suggestion.value } };
+    case 'target':
+      return { targets: { ...targets, [suggestion.target!]: suggestion.value }, options };
+    case 'targets':
+      return { targets: { ...targets, ...suggestion.targets }, options };
+    case 'volume-tolerance':
+      return { targets, options: { ...options, volumeTolerancePct: suggestion.value } };
+  }
+}
 
 function checkTargets(targets: Targets): void {
   if (!Number.isFinite(targets.proteinMinG) || !Number.isFinite(targets.kcalMax)) {
@@ -13,13 +34,12 @@ function checkTargets(targets: Targets): void {
   }
 }
 
-function describeReachable(report: ReturnType<typeof analyseInfeasible>, targets: Targets): string {
-  const parts = activeTargets(targets).map(({ row }) => {
-    const v = report.perServing[row.key];
-    const digits = row.unit === 'g' && Math.abs(v) < 10 ? 1 : 0;
-    return row.unit === 'kcal' ? `${v.toFixed(0)} kcal` : `${v.toFixed(digits)} ${row.unit} ${row.nutrient}`;
+/** "best reachable: 31 g protein at 450 kcal per serving (…)" */
+function describeReachable(perServing: Nutrients, targets: Targets): string {
+  const [protein, kcal, ...others] = activeTargets(targets).map(({ row }) => {
+    const text = formatTargetValue(perServing[row.key], row);
+    return row.unit === 'kcal' ? text : `${text} ${row.nutrient}`;
   });
-  const [protein, kcal, ...others] = parts;
   return `best reachable: ${protein} at ${kcal}${others.length ? ` (${others.join(', ')})` : ''} per serving`;
 }
 
@@ -38,45 +58,62 @@ export function solveRewrite(
   checkTargets(targets);
   const opts = resolveOptions(options);
   const log = new SolveLog(opts.timeoutMs);
-  const built = buildModel(lines, targets, servings, opts);
-  const solution = log.solve(built.model);
-  const written = writtenChoices(built.variables);
+  const solveFor = (kind: RewriteObjective, floorMs?: number) =>
+    solveElastic(lines, targets, servings, opts, { objective: { kind } }, log, Infinity, floorMs);
+  let objective = opts.objective;
+  let outcome = solveFor(objective);
+  if (outcome && !outcome.meetsTargets && outcome.solution.status !== 'optimal') {
+    // Time ran out before a plan meeting the targets turned up, which proves nothing. The
+    // nutrient objectives' relaxations are tight, so their branch and bound finds plans fast:
+    // one of those, not proven best for the cook's objective, beats a wrong "out of reach".
+    // A nutrient solve that finishes and still misses is the proof the targets are out of reach.
+    for (const kind of (['min-kcal', 'max-protein'] as const).filter((k) => k !== objective)) {
+      const quick = solveFor(kind, log.budgetMs / 4);
+      if (quick && (quick.meetsTargets || quick.solution.status === 'optimal')) {
+        outcome = quick;
+        objective = kind;
+        break;
+      }
+    }
+    if (!outcome.meetsTargets && outcome.solution.status !== 'optimal') {
+      throw new RewriteSolverError('the solver ran out of time before settling whether the targets can be met', 'time-limit');
+    }
+  }
+  if (!outcome) throw new RewriteSolverError('the solver stopped without a plan', 'time-limit');
+  const found = outcome;
+  const written = writtenChoices(found.built.variables);
   const before = planOf(written, servings);
-  const info = (objectiveValue: number, model: Parameters<typeof toLpFormat>[0]): SolverInfo => {
+  const chosen = solvedChoices(found.built.variables, found.solution.values);
+  const info = (model: LpModel): SolverInfo => {
     const out: SolverInfo = {
-      objective: opts.objective,
-      objectiveValue,
+      objective,
+      objectiveValue: found.solution.objective + found.built.variables.objectiveConstant,
       ms: log.ms,
       solves: log.solves,
-      provenOptimal: log.allProven,
+      provenOptimal: found.solution.status === 'optimal' && objective === opts.objective,
     };
     if (opts.explain) out.model = toLpFormat(model);
     return out;
   };
 
-  if (hasSolution(solution)) {
-    const chosen = solvedChoices(built.variables, solution.values);
+  if (found.meetsTargets) {
     return {
       status: 'optimal',
       before,
       after: planOf(chosen, servings),
-      changes: explainChanges(written, chosen, targets, servings, opts.objective),
-      solver: info(solution.objective + built.variables.objectiveConstant, built.model),
+      changes: explainChanges(written, chosen, targets, servings, objective, found.built.variables.volumeRangeMl),
+      solver: info(found.built.model),
     };
   }
-  if (solution.status !== 'infeasible') {
-    throw new RewriteSolverError(`the solver stopped without a plan (${solution.status})`, solution.status);
-  }
-
-  const report = analyseInfeasible(lines, targets, servings, opts, log);
+  const report = analyseInfeasible(lines, targets, servings, opts, found, log);
   return {
     status: 'infeasible',
-    message: `The targets cannot all be met; ${describeReachable(report, targets)}.`,
+    message: `The targets cannot all be met; ${describeReachable(report.perServing, targets)}.`,
     before,
     closest: planOf(report.closest, servings),
     bestReachable: report.perServing,
     binding: report.binding,
     suggestions: report.suggestions,
-    solver: info(report.objectiveValue, report.model),
+    solver: info(found.built.model),
   };
 }

@@ -59,7 +59,10 @@ export interface RewriteOptions {
   objective?: RewriteObjective;
   /** include the solved model as CPLEX LP text in the result */
   explain?: boolean;
-  /** wall-clock budget per MILP solve in ms (default 2000) */
+  /**
+   * wall-clock budget for all the solves of one rewrite, ms (default 2000); a plan found when it
+   * runs out is returned with solver.provenOptimal false
+   */
   timeoutMs?: number;
   /** drop candidates that can never be needed (default true) */
   pruneDominated?: boolean;
@@ -102,7 +105,9 @@ export interface Change {
 }
 
 export interface SolverInfo {
+  /** the objective the answer optimises: the cook's, or a nutrient one found faster when time ran out */
   objective: RewriteObjective;
+  /** its value for the plan ('closest': weighted swaps and volume change; else per serving) */
   objectiveValue: number;
   /** wall-clock time of every solve made for this answer */
   ms: number;
@@ -113,12 +118,15 @@ export interface SolverInfo {
   model?: string;
 }
 
+/** A change to the request that makes the targets reachable, each found by a re-solve. */
 export interface Suggestion {
-  kind: 'more-swaps' | 'target' | 'volume-tolerance';
-  /** for kind 'target' */
+  kind: 'more-swaps' | 'target' | 'targets' | 'volume-tolerance';
+  /** kind 'target': the target to move */
   target?: TargetName;
-  /** the value that makes the targets reachable: swaps allowed, the new target, or tolerance % */
+  /** swaps allowed in all, the target's new value, or the dish-volume tolerance in %; for 'targets' the number of targets moved */
   value: number;
+  /** kind 'targets': several targets at once, at values the closest plan reaches */
+  targets?: Partial<Targets>;
   message: string;
 }
 

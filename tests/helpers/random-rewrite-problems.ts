@@ -132,7 +132,32 @@ export interface RandomProblem {
   options: RewriteOptions;
 }
 
-/** A recipe with targets drawn around its own values: some reachable, some not. */
+/**
+ * Targets a known plan meets: up to `swaps` lines swapped to their leanest-per-mL candidate at the
+ * band centre, the targets set just around that plan's own per-serving values. The rewrite can
+ * always reach them, and needs about that many swaps.
+ */
+export function plantedTargets(rng: Rng, lines: RewriteLine[], servings: number, swaps: number): Targets {
+  const free = lines.filter((l) => !l.locked && l.grams > 0 && l.candidates.length > 1);
+  const order = free.map((l) => ({ l, k: rng() })).sort((a, b) => a.k - b.k).slice(0, swaps);
+  const planned = new Map<RewriteLine, Candidate>();
+  for (const { l } of order) {
+    const score = (c: Candidate) => (c.per100g.proteinG * 4 - c.per100g.kcal * 0.5) * c.densityGPerMl;
+    const best = l.candidates.filter((c) => !c.original).sort((a, b) => score(b) - score(a))[0];
+    planned.set(l, best);
+  }
+  const totals = sumNutrients(
+    lines.map((l) => {
+      const c = planned.get(l);
+      if (!c) return nutrientsForGrams(l.candidates.find((o) => o.original)!.per100g, Math.max(0, l.grams));
+      return nutrientsForGrams(c.per100g, l.volumeMl * (c.approved?.volumeRatio ?? 1) * c.densityGPerMl);
+    }),
+  );
+  const plan = divideNutrients(totals, servings);
+  return { proteinMinG: plan.proteinG * between(rng, 0.97, 1), kcalMax: plan.kcal * between(rng, 1, 1.03) };
+}
+
+/** A recipe with random targets, options and objective: some reachable, some not. */
 export function randomProblem(seed: number, shape?: Partial<RandomRecipeShape>): RandomProblem {
   const rng = seededRandom(seed);
   const lines = randomRecipe(rng, {
@@ -144,10 +169,11 @@ export function randomProblem(seed: number, shape?: Partial<RandomRecipeShape>):
   });
   const servings = pick(rng, [1, 2, 4, 6, 8]);
   const written = perServingAsWritten(lines, servings);
-  const targets: Targets = {
-    proteinMinG: written.proteinG * between(rng, 0.95, 1.5),
-    kcalMax: written.kcal * between(rng, 0.6, 1.02),
-  };
+  // Half the problems aim at a plan known to exist, half at values drawn around the recipe's own.
+  const targets: Targets =
+    rng() < 0.5
+      ? plantedTargets(rng, lines, servings, 1 + Math.floor(rng() * 3))
+      : { proteinMinG: written.proteinG * between(rng, 0.95, 1.5), kcalMax: written.kcal * between(rng, 0.6, 1.02) };
   if (rng() < 0.25) targets.fiberMinG = written.fiberG * between(rng, 0.8, 1.2);
   if (rng() < 0.25) targets.fatMaxG = written.fatG * between(rng, 0.5, 1);
   if (rng() < 0.2) targets.sodiumMaxMg = written.sodiumMg * between(rng, 0.7, 1.1);
@@ -160,4 +186,35 @@ export function randomProblem(seed: number, shape?: Partial<RandomRecipeShape>):
   };
   if (rng() < 0.6) options.maxSwaps = Math.floor(rng() * 4);
   return { seed, lines, targets, servings, options };
+}
+
+// HiGHS, the outside solver these problems are checked against.
+
+type Highs = Awaited<ReturnType<typeof import('highs')['default']>>;
+let loading: Promise<Highs> | null = null;
+
+/** HiGHS (npm `highs`, WebAssembly), loaded once per test file. Test-only: never used by the product. */
+export function loadHighs(): Promise<Highs> {
+  loading ??= import('highs').then((m) => m.default());
+  return loading;
+}
+
+/** The MIP gap both solvers are held to: javascript-lp-solver runs with gap 0, HiGHS with this. */
+export const HIGHS_OPTIONS = { output_flag: false, mip_rel_gap: 1e-9, mip_abs_gap: 1e-9 } as const;
+
+export interface HighsOutcome {
+  feasible: boolean;
+  objective: number;
+  status: string;
+}
+
+export async function solveWithHighs(lpText: string): Promise<HighsOutcome> {
+  const highs = await loadHighs();
+  const result = highs.solve(lpText, HIGHS_OPTIONS);
+  return { feasible: result.Status === 'Optimal', objective: result.ObjectiveValue, status: result.Status };
+}
+
+/** Relative difference scaled by max(1, |b|): objectives near 0 compare absolutely. */
+export function relativeGap(a: number, b: number): number {
+  return Math.abs(a - b) / Math.max(1, Math.abs(b));
 }

@@ -1,0 +1,132 @@
+import { describe, expect, it } from 'vitest';
+import { NUTRIENT_KEYS, type Nutrients } from '../../shared/nutrition';
+import { applySuggestion, solveRewrite } from '../../shared/rewrite/solve-rewrite';
+import { activeTargets } from '../../shared/rewrite/targets';
+import type { OptimalRewrite, Plan, RewriteLine, RewriteResult, Targets } from '../../shared/rewrite/types';
+import { randomProblem, type RandomProblem } from '../helpers/random-rewrite-problems';
+
+const TOL = 1e-6;
+const within = (value: number, lo: number, hi: number) =>
+  value >= lo - TOL * Math.max(1, Math.abs(lo)) && value <= hi + TOL * Math.max(1, Math.abs(hi));
+
+function original(line: RewriteLine) {
+  return line.candidates.find((c) => c.original)!;
+}
+
+function meets(perServing: Nutrients, targets: Targets): boolean {
+  return activeTargets(targets).every(({ row, value }) =>
+    row.sense === 'min' ? within(perServing[row.key], value, Infinity) : within(perServing[row.key], -Infinity, value),
+  );
+}
+
+/** Every property an optimal rewrite must have, checked from the inputs alone. */
+function checkOptimal(p: RandomProblem, r: OptimalRewrite): void {
+  const t = (p.options.volumeTolerancePct ?? 10) / 100;
+  const a = (p.options.lineTolerancePct ?? 25) / 100;
+  const perServing = sumPerServing(r.after, p.servings);
+  expect(meets(perServing, p.targets)).toBe(true);
+  const writtenVolume = p.lines.reduce((s, l) => s + Math.max(0, l.volumeMl), 0);
+  expect(within(r.after.volumeMl, (1 - t) * writtenVolume, (1 + t) * writtenVolume)).toBe(true);
+  let swaps = 0;
+  p.lines.forEach((line, i) => {
+    const planned = r.after.lines[i];
+    const food = line.candidates.find((c) => c.foodId === planned.food.foodId);
+    expect(food, `line ${i}: food from its candidate set`).toBeDefined();
+    // Nutrients are the food's values per 100 g × grams.
+    for (const k of NUTRIENT_KEYS) expect(planned.nutrients[k]).toBeCloseTo((food!.per100g[k] * planned.grams) / 100, 9);
+    const fixed = line.locked || !(line.grams > 0) || !(line.volumeMl > 0);
+    if (fixed) {
+      expect(planned.food.foodId).toBe(original(line).foodId);
+      expect(planned.grams).toBe(Math.max(0, line.grams));
+      return;
+    }
+    if (!food!.original) swaps += 1;
+    const centre = food!.original ? line.volumeMl : line.volumeMl * (food!.approved?.volumeRatio ?? 1);
+    const volume = food!.original ? (planned.grams * line.volumeMl) / line.grams : planned.grams / food!.densityGPerMl;
+    expect(within(volume, (1 - a) * centre, (1 + a) * centre), `line ${i}: volume within its band`).toBe(true);
+    expect(planned.volumeMl).toBeCloseTo(volume, 6);
+  });
+  if (p.options.maxSwaps !== undefined) expect(swaps).toBeLessThanOrEqual(p.options.maxSwaps);
+  expect(r.changes.filter((c) => c.swapped)).toHaveLength(swaps);
+  for (const change of r.changes) expect(change.reason.length).toBeGreaterThan(10);
+}
+
+function sumPerServing(plan: Plan, servings: number): Nutrients {
+  const out = {} as Nutrients;
+  for (const k of NUTRIENT_KEYS) out[k] = plan.lines.reduce((s, l) => s + l.nutrients[k], 0) / servings;
+  return out;
+}
+
+// Budgets far beyond need, so that a slow machine cannot stop a solve short of its optimum.
+const problems = Array.from({ length: 40 }, (_, i) => randomProblem(100 + i)).map((p) => ({ ...p, options: { ...p.options, timeoutMs: 60_000 } }));
+const results = new Map<RandomProblem, RewriteResult>(problems.map((p) => [p, solveRewrite(p.lines, p.targets, p.servings, p.options)]));
+
+describe('invariants of every rewrite answer (40 generated problems)', () => {
+  it('has both kinds of answer to check', () => {
+    const optimal = [...results.values()].filter((r) => r.status === 'optimal').length;
+    expect(optimal).toBeGreaterThanOrEqual(10);
+    expect(results.size - optimal).toBeGreaterThanOrEqual(5);
+  });
+
+  it('optimal: targets met, volumes within tolerance, swaps within the limit, locked lines kept, foods from the candidates', () => {
+    for (const [p, r] of results) if (r.status === 'optimal') checkOptimal(p, r);
+  });
+
+  it('before is the recipe as written', () => {
+    for (const [p, r] of results) {
+      r.before.lines.forEach((l, i) => {
+        expect(l.food.foodId).toBe(original(p.lines[i]).foodId);
+        expect(l.grams).toBe(Math.max(0, p.lines[i].grams));
+      });
+    }
+  });
+
+  it('infeasible: the targets really are out of reach, and best reachable is the closest plan', () => {
+    for (const [p, r] of results) {
+      if (r.status !== 'infeasible') continue;
+      expect(r.bestReachable).toEqual(r.closest.perServing);
+      expect(r.binding.length).toBeGreaterThan(0);
+      for (const target of r.binding) {
+        const { row, value } = activeTargets(p.targets).find((t) => t.row.target === target)!;
+        const reached = r.bestReachable[row.key];
+        expect(row.sense === 'min' ? reached < value : reached > value).toBe(true);
+      }
+      expect(r.message).toMatch(/best reachable: .* g protein at .* kcal/);
+    }
+  });
+
+  it('infeasible: every suggestion, applied, makes the targets reachable', () => {
+    let checked = 0;
+    for (const [p, r] of results) {
+      if (r.status !== 'infeasible') continue;
+      for (const s of r.suggestions) {
+        const { targets, options } = applySuggestion(p.targets, p.options, s);
+        const again = solveRewrite(p.lines, targets, p.servings, options);
+        expect(again.status, `seed ${p.seed}: ${s.message}`).toBe('optimal');
+        if (again.status === 'optimal') checkOptimal({ ...p, targets, options }, again);
+        checked += 1;
+      }
+    }
+    expect(checked).toBeGreaterThan(0);
+  });
+});
+
+describe('what the objectives mean', () => {
+  const p = problems.find((q) => results.get(q)?.status === 'optimal')!;
+  const solve = (objective: 'closest' | 'max-protein' | 'min-kcal') =>
+    solveRewrite(p.lines, p.targets, p.servings, { ...p.options, objective }) as OptimalRewrite;
+
+  it('most protein reaches at least the protein of the other objectives, fewest calories at most their kcal', () => {
+    const closest = solve('closest');
+    const protein = solve('max-protein');
+    const kcal = solve('min-kcal');
+    for (const other of [closest, kcal]) expect(protein.after.perServing.proteinG).toBeGreaterThanOrEqual(other.after.perServing.proteinG - 1e-6);
+    for (const other of [closest, protein]) expect(kcal.after.perServing.kcal).toBeLessThanOrEqual(other.after.perServing.kcal + 1e-6);
+  });
+
+  it('closest changes nothing when the recipe as written already meets the targets', () => {
+    const written = solveRewrite(p.lines, { proteinMinG: 0, kcalMax: 1e6 }, p.servings, { objective: 'closest' });
+    expect(written.status).toBe('optimal');
+    if (written.status === 'optimal') expect(written.changes).toEqual([]);
+  });
+});
