@@ -70,7 +70,7 @@ export function ClientVersionPage() {
       {back}
       <VersionReview version={v} unitSystem={unitSystemOf(user)} clientTargets={client?.targets ?? null} />
       <Card title="Comments" description={`A conversation about this version between you and ${clientName}.`}>
-        {user && <CommentThread recipeId={recipeId} number={v.number} viewerId={user.id} clientName={clientName} />}
+        {user && <CommentThread recipeId={recipeId} number={v.number} viewerId={user.id} otherName={clientName} />}
       </Card>
     </Page>
   );

@@ -25,6 +25,8 @@ import type { DeletedRecipeState } from '../../features/recipes/deleted-recipe-s
 import { formatWhen } from '../../features/recipes/format-when';
 import { positiveInt, recipePath } from '../../features/recipes/recipe-links';
 import { errorMessage, isApiError } from '../../lib/api-client';
+import { CommentThread } from '../../features/clients/components/comment-thread';
+import { useAuth } from '../auth-context';
 
 const backToBook = (
   <Link to="/recipes" className={buttonClasses({ variant: 'secondary', size: 'sm' })}>
@@ -39,6 +41,7 @@ function RecipeView({ recipe, onReload }: { recipe: RecipeDetail; onReload: () =
   const duplicate = useDuplicateRecipe();
   const remove = useDeleteRecipe();
   const restore = useRestoreVersion();
+  const { user } = useAuth();
 
   const newest = recipe.versions.at(-1) ?? null;
   const asked = positiveInt(params.get('version'));
@@ -146,6 +149,11 @@ function RecipeView({ recipe, onReload }: { recipe: RecipeDetail; onReload: () =
             <VersionLinesCard recipeId={recipe.id} version={selected} />
           ) : (
             <EmptyState title="No versions yet">This recipe has no saved ingredients.</EmptyState>
+          )}
+          {selected && user?.coachId != null && (
+            <Card title={`Notes with your coach on version ${selected.number}`} description="Your coach reviews the versions you save and can leave a comment here.">
+              <CommentThread recipeId={recipe.id} number={selected.number} viewerId={user.id} otherName="your coach" />
+            </Card>
           )}
           <RecipeDetailsCard recipe={recipe} onReload={onReload} />
         </div>

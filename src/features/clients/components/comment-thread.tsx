@@ -11,8 +11,11 @@ import { formatDayTime } from '../when';
 
 const MAX_COMMENT_CHARS = 4_000;
 
-/** The comments on one saved version, oldest first, and a box to add one. */
-export function CommentThread({ recipeId, number, viewerId, clientName }: { recipeId: number; number: number; viewerId: number; clientName: string }) {
+/**
+ * The comments on one saved version, oldest first, and a box to add one. `otherName` is who reads
+ * along: the client's name on the coach's review page, "your coach" on the client's own recipe page.
+ */
+export function CommentThread({ recipeId, number, viewerId, otherName }: { recipeId: number; number: number; viewerId: number; otherName: string }) {
   const id = useId();
   const comments = useVersionComments(recipeId, number);
   const add = useAddVersionComment(recipeId, number);
@@ -40,7 +43,7 @@ export function CommentThread({ recipeId, number, viewerId, clientName }: { reci
       ) : comments.isError ? (
         <ErrorState title="The comments didn't load" error={comments.error} onRetry={() => void comments.refetch()} retrying={comments.isFetching} />
       ) : comments.data.length === 0 ? (
-        <p className="text-ink-soft">No comments yet. {clientName} sees what you write here on the recipe's page.</p>
+        <p className="text-ink-soft">No comments yet. What you write here, {otherName} reads beside this version.</p>
       ) : (
         <ol aria-label="Comments" className="flex flex-col gap-3">
           {comments.data.map((comment) => {
@@ -71,7 +74,7 @@ export function CommentThread({ recipeId, number, viewerId, clientName }: { reci
         )}
         <TextAreaField
           label="Your comment"
-          hint={`Only ${clientName} and you can read it.`}
+          hint={`Only ${otherName} and you can read it.`}
           maxLength={MAX_COMMENT_CHARS}
           value={body}
           onChange={(e) => {
