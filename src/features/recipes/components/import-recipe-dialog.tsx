@@ -12,18 +12,14 @@ import { applyServerFieldErrors } from '../../../lib/form-errors';
 import { cx } from '../../../lib/cx';
 import { useCreateRecipe } from '../api/create-recipe';
 import { IMPORT_EXTENSIONS, importFileProblem, useImportRecipe } from '../api/import-recipe';
+import { SERVINGS_MAX, recipeServingsField, recipeTitleField } from '../recipe-fields';
 
 type ImportMode = 'file' | 'paste';
 
-const SERVINGS_MAX = 100;
 
 const pastedRecipeSchema = z.object({
-  title: z.string().trim().min(1, { error: 'Give the recipe a title.' }).max(200, { error: 'Keep the title under 200 characters.' }),
-  servings: z
-    .number({ error: 'Enter how many servings the recipe makes.' })
-    .int({ error: 'Use a whole number of servings.' })
-    .min(1, { error: 'A recipe makes at least 1 serving.' })
-    .max(SERVINGS_MAX, { error: `Up to ${SERVINGS_MAX} servings.` }),
+  title: recipeTitleField,
+  servings: recipeServingsField,
   text: z
     .string()
     .max(20_000, { error: 'Keep the ingredients under 20,000 characters.' })

@@ -11,16 +11,12 @@ import { useToast } from '../../../components/ui/toast';
 import { errorMessage } from '../../../lib/api-client';
 import { applyServerFieldErrors } from '../../../lib/form-errors';
 import { isRevisionConflict, useUpdateRecipe } from '../api/update-recipe';
+import { SERVINGS_MAX, recipeServingsField, recipeTitleField } from '../recipe-fields';
 
-const SERVINGS_MAX = 100;
 
 const detailsSchema = z.object({
-  title: z.string().trim().min(1, { error: 'Give the recipe a title.' }).max(200, { error: 'Keep the title under 200 characters.' }),
-  servings: z
-    .number({ error: 'Enter how many servings the recipe makes.' })
-    .int({ error: 'Use a whole number of servings.' })
-    .min(1, { error: 'A recipe makes at least 1 serving.' })
-    .max(SERVINGS_MAX, { error: `Up to ${SERVINGS_MAX} servings.` }),
+  title: recipeTitleField,
+  servings: recipeServingsField,
   notes: z.string().max(20_000, { error: 'Keep the notes under 20,000 characters.' }),
   method: z.string().max(20_000, { error: 'Keep the method under 20,000 characters.' }),
 });
