@@ -4,13 +4,14 @@ import { build } from 'vite';
 import { resolveDatabaseUrl } from './database-url';
 import { ensureS3 } from './local-s3';
 import { loadConfig } from '../server/config';
-import { openServices, prepareDatabase } from '../server/boot';
+import { keepServingOnStrayRejections, openServices, prepareDatabase } from '../server/boot';
 import { createApp } from '../server/app';
 import { DEMO_ACCOUNTS } from '../server/seeders/demo-accounts';
 import { getFoodEngine } from '../server/services/food-engine';
 import { createMailContext } from '../server/mail-context';
 
 const started = Date.now();
+keepServingOnStrayRejections();
 const db = await resolveDatabaseUrl('postgres', Number(process.env.PG_PORT ?? 54329), 'hearthswap');
 process.env.DATABASE_URL = db.url;
 const s3 = await ensureS3('.data/s3', Number(process.env.S3_LOCAL_PORT ?? 0));

@@ -65,6 +65,9 @@ export function createApp(context: AppContext) {
     }),
   );
   app.use(express.json({ limit: '1mb' }));
+  // Before the session: a probe never needs one, and must answer { db: 'down' } even when the
+  // session store cannot be read.
+  app.use('/api/health', healthRouter(sequelize));
 
   const PgStore = connectPgSimple(session);
   app.use(
@@ -96,7 +99,6 @@ export function createApp(context: AppContext) {
   const limits = createRateLimits(config.limits);
   const api = express.Router();
   api.use(csrf);
-  api.use('/health', healthRouter(sequelize));
   api.use('/auth', authRouter(limits, (req) => generateToken(req), mail));
   api.use('/admin', adminRouter());
   api.use('/analyze', analyzeRouter(sequelize, limits.compute));
