@@ -23,6 +23,7 @@ import { clientsRouter, commentsRouter, customFoodsRoute, invitationsRouter, myC
 import { requireRole } from './middleware/auth';
 import { prepRouter, shoppingListsRouter } from './routes/prep';
 import { parse } from './middleware/validate';
+import { rejectUnsafeText } from './middleware/text-safety';
 import { HttpError } from './lib/http-error';
 import type { Mailer, StoredMail } from './mail';
 
@@ -65,6 +66,7 @@ export function createApp(context: AppContext) {
     }),
   );
   app.use(express.json({ limit: '1mb' }));
+  app.use(rejectUnsafeText);
   // Before the session: a probe never needs one, and must answer { db: 'down' } even when the
   // session store cannot be read.
   app.use('/api/health', healthRouter(sequelize));
@@ -107,7 +109,7 @@ export function createApp(context: AppContext) {
   api.use('/recipes/:id/versions/:number/comments', commentsRouter());
   api.use('/recipes/:id/versions/:number/prep', prepRouter(sequelize));
   api.use('/shopping-lists', shoppingListsRouter(sequelize));
-  api.use('/recipes', recipesRouter(sequelize, config));
+  api.use('/recipes', recipesRouter(sequelize, config, limits));
   api.post('/foods', ...customFoodsRoute(sequelize));
   api.use('/swaps', swapsRouter(sequelize));
   api.use('/clients', clientsRouter(sequelize, mail));

@@ -42,6 +42,7 @@ export interface RateLimitConfig {
   signupsPerHour: number;
   anonymousComputePerMin: number;
   userComputePerMin: number;
+  recipeImportsPerHour: number;
 }
 
 export const DEFAULT_SESSION_SECRET = 'hearthswap-development-secret-change-me';
@@ -51,6 +52,7 @@ export const DEFAULT_LIMITS: RateLimitConfig = {
   signupsPerHour: 30,
   anonymousComputePerMin: 60,
   userComputePerMin: 600,
+  recipeImportsPerHour: 60,
 };
 
 function parseTrustProxy(value: string | undefined): number | boolean {
