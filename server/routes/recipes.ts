@@ -9,6 +9,7 @@ import {
   idParam,
   recipeListQuerySchema,
   updateRecipeSchema,
+  photoUploadFieldsSchema,
   versionParam,
 } from '../../shared/schemas/recipes';
 import { MAX_LINES } from '../../shared/schemas/analyze';
@@ -26,6 +27,7 @@ import {
   listVersions,
   recipeDetail,
   restoreVersion,
+  setRecipePhoto,
   undeleteRecipe,
   updateRecipe,
   versionDetail,
@@ -163,18 +165,21 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
 
   router.post('/:id/photo', singleFile(MAX_PHOTO_BYTES, 'photo'), async (req, res) => {
     const { id } = parse(idParam, req.params);
-    const recipe = await Recipe.findOne({ where: { id, ownerId: req.user!.id, deletedAt: null } });
-    if (!recipe) throw new HttpError(404, 'not_found', 'No recipe with that id.');
+    const { revision } = parse(photoUploadFieldsSchema, req.body);
+    const owned = await Recipe.findOne({ where: { id, ownerId: req.user!.id, deletedAt: null } });
+    if (!owned) throw new HttpError(404, 'not_found', 'No recipe with that id.');
     if (!req.file) throw badRequest('file: attach the photo in the form field "file".', { fieldErrors: { file: ['Required.'] } });
     const image = await processPhoto(req.file.buffer);
-    const stored = await storePhoto(config.s3, recipe.id, image);
-    const previous = recipe.photoKey;
-    recipe.photoKey = stored.key;
-    recipe.photoType = stored.type;
-    recipe.revision += 1;
-    await recipe.save();
-    if (previous) await removePhoto(config.s3, previous);
-    res.status(201).json(await recipeDetail(recipe));
+    const stored = await storePhoto(config.s3, owned.id, image);
+    let saved: Awaited<ReturnType<typeof setRecipePhoto>>;
+    try {
+      saved = await setRecipePhoto(sequelize, req.user!, id, revision, stored);
+    } catch (error) {
+      await removePhoto(config.s3, stored.key);
+      throw error;
+    }
+    if (saved.previousKey) await removePhoto(config.s3, saved.previousKey);
+    res.status(201).json(await recipeDetail(saved.recipe));
   });
 
   router.get('/:id/photo', async (req, res) => {

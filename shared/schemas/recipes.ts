@@ -52,6 +52,11 @@ export const updateRecipeSchema = z.object({
   method: notes.optional(),
 });
 
+/** Form fields beside a photo upload: the revision the client read, checked when sent. */
+export const photoUploadFieldsSchema = z.object({
+  revision: z.coerce.number({ message: 'revision must be the revision you read.' }).int().min(1).optional(),
+});
+
 export const deleteRecipeSchema = z.object({ revision: z.coerce.number({ message: 'revision is required: send the revision you read.' }).int().min(1) });
 
 export const createVersionSchema = z.object({
