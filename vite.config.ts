@@ -18,7 +18,8 @@ export default defineConfig({
     port: 5173,
     proxy: { '/api': `http://127.0.0.1:${apiPort}` },
   },
-  build: { outDir: 'dist/client', emptyOutDir: true },
+  // the manifest lets the server preload each page's chunks (server/lib/client-shell.ts)
+  build: { outDir: 'dist/client', emptyOutDir: true, manifest: true },
   test: {
     projects: [
       {

@@ -1,7 +1,9 @@
 import express, { type RequestHandler } from 'express';
 import session from 'express-session';
+import cookieParser from 'cookie-parser';
 import connectPgSimple from 'connect-pg-simple';
 import helmet from 'helmet';
+import compression from 'compression';
 import { csrfSync } from 'csrf-sync';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
@@ -25,14 +27,15 @@ import { prepRouter, shoppingListsRouter } from './routes/prep';
 import { parse } from './middleware/validate';
 import { HttpError } from './lib/http-error';
 import type { Mailer, StoredMail } from './mail';
+import { createClientShell } from './lib/client-shell';
 
 export interface AppContext {
   config: AppConfig;
   sequelize: Sequelize;
-  /** pg pool for the session store */
+  /** pg pool for the session store, the rate-limit counters and the development outbox */
   sessionPool: pg.Pool;
-  /** outgoing mail; the development outbox is readable when `outbox` is given */
-  mail?: { mailer: Mailer; appUrl: string; outbox?: () => StoredMail[] };
+  /** outgoing mail; the development outbox (newest first) is readable when `outbox` is given */
+  mail?: { mailer: Mailer; appUrl: string; outbox?: (limit: number) => Promise<StoredMail[]> };
 }
 
 /** Without SMTP settings mail is refused with a clear 503 rather than silently dropped. */
@@ -64,8 +67,12 @@ export function createApp(context: AppContext) {
       },
     }),
   );
+  // gzip, or brotli when the browser offers it; small answers (< 1 KB) go as they are
+  app.use(compression({ threshold: 1024 }));
   app.use(express.json({ limit: '1mb' }));
 
+  // signed cookies (the known-browser cookie of sign-in limits) use the session secret
+  app.use(cookieParser(config.sessionSecret));
   const PgStore = connectPgSimple(session);
   app.use(
     session({
@@ -93,7 +100,7 @@ export function createApp(context: AppContext) {
   const csrf: RequestHandler = (req, res, next) =>
     CSRF_EXEMPT.has(req.originalUrl.split('?')[0]) ? next() : csrfSynchronisedProtection(req, res, next);
 
-  const limits = createRateLimits(config.limits);
+  const limits = createRateLimits(sessionPool, config.limits, config.secureCookies);
   const api = express.Router();
   api.use(csrf);
   api.use('/health', healthRouter(sequelize));
@@ -114,9 +121,9 @@ export function createApp(context: AppContext) {
   api.use('/targets', targetsRouter());
   if (config.env !== 'production' && context.mail?.outbox) {
     const outbox = context.mail.outbox;
-    api.get('/dev/outbox', requireRole('admin'), (req, res) => {
+    api.get('/dev/outbox', requireRole('admin'), async (req, res) => {
       const { limit } = parse(outboxQuery, req.query);
-      res.json({ messages: outbox().slice(-limit).reverse() });
+      res.json({ messages: await outbox(limit) });
     });
   }
   api.use(apiNotFound);
@@ -124,8 +131,18 @@ export function createApp(context: AppContext) {
 
   if (config.clientDir && existsSync(path.join(config.clientDir, 'index.html'))) {
     const clientDir = config.clientDir;
-    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
-    app.get(/^(?!\/api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+    const shell = createClientShell(clientDir);
+    // Vite names every file under assets/ by its content hash: a changed file gets a new name.
+    app.use('/assets', express.static(path.join(clientDir, 'assets'), { index: false, immutable: true, maxAge: '1y' }));
+    // a chunk an old page asks for after a deploy: a 404, not index.html served as JavaScript
+    app.use('/assets', (_req, res) => {
+      res.status(404).type('text/plain').send('Not found');
+    });
+    app.use(express.static(clientDir, { index: false, setHeaders: (res) => res.setHeader('Cache-Control', 'no-cache') }));
+    app.get(/^(?!\/api\/).*/, (req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.type('html').send(shell.html(req.path));
+    });
   }
 
   app.use(errorHandler());
