@@ -2,7 +2,7 @@ import { inject } from 'vitest';
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import type { Express } from 'express';
-import { loadConfig, type RateLimitConfig } from '../../server/config';
+import { loadConfig, type AppConfig, type RateLimitConfig } from '../../server/config';
 import { openServices } from '../../server/boot';
 import { createApp } from '../../server/app';
 import { createMailContext } from '../../server/mail-context';
@@ -10,6 +10,7 @@ import type { StoredMail } from '../../server/mail';
 
 export interface TestApp {
   app: Express;
+  config: AppConfig;
   /**
    * every message this app sent, through its fake SMTP server on loopback, oldest first: each is
    * in the PostgreSQL outbox before it shows here
@@ -21,8 +22,8 @@ export interface TestApp {
 }
 
 /** The real app on the test database; each call is a fresh process-like instance. */
-export async function createTestApp(limits: Partial<RateLimitConfig> = {}): Promise<TestApp> {
-  const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), ...inject('s3Env') });
+export async function createTestApp(limits: Partial<RateLimitConfig> = {}, overrides: Partial<AppConfig> = {}): Promise<TestApp> {
+  const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), ...inject('s3Env') }, overrides);
   config.limits = {
     ...config.limits,
     loginFailuresPer15Min: 1000,
@@ -39,6 +40,7 @@ export async function createTestApp(limits: Partial<RateLimitConfig> = {}): Prom
   const app = createApp({ config, ...services, mail: mail.mail });
   return {
     app,
+    config,
     outbox: () => [...(mail.smtp?.messages ?? [])],
     readOutbox: (limit = 100) => mail.mail?.outbox?.(limit) ?? Promise.resolve([]),
     close: async () => {
