@@ -4,6 +4,7 @@ import cookieParser from 'cookie-parser';
 import connectPgSimple from 'connect-pg-simple';
 import helmet from 'helmet';
 import compression from 'compression';
+import expressStaticGzip from 'express-static-gzip';
 import { csrfSync } from 'csrf-sync';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
@@ -132,8 +133,16 @@ export function createApp(context: AppContext) {
   if (config.clientDir && existsSync(path.join(config.clientDir, 'index.html'))) {
     const clientDir = config.clientDir;
     const shell = createClientShell(clientDir);
-    // Vite names every file under assets/ by its content hash: a changed file gets a new name.
-    app.use('/assets', express.static(path.join(clientDir, 'assets'), { index: false, immutable: true, maxAge: '1y' }));
+    // Vite names every file under assets/ by its content hash: a changed file gets a new name. The
+    // build leaves .br and .gz copies beside them (vite.config.ts); those go out as they are.
+    app.use(
+      '/assets',
+      expressStaticGzip(path.join(clientDir, 'assets'), {
+        enableBrotli: true,
+        orderPreference: ['br', 'gz'],
+        serveStatic: { index: false, immutable: true, maxAge: '1y' },
+      }),
+    );
     // a chunk an old page asks for after a deploy: a 404, not index.html served as JavaScript
     app.use('/assets', (_req, res) => {
       res.status(404).type('text/plain').send('Not found');
