@@ -15,9 +15,9 @@ process.env.DATABASE_URL = db.url;
 const s3 = await ensureS3('.data/s3', Number(process.env.S3_LOCAL_PORT ?? 0));
 console.log(`Database ready (${db.private ? 'private cluster in .data/postgres' : 'DATABASE_URL'})`);
 
-function run(command: string, args: string[]) {
+function run(command: string, args: string[], env: NodeJS.ProcessEnv = process.env) {
   return new Promise<void>((resolve, reject) => {
-    const child = spawn(command, args, { stdio: 'inherit', env: process.env });
+    const child = spawn(command, args, { stdio: 'inherit', env });
     child.on('error', reject);
     child.on('exit', (code, signal) => (code === 0 ? resolve() : reject(new Error(`${command} ${args.join(' ')} ended with ${signal ?? `code ${code}`}`))));
   });
@@ -32,7 +32,7 @@ async function stopAll(code: number) {
 try {
   const server = await buildServer();
   console.log(`Server compiled to dist/server in ${server.ms.toFixed(0)} ms`);
-  const client = process.env.SKIP_BUILD ? Promise.resolve() : (console.log('Building the client…'), run(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn']));
+  const client = process.env.SKIP_BUILD ? Promise.resolve() : (console.log('Building the client…'), run(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn'], { ...process.env, NODE_ENV: 'production' }));
   await Promise.all([run(process.execPath, ['dist/server/prepare.js']), client]);
 } catch (error) {
   console.error(String(error));

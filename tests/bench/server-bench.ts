@@ -80,7 +80,7 @@ export async function runServerBench(databaseUrl: string) {
   const engine = await getFoodEngine(services.sequelize);
   console.log(`catalogue load + index build at start-up: ${engine.builtMs.toFixed(0)} ms`);
   global.gc?.();
-  console.log(`resident memory after catalogue and indexes: ${(process.memoryUsage().rss / 1024 / 1024).toFixed(0)} MB (target ≤ 300 MB)`);
+  console.log(`resident memory of this bench process (tsx, with the seeder loaded) after catalogue and indexes: ${(process.memoryUsage().rss / 1024 / 1024).toFixed(0)} MB; the serving process is measured below`);
 
   const lines = textToLines(RECIPE_20);
   for (let i = 0; i < 20; i++) analyzeLines(engine, lines, 8);
