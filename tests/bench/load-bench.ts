@@ -6,29 +6,9 @@
 import autocannon from 'autocannon';
 import { loadavg } from 'node:os';
 import { DEMO_ACCOUNTS } from '../../server/seeders/demo-accounts';
-import { percentile } from './server-bench';
+import { percentile, RECIPE_20 } from './server-bench';
 import { rssMb } from './bench-server';
 
-export const RECIPE_20 = `12 oz elbow macaroni
-2 cups shredded sharp cheddar
-1 cup shredded mozzarella
-2 1/2 cups whole milk
-3 tbsp butter
-3 tbsp all-purpose flour
-1/2 tsp salt
-1/4 tsp black pepper
-1/2 cup panko breadcrumbs
-1 lb ground beef
-1 medium onion, diced
-3 cloves garlic, minced
-1 (15 oz) can tomato sauce
-1/2 cup grated parmesan
-2 large eggs
-1 cup sour cream
-1 tbsp olive oil
-1 tsp dried oregano
-8 oz cream cheese, softened
-1 cup frozen peas`;
 
 const REWRITE_TEXT = `12 oz elbow macaroni
 2 cups shredded sharp cheddar

@@ -12,7 +12,7 @@ import { getFoodEngine } from '../../server/services/food-engine';
 import { analyzeLines, textToLines } from '../../server/services/analysis';
 import { seedCatalogue } from '../../server/seeders/catalogue';
 
-const RECIPE_20 = `12 oz elbow macaroni
+export const RECIPE_20 = `12 oz elbow macaroni
 2 cups shredded sharp cheddar
 1 cup shredded mozzarella
 2 1/2 cups whole milk
