@@ -1,11 +1,10 @@
-import express, { type RequestHandler } from 'express';
+import express from 'express';
 import session from 'express-session';
 import cookieParser from 'cookie-parser';
 import connectPgSimple from 'connect-pg-simple';
 import helmet from 'helmet';
 import compression from 'compression';
 import expressStaticGzip from 'express-static-gzip';
-import { csrfSync } from 'csrf-sync';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { Sequelize } from 'sequelize';
@@ -26,6 +25,8 @@ import { clientsRouter, commentsRouter, customFoodsRoute, invitationsRouter, myC
 import { requireRole } from './middleware/auth';
 import { prepRouter, shoppingListsRouter } from './routes/prep';
 import { parse } from './middleware/validate';
+import { rejectUnsafeText } from './middleware/text-safety';
+import { createCsrf } from './middleware/csrf';
 import { HttpError } from './lib/http-error';
 import type { Mailer, StoredMail } from './mail';
 import { createClientShell } from './lib/client-shell';
@@ -45,9 +46,6 @@ const NO_MAILER: Mailer = {
     throw new HttpError(503, 'mail_unavailable', 'E-mail is not configured on this server (set SMTP_HOST and SMTP_PORT).');
   },
 };
-
-/** Routes that compute and change nothing: callable without a CSRF token (anonymous API use). */
-const CSRF_EXEMPT = new Set(['/api/analyze', '/api/rewrite', '/api/targets/estimate']);
 
 export function createApp(context: AppContext) {
   const { config, sequelize, sessionPool } = context;
@@ -71,6 +69,10 @@ export function createApp(context: AppContext) {
   // gzip, or brotli when the browser offers it; small answers (< 1 KB) go as they are
   app.use(compression({ threshold: 1024 }));
   app.use(express.json({ limit: '1mb' }));
+  app.use(rejectUnsafeText);
+  // Before the session: a probe never needs one, and must answer { db: 'down' } even when the
+  // session store cannot be read.
+  app.use('/api/health', healthRouter(sequelize));
 
   // signed cookies (the known-browser cookie of sign-in limits) use the session secret
   app.use(cookieParser(config.sessionSecret));
@@ -95,17 +97,12 @@ export function createApp(context: AppContext) {
   app.use(passport.initialize());
   app.use(passport.session());
 
-  const { generateToken, csrfSynchronisedProtection } = csrfSync({
-    getTokenFromRequest: (req) => req.headers['x-csrf-token'] as string | undefined,
-  });
-  const csrf: RequestHandler = (req, res, next) =>
-    CSRF_EXEMPT.has(req.originalUrl.split('?')[0]) ? next() : csrfSynchronisedProtection(req, res, next);
+  const csrf = createCsrf(config);
 
   const limits = createRateLimits(sessionPool, config.limits, config.secureCookies);
   const api = express.Router();
-  api.use(csrf);
-  api.use('/health', healthRouter(sequelize));
-  api.use('/auth', authRouter(limits, (req) => generateToken(req), mail));
+  api.use(csrf.protect);
+  api.use('/auth', authRouter({ sequelize, limits, csrf, mail }));
   api.use('/admin', adminRouter());
   api.use('/analyze', analyzeRouter(sequelize, limits.compute));
   api.use('/foods', foodsRouter(sequelize));
@@ -113,7 +110,7 @@ export function createApp(context: AppContext) {
   api.use('/recipes/:id/versions/:number/comments', commentsRouter());
   api.use('/recipes/:id/versions/:number/prep', prepRouter(sequelize));
   api.use('/shopping-lists', shoppingListsRouter(sequelize));
-  api.use('/recipes', recipesRouter(sequelize, config));
+  api.use('/recipes', recipesRouter(sequelize, config, limits));
   api.post('/foods', ...customFoodsRoute(sequelize));
   api.use('/swaps', swapsRouter(sequelize));
   api.use('/clients', clientsRouter(sequelize, mail));

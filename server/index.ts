@@ -4,12 +4,14 @@
  */
 import path from 'node:path';
 import type { AddressInfo } from 'node:net';
-import { loadConfig } from './config';
-import { startServer } from './boot';
+import { deploymentWarnings, loadConfig } from './config';
+import { keepServingOnStrayRejections, startServer } from './boot';
 import { DEMO_ACCOUNTS } from './seeders/demo-accounts';
 
+keepServingOnStrayRejections();
 const config = loadConfig(process.env, { clientDir: path.resolve('dist/client') });
 const running = await startServer(config);
+for (const warning of deploymentWarnings(config)) console.warn(`Warning: ${warning}`);
 const { port } = running.server.address() as AddressInfo;
 console.log(`Hearthswap is serving on http://${config.host}:${port}  (process ${process.pid})`);
 if (config.env !== 'production' && process.env.HEARTHSWAP_QUIET !== '1') {

@@ -144,7 +144,13 @@ export function createRateLimits(pool: pg.Pool, limits: RateLimitConfig, secureC
   const userCompute = perRequest(signedIn, (req) => String(req.user!.id), message);
   /** Analysis and rewrites: generous for signed-in users, tighter for anonymous use. */
   const compute: RequestHandler = (req, res, next) => (req.user ? userCompute : anonymousCompute)(req, res, next);
-  return { signIn: signInGuard(pool, limits, scope, secureCookies), signups, compute };
+  /** Each import parses a file and matches every line: kept to a cook's pace, not a script's. */
+  const recipeImports = perRequest(
+    counter(pool, `${scope}:recipe-imports`, limits.recipeImportsPerHour, HOUR, true),
+    (req) => (req.user ? `user:${req.user.id}` : address(req)),
+    'Too many recipe imports in an hour. Try again later, or paste the recipe instead.',
+  );
+  return { signIn: signInGuard(pool, limits, scope, secureCookies), signups, compute, recipeImports };
 }
 
 export type RateLimits = ReturnType<typeof createRateLimits>;

@@ -34,7 +34,7 @@ beforeAll(async () => {
       '_format.js': { file: SHARED },
     }),
   );
-  t = await createTestApp({}, { clientDir: dir });
+  t = await createTestApp({}, { config: { clientDir: dir } });
 });
 
 afterAll(async () => {

@@ -12,7 +12,7 @@ let t: TestApp;
 beforeAll(async () => {
   t = await createTestApp(
     { loginFailuresPer15Min: 5, loginFailuresPerAccountPerDay: 12, loginFailuresPerAddressPerHour: 20 },
-    { trustProxy: 1 },
+    { config: { trustProxy: 1 } },
   );
 });
 afterAll(() => t.close());
@@ -86,7 +86,7 @@ describe('sign-in limits', () => {
     for (let i = 0; i < 5; i++) await attempt('203.0.113.200', victim.email, `guess-${i}-wrong`);
     const second = await createTestApp(
       { loginFailuresPer15Min: 5, loginFailuresPerAccountPerDay: 12, loginFailuresPerAddressPerHour: 20, scope: sharedScope(t) },
-      { trustProxy: 1 },
+      { config: { trustProxy: 1 } },
     );
     try {
       const agent = request.agent(second.app);

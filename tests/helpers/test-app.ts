@@ -6,7 +6,7 @@ import { loadConfig, type AppConfig, type RateLimitConfig } from '../../server/c
 import { openServices } from '../../server/boot';
 import { createApp } from '../../server/app';
 import { createMailContext } from '../../server/mail-context';
-import type { StoredMail } from '../../server/mail';
+import type { Mailer, StoredMail } from '../../server/mail';
 
 export interface TestApp {
   app: Express;
@@ -22,8 +22,8 @@ export interface TestApp {
 }
 
 /** The real app on the test database; each call is a fresh process-like instance. */
-export async function createTestApp(limits: Partial<RateLimitConfig> = {}, overrides: Partial<AppConfig> = {}): Promise<TestApp> {
-  const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), ...inject('s3Env') }, overrides);
+export async function createTestApp(limits: Partial<RateLimitConfig> = {}, options: { mailer?: Mailer; config?: Partial<AppConfig> } = {}): Promise<TestApp> {
+  const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), ...inject('s3Env') }, options.config);
   config.limits = {
     ...config.limits,
     loginFailuresPer15Min: 1000,
@@ -37,7 +37,7 @@ export async function createTestApp(limits: Partial<RateLimitConfig> = {}, overr
   };
   const services = await openServices(config);
   const mail = await createMailContext(config, { APP_URL: 'http://hearthswap.test' }, services.sessionPool);
-  const app = createApp({ config, ...services, mail: mail.mail });
+  const app = createApp({ config, ...services, mail: options.mailer && mail.mail ? { ...mail.mail, mailer: options.mailer } : mail.mail });
   return {
     app,
     config,
