@@ -6,10 +6,9 @@ import { confirmPasswordReset, requestPasswordReset } from '../services/password
 import type { Mailer } from '../mail';
 import { parse } from '../middleware/validate';
 import { requireAuth } from '../middleware/auth';
-import { createUser, updateProfile } from '../services/users';
+import { createUser, updateProfile, type User } from '../services/users';
 import { HttpError } from '../lib/http-error';
 import type { RateLimits } from '../middleware/rate-limits';
-import type { User } from '../models';
 
 function logIn(req: Request, user: User) {
   // passport regenerates the session id on login; keepSessionInfo carries the CSRF token across.

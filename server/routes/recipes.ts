@@ -31,9 +31,9 @@ import {
 } from '../services/recipes';
 import { parseRecipeFile } from '../services/recipe-import';
 import { toJsonLd } from '../services/recipe-export';
-import { MAX_PHOTO_BYTES, processPhoto, readPhoto, removePhoto, storePhoto } from '../services/photo-storage';
+import { MAX_PHOTO_BYTES, readPhoto } from '../services/photo-storage';
+import { replaceRecipePhoto } from '../services/recipe-photo';
 import { HttpError, badRequest } from '../lib/http-error';
-import { Recipe } from '../models';
 
 const MAX_IMPORT_BYTES = 1024 * 1024;
 
@@ -147,17 +147,8 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig) {
 
   router.post('/:id/photo', singleFile(MAX_PHOTO_BYTES, 'photo'), async (req, res) => {
     const { id } = parse(idParam, req.params);
-    const recipe = await Recipe.findOne({ where: { id, ownerId: req.user!.id, deletedAt: null } });
-    if (!recipe) throw new HttpError(404, 'not_found', 'No recipe with that id.');
     if (!req.file) throw badRequest('file: attach the photo in the form field "file".', { fieldErrors: { file: ['Required.'] } });
-    const image = await processPhoto(req.file.buffer);
-    const stored = await storePhoto(config.s3, recipe.id, image);
-    const previous = recipe.photoKey;
-    recipe.photoKey = stored.key;
-    recipe.photoType = stored.type;
-    recipe.revision += 1;
-    await recipe.save();
-    if (previous) await removePhoto(config.s3, previous);
+    const recipe = await replaceRecipePhoto(config.s3, req.user!, id, req.file.buffer);
     res.status(201).json(await recipeDetail(recipe));
   });
 
