@@ -27,6 +27,10 @@ export default defineConfig({
       },
       {
         extends: true,
+        test: { name: 'component', include: ['tests/component/**/*.test.tsx'], environment: 'happy-dom', setupFiles: ['tests/setup/component.ts'] },
+      },
+      {
+        extends: true,
         test: {
           name: 'api',
           include: ['tests/api/**/*.test.ts'],
