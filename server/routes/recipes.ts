@@ -6,6 +6,7 @@ import {
   createRecipeSchema,
   createVersionSchema,
   deleteRecipeSchema,
+  exportQuerySchema,
   idParam,
   recipeListQuerySchema,
   updateRecipeSchema,
@@ -136,8 +137,8 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig) {
     const { id } = parse(idParam, req.params);
     const recipe = await findReadableRecipe(req.user!, id);
     const versions = await listVersions(recipe);
-    const number = req.query.version ? Number(req.query.version) : versions.at(-1)?.number;
-    if (!number || !Number.isInteger(number)) throw badRequest('version must be a version number.');
+    const number = parse(exportQuerySchema, req.query).version ?? versions.at(-1)?.number;
+    if (!number) throw badRequest('version: this recipe has no version yet.');
     const version = await getVersion(recipe, number);
     const slug = recipe.title.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'recipe';
     res.type('application/ld+json');

@@ -1,5 +1,5 @@
 import { PasswordReset, User } from '../models';
-import { hashToken, newToken } from './coaching';
+import { hashToken, newToken } from './tokens';
 import { hashPassword } from './users';
 import { mailTemplates, type Mailer } from '../mail';
 import { HttpError } from '../lib/http-error';
