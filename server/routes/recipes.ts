@@ -10,8 +10,10 @@ import {
   idParam,
   recipeListQuerySchema,
   updateRecipeSchema,
+  photoUploadFieldsSchema,
   versionParam,
 } from '../../shared/schemas/recipes';
+import { MAX_LINES } from '../../shared/schemas/analyze';
 import { parse } from '../middleware/validate';
 import { requireAuth } from '../middleware/auth';
 import { getFoodEngine } from '../services/food-engine';
@@ -30,7 +32,9 @@ import {
   updateRecipe,
   versionDetail,
 } from '../services/recipes';
-import { parseRecipeFile } from '../services/recipe-import';
+import { parseRecipeFile, type ImportedRecipe } from '../services/recipe-import';
+import { assertSafeText } from '../middleware/text-safety';
+import type { RateLimits } from '../middleware/rate-limits';
 import { toJsonLd } from '../services/recipe-export';
 import { MAX_PHOTO_BYTES, readPhoto } from '../services/photo-storage';
 import { replaceRecipePhoto } from '../services/recipe-photo';
@@ -52,7 +56,26 @@ function singleFile(maxBytes: number, what: string): RequestHandler {
     });
 }
 
-export function recipesRouter(sequelize: Sequelize, config: AppConfig) {
+/** An imported file passes the same schema and limits as a typed recipe; failures name the field in the file. */
+function importedRecipeInput(imported: ImportedRecipe) {
+  const input = {
+    title: imported.title,
+    servings: imported.servings,
+    notes: imported.notes,
+    method: imported.method,
+    // One line past the limit is enough for the schema to refuse; no need to build 100,000 objects.
+    lines: imported.ingredients.slice(0, MAX_LINES + 1).map((line) => ({ input: line })),
+  };
+  try {
+    assertSafeText(input);
+    return parse(createRecipeSchema, input);
+  } catch (error) {
+    if (error instanceof HttpError) throw new HttpError(400, error.code, `file: the recipe in this file cannot be saved as it is — ${error.message}`, error.details);
+    throw error;
+  }
+}
+
+export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: RateLimits) {
   const router = Router();
   router.use(requireAuth);
   const engine = () => getFoodEngine(sequelize);
@@ -68,16 +91,10 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig) {
     res.status(201).json(await recipeDetail(recipe));
   });
 
-  router.post('/import', singleFile(MAX_IMPORT_BYTES, 'recipe file'), async (req, res) => {
+  router.post('/import', limits.recipeImports, singleFile(MAX_IMPORT_BYTES, 'recipe file'), async (req, res) => {
     if (!req.file) throw badRequest('file: attach the recipe in the form field "file".', { fieldErrors: { file: ['Required.'] } });
     const imported = parseRecipeFile(req.file.buffer);
-    const recipe = await createRecipe(sequelize, await engine(), req.user!, {
-      title: imported.title,
-      servings: imported.servings,
-      notes: imported.notes,
-      method: imported.method,
-      lines: imported.ingredients.map((input) => ({ input })),
-    });
+    const recipe = await createRecipe(sequelize, await engine(), req.user!, importedRecipeInput(imported));
     res.status(201).json({ ...(await recipeDetail(recipe)), importedFrom: imported.format });
   });
 
@@ -148,8 +165,8 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig) {
 
   router.post('/:id/photo', singleFile(MAX_PHOTO_BYTES, 'photo'), async (req, res) => {
     const { id } = parse(idParam, req.params);
-    if (!req.file) throw badRequest('file: attach the photo in the form field "file".', { fieldErrors: { file: ['Required.'] } });
-    const recipe = await replaceRecipePhoto(config.s3, req.user!, id, req.file.buffer);
+    const { revision } = parse(photoUploadFieldsSchema, req.body);
+    const recipe = await replaceRecipePhoto(sequelize, config.s3, req.user!, id, revision, req.file?.buffer);
     res.status(201).json(await recipeDetail(recipe));
   });
 
