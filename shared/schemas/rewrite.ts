@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { Nutrients } from '../nutrition';
-import type { ChangePurpose, SolverInfo, Suggestion, TargetName } from '../rewrite/types';
+import type { Change, Plan, PlanLine, SolverInfo, Suggestion, TargetName } from '../rewrite/types';
 import type { FoodSummary } from './analyze';
 import { DIET_FLAGS } from '../food';
 import { lineInputSchema, MAX_LINES, MAX_TEXT_CHARS, servingsSchema } from './analyze';
@@ -53,34 +53,12 @@ export type RewriteRequest = z.infer<typeof rewriteRequestSchema>;
 // --- POST /api/rewrite answers. The solver's own types (shared/rewrite/types.ts) name foods by id only;
 // the server answers with the catalogue's food summary in their place.
 
-export interface RewritePlanLine {
-  /** the line's position in the recipe as sent */
-  index: number;
-  food: FoodSummary;
-  grams: number;
-  volumeMl: number;
-  nutrients: Nutrients;
-}
+/** A plan line as answered: the line's position in the recipe as sent, and its food's summary. */
+export type RewritePlanLine = Omit<PlanLine, 'food'> & { food: FoodSummary };
 
-export interface RewritePlan {
-  lines: RewritePlanLine[];
-  totals: Nutrients;
-  perServing: Nutrients;
-  volumeMl: number;
-}
+export type RewritePlan = Omit<Plan, 'lines'> & { lines: RewritePlanLine[] };
 
-export interface RewriteChange {
-  line: number;
-  from: FoodSummary;
-  to: FoodSummary;
-  gramsBefore: number;
-  gramsAfter: number;
-  swapped: boolean;
-  approvedBy?: string;
-  note?: string;
-  serves: ChangePurpose[];
-  reason: string;
-}
+export type RewriteChange = Omit<Change, 'from' | 'to'> & { from: FoodSummary; to: FoodSummary };
 
 /** A line the rewrite left out: no food matched, or no amount. */
 export interface SkippedLine {
