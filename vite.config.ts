@@ -31,7 +31,18 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node' },
+        // Budgets only (no timing is asserted): a loaded CI machine can take seconds to build the catalogue.
+        test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node', testTimeout: 30_000, hookTimeout: 120_000 },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'component',
+          include: ['tests/component/**/*.test.tsx'],
+          environment: 'happy-dom',
+          setupFiles: ['tests/setup/component.ts'],
+          testTimeout: 30_000,
+        },
       },
       {
         extends: true,

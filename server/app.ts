@@ -21,10 +21,15 @@ import { analyzeRouter } from './routes/analyze';
 import { foodsRouter } from './routes/foods';
 import { rewriteRouter } from './routes/rewrite';
 import { recipesRouter } from './routes/recipes';
-import { clientsRouter, commentsRouter, customFoodsRoute, invitationsRouter, myCoachRouter, outboxQuery, swapsRouter, targetsRouter } from './routes/coaching';
-import { requireRole } from './middleware/auth';
+import { swapsRouter } from './routes/swaps';
+import { customFoodsRoute } from './routes/custom-foods';
+import { clientsRouter } from './routes/clients';
+import { invitationsRouter } from './routes/invitations';
+import { myCoachRouter } from './routes/my-coach';
+import { targetsRouter } from './routes/targets';
+import { commentsRouter } from './routes/comments';
+import { outboxRouter } from './routes/outbox';
 import { prepRouter, shoppingListsRouter } from './routes/prep';
-import { parse } from './middleware/validate';
 import { rejectUnsafeText } from './middleware/text-safety';
 import { createCsrf } from './middleware/csrf';
 import { HttpError } from './lib/http-error';
@@ -117,13 +122,7 @@ export function createApp(context: AppContext) {
   api.use('/invitations', invitationsRouter(sequelize));
   api.use('/coach', myCoachRouter(sequelize));
   api.use('/targets', targetsRouter());
-  if (config.env !== 'production' && context.mail?.outbox) {
-    const outbox = context.mail.outbox;
-    api.get('/dev/outbox', requireRole('admin'), async (req, res) => {
-      const { limit } = parse(outboxQuery, req.query);
-      res.json({ messages: await outbox(limit) });
-    });
-  }
+  if (config.env !== 'production' && context.mail?.outbox) api.use('/dev/outbox', outboxRouter(context.mail.outbox));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -9,6 +9,7 @@ import { seed } from './seeders';
 import { getFoodEngine } from './services/food-engine';
 import { closeSolverPool } from './services/solver-pool';
 import { createMailContext } from './mail-context';
+import { onFallback } from '../shared/fallbacks';
 
 // Sequelize models are bound to one instance per process, so apps in one process (tests) share it.
 const shared = new Map<string, { sequelize: Sequelize; users: number }>();
@@ -60,6 +61,8 @@ export async function startServer(config: AppConfig) {
   const mail = await createMailContext(config, process.env, services.sessionPool);
   const app = createApp({ config, ...services, mail: mail.mail });
   await getFoodEngine(services.sequelize);
+  // A fallback means a bug was caught on a user's line: say where, so it gets fixed.
+  const stopFallbackLog = onFallback((site, error) => console.warn(`fallback taken at ${site}:`, error));
   const server = await new Promise<Server>((resolve) => {
     const s = app.listen(config.port, config.host, () => resolve(s));
   });
@@ -69,6 +72,7 @@ export async function startServer(config: AppConfig) {
     services,
     mail,
     close: async () => {
+      stopFallbackLog();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await mail.close();
       await services.close();

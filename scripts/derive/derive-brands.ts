@@ -80,7 +80,7 @@ for (const row of readFoodwebRows()) {
 const lowercaseWords = new Set<string>();
 const lowercaseText: string[] = [];
 for (const d of des.values()) {
-  const lower = d.longDesc.split(/[^A-Za-z0-9'\-]+/).filter((w) => /^[a-z0-9'\-]+$/.test(w));
+  const lower = d.longDesc.split(/[^A-Za-z0-9'-]+/).filter((w) => /^[a-z0-9'-]+$/.test(w));
   for (const w of lower) lowercaseWords.add(w.toUpperCase());
   lowercaseText.push(` ${lower.join(' ').toUpperCase()} `);
 }

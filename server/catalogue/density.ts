@@ -1,15 +1,16 @@
 import { ROLES, type Portion, type Role } from '../../shared/food';
+import { ML_PER_CUP, ML_PER_FL_OZ, ML_PER_GALLON, ML_PER_PINT, ML_PER_QUART, ML_PER_TBSP, ML_PER_TSP } from '../../shared/units';
 import roleDensities from '../../data/role-densities.json';
 
-/** US customary volume units in mL, exact by definition (NIST Handbook 44, Appendix C). */
+/** US customary volume units in mL, exact by definition (NIST Handbook 44, Appendix C; one table in shared/units.ts). */
 export const ML_PER_UNIT = {
-  cup: 236.5882365,
-  tbsp: 14.78676478125,
-  tsp: 4.92892159375,
-  flOz: 29.5735295625,
-  pint: 473.176473,
-  quart: 946.352946,
-  gallon: 3785.411784,
+  cup: ML_PER_CUP,
+  tbsp: ML_PER_TBSP,
+  tsp: ML_PER_TSP,
+  flOz: ML_PER_FL_OZ,
+  pint: ML_PER_PINT,
+  quart: ML_PER_QUART,
+  gallon: ML_PER_GALLON,
   liter: 1000,
   ml: 1,
 } as const;

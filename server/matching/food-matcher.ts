@@ -12,6 +12,7 @@
  * mixed dishes). Brand-named and restaurant foods are never matched automatically.
  */
 import type { CatalogueFood } from '../../shared/food';
+import { recordFallback } from '../../shared/fallbacks';
 import {
   aliasVocabulary,
   buildAliasIndex,
@@ -530,7 +531,8 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
           if (alt.food && alt.confidence > result.confidence) result = alt;
         }
       }
-    } catch {
+    } catch (error) {
+      recordFallback('food-match', error);
       result = { food: null, confidence: 0, alternatives: [], via: 'none' };
     }
     if (remembered.size >= REMEMBERED_MATCHES) remembered.clear();
@@ -552,7 +554,8 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
         out.push({ food: index.foods[r.position].food, score: Math.min(MAX_PARTIAL_CONFIDENCE, r.score) });
       }
       return out.slice(0, n);
-    } catch {
+    } catch (error) {
+      recordFallback('food-search', error);
       return [];
     }
   }

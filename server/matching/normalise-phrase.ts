@@ -7,7 +7,7 @@ import { singular } from './singular';
 /** Lowercase, accents folded, apostrophes dropped: "Confectioners’ Jalapeño" → "confectioners jalapeno". */
 export function foldText(text: string): string {
   // Most text is plain ASCII: only the rest needs Unicode decomposition.
-  const base = /[^\x00-\x7f]/.test(text) ? text.normalize('NFD').replace(/\p{M}+/gu, '') : text;
+  const base = /\P{ASCII}/u.test(text) ? text.normalize('NFD').replace(/\p{M}+/gu, '') : text;
   return base.toLowerCase().replace(/['’`´]/g, '');
 }
 

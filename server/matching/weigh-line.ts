@@ -11,6 +11,7 @@
  * Nothing here throws or returns NaN, a negative or an infinite number.
  */
 import type { CatalogueFood, Portion } from '../../shared/food';
+import { recordFallback } from '../../shared/fallbacks';
 import type { ParsedLine } from '../../shared/parse-line';
 import { massToGrams, unitKind, volumeToMl } from '../../shared/units';
 import { inchesOf, parseMeasure, sizeWordOf, stem, type MeasureInfo, type SizeWord } from './measure-text';
@@ -210,7 +211,8 @@ function result(grams: number, volumeMl: number | null, portionUsed: string | nu
 export function weighLine(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion[], opts: WeighOptions = {}): WeighedLine {
   try {
     return weigh(parsed, food, portions ?? [], opts);
-  } catch {
+  } catch (error) {
+    recordFallback('weigh-line', error);
     return result(0, null, null, ['This line could not be weighed: set its amount in grams.']);
   }
 }

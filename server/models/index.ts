@@ -1,7 +1,11 @@
 import type { Sequelize } from 'sequelize';
 import { User, initUser } from './user';
 import { Recipe, RecipeVersion, initRecipes } from './recipe';
-import { Swap, Invitation, ClientTarget, VersionComment, PasswordReset, initCoaching } from './coaching';
+import { Swap, initSwap } from './swap';
+import { Invitation, initInvitation } from './invitation';
+import { ClientTarget, initClientTarget } from './client-target';
+import { VersionComment, initVersionComment } from './version-comment';
+import { PasswordReset, initPasswordReset } from './password-reset';
 
 export { User, Recipe, RecipeVersion, Swap, Invitation, ClientTarget, VersionComment, PasswordReset };
 
@@ -12,6 +16,10 @@ export function initModels(sequelize: Sequelize) {
   if (initialised === sequelize) return;
   initUser(sequelize);
   initRecipes(sequelize);
-  initCoaching(sequelize);
+  initSwap(sequelize);
+  initInvitation(sequelize);
+  initClientTarget(sequelize);
+  initVersionComment(sequelize);
+  initPasswordReset(sequelize);
   initialised = sequelize;
 }

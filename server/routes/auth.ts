@@ -8,10 +8,9 @@ import { confirmPasswordReset, requestPasswordResetInBackground } from '../servi
 import type { Mailer } from '../mail';
 import { parse } from '../middleware/validate';
 import { requireAuth } from '../middleware/auth';
-import { createUser, updateProfile } from '../services/users';
+import { createUser, updateProfile, type User } from '../services/users';
 import { HttpError } from '../lib/http-error';
 import type { RateLimits } from '../middleware/rate-limits';
-import type { User } from '../models';
 
 export function authRouter({ sequelize, limits, csrf, mail }: { sequelize: Sequelize; limits: RateLimits; csrf: Csrf; mail: { mailer: Mailer; appUrl: string } }) {
   const router = Router();

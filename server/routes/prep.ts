@@ -6,8 +6,7 @@ import { parse } from '../middleware/validate';
 import { requireAuth } from '../middleware/auth';
 import { getFoodEngine } from '../services/food-engine';
 import { findReadableRecipe, getVersion } from '../services/recipes';
-import { prepFor, shoppingList, shoppingText } from '../services/prep';
-import { scaleVersion } from '../../shared/prep';
+import { buildShoppingList, prepFor } from '../services/prep';
 
 export function prepRouter(sequelize: Sequelize) {
   const router = Router({ mergeParams: true });
@@ -27,18 +26,7 @@ export function shoppingListsRouter(sequelize: Sequelize) {
   router.use(requireAuth);
   router.post('/', async (req, res) => {
     const input = parse(shoppingListSchema, req.body);
-    const engine = await getFoodEngine(sequelize);
-    const batches = [];
-    const sources = [];
-    for (const item of input.items) {
-      const recipe = await findReadableRecipe(req.user!, item.recipeId);
-      const version = await getVersion(recipe, item.versionNumber);
-      const plan = scaleVersion({ servings: version.servings, lines: version.lines.map((l) => ({ foodId: l.foodId, name: l.foodName ?? l.input, grams: l.grams })) }, item.portions);
-      batches.push(plan.batch);
-      sources.push({ recipeId: recipe.id, title: recipe.title, versionNumber: version.number, portions: item.portions });
-    }
-    const items = shoppingList(engine, batches, input.unitSystem ?? req.user!.unitSystem ?? 'us');
-    res.status(201).json({ sources, items, text: shoppingText(items) });
+    res.status(201).json(await buildShoppingList(await getFoodEngine(sequelize), req.user!, input));
   });
   return router;
 }

@@ -6,6 +6,7 @@ import {
   createRecipeSchema,
   createVersionSchema,
   deleteRecipeSchema,
+  exportQuerySchema,
   idParam,
   recipeListQuerySchema,
   updateRecipeSchema,
@@ -27,7 +28,6 @@ import {
   listVersions,
   recipeDetail,
   restoreVersion,
-  setRecipePhoto,
   undeleteRecipe,
   updateRecipe,
   versionDetail,
@@ -36,9 +36,9 @@ import { parseRecipeFile, type ImportedRecipe } from '../services/recipe-import'
 import { assertSafeText } from '../middleware/text-safety';
 import type { RateLimits } from '../middleware/rate-limits';
 import { toJsonLd } from '../services/recipe-export';
-import { MAX_PHOTO_BYTES, processPhoto, readPhoto, removePhoto, storePhoto } from '../services/photo-storage';
+import { MAX_PHOTO_BYTES, readPhoto } from '../services/photo-storage';
+import { replaceRecipePhoto } from '../services/recipe-photo';
 import { HttpError, badRequest } from '../lib/http-error';
-import { Recipe } from '../models';
 
 const MAX_IMPORT_BYTES = 1024 * 1024;
 
@@ -154,8 +154,8 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
     const { id } = parse(idParam, req.params);
     const recipe = await findReadableRecipe(req.user!, id);
     const versions = await listVersions(recipe);
-    const number = req.query.version ? Number(req.query.version) : versions.at(-1)?.number;
-    if (!number || !Number.isInteger(number)) throw badRequest('version must be a version number.');
+    const number = parse(exportQuerySchema, req.query).version ?? versions.at(-1)?.number;
+    if (!number) throw badRequest('version: this recipe has no version yet.');
     const version = await getVersion(recipe, number);
     const slug = recipe.title.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'recipe';
     res.type('application/ld+json');
@@ -166,20 +166,8 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
   router.post('/:id/photo', singleFile(MAX_PHOTO_BYTES, 'photo'), async (req, res) => {
     const { id } = parse(idParam, req.params);
     const { revision } = parse(photoUploadFieldsSchema, req.body);
-    const owned = await Recipe.findOne({ where: { id, ownerId: req.user!.id, deletedAt: null } });
-    if (!owned) throw new HttpError(404, 'not_found', 'No recipe with that id.');
-    if (!req.file) throw badRequest('file: attach the photo in the form field "file".', { fieldErrors: { file: ['Required.'] } });
-    const image = await processPhoto(req.file.buffer);
-    const stored = await storePhoto(config.s3, owned.id, image);
-    let saved: Awaited<ReturnType<typeof setRecipePhoto>>;
-    try {
-      saved = await setRecipePhoto(sequelize, req.user!, id, revision, stored);
-    } catch (error) {
-      await removePhoto(config.s3, stored.key);
-      throw error;
-    }
-    if (saved.previousKey) await removePhoto(config.s3, saved.previousKey);
-    res.status(201).json(await recipeDetail(saved.recipe));
+    const recipe = await replaceRecipePhoto(sequelize, config.s3, req.user!, id, revision, req.file?.buffer);
+    res.status(201).json(await recipeDetail(recipe));
   });
 
   router.get('/:id/photo', async (req, res) => {

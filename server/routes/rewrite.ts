@@ -1,10 +1,10 @@
 import { Router, type RequestHandler } from 'express';
 import type { Sequelize } from 'sequelize';
-import { rewriteRequestSchema } from '../../shared/schemas/rewrite';
+import { rewriteQuerySchema, rewriteRequestSchema } from '../../shared/schemas/rewrite';
 import { parse } from '../middleware/validate';
 import { getFoodEngine } from '../services/food-engine';
 import { rewriteRecipe } from '../services/rewrite';
-import { publishedSwapsForClient as approvedSwapsFor } from '../services/coaching';
+import { publishedSwapsForClient as approvedSwapsFor } from '../services/swaps';
 import { canSeeFood } from '../services/custom-foods';
 import type { StoredFood } from '../services/catalogue';
 
@@ -12,9 +12,9 @@ export function rewriteRouter(sequelize: Sequelize, limit: RequestHandler) {
   const router = Router();
   router.post('/', limit, async (req, res) => {
     const input = parse(rewriteRequestSchema, req.body);
+    const { explain } = parse(rewriteQuerySchema, req.query);
     const engine = await getFoodEngine(sequelize);
     const approvedSwaps = await approvedSwapsFor(req.user ?? null);
-    const explain = req.query.explain === '1' || req.query.explain === 'true';
     const canUse = (food: unknown) => canSeeFood(food as StoredFood, req.user ?? null);
     res.json(await rewriteRecipe(engine, input, { approvedSwaps, canUse }, explain));
   });

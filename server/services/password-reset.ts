@@ -1,6 +1,6 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { PasswordReset, User } from '../models';
-import { hashToken, newToken } from './coaching';
+import { hashToken, newToken } from './tokens';
 import { hashPassword } from './users';
 import { mailTemplates, type Mailer } from '../mail';
 import { HttpError } from '../lib/http-error';

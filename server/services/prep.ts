@@ -6,8 +6,9 @@ import { roundLabel } from '../../shared/label-rounding';
 import { purchaseHint } from '../../shared/purchase-hint';
 import type { FoodEngine } from './food-engine';
 import { foodSummary } from './foods';
-import { computeVersion } from './recipes';
+import { computeVersion, findReadableRecipe, getVersion } from './recipes';
 import { badRequest } from '../lib/http-error';
+import type { ShoppingListInput } from '../../shared/schemas/prep';
 
 function prepLines(version: RecipeVersion): PrepLine[] {
   return version.lines.map((l) => ({ foodId: l.foodId, name: l.foodName ?? l.input, grams: l.grams }));
@@ -39,6 +40,21 @@ export function shoppingText(items: ReturnType<typeof shoppingList>) {
 }
 
 /** Everything a cook needs to take a saved version to the kitchen for a batch of `portions`. */
+/** One list for several versions, each scaled to its portions, in the viewer's units unless the input names them. */
+export async function buildShoppingList(engine: FoodEngine, viewer: User, input: ShoppingListInput) {
+  const batches = [];
+  const sources = [];
+  for (const item of input.items) {
+    const recipe = await findReadableRecipe(viewer, item.recipeId);
+    const version = await getVersion(recipe, item.versionNumber);
+    const plan = scaleVersion({ servings: version.servings, lines: prepLines(version) }, item.portions);
+    batches.push(plan.batch);
+    sources.push({ recipeId: recipe.id, title: recipe.title, versionNumber: version.number, portions: item.portions });
+  }
+  const items = shoppingList(engine, batches, input.unitSystem ?? viewer.unitSystem ?? 'us');
+  return { sources, items, text: shoppingText(items) };
+}
+
 export function prepFor(engine: FoodEngine, recipe: Recipe, version: RecipeVersion, portions: number, viewer: User) {
   let plan;
   try {

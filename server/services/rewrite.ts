@@ -1,4 +1,4 @@
-import type { RewriteRequest } from '../../shared/schemas/rewrite';
+import type { InfeasibleDetails, RewriteRequest, RewriteResponse, SkippedLine } from '../../shared/schemas/rewrite';
 import type { RewriteLine, RewriteResult, Plan, Change, FoodRef } from '../../shared/rewrite/types';
 import { RewriteSolverError } from '../../shared/rewrite/solve-log';
 import type { FoodEngine } from './food-engine';
@@ -32,7 +32,7 @@ function publicChange(engine: FoodEngine, change: Change) {
  * Analyses the recipe, builds each line's candidates and solves the rewrite in the worker pool.
  * Lines with no matched food or no weight cannot take part; they are listed in `skippedLines`.
  */
-export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, viewer: RewriteViewer, explain: boolean) {
+export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, viewer: RewriteViewer, explain: boolean): Promise<RewriteResponse> {
   const lines = requestLines(input);
   const locked = new Set(input.lockedLines ?? []);
   for (const index of locked) {
@@ -46,7 +46,7 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
     approved: viewer.approvedSwaps,
   };
   const modelLines: RewriteLine[] = [];
-  const skippedLines: { line: number; input: string; reason: string }[] = [];
+  const skippedLines: SkippedLine[] = [];
   analysis.lines.forEach((line, index) => {
     if (!line.matchedFood) return skippedLines.push({ line: index, input: line.input, reason: 'no food matched' });
     if (line.grams <= 0) return skippedLines.push({ line: index, input: line.input, reason: 'no amount' });
@@ -93,7 +93,7 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
       closest: publicPlan(engine, result.closest),
       skippedLines,
       solver: result.solver,
-    });
+    } satisfies InfeasibleDetails);
   }
   return {
     status: result.status,

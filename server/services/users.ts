@@ -4,6 +4,8 @@ import { User } from '../models';
 import { conflict, notFound } from '../lib/http-error';
 import type { RegisterInput, UpdateMeInput, UserRole } from '../../shared/schemas/auth';
 
+export type { User };
+
 export const BCRYPT_COST = 11;
 
 export async function hashPassword(password: string) {

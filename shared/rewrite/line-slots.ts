@@ -1,4 +1,3 @@
-import type { Nutrients } from '../nutrition';
 import { keptCandidates } from './candidate-pruning';
 import type { ResolvedOptions } from './rewrite-options';
 import type { TargetRow } from './targets';

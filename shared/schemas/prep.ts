@@ -15,3 +15,5 @@ export const shoppingListSchema = z.object({
     .max(20, { message: 'At most 20 versions in one list.' }),
   unitSystem: z.enum(['us', 'metric']).optional(),
 });
+
+export type ShoppingListInput = z.output<typeof shoppingListSchema>;

@@ -76,6 +76,15 @@ export const recipeListQuerySchema = z.object({
 export const idParam = z.object({ id: z.coerce.number({ message: 'id must be a number.' }).int().positive({ message: 'id must be positive.' }) });
 export const versionParam = idParam.extend({ number: z.coerce.number({ message: 'number must be a number.' }).int().min(1) });
 
+/** `?version=N` picks the version to export; without it, the latest. */
+export const exportQuerySchema = z.object({
+  version: z.coerce
+    .number({ message: 'version must be a version number.' })
+    .int({ message: 'version must be a version number.' })
+    .min(1, { message: 'version must be a version number.' })
+    .optional(),
+});
+
 export interface VersionSummary {
   number: number;
   kind: VersionKind;

@@ -1,4 +1,7 @@
 import { z } from 'zod';
+import type { Nutrients } from '../nutrition';
+import type { Change, Plan, PlanLine, SolverInfo, Suggestion, TargetName } from '../rewrite/types';
+import type { FoodSummary } from './analyze';
 import { DIET_FLAGS } from '../food';
 import { lineInputSchema, MAX_LINES, MAX_TEXT_CHARS, servingsSchema } from './analyze';
 
@@ -19,6 +22,14 @@ export const targetsSchema = z.object({
 });
 export type TargetsInput = z.infer<typeof targetsSchema>;
 
+/** `?explain=1` (or `true`) asks for the solved model as CPLEX LP text; `0`/`false` or nothing does not. */
+export const rewriteQuerySchema = z.object({
+  explain: z
+    .enum(['1', 'true', '0', 'false'], { message: 'explain must be 1, true, 0 or false.' })
+    .optional()
+    .transform((v) => v === '1' || v === 'true'),
+});
+
 export const OBJECTIVES = ['closest', 'max-protein', 'min-kcal'] as const;
 
 export const rewriteRequestSchema = z
@@ -38,3 +49,40 @@ export const rewriteRequestSchema = z
   })
   .refine((v) => v.text !== undefined || v.lines !== undefined, { message: 'Send the recipe as text or as lines.', path: ['text'] });
 export type RewriteRequest = z.infer<typeof rewriteRequestSchema>;
+
+// --- POST /api/rewrite answers. The solver's own types (shared/rewrite/types.ts) name foods by id only;
+// the server answers with the catalogue's food summary in their place.
+
+/** A plan line as answered: the line's position in the recipe as sent, and its food's summary. */
+export type RewritePlanLine = Omit<PlanLine, 'food'> & { food: FoodSummary };
+
+export type RewritePlan = Omit<Plan, 'lines'> & { lines: RewritePlanLine[] };
+
+export type RewriteChange = Omit<Change, 'from' | 'to'> & { from: FoodSummary; to: FoodSummary };
+
+/** A line the rewrite left out: no food matched, or no amount. */
+export interface SkippedLine {
+  line: number;
+  input: string;
+  reason: string;
+}
+
+export interface RewriteResponse {
+  status: 'optimal';
+  before: RewritePlan;
+  after: RewritePlan;
+  changes: RewriteChange[];
+  skippedLines: SkippedLine[];
+  solver: SolverInfo;
+}
+
+/** The details of a 422 `infeasible`: how close the dish can get, and what would make it reachable. */
+export interface InfeasibleDetails {
+  bestReachable: Nutrients;
+  binding: TargetName[];
+  suggestions: Suggestion[];
+  before: RewritePlan;
+  closest: RewritePlan;
+  skippedLines: SkippedLine[];
+  solver?: SolverInfo;
+}

@@ -8,6 +8,7 @@ export function safeNextPath(next: string | null | undefined, fallback = '/'): s
   if (!next) return fallback;
   if (!next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) return fallback;
   // Control characters and backslashes have no place in our own paths.
+  // eslint-disable-next-line no-control-regex -- matching control characters is the point
   if (/[\u0000-\u001f\\]/.test(next)) return fallback;
   const pathOnly = next.split(/[?#]/, 1)[0];
   if (AUTH_PAGES.includes(pathOnly)) return fallback;

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { screenshot } from '../helpers/browser';
 import { useLiveBrowser } from '../helpers/e2e-harness';
-import { signIn } from '../helpers/e2e-session';
 import { uniqueEmail } from '../helpers/test-app';
 
 const live = useLiveBrowser();

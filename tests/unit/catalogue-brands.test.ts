@@ -18,7 +18,7 @@ beforeAll(() => {
   des = new Map(readFoodDes().map((d) => [d.ndbNo, d]));
 });
 
-describe('brand flag against FOOD_DES ManufacName and groups 21/36', () => {
+describe('regression check (data/brands.json was derived from FOOD_DES): brand flag against FOOD_DES ManufacName and groups 21/36', () => {
   it('has precision >= 95 %, recall >= 95 % overall and >= 90 % on ManufacName foods', () => {
     let tp = 0;
     let fp = 0;

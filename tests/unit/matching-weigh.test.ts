@@ -8,6 +8,7 @@ import { describe, expect, it } from 'vitest';
 import type { CatalogueFood, Portion } from '../../shared/food';
 import type { ParsedLine } from '../../shared/parse-line';
 import { UNITS } from '../../shared/units';
+import { fallbackCount, resetFallbacks } from '../../shared/fallbacks';
 import { WARNING_NO_FOOD, WARNING_SET_AMOUNT, weighLine } from '../../server/matching/weigh-line';
 
 function line(p: Partial<ParsedLine>): ParsedLine {
@@ -179,7 +180,9 @@ describe('lines without an amount', () => {
 
 describe('any line', () => {
   const units = [null, ...UNITS.map((u) => u.id), 'furlong', ''];
-  it('gives finite, non-negative grams and volume, and never throws', () => {
+  it('gives finite, non-negative grams and volume without falling back', () => {
+    // weighLine catches anything thrown inside and counts it: none may happen.
+    resetFallbacks();
     fc.assert(
       fc.property(
         fc.oneof(fc.double(), fc.constant(null), fc.constant(Number.NaN), fc.constant(Infinity), fc.constant(-3)),
@@ -199,5 +202,20 @@ describe('any line', () => {
       ),
       { numRuns: 500 },
     );
+    expect(fallbackCount('weigh-line')).toBe(0);
+  });
+
+  it('counts a fallback, and asks for grams, when weighing throws inside', () => {
+    resetFallbacks();
+    const broken = new Proxy(CHEESE_PORTIONS, {
+      get() {
+        throw new Error('portion table broken');
+      },
+    });
+    const w = weighLine(line({ quantity: 1, unit: 'cup' }), food(), broken);
+    expect(w.grams).toBe(0);
+    expect(w.warnings.join(' ')).toMatch(/grams/);
+    expect(fallbackCount('weigh-line')).toBe(1);
+    resetFallbacks();
   });
 });

@@ -17,11 +17,18 @@
  *   "c", "cup", "cups" alike; a label no unit table knows counts as a miss);
  * - name: token overlap F1 between the labelled name and the parsed name, after lower-casing,
  *   dropping punctuation and folding plurals ("leaves" ~ "leaf"), averaged over the lines.
+ *
+ * The scored lines are split by labelledHalves() into a tuning half and a held-out half; both figures
+ * are reported and both must pass. (The split came after the parser was written, so earlier tuning saw
+ * every line; from now on, look at misses only with PARSE_MISSES on the tuning half.) Measured at the
+ * split: tuning 2,078 lines — quantity 99.95 %, unit 99.95 %, name 98.41 %; held-out 2,123 lines —
+ * 100.00 %, 99.95 %, 98.60 %. Thresholds are those figures less a margin of a few lines (one line is
+ * about 0.05 % of a half), so a real regression fails and a one-line wobble does not.
  */
 import { describe, expect, it } from 'vitest';
 import { parseLine } from '../../shared/parse-line';
 import { normaliseUnit } from '../../shared/units';
-import { readLabelledLines } from '../helpers/reference-data';
+import { labelledHalves, readLabelledLines } from '../helpers/reference-data';
 
 const WORD_QUANTITIES: Record<string, number> = { one: 1, two: 2, three: 3, four: 4, half: 0.5, dozen: 12 };
 
@@ -111,12 +118,13 @@ describe('parseLine accuracy on labelled lines (tastecooking-2024.csv, ingredien
     expect(scored.length).toBeGreaterThan(4000);
   });
 
-  it('meets the accuracy thresholds: quantity ≥ 95 %, unit ≥ 95 %, name token overlap ≥ 85 %', () => {
+  /** Quantity and unit exact-hit rates and mean name token overlap, in per cent. */
+  function score(lines: Labelled[]) {
     let quantityHits = 0;
     let unitHits = 0;
     let nameOverlap = 0;
     const misses: string[] = [];
-    for (const line of scored) {
+    for (const line of lines) {
       const parsed = parseLine(line.input);
       const quantityOk = parsed.quantity !== null && Math.abs(parsed.quantity - line.quantity) < 1e-9;
       const expectedUnit = normaliseUnit(line.unit);
@@ -125,23 +133,32 @@ describe('parseLine accuracy on labelled lines (tastecooking-2024.csv, ingredien
       if (quantityOk) quantityHits++;
       if (unitOk) unitHits++;
       nameOverlap += f1;
-      if (process.env.PARSE_MISSES && (!quantityOk || !unitOk || f1 < 0.5)) {
-        misses.push(
-          `${line.input} | want ${line.quantity} ${line.unit} "${line.name}" | got ${parsed.quantity} ${parsed.unit} "${parsed.name}"`,
-        );
+      if (!quantityOk || !unitOk || f1 < 0.5) {
+        misses.push(`${line.input} | want ${line.quantity} ${line.unit} "${line.name}" | got ${parsed.quantity} ${parsed.unit} "${parsed.name}"`);
       }
     }
-    const n = scored.length;
-    const quantityPct = (100 * quantityHits) / n;
-    const unitPct = (100 * unitHits) / n;
-    const namePct = (100 * nameOverlap) / n;
-    if (misses.length) console.log(misses.join('\n'));
-    console.log(
-      `parse-line accuracy over ${n} single-quantity single-unit lines: ` +
-        `quantity ${quantityPct.toFixed(2)} %, unit ${unitPct.toFixed(2)} %, name token overlap ${namePct.toFixed(2)} %`,
-    );
-    expect(quantityPct).toBeGreaterThanOrEqual(95);
-    expect(unitPct).toBeGreaterThanOrEqual(95);
-    expect(namePct).toBeGreaterThanOrEqual(85);
+    const n = lines.length;
+    return { n, quantity: (100 * quantityHits) / n, unit: (100 * unitHits) / n, name: (100 * nameOverlap) / n, misses };
+  }
+
+  const halves = labelledHalves(scored, (line) => line.input);
+  const tuning = score(halves.tuning);
+  const heldOut = score(halves.heldOut);
+  const describeScore = (label: string, r: ReturnType<typeof score>) =>
+    `${label} (${r.n} lines): quantity ${r.quantity.toFixed(2)} %, unit ${r.unit.toFixed(2)} %, name token overlap ${r.name.toFixed(2)} %`;
+
+  it('splits the scored lines into two halves of about the same size', () => {
+    expect(halves.tuning.length + halves.heldOut.length).toBe(scored.length);
+    expect(Math.abs(halves.tuning.length - halves.heldOut.length)).toBeLessThan(scored.length * 0.05);
+  });
+
+  it('measures what it measured: quantity ≥ 99.8 %, unit ≥ 99.8 %, name token overlap ≥ 98 % on each half', () => {
+    if (process.env.PARSE_MISSES) console.log(tuning.misses.join('\n'));
+    console.log(`parse-line accuracy, single-quantity single-unit lines\n  ${describeScore('tuning half', tuning)}\n  ${describeScore('held-out half', heldOut)}`);
+    for (const r of [tuning, heldOut]) {
+      expect(r.quantity).toBeGreaterThanOrEqual(99.8);
+      expect(r.unit).toBeGreaterThanOrEqual(99.8);
+      expect(r.name).toBeGreaterThanOrEqual(98);
+    }
   });
 });

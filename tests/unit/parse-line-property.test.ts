@@ -1,11 +1,13 @@
 /**
- * Property tests (fast-check): for any input string parseLine returns a well-formed result, never
- * throws, and never returns a NaN, infinite or negative amount.
+ * Property tests (fast-check): for any input string parseLine returns a well-formed result from its
+ * own path (its last-resort catch counts a fallback: none may happen), and never returns a NaN,
+ * infinite or negative amount.
  */
 import fc from 'fast-check';
-import { describe, expect, it } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { parseLine, type ParsedLine } from '../../shared/parse-line';
 import { UNITS, getUnit } from '../../shared/units';
+import { fallbackCount, resetFallbacks } from '../../shared/fallbacks';
 
 const SIXTY_FOUR_KB = 64 * 1024;
 
@@ -55,7 +57,10 @@ const sixtyFourKb = fc
   .map((piece) => piece.repeat(Math.ceil(SIXTY_FOUR_KB / piece.length)).slice(0, SIXTY_FOUR_KB));
 
 describe('parseLine properties (fast-check)', () => {
-  it('5,000 random lines: never throws; every amount is null or finite and ≥ 0', () => {
+  beforeEach(() => resetFallbacks());
+  afterEach(() => expect(fallbackCount('parse-line')).toBe(0));
+
+  it('5,000 random lines: no fallback; every amount is null or finite and ≥ 0', () => {
     const lines = fc.oneof(
       { arbitrary: recipeLike, weight: 40 },
       { arbitrary: anyCodePoints, weight: 25 },
@@ -72,24 +77,24 @@ describe('parseLine properties (fast-check)', () => {
       { numRuns: 5000 },
     );
     expect(sixtyFourKbSeen).toBeGreaterThan(0);
-  });
+  }, 120_000);
 
-  it('64 KB lines of every kind parse quickly and stay well formed', () => {
+  // How fast they parse is a figure of `npm run bench` (matching bench).
+  it('64 KB lines of every kind stay well formed and are flagged truncated', () => {
     for (const piece of ['1 ', '1/2 ', '½ ', '1-', '(', '1 cup flour, ', '\u0000\u0007', '🍳', '9']) {
       const input = piece.repeat(Math.ceil(SIXTY_FOUR_KB / piece.length)).slice(0, SIXTY_FOUR_KB);
-      const started = performance.now();
       const line = parseLine(input);
-      expect(performance.now() - started).toBeLessThan(1000);
       expectWellFormed(line, input);
       expect(line.flags).toContain('truncated');
     }
   });
 
-  it('non-string input never throws', () => {
+  it('non-string input is read as text (or as nothing) without a fallback', () => {
     const odd: unknown[] = [undefined, null, 42, NaN, {}, [], Symbol('x'), { toString: () => { throw new Error('no'); } }];
     for (const value of odd) {
       const line = parseLine(value);
       expect(line.quantity === null || Number.isFinite(line.quantity)).toBe(true);
+      expect(line.flags).not.toContain('unparsed');
     }
   });
 

@@ -28,7 +28,8 @@ beforeAll(() => {
 });
 
 describe('data/portions.json', () => {
-  it('holds only rows of USDA SR28 WEIGHT.txt, unchanged (NDB, amount, measure, grams)', () => {
+  // data/portions.json was copied from this WEIGHT file (scripts/derive/derive-portions.ts): regression checks of that copy.
+  it('regression check: holds only rows of USDA SR28 WEIGHT.txt, unchanged (NDB, amount, measure, grams)', () => {
     expect(file.rows.length).toBeGreaterThan(500);
     const differing: string[] = [];
     for (const r of file.rows) {
@@ -47,7 +48,7 @@ describe('data/portions.json', () => {
     expect(file.rows.filter((r) => !byNdb.has(r.ndb)).map((r) => r.ndb)).toEqual([]);
   });
 
-  it('covers every food of the alias table that SR28 gives household weights', () => {
+  it('regression check: covers every food of the alias table that SR28 gives household weights', () => {
     const withWeights = new Set([...weights.values()].map((w) => w.ndbNo));
     const curated = new Set(file.rows.map((r) => r.ndb));
     const missing = [...new Set(Object.values(DEFAULT_ALIASES.aliases))].filter((n) => withWeights.has(n) && !curated.has(n));

@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useEffectEvent, useRef, useState } from 'react';
 import { Link, useLocation, useNavigate, useSearchParams } from 'react-router';
 import { ActionToast } from '../../components/ui/action-toast';
 import { Button, buttonClasses } from '../../components/ui/button';
@@ -86,8 +86,10 @@ export function RecipeBookPage() {
   }
 
   // The settled search goes into the address, so a reload or a shared link shows the same list.
+  // Only a new settled search writes the address, not every change of the address itself.
+  const writeSearch = useEffectEvent((settled: string) => updateParams({ q: settled }));
   useEffect(() => {
-    updateParams({ q });
+    writeSearch(q);
   }, [q]);
 
   const importButton = (

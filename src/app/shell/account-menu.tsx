@@ -1,6 +1,7 @@
-import { useEffect, useId, useRef, useState } from 'react';
-import { Link, useLocation } from 'react-router';
+import { useEffect, useId, useRef } from 'react';
+import { Link } from 'react-router';
 import { ROLE_LABELS, type User } from '../../lib/user';
+import { useMenuOpen } from './use-menu-open';
 import { useSignOutAction } from './use-sign-out-action';
 
 export function initialsOf(displayName: string): string {
@@ -22,14 +23,11 @@ export function Avatar({ user }: { user: User }) {
 
 /** The signed-in person's button in the header, opening a small panel: account page and sign out. */
 export function AccountMenu({ user }: { user: User }) {
-  const [open, setOpen] = useState(false);
+  const [open, setOpen] = useMenuOpen();
   const panelId = useId();
   const rootRef = useRef<HTMLDivElement>(null);
   const buttonRef = useRef<HTMLButtonElement>(null);
-  const location = useLocation();
   const { signOut, signingOut } = useSignOutAction();
-
-  useEffect(() => setOpen(false), [location.pathname]);
 
   useEffect(() => {
     if (!open) return;
@@ -48,7 +46,7 @@ export function AccountMenu({ user }: { user: User }) {
       document.removeEventListener('pointerdown', onPointer);
       document.removeEventListener('keydown', onKey);
     };
-  }, [open]);
+  }, [open, setOpen]);
 
   return (
     <div

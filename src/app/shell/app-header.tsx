@@ -1,5 +1,5 @@
-import { useEffect, useId, useRef, useState } from 'react';
-import { Link, useLocation } from 'react-router';
+import { useEffect, useId, useRef } from 'react';
+import { Link } from 'react-router';
 import { buttonClasses } from '../../components/ui/button';
 import { ROLE_LABELS } from '../../lib/user';
 import { navItemsFor } from '../access';
@@ -7,6 +7,7 @@ import { useAuth } from '../auth-context';
 import { AccountMenu, Avatar } from './account-menu';
 import { BrandMark } from './brand-mark';
 import { NavLinks } from './nav-links';
+import { useMenuOpen } from './use-menu-open';
 import { useSignOutAction } from './use-sign-out-action';
 
 function Wordmark() {
@@ -67,12 +68,9 @@ function MobileAccount() {
 export function AppHeader() {
   const auth = useAuth();
   const items = navItemsFor(auth.user);
-  const location = useLocation();
-  const [menuOpen, setMenuOpen] = useState(false);
+  const [menuOpen, setMenuOpen] = useMenuOpen();
   const menuId = useId();
   const menuButton = useRef<HTMLButtonElement>(null);
-
-  useEffect(() => setMenuOpen(false), [location.pathname]);
 
   useEffect(() => {
     if (!menuOpen) return;
@@ -84,7 +82,7 @@ export function AppHeader() {
     };
     document.addEventListener('keydown', onKey);
     return () => document.removeEventListener('keydown', onKey);
-  }, [menuOpen]);
+  }, [menuOpen, setMenuOpen]);
 
   return (
     <header className="sticky top-0 z-40 border-b border-line bg-canvas/95 backdrop-blur-sm">

@@ -45,7 +45,7 @@ export function useKitchen(): Kitchen {
   const mutation = useAnalyzeRecipe();
   const { mutate, reset } = mutation;
   const inFlight = useRef<AbortController | null>(null);
-  const lastRequest = useRef<(() => void) | null>(null);
+  const lastRequest = useRef<{ request: AnalyzeRequest; onAnswer: (response: AnalyzeResponse) => void } | null>(null);
   const [pastesAnswered, setPastesAnswered] = useState(0);
 
   const update = useCallback((change: (s: KitchenSnapshot) => KitchenSnapshot) => {
@@ -62,7 +62,7 @@ export function useKitchen(): Kitchen {
       inFlight.current?.abort();
       const controller = new AbortController();
       inFlight.current = controller;
-      lastRequest.current = () => send(request, onAnswer);
+      lastRequest.current = { request, onAnswer };
       mutate(
         { request, signal: controller.signal },
         {
@@ -156,7 +156,10 @@ export function useKitchen(): Kitchen {
     setGrams: (key, grams) => editAndAsk((s) => ({ ...s, lines: withGrams(s.lines, key, grams) })),
     addLine: (line) => editAndAsk((s) => ({ ...s, lines: [...s.lines, { ...line, key: newLineKey() }] })),
     removeLine: (key) => editAndAsk((s) => ({ ...s, lines: withoutLine(s.lines, key) })),
-    retry: () => lastRequest.current?.(),
+    retry: () => {
+      const last = lastRequest.current;
+      if (last) send(last.request, last.onAnswer);
+    },
     clear: () => {
       inFlight.current?.abort();
       reset();

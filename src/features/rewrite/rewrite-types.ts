@@ -1,67 +1,20 @@
 /**
- * POST /api/rewrite as the client reads it. The solver's own types (shared/rewrite/types.ts) name
- * foods by id only; the server answers with the catalogue's food summary in their place.
+ * POST /api/rewrite as the client reads it: the response types live in shared/schemas/rewrite.ts, so a
+ * server change breaks the client's typecheck; here only the reading of a 422 `infeasible`.
  */
 import type { Nutrients } from '../../../shared/nutrition';
-import type { ChangePurpose, SolverInfo, Suggestion, TargetName } from '../../../shared/rewrite/types';
-import type { FoodSummary } from '../../../shared/schemas/analyze';
+import type { SolverInfo, Suggestion, TargetName } from '../../../shared/rewrite/types';
+import type { InfeasibleDetails, RewritePlan, SkippedLine } from '../../../shared/schemas/rewrite';
 import { isApiError } from '../../lib/api-client';
 
-export interface RewritePlanLine {
-  /** the line's position in the recipe as sent */
-  index: number;
-  food: FoodSummary;
-  grams: number;
-  volumeMl: number;
-  nutrients: Nutrients;
-}
-
-export interface RewritePlan {
-  lines: RewritePlanLine[];
-  totals: Nutrients;
-  perServing: Nutrients;
-  volumeMl: number;
-}
-
-export interface RewriteChange {
-  line: number;
-  from: FoodSummary;
-  to: FoodSummary;
-  gramsBefore: number;
-  gramsAfter: number;
-  swapped: boolean;
-  approvedBy?: string;
-  note?: string;
-  serves: ChangePurpose[];
-  reason: string;
-}
-
-/** A line the rewrite left out: no food matched, or no amount. */
-export interface SkippedLine {
-  line: number;
-  input: string;
-  reason: string;
-}
-
-export interface RewriteAnswer {
-  status: 'optimal';
-  before: RewritePlan;
-  after: RewritePlan;
-  changes: RewriteChange[];
-  skippedLines: SkippedLine[];
-  solver: SolverInfo;
-}
-
-/** The details of a 422 `infeasible`: how close the dish can get, and what would make it reachable. */
-export interface InfeasibleDetails {
-  bestReachable: Nutrients;
-  binding: TargetName[];
-  suggestions: Suggestion[];
-  before: RewritePlan;
-  closest: RewritePlan;
-  skippedLines: SkippedLine[];
-  solver?: SolverInfo;
-}
+export type {
+  InfeasibleDetails,
+  RewriteChange,
+  RewritePlan,
+  RewritePlanLine,
+  RewriteResponse as RewriteAnswer,
+  SkippedLine,
+} from '../../../shared/schemas/rewrite';
 
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
 

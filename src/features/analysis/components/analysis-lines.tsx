@@ -56,16 +56,17 @@ function LineRow({
 }: Omit<AnalysisLinesProps, 'lines' | 'analysedLine' | 'stale' | 'totals'> & { line: KitchenLine; index: number; analysed: AnalyzedLine | null }) {
   const [searching, setSearching] = useState(false);
   const pickerRef = useRef<HTMLSelectElement>(null);
-  const focusPicker = useRef(false);
-  // Back from a catalogue search, the keyboard lands on the line's food again.
+  // Back from a catalogue search, the keyboard lands on the line's food again: searches ended are
+  // counted in the handler and acted on once in the effect, so the search slot's callbacks touch no ref.
+  const [searchesEnded, setSearchesEnded] = useState(0);
+  const focusedAfter = useRef(0);
   useEffect(() => {
-    if (!searching && focusPicker.current) {
-      focusPicker.current = false;
-      pickerRef.current?.focus();
-    }
-  }, [searching]);
+    if (searching || searchesEnded === focusedAfter.current) return;
+    focusedAfter.current = searchesEnded;
+    pickerRef.current?.focus();
+  }, [searching, searchesEnded]);
   function endSearch() {
-    focusPicker.current = true;
+    setSearchesEnded((n) => n + 1);
     setSearching(false);
   }
   // Foods the cook picked from the catalogue stay in the picker even before the server answers.

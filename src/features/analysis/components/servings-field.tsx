@@ -8,12 +8,17 @@ const COMMIT_DELAY_MS = 500;
 export function ServingsField({ servings, onChange }: { servings: number; onChange: (servings: number) => void }) {
   const id = useId();
   const [text, setText] = useState(String(servings));
+  const [shownServings, setShownServings] = useState(servings);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const latest = useRef(servings);
 
+  // A new figure from above replaces what the box shows (adjusted while rendering, not in an effect).
+  if (shownServings !== servings) {
+    setShownServings(servings);
+    setText(String(servings));
+  }
   useEffect(() => {
     latest.current = servings;
-    setText(String(servings));
   }, [servings]);
   useEffect(() => () => void (timer.current && clearTimeout(timer.current)), []);
 

@@ -18,15 +18,17 @@ export interface ChosenFoodFieldProps {
 export function ChosenFoodField({ label, hint, food, onChange, renderFoodSearch, error }: ChosenFoodFieldProps) {
   const [searching, setSearching] = useState(false);
   // After a choice the search box goes away; keep keyboard focus in the field, on its Change button.
-  const [refocus, setRefocus] = useState(false);
+  // Counted in handlers, acted on once in the effect: the search slot's callbacks touch no ref.
+  const [returns, setReturns] = useState(0);
+  const focusedReturns = useRef(0);
   const chosenRef = useRef<HTMLDivElement>(null);
   const id = useId();
 
   useEffect(() => {
-    if (!refocus || searching || !food) return;
+    if (returns === focusedReturns.current || searching || !food) return;
+    focusedReturns.current = returns;
     chosenRef.current?.querySelector('button')?.focus();
-    setRefocus(false);
-  }, [refocus, searching, food]);
+  }, [returns, searching, food]);
   const errorId = `${id}-error`;
 
   if (!food || searching) {
@@ -39,12 +41,12 @@ export function ChosenFoodField({ label, hint, food, onChange, renderFoodSearch,
           onChoose: (chosen) => {
             onChange(chosen);
             setSearching(false);
-            setRefocus(true);
+            setReturns((n) => n + 1);
           },
           onCancel: food
             ? () => {
                 setSearching(false);
-                setRefocus(true);
+                setReturns((n) => n + 1);
               }
             : undefined,
         })}
@@ -55,7 +57,7 @@ export function ChosenFoodField({ label, hint, food, onChange, renderFoodSearch,
             className="self-start"
             onClick={() => {
               setSearching(false);
-              setRefocus(true);
+              setReturns((n) => n + 1);
             }}
           >
             Keep {food.name}

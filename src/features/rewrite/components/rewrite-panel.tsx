@@ -157,7 +157,8 @@ function RewritePanelBody({ recipe, unitSystem, signedIn, saveAction, renderFood
     },
     [recipe, mutate, form.setError],
   );
-  const submit = form.handleSubmit(run);
+  const { handleSubmit } = form;
+  const submit = useCallback(() => handleSubmit(run)(), [handleSubmit, run]);
 
   const watchedAll = useWatch({ control: form.control });
   useEffect(() => {

@@ -1,4 +1,4 @@
-import { useEffect, useState, type ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Controller, useWatch, type UseFormReturn } from 'react-hook-form';
 import { DIET_FLAGS, type DietFlag } from '../../../../shared/food';
 import type { AnalyzedLine } from '../../../../shared/schemas/analyze';
@@ -106,9 +106,12 @@ export function TargetsForm({
   const [limitsOpen, setLimitsOpen] = useState(() => OPTIONAL_FIELDS.some((f) => (form.getValues(`targets.${f.name}`) ?? '') !== ''));
   const excluded = useWatch({ control, name: 'excludedFoods' });
   const hiddenError = OPTIONAL_FIELDS.some((f) => errors.targets?.[f.name]);
-  useEffect(() => {
+  // An error in a hidden field opens the limits once, when it appears (adjusted while rendering, not in an effect).
+  const [hiddenErrorShown, setHiddenErrorShown] = useState(false);
+  if (hiddenError !== hiddenErrorShown) {
+    setHiddenErrorShown(hiddenError);
     if (hiddenError) setLimitsOpen(true);
-  }, [hiddenError]);
+  }
 
   return (
     <form

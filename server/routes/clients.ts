@@ -1,0 +1,48 @@
+import { Router } from 'express';
+import type { Sequelize } from 'sequelize';
+import { clientTargetsSchema, invitationSchema } from '../../shared/schemas/coaching';
+import { idParam } from '../../shared/schemas/recipes';
+import { parse } from '../middleware/validate';
+import { requireRole } from '../middleware/auth';
+import { clientVersions, listClients, removeClient } from '../services/clients';
+import { setClientTargets } from '../services/client-targets';
+import { invitationStatus, inviteClient, listInvitations, revokeInvitation } from '../services/invitations';
+import type { Mailer } from '../mail';
+
+export interface MailContext {
+  mailer: Mailer;
+  appUrl: string;
+}
+
+export function clientsRouter(sequelize: Sequelize, mail: MailContext) {
+  const router = Router();
+  router.use(requireRole('coach'));
+  router.get('/', async (req, res) => {
+    res.json({ clients: await listClients(req.user!), invitations: await listInvitations(req.user!) });
+  });
+  router.post('/invitations', async (req, res) => {
+    const { email } = parse(invitationSchema, req.body);
+    const inv = await inviteClient(req.user!, email, mail);
+    res.status(201).json({ id: inv.id, email: inv.email, status: invitationStatus(inv), expiresAt: inv.expiresAt.toISOString() });
+  });
+  router.delete('/invitations/:id', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    await revokeInvitation(req.user!, id);
+    res.status(204).end();
+  });
+  router.delete('/:id', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    await removeClient(req.user!, id);
+    res.status(204).end();
+  });
+  router.put('/:id/targets', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    const targets = parse(clientTargetsSchema, req.body);
+    res.json({ clientId: id, targets: await setClientTargets(req.user!, id, targets) });
+  });
+  router.get('/:id/versions', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    res.json({ versions: await clientVersions(req.user!, id) });
+  });
+  return router;
+}

@@ -1,0 +1,90 @@
+import type { Sequelize } from 'sequelize';
+import { Invitation, User } from '../models';
+import { HttpError, badRequest, forbidden, notFound } from '../lib/http-error';
+import { mailTemplates, type Mailer } from '../mail';
+import { hashToken, newToken } from './tokens';
+
+export const INVITATION_DAYS = 7;
+
+export async function inviteClient(coach: User, email: string, mail: { mailer: Mailer; appUrl: string }) {
+  const existing = await User.findOne({ where: { email } });
+  if (existing?.coachId === coach.id) throw new HttpError(409, 'conflict', `${email} is already your client.`);
+  if (existing && existing.role !== 'cook')
+    throw badRequest('email: only cook accounts can join a coach.', { fieldErrors: { email: ['Not a cook account.'] } });
+  const { token, hash } = newToken();
+  const expiresAt = new Date(Date.now() + INVITATION_DAYS * 24 * 60 * 60 * 1000);
+  const invitation = await Invitation.create({ coachId: coach.id, email, tokenHash: hash, expiresAt });
+  const link = `${mail.appUrl.replace(/\/$/, '')}/invitations/${token}`;
+  const content = mailTemplates.invitation({ coachName: coach.displayName, link, expiresAt });
+  await mail.mailer.send({ to: email, ...content });
+  return invitation;
+}
+
+export function invitationStatus(inv: Invitation): 'pending' | 'accepted' | 'expired' | 'revoked' {
+  if (inv.revokedAt) return 'revoked';
+  if (inv.acceptedAt) return 'accepted';
+  if (inv.expiresAt.getTime() < Date.now()) return 'expired';
+  return 'pending';
+}
+
+export async function listInvitations(coach: User) {
+  const list = await Invitation.findAll({ where: { coachId: coach.id }, order: [['createdAt', 'DESC']], limit: 200 });
+  return list.map((i) => ({
+    id: i.id,
+    email: i.email,
+    status: invitationStatus(i),
+    expiresAt: i.expiresAt.toISOString(),
+    createdAt: i.createdAt.toISOString(),
+  }));
+}
+
+export async function revokeInvitation(coach: User, id: number) {
+  const inv = await Invitation.findOne({ where: { id, coachId: coach.id } });
+  if (!inv) throw notFound('No invitation with that id.');
+  if (!inv.acceptedAt) {
+    inv.revokedAt = new Date();
+    await inv.save();
+  }
+}
+
+async function usableInvitation(token: string) {
+  const inv = await Invitation.findOne({ where: { tokenHash: hashToken(token) } });
+  if (!inv) throw notFound('This invitation link is not valid.');
+  const status = invitationStatus(inv);
+  if (status === 'accepted') throw new HttpError(410, 'invitation_used', 'This invitation has already been used. Ask your coach for a new one.');
+  if (status === 'expired') throw new HttpError(410, 'invitation_expired', 'This invitation has expired. Ask your coach for a new one.');
+  if (status === 'revoked') throw new HttpError(410, 'invitation_revoked', 'This invitation was withdrawn by the coach.');
+  return inv;
+}
+
+export async function describeInvitation(token: string) {
+  const inv = await usableInvitation(token);
+  const coach = await User.findByPk(inv.coachId);
+  return { coachName: coach?.displayName ?? 'A coach', email: inv.email, expiresAt: inv.expiresAt.toISOString() };
+}
+
+export async function acceptInvitation(sequelize: Sequelize, viewer: User, token: string) {
+  return sequelize.transaction(async (transaction) => {
+    const inv = await usableInvitation(token);
+    await Invitation.findOne({ where: { id: inv.id }, transaction, lock: transaction.LOCK.UPDATE });
+    if (viewer.role !== 'cook') throw forbidden('Only a cook account can join a coach. Sign in with your cook account.');
+    if (inv.email.trim().toLowerCase() !== viewer.email.trim().toLowerCase()) {
+      throw new HttpError(
+        403,
+        'invitation_other_address',
+        'This invitation was sent to a different e-mail address. Sign in with the account for that address, or ask your coach to invite the address you use here.',
+      );
+    }
+    if (viewer.coachId && viewer.coachId !== inv.coachId) {
+      throw new HttpError(409, 'conflict', 'You already have a coach. Leave them first on “My coach”, then open this link again.');
+    }
+    const [updated] = await Invitation.update(
+      { acceptedAt: new Date(), acceptedBy: viewer.id },
+      { where: { id: inv.id, acceptedAt: null, revokedAt: null }, transaction },
+    );
+    if (updated !== 1) throw new HttpError(410, 'invitation_used', 'This invitation has already been used.');
+    await User.update({ coachId: inv.coachId }, { where: { id: viewer.id }, transaction });
+    const coach = await User.findByPk(inv.coachId, { transaction });
+    return { coachId: inv.coachId, coachName: coach?.displayName ?? '' };
+  });
+}
