@@ -38,7 +38,7 @@ function finite(n: number): number {
 export type FoodVisibility = (food: CatalogueFood) => boolean;
 const catalogueOnly: FoodVisibility = (food) => food.source === 'usda-sr28';
 
-export function analyzeLine(engine: FoodEngine, line: LineInput, canUse: FoodVisibility = catalogueOnly): AnalyzedLineWithFood {
+export function analyzeLine(engine: FoodEngine<CatalogueFood>, line: LineInput, canUse: FoodVisibility = catalogueOnly): AnalyzedLineWithFood {
   const parsed: ParsedLine = parseLine(line.input);
   const warnings: string[] = [];
   const match = engine.matcher.match(parsed.name || line.input);
@@ -87,11 +87,13 @@ export function analyzeLine(engine: FoodEngine, line: LineInput, canUse: FoodVis
     warnings: [...new Set(warnings)],
     portionUsed,
     pinned: { food: line.foodId !== undefined && food?.id === line.foodId, grams: line.grams !== undefined },
+    checkMatch: Boolean(food) && !(line.foodId !== undefined && food?.id === line.foodId) && confidence < 0.6,
+    missingModifier: null,
     matchedFood: food,
   };
 }
 
-export function analyzeLines(engine: FoodEngine, lines: LineInput[], servings: number, canUse: FoodVisibility = catalogueOnly) {
+export function analyzeLines(engine: FoodEngine<CatalogueFood>, lines: LineInput[], servings: number, canUse: FoodVisibility = catalogueOnly) {
   const analyzed = lines.map((line) => analyzeLine(engine, line, canUse));
   const totals = sumNutrients(analyzed.map((l) => l.nutrients));
   return {
