@@ -425,6 +425,17 @@ function parseCleanLine(input: string): ParsedLine {
     }
   }
 
+  // "9 lasagna noodles (about 8 oz)", "6 tbsp lard (about 2 ounces)": the line's weight in a note.
+  if (quantity !== null && equivalents.length === 0 && size === null) {
+    for (const note of takeParentheticals(description).notes) {
+      if (/\b(?:from|per|makes|yields?)\b/i.test(note)) continue;
+      const mass = readAmounts(note).find((a) => unitKind(a.unit) === 'mass');
+      if (!mass) continue;
+      equivalents.push(/\beach\b|\bapiece\b/i.test(note) ? { quantity: mass.quantity * quantity, unit: mass.unit } : mass);
+      break;
+    }
+  }
+
   if (unit === 'dozen' && quantity !== null) {
     quantity *= 12;
     if (quantity2 !== null) quantity2 *= 12;
