@@ -82,6 +82,8 @@ export interface FoodMatch {
   /** the next best foods, the matched one left out */
   alternatives: CatalogueFood[];
   via: MatchVia;
+  /** words of the phrase the catalogue does not know ("xanthan gum" → ["xanthan"]) */
+  unknownWords: string[];
 }
 
 export interface MatchOptions {
@@ -490,14 +492,15 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
 
   function matchOne(phrase: string, wanted: number): FoodMatch {
     const q = prepare(phrase);
-    if (q.content.length === 0 && q.all.length === 0) return { food: null, confidence: 0, alternatives: [], via: 'none' };
+    if (q.content.length === 0 && q.all.length === 0) return { food: null, confidence: 0, alternatives: [], via: 'none', unknownWords: [] };
+    const unknownWords = q.terms.filter((t) => t.alternatives.length === 0 && !aliases.vocabulary.has(t.word)).map((t) => t.word);
     const ranked = rank(q, false, Math.max(wanted + 2, SIBLINGS_LOOKED_AT));
     const alternativesWithout = (position: number | null) =>
       ranked.filter((r) => r.position !== position).slice(0, wanted).map((r) => index.foods[r.position].food);
 
     const exact = exactAlias(q);
     if (exact !== null) {
-      return { food: index.foods[exact].food, confidence: ALIAS_EXACT_CONFIDENCE, alternatives: alternativesWithout(exact), via: 'alias' };
+      return { food: index.foods[exact].food, confidence: ALIAS_EXACT_CONFIDENCE, alternatives: alternativesWithout(exact), via: 'alias', unknownWords: [] };
     }
 
     const partial = bestPartialAlias(q, ranked);
@@ -505,12 +508,12 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
     const best = ranked[0];
     const bestScore = best ? Math.min(MAX_PARTIAL_CONFIDENCE, best.score) : 0;
     if (partial && partial.score >= bestScore && partial.score >= MATCH_CONFIDENCE_FLOOR) {
-      return { food: index.foods[partial.position].food, confidence: partial.score, alternatives: alternativesWithout(partial.position), via: 'alias' };
+      return { food: index.foods[partial.position].food, confidence: partial.score, alternatives: alternativesWithout(partial.position), via: 'alias', unknownWords };
     }
     if (best && bestScore >= MATCH_CONFIDENCE_FLOOR) {
-      return { food: index.foods[best.position].food, confidence: bestScore, alternatives: alternativesWithout(best.position), via: 'fuzzy' };
+      return { food: index.foods[best.position].food, confidence: bestScore, alternatives: alternativesWithout(best.position), via: 'fuzzy', unknownWords };
     }
-    return { food: null, confidence: bestScore, alternatives: alternativesWithout(null), via: 'none' };
+    return { food: null, confidence: bestScore, alternatives: alternativesWithout(null), via: 'none', unknownWords };
   }
 
   function match(phrase: string, opts: MatchOptions = {}): FoodMatch {
@@ -518,7 +521,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
     const text = typeof phrase === 'string' ? phrase : '';
     const key = `${wanted}\u0000${text}`;
     const hit = remembered.get(key);
-    if (hit) return { ...hit, alternatives: [...hit.alternatives] };
+    if (hit) return { ...hit, alternatives: [...hit.alternatives], unknownWords: [...hit.unknownWords] };
     let result: FoodMatch;
     try {
       result = matchOne(text, wanted);
@@ -531,11 +534,11 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
         }
       }
     } catch {
-      result = { food: null, confidence: 0, alternatives: [], via: 'none' };
+      result = { food: null, confidence: 0, alternatives: [], via: 'none', unknownWords: [] };
     }
     if (remembered.size >= REMEMBERED_MATCHES) remembered.clear();
     remembered.set(key, result);
-    return { ...result, alternatives: [...result.alternatives] };
+    return { ...result, alternatives: [...result.alternatives], unknownWords: [...result.unknownWords] };
   }
 
   function search(query: string, limit = 10): FoodSearchHit[] {

@@ -28,6 +28,10 @@ export interface WeighedLine {
 export interface WeighOptions {
   /** size word a bare count of this food means ("large" for eggs); see countDefaultFor */
   countDefault?: string | null;
+  /** volume portions of near foods, used when the food has none of its own (airy foods above all) */
+  nearPortions?: Portion[];
+  /** the line says drained: the share of the can kept, null when unknown */
+  drained?: { share: number | null } | null;
 }
 
 export const WARNING_SET_AMOUNT = 'No amount given: set an amount to weigh this line.';
@@ -225,11 +229,21 @@ function named(piece: string, nameWords: Set<string>): boolean {
 }
 
 /** Grams per mL for a food's volume, preparation considered; null when nothing gives one. */
-function densityFor(all: ReadPortion[], parsed: ParsedLine, food: CatalogueFood | null): number | null {
-  const v = bestVolumePortion(all, parsed, null);
+function densityFor(all: ReadPortion[], parsed: ParsedLine, food: CatalogueFood | null, near: Portion[]): number | null {
+  const v = bestVolumePortion(all, parsed, null) ?? bestVolumePortion(read(near), parsed, null);
   if (v && v.gPerMl > 0 && Number.isFinite(v.gPerMl)) return v.gPerMl;
   if (food && food.densityGPerMl > 0 && Number.isFinite(food.densityGPerMl)) return food.densityGPerMl;
   return null;
+}
+
+/** A can's contents after draining, when the line says drained. */
+function drainedGrams(grams: number, opts: WeighOptions, warnings: string[]): number {
+  if (!opts.drained) return grams;
+  if (opts.drained.share === null) {
+    warnings.push('No drained weight is known for this food: weighed the whole can. Give the drained weight in grams for exact figures.');
+    return grams;
+  }
+  return grams * opts.drained.share;
 }
 
 function result(grams: number, volumeMl: number | null, portionUsed: string | null, warnings: string[]): WeighedLine {
@@ -256,7 +270,7 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
   const all = read(portions);
   const unit = parsed.unit;
   const kind = unitKind(unit);
-  const density = () => densityFor(all, parsed, food);
+  const density = () => densityFor(all, parsed, food, opts.nearPortions ?? []);
   const roleDensityNote = () => {
     if (food && food.densitySource === 'role-default') {
       warnings.push(`No household volume weight for this food: used the usual density of its kind (${Number(food.densityGPerMl.toPrecision(3))} g/mL).`);
@@ -278,6 +292,11 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
     if (!food) return result(0, ml, null, [WARNING_NO_FOOD]);
     const v = bestVolumePortion(all, parsed, unit);
     if (v) return result(ml * v.gPerMl, ml, v.r.portion.label, warnings);
+    const near = bestVolumePortion(read(opts.nearPortions ?? []), parsed, unit);
+    if (near) {
+      warnings.push(`No household volume weight for this food: weighed as ${near.r.portion.label}, a near food.`);
+      return result(ml * near.gPerMl, ml, near.r.portion.label, warnings);
+    }
     if (food.densityGPerMl > 0 && Number.isFinite(food.densityGPerMl)) {
       roleDensityNote();
       return result(ml * food.densityGPerMl, ml, null, warnings);
@@ -290,7 +309,7 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
   if (size && Number.isFinite(size.quantity) && size.quantity > 0) {
     const sizeKind = unitKind(size.unit);
     if (sizeKind === 'mass') {
-      const grams = quantity * (massToGrams(size.quantity, size.unit) ?? 0);
+      const grams = drainedGrams(quantity * (massToGrams(size.quantity, size.unit) ?? 0), opts, warnings);
       if (!food) return result(grams, null, null, [WARNING_NO_FOOD]);
       const d = density();
       return result(grams, d ? grams / d : null, null, warnings);
@@ -318,7 +337,8 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
     return result(0, null, null, [`No household weight for ${what} of this food: give the amount in grams, ounces or cups.`]);
   }
   const each = chosen.r.portion.grams / chosen.r.portion.amount;
-  const grams = quantity * each;
+  const wholeCan = chosen.r.info.pieces.includes('can') && !/drain/i.test(chosen.r.portion.measure);
+  const grams = wholeCan ? drainedGrams(quantity * each, opts, warnings) : quantity * each;
   if (chosen.guessed) {
     const asked = ask.size ? `No "${ask.size}" weight` : ask.diameter !== null ? `No ${ask.diameter}-inch weight` : 'No size given';
     warnings.push(`${asked}: weighed as ${chosen.r.portion.label} (${gramsText(each)} each).`);

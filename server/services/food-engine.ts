@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
-import type { CatalogueFood } from '../../shared/food';
+import type { CatalogueFood, Portion } from '../../shared/food';
+import { nearVolumePortions } from '../matching/near-portions';
 import { readAllFoods, type StoredFood } from './catalogue';
 import { createFoodMatcher, type FoodMatcher } from '../matching/food-matcher';
 import { DEFAULT_ALIASES } from '../matching/alias-index';
@@ -13,6 +14,8 @@ export interface FoodEngine<F extends CatalogueFood = StoredFood> {
   matcher: FoodMatcher;
   /** the size word a bare count means for a food ("3 eggs" → large) */
   countDefaults: Map<number, string>;
+  /** volume portions of near foods, for foods with none of their own */
+  nearPortions: Map<number, Portion[]>;
   builtMs: number;
 }
 
@@ -49,5 +52,6 @@ export function engineFromFoods<F extends CatalogueFood>(foods: F[]): FoodEngine
   }
   const catalogue = foods.filter((f) => f.source === 'usda-sr28');
   const matcher = createFoodMatcher(catalogue, DEFAULT_ALIASES);
-  return { foods, byId: new Map(foods.map((f) => [f.id, f])), matcher, countDefaults, builtMs: performance.now() - started };
+  const nearPortions = nearVolumePortions(catalogue);
+  return { foods, byId: new Map(foods.map((f) => [f.id, f])), matcher, countDefaults, nearPortions, builtMs: performance.now() - started };
 }
