@@ -72,6 +72,8 @@ const DEFAULT_ALTERNATIVES = 5;
 /** Under this, a phrase joined with "and" or commas is tried part by part. */
 const WEAK_MATCH = 0.6;
 const REMEMBERED_MATCHES = 20_000;
+/** A part after the first one of "A, B and C" is trusted this much less than the first. */
+const LATER_PART_FACTOR = 0.65;
 
 export type MatchVia = 'alias' | 'fuzzy' | 'none';
 
@@ -528,8 +530,12 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
       if (!(result.via === 'alias' && result.confidence >= ALIAS_EXACT_CONFIDENCE)) {
         // "soy sauce or tamari", "chicken or vegetable stock", "thyme leaves and tender stems":
         // the best of the choices, the whole phrase winning ties, then the first choice.
-        for (const part of choicesIn(text, result.confidence < WEAK_MATCH)) {
+        const splitAnd = result.confidence < WEAK_MATCH;
+        const first = splitAnd ? firstPart(text) : null;
+        for (const part of choicesIn(text, splitAnd)) {
           const alt = matchOne(part, wanted);
+          // "canned plum tomatoes, juices reserved, and tomatoes": a later part is a note, not the food.
+          if (first !== null && part !== first && !orChoice(text, part)) alt.confidence *= LATER_PART_FACTOR;
           if (alt.food && alt.confidence > result.confidence) result = alt;
         }
       }
@@ -582,6 +588,16 @@ export function choicesIn(text: string, splitAnd = true): string[] {
   }
   if (splitAnd) for (const p of text.split(/\s+and\s+|\s*,\s*/i).map((x) => x.trim()).filter(Boolean)) out.push(p);
   return [...new Set(out)].filter((p) => p !== text);
+}
+
+/** The first part of "A, B and C". */
+function firstPart(text: string): string {
+  return text.split(/\s+and\s+|\s*,\s*/i)[0].trim();
+}
+
+/** True when `part` is one of the "or" choices of `text`. */
+function orChoice(text: string, part: string): boolean {
+  return /\s+or\s+|\//i.test(text) && choicesIn(text, false).includes(part);
 }
 
 function isAliasTable(t: AliasTable | Record<string, string>): t is AliasTable {

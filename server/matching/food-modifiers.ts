@@ -25,6 +25,12 @@ const WHOLE_GRAIN = [['whole', 'wheat'], ['whole', 'grain']];
 const HOT = [['hot'], ['spicy'], ['chili'], ['jalapeno'], ['cayenne'], ['chipotle'], ['pepper']];
 const TEMPERATURE_FOODS = ['water', 'milk', 'tea', 'coffee', 'broth', 'stock', 'dog', 'chocolate', 'cocoa'];
 
+const COLOURS = ['black', 'white', 'brown', 'red', 'green', 'yellow'];
+
+function colour(name: string): FoodModifier[] {
+  return [{ label: name, asks: [name], brokenBy: COLOURS.filter((c) => c !== name).map((c) => [c]) }];
+}
+
 export const FOOD_MODIFIERS: FoodModifier[] = [
   { label: 'turkey', asks: ['turkey'] },
   { label: 'chicken', asks: ['chicken'] },
@@ -53,6 +59,14 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   { label: 'spicy', asks: ['spicy'], honouredBy: HOT, neutralFor: TEMPERATURE_FOODS },
   { label: 'lean', asks: ['lean'] },
   { label: 'Italian', asks: ['italian'], neutralFor: ['parsley'] },
+  // A colour names another food only against another colour: "black rice" is not white rice, but
+  // "black olives" are SR28's ripe olives and "red onion" its onions.
+  ...colour('black'),
+  ...colour('white'),
+  ...colour('brown'),
+  ...colour('red'),
+  ...colour('green'),
+  ...colour('yellow'),
   // "fresh tarragon" matched to dried tarragon: a tenth of the water, ten times the nutrients per gram.
   { label: 'fresh', asks: ['fresh'], brokenBy: [['dried'], ['dehydrated'], ['dry']] },
 ];
@@ -93,6 +107,12 @@ function foodWords(food: { name: string }): string[] {
 export function honours(food: { name: string }, m: FoodModifier): boolean {
   const ws = foodWords(food);
   if (m.brokenBy) return !m.brokenBy.some((seq) => hasSequence(ws, seq));
+  return hasSequence(ws, m.asks) || (m.honouredBy ?? []).some((seq) => hasSequence(ws, seq));
+}
+
+/** True when a food's name carries the modifier itself ("Rice, black"), not merely no contrary word. */
+export function positivelyHonours(food: { name: string }, m: FoodModifier): boolean {
+  const ws = foodWords(food);
   return hasSequence(ws, m.asks) || (m.honouredBy ?? []).some((seq) => hasSequence(ws, seq));
 }
 

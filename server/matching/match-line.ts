@@ -8,8 +8,8 @@
  */
 import type { CatalogueFood } from '../../shared/food';
 import type { ParsedLine } from '../../shared/parse-line';
-import type { FoodMatch, FoodMatcher } from './food-matcher';
-import { modifiersAskedBy, unmetModifiers, type FoodModifier } from './food-modifiers';
+import { MATCH_CONFIDENCE_FLOOR, type FoodMatch, type FoodMatcher } from './food-matcher';
+import { modifiersAskedBy, positivelyHonours, unmetModifiers, type FoodModifier } from './food-modifiers';
 import { PREPARATION_WORDS, STOP_WORDS, words } from './normalise-phrase';
 
 /** Under this confidence a match is shown as "check this match". */
@@ -34,7 +34,7 @@ export interface LineMatch extends FoodMatch {
 /** Package units that hold a canned food. */
 const CANNED_UNITS = new Set(['can', 'jar']);
 /** What a canned food is sold as, written by the cook as if a preparation: "crushed", "diced". */
-const CANNED_FORMS = new Set(['crushed', 'diced', 'stewed', 'whole', 'peeled', 'pureed', 'puree', 'fire', 'roasted', 'chopped', 'sliced']);
+const CANNED_FORMS = new Set(['crushed', 'diced', 'stewed', 'whole', 'peeled', 'pureed', 'puree', 'fire', 'roasted', 'sliced']);
 
 /** Phrases that could be many foods: "cheese", "oil", "neutral oil", "nuts". */
 const GENERIC_WORDS = new Set(['cheese', 'oil', 'seed', 'nut', 'meat', 'fish', 'bean', 'sauce', 'seasoning', 'spice', 'herb', 'green', 'sausage', 'vinegar', 'wine', 'chile', 'chili', 'pepper', 'berry', 'fruit', 'vegetable', 'squash', 'lettuce', 'flour', 'sugar', 'salt', 'milk']);
@@ -70,7 +70,7 @@ function honouringFood(candidates: readonly CatalogueFood[], asked: readonly Foo
   const phraseWords = new Set(foodWordsOf(phrase));
   const kept = words(matched.name).filter((w) => phraseWords.has(w));
   for (const f of candidates) {
-    if (f.id === matched.id || f.branded || unmetModifiers(f, asked).length > 0) continue;
+    if (f.id === matched.id || f.branded || !asked.every((m) => positivelyHonours(f, m))) continue;
     const fw = new Set(words(f.name));
     if (kept.every((w) => fw.has(w) || asked.some((m) => m.asks.includes(w)))) return f;
   }
@@ -100,13 +100,16 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
 
   // "1 (28 oz) can crushed tomatoes": the cook means the canned food, in the form it is sold.
   const byCan = (parsed.unit !== null && CANNED_UNITS.has(parsed.unit)) || /\bcan(?:ned|s)?\b|\btins?\b/i.test(`${parsed.sizeText ?? ''} ${phrase}`);
+  const saysCanned = /\bcanned\b/i.test(phrase);
   if (byCan && !isCanned(match.food)) {
     const forms = words(parsed.preparation ?? '').filter((w) => CANNED_FORMS.has(w)).join(' ');
     const bare = phrase.replace(/\bcanned\b/i, ' ').replace(/\s+/g, ' ').trim();
     for (const variant of [forms ? `${forms} ${bare}` : null, `canned ${forms} ${bare}`]) {
       if (!variant) continue;
       const canned = matcher.match(variant.replace(/\s+/g, ' '));
-      if (isCanned(canned.food) && canned.confidence >= VARIANT_SHARE * match.confidence) {
+      // A phrase that says "canned" itself takes any confident canned food over a fresh one.
+      const enough = saysCanned ? MATCH_CONFIDENCE_FLOOR : VARIANT_SHARE * match.confidence;
+      if (isCanned(canned.food) && canned.confidence >= enough) {
         match = canned;
         break;
       }

@@ -208,6 +208,8 @@ export const SYNONYMS: Record<string, string[]> = {
   choy: ['choi'],
   burger: ['hamburger'],
   peppercorn: ['pepper', 'black'],
+  // SR28 names fresh chiles "Peppers, serrano", "Peppers, jalapeno": a chile is a pepper.
+  chili: ['pepper'],
   toasted: ['roasted'],
   roasted: ['toasted'],
   prawn: ['shrimp'],
