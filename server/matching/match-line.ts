@@ -37,7 +37,7 @@ const CANNED_UNITS = new Set(['can', 'jar']);
 const CANNED_FORMS = new Set(['crushed', 'diced', 'stewed', 'whole', 'peeled', 'pureed', 'puree', 'fire', 'roasted', 'sliced']);
 
 /** Phrases that could be many foods: "cheese", "oil", "neutral oil", "nuts". */
-const GENERIC_WORDS = new Set(['cheese', 'oil', 'seed', 'nut', 'meat', 'fish', 'bean', 'sauce', 'seasoning', 'spice', 'herb', 'green', 'sausage', 'vinegar', 'wine', 'chile', 'chili', 'pepper', 'berry', 'fruit', 'vegetable', 'squash', 'lettuce', 'flour', 'sugar', 'salt', 'milk']);
+const GENERIC_WORDS = new Set(['cheese', 'oil', 'seed', 'nut', 'meat', 'fish', 'bean', 'sauce', 'seasoning', 'spice', 'herb', 'green', 'sausage', 'vinegar', 'wine', 'chile', 'chili', 'pepper', 'berry', 'fruit', 'vegetable', 'squash', 'lettuce', 'stock', 'broth', 'flour', 'sugar', 'salt', 'milk']);
 /** …except these, which recipes use for one plain food (all-purpose flour, granulated sugar, table salt, black pepper, whole milk). */
 const PLAIN_DEFAULTS = new Set(['flour', 'sugar', 'salt', 'pepper', 'milk']);
 const GENERIC_ADJECTIVES = new Set(['neutral', 'cooking', 'mixed', 'assorted', 'favorite', 'favourite', 'any', 'other', 'your', 'plain', 'some', 'kind']);
