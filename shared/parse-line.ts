@@ -13,6 +13,7 @@
 import { parseIngredient, type ParseIngredientOptions, type UnitOfMeasureDefinitions } from 'parse-ingredient';
 import { UNITS, MAX_UNIT_WORDS, convertQuantity, getUnit, normaliseUnit, unitKind } from './units';
 import { cleanLine } from './parse/clean-text';
+import { recordFallback } from './fallback-counter';
 import { QUANTITY_SOURCE, quantityValue, wordsToDigits } from './parse/quantity-text';
 import { splitNameAndComment, takeCountUnitFromName, takeParentheticals } from './parse/name-and-comment';
 
@@ -196,7 +197,8 @@ export function parseLine(input: unknown): ParsedLine {
   const text = toInputString(input);
   try {
     return sanitise(parseCleanLine(text));
-  } catch {
+  } catch (error) {
+    recordFallback('parse-line', error);
     const fallback = emptyResult(text, ['unparsed', 'needs-amount']);
     fallback.name = cleanLine(text).text;
     fallback.needsAmount = true;

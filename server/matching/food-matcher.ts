@@ -48,6 +48,7 @@ import {
   words,
 } from './normalise-phrase';
 import { createSpellingCorrector, type SpellingCorrector } from './spelling';
+import { recordFallback } from '../../shared/fallback-counter';
 
 /** A match scoring under this comes back with `food: null` (its alternatives are still given). */
 export const MATCH_CONFIDENCE_FLOOR = 0.45;
@@ -539,7 +540,8 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
           if (alt.food && alt.confidence > result.confidence) result = alt;
         }
       }
-    } catch {
+    } catch (error) {
+      recordFallback('match-food', error);
       result = { food: null, confidence: 0, alternatives: [], via: 'none', unknownWords: [] };
     }
     if (remembered.size >= REMEMBERED_MATCHES) remembered.clear();
@@ -561,7 +563,8 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
         out.push({ food: index.foods[r.position].food, score: Math.min(MAX_PARTIAL_CONFIDENCE, r.score) });
       }
       return out.slice(0, n);
-    } catch {
+    } catch (error) {
+      recordFallback('search-foods', error);
       return [];
     }
   }

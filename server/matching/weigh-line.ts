@@ -15,6 +15,7 @@ import type { ParsedLine } from '../../shared/parse-line';
 import { massToGrams, normaliseUnit, unitKind, volumeToMl } from '../../shared/units';
 import { inchesOf, parseMeasure, sizeWordOf, stem, type MeasureInfo, type SizeWord } from './measure-text';
 import { words } from './normalise-phrase';
+import { recordFallback } from '../../shared/fallback-counter';
 import { singular } from './singular';
 
 export interface WeighedLine {
@@ -255,7 +256,8 @@ function result(grams: number, volumeMl: number | null, portionUsed: string | nu
 export function weighLine(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion[], opts: WeighOptions = {}): WeighedLine {
   try {
     return weigh(parsed, food, portions ?? [], opts);
-  } catch {
+  } catch (error) {
+    recordFallback('weigh-line', error);
     return result(0, null, null, ['This line could not be weighed: set its amount in grams.']);
   }
 }

