@@ -537,7 +537,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
           const alt = matchOne(part, wanted);
           // "canned plum tomatoes, juices reserved, and tomatoes": a later part is a note, not the food.
           if (first !== null && part !== first && !orChoice(text, part)) alt.confidence *= LATER_PART_FACTOR;
-          if (alt.food && alt.confidence > result.confidence) result = alt;
+          if (alt.food && alt.confidence >= MATCH_CONFIDENCE_FLOOR && alt.confidence > result.confidence) result = alt;
         }
       }
     } catch (error) {
