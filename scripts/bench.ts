@@ -10,6 +10,7 @@ console.log('== Server: analysis, search, start-up, memory, isolation of the sol
 await runServerBench(db.url);
 const benches: [string, string, string][] = [
   ['Matching', '../tests/bench/matching-bench', 'runMatchingBench'],
+  ['Hand-labelled lines: acceptable food and grams, tuning and held-out halves', '../tests/bench/labelled-lines-bench', 'runLabelledLinesBench'],
   ['Rewrite solver (javascript-lp-solver vs HiGHS)', '../tests/bench/rewrite-bench', 'runRewriteBench'],
 ];
 for (const [title, file, fn] of benches) {

@@ -219,6 +219,28 @@ function sanitise(line: ParsedLine): ParsedLine {
   return line;
 }
 
+/** What the passes read and write: the package's reading of a line, refined pass by pass. */
+interface LineState {
+  input: string;
+  /** the cleaned text the package read */
+  text: string;
+  flags: ParseFlag[];
+  quantity: number | null;
+  /** the upper end of a range, until finish() turns the two into a midpoint */
+  quantity2: number | null;
+  unit: string | null;
+  unitText: string | null;
+  /** what is left after the amount: the food phrase with its notes */
+  description: string;
+  size: Amount | null;
+  sizeText: string | null;
+  equivalents: Amount[];
+}
+
+/**
+ * One line read in named passes over one state: the package's reading first (below), then each pass
+ * takes from the description what the package left there (sizes, ranges, equivalents, notes).
+ */
 function parseCleanLine(input: string): ParsedLine {
   const cleaned = cleanLine(input);
   const flags: ParseFlag[] = [];
@@ -258,218 +280,273 @@ function parseCleanLine(input: string): ParsedLine {
     quantity2 = null;
   }
 
-  let size: Amount | null = null;
-  let sizeText: string | null = null;
-  const equivalents: Amount[] = [];
+  const state: LineState = { input, text, flags, quantity, quantity2, unit, unitText, description, size: null, sizeText: null, equivalents: [] };
+  for (const pass of PASSES) pass(state);
+  return finish(state);
+}
 
-  // "1½-inch piece ginger", "15-ounce can tomatoes": the package read a size as the quantity.
-  const glued = description.match(/^-\s*\S/);
-  if (glued && quantity !== null && unit === null) {
-    const sizeRead = readAmount(`${quantity} ${description.slice(1).trim()}`);
+
+/** The passes, in order: each reads what the package left in the description. */
+const PASSES: readonly ((s: LineState) => void)[] = [
+  sizeGluedToQuantity,
+  sizeWordBeforeCountedUnit,
+  rangeWithUnitAtBothEnds,
+  parenthesisAfterAmount,
+  secondAmount,
+  unitThePackageMissed,
+  sizeAfterCountedUnit,
+  equivalentAfterUnit,
+  amountInNote,
+  weightInNote,
+  dozens,
+];
+
+/** "1½-inch piece ginger", "15-ounce can tomatoes": the package read a size as the quantity. */
+function sizeGluedToQuantity(s: LineState): void {
+  const glued = s.description.match(/^-\s*\S/);
+  if (glued && s.quantity !== null && s.unit === null) {
+    const sizeRead = readAmount(`${s.quantity} ${s.description.slice(1).trim()}`);
     if (sizeRead?.amount) {
-      const numberText = text.endsWith(description) ? text.slice(0, text.length - description.length).trim() : String(quantity);
-      const unitWritten = sizeRead.text.slice(String(quantity).length).trim();
-      sizeText = `${numberText}-${unitWritten}`;
-      description = description.slice(1).trim().slice(unitWritten.length).trim();
+      const numberText = s.text.endsWith(s.description) ? s.text.slice(0, s.text.length - s.description.length).trim() : String(s.quantity);
+      const unitWritten = sizeRead.text.slice(String(s.quantity).length).trim();
+      s.sizeText = `${numberText}-${unitWritten}`;
+      s.description = s.description.slice(1).trim().slice(unitWritten.length).trim();
       if (sizeRead.kind === 'mass' || sizeRead.kind === 'volume') {
         // A package of that size: one of it, unless a count follows ("15-ounce can").
-        size = sizeRead.amount;
-        quantity = 1;
-        flags.push('implied-quantity');
-        const lead = takeLeadingUnit(description);
+        s.size = sizeRead.amount;
+        s.quantity = 1;
+        s.flags.push('implied-quantity');
+        const lead = takeLeadingUnit(s.description);
         if (lead && unitKind(lead.unit) === 'count') {
-          unit = lead.unit;
-          unitText = lead.unitText;
-          description = lead.rest;
+          s.unit = lead.unit;
+          s.unitText = lead.unitText;
+          s.description = lead.rest;
         }
       } else {
         // "3-inch cinnamon stick", "1½-inch piece ginger": the length is the amount.
-        unit = sizeRead.amount.unit;
-        unitText = unitWritten;
-        description = description.replace(/^(?:piece|pieces|chunk|knob)\s+(?:of\s+)?/i, '');
+        s.unit = sizeRead.amount.unit;
+        s.unitText = unitWritten;
+        s.description = s.description.replace(/^(?:piece|pieces|chunk|knob)\s+(?:of\s+)?/i, '');
       }
-      quantity2 = null;
+      s.quantity2 = null;
     }
   }
+}
 
-  // "1 lg bunch basil", "2 sm sprigs rosemary": a size word before the counted unit.
-  if (unit && SIZE_UNITS.has(unit)) {
-    const lead = takeLeadingUnit(description);
+/** "1 lg bunch basil", "2 sm sprigs rosemary": a size word before the counted unit. */
+function sizeWordBeforeCountedUnit(s: LineState): void {
+  if (s.unit && SIZE_UNITS.has(s.unit)) {
+    const lead = takeLeadingUnit(s.description);
     if (lead && unitKind(lead.unit) === 'count' && !SIZE_UNITS.has(lead.unit)) {
-      sizeText = unitText;
-      unit = lead.unit;
-      unitText = lead.unitText;
-      description = lead.rest;
+      s.sizeText = s.unitText;
+      s.unit = lead.unit;
+      s.unitText = lead.unitText;
+      s.description = lead.rest;
     }
   }
+}
 
-  // "5 ½ oz to 7 ounces", "½ c to 1 cup": a range with the unit written at both ends.
-  const upper = description.match(/^(?:to|-|–|—|or)\s*/i);
-  if (upper && quantity !== null && quantity2 === null && unit && (unitKind(unit) === 'mass' || unitKind(unit) === 'volume')) {
-    const hi = readAmount(description.slice(upper[0].length));
-    if (hi?.amount && hi.kind === unitKind(unit)) {
-      const converted = convertQuantity(hi.amount.quantity, hi.amount.unit, unit);
+/** "5 ½ oz to 7 ounces", "½ c to 1 cup": a range with the unit written at both ends. */
+function rangeWithUnitAtBothEnds(s: LineState): void {
+  const upper = s.description.match(/^(?:to|-|–|—|or)\s*/i);
+  if (upper && s.quantity !== null && s.quantity2 === null && s.unit && (unitKind(s.unit) === 'mass' || unitKind(s.unit) === 'volume')) {
+    const hi = readAmount(s.description.slice(upper[0].length));
+    if (hi?.amount && hi.kind === unitKind(s.unit)) {
+      const converted = convertQuantity(hi.amount.quantity, hi.amount.unit, s.unit);
       if (converted !== null) {
-        quantity2 = converted;
-        description = description.slice(upper[0].length + hi.text.length).trim();
+        s.quantity2 = converted;
+        s.description = s.description.slice(upper[0].length + hi.text.length).trim();
       }
     }
   }
+}
 
-  // "1 (15 oz) can black beans", "2 (8-inch) tortillas", "10 tbsp (140 grams) butter".
-  if (description.startsWith('(')) {
-    const close = description.indexOf(')');
-    const inner = (close > 0 ? description.slice(1, close) : description.slice(1)).trim();
-    const after = close > 0 ? description.slice(close + 1).trim() : '';
+/** "1 (15 oz) can black beans", "2 (8-inch) tortillas", "10 tbsp (140 grams) butter". */
+function parenthesisAfterAmount(s: LineState): void {
+  if (s.description.startsWith('(')) {
+    const close = s.description.indexOf(')');
+    const inner = (close > 0 ? s.description.slice(1, close) : s.description.slice(1)).trim();
+    const after = close > 0 ? s.description.slice(close + 1).trim() : '';
     const amounts = readAmounts(inner);
-    const kind = unitKind(unit);
+    const kind = unitKind(s.unit);
     let sized: ReturnType<typeof sizeBeforeUnit> = null;
     if (kind === 'mass' || kind === 'volume') {
       if (amounts.length) {
-        equivalents.push(...amounts);
-        description = after;
+        s.equivalents.push(...amounts);
+        s.description = after;
       }
-    } else if (amounts.length === 0 && unit === null && (sized = sizeBeforeUnit(inner, after))) {
+    } else if (amounts.length === 0 && s.unit === null && (sized = sizeBeforeUnit(inner, after))) {
       // "1 (12-15) pound turkey": the number in parentheses is the size, its unit follows.
-      size = sized.size;
-      sizeText = `${inner} ${sized.unitText}`;
-      description = sized.rest;
+      s.size = sized.size;
+      s.sizeText = `${inner} ${sized.unitText}`;
+      s.description = sized.rest;
     } else if (amounts.length || isDescriptiveSize(inner)) {
-      if (amounts.length) size = amounts[0];
-      sizeText = inner;
-      description = after;
-      if (unit === null) {
+      if (amounts.length) s.size = amounts[0];
+      s.sizeText = inner;
+      s.description = after;
+      if (s.unit === null) {
         const lead = takeLeadingUnit(after);
         if (lead && unitKind(lead.unit) === 'count') {
-          unit = lead.unit;
-          unitText = lead.unitText;
-          description = lead.rest;
+          s.unit = lead.unit;
+          s.unitText = lead.unitText;
+          s.description = lead.rest;
         }
       }
     }
   }
+}
 
-  // "2 15-ounce cans chickpeas", "1 lb 4 oz ground beef", "1 cup plus 2 tbsp flour", "2 8-inch tortillas".
-  const next = readAmount(description.replace(/^(?:plus|\+|and)\s+/i, ''));
-  if (next?.amount && quantity !== null && size === null && sizeText === null) {
-    const kind = unitKind(unit);
+/** "2 15-ounce cans chickpeas", "1 lb 4 oz ground beef", "1 cup plus 2 tbsp flour", "2 8-inch tortillas". */
+function secondAmount(s: LineState): void {
+  const next = readAmount(s.description.replace(/^(?:plus|\+|and)\s+/i, ''));
+  if (next?.amount && s.quantity !== null && s.size === null && s.sizeText === null) {
+    const kind = unitKind(s.unit);
     const nextKind = next.kind;
-    const consumedLength = description.length - description.replace(/^(?:plus|\+|and)\s+/i, '').length + next.text.length;
-    if ((kind === 'mass' || kind === 'volume') && nextKind === kind && unit && quantity2 === null) {
-      const sum = addAmounts({ quantity, unit }, next.amount);
+    const consumedLength = s.description.length - s.description.replace(/^(?:plus|\+|and)\s+/i, '').length + next.text.length;
+    if ((kind === 'mass' || kind === 'volume') && nextKind === kind && s.unit && s.quantity2 === null) {
+      const sum = addAmounts({ quantity: s.quantity, unit: s.unit }, next.amount);
       if (sum) {
-        quantity = sum.quantity;
-        unit = sum.unit;
-        unitText = `${unitText} ${description.slice(0, consumedLength).trim()}`;
-        description = description.slice(consumedLength).trim();
-        flags.push('compound');
+        s.quantity = sum.quantity;
+        s.unit = sum.unit;
+        s.unitText = `${s.unitText} ${s.description.slice(0, consumedLength).trim()}`;
+        s.description = s.description.slice(consumedLength).trim();
+        s.flags.push('compound');
       }
-    } else if (unit === null || kind === 'count') {
+    } else if (s.unit === null || kind === 'count') {
       if (nextKind === 'mass' || nextKind === 'volume') {
-        size = next.amount;
-        sizeText = next.text;
-        description = description.slice(consumedLength).trim();
+        s.size = next.amount;
+        s.sizeText = next.text;
+        s.description = s.description.slice(consumedLength).trim();
       } else if (nextKind === 'count' && (next.amount.unit === 'inch' || next.amount.unit === 'cm')) {
-        sizeText = next.text;
-        description = description.slice(consumedLength).trim();
+        s.sizeText = next.text;
+        s.description = s.description.slice(consumedLength).trim();
       }
-      if (sizeText && unit === null) {
-        const lead = takeLeadingUnit(description);
+      if (s.sizeText && s.unit === null) {
+        const lead = takeLeadingUnit(s.description);
         if (lead && unitKind(lead.unit) === 'count') {
-          unit = lead.unit;
-          unitText = lead.unitText;
-          description = lead.rest;
+          s.unit = lead.unit;
+          s.unitText = lead.unitText;
+          s.description = lead.rest;
         }
       }
     }
   }
+}
 
-  // "2 to 3 cups", "2 heaping tbsp sugar", "1 of the cans": a unit the package did not take.
-  if (unit === null && quantity !== null) {
-    const lead = takeLeadingUnit(description);
+/** "2 to 3 cups", "2 heaping tbsp sugar", "1 of the cans": a unit the package did not take. */
+function unitThePackageMissed(s: LineState): void {
+  if (s.unit === null && s.quantity !== null) {
+    const lead = takeLeadingUnit(s.description);
     if (lead && (lead.rest === '' || !/^[a-z]$/i.test(lead.unitText))) {
-      unit = lead.unit;
-      unitText = lead.unitText;
-      description = lead.rest;
+      s.unit = lead.unit;
+      s.unitText = lead.unitText;
+      s.description = lead.rest;
     }
   }
-  // "1 can (15 oz) beans": a size after a counted unit.
-  if (unitKind(unit) === 'count' && size === null && description.startsWith('(')) {
-    const { notes } = takeParentheticals(description.slice(0, description.indexOf(')') + 1 || undefined));
+}
+
+/** "1 can (15 oz) beans": a size after a counted unit. */
+function sizeAfterCountedUnit(s: LineState): void {
+  if (unitKind(s.unit) === 'count' && s.size === null && s.description.startsWith('(')) {
+    const { notes } = takeParentheticals(s.description.slice(0, s.description.indexOf(')') + 1 || undefined));
     const amounts = readAmounts(notes[0] ?? '');
     if (amounts.length) {
-      size = amounts[0];
-      sizeText = notes[0];
-      description = description.slice(description.indexOf(')') + 1).trim();
+      s.size = amounts[0];
+      s.sizeText = notes[0];
+      s.description = s.description.slice(s.description.indexOf(')') + 1).trim();
     }
   }
-  // "10 tbsp (140 grams)" after a weighable unit: the same amount in other units.
-  if ((unitKind(unit) === 'mass' || unitKind(unit) === 'volume') && description.startsWith('(') && equivalents.length === 0) {
-    const closeAt = description.indexOf(')');
-    const amounts = readAmounts(closeAt > 0 ? description.slice(1, closeAt) : description.slice(1));
-    if (amounts.length) {
-      equivalents.push(...amounts);
-      description = closeAt > 0 ? description.slice(closeAt + 1).trim() : '';
-    }
-  }
+}
 
-  // "Neutral oil for frying (about ½ cup)": the only amount is in a note.
-  if (quantity === null) {
-    for (const note of takeParentheticals(description).notes) {
+/** "10 tbsp (140 grams)" after a weighable unit: the same amount in other units. */
+function equivalentAfterUnit(s: LineState): void {
+  if ((unitKind(s.unit) === 'mass' || unitKind(s.unit) === 'volume') && s.description.startsWith('(') && s.equivalents.length === 0) {
+    const closeAt = s.description.indexOf(')');
+    const amounts = readAmounts(closeAt > 0 ? s.description.slice(1, closeAt) : s.description.slice(1));
+    if (amounts.length) {
+      s.equivalents.push(...amounts);
+      s.description = closeAt > 0 ? s.description.slice(closeAt + 1).trim() : '';
+    }
+  }
+}
+
+/** "Neutral oil for frying (about ½ cup)": the only amount is in a note. */
+function amountInNote(s: LineState): void {
+  if (s.quantity === null) {
+    for (const note of takeParentheticals(s.description).notes) {
       const amounts = readAmounts(note);
       if (amounts.length) {
-        quantity = amounts[0].quantity;
-        unit = amounts[0].unit;
-        unitText = null;
-        if (!flags.includes('approximate')) flags.push('approximate');
+        s.quantity = amounts[0].quantity;
+        s.unit = amounts[0].unit;
+        s.unitText = null;
+        if (!s.flags.includes('approximate')) s.flags.push('approximate');
         break;
       }
     }
   }
+}
 
-  if (unit === 'dozen' && quantity !== null) {
-    quantity *= 12;
-    if (quantity2 !== null) quantity2 *= 12;
-    unit = null;
+/** "9 lasagna noodles (about 8 oz)", "6 tbsp lard (about 2 ounces)": the line's weight in a note. */
+function weightInNote(s: LineState): void {
+  if (s.quantity !== null && s.equivalents.length === 0 && s.size === null) {
+    for (const note of takeParentheticals(s.description).notes) {
+      if (/\b(?:from|per|makes|yields?)\b/i.test(note)) continue;
+      const mass = readAmounts(note).find((a) => unitKind(a.unit) === 'mass');
+      if (!mass) continue;
+      s.equivalents.push(/\beach\b|\bapiece\b/i.test(note) ? { quantity: mass.quantity * s.quantity, unit: mass.unit } : mass);
+      break;
+    }
   }
+}
 
+/** "2 dozen eggs": twenty-four of them. */
+function dozens(s: LineState): void {
+  if (s.unit === 'dozen' && s.quantity !== null) {
+    s.quantity *= 12;
+    if (s.quantity2 !== null) s.quantity2 *= 12;
+    s.unit = null;
+  }
+}
+
+/** The range to its midpoint, the name split from its notes, a counted unit taken from the name. */
+function finish(s: LineState): ParsedLine {
   let range: ParsedLine['range'] = null;
-  if (quantity !== null && quantity2 !== null && quantity2 !== quantity) {
-    const min = Math.min(quantity, quantity2);
-    const max = Math.max(quantity, quantity2);
+  if (s.quantity !== null && s.quantity2 !== null && s.quantity2 !== s.quantity) {
+    const min = Math.min(s.quantity, s.quantity2);
+    const max = Math.max(s.quantity, s.quantity2);
     range = { min, max };
-    quantity = (min + max) / 2;
-    flags.push('range');
+    s.quantity = (min + max) / 2;
+    s.flags.push('range');
   }
 
-  const parts = splitNameAndComment(description.replace(/^of\s+/i, ''));
+  const parts = splitNameAndComment(s.description.replace(/^of\s+/i, ''));
   // "4 garlic cloves", "1 lg garlic clove", "1 minced clove garlic": the counted unit inside the name.
-  if (quantity !== null && (unit === null || SIZE_UNITS.has(unit))) {
+  if (s.quantity !== null && (s.unit === null || SIZE_UNITS.has(s.unit))) {
     const counted = takeCountUnitFromName(parts.name);
     if (counted) {
-      if (unit) sizeText = unitText;
-      unit = counted.unit;
-      unitText = counted.unitText;
+      if (s.unit) s.sizeText = s.unitText;
+      s.unit = counted.unit;
+      s.unitText = counted.unitText;
       parts.name = counted.name;
     }
   }
-  if (parts.toTaste) flags.push('to-taste');
-  if (parts.optional) flags.push('optional');
+  if (parts.toTaste) s.flags.push('to-taste');
+  if (parts.optional) s.flags.push('optional');
 
   return {
-    input,
-    quantity,
+    input: s.input,
+    quantity: s.quantity,
     range,
-    unit,
-    unitText: unit ? unitText : null,
+    unit: s.unit,
+    unitText: s.unit ? s.unitText : null,
     name: parts.name,
     preparation: parts.preparation,
     comment: parts.comment,
-    size,
-    sizeText,
-    equivalents,
-    needsAmount: quantity === null,
-    flags,
+    size: s.size,
+    sizeText: s.sizeText,
+    equivalents: s.equivalents,
+    needsAmount: s.quantity === null,
+    flags: s.flags,
   };
 }
 

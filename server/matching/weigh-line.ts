@@ -13,9 +13,10 @@
 import type { CatalogueFood, Portion } from '../../shared/food';
 import { recordFallback } from '../../shared/fallbacks';
 import type { ParsedLine } from '../../shared/parse-line';
-import { massToGrams, unitKind, volumeToMl } from '../../shared/units';
+import { massToGrams, normaliseUnit, unitKind, volumeToMl } from '../../shared/units';
 import { inchesOf, parseMeasure, sizeWordOf, stem, type MeasureInfo, type SizeWord } from './measure-text';
 import { words } from './normalise-phrase';
+import { singular } from './singular';
 
 export interface WeighedLine {
   grams: number;
@@ -28,6 +29,10 @@ export interface WeighedLine {
 export interface WeighOptions {
   /** size word a bare count of this food means ("large" for eggs); see countDefaultFor */
   countDefault?: string | null;
+  /** volume portions of near foods, used when the food has none of its own (airy foods above all) */
+  nearPortions?: Portion[];
+  /** the line says drained: the share of the can kept, null when unknown */
+  drained?: { share: number | null } | null;
 }
 
 export const WARNING_SET_AMOUNT = 'No amount given: set an amount to weigh this line.';
@@ -145,12 +150,37 @@ const PIECE_EQUIVALENTS: Record<string, string[]> = {
   square: ['piece'],
 };
 
+/** Pieces a line may name that SR28 names otherwise: "4 hamburger buns" → "1 roll". */
+const NAME_PIECE_SYNONYMS: Record<string, string> = { bun: 'roll', roll: 'bun' };
+
+/** A counted unit SR28 may not name, weighed as the whole food when no portion names it: "4 stalks scallions". */
+const WHOLE_FOOD_UNITS = new Set(['stalk', 'ear', 'whole']);
+
+/** A piece word as units.ts spells it: "packet" → "package", "ribs" → "stalk". */
+function pieceId(word: string): string {
+  const unit = normaliseUnit(word);
+  return unit && unitKind(unit) === 'count' ? unit : word;
+}
+
 /** The count portion that fits the line; `guessed` when the line left its size open. */
 function bestCountPortion(all: ReadPortion[], ask: CountAsk, countDefault: string | null, nameWords: Set<string>): { r: ReadPortion; guessed: boolean } | null {
+  const found = scoreCountPortions(all, ask, countDefault, nameWords);
+  if (found || !ask.piece || !WHOLE_FOOD_UNITS.has(ask.piece)) return found;
+  const whole = scoreCountPortions(all, { ...ask, piece: null }, countDefault, nameWords);
+  return whole ? { r: whole.r, guessed: true } : null;
+}
+
+function scoreCountPortions(all: ReadPortion[], ask: CountAsk, countDefault: string | null, nameWords: Set<string>): { r: ReadPortion; guessed: boolean } | null {
   let best: { r: ReadPortion; score: number } | null = null;
   for (const r of all) {
-    if (r.info.kind !== 'count' || r.info.serving) continue;
-    const pieces = r.info.pieces;
+    if (r.info.kind !== 'count') continue;
+    if (r.info.serving) {
+      // A label serving ("1 serving", "1 NLEA serving") stands for one piece only when nothing else does.
+      if (ask.piece && ask.piece !== 'serving' && ask.piece !== 'piece') continue;
+      if (!best) best = { r, score: -10 };
+      continue;
+    }
+    const pieces = r.info.pieces.map(pieceId);
     let score = 0;
     if (ask.piece) {
       if (pieces.includes(ask.piece)) score += 4;
@@ -168,7 +198,7 @@ function bestCountPortion(all: ReadPortion[], ask: CountAsk, countDefault: strin
     } else if (countDefault && r.info.size === countDefault) score += 3;
     else if (r.info.size) score += SIZE_PREFERENCE[r.info.size];
     // USDA's unsized piece named like the food ("1 tortilla") is its usual one.
-    else score += pieces.length > 0 && pieces.every((p) => nameWords.has(p)) ? 1.6 : 1;
+    else score += pieces.length > 0 && pieces.every((p) => named(p, nameWords)) ? 1.6 : 1;
     if (ask.diameter !== null) {
       const d = r.info.diameter;
       if (d) {
@@ -188,18 +218,33 @@ function bestCountPortion(all: ReadPortion[], ask: CountAsk, countDefault: strin
   } else if (ask.piece !== null) guessed = chosen.info.size !== null;
   else {
     // "2 chicken breasts" weighed as "1 piece": a portion the line did not name.
-    const named = chosen.info.pieces.every((p) => WHOLE_PIECES.has(p) || nameWords.has(p));
-    guessed = chosen.info.size !== null || !named;
+    const isNamed = chosen.info.pieces.every((p) => WHOLE_PIECES.has(p) || named(p, nameWords));
+    guessed = chosen.info.size !== null || !isNamed || chosen.info.serving;
   }
+  if (chosen.info.serving) guessed = true;
   return { r: chosen, guessed };
 }
 
+function named(piece: string, nameWords: Set<string>): boolean {
+  return nameWords.has(piece) || (NAME_PIECE_SYNONYMS[piece] !== undefined && nameWords.has(NAME_PIECE_SYNONYMS[piece]));
+}
+
 /** Grams per mL for a food's volume, preparation considered; null when nothing gives one. */
-function densityFor(all: ReadPortion[], parsed: ParsedLine, food: CatalogueFood | null): number | null {
-  const v = bestVolumePortion(all, parsed, null);
+function densityFor(all: ReadPortion[], parsed: ParsedLine, food: CatalogueFood | null, near: Portion[]): number | null {
+  const v = bestVolumePortion(all, parsed, null) ?? bestVolumePortion(read(near), parsed, null);
   if (v && v.gPerMl > 0 && Number.isFinite(v.gPerMl)) return v.gPerMl;
   if (food && food.densityGPerMl > 0 && Number.isFinite(food.densityGPerMl)) return food.densityGPerMl;
   return null;
+}
+
+/** A can's contents after draining, when the line says drained. */
+function drainedGrams(grams: number, opts: WeighOptions, warnings: string[]): number {
+  if (!opts.drained) return grams;
+  if (opts.drained.share === null) {
+    warnings.push('No drained weight is known for this food: weighed the whole can. Give the drained weight in grams for exact figures.');
+    return grams;
+  }
+  return grams * opts.drained.share;
 }
 
 function result(grams: number, volumeMl: number | null, portionUsed: string | null, warnings: string[]): WeighedLine {
@@ -220,13 +265,14 @@ export function weighLine(parsed: ParsedLine, food: CatalogueFood | null, portio
 function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion[], opts: WeighOptions): WeighedLine {
   const warnings: string[] = [];
   const quantity = parsed.quantity;
-  if (quantity === null || !Number.isFinite(quantity) || quantity <= 0 || parsed.flags?.includes('to-taste')) {
+  // "½ cup sugar, or more to taste" weighs its half cup; only a line without an amount waits for one.
+  if (quantity === null || !Number.isFinite(quantity) || quantity <= 0) {
     return result(0, 0, null, [WARNING_SET_AMOUNT]);
   }
   const all = read(portions);
   const unit = parsed.unit;
   const kind = unitKind(unit);
-  const density = () => densityFor(all, parsed, food);
+  const density = () => densityFor(all, parsed, food, opts.nearPortions ?? []);
   const roleDensityNote = () => {
     if (food && food.densitySource === 'role-default') {
       warnings.push(`No household volume weight for this food: used the usual density of its kind (${Number(food.densityGPerMl.toPrecision(3))} g/mL).`);
@@ -248,6 +294,11 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
     if (!food) return result(0, ml, null, [WARNING_NO_FOOD]);
     const v = bestVolumePortion(all, parsed, unit);
     if (v) return result(ml * v.gPerMl, ml, v.r.portion.label, warnings);
+    const near = bestVolumePortion(read(opts.nearPortions ?? []), parsed, unit);
+    if (near) {
+      warnings.push(`No household volume weight for this food: weighed as ${near.r.portion.label}, a near food.`);
+      return result(ml * near.gPerMl, ml, near.r.portion.label, warnings);
+    }
     if (food.densityGPerMl > 0 && Number.isFinite(food.densityGPerMl)) {
       roleDensityNote();
       return result(ml * food.densityGPerMl, ml, null, warnings);
@@ -260,7 +311,7 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
   if (size && Number.isFinite(size.quantity) && size.quantity > 0) {
     const sizeKind = unitKind(size.unit);
     if (sizeKind === 'mass') {
-      const grams = quantity * (massToGrams(size.quantity, size.unit) ?? 0);
+      const grams = drainedGrams(quantity * (massToGrams(size.quantity, size.unit) ?? 0), opts, warnings);
       if (!food) return result(grams, null, null, [WARNING_NO_FOOD]);
       const d = density();
       return result(grams, d ? grams / d : null, null, warnings);
@@ -282,13 +333,14 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
   if (!food) return result(0, null, null, [WARNING_NO_FOOD]);
 
   const ask = countAsk(parsed);
-  const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, new Set(words(parsed.name ?? '')));
+  const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, new Set(words(parsed.name ?? '').map(singular)));
   if (!chosen) {
     const what = ask.piece ? `"${parsed.unitText ?? ask.piece}"` : 'one piece';
     return result(0, null, null, [`No household weight for ${what} of this food: give the amount in grams, ounces or cups.`]);
   }
   const each = chosen.r.portion.grams / chosen.r.portion.amount;
-  const grams = quantity * each;
+  const wholeCan = chosen.r.info.pieces.includes('can') && !/drain/i.test(chosen.r.portion.measure);
+  const grams = wholeCan ? drainedGrams(quantity * each, opts, warnings) : quantity * each;
   if (chosen.guessed) {
     const asked = ask.size ? `No "${ask.size}" weight` : ask.diameter !== null ? `No ${ask.diameter}-inch weight` : 'No size given';
     warnings.push(`${asked}: weighed as ${chosen.r.portion.label} (${gramsText(each)} each).`);

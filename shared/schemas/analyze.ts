@@ -60,6 +60,10 @@ export interface AnalyzedLine {
   portionUsed: string | null;
   /** the cook pinned the food or the grams */
   pinned: { food: boolean; grams: boolean };
+  /** a weak or generic match the cook should check ("cheese", "oil", a word the food lacks) */
+  checkMatch: boolean;
+  /** a word of the line that changes the food ("turkey", "low-fat") and that no catalogue food has */
+  missingModifier: string | null;
 }
 
 export interface AnalyzeResponse {

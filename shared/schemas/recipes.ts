@@ -12,6 +12,10 @@ export interface StoredLine {
   foodId: number | null;
   foodName: string | null;
   grams: number;
+  /** what the cook was told when the line was saved (0 g, a word not honoured…); absent on older versions */
+  warnings?: string[];
+  /** the match was weak or generic when saved: "check this match" */
+  checkMatch?: boolean;
 }
 
 const title = z.string({ message: 'Give the recipe a title.' }).trim().min(1, { message: 'Give the recipe a title.' }).max(200, { message: 'title is at most 200 characters.' });
@@ -96,7 +100,8 @@ export interface VersionSummary {
 }
 
 export interface VersionDetail extends VersionSummary {
-  lines: (StoredLine & { nutrients: Nutrients; volumeMl: number })[];
+  /** `incomplete`: no food or 0 g, so the line adds nothing to the totals */
+  lines: (StoredLine & { nutrients: Nutrients; volumeMl: number; incomplete: boolean; warnings: string[] })[];
   targets: z.infer<typeof targetsSchema> | null;
   totals: Nutrients;
   volumeMl: number;

@@ -33,6 +33,8 @@ const analysis: AnalyzeResponse = {
       nutrients: nutrients(864, 56),
       warnings: [],
       portionUsed: '1 cup',
+      checkMatch: false,
+      missingModifier: null,
       pinned: { food: false, grams: false },
     },
     {
@@ -46,6 +48,8 @@ const analysis: AnalyzeResponse = {
       nutrients: nutrients(1136, 24),
       warnings: [],
       portionUsed: null,
+      checkMatch: false,
+      missingModifier: null,
       pinned: { food: false, grams: false },
     },
   ],

@@ -43,8 +43,7 @@ const NAMED_OTHERWISE: Record<string, string> = {
   gorgonzola: 'an Italian blue cheese',
   'shaoxing wine': 'a Chinese rice wine, SR28 "rice (sake)"',
   bourbon: 'a whiskey',
-  'chile flakes': 'crushed red pepper',
-  'chili flakes': 'crushed red pepper',
+  'italian seasoning': 'a blend of dried herbs led by oregano (common practice); weighed as dried oregano and flagged for checking',
 };
 
 function keyWords(text: string): Set<string> {

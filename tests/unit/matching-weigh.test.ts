@@ -170,11 +170,17 @@ describe('counts and household pieces', () => {
 
 describe('lines without an amount', () => {
   it('weigh 0 g and ask for an amount', () => {
-    for (const l of [line({ quantity: null, needsAmount: true }), line({ quantity: 1, flags: ['to-taste'] }), line({ quantity: 0 })]) {
+    for (const l of [line({ quantity: null, needsAmount: true, flags: ['to-taste'] }), line({ quantity: 0 })]) {
       const w = weighLine(l, food(), CHEESE_PORTIONS);
       expect(w.grams).toBe(0);
       expect(w.warnings).toEqual([WARNING_SET_AMOUNT]);
     }
+  });
+  it('weigh the amount a line gives even when it adds "or more to taste"', () => {
+    const w = weighLine(line({ quantity: 1, flags: ['to-taste'] }), food(), CHEESE_PORTIONS);
+    // one piece of the portions above: "1 slice (1 oz)", 28 g
+    expect(w.grams).toBe(28);
+    expect(w.warnings).not.toContain(WARNING_SET_AMOUNT);
   });
 });
 

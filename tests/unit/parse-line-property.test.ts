@@ -69,6 +69,7 @@ describe('parseLine properties (fast-check)', () => {
       { arbitrary: sixtyFourKb, weight: 1 },
     );
     let sixtyFourKbSeen = 0;
+    resetFallbacks();
     fc.assert(
       fc.property(lines, (input) => {
         if (input.length === SIXTY_FOUR_KB) sixtyFourKbSeen++;
@@ -77,6 +78,7 @@ describe('parseLine properties (fast-check)', () => {
       { numRuns: 5000 },
     );
     expect(sixtyFourKbSeen).toBeGreaterThan(0);
+    expect(fallbackCount('parse-line')).toBe(0);
   }, 120_000);
 
   // How fast they parse is a figure of `npm run bench` (matching bench).

@@ -69,6 +69,7 @@ export function KitchenPage() {
         kitchen={kitchen}
         unitSystem={unitSystem}
         foodHref={(id) => `/foods/${id}`}
+        addFoodHref="/foods"
         renderFoodSearch={({ label, onChoose, onClose }) => (
           <div className="flex flex-col gap-1">
             <FoodCombobox label={label} labelHidden autoFocus onChoose={onChoose} onCancel={onClose} />

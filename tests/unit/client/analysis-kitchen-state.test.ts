@@ -74,6 +74,8 @@ function analysisOf(n: number): AnalyzeResponse {
       warnings: [],
       portionUsed: '1 cup',
       pinned: { food: false, grams: false },
+      checkMatch: false,
+      missingModifier: null,
     })),
     totals: { ...zeroNutrients(), kcal: 149 * n },
     perServing: { ...zeroNutrients(), kcal: (149 * n) / 4 },

@@ -33,6 +33,8 @@ export interface AnalysisLinesProps {
   /** a catalogue search for one line, rendered by the page (features do not import each other) */
   renderFoodSearch?: (args: FoodSearchSlotArgs) => ReactNode;
   foodHref?: (id: number) => string;
+  /** where the cook adds a packaged food from its label (shown when a line asks for a food the catalogue lacks) */
+  addFoodHref?: string;
 }
 
 // On phones each row is a card: the ingredient and its food across the top, figures in two columns.
@@ -53,6 +55,7 @@ function LineRow({
   onRemove,
   renderFoodSearch,
   foodHref,
+  addFoodHref,
 }: Omit<AnalysisLinesProps, 'lines' | 'analysedLine' | 'stale' | 'totals'> & { line: KitchenLine; index: number; analysed: AnalyzedLine | null }) {
   const [searching, setSearching] = useState(false);
   const pickerRef = useRef<HTMLSelectElement>(null);
@@ -79,7 +82,8 @@ function LineRow({
   const needsAmount = Boolean(
     analysed && analysed.grams === 0 && line.grams === undefined && (analysed.food !== null || analysed.parsed.quantity === null),
   );
-  const checkMatch = Boolean(food && analysed && !analysed.pinned.food && analysed.confidence < CHECK_MATCH_BELOW);
+  const checkMatch = Boolean(food && analysed && !analysed.pinned.food && (analysed.checkMatch || analysed.confidence < CHECK_MATCH_BELOW));
+  const missingModifier = analysed && !analysed.pinned.food ? analysed.missingModifier : null;
   const grams = line.grams ?? analysed?.grams ?? null;
 
   function choose(next: FoodSummary | null) {
@@ -172,6 +176,11 @@ function LineRow({
                 </Badge>
               )}
               {analysed && !food && <Badge tone="beet">Not counted until a food is chosen</Badge>}
+              {missingModifier && addFoodHref && (
+                <a href={addFoodHref} className="font-semibold text-accent-strong underline-offset-2 hover:underline">
+                  Add the {missingModifier} one from its label
+                </a>
+              )}
             </span>
           </div>
         ) : (

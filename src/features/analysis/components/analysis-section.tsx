@@ -1,5 +1,7 @@
 import { useEffect, useRef, type ReactNode } from 'react';
+import { incompleteLineNumbers } from '../../../../shared/line-status';
 import { EmptyState } from '../../../components/ui/empty-state';
+import { IncompleteTotalsAlert } from '../../../components/ui/incomplete-totals-alert';
 import { ErrorState } from '../../../components/ui/error-state';
 import { LoadingState, Spinner } from '../../../components/ui/spinner';
 import type { UnitSystem } from '../../../lib/user';
@@ -13,10 +15,11 @@ export interface AnalysisSectionProps {
   unitSystem: UnitSystem;
   renderFoodSearch?: (args: FoodSearchSlotArgs) => ReactNode;
   foodHref?: (id: number) => string;
+  addFoodHref?: string;
 }
 
 /** What Hearthswap read from the recipe: every line, its food and weight, and the dish per serving. */
-export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHref }: AnalysisSectionProps) {
+export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHref, addFoodHref }: AnalysisSectionProps) {
   const headingRef = useRef<HTMLHeadingElement>(null);
   const { analysis, lines, pastesAnswered } = kitchen;
 
@@ -86,6 +89,8 @@ export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHre
         kitchen.error == null && <LoadingState label="Reading and weighing every line…" />
       )}
 
+      {analysis && !kitchen.stale && <IncompleteTotalsAlert lineNumbers={incompleteLineNumbers(analysis.lines.map((l) => ({ food: l.food, grams: l.grams })))} />}
+
       <AnalysisLines
         lines={lines}
         analysedLine={kitchen.analysedLine}
@@ -97,6 +102,7 @@ export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHre
         onRemove={kitchen.removeLine}
         renderFoodSearch={renderFoodSearch}
         foodHref={foodHref}
+        addFoodHref={addFoodHref}
       />
 
       {analysis && <DishPanels analysis={analysis} unitSystem={unitSystem} />}

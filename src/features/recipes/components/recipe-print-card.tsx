@@ -1,4 +1,6 @@
 import type { RecipeDetail, VersionDetail } from '../../../../shared/schemas/recipes';
+import { incompleteLineNumbers } from '../../../../shared/line-status';
+import { IncompleteTotalsAlert } from '../../../components/ui/incomplete-totals-alert';
 import { NutrientTable } from '../../../components/ui/nutrient-table';
 import { formatGrams } from '../../../lib/format';
 import { formatDateTime } from '../format-when';
@@ -43,6 +45,7 @@ export function RecipePrintCard({ recipe, version }: { recipe: RecipeDetail; ver
           <h2 id="print-ingredients" className="border-b-2 border-ink pb-1 text-lg font-extrabold">
             Ingredients <span className="text-sm font-semibold text-ink-soft">weigh them raw, in grams</span>
           </h2>
+          <IncompleteTotalsAlert lineNumbers={incompleteLineNumbers(version.lines)} />
           <ul className="flex flex-col">
             {version.lines.map((line, i) => (
               <li key={i} className="grid grid-cols-[5.5rem_minmax(0,1fr)] gap-3 border-b border-line py-1.5 last:border-b-0">
@@ -50,6 +53,8 @@ export function RecipePrintCard({ recipe, version }: { recipe: RecipeDetail; ver
                 <span>
                   <span className="font-semibold">{line.foodName ?? line.input}</span>
                   {line.foodName && writtenLine(line) && <span className="block text-sm text-ink-soft">{writtenLine(line)}</span>}
+                  {line.checkMatch && line.foodName && <span className="block text-sm font-semibold">▲ check this match</span>}
+                  {line.incomplete && <span className="block text-sm font-semibold">▲ not counted in the totals</span>}
                 </span>
               </li>
             ))}

