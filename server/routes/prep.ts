@@ -6,7 +6,7 @@ import { parse } from '../middleware/validate';
 import { requireAuth } from '../middleware/auth';
 import { getFoodEngine } from '../services/food-engine';
 import { findReadableRecipe, getVersion } from '../services/recipes';
-import { prepFor, shoppingList, shoppingText } from '../services/prep';
+import { prepFor, prepLines, shoppingList, shoppingText } from '../services/prep';
 import { scaleVersion } from '../../shared/prep';
 
 export function prepRouter(sequelize: Sequelize) {
@@ -33,7 +33,7 @@ export function shoppingListsRouter(sequelize: Sequelize) {
     for (const item of input.items) {
       const recipe = await findReadableRecipe(req.user!, item.recipeId);
       const version = await getVersion(recipe, item.versionNumber);
-      const plan = scaleVersion({ servings: version.servings, lines: version.lines.map((l) => ({ foodId: l.foodId, name: l.foodName ?? l.input, grams: l.grams })) }, item.portions);
+      const plan = scaleVersion({ servings: version.servings, lines: prepLines(engine, version) }, item.portions);
       batches.push(plan.batch);
       sources.push({ recipeId: recipe.id, title: recipe.title, versionNumber: version.number, portions: item.portions });
     }

@@ -3,14 +3,30 @@ import { scaleVersion, mergeShopping, roundPrepGrams, type PrepLine } from '../.
 import { storageFor } from '../../shared/food-safety';
 import { allergensOfRecipe } from '../../shared/allergens';
 import { roundLabel } from '../../shared/label-rounding';
-import { purchaseHint } from '../../shared/purchase-hint';
+import { measureHint, purchaseHint, writtenMeasure } from '../../shared/purchase-hint';
+import { parseLine } from '../../shared/parse-line';
+import { weighLine } from '../matching/weigh-line';
 import type { FoodEngine } from './food-engine';
 import { foodSummary } from './foods';
 import { computeVersion } from './recipes';
 import { badRequest } from '../lib/http-error';
 
-function prepLines(version: RecipeVersion): PrepLine[] {
-  return version.lines.map((l) => ({ foodId: l.foodId, name: l.foodName ?? l.input, grams: l.grams }));
+/**
+ * A version's lines for prep, each with the measure its text names: the text is weighed again with
+ * the line's food, so a rewrite or a corrected weight scales that measure in proportion.
+ */
+export function prepLines(engine: FoodEngine, version: Pick<RecipeVersion, 'lines'>): PrepLine[] {
+  return version.lines.map((l) => {
+    const food = l.foodId != null ? engine.byId.get(l.foodId) : undefined;
+    let measure = null;
+    if (food) {
+      const parsed = parseLine(l.input);
+      const written = weighLine(parsed, food, food.portions, { countDefault: engine.countDefaults.get(food.id) }).grams;
+      const named = writtenMeasure(parsed, written);
+      measure = named && l.grams > 0 ? { ...named, amount: (named.amount * l.grams) / written } : null;
+    }
+    return { foodId: l.foodId, name: l.foodName ?? l.input, grams: l.grams, measure };
+  });
 }
 
 function foodOf(engine: FoodEngine, id: PrepLine['foodId'], name: string) {
@@ -29,7 +45,7 @@ export function shoppingList(engine: FoodEngine, batches: PrepLine[][], unitSyst
     return {
       food: foodOf(engine, line.foodId, line.name),
       grams: roundPrepGrams(line.grams),
-      purchase: food ? purchaseHint(line.grams, food.portions, unitSystem, shortName(food.name)) : '',
+      purchase: line.measure ? measureHint(line.measure) : food ? purchaseHint(line.grams, food.portions, unitSystem, shortName(food.name)) : '',
     };
   });
 }
@@ -42,7 +58,7 @@ export function shoppingText(items: ReturnType<typeof shoppingList>) {
 export function prepFor(engine: FoodEngine, recipe: Recipe, version: RecipeVersion, portions: number, viewer: User) {
   let plan;
   try {
-    plan = scaleVersion({ servings: version.servings, lines: prepLines(version) }, portions);
+    plan = scaleVersion({ servings: version.servings, lines: prepLines(engine, version) }, portions);
   } catch (error) {
     if (error instanceof RangeError) throw badRequest(`portions: ${error.message}`, { fieldErrors: { portions: [error.message] } });
     throw error;
