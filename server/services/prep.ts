@@ -72,7 +72,7 @@ export function prepFor(engine: FoodEngine, recipe: Recipe, version: RecipeVersi
     version: { number: version.number, kind: version.kind, servings: version.servings },
     portions: plan.portions,
     perPortion: plan.perPortion.map((l) => ({ food: foodOf(engine, l.foodId, l.name), grams: roundPrepGrams(l.grams), display: l.display })),
-    batch: plan.batch.map((l) => ({ food: foodOf(engine, l.foodId, l.name), grams: roundPrepGrams(l.grams), display: l.display })),
+    batch: plan.batch.map((l) => ({ food: foodOf(engine, l.foodId, l.name), grams: roundPrepGrams(l.grams), display: l.display, household: l.measure ? measureHint(l.measure) : '' })),
     shopping,
     shoppingText: shoppingText(shopping),
     storage: storageFor({ foods, method: `${recipe.method}\n${recipe.notes}` }),

@@ -12,7 +12,7 @@ import type {
 } from '../../shared/schemas/recipes';
 import type { TargetsInput } from '../../shared/schemas/rewrite';
 import type { LineInput } from '../../shared/schemas/analyze';
-import { analyzeLine, textToLines, type FoodVisibility } from './analysis';
+import { analyzeLine, lineVolumeMl, textToLines, type FoodVisibility } from './analysis';
 import { canSeeFood } from './custom-foods';
 import type { StoredFood } from './catalogue';
 import type { FoodEngine } from './food-engine';
@@ -45,7 +45,7 @@ export function computeVersion(engine: FoodEngine, lines: StoredLine[], servings
     return {
       ...line,
       nutrients: food ? nutrientsForGrams(food.per100g, line.grams) : zeroNutrients(),
-      volumeMl: food && line.grams > 0 ? line.grams / food.densityGPerMl : 0,
+      volumeMl: lineVolumeMl(engine, line.input, food ?? null, line.grams),
     };
   });
   const totals = sumNutrients(detailed.map((l) => l.nutrients));
@@ -66,7 +66,7 @@ function versionSummary(v: RecipeVersion): VersionSummary {
 
 export function versionDetail(engine: FoodEngine, v: RecipeVersion): VersionDetail {
   const computed = computeVersion(engine, v.lines, v.servings);
-  return { ...versionSummary(v), lines: computed.lines, targets: v.targets, totals: v.totals, volumeMl: v.volumeMl };
+  return { ...versionSummary(v), lines: computed.lines, targets: v.targets, totals: v.totals, volumeMl: computed.volumeMl };
 }
 
 async function summaries(recipes: Recipe[]): Promise<Map<number, { count: number; latest: RecipeVersion | null }>> {

@@ -1,4 +1,6 @@
 import { useEffect, useRef, type ReactNode } from 'react';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorState } from '../../../components/ui/error-state';
 import { LoadingState, Spinner } from '../../../components/ui/spinner';
@@ -84,6 +86,20 @@ export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHre
         <ServingHeadline analysis={analysis} />
       ) : (
         kitchen.error == null && <LoadingState label="Reading and weighing every line…" />
+      )}
+
+      {kitchen.removed && (
+        <Alert
+          tone="info"
+          title="Line removed"
+          action={
+            <Button variant="secondary" size="sm" onClick={kitchen.undoRemove}>
+              Undo
+            </Button>
+          }
+        >
+          “{kitchen.removed.input}” is out of the recipe.
+        </Alert>
       )}
 
       <AnalysisLines
