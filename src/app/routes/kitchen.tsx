@@ -245,7 +245,7 @@ function EditingSavedRecipe({ kitchen }: { kitchen: Kitchen }) {
       action={
         <div className="flex flex-wrap gap-2">
           <Button size="sm" onClick={() => void save().catch(() => undefined)} loading={isPending} loadingLabel="Saving…" disabled={!edited || lines.length === 0}>
-            Save as version {source.latestNumber + 1}
+            Save my changes as version {source.latestNumber + 1}
           </Button>
           <Link to={recipePath(source.recipeId, source.versionNumber)} className={buttonClasses({ variant: 'secondary', size: 'sm' })}>
             Back to the recipe

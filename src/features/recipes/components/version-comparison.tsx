@@ -29,7 +29,7 @@ const TONE_CLASSES: Record<ChangeTone, string> = {
 };
 const TONE_WORDS: Record<ChangeTone, string> = {
   better: 'lighter or more filling',
-  worse: 'the other way',
+  worse: 'heavier or less filling',
   neutral: '',
 };
 
@@ -283,7 +283,7 @@ export function VersionComparison({ a, b }: { a: VersionDetail; b: VersionDetail
           <p className="mt-3 text-sm text-ink-soft">
             <span className="font-bold text-herb-800">Green</span> marks a change toward a lighter, more filling plate
             (fewer kcal; more protein or fiber; less fat, sugar or sodium), <span className="font-bold text-beet-800">red</span>{' '}
-            the other way. The sign says which way each figure moved: + more, {MINUS} less.
+            a change toward a heavier one. The sign says which way each figure moved: + more, {MINUS} less.
           </p>
         </Card>
       </div>
