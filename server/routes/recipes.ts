@@ -29,7 +29,7 @@ import {
   updateRecipe,
   versionDetail,
 } from '../services/recipes';
-import { parseRecipeFile } from '../services/recipe-import';
+import { importedTitle, parseRecipeFile } from '../services/recipe-import';
 import { toJsonLd } from '../services/recipe-export';
 import { MAX_PHOTO_BYTES, processPhoto, readPhoto, removePhoto, storePhoto } from '../services/photo-storage';
 import { HttpError, badRequest } from '../lib/http-error';
@@ -70,8 +70,9 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig) {
   router.post('/import', singleFile(MAX_IMPORT_BYTES, 'recipe file'), async (req, res) => {
     if (!req.file) throw badRequest('file: attach the recipe in the form field "file".', { fieldErrors: { file: ['Required.'] } });
     const imported = parseRecipeFile(req.file.buffer);
+    const own = await Recipe.findAll({ where: { ownerId: req.user!.id, deletedAt: null }, attributes: ['title'] });
     const recipe = await createRecipe(sequelize, await engine(), req.user!, {
-      title: imported.title,
+      title: importedTitle(imported.title, new Set(own.map((r) => r.title.trim().toLowerCase()))),
       servings: imported.servings,
       notes: imported.notes,
       method: imported.method,
