@@ -62,7 +62,10 @@ export function PeopleList({ selfId }: { selfId: number | null }) {
   if (users.isError) return <ErrorState title="The accounts didn't load" error={users.error} onRetry={() => void users.refetch()} retrying={users.isFetching} />;
   if (users.data.length === 0) return <EmptyState title="No accounts yet">Accounts appear here as people sign up.</EmptyState>;
   const names = new Map(users.data.map((u) => [u.id, u.displayName]));
-  const counts = ROLES_USER.map((role) => `${users.data.filter((u) => u.role === role).length} ${ROLE_WORDS[role].toLowerCase()}${role === 'coach' ? 'es' : 's'}`);
+  const counts = ROLES_USER.map((role) => {
+    const n = users.data.filter((u) => u.role === role).length;
+    return `${n} ${ROLE_WORDS[role].toLowerCase()}${n === 1 ? '' : role === 'coach' ? 'es' : 's'}`;
+  });
   return (
     <div className="flex flex-col gap-4">
       <Alert tone="info">
