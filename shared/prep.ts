@@ -4,6 +4,7 @@
  * Grams stay unrounded; `display` is the rounded text for a kitchen scale.
  */
 import { roundHalfUp } from './label-rounding';
+import type { WrittenMeasure } from './purchase-hint';
 
 export const MIN_PORTIONS = 1;
 export const MAX_PORTIONS = 100;
@@ -15,6 +16,8 @@ export interface PrepLine {
   foodId: PrepFoodId;
   name: string;
   grams: number;
+  /** the measure the recipe named for these grams ("2 (6 oz) cans"); scales with them */
+  measure?: WrittenMeasure | null;
 }
 
 export interface PrepLineOut extends PrepLine {
@@ -63,8 +66,15 @@ function checkVersion(version: PrepVersion): void {
   });
 }
 
+/** The line's measure for `grams` of it: the same measure, its amount in proportion. */
+export function scaledMeasure(line: PrepLine, grams: number): WrittenMeasure | null {
+  if (!line.measure || !(line.grams > 0)) return null;
+  return { ...line.measure, amount: (line.measure.amount * grams) / line.grams };
+}
+
 function out(line: PrepLine, grams: number): PrepLineOut {
-  return { foodId: line.foodId, name: line.name, grams, display: formatPrepGrams(grams) };
+  const measure = scaledMeasure(line, grams);
+  return { foodId: line.foodId, name: line.name, grams, display: formatPrepGrams(grams), ...(measure && { measure }) };
 }
 
 /** A version scaled to `portions` portions: each line per portion and for the batch, in the version's order. */
@@ -86,7 +96,9 @@ function mergeKey(line: PrepLine): string {
 
 /**
  * One shopping list from several batches (or versions): lines of the same food summed, in the order
- * each food first appears, under the name it first appeared with.
+ * each food first appears, under the name it first appeared with. Their measures add up when every
+ * line named the same one; otherwise the item has none (one unit system per item: the list then
+ * falls back to household weights for the total).
  */
 export function mergeShopping(batches: readonly (readonly PrepLine[])[]): PrepLine[] {
   const merged = new Map<string, PrepLine>();
@@ -97,8 +109,15 @@ export function mergeShopping(batches: readonly (readonly PrepLine[])[]): PrepLi
       }
       const key = mergeKey(line);
       const seen = merged.get(key);
-      if (seen) seen.grams += line.grams;
-      else merged.set(key, { foodId: line.foodId, name: line.name, grams: line.grams });
+      if (seen) {
+        seen.grams += line.grams;
+        if (seen.measure !== undefined || line.measure) {
+          const same = seen.measure && line.measure && seen.measure.key === line.measure.key;
+          seen.measure = same ? { ...seen.measure!, amount: seen.measure!.amount + line.measure!.amount } : null;
+        }
+      } else {
+        merged.set(key, { foodId: line.foodId, name: line.name, grams: line.grams, ...(line.measure && { measure: { ...line.measure } }) });
+      }
     }
   }
   return [...merged.values()];

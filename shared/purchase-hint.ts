@@ -8,7 +8,7 @@
  */
 import type { Portion } from './food';
 import { roundHalfUp } from './label-rounding';
-import { GRAMS_PER_OUNCE, ML_PER_CUP, ML_PER_TBSP, ML_PER_TSP, normaliseUnit, volumeToMl } from './units';
+import { GRAMS_PER_OUNCE, ML_PER_CUP, ML_PER_TBSP, ML_PER_TSP, massToGrams, normaliseUnit, unitKind, volumeToMl } from './units';
 
 export type UnitSystem = 'us' | 'metric';
 
@@ -192,4 +192,165 @@ export function purchaseHint(
   if (!Number.isFinite(grams) || grams < 0) throw new RangeError(`grams must be a finite number ≥ 0, got ${grams}`);
   if (grams === 0) return '';
   return countHint(grams, portions, foodName) ?? volumeHint(grams, portions, unitSystem) ?? purchaseWeight(grams, unitSystem);
+}
+
+/**
+ * The measure a recipe line named, so a shopping line can say what the cook buys in the same
+ * terms: "3 cans (6 oz)", "1 1/2 cups", "1 lb 8 oz", "4 cloves". `amount` is how many of `unit`
+ * the line's grams are; scaling the grams scales it. Lines with the same `key` add up.
+ */
+export interface WrittenMeasure {
+  key: string;
+  kind: 'volume' | 'mass' | 'package' | 'piece';
+  /** canonical unit id (units.ts); '' for a bare count ("2 onions") */
+  unit: string;
+  /** the package size as written, "6 oz" */
+  sizeText: string | null;
+  /** the counted noun when the unit does not name it: "egg" for "3 large eggs", "onion" for "2 onions" */
+  noun: string | null;
+  amount: number;
+}
+
+/** Bought sealed: a cook buys whole ones and uses part. */
+const PACKAGE_UNITS = new Set(['can', 'package', 'box', 'bag', 'jar', 'bottle', 'container', 'envelope', 'sleeve', 'loaf', 'bar']);
+const SIZE_UNITS = new Set(['large', 'medium', 'small', 'extra-large', 'jumbo']);
+const PACKAGE_HEAD = /^(can|tin|jar|package|pkg|bag|box|bottle|carton|container)s?\s+(?:of\s+)?/i;
+
+const UNIT_WORDS: Record<string, [string, string]> = {
+  can: ['can', 'cans'],
+  package: ['package', 'packages'],
+  box: ['box', 'boxes'],
+  bag: ['bag', 'bags'],
+  jar: ['jar', 'jars'],
+  bottle: ['bottle', 'bottles'],
+  container: ['container', 'containers'],
+  envelope: ['envelope', 'envelopes'],
+  sleeve: ['sleeve', 'sleeves'],
+  loaf: ['loaf', 'loaves'],
+  bar: ['bar', 'bars'],
+  'extra-large': ['extra-large', 'extra-large'],
+};
+
+function unitWord(unit: string, n: number): string {
+  const pair = UNIT_WORDS[unit];
+  if (pair) return n === 1 ? pair[0] : pair[1];
+  if (SIZE_UNITS.has(unit)) return unit;
+  return n === 1 ? unit : plural(unit);
+}
+
+/** What a parsed line says about its amount, enough to restate it (a subset of ParsedLine). */
+export interface MeasuredLine {
+  quantity: number | null;
+  unit: string | null;
+  name: string;
+  size: { quantity: number; unit: string } | null;
+  sizeText: string | null;
+}
+
+/**
+ * The measure a line named, for `grams` (the grams that text weighs). Null when the line gives no
+ * amount or nothing could be weighed: the shopping line then falls back to household weights.
+ */
+export function writtenMeasure(line: MeasuredLine, grams: number): WrittenMeasure | null {
+  const q = line.quantity;
+  if (q === null || !(q > 0) || !(grams > 0)) return null;
+  const unit = line.unit ?? '';
+  const kind = unit ? unitKind(unit) : 'count';
+  const make = (k: WrittenMeasure['kind'], u: string, sizeText: string | null, noun: string | null): WrittenMeasure => ({
+    key: JSON.stringify([k, u, sizeText, noun]),
+    kind: k,
+    unit: u,
+    sizeText,
+    noun,
+    amount: q,
+  });
+  // "14.5 oz can of tomatoes" names a can of that size.
+  const packageHead = PACKAGE_HEAD.exec(line.name);
+  if (kind === 'mass' && packageHead) {
+    const pkg = normaliseUnit(packageHead[1]) ?? 'can';
+    return { ...make('package', pkg, `${trimNumber(q)} ${unit}`, null), key: JSON.stringify(['package', pkg, `${trimNumber(q)} ${unit}`, null]), amount: 1 };
+  }
+  if (kind === 'mass') return make('mass', unit, null, null);
+  if (kind === 'volume') return make('volume', unit, null, null);
+  if (PACKAGE_UNITS.has(unit)) return make('package', unit, line.sizeText, null);
+  const noun = unit === '' || SIZE_UNITS.has(unit) ? nounOfPhrase(line.name) : null;
+  if (unit === '' && !noun) return null;
+  return make('piece', unit, null, noun);
+}
+
+function trimNumber(x: number): string {
+  return String(Number(x.toFixed(2)));
+}
+
+/** "large eggs" → "egg"; "yellow onions" → "yellow onion". */
+function nounOfPhrase(name: string): string | null {
+  const words = name.trim().toLowerCase().split(/\s+/).filter(Boolean);
+  if (words.length === 0 || words.length > 3) return null;
+  words.push(singular(words.pop()!));
+  return words.join(' ');
+}
+
+/** US volumes as a cook measures them: teaspoons under a tablespoon, tablespoons under ¼ cup, then cups; rounded up to the quarter. */
+function usVolume(ml: number): string {
+  if (ml < ML_PER_TBSP - 1e-9) {
+    const tsp = ceilToStep(ml / ML_PER_TSP, 0.25);
+    return `${fraction(tsp)} tsp`;
+  }
+  if (ml < ML_PER_CUP / 4 - 1e-9) {
+    const tbsp = ceilToStep(ml / ML_PER_TBSP, 0.5);
+    return `${fraction(tbsp)} tbsp`;
+  }
+  const cups = ceilToStep(ml / ML_PER_CUP, 0.25);
+  return `${fraction(cups)} ${cups > 1 ? 'cups' : 'cup'}`;
+}
+
+/** Metric volumes: to 5 mL under 100 mL, 10 mL under 1 L, then 0.1 L; rounded up. */
+function metricVolume(ml: number): string {
+  if (ml < 100) return `${Math.max(5, ceilToStep(ml, 5))} mL`;
+  if (ml < 1000) return `${ceilToStep(ml, 10)} mL`;
+  return `${ceilToStep(ml / 1000, 0.1)} L`;
+}
+
+const METRIC_VOLUMES = new Set(['ml', 'cl', 'dl', 'l']);
+const METRIC_MASSES = new Set(['g', 'kg', 'mg']);
+const TINY_VOLUMES = new Set(['pinch', 'dash', 'smidgen', 'drop']);
+
+/** Whole items to buy for `amount` of them: up past a tenth of one (household weights are averages). */
+function wholeCount(amount: number): number {
+  return Math.max(1, Math.ceil(ceilToStep(amount, 0.001) - COUNT_SLACK));
+}
+
+/**
+ * What to buy for a measure, in the measure's own terms and unit system: packages whole (with the
+ * share used when it is not all of them), volumes and weights rounded up so the list never comes up
+ * short, pieces counted. Volume conversions are exact (NIST Handbook 44: 1 tbsp = 3 tsp, 1 cup = 16 tbsp).
+ */
+export function measureHint(measure: WrittenMeasure): string {
+  const { amount, unit } = measure;
+  if (!(amount > 0)) return '';
+  switch (measure.kind) {
+    case 'volume': {
+      if (TINY_VOLUMES.has(unit)) {
+        const n = wholeCount(amount);
+        return n === 1 ? `a ${unit}` : `${n} ${unit === 'dash' ? 'dashes' : plural(unit)}`;
+      }
+      const ml = volumeToMl(amount, unit) ?? 0;
+      return METRIC_VOLUMES.has(unit) ? metricVolume(ml) : usVolume(ml);
+    }
+    case 'mass': {
+      const grams = massToGrams(amount, unit) ?? 0;
+      return purchaseWeight(grams, METRIC_MASSES.has(unit) ? 'metric' : 'us');
+    }
+    case 'package': {
+      const n = wholeCount(amount);
+      const size = measure.sizeText ? ` (${measure.sizeText})` : '';
+      const used = Math.abs(n - amount) > 0.05 ? `; uses ${fraction(roundHalfUp(amount, 0.25))}` : '';
+      return `${n} ${unitWord(unit, n)}${size}${used}`;
+    }
+    case 'piece': {
+      const n = wholeCount(amount);
+      const noun = measure.noun ? forCount(measure.noun, n) : '';
+      return [String(n), unit ? unitWord(unit, n) : '', noun].filter(Boolean).join(' ');
+    }
+  }
 }

@@ -26,13 +26,14 @@ import {
   getVersion,
   listRecipes,
   listVersions,
+  ownRecipeTitles,
   recipeDetail,
   restoreVersion,
   undeleteRecipe,
   updateRecipe,
   versionDetail,
 } from '../services/recipes';
-import { parseRecipeFile, type ImportedRecipe } from '../services/recipe-import';
+import { importedTitle, parseRecipeFile, type ImportedRecipe } from '../services/recipe-import';
 import { assertSafeText } from '../middleware/text-safety';
 import type { RateLimits } from '../middleware/rate-limits';
 import { toJsonLd } from '../services/recipe-export';
@@ -94,7 +95,8 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
   router.post('/import', limits.recipeImports, singleFile(MAX_IMPORT_BYTES, 'recipe file'), async (req, res) => {
     if (!req.file) throw badRequest('file: attach the recipe in the form field "file".', { fieldErrors: { file: ['Required.'] } });
     const imported = parseRecipeFile(req.file.buffer);
-    const recipe = await createRecipe(sequelize, await engine(), req.user!, importedRecipeInput(imported));
+    const title = importedTitle(imported.title, await ownRecipeTitles(req.user!));
+    const recipe = await createRecipe(sequelize, await engine(), req.user!, importedRecipeInput({ ...imported, title }));
     res.status(201).json({ ...(await recipeDetail(recipe)), importedFrom: imported.format });
   });
 

@@ -67,7 +67,7 @@ export function analyzeLine(engine: FoodEngine<CatalogueFood>, line: LineInput, 
   let portionUsed: string | null = null;
   if (line.grams !== undefined) {
     grams = line.grams;
-    volumeMl = food ? grams / food.densityGPerMl : 0;
+    volumeMl = lineVolumeMl(engine, line.input, food, grams, parsed);
   } else {
     const drained = match.drained && food ? { share: drainedShareFor(food.name)?.share ?? null } : null;
     const weighed = weighLine(parsed, food, food?.portions ?? [], {
@@ -100,6 +100,18 @@ export function analyzeLine(engine: FoodEngine<CatalogueFood>, line: LineInput, 
     missingModifier: pinnedFood ? null : match.missingModifier,
     matchedFood: food,
   };
+}
+
+/**
+ * A line's volume for `grams` of its food: the volume its own text measures, in proportion when the
+ * grams were changed (a pinned weight, a rewrite), else grams ÷ the food's density. The Kitchen,
+ * saved versions and Compare all use this one, so a dish has one volume per serving everywhere.
+ */
+export function lineVolumeMl(engine: FoodEngine<CatalogueFood>, input: string, food: CatalogueFood | null, grams: number, parsed: ParsedLine = parseLine(input)): number {
+  if (!food || !(grams > 0)) return 0;
+  const weighed = weighLine(parsed, food, food.portions ?? [], { countDefault: engine.countDefaults.get(food.id) });
+  if (weighed.volumeMl !== null && weighed.volumeMl > 0 && weighed.grams > 0) return (weighed.volumeMl * grams) / weighed.grams;
+  return grams / food.densityGPerMl;
 }
 
 export function analyzeLines(engine: FoodEngine<CatalogueFood>, lines: LineInput[], servings: number, canUse: FoodVisibility = catalogueOnly) {

@@ -3,15 +3,31 @@ import { scaleVersion, mergeShopping, roundPrepGrams, type PrepLine } from '../.
 import { storageFor } from '../../shared/food-safety';
 import { allergensOfRecipe } from '../../shared/allergens';
 import { roundLabel } from '../../shared/label-rounding';
-import { purchaseHint } from '../../shared/purchase-hint';
+import { measureHint, purchaseHint, writtenMeasure } from '../../shared/purchase-hint';
+import { parseLine } from '../../shared/parse-line';
+import { weighLine } from '../matching/weigh-line';
 import type { FoodEngine } from './food-engine';
 import { foodSummary } from './foods';
 import { computeVersion, findReadableRecipe, getVersion } from './recipes';
 import { badRequest } from '../lib/http-error';
 import type { ShoppingListInput } from '../../shared/schemas/prep';
 
-function prepLines(version: RecipeVersion): PrepLine[] {
-  return version.lines.map((l) => ({ foodId: l.foodId, name: l.foodName ?? l.input, grams: l.grams }));
+/**
+ * A version's lines for prep, each with the measure its text names: the text is weighed again with
+ * the line's food, so a rewrite or a corrected weight scales that measure in proportion.
+ */
+export function prepLines(engine: FoodEngine, version: Pick<RecipeVersion, 'lines'>): PrepLine[] {
+  return version.lines.map((l) => {
+    const food = l.foodId != null ? engine.byId.get(l.foodId) : undefined;
+    let measure = null;
+    if (food) {
+      const parsed = parseLine(l.input);
+      const written = weighLine(parsed, food, food.portions, { countDefault: engine.countDefaults.get(food.id) }).grams;
+      const named = writtenMeasure(parsed, written);
+      measure = named && l.grams > 0 ? { ...named, amount: (named.amount * l.grams) / written } : null;
+    }
+    return { foodId: l.foodId, name: l.foodName ?? l.input, grams: l.grams, measure };
+  });
 }
 
 function foodOf(engine: FoodEngine, id: PrepLine['foodId'], name: string) {
@@ -30,7 +46,7 @@ export function shoppingList(engine: FoodEngine, batches: PrepLine[][], unitSyst
     return {
       food: foodOf(engine, line.foodId, line.name),
       grams: roundPrepGrams(line.grams),
-      purchase: food ? purchaseHint(line.grams, food.portions, unitSystem, shortName(food.name)) : '',
+      purchase: line.measure ? measureHint(line.measure) : food ? purchaseHint(line.grams, food.portions, unitSystem, shortName(food.name)) : '',
     };
   });
 }
@@ -47,7 +63,7 @@ export async function buildShoppingList(engine: FoodEngine, viewer: User, input:
   for (const item of input.items) {
     const recipe = await findReadableRecipe(viewer, item.recipeId);
     const version = await getVersion(recipe, item.versionNumber);
-    const plan = scaleVersion({ servings: version.servings, lines: prepLines(version) }, item.portions);
+    const plan = scaleVersion({ servings: version.servings, lines: prepLines(engine, version) }, item.portions);
     batches.push(plan.batch);
     sources.push({ recipeId: recipe.id, title: recipe.title, versionNumber: version.number, portions: item.portions });
   }
@@ -58,7 +74,7 @@ export async function buildShoppingList(engine: FoodEngine, viewer: User, input:
 export function prepFor(engine: FoodEngine, recipe: Recipe, version: RecipeVersion, portions: number, viewer: User) {
   let plan;
   try {
-    plan = scaleVersion({ servings: version.servings, lines: prepLines(version) }, portions);
+    plan = scaleVersion({ servings: version.servings, lines: prepLines(engine, version) }, portions);
   } catch (error) {
     if (error instanceof RangeError) throw badRequest(`portions: ${error.message}`, { fieldErrors: { portions: [error.message] } });
     throw error;
@@ -72,7 +88,7 @@ export function prepFor(engine: FoodEngine, recipe: Recipe, version: RecipeVersi
     version: { number: version.number, kind: version.kind, servings: version.servings },
     portions: plan.portions,
     perPortion: plan.perPortion.map((l) => ({ food: foodOf(engine, l.foodId, l.name), grams: roundPrepGrams(l.grams), display: l.display })),
-    batch: plan.batch.map((l) => ({ food: foodOf(engine, l.foodId, l.name), grams: roundPrepGrams(l.grams), display: l.display })),
+    batch: plan.batch.map((l) => ({ food: foodOf(engine, l.foodId, l.name), grams: roundPrepGrams(l.grams), display: l.display, household: l.measure ? measureHint(l.measure) : '' })),
     shopping,
     shoppingText: shoppingText(shopping),
     storage: storageFor({ foods, method: `${recipe.method}\n${recipe.notes}` }),

@@ -173,3 +173,17 @@ export function parseRecipeFile(buffer: Buffer): ImportedRecipe {
   }
   return fromText(text);
 }
+
+/**
+ * The title an import gets: its own, or with " (imported)" (then " (imported 2)", …) when the cook
+ * already has a recipe of that name, so an import never reads as the recipe it came from.
+ */
+export function importedTitle(title: string, taken: ReadonlySet<string>): string {
+  const has = (t: string) => taken.has(t.trim().toLowerCase());
+  if (!has(title)) return title;
+  for (let n = 1; ; n++) {
+    const suffix = n === 1 ? ' (imported)' : ` (imported ${n})`;
+    const candidate = `${title.slice(0, 200 - suffix.length)}${suffix}`;
+    if (!has(candidate)) return candidate;
+  }
+}

@@ -13,7 +13,7 @@ import type {
 } from '../../shared/schemas/recipes';
 import type { TargetsInput } from '../../shared/schemas/rewrite';
 import type { LineInput } from '../../shared/schemas/analyze';
-import { analyzeLine, textToLines, type FoodVisibility } from './analysis';
+import { analyzeLine, lineVolumeMl, textToLines, type FoodVisibility } from './analysis';
 import { canSeeFood } from './custom-foods';
 import type { StoredFood } from './catalogue';
 import type { FoodEngine } from './food-engine';
@@ -53,7 +53,7 @@ export function computeVersion(engine: FoodEngine, lines: StoredLine[], servings
     return {
       ...line,
       nutrients: food ? nutrientsForGrams(food.per100g, line.grams) : zeroNutrients(),
-      volumeMl: food && line.grams > 0 ? line.grams / food.densityGPerMl : 0,
+      volumeMl: lineVolumeMl(engine, line.input, food ?? null, line.grams),
       incomplete,
       warnings,
     };
@@ -76,7 +76,7 @@ function versionSummary(v: RecipeVersion): VersionSummary {
 
 export function versionDetail(engine: FoodEngine, v: RecipeVersion): VersionDetail {
   const computed = computeVersion(engine, v.lines, v.servings);
-  return { ...versionSummary(v), lines: computed.lines, targets: v.targets, totals: v.totals, volumeMl: v.volumeMl };
+  return { ...versionSummary(v), lines: computed.lines, targets: v.targets, totals: v.totals, volumeMl: computed.volumeMl };
 }
 
 async function summaries(recipes: Recipe[]): Promise<Map<number, { count: number; latest: RecipeVersion | null }>> {
@@ -333,4 +333,10 @@ export async function duplicateRecipe(sequelize: Sequelize, engine: FoodEngine, 
     await insertVersion(engine, copy, { kind: 'original', lines: latest.lines, servings: latest.servings, targets: latest.targets, note: `Copied from “${source.title}” version ${latest.number}` }, viewer.id, transaction);
     return copy;
   });
+}
+
+/** The cook's recipe titles, trimmed and lower-cased, for naming an import that repeats one. */
+export async function ownRecipeTitles(viewer: User): Promise<Set<string>> {
+  const own = await Recipe.findAll({ where: { ownerId: viewer.id, deletedAt: null }, attributes: ['title'] });
+  return new Set(own.map((r) => r.title.trim().toLowerCase()));
 }

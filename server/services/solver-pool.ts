@@ -6,6 +6,12 @@ import type { RewriteResult } from '../../shared/rewrite/types';
 import { HttpError } from '../lib/http-error';
 
 export const DEFAULT_SOLVE_BUDGET_MS = 2_000;
+/**
+ * The solver stops itself at its own budget (2 s by default, shared/rewrite/rewrite-options.ts);
+ * the worker is ended only past that plus this margin, which covers a cold worker loading its
+ * code and a busy machine. Without it, a slow start turned a solvable rewrite into a 503.
+ */
+export const WORKER_MARGIN_MS = 3_000;
 
 let pool: Piscina | null = null;
 
@@ -29,12 +35,12 @@ function getPool() {
 
 /** Solves off the request thread; past the budget the worker is ended and the request gets a 503. */
 export async function runRewrite(task: RewriteTask, budgetMs = DEFAULT_SOLVE_BUDGET_MS): Promise<RewriteResult> {
-  const signal = AbortSignal.timeout(budgetMs);
+  const signal = AbortSignal.timeout(budgetMs + WORKER_MARGIN_MS);
   try {
     return (await getPool().run(task, { signal })) as RewriteResult;
   } catch (error) {
     if (signal.aborted) {
-      throw new HttpError(503, 'solver_timeout', `The rewrite took longer than ${(budgetMs / 1000).toFixed(1)} s and was stopped. Try fewer candidates per line, fewer lines, or lock the lines you do not want changed.`);
+      throw new HttpError(503, 'solver_timeout', `The rewrite took longer than ${((budgetMs + WORKER_MARGIN_MS) / 1000).toFixed(1)} s and was stopped. Try fewer candidates per line, fewer lines, or lock the lines you do not want changed.`);
     }
     throw error;
   }

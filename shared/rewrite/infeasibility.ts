@@ -1,9 +1,9 @@
 import type { Nutrients } from '../nutrition';
 import type { ResolvedOptions } from './rewrite-options';
 import { solveElastic, type ElasticOutcome } from './elastic-solve';
-import { planOf, solvedChoices, type PlanChoice } from './read-plan';
+import { planOf, solvedChoices, writtenChoices, type PlanChoice } from './read-plan';
 import type { SolveLog } from './solve-log';
-import { activeTargets, type TargetRow } from './targets';
+import { activeTargets, targetRow, type TargetRow } from './targets';
 import type { RewriteLine, Suggestion, TargetName, Targets } from './types';
 
 export interface InfeasibilityReport {
@@ -90,15 +90,11 @@ export function analyseInfeasible(
     suggestions.push({ kind: 'target', target, value, message: relaxation(row, value) });
   }
   if (binding.length > 1) {
-    // The closest plan itself meets every target moved to what it reaches (rounded outward).
-    const moved: Partial<Targets> = {};
-    const parts: string[] = [];
-    for (const target of binding) {
-      const { row } = active.find((t) => t.row.target === target)!;
-      moved[target] = roundOutward(perServing[row.key], row);
-      parts.push(relaxation(row, moved[target]!));
+    const moved = movedTargets(lines, targets, servings, options, elastic, binding, perServing, log);
+    const parts = binding.filter((t) => moved[t] !== undefined).map((t) => relaxation(targetRow(t), moved[t]!));
+    if (parts.length > 0) {
+      suggestions.push({ kind: 'targets', value: parts.length, targets: moved, message: `${parts.slice(0, -1).join(', ')}${parts.length > 1 ? ' and ' : ''}${parts[parts.length - 1]}` });
     }
-    suggestions.push({ kind: 'targets', value: binding.length, targets: moved, message: `${parts.slice(0, -1).join(', ')} and ${parts[parts.length - 1]}` });
   }
   const volume = resolve({ objective: { kind: 'dish-volume' } });
   const written = elastic.built.variables.originalVolumeMl;
@@ -110,4 +106,55 @@ export function analyseInfeasible(
     }
   }
   return { closest, perServing, binding, suggestions };
+}
+
+/**
+ * Several targets moved at once, to values one plan reaches (rounded outward, so that plan meets
+ * them). A floor never drops below what the dish as written already gives: the closest plan may
+ * trade protein for calories, but "lower the protein floor" under the dish's own protein helps
+ * no cook. So the floors go to max(closest, as written) and the ceilings to the least a plan
+ * meeting those floors reaches (a re-solve); if that re-solve fails, the closest plan's values.
+ */
+function movedTargets(
+  lines: RewriteLine[],
+  targets: Targets,
+  servings: number,
+  options: ResolvedOptions,
+  elastic: ElasticOutcome,
+  binding: TargetName[],
+  closest: Nutrients,
+  log: SolveLog,
+): Partial<Targets> {
+  const written = planOf(writtenChoices(elastic.built.variables), servings).perServing;
+  const floors: Partial<Targets> = {};
+  for (const target of binding) {
+    const row = targetRow(target);
+    if (row.sense !== 'min') continue;
+    floors[target] = roundOutward(Math.max(closest[row.key], Math.min(targets[target]!, written[row.key])), row);
+  }
+  let reached = closest;
+  const raised = (Object.keys(floors) as TargetName[]).some((t) => floors[t]! > roundOutward(closest[targetRow(t).key], targetRow(t)));
+  const ceilings = binding.filter((t) => targetRow(t).sense === 'max');
+  if (raised && ceilings.length > 0) {
+    const first = targetRow(ceilings[0]);
+    const outcome = solveElastic(
+      lines,
+      { ...targets, ...floors },
+      servings,
+      options,
+      { objective: { kind: 'nutrient', key: first.key, sense: 'min' }, dropTargets: ceilings },
+      log,
+      log.budgetMs / 4,
+    );
+    if (outcome?.meetsTargets) reached = planOf(solvedChoices(outcome.built.variables, outcome.solution.values), servings).perServing;
+  }
+  const moved: Partial<Targets> = {};
+  for (const target of binding) {
+    const row = targetRow(target);
+    const value = row.sense === 'min' ? Math.min(targets[target]!, reached[row.key]) : reached[row.key];
+    const out = roundOutward(value, row);
+    // A target the plan meets as asked stays as asked.
+    if (row.sense === 'min' ? out < targets[target]! : out > targets[target]!) moved[target] = out;
+  }
+  return moved;
 }

@@ -2,6 +2,7 @@
  * Numbers for display. Values are rounded here and only here; whatever is stored or sent
  * to the server stays unrounded.
  */
+import { gramDigits } from '../../shared/shown-figures';
 import type { UnitSystem } from './user';
 
 /** NIST Handbook 44 Appendix C: 1 oz (avoirdupois) = 28.349523125 g; 1 lb = 16 oz = 453.59237 g. */
@@ -32,7 +33,7 @@ export function formatNumber(value: number, digits = 0): string {
 
 /** Small amounts keep one decimal so 0.4 g does not read as 0 g; from 10 up whole numbers suffice. */
 function smallAmountDigits(value: number): number {
-  return Math.abs(value) < 10 ? 1 : 0;
+  return gramDigits(value);
 }
 
 /** Weight of food in grams: "0.5 g", "7.5 g", "128 g", "1,250 g". */

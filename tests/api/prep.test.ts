@@ -92,3 +92,23 @@ describe('POST /api/shopping-lists', () => {
     expect(bad.body.error.message).toMatch(/items/);
   });
 });
+
+describe('shopping lines in the measure the recipe named', () => {
+  const SAUCE = `1 cup heavy cream
+1 tsp dried oregano
+1 (14.5 oz) can diced tomatoes
+2 (6 oz) cans tomato paste
+3 cups milk`;
+
+  it('scales cups, spoons and cans honestly and never switches a cup measure to pounds', async () => {
+    const cook = await signUp(t.app);
+    const recipe = (await cook.agent.post('/api/recipes').set('X-CSRF-Token', cook.csrf).send({ title: 'Creamy tomato sauce', servings: 4, text: SAUCE }).expect(201)).body;
+    const purchases = async (portions: number) => {
+      const body = (await cook.agent.get(`/api/recipes/${recipe.id}/versions/1/prep`).query({ portions }).expect(200)).body;
+      return body.shopping.map((s: { purchase: string }) => s.purchase) as string[];
+    };
+    expect(await purchases(4)).toEqual(['1 cup', '1 tsp', '1 can (14.5 oz)', '2 cans (6 oz)', '3 cups']);
+    expect(await purchases(6)).toEqual(['1 1/2 cups', '1 1/2 tsp', '2 cans (14.5 oz); uses 1 1/2', '3 cans (6 oz)', '4 1/2 cups']);
+    expect(await purchases(10)).toEqual(['2 1/2 cups', '2 1/2 tsp', '3 cans (14.5 oz); uses 2 1/2', '5 cans (6 oz)', '7 1/2 cups']);
+  });
+});

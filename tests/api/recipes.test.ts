@@ -139,6 +139,10 @@ describe('export and import', () => {
       .expect(201);
     expect(imported.body.importedFrom).toBe('json-ld');
     expect(imported.body.servings).toBe(4);
+    // The cook already has "Stovetop mac": the import says it is the imported one, and a second does too.
+    expect(imported.body.title).toBe('Stovetop mac (imported)');
+    const again = await agent.post('/api/recipes/import').set('X-CSRF-Token', csrf).attach('file', Buffer.from(exported.text), 'again.jsonld').expect(201);
+    expect(again.body.title).toBe('Stovetop mac (imported 2)');
     const v1 = await agent.get(`/api/recipes/${imported.body.id}/versions/1`).expect(200);
     expect(v1.body.lines.map((l: { input: string }) => l.input)).toEqual(TEXT.split('\n'));
   });

@@ -1,16 +1,26 @@
-import { useMemo, useRef, useState } from 'react';
-import { useLocation, useNavigate } from 'react-router';
-import { Button } from '../../components/ui/button';
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { Link, useLocation, useNavigate, useSearchParams } from 'react-router';
+import type { LineInput } from '../../../shared/schemas/analyze';
+import type { VersionDetail } from '../../../shared/schemas/recipes';
+import { Alert } from '../../components/ui/alert';
+import { Button, buttonClasses } from '../../components/ui/button';
+import { ErrorState } from '../../components/ui/error-state';
+import { LoadingState } from '../../components/ui/spinner';
 import { Card } from '../../components/ui/card';
 import { Page } from '../../components/ui/page';
 import { AnalysisSection } from '../../features/analysis/components/analysis-section';
 import { RecipeInputForm } from '../../features/analysis/components/recipe-input-form';
 import { CurrentAnalysisContext } from '../../features/analysis/current-analysis';
-import { useKitchen } from '../../features/analysis/use-kitchen';
+import { lineInputs } from '../../features/analysis/kitchen-lines';
+import type { KitchenSource } from '../../features/analysis/kitchen-storage';
+import { useKitchen, type Kitchen } from '../../features/analysis/use-kitchen';
 import { AddFoodLineForm } from '../../features/foods/components/add-food-line-form';
 import { FoodCombobox } from '../../features/foods/components/food-combobox';
 import { useCreateRecipe } from '../../features/recipes/api/create-recipe';
+import { useRecipe } from '../../features/recipes/api/get-recipe';
+import { useRecipeVersion } from '../../features/recipes/api/get-version';
 import { useSaveVersion } from '../../features/recipes/api/save-version';
+import { positiveInt, recipePath } from '../../features/recipes/recipe-links';
 import { RewritePanel, type RewriteRecipe } from '../../features/rewrite/components/rewrite-panel';
 import type { RewriteSaveAction } from '../../features/rewrite/components/save-rewrite';
 import type { RewriteDraft } from '../../features/rewrite/save-draft';
@@ -27,6 +37,7 @@ export function KitchenPage() {
   const hasLines = kitchen.lines.length > 0;
   // A new recipe empties the paste box too.
   const [round, setRound] = useState(0);
+  const opening = useOpenFromBook(kitchen, () => setRound((n) => n + 1));
 
   return (
     <Page
@@ -44,10 +55,14 @@ export function KitchenPage() {
         )
       }
     >
+      {opening}
+      {kitchen.source && <EditingSavedRecipe kitchen={kitchen} />}
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <Card
           title="Paste a recipe"
-          description={hasLines ? 'Analysing pasted text replaces the lines below.' : 'Sign-in is not needed to try it.'}
+          description={
+            hasLines ? 'Analysing pasted text replaces the lines below.' : user ? undefined : 'No account needed to try it; sign in to keep what you make.'
+          }
         >
           <RecipeInputForm
             key={round}
@@ -87,7 +102,7 @@ export function KitchenPage() {
             cook's pins, the servings, and the server's answer to exactly those (see
             src/features/analysis/current-analysis.tsx). Pass it to the panel as props.
             ─────────────────────────────────────────────────────────────────────── */}
-        <KitchenRewrite recipe={kitchen.current} unitSystem={unitSystem} />
+        <KitchenRewrite recipe={kitchen.current} unitSystem={unitSystem} kitchen={kitchen} />
         {/* ─────────────────────────── end of rewrite slot ─────────────────────────── */}
       </CurrentAnalysisContext.Provider>
     </Page>
@@ -99,7 +114,7 @@ export function KitchenPage() {
  * the rewrite version 2, then the recipe opens. Signed out, the panel asks to sign in first (the
  * Kitchen and the panel keep their state in sessionStorage, so the rewrite is still there after).
  */
-function KitchenRewrite({ recipe, unitSystem }: { recipe: RewriteRecipe | null; unitSystem: UnitSystem }) {
+function KitchenRewrite({ recipe, unitSystem, kitchen }: { recipe: RewriteRecipe | null; unitSystem: UnitSystem; kitchen: Kitchen }) {
   const auth = useAuth();
   const location = useLocation();
   const navigate = useNavigate();
@@ -107,6 +122,8 @@ function KitchenRewrite({ recipe, unitSystem }: { recipe: RewriteRecipe | null; 
   const { mutateAsync: saveVersion } = useSaveVersion();
   // A recipe created for a draft whose version then failed: a retry adds the version to it, not a second recipe.
   const created = useRef<{ draft: string; id: number } | null>(null);
+  const { source, setSource } = kitchen;
+  const editedSinceOpened = source !== null && JSON.stringify(lineInputs(kitchen.lines)) !== source.openedLines;
 
   const saveAction = useMemo((): RewriteSaveAction => {
     if (auth.status === 'checking') return { kind: 'unavailable', reason: 'Checking your sign-in…' };
@@ -116,6 +133,22 @@ function KitchenRewrite({ recipe, unitSystem }: { recipe: RewriteRecipe | null; 
     }
     if (!hasRole(auth.user, PAGE_ROLES.recipeBook)) {
       return { kind: 'unavailable', reason: 'The recipe book is for home cook accounts; this rewrite stays on this page.' };
+    }
+    if (source) {
+      return {
+        kind: 'save',
+        into: { title: source.title, nextNumber: source.latestNumber + (editedSinceOpened ? 2 : 1) },
+        save: async (draft: RewriteDraft) => {
+          // Lines the cook changed first become a version of their own, so the rewrite is compared with them.
+          let parent = source.versionNumber;
+          if (editedSinceOpened) {
+            parent = (await saveVersion({ recipeId: source.recipeId, kind: 'edit', lines: draft.originalLines, servings: draft.servings, parentNumber: source.versionNumber, note: `Edited in the Kitchen from version ${source.versionNumber}.` })).number;
+          }
+          const saved = await saveVersion({ recipeId: source.recipeId, kind: 'rewrite', lines: draft.rewrittenLines, servings: draft.servings, targets: draft.targets, note: draft.note, parentNumber: parent });
+          setSource(null);
+          navigate(recipePath(source.recipeId, saved.number));
+        },
+      };
     }
     return {
       kind: 'save',
@@ -132,7 +165,7 @@ function KitchenRewrite({ recipe, unitSystem }: { recipe: RewriteRecipe | null; 
         navigate(`/recipes/${id}`);
       },
     };
-  }, [auth.status, auth.user, location, createRecipe, saveVersion, navigate]);
+  }, [auth.status, auth.user, location, createRecipe, saveVersion, navigate, source, editedSinceOpened, setSource]);
 
   return (
     <RewritePanel
@@ -149,5 +182,82 @@ function KitchenRewrite({ recipe, unitSystem }: { recipe: RewriteRecipe | null; 
         </div>
       )}
     />
+  );
+}
+
+/** A stored line as the Kitchen takes it: its food and grams pinned, so the numbers are the saved ones. */
+function kitchenLineOf(line: VersionDetail['lines'][number]): LineInput {
+  if (line.foodId == null) return { input: line.input };
+  return { input: line.input, foodId: line.foodId, ...(line.grams > 0 && { grams: line.grams }) };
+}
+
+/**
+ * `/?recipe=ID&version=N` (the recipe page's "Edit in the Kitchen"): that version's lines replace the
+ * Kitchen's, and the address goes back to plain `/` so a reload keeps the cook's edits.
+ */
+function useOpenFromBook(kitchen: Kitchen, onOpened: () => void) {
+  const [params, setParams] = useSearchParams();
+  const recipeId = positiveInt(params.get('recipe'));
+  const number = positiveInt(params.get('version'));
+  const recipe = useRecipe(recipeId);
+  const version = useRecipeVersion(recipeId, number);
+  const { openVersion } = kitchen;
+  const opened = useRef<string | null>(null);
+  useEffect(() => {
+    if (recipeId === null || number === null || !recipe.data || !version.data) return;
+    const key = `${recipeId}/${number}`;
+    if (opened.current === key) return;
+    opened.current = key;
+    const lines = version.data.lines.map(kitchenLineOf);
+    openVersion(lines, version.data.servings, {
+      recipeId,
+      title: recipe.data.title,
+      versionNumber: number,
+      latestNumber: recipe.data.latest?.number ?? number,
+      openedLines: JSON.stringify(lines),
+    });
+    onOpened();
+    setParams({}, { replace: true });
+  }, [recipeId, number, recipe.data, version.data, openVersion, onOpened, setParams]);
+
+  if (recipeId === null || number === null) return null;
+  const error = recipe.error ?? version.error;
+  if (error) return <ErrorState title="That saved version didn't open" error={error} onRetry={() => void (recipe.isError ? recipe.refetch() : version.refetch())} />;
+  return <LoadingState label="Bringing the saved version to the Kitchen…" />;
+}
+
+/** The Kitchen holds a saved recipe: say which, and save the lines as they are now as its next version. */
+function EditingSavedRecipe({ kitchen }: { kitchen: Kitchen }) {
+  const source = kitchen.source!;
+  const navigate = useNavigate();
+  const { mutateAsync: saveVersion, isPending, error } = useSaveVersion();
+  const lines = lineInputs(kitchen.lines);
+  const edited = JSON.stringify(lines) !== source.openedLines;
+  const save = async () => {
+    const saved = await saveVersion({ recipeId: source.recipeId, kind: 'edit', lines, servings: kitchen.servings, parentNumber: source.versionNumber, note: `Edited in the Kitchen from version ${source.versionNumber}.` });
+    kitchen.setSource(null);
+    navigate(recipePath(source.recipeId, saved.number));
+  };
+  return (
+    <Alert
+      tone="info"
+      title={`Editing “${source.title}”, from version ${source.versionNumber}`}
+      announce={false}
+      action={
+        <div className="flex flex-wrap gap-2">
+          <Button size="sm" onClick={() => void save().catch(() => undefined)} loading={isPending} loadingLabel="Saving…" disabled={!edited || lines.length === 0}>
+            Save my changes as version {source.latestNumber + 1}
+          </Button>
+          <Link to={recipePath(source.recipeId, source.versionNumber)} className={buttonClasses({ variant: 'secondary', size: 'sm' })}>
+            Back to the recipe
+          </Link>
+        </div>
+      }
+    >
+      {edited
+        ? 'Your changes stay here until you save them as a new version; the versions already saved don’t change. Or rewrite it below and save the lighter version.'
+        : 'Change a food, a weight or a line below, or rewrite it, then save it as a new version. The versions already saved don’t change.'}
+      {error != null && <span className="mt-1 block font-semibold text-beet-700">Not saved: {error instanceof Error ? error.message : 'try again.'}</span>}
+    </Alert>
   );
 }

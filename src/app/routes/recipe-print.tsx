@@ -4,6 +4,7 @@ import { Button, buttonClasses } from '../../components/ui/button';
 import { ErrorState } from '../../components/ui/error-state';
 import { SelectField } from '../../components/ui/select-field';
 import { LoadingState } from '../../components/ui/spinner';
+import { usePrep } from '../../features/prep/api/get-prep';
 import { useRecipe } from '../../features/recipes/api/get-recipe';
 import { useRecipeVersion } from '../../features/recipes/api/get-version';
 import { RecipeNotFound } from '../../features/recipes/components/recipe-not-found';
@@ -35,6 +36,9 @@ export function RecipePrintPage() {
   const asked = positiveInt(params.get('version'));
   const chosen = versions.find((v) => v.number === asked) ?? versions.at(-1) ?? null;
   const version = useRecipeVersion(recipe.data ? id : null, chosen?.number ?? null);
+  // The prep sheet's figures for one batch of the recipe as written: household measures and fridge life.
+  const prep = usePrep(version.data ? id : null, chosen?.number ?? null, version.data?.servings ?? null);
+  const extras = prep.data ? { household: prep.data.batch.map((b) => b.household ?? ''), fridgeDays: prep.data.storage.fridgeDays } : undefined;
 
   if (id === null || (recipe.isError && isApiError(recipe.error) && recipe.error.status === 404)) return <RecipeNotFound />;
 
@@ -70,7 +74,7 @@ export function RecipePrintPage() {
   else if (recipe.isError) body = <ErrorState title="This recipe didn't load" error={recipe.error} onRetry={() => void recipe.refetch()} />;
   else if (!chosen) body = <Alert tone="info" title="Nothing to print yet">This recipe has no saved version.</Alert>;
   else if (version.isError) body = <ErrorState title={`Version ${chosen.number} didn't load`} error={version.error} onRetry={() => void version.refetch()} />;
-  else if (version.data) body = <RecipePrintCard recipe={recipe.data} version={version.data} />;
+  else if (version.data) body = <RecipePrintCard recipe={recipe.data} version={version.data} extras={extras} />;
 
   return (
     <>

@@ -12,9 +12,23 @@ export interface AnsweredRequest {
   servings: number;
 }
 
+/** The saved version the Kitchen's lines came from: saving then adds a version to that recipe. */
+export interface KitchenSource {
+  recipeId: number;
+  title: string;
+  /** the version opened (or saved last from here) */
+  versionNumber: number;
+  /** the recipe's newest version number when it was opened: the next save is one after */
+  latestNumber: number;
+  /** the lines as opened, to tell whether the cook changed them */
+  openedLines: string;
+}
+
 export interface KitchenSnapshot {
   /** the text last pasted, to show in the form again */
   pastedText: string;
+  /** null for a recipe pasted or built here */
+  source: KitchenSource | null;
   lines: KitchenLine[];
   servings: number;
   analysis: AnalyzeResponse | null;
@@ -24,7 +38,7 @@ export interface KitchenSnapshot {
 export const DEFAULT_SERVINGS = 4;
 
 export function emptyKitchen(): KitchenSnapshot {
-  return { pastedText: '', lines: [], servings: DEFAULT_SERVINGS, analysis: null, answered: null };
+  return { pastedText: '', source: null, lines: [], servings: DEFAULT_SERVINGS, analysis: null, answered: null };
 }
 
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
@@ -56,6 +70,10 @@ function isAnswered(v: unknown, analysis: AnalyzeResponse): v is AnsweredRequest
   );
 }
 
+function isSource(v: unknown): v is KitchenSource {
+  return isObject(v) && typeof v.recipeId === 'number' && v.recipeId >= 1 && typeof v.title === 'string' && typeof v.versionNumber === 'number' && v.versionNumber >= 1 && typeof v.latestNumber === 'number' && typeof v.openedLines === 'string';
+}
+
 /** A snapshot read back from storage, or null when there is none or it is not one of ours. */
 export function parseKitchen(raw: string | null): KitchenSnapshot | null {
   if (!raw) return null;
@@ -71,6 +89,7 @@ export function parseKitchen(raw: string | null): KitchenSnapshot | null {
   const answered = analysis && isAnswered(data.answered, analysis) ? data.answered : null;
   return {
     pastedText: typeof data.pastedText === 'string' ? data.pastedText : '',
+    source: isSource(data.source) ? data.source : null,
     lines: data.lines,
     servings: data.servings,
     analysis: answered ? analysis : null,

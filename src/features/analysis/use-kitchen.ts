@@ -3,7 +3,7 @@ import type { AnalyzedLine, AnalyzeRequest, AnalyzeResponse, FoodSummary, LineIn
 import { useAnalyzeRecipe } from './api/analyze-recipe';
 import type { CurrentAnalysis } from './current-analysis';
 import { lineInputs, linesFromAnalysis, newLineKey, requestSignature, withFood, withGrams, withoutLine, type KitchenLine } from './kitchen-lines';
-import { emptyKitchen, loadKitchen, saveKitchen, type KitchenSnapshot } from './kitchen-storage';
+import { emptyKitchen, loadKitchen, saveKitchen, type KitchenSnapshot, type KitchenSource } from './kitchen-storage';
 
 const storage = (): Storage | undefined => (typeof window === 'undefined' ? undefined : window.sessionStorage);
 
@@ -11,6 +11,8 @@ export interface Kitchen {
   lines: KitchenLine[];
   servings: number;
   pastedText: string;
+  /** the saved version these lines came from, or null */
+  source: KitchenSource | null;
   analysis: AnalyzeResponse | null;
   /** the answer for one line, by its key; null while a new line waits for its first answer */
   analysedLine: (key: string) => AnalyzedLine | null;
@@ -31,6 +33,14 @@ export interface Kitchen {
   setGrams: (key: string, grams: number | null) => void;
   addLine: (line: LineInput) => void;
   removeLine: (key: string) => void;
+  /** puts a line removed a moment ago back where it was */
+  undoRemove: () => void;
+  /** the line removed last, while it can still be put back */
+  removed: { input: string } | null;
+  /** a saved version's lines (with their foods and grams pinned) replace the Kitchen's */
+  openVersion: (lines: LineInput[], servings: number, source: KitchenSource) => void;
+  /** the lines were saved as a new version of the source recipe */
+  setSource: (source: KitchenSource | null) => void;
   retry: () => void;
   clear: () => void;
 }
@@ -47,6 +57,7 @@ export function useKitchen(): Kitchen {
   const inFlight = useRef<AbortController | null>(null);
   const lastRequest = useRef<{ request: AnalyzeRequest; onAnswer: (response: AnalyzeResponse) => void } | null>(null);
   const [pastesAnswered, setPastesAnswered] = useState(0);
+  const [removed, setRemoved] = useState<{ line: KitchenLine; index: number } | null>(null);
 
   const update = useCallback((change: (s: KitchenSnapshot) => KitchenSnapshot) => {
     const next = change(snapshotRef.current);
@@ -102,7 +113,7 @@ export function useKitchen(): Kitchen {
 
   const analyseText = useCallback(
     (text: string, servings: number) => {
-      update((prev) => ({ ...prev, pastedText: text }));
+      update((prev) => ({ ...prev, pastedText: text, source: null }));
       send({ text, servings }, (analysis) => {
         const lines = linesFromAnalysis(analysis.lines);
         update((prev) => ({
@@ -142,6 +153,7 @@ export function useKitchen(): Kitchen {
     lines,
     servings,
     pastedText: snapshot.pastedText,
+    source: snapshot.source,
     analysis,
     analysedLine: (key) => analysedByKey.get(key) ?? null,
     current,
@@ -155,7 +167,33 @@ export function useKitchen(): Kitchen {
     chooseFood: (key, food) => editAndAsk((s) => ({ ...s, lines: withFood(s.lines, key, food ? food.id : null) })),
     setGrams: (key, grams) => editAndAsk((s) => ({ ...s, lines: withGrams(s.lines, key, grams) })),
     addLine: (line) => editAndAsk((s) => ({ ...s, lines: [...s.lines, { ...line, key: newLineKey() }] })),
-    removeLine: (key) => editAndAsk((s) => ({ ...s, lines: withoutLine(s.lines, key) })),
+    removeLine: (key) => {
+      const index = snapshotRef.current.lines.findIndex((l) => l.key === key);
+      if (index >= 0) setRemoved({ line: snapshotRef.current.lines[index], index });
+      editAndAsk((s) => ({ ...s, lines: withoutLine(s.lines, key) }));
+    },
+    removed: removed ? { input: removed.line.input } : null,
+    undoRemove: () => {
+      if (!removed) return;
+      setRemoved(null);
+      editAndAsk((s) => {
+        if (s.lines.some((l) => l.key === removed.line.key)) return s;
+        const lines = [...s.lines];
+        lines.splice(Math.min(removed.index, lines.length), 0, removed.line);
+        return { ...s, lines };
+      });
+    },
+    openVersion: (lines, servings, source) => {
+      setRemoved(null);
+      editAndAsk(() => ({
+        ...emptyKitchen(),
+        pastedText: lines.map((l) => l.input).join('\n'),
+        source,
+        servings,
+        lines: lines.map((l) => ({ ...l, key: newLineKey() })),
+      }));
+    },
+    setSource: (source) => update((s) => ({ ...s, source })),
     retry: () => {
       const last = lastRequest.current;
       if (last) send(last.request, last.onAnswer);
@@ -163,6 +201,7 @@ export function useKitchen(): Kitchen {
     clear: () => {
       inFlight.current?.abort();
       reset();
+      setRemoved(null);
       update(() => emptyKitchen());
     },
   };

@@ -1,5 +1,6 @@
 import type { ClientTargets } from '../../../shared/schemas/coaching';
 import type { TargetEstimate } from '../../../shared/schemas/targets';
+import { mealTargets, meetsShown } from '../../../shared/shown-figures';
 import { numberText, readNumber } from './read-number';
 
 /** The targets form as typed. */
@@ -35,12 +36,13 @@ export function targetsValues(targets: ClientTargets | null): TargetsValues {
  * and the estimate is no more exact than that. Fiber, sodium and the note are left as they were.
  */
 export function applyEstimate(current: TargetsValues, estimate: TargetEstimate, mealsPerDay: number): TargetsValues {
+  const rounded = mealTargets(estimate.kcalPerDay, estimate.proteinGPerDay, mealsPerDay);
   return {
     ...current,
-    perMealKcal: String(Math.round(estimate.perMeal.kcal)),
-    perMealProteinG: String(Math.round(estimate.perMeal.proteinG)),
-    kcalPerDay: String(Math.round(estimate.kcalPerDay)),
-    proteinGPerDay: String(Math.round(estimate.proteinGPerDay)),
+    perMealKcal: String(rounded.perMeal.kcal),
+    perMealProteinG: String(rounded.perMeal.proteinG),
+    kcalPerDay: String(rounded.kcalPerDay),
+    proteinGPerDay: String(rounded.proteinGPerDay),
     mealsPerDay: String(mealsPerDay),
   };
 }
@@ -125,5 +127,5 @@ export function targetsErrorsFrom(fieldErrors: Record<string, string>): TargetsE
 /** Whether a saved version's figures per serving meet the per-meal targets. */
 export function meetsPerMeal(perServing: { kcal: number; proteinG: number }, targets: ClientTargets | null): { kcal: boolean; protein: boolean } | null {
   if (!targets) return null;
-  return { kcal: perServing.kcal <= targets.perMeal.kcal, protein: perServing.proteinG >= targets.perMeal.proteinG };
+  return meetsShown(perServing, targets.perMeal);
 }

@@ -91,9 +91,14 @@ export function foodGroupWords(code: string): string | null {
   return FOOD_GROUPS[code.slice(0, 2)] ?? null;
 }
 
-/** Where a food's numbers come from: "USDA SR28 NDB 01009". */
+/** Where a food's numbers come from, in words; the USDA reference number only where asked for (referenceNumber). */
 export function sourceWords(food: Pick<FoodSummary, 'source' | 'sourceId'>): string {
-  return food.source === 'usda-sr28' ? `USDA SR28 NDB ${food.sourceId}` : 'Entered from a label';
+  return food.source === 'usda-sr28' ? 'USDA food values' : 'Entered from a label';
+}
+
+/** "USDA Standard Reference 28, NDB 01009", or null for foods entered from a label. */
+export function referenceNumber(food: Pick<FoodSummary, 'source' | 'sourceId'>): string | null {
+  return food.source === 'usda-sr28' ? `USDA Standard Reference 28, NDB ${food.sourceId}` : null;
 }
 
 /** Grams of protein per 100 kcal of a search hit, from its values per 100 g. */

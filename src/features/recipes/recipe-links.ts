@@ -27,3 +27,8 @@ export function positiveInt(value: string | null | undefined): number | null {
   const n = Number(value);
   return Number.isSafeInteger(n) && n > 0 ? n : null;
 }
+
+/** The Kitchen with one saved version's lines on the board, ready to edit, rewrite and save as a new version. */
+export function kitchenPath(id: number, version: number): string {
+  return `/?${new URLSearchParams({ recipe: String(id), version: String(version) })}`;
+}

@@ -7,7 +7,7 @@ import { DIET_FLAGS, type DietFlag } from '../../../shared/food';
 import type { Nutrients } from '../../../shared/nutrition';
 import type { LineInput } from '../../../shared/schemas/analyze';
 import { OBJECTIVES, targetsSchema, type RewriteRequest, type TargetsInput } from '../../../shared/schemas/rewrite';
-import type { RewriteObjective, TargetName } from '../../../shared/rewrite/types';
+import type { RewriteObjective, Suggestion, TargetName } from '../../../shared/rewrite/types';
 
 /** More protein and fewer calories than the dish as written: the starting point of a rewrite. */
 export const DEFAULT_PROTEIN_GAIN = 0.3;
@@ -232,3 +232,22 @@ export const DIET_WORDS: Record<DietFlag, string> = {
   'dairy-free': 'Dairy-free',
   'gluten-free': 'Gluten-free',
 };
+
+/**
+ * The form fields a one-click suggestion changes, as the texts the boxes hold. A suggestion that
+ * moves several targets at once changes every one of them.
+ */
+export function suggestionFields(s: Suggestion): { name: 'maxSwaps' | 'volumeTolerancePct' | `targets.${TargetName}`; value: string }[] {
+  switch (s.kind) {
+    case 'more-swaps':
+      return [{ name: 'maxSwaps', value: String(s.value) }];
+    case 'volume-tolerance':
+      return [{ name: 'volumeTolerancePct', value: String(s.value) }];
+    case 'target':
+      return s.target ? [{ name: `targets.${s.target}`, value: String(s.value) }] : [];
+    case 'targets':
+      return Object.entries(s.targets ?? {}).flatMap(([target, value]) =>
+        value === undefined ? [] : [{ name: `targets.${target as TargetName}` as const, value: String(value) }],
+      );
+  }
+}

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { ROLES } from '../../../shared/food';
-import { foodGroupWords, proteinPer100KcalOfHit, roleWords, sourceWords } from '../../../src/features/foods/food-words';
+import { foodGroupWords, proteinPer100KcalOfHit, roleWords, referenceNumber, sourceWords } from '../../../src/features/foods/food-words';
 import { gramsPerMeasure, ingredientLineFor, measureParts, pluralMeasure } from '../../../src/features/foods/portion-words';
 
 describe('food words', () => {
@@ -15,9 +15,11 @@ describe('food words', () => {
     expect(foodGroupWords('2000')).toBe('Cereal grains and pasta');
     expect(foodGroupWords('99')).toBeNull();
   });
-  it('cites the source of a USDA food', () => {
-    expect(sourceWords({ source: 'usda-sr28', sourceId: '01009' })).toBe('USDA SR28 NDB 01009');
+  it('names the source of a food in words, with the USDA reference number kept for where it is asked for', () => {
+    expect(sourceWords({ source: 'usda-sr28', sourceId: '01009' })).toBe('USDA food values');
+    expect(referenceNumber({ source: 'usda-sr28', sourceId: '01009' })).toBe('USDA Standard Reference 28, NDB 01009');
     expect(sourceWords({ source: 'custom', sourceId: 'x' })).toBe('Entered from a label');
+    expect(referenceNumber({ source: 'custom', sourceId: 'x' })).toBeNull();
   });
   it('works out protein per 100 kcal from values per 100 g', () => {
     expect(proteinPer100KcalOfHit({ kcalPer100g: 400, proteinPer100g: 24 })).toBeCloseTo(6, 10);

@@ -87,6 +87,7 @@ function analysisOf(n: number): AnalyzeResponse {
 describe('kitchen storage', () => {
   const snapshot: KitchenSnapshot = {
     pastedText: '1 cup milk\n1 cup milk\n1 cup milk',
+    source: { recipeId: 7, title: 'Milk pudding', versionNumber: 2, latestNumber: 3, openedLines: '[]' },
     lines,
     servings: 4,
     analysis: analysisOf(3),

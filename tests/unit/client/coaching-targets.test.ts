@@ -59,8 +59,9 @@ describe('targets form', () => {
     expect(applyEstimate(before, estimate, 3)).toEqual({
       perMealKcal: '577',
       perMealProteinG: '45',
-      kcalPerDay: '1732',
-      proteinGPerDay: '136',
+      // the day is the meals added up (577 × 3, 45 × 3), so no screen shows 136 g beside 3 × 45 g
+      kcalPerDay: '1731',
+      proteinGPerDay: '135',
       mealsPerDay: '3',
       fiberMinG: '8',
       sodiumMaxMg: '',

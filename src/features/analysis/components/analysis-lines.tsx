@@ -42,7 +42,12 @@ const CELL = 'px-3 py-3 align-top max-md:block max-md:p-0';
 const PHONE_LABEL = 'mb-0.5 block text-xs font-bold tracking-wide text-ink-soft uppercase md:sr-only';
 
 function sourceNote(food: FoodSummary): string {
-  return food.source === 'usda-sr28' ? `NDB ${food.sourceId}` : 'from a label';
+  return food.source === 'usda-sr28' ? 'About this food' : 'From a label';
+}
+
+/** "1 cup, fluid (yields 2 cups whipped)" → "1 cup": the measure, without the catalogue's asides. */
+function measureWords(portion: string): string {
+  return portion.replace(/\s*\([^)]*\)/g, '').split(',')[0].trim();
 }
 
 function LineRow({
@@ -124,7 +129,7 @@ function LineRow({
         {analysed ? (
           <span className="flex flex-col">
             <span className="font-semibold tabular-nums">{amount ?? <span className="text-ink-soft">none given</span>}</span>
-            {analysed.portionUsed && <span className="text-sm text-ink-soft">weighed as {analysed.portionUsed}</span>}
+            {analysed.portionUsed && <span className="text-sm text-ink-soft">by USDA’s weight for {measureWords(analysed.portionUsed)}</span>}
           </span>
         ) : (
           <span className="text-ink-soft">…</span>

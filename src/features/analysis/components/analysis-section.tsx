@@ -1,5 +1,7 @@
 import { useEffect, useRef, type ReactNode } from 'react';
 import { incompleteLineNumbers } from '../../../../shared/line-status';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { IncompleteTotalsAlert } from '../../../components/ui/incomplete-totals-alert';
 import { ErrorState } from '../../../components/ui/error-state';
@@ -90,6 +92,19 @@ export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHre
       )}
 
       {analysis && !kitchen.stale && <IncompleteTotalsAlert lineNumbers={incompleteLineNumbers(analysis.lines.map((l) => ({ food: l.food, grams: l.grams })))} />}
+      {kitchen.removed && (
+        <Alert
+          tone="info"
+          title="Line removed"
+          action={
+            <Button variant="secondary" size="sm" onClick={kitchen.undoRemove}>
+              Undo
+            </Button>
+          }
+        >
+          “{kitchen.removed.input}” is out of the recipe.
+        </Alert>
+      )}
 
       <AnalysisLines
         lines={lines}

@@ -5,6 +5,7 @@ import { NutrientTable } from '../../../components/ui/nutrient-table';
 import { Stat } from '../../../components/ui/stat';
 import { formatEnergyDensity, formatKcal, formatMacroG, formatNumber, formatWeight } from '../../../lib/format';
 import type { UnitSystem } from '../../../lib/user';
+import { servingVolumeMl } from '../../../../shared/shown-figures';
 import { formatVolume } from '../amount-words';
 
 /** The headline figures of one serving: energy, protein and the two quick judges of a dish. */
@@ -24,7 +25,7 @@ export function ServingHeadline({ analysis }: { analysis: AnalyzeResponse }) {
 export function DishPanels({ analysis, unitSystem }: { analysis: AnalyzeResponse; unitSystem: UnitSystem }) {
   const servings = analysis.servings;
   const perServingGrams = analysis.totalGrams / servings;
-  const perServingMl = analysis.volumeMl / servings;
+  const perServingMl = servingVolumeMl(analysis.volumeMl, servings);
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
       <Card title="Nutrients" headingLevel={3} description={`One serving is 1/${servings} of the dish. Shown rounded; every sum is worked out unrounded.`}>

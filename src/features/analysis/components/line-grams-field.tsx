@@ -75,7 +75,7 @@ export function LineGramsField({ grams, label, unitSystem, needsAmount, onCommit
       <label htmlFor={id} className="sr-only">
         {label}
       </label>
-      <div className="flex items-center gap-2">
+      <div className="flex flex-wrap items-center gap-x-2 gap-y-0.5">
         <div className="relative w-28 shrink-0">
           <input
             id={id}

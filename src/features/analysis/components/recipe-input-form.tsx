@@ -2,6 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import { Button } from '../../../components/ui/button';
+import { MAX_LINES } from '../../../../shared/schemas/analyze';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 
 export const RECIPE_TEXT_MAX_LENGTH = 10_000;
@@ -11,7 +12,10 @@ export const recipeInputSchema = z.object({
   text: z
     .string()
     .max(RECIPE_TEXT_MAX_LENGTH, { error: `Keep the recipe under ${RECIPE_TEXT_MAX_LENGTH.toLocaleString('en-US')} characters.` })
-    .refine((text) => ingredientLines(text).length > 0, { error: 'Paste at least one ingredient line.' }),
+    .refine((text) => ingredientLines(text).length > 0, { error: 'Paste at least one ingredient line.' })
+    .refine((text) => ingredientLines(text).length <= MAX_LINES, {
+      error: (issue) => `A recipe has at most ${MAX_LINES} ingredient lines; this has ${ingredientLines(String(issue.input)).length}. Split it or leave out the lines that aren’t ingredients.`,
+    }),
   servings: z
     .number({ error: 'Enter how many servings the recipe makes.' })
     .int({ error: 'Use a whole number of servings.' })
@@ -85,7 +89,9 @@ export function RecipeInputForm({
         {...register('text')}
       />
       <p className="-mt-3 text-sm text-ink-soft" aria-live="polite">
-        {lineCount === 0 ? 'No ingredient lines yet.' : `${lineCount} ingredient line${lineCount === 1 ? '' : 's'}.`}
+        {lineCount === 0
+          ? 'No ingredient lines yet.'
+          : `${lineCount} ingredient line${lineCount === 1 ? '' : 's'}${lineCount > MAX_LINES ? ` — at most ${MAX_LINES} lines` : ''}.`}
       </p>
       <div className="flex flex-wrap items-end gap-4">
         <TextField

@@ -1,10 +1,13 @@
 import { Alert } from '../../../components/ui/alert';
 import { Stat } from '../../../components/ui/stat';
 import { formatKcal, formatMacroG, formatNumber } from '../../../lib/format';
+import { mealTargets } from '../../../../shared/shown-figures';
 import type { TargetEstimate } from '../api/estimate-targets';
 
 /** What the estimate worked out, with its cautions first. */
 export function EstimateSummary({ estimate, mealsPerDay }: { estimate: TargetEstimate; mealsPerDay: number }) {
+  // The figures "Use these targets" saves, so the summary and the saved targets read the same.
+  const rounded = mealTargets(estimate.kcalPerDay, estimate.proteinGPerDay, mealsPerDay);
   return (
     <div className="flex flex-col gap-4">
       <Alert tone="caution" title="Read before using these numbers">
@@ -15,15 +18,15 @@ export function EstimateSummary({ estimate, mealsPerDay }: { estimate: TargetEst
         </ul>
       </Alert>
       <dl className="grid grid-cols-2 gap-3">
-        <Stat label="Per meal, energy" value={formatKcal(estimate.perMeal.kcal)} note={`over ${mealsPerDay} meal${mealsPerDay === 1 ? '' : 's'}`} className="border-ember-200 bg-ember-50" />
-        <Stat label="Per meal, protein" value={formatMacroG(estimate.perMeal.proteinG)} note="at least" className="border-herb-200 bg-herb-50" />
+        <Stat label="Per meal, energy" value={formatKcal(rounded.perMeal.kcal)} note={`over ${mealsPerDay} meal${mealsPerDay === 1 ? '' : 's'}`} className="border-ember-200 bg-ember-50" />
+        <Stat label="Per meal, protein" value={formatMacroG(rounded.perMeal.proteinG)} note="at least" className="border-herb-200 bg-herb-50" />
       </dl>
       <dl className="flex flex-col">
         {[
           ['Resting energy (Mifflin–St Jeor)', formatKcal(estimate.bmrKcal)],
           ['With their activity', formatKcal(estimate.tdeeKcal)],
-          ['Energy a day for the goal', formatKcal(estimate.kcalPerDay)],
-          ['Protein a day', `${formatMacroG(estimate.proteinGPerDay)} (${formatNumber(estimate.proteinGPerKg, 1)} g/kg)`],
+          ['Energy a day for the goal', formatKcal(rounded.kcalPerDay)],
+          ['Protein a day', `${formatMacroG(rounded.proteinGPerDay)} (${formatNumber(estimate.proteinGPerKg, 1)} g/kg)`],
         ].map(([label, value]) => (
           <div key={label} className="flex justify-between gap-3 border-b border-line py-1.5">
             <dt className="text-ink-soft">{label}</dt>

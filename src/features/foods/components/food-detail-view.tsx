@@ -8,7 +8,7 @@ import { NutrientTable } from '../../../components/ui/nutrient-table';
 import { Stat } from '../../../components/ui/stat';
 import { formatEnergyDensity, formatGrams, formatKcal, formatMacroG, formatMg, formatNumber, formatWeight } from '../../../lib/format';
 import type { UnitSystem } from '../../../lib/user';
-import { DIET_WORDS, foodGroupWords, roleWords, sourceWords } from '../food-words';
+import { DIET_WORDS, foodGroupWords, referenceNumber, roleWords, sourceWords } from '../food-words';
 
 function densityExample(gPerMl: number, unitSystem: UnitSystem): string {
   return unitSystem === 'us'
@@ -70,6 +70,12 @@ export function FoodDetailView({ food, unitSystem }: { food: FoodDetail; unitSys
         {group && <span className="font-semibold">{group}</span>}
         {group && <span aria-hidden="true">·</span>}
         <span>{sourceWords(food)}</span>
+        {referenceNumber(food) && (
+          <details className="text-sm">
+            <summary className="cursor-pointer underline-offset-2 hover:underline">Reference number</summary>
+            {referenceNumber(food)}
+          </details>
+        )}
         {food.branded && <Badge>Brand or restaurant entry</Badge>}
       </div>
 

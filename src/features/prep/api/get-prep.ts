@@ -24,12 +24,17 @@ export interface PrepShoppingItem {
   purchase: string;
 }
 
+export interface PrepBatchWeight extends PrepWeight {
+  /** the line's own household measure, scaled to the batch: "1 1/2 cups", "2 cans (15 oz)"; '' when it has none */
+  household: string;
+}
+
 export interface Prep {
   recipe: { id: number; title: string; method: string; notes: string; photoUrl: string | null };
   version: { number: number; kind: VersionKind; servings: number };
   portions: number;
   perPortion: PrepWeight[];
-  batch: PrepWeight[];
+  batch: PrepBatchWeight[];
   shopping: PrepShoppingItem[];
   shoppingText: string;
   storage: StorageGuidance;

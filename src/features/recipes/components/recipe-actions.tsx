@@ -1,7 +1,7 @@
 import { Link } from 'react-router';
 import type { RecipeDetail } from '../../../../shared/schemas/recipes';
 import { Button, buttonClasses } from '../../../components/ui/button';
-import { exportHref, prepPath, printPath } from '../recipe-links';
+import { exportHref, kitchenPath, prepPath, printPath } from '../recipe-links';
 
 export interface RecipeActionsProps {
   recipe: RecipeDetail;
@@ -13,7 +13,7 @@ export interface RecipeActionsProps {
   deleting: boolean;
 }
 
-/** What can be done with the whole recipe: print a card, download it, copy it, delete it. */
+/** What can be done with the whole recipe: prep it, edit or rewrite it again in the Kitchen, print a card, download it, copy it, delete it. */
 export function RecipeActions({ recipe, version, onDuplicate, duplicating, onDelete, deleting }: RecipeActionsProps) {
   const busy = duplicating || deleting;
   const prepVersion = version ?? recipe.latest?.number ?? null;
@@ -23,6 +23,12 @@ export function RecipeActions({ recipe, version, onDuplicate, duplicating, onDel
         <Link to={prepPath(recipe.id, prepVersion)} className={buttonClasses({ variant: 'primary', size: 'sm' })}>
           Batch prep
           <span className="sr-only"> of version {prepVersion}</span>
+        </Link>
+      )}
+      {prepVersion && (
+        <Link to={kitchenPath(recipe.id, prepVersion)} className={buttonClasses({ variant: 'secondary', size: 'sm' })}>
+          Edit in the Kitchen
+          <span className="sr-only"> (version {prepVersion})</span>
         </Link>
       )}
       <Link to={printPath(recipe.id, version)} className={buttonClasses({ variant: 'secondary', size: 'sm' })}>

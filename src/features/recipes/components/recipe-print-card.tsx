@@ -18,7 +18,14 @@ function methodSteps(method: string): string[] {
  * One version as a card for the kitchen wall: title, photo, servings, lines in grams, method and
  * the figures per serving. The print stylesheet drops the site's header and footer around it.
  */
-export function RecipePrintCard({ recipe, version }: { recipe: RecipeDetail; version: VersionDetail }) {
+export interface PrintExtras {
+  /** the household measure of each line, in line order ("2 cups"); '' where there is none */
+  household: string[];
+  /** USDA FSIS fridge life for this dish, from the same guidance the prep page shows */
+  fridgeDays: number | null;
+}
+
+export function RecipePrintCard({ recipe, version, extras }: { recipe: RecipeDetail; version: VersionDetail; extras?: PrintExtras }) {
   const steps = methodSteps(recipe.method);
   const note = versionNote(version);
   return (
@@ -27,7 +34,7 @@ export function RecipePrintCard({ recipe, version }: { recipe: RecipeDetail; ver
         <div className="flex min-w-0 flex-col gap-1.5">
           <h1 className="text-3xl font-black tracking-tight">{recipe.title}</h1>
           <p className="text-ink-soft">
-            {version.servings} servings · version {version.number}, {versionKindLabel(version.kind).toLowerCase()}
+            {version.servings} servings · version {version.number}, {versionKindLabel(version.kind, version.note).toLowerCase()}
             {note ? ` — ${note}` : ''}
           </p>
         </div>
@@ -48,8 +55,11 @@ export function RecipePrintCard({ recipe, version }: { recipe: RecipeDetail; ver
           <IncompleteTotalsAlert lineNumbers={incompleteLineNumbers(version.lines)} />
           <ul className="flex flex-col">
             {version.lines.map((line, i) => (
-              <li key={i} className="grid grid-cols-[5.5rem_minmax(0,1fr)] gap-3 border-b border-line py-1.5 last:border-b-0">
-                <span className="text-right font-extrabold tabular-nums">{formatGrams(line.grams)}</span>
+              <li key={i} className="grid grid-cols-[6.5rem_minmax(0,1fr)] gap-3 border-b border-line py-1.5 last:border-b-0">
+                <span className="text-right tabular-nums">
+                  <span className="font-extrabold">{formatGrams(line.grams)}</span>
+                  {extras?.household[i] && <span className="block text-sm text-ink-soft">{extras.household[i]}</span>}
+                </span>
                 <span>
                   <span className="font-semibold">{line.foodName ?? line.input}</span>
                   {line.foodName && writtenLine(line) && <span className="block text-sm text-ink-soft">{writtenLine(line)}</span>}
@@ -97,8 +107,8 @@ export function RecipePrintCard({ recipe, version }: { recipe: RecipeDetail; ver
 
       <footer className="border-t border-line pt-3 text-xs leading-relaxed text-ink-soft">
         Hearthswap · version saved {formatDateTime(version.createdAt)} · Figures are estimates from USDA Standard
-        Reference food values, not medical advice. Leftovers: refrigerate within 2 hours, eat within 3–4 days, reheat
-        to 165 °F (74 °C) (USDA FSIS).
+        Reference food values, not medical advice. Leftovers: refrigerate within 2 hours,{' '}
+        {extras?.fridgeDays ? `eat within ${extras.fridgeDays} days` : 'eat within 3–4 days'}, reheat to 165 °F (74 °C) (USDA FSIS).
       </footer>
     </article>
   );

@@ -8,6 +8,7 @@ import { formatGrams, formatKcal, formatMacroG, formatNumber } from '../../../li
 import { compareLines, rewrittenInPlace, type LineChange, type LineChangeKind } from '../compare-lines';
 import { formatWhen } from '../format-when';
 import { nutrientChange, type DifferenceTone as ChangeTone, type Difference as NutrientChange } from '../../../lib/nutrient-difference';
+import { servingVolumeMl } from '../../../../shared/shown-figures';
 import { versionKindLabel, versionNote } from '../version-words';
 
 const MINUS = '\u2212';
@@ -28,7 +29,7 @@ const TONE_CLASSES: Record<ChangeTone, string> = {
 };
 const TONE_WORDS: Record<ChangeTone, string> = {
   better: 'lighter or more filling',
-  worse: 'the other way',
+  worse: 'heavier or less filling',
   neutral: '',
 };
 
@@ -48,7 +49,7 @@ function VersionHeading({ version, side }: { version: VersionDetail; side: 'Befo
     <div className={cx('flex flex-col gap-1 rounded-card border bg-surface p-4 shadow-card', side === 'After' ? 'border-accent' : 'border-line')}>
       <p className="text-sm font-bold tracking-wide text-ink-soft uppercase">{side}</p>
       <h2 className="text-lg font-extrabold text-ink">
-        Version {version.number} · {versionKindLabel(version.kind)}
+        Version {version.number} · {versionKindLabel(version.kind, version.note)}
       </h2>
       {note && <p className="text-ink">{note}</p>}
       <p className="text-sm text-ink-soft">
@@ -64,8 +65,8 @@ function VersionHeading({ version, side }: { version: VersionDetail; side: 'Befo
 }
 
 function NutrientDifferences({ a, b }: { a: VersionDetail; b: VersionDetail }) {
-  const volumeA = a.volumeMl / a.servings;
-  const volumeB = b.volumeMl / b.servings;
+  const volumeA = servingVolumeMl(a.volumeMl, a.servings);
+  const volumeB = servingVolumeMl(b.volumeMl, b.servings);
   const volumeChange = volumeA > 0 ? ((volumeB - volumeA) / volumeA) * 100 : 0;
   const volumeChip: NutrientChange =
     Math.abs(volumeChange) < 0.5
@@ -282,7 +283,7 @@ export function VersionComparison({ a, b }: { a: VersionDetail; b: VersionDetail
           <p className="mt-3 text-sm text-ink-soft">
             <span className="font-bold text-herb-800">Green</span> marks a change toward a lighter, more filling plate
             (fewer kcal; more protein or fiber; less fat, sugar or sodium), <span className="font-bold text-beet-800">red</span>{' '}
-            the other way. The sign says which way each figure moved: + more, {MINUS} less.
+            a change toward a heavier one. The sign says which way each figure moved: + more, {MINUS} less.
           </p>
         </Card>
       </div>

@@ -55,7 +55,7 @@ export function VersionTimeline({ versions, selected, onSelect, onRestore, resto
             >
               <div className="flex flex-wrap items-center gap-2">
                 <h3 className="font-extrabold text-ink">Version {version.number}</h3>
-                <Badge tone={KIND_TONES[version.kind]}>{versionKindLabel(version.kind)}</Badge>
+                <Badge tone={KIND_TONES[version.kind]}>{versionKindLabel(version.kind, version.note)}</Badge>
                 {isNewest && <Badge tone="ember">Newest</Badge>}
               </div>
               {note && <p className="text-ink">{note}</p>}

@@ -120,10 +120,10 @@ export function BeforeAfterNumbers({
             <th scope="col" className="py-1.5 pr-2 text-left text-sm font-bold">
               Per serving
             </th>
-            <th scope="col" className="px-2 py-1.5 text-right text-sm font-bold">
+            <th scope="col" className="px-1 py-1.5 text-right text-sm font-bold sm:px-2">
               As written
             </th>
-            <th scope="col" className="px-2 py-1.5 text-right text-sm font-bold">
+            <th scope="col" className="px-1 py-1.5 text-right text-sm font-bold sm:px-2">
               {afterLabel}
             </th>
             <th scope="col" className="py-1.5 pl-2 text-right text-sm font-bold">
@@ -146,8 +146,8 @@ export function BeforeAfterNumbers({
                     </span>
                   )}
                 </th>
-                <td className="px-2 py-2 text-right whitespace-nowrap tabular-nums">{formatNutrient(row.key, before[row.key])}</td>
-                <td className="px-2 py-2 text-right font-bold whitespace-nowrap tabular-nums">{formatNutrient(row.key, after[row.key])}</td>
+                <td className="px-1 py-2 text-right whitespace-nowrap tabular-nums sm:px-2">{formatNutrient(row.key, before[row.key])}</td>
+                <td className="px-1 py-2 text-right font-bold whitespace-nowrap tabular-nums sm:px-2">{formatNutrient(row.key, after[row.key])}</td>
                 <td className="py-2 pl-2 text-right">
                   <DifferenceText difference={nutrientDifference(row.key, before, after)} />
                 </td>
@@ -158,8 +158,8 @@ export function BeforeAfterNumbers({
             <th scope="row" className="py-2 pr-2 text-left font-bold">
               Protein per 100 kcal
             </th>
-            <td className="px-2 py-2 text-right whitespace-nowrap tabular-nums">{density(before)}</td>
-            <td className="px-2 py-2 text-right font-bold whitespace-nowrap tabular-nums">{density(after)}</td>
+            <td className="px-1 py-2 text-right whitespace-nowrap tabular-nums sm:px-2">{density(before)}</td>
+            <td className="px-1 py-2 text-right font-bold whitespace-nowrap tabular-nums sm:px-2">{density(after)}</td>
             <td className="py-2 pl-2 text-right">
               <DifferenceText difference={densityDifference(before, after)} />
             </td>

@@ -21,6 +21,7 @@ import {
   requestSignature,
   rewriteFormSchema,
   rewriteRequestFor,
+  suggestionFields,
   type RewriteFormInput,
   type RewriteFormValues,
 } from '../rewrite-form';
@@ -178,9 +179,7 @@ function RewritePanelBody({ recipe, unitSystem, signedIn, saveAction, renderFood
   }, [answers]);
 
   const applySuggestion = (s: Suggestion) => {
-    if (s.kind === 'more-swaps') setValue('maxSwaps', String(s.value));
-    else if (s.kind === 'volume-tolerance') setValue('volumeTolerancePct', String(s.value));
-    else if (s.target) setValue(`targets.${s.target}`, String(s.value));
+    for (const field of suggestionFields(s)) setValue(field.name, field.value, { shouldDirty: true });
     void submit();
   };
 

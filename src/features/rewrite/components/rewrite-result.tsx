@@ -1,7 +1,6 @@
 import type { RewriteRequest } from '../../../../shared/schemas/rewrite';
 import { Alert } from '../../../components/ui/alert';
 import { Card } from '../../../components/ui/card';
-import { formatNumber } from '../../../lib/format';
 import type { UnitSystem } from '../../../lib/user';
 import { DEFAULT_VOLUME_TOLERANCE_PCT } from '../rewrite-form';
 import type { RewriteAnswer, SkippedLine } from '../rewrite-types';
@@ -18,12 +17,9 @@ export interface RewriteResultProps {
 }
 
 function solverNote(answer: RewriteAnswer): string {
-  const { ms, solves, provenOptimal } = answer.solver;
-  const time = ms < 1000 ? `${formatNumber(ms, 0)} ms` : `${formatNumber(ms / 1000, 1)} s`;
-  const tries = `${solves} solve${solves === 1 ? '' : 's'}`;
-  return provenOptimal
-    ? `Solved in ${time} (${tries}); no better plan exists for the goal you chose.`
-    : `Solved in ${time} (${tries}). The solver ran out of time and kept the best plan it had found; a better one may exist.`;
+  return answer.solver.provenOptimal
+    ? 'Every swap and amount was weighed; no better plan exists for the goal you chose.'
+    : 'Time ran out before every plan was weighed, so this is the best one found; a better one may exist.';
 }
 
 export function SkippedLinesNote({ skipped }: { skipped: SkippedLine[] }) {
@@ -64,8 +60,9 @@ export function RewriteResult({ request, answer, unitSystem, onExclude, busy }: 
           proteinMinG={request.targets.proteinMinG}
         />
       </Card>
-      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
-        <Card title="The numbers" headingLevel={3} description="Rounded for display; ▲ helps the dish, ▼ works against it.">
+      {/* minmax(0, …) in one column too: a wide table scrolls inside its card instead of widening the page */}
+      <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
+        <Card title="The numbers" headingLevel={3} description="Rounded for display; ✓ marks a change for the better, ! one to watch.">
           <BeforeAfterNumbers
             before={before.perServing}
             after={after.perServing}

@@ -8,7 +8,12 @@ import type { RewriteDraft } from '../save-draft';
 
 /** What saving can be for this visitor; the page decides and does the saving. */
 export type RewriteSaveAction =
-  | { kind: 'save'; save: (draft: RewriteDraft) => Promise<void> }
+  | {
+      kind: 'save';
+      save: (draft: RewriteDraft) => Promise<void>;
+      /** the Kitchen holds a saved recipe: the rewrite becomes its next version, under its title */
+      into?: { title: string; nextNumber: number };
+    }
   | { kind: 'sign-in'; signInHref: string; signUpHref: string }
   | { kind: 'unavailable'; reason: string };
 
@@ -55,8 +60,9 @@ export function SaveRewrite({ action, draftFor, stale }: SaveRewriteProps) {
     return <p className="text-sm text-ink-soft">{action.reason}</p>;
   }
 
+  const into = action.into;
   const save = async () => {
-    const trimmed = title.trim();
+    const trimmed = (into?.title ?? title).trim();
     if (!trimmed) return setTitleError('Give the recipe a title.');
     if (trimmed.length > TITLE_MAX) return setTitleError(`Keep the title under ${TITLE_MAX} characters.`);
     const draft = draftFor(trimmed);
@@ -87,6 +93,16 @@ export function SaveRewrite({ action, draftFor, stale }: SaveRewriteProps) {
           The recipe has changed since this rewrite. Saving keeps the recipe and the rewrite as they were when you pressed Rewrite.
         </Alert>
       )}
+      {into ? (
+        <div className="flex flex-wrap items-center gap-3">
+          <p className="min-w-0 flex-1 basis-64 text-ink-soft">
+            This rewrite becomes version {into.nextNumber} of “{into.title}”; the versions already saved stay as they are.
+          </p>
+          <Button type="submit" loading={saving} loadingLabel="Saving…">
+            Save as version {into.nextNumber}
+          </Button>
+        </div>
+      ) : (
       <div className="flex flex-wrap items-end gap-3">
         <TextField
           label="Recipe title"
@@ -102,6 +118,7 @@ export function SaveRewrite({ action, draftFor, stale }: SaveRewriteProps) {
           Save to my recipe book
         </Button>
       </div>
+      )}
       {error != null && <ErrorState title="The rewrite wasn’t saved" error={error} />}
     </form>
   );
