@@ -7,6 +7,7 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { launchBrowser } from '../helpers/browser';
 import { DEMO_ACCOUNTS } from '../../server/seeders/demo-accounts';
 import { percentile } from './server-bench';
+import { machineLoad } from './load-bench';
 
 const PHONE = {
   viewport: { width: 390, height: 844 },
@@ -71,7 +72,7 @@ export async function runBrowserBench(baseUrl: string, rounds = 7) {
       const last = visits.at(-1)!;
       console.log(
         `first visit, phone profile, ${name}: content after p50 ${percentile(ms, 50).toFixed(0)} ms, worst ${Math.max(...ms).toFixed(0)} ms (n=${rounds}, goal ≤ 500 ms); ` +
-          `JavaScript ${(last.jsBytes / 1024).toFixed(1)} KB over the wire in ${last.jsFiles} files (${[...last.encodings].join('/')}; goal ≤ 200 KB)`,
+          `JavaScript ${(last.jsBytes / 1024).toFixed(1)} KB over the wire in ${last.jsFiles} files (${[...last.encodings].join('/')}; goal ≤ 200 KB); ${machineLoad()}`,
       );
     }
   } finally {
