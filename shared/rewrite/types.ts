@@ -1,4 +1,18 @@
+import type { LineFunction } from '../culinary/types';
 import type { Nutrients } from '../nutrition';
+
+/** Why a candidate is offered: the substitution rule behind it. */
+export interface RuleRef {
+  /** stable id of the rule in data/substitution-rules.json, e.g. "ground-beef-to-lean-turkey" */
+  id: string;
+  /** what the cook reads: "lean ground turkey for 80/20 beef, 1:1 by weight" */
+  label: string;
+  /** one line: why it works in this dish */
+  why: string;
+  /** the cook's note shown with the change ("bake 5 minutes longer so the lower-fat cheese melts") */
+  note?: string;
+  cautions?: string[];
+}
 
 /** A coach's approval of a swap, with an optional cooking note and volume ratio. */
 export interface SwapApproval {
@@ -7,6 +21,8 @@ export interface SwapApproval {
   note?: string;
   /** mL of the swap per mL of the original food; the band is centred on V·ratio */
   volumeRatio?: number;
+  /** grams of the swap per gram of the original food (from volumeRatio and the two densities) */
+  massRatio?: number;
 }
 
 /** One food a line may use: the original food or a lighter one sharing its role. */
@@ -19,6 +35,16 @@ export interface Candidate {
   /** the food the recipe was written with; exactly one candidate per line carries it */
   original?: boolean;
   approved?: SwapApproval;
+  /**
+   * grams of this food per gram of the line's written food at the rule's amount (the band is
+   * (1−a)·massRatio·G … (1+a)·massRatio·G); the original food has 1
+   */
+  massRatio?: number;
+  /** the largest share of the written grams this candidate may replace (1 = whole line) */
+  maxShare?: number;
+  /** the candidate may share the line with the original food (half beef, half turkey) */
+  partial?: boolean;
+  rule?: RuleRef;
 }
 
 export interface RewriteLine {
@@ -31,6 +57,15 @@ export interface RewriteLine {
   /** a locked line stays exactly as written */
   locked: boolean;
   candidates: Candidate[];
+  /** what the line does in the dish */
+  role?: LineFunction;
+  /**
+   * factors of the written grams the ORIGINAL food may take when it is not swapped, only where a
+   * rule allows ("less oil for sautéing" [0.5, 1]); absent = exactly the written grams
+   */
+  keepScale?: [number, number];
+  /** why a line is held ("leavener: kept as written"); a held line has only its original candidate */
+  heldReason?: string;
 }
 
 /** Per-serving targets. */
@@ -98,6 +133,11 @@ export interface Change {
   gramsBefore: number;
   gramsAfter: number;
   swapped: boolean;
+  /** the line is shared between the original food (keptGrams) and the substitute */
+  partial?: boolean;
+  /** the original food's remaining grams in a partial swap */
+  keptGrams?: number;
+  rule?: RuleRef;
   approvedBy?: string;
   note?: string;
   serves: ChangePurpose[];
@@ -135,6 +175,8 @@ export interface OptimalRewrite {
   before: Plan;
   after: Plan;
   changes: Change[];
+  /** lines held as written, and why */
+  held?: { line: number; reason: string }[];
   solver: SolverInfo;
 }
 
