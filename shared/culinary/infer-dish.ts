@@ -30,7 +30,11 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
   const bakeCore = flour + g('sugar', 'chocolate');
   if (flour > 0 && !savouryMain && bakeCore >= 0.25 * total) {
     const liquid = g('milk', 'liquid', 'cultured');
-    return liquid >= 0.8 * flour && g('sugar') < 0.5 * flour ? 'batter' : 'leavened-bake';
+    if (liquid >= 0.8 * flour && g('sugar') < 0.5 * flour) return 'batter';
+    // rich and dry (cookies, shortbread, pastry): the fat is the dough's structure
+    const moisture = liquid + g('fruit', 'vegetable', 'legume');
+    if (g('butter-oil') >= 0.5 * flour && moisture < 0.25 * flour) return 'dough';
+    return 'leavened-bake';
   }
   if (g('dressing') >= 0.08 * total && !has('condensed-soup', 'flour')) return 'cold-dish';
   const pieCrust = lines.some((l) => /\b(pie crust|pastry|biscuit dough|puff pastry)\b/i.test(`${l.phrase} ${l.food?.name ?? ''}`));
@@ -47,7 +51,11 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
   ) {
     return 'assembled-bake';
   }
-  if (has('wrap') && cheese) return 'griddle-saute';
+  // a sauce baked over the dish (enchilada sauce), not one served beside it (salsa, ketchup)
+  const bakedSauce = lines.reduce((s, l, i) => (kinds[i] === 'sauce' && !/salsa|catsup|ketchup/i.test(`${l.phrase} ${l.food?.name ?? ''}`) ? s + l.grams : s), 0);
+  if (has('wrap') && cheese) return bakedSauce >= 0.1 * total || has('fresh-cheese') ? 'assembled-bake' : 'griddle-saute';
+  // a loaf or meatballs: mince held together by crumbs and egg
+  if (has('meat') && has('crumbs') && has('egg') && !has('starch', 'wrap')) return 'assembled-bake';
   const wet = g('liquid', 'tomato', 'sauce');
   if (has('starch') && has('cream', 'milk', 'melting-cheese', 'hard-cheese', 'egg') && wet < 0.25 * total) return 'stovetop-sauce';
   if (wet >= 0.25 * total || (has('legume') && has('tomato'))) return 'simmered-dish';
@@ -93,6 +101,8 @@ function roleOf(line: CulinaryLine, kind: LineKind, dish: DishType, ctx: { hasRo
       return topping ? 'topping' : 'sweetener';
     case 'chocolate':
       return bake ? 'structure' : 'other';
+    case 'mix-in':
+      return topping ? 'topping' : 'other';
     case 'butter-oil':
       if (GREASE_WORDS.test(note)) return 'cooking-fat';
       if (bake) return 'baking-fat';
@@ -103,7 +113,8 @@ function roleOf(line: CulinaryLine, kind: LineKind, dish: DishType, ctx: { hasRo
     case 'cream':
       return topping ? 'topping' : 'cream';
     case 'cultured':
-      if (topping || dish === 'cold-dish') return 'topping';
+      // sour cream beside tacos, quesadillas or chili is served on top; in a stovetop sauce it is the sauce
+      if (topping || dish === 'cold-dish' || dish === 'griddle-saute' || dish === 'simmered-dish') return 'topping';
       return bake ? 'dairy-liquid' : 'cream';
     case 'melting-cheese':
       return topping ? 'topping' : 'melting-cheese';
@@ -150,7 +161,7 @@ export function contextOf(role: LineFunction, dish: DishType, hasRoux: boolean, 
     case 'simmered-dish':
       return saucy || role === 'main-protein' || role === 'vegetable' || role === 'fresh-cheese' ? 'boiled-sauce' : 'filling';
     case 'assembled-bake':
-      return role === 'dairy-liquid' || role === 'cream' ? 'boiled-sauce' : 'filling';
+      return role === 'dairy-liquid' ? 'boiled-sauce' : 'filling';
     default:
       return saucy ? 'boiled-sauce' : 'filling';
   }

@@ -6,14 +6,14 @@ import type { CulinaryLine } from './types';
  */
 export type LineKind =
   | 'salt' | 'yeast' | 'leavener' | 'extract' | 'acid' | 'seasoning' | 'aromatic' | 'liquid'
-  | 'flour' | 'starch' | 'crumbs' | 'egg' | 'sugar' | 'syrup' | 'chocolate'
+  | 'flour' | 'starch' | 'crumbs' | 'egg' | 'sugar' | 'syrup' | 'chocolate' | 'mix-in'
   | 'butter-oil' | 'milk' | 'cream' | 'cultured' | 'melting-cheese' | 'hard-cheese' | 'fresh-cheese'
   | 'meat' | 'cured-meat' | 'fish' | 'legume' | 'tomato' | 'vegetable' | 'fruit' | 'nut'
   | 'sauce' | 'condensed-soup' | 'dressing' | 'wrap' | 'other';
 
 const has = (roles: readonly string[], ...r: string[]) => r.some((x) => roles.includes(x));
 
-const AROMATIC = /\b(onions?|garlic|shallots?|scallions?|green onions?|leeks?|ginger|chives|jalapenos?|chil(i|e) peppers?)\b/i;
+const AROMATIC = /\b(onions?|garlic|shallots?|scallions?|green onions?|leeks?|ginger|chives|jalape(n|ñ)os?|chil(i|e)s?|chilies|chil(i|e) peppers?)\b/i;
 const ACID = /\b(vinegar|lemon juice|lime juice|lemon|lime)\b/i;
 const EXTRACT = /\bextract\b/i;
 const LIQUID = /\b(broth|stock|bouillon|water|wine|beer)\b/i;
@@ -39,11 +39,13 @@ export function lineKind(line: CulinaryLine): LineKind {
   if (has(roles, 'herb-spice')) return 'seasoning';
   if (AROMATIC.test(line.phrase) && has(roles, 'vegetable', 'herb-spice', 'other')) return 'aromatic';
   if (/^soup,.*condensed/i.test(name)) return 'condensed-soup';
+  if (/\b(catsup|ketchup|mustard, prepared|worcestershire|salsa|barbecue sauce)\b/i.test(name)) return 'sauce';
+  if (has(roles, 'flatbread-wrap') || /^taco shells|^tortillas\b/i.test(name)) return 'wrap';
   if (/mayonnaise|salad dressing/i.test(name)) return 'dressing';
   if (has(roles, 'flour') || /^wheat flour|\bflour\b/i.test(name)) return 'flour';
   if (has(roles, 'breadcrumb-coating') || /\bcrumbs\b|\bpanko\b/i.test(line.phrase)) return 'crumbs';
   if (has(roles, 'egg')) return 'egg';
-  if (has(roles, 'chocolate')) return 'chocolate';
+  if (has(roles, 'chocolate')) return /\b(chips|morsels|chunks)\b/i.test(line.phrase) ? 'mix-in' : 'chocolate';
   if (has(roles, 'sweetener')) return /syrup|honey|molasses/i.test(name) ? 'syrup' : 'sugar';
   if (has(roles, 'melting-cheese')) return 'melting-cheese';
   if (has(roles, 'hard-cheese')) return 'hard-cheese';
