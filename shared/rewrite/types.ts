@@ -193,3 +193,45 @@ export interface InfeasibleRewrite {
 }
 
 export type RewriteResult = OptimalRewrite | InfeasibleRewrite;
+
+// shared/rewrite/types.ts — additions
+/** Why a candidate is offered: the substitution rule behind it. */
+export interface RuleRef {
+  /** stable id of the rule in data/substitution-rules.json, e.g. "ground-beef-to-lean-turkey" */
+  id: string;
+  /** what the cook reads: "lean ground turkey for 80/20 beef, 1:1 by weight" */
+  label: string;
+  /** one line: why it works in this dish */
+  why: string;
+  /** the cook's note shown with the change ("bake 5 minutes longer so the lower-fat cheese melts") */
+  note?: string;
+  cautions?: string[];
+}
+
+// Candidate gains (all optional; absent = today's behaviour for the original food):
+//   massRatio?: number     grams of this food per gram of the line's written food at the rule's
+//                          amount (the band is (1−a)·massRatio·G … (1+a)·massRatio·G, a = the line
+//                          tolerance); the original food has 1. Never equal-volume between foods of
+//                          different density unless the rule says so.
+//   maxShare?: number      the largest share of the written grams this candidate may replace
+//                          (1 = whole line, 0.5 = "up to half the butter")
+//   partial?: boolean      the candidate may share the line with the original food (half beef,
+//                          half turkey): the original keeps (1 − share)·G, the substitute takes
+//                          share·massRatio·G with share in (0, maxShare]
+//   rule?: RuleRef
+//   approved?: SwapApproval  (a coach's swap: wins over a general rule; SwapApproval gains
+//                          massRatio?: number next to volumeRatio)
+
+// RewriteLine gains:
+//   role?: LineFunction    (from shared/culinary/types.ts) what the line does in the dish
+//   keepScale?: [number, number]  factors of the written grams the ORIGINAL food may take when it
+//                          is not swapped, only where a rule allows ("less oil for sautéing" [0.5,1],
+//                          "more vegetables" [1,1.5]); absent = exactly the written grams
+//   heldReason?: string    why a line is held ("leavener: kept as written"); a held line has only
+//                          its original candidate and no keepScale
+
+// PlanLine: a partially swapped line appears TWICE in plan.lines with the same `index`
+// (the original food with its remaining grams, then the substitute).
+// Change gains: partial?: boolean; keptGrams?: number (the original food's remaining grams);
+//   rule?: RuleRef. A held line is reported in a new OptimalRewrite field
+//   held?: { line: number; reason: string }[]
