@@ -3,7 +3,7 @@ import type { RewriteLine, RewriteResult, Plan, Change, FoodRef } from '../../sh
 import { RewriteSolverError } from '../../shared/rewrite/solve-log';
 import type { FoodEngine } from './food-engine';
 import type { LineFunction } from '../../shared/culinary/types';
-import { analyzeLines, requestLines, type FoodVisibility } from './analysis';
+import { analyzeLines, culinaryLineOf, requestLines, type FoodVisibility } from './analysis';
 import { recipeCandidates, type ApprovedSwap } from './candidates';
 import { foodSummary } from './foods';
 import { runRewrite } from './solver-pool';
@@ -46,7 +46,7 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
   const analysis = analyzeLines(engine, lines, input.servings, viewer.canUse);
   const culinary = recipeCandidates(
     engine,
-    analysis.lines.map((l) => ({ food: l.matchedFood, phrase: l.parsed.name || l.input, comment: l.parsed.comment, grams: l.grams })),
+    analysis.lines.map(culinaryLineOf),
     {
       diet: input.diet ?? [],
       excludedFoodIds: new Set(input.excludedFoodIds ?? []),
