@@ -154,7 +154,7 @@ describe('candidates from rules', () => {
     expect(unlocked.lines[1].heldReason).toBeUndefined();
   });
 
-  it('eggs: two whites per egg as a binder, up to half the eggs in a bake, none in a carbonara sauce', () => {
+  it('eggs: two whites per egg as a binder, up to half the eggs in a bake or an egg-and-cheese sauce', () => {
     const loaf = recipeCandidates(engine, [at('23572', 'ground beef', 907), at('18079', 'dry bread crumbs', 108), at('01123', 'large eggs', 100)], none());
     const whites = loaf.lines[2].candidates.find((c) => c.name.startsWith('Egg, white, raw'))!;
     expect(whites).toMatchObject({ maxShare: 1, rule: { id: 'egg-to-whites' } });
@@ -163,7 +163,8 @@ describe('candidates from rules', () => {
     const bread = recipeCandidates(engine, oilBananaBread(), none());
     expect(bread.lines[5].candidates.find((c) => c.name.startsWith('Egg, white'))).toMatchObject({ maxShare: 0.5, rule: { id: 'egg-in-bake-to-whites' } });
     const carbonara = recipeCandidates(engine, [at('20120', 'spaghetti', 454), at('01123', 'large eggs', 150), at('01038', 'grated Pecorino Romano cheese', 99)], none());
-    expect(carbonara.lines[1].candidates).toHaveLength(1);
+    expect(carbonara.lines[1].role).toBe('sauce');
+    expect(carbonara.lines[1].candidates.slice(1).map((c) => [c.name, c.maxShare])).toEqual([['Egg, white, raw, fresh', 0.5]]);
   });
 
   it('flour in a bake: up to half whole-wheat, never peanut or soy flour; brownie sugar stays', () => {
