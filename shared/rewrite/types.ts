@@ -1,4 +1,18 @@
+import type { LineFunction } from '../culinary/types';
 import type { Nutrients } from '../nutrition';
+
+/** Why a candidate is offered: the substitution rule behind it. */
+export interface RuleRef {
+  /** stable id of the rule in data/substitution-rules.json, e.g. "ground-beef-to-lean-turkey" */
+  id: string;
+  /** what the cook reads: "lean ground turkey for 80/20 beef, 1:1 by weight" */
+  label: string;
+  /** one line: why it works in this dish */
+  why: string;
+  /** the cook's note shown with the change ("bake 5 minutes longer so the lower-fat cheese melts") */
+  note?: string;
+  cautions?: string[];
+}
 
 /** A coach's approval of a swap, with an optional cooking note and volume ratio. */
 export interface SwapApproval {
@@ -44,8 +58,8 @@ export interface RewriteLine {
   /** a locked line stays exactly as written */
   locked: boolean;
   candidates: Candidate[];
-  /** what the line does in the dish (a LineFunction of shared/culinary), read only for explanations */
-  role?: string;
+  /** what the line does in the dish (shared/culinary); read only for explanations */
+  role?: LineFunction;
   /** factors of the written grams the original food may take when it is not swapped; absent = exactly as written */
   keepScale?: [number, number];
   /** why the line is held as written; a held line keeps its original food and grams */
@@ -118,15 +132,16 @@ export interface Change {
   gramsBefore: number;
   gramsAfter: number;
   swapped: boolean;
+  /** the line is shared between the original food (keptGrams) and the substitute */
+  partial?: boolean;
+  /** the original food's remaining grams in a partial swap */
+  keptGrams?: number;
+  rule?: RuleRef;
   approvedBy?: string;
   /** the coach's note for an approved swap, else the rule's note for the cook */
   note?: string;
   serves: ChangePurpose[];
   reason: string;
-  /** the line is shared: the original food keeps keptGrams, the substitute takes gramsAfter */
-  partial?: boolean;
-  keptGrams?: number;
-  rule?: RuleRef;
 }
 
 /** A line held as written, and why. */

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { Nutrients } from '../nutrition';
+import type { DishType, LineFunction } from '../culinary/types';
 
 export const MAX_LINES = 100;
 export const MAX_TEXT_CHARS = 20_000;
@@ -60,10 +61,14 @@ export interface AnalyzedLine {
   portionUsed: string | null;
   /** the cook pinned the food or the grams */
   pinned: { food: boolean; grams: boolean };
+  /** what the line does in the dish, inferred from the whole recipe */
+  role?: LineFunction;
 }
 
 export interface AnalyzeResponse {
   servings: number;
+  /** the kind of dish, inferred from every line */
+  dishType?: DishType;
   lines: AnalyzedLine[];
   totals: Nutrients;
   perServing: Nutrients;

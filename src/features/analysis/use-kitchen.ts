@@ -2,7 +2,8 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { AnalyzedLine, AnalyzeRequest, AnalyzeResponse, FoodSummary, LineInput } from '../../../shared/schemas/analyze';
 import { useAnalyzeRecipe } from './api/analyze-recipe';
 import type { CurrentAnalysis } from './current-analysis';
-import { lineInputs, linesFromAnalysis, newLineKey, requestSignature, withFood, withGrams, withoutLine, type KitchenLine } from './kitchen-lines';
+import type { LineFunction } from '../../../shared/culinary/types';
+import { lineInputs, lineRolesFor, linesFromAnalysis, newLineKey, requestSignature, withFood, withGrams, withoutLine, withRole, type KitchenLine } from './kitchen-lines';
 import { emptyKitchen, loadKitchen, saveKitchen, type KitchenSnapshot } from './kitchen-storage';
 
 const storage = (): Storage | undefined => (typeof window === 'undefined' ? undefined : window.sessionStorage);
@@ -29,6 +30,8 @@ export interface Kitchen {
   setServings: (servings: number) => void;
   chooseFood: (key: string, food: FoodSummary | null) => void;
   setGrams: (key: string, grams: number | null) => void;
+  /** what the line does in the dish, or null for Hearthswap's reading; no new analysis is needed */
+  setRole: (key: string, role: LineFunction | null) => void;
   addLine: (line: LineInput) => void;
   removeLine: (key: string) => void;
   retry: () => void;
@@ -133,8 +136,11 @@ export function useKitchen(): Kitchen {
   );
 
   const current = useMemo<CurrentAnalysis | null>(
-    () => (analysis && answered && lines.length > 0 ? { lines: answered.lines, servings: answered.servings, analysis, updating: stale } : null),
-    [analysis, answered, lines.length, stale],
+    () =>
+      analysis && answered && lines.length > 0
+        ? { lines: answered.lines, servings: answered.servings, analysis, updating: stale, lineRoles: lineRolesFor(lines, answered.keys) }
+        : null,
+    [analysis, answered, lines, stale],
   );
 
   const analysing = mutation.isPending;
@@ -154,6 +160,7 @@ export function useKitchen(): Kitchen {
     setServings: (n) => editAndAsk((s) => ({ ...s, servings: n })),
     chooseFood: (key, food) => editAndAsk((s) => ({ ...s, lines: withFood(s.lines, key, food ? food.id : null) })),
     setGrams: (key, grams) => editAndAsk((s) => ({ ...s, lines: withGrams(s.lines, key, grams) })),
+    setRole: (key, role) => update((s) => ({ ...s, lines: withRole(s.lines, key, role) })),
     addLine: (line) => editAndAsk((s) => ({ ...s, lines: [...s.lines, { ...line, key: newLineKey() }] })),
     removeLine: (key) => editAndAsk((s) => ({ ...s, lines: withoutLine(s.lines, key) })),
     retry: () => lastRequest.current?.(),
