@@ -21,7 +21,8 @@ export function LineRolePicker({ label, inferred, chosen, onChoose }: LineRolePi
   const role = chosen ?? inferred;
   const held = HELD_FUNCTIONS.has(role);
   return (
-    <div className="flex flex-wrap items-center gap-x-2 gap-y-1 text-sm">
+    <div className="flex flex-col gap-0.5 text-sm">
+      <span className="flex items-center gap-2">
       <span className="text-ink-soft">Does:</span>
       <SelectField
         label={label}
@@ -38,7 +39,9 @@ export function LineRolePicker({ label, inferred, chosen, onChoose }: LineRolePi
           </option>
         ))}
       </SelectField>
-      {held && <span className="font-semibold text-oat-700">kept as written in a rewrite</span>}
+      </span>
+      {held && <span className="font-semibold text-oat-700">Kept as written in a rewrite.</span>}
+      {chosen && <span className="text-ink-soft">Your choice; the rewrite follows it.</span>}
     </div>
   );
 }
