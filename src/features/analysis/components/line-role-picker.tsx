@@ -23,22 +23,22 @@ export function LineRolePicker({ label, inferred, chosen, onChoose }: LineRolePi
   return (
     <div className="flex flex-col gap-0.5 text-sm">
       <span className="flex items-center gap-2">
-      <span className="text-ink-soft">Does:</span>
-      <SelectField
-        label={label}
-        labelHidden
-        value={chosen ?? READING}
-        containerClassName="min-w-0 flex-1"
-        className="py-1 text-sm"
-        onChange={(e) => onChoose(e.target.value === READING ? null : (e.target.value as LineFunction))}
-      >
-        <option value={READING}>{LINE_FUNCTION_WORDS[inferred]} (as read)</option>
-        {LINE_FUNCTIONS.filter((f) => f !== inferred).map((f) => (
-          <option key={f} value={f}>
-            {LINE_FUNCTION_WORDS[f]}
-          </option>
-        ))}
-      </SelectField>
+        <span className="text-ink-soft">Does:</span>
+        <SelectField
+          label={label}
+          labelHidden
+          value={chosen ?? READING}
+          containerClassName="min-w-0 flex-1"
+          className="py-1 text-sm"
+          onChange={(e) => onChoose(e.target.value === READING ? null : (e.target.value as LineFunction))}
+        >
+          <option value={READING}>{LINE_FUNCTION_WORDS[inferred]} (as read)</option>
+          {LINE_FUNCTIONS.filter((f) => f !== inferred).map((f) => (
+            <option key={f} value={f}>
+              {LINE_FUNCTION_WORDS[f]}
+            </option>
+          ))}
+        </SelectField>
       </span>
       {held && <span className="font-semibold text-oat-700">Kept as written in a rewrite.</span>}
       {chosen && <span className="text-ink-soft">Your choice; the rewrite follows it.</span>}
