@@ -1,41 +1,51 @@
-import type { Nutrients } from '../nutrition';
 import { keptCandidates } from './candidate-pruning';
 import type { ResolvedOptions } from './rewrite-options';
 import type { TargetRow } from './targets';
 import type { Candidate, RewriteLine } from './types';
 
 /**
- * One candidate of a free line as it appears in the model (see buildModel for the algebra).
- * The original's grams are written grams − below + above; a swap's are (1 − a)·centre + extra,
- * and only when its y is 1.
+ * How a candidate takes part in its line (see buildModel for the algebra):
+ *  - 'original': the written food, at exactly its written grams G, or within keepScale·G;
+ *  - 'swap': the whole line, at (1 ± a)·r·G grams (r the mass ratio);
+ *  - 'partial': a share w ∈ [minShare·G, maxShare·G] of the written grams, replaced by
+ *    (1 ± a)·r·w grams of the substitute, the original keeping G − w.
  */
+export type SlotKind = 'original' | 'swap' | 'partial';
+
+/** The smallest share of a line a partial swap replaces: a cook splits by quarters, thirds, halves, not slivers. */
+export const MIN_SHARE = 0.25;
+
 export interface CandidateSlot {
   candidate: Candidate;
   /** index in line.candidates */
   position: number;
-  original: boolean;
+  kind: SlotKind;
   /** binary "this swap is made"; the original has none (it is kept when no swap is made) */
   y?: string;
-  /** original only: grams less than written */
+  /** original with keepScale: grams less than written */
   below?: string;
-  /** original: grams more than written; a swap: grams above the low end of its band */
-  above: string;
+  /** original with keepScale: grams more than written; swap and partial: grams above the low end of the band (absent when a = 0) */
+  above?: string;
+  /** partial: grams of the written food replaced, w */
+  share?: string;
   /** ρ used in the model; the original food's comes from the line itself (grams ÷ volumeMl) */
   densityGPerMl: number;
-  /** V_i, or V_i·r for an approved swap with volume ratio r */
-  centreMl: number;
+  /** r: grams of this food per gram of the written food (1 for the original) */
+  ratio: number;
+  /** original: G; swap: r·G; partial: r·maxShare·G (the substitute's largest centre) */
   centreGrams: number;
-  /** a·centreGrams: how far grams may go either way */
+  /** swap: a·r·G, how far grams may go either way; original and partial: 0 */
   spanGrams: number;
-  /** rank for pruning: 0 original, 1 approved swap, 2 unapproved swap */
+  /** a, the line tolerance of a substitute's band (0 for the original) */
+  tolerance: number;
+  /** original: grams it may go below and above G when not swapped (keepScale) */
+  keepBelow: number;
+  keepAbove: number;
+  /** partial: the bounds of w in grams */
+  minShareGrams: number;
+  maxShareGrams: number;
+  /** rank for pruning and the 'closest' price: 0 original, 1 approved swap, 2 unapproved swap */
   rank: number;
-}
-
-/** Grams of the slot's food in a solution (meaningful for the chosen slot). */
-export function slotGrams(slot: CandidateSlot, values: Record<string, number>): number {
-  const above = values[slot.above] ?? 0;
-  if (slot.original) return slot.centreGrams - (values[slot.below!] ?? 0) + above;
-  return slot.centreGrams - slot.spanGrams + above;
 }
 
 export interface LineSlot {
@@ -43,7 +53,7 @@ export interface LineSlot {
   /** position in the lines array */
   position: number;
   original: Candidate;
-  /** fixed lines (locked, no grams or no volume) are constants, with no slots */
+  /** fixed lines (locked, held, no grams or no volume) are constants, with no slots */
   fixed: boolean;
   /** the original's slot first */
   slots: CandidateSlot[];
@@ -56,7 +66,7 @@ export interface ClosestWeights {
   swap: number;
   /** cost of a coach-approved swap */
   approvedSwap: number;
-  /** cost per mL of volume away from the band centre */
+  /** cost per mL of a line away from its rule's amount, and per mL of the written food a swap replaces */
   perMl: number;
 }
 
@@ -68,33 +78,80 @@ function originalOf(line: RewriteLine): Candidate {
   return originals[0];
 }
 
-function isFixed(line: RewriteLine): boolean {
-  return line.locked || !(line.grams > 0) || !(line.volumeMl > 0);
+export function isFixed(line: RewriteLine): boolean {
+  return line.locked || Boolean(line.heldReason) || !(line.grams > 0) || !(line.volumeMl > 0);
+}
+
+const positive = (v: number | undefined): v is number => v !== undefined && Number.isFinite(v) && v > 0;
+
+/**
+ * r for a substitute: the coach's own ratio first (by mass, or by volume turned into grams with
+ * both densities), then the rule's mass ratio, else 1 — equal weight, never equal volume between
+ * foods of different density.
+ */
+export function massRatioOf(c: Candidate, originalDensity: number): number {
+  if (positive(c.approved?.massRatio)) return c.approved.massRatio;
+  if (positive(c.approved?.volumeRatio)) return (c.approved.volumeRatio * c.densityGPerMl) / originalDensity;
+  if (positive(c.massRatio)) return c.massRatio;
+  return 1;
 }
 
 function usable(c: Candidate): boolean {
-  return c.original === true || (Number.isFinite(c.densityGPerMl) && c.densityGPerMl > 0);
+  if (c.original) return true;
+  if (!positive(c.densityGPerMl)) return false;
+  if (c.massRatio !== undefined && !positive(c.massRatio)) return false;
+  return c.maxShare === undefined || (positive(c.maxShare) && c.maxShare <= 1);
+}
+
+function keepScaleOf(line: RewriteLine): [number, number] {
+  if (!line.keepScale) return [1, 1];
+  const [lo, hi] = line.keepScale;
+  if (!(Number.isFinite(lo) && Number.isFinite(hi) && lo >= 0 && lo <= 1 && hi >= 1)) {
+    throw new RangeError(`line ${line.index}: keepScale must be [lo, hi] with 0 ≤ lo ≤ 1 ≤ hi`);
+  }
+  return [lo, hi];
+}
+
+/**
+ * The most the slot's amounts may cost in 'closest', in mL: the substitute's distance from its
+ * centre plus the written food it replaces (a swap's whole line, a partial swap's share).
+ */
+export function maxDeviationMl(slot: CandidateSlot, originalDensity: number, lineTolerance: number): number {
+  switch (slot.kind) {
+    case 'original':
+      return Math.max(slot.keepBelow, slot.keepAbove) / slot.densityGPerMl;
+    case 'swap':
+      return slot.spanGrams / slot.densityGPerMl + slot.centreGrams / slot.ratio / originalDensity;
+    case 'partial':
+      return (lineTolerance * slot.ratio * slot.maxShareGrams) / slot.densityGPerMl + slot.maxShareGrams / originalDensity;
+  }
 }
 
 /**
  * Weights of the 'closest' objective, chosen so that its order is lexicographic:
- * fewest swaps first, then approved swaps before unapproved ones, then the smallest volume changes.
+ * fewest swaps first, then approved swaps before unapproved ones, then the smallest changes (the
+ * written food replaced, and every amount away from its centre).
  * With at most k swaps possible, an approved swap costs S − δ and an unapproved one S, δ = S/(k+1),
- * and all volume change together costs at most δ/2 (λ = δ / (2·Dmax), Dmax the largest total
- * deviation the line bands allow). Then n swaps always cost less than n + 1 (n·S + δ/2 < (n+1)(S − δ)
- * for n < k), at equal swap counts one more approved swap saves δ, more than any volume term.
+ * and all amount changes together cost at most δ/2 (λ = δ / (2·Dmax), Dmax the largest total
+ * change, in mL, the lines allow). Then n swaps always cost less than n + 1 (n·S + δ/2 < (n+1)(S − δ)
+ * for n < k), at equal swap counts one more approved swap saves δ, more than any amount term.
  * (Fixed costs like 1000 and 600 would not do this: four approved swaps, 2400, would beat three
  * unapproved ones, 3000.)
  */
 export function closestWeights(lines: LineSlot[], maxSwaps: number | null, lineTolerance: number): ClosestWeights {
-  const swappable = lines.filter((l) => l.slots.some((s) => !s.original)).length;
+  const swappable = lines.filter((l) => l.slots.some((s) => s.kind !== 'original')).length;
   const k = Math.max(1, Math.min(swappable, maxSwaps ?? swappable));
   const delta = SWAP_COST / (k + 1);
-  const maxDeviation = lines.reduce(
-    (sum, l) => sum + Math.max(0, ...l.slots.map((s) => lineTolerance * s.centreMl)),
-    0,
-  );
+  const maxDeviation = lines.reduce((sum, l) => {
+    const rho = l.slots[0]?.densityGPerMl ?? 1;
+    return sum + Math.max(0, ...l.slots.map((s) => maxDeviationMl(s, rho, lineTolerance)));
+  }, 0);
   return { swap: SWAP_COST, approvedSwap: SWAP_COST - delta, perMl: maxDeviation > 0 ? delta / (2 * maxDeviation) : 0 };
+}
+
+/** Slots that allow exactly the same grams, volumes and amount costs; only these can stand in for each other. */
+function shapeOf(s: CandidateSlot): string {
+  return [s.kind, s.densityGPerMl, s.ratio, s.centreGrams, s.spanGrams, s.keepBelow, s.keepAbove, s.minShareGrams, s.maxShareGrams].join('|');
 }
 
 export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: readonly TargetRow[]): LineSlot[] {
@@ -102,26 +159,49 @@ export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: 
   return lines.map((line, position) => {
     const original = originalOf(line);
     if (isFixed(line)) return { line, position, original, fixed: true, slots: [], pruned: [] };
+    const G = line.grams;
+    const rho = G / line.volumeMl;
+    const [lo, hi] = keepScaleOf(line);
     const all = line.candidates.flatMap((candidate, j): CandidateSlot[] => {
       if (!usable(candidate)) return [];
-      const isOriginal = candidate.original === true;
-      const densityGPerMl = isOriginal ? line.grams / line.volumeMl : candidate.densityGPerMl;
-      const ratio = !isOriginal && candidate.approved?.volumeRatio ? candidate.approved.volumeRatio : 1;
-      const centreMl = line.volumeMl * ratio;
-      const centreGrams = isOriginal ? line.grams : centreMl * densityGPerMl;
+      const base = { candidate, position: j, spanGrams: 0, tolerance: 0, keepBelow: 0, keepAbove: 0, minShareGrams: 0, maxShareGrams: 0 };
+      if (candidate.original) {
+        return [
+          {
+            ...base,
+            kind: 'original',
+            below: lo < 1 ? `b_${position}` : undefined,
+            above: hi > 1 ? `h_${position}` : undefined,
+            densityGPerMl: rho,
+            ratio: 1,
+            centreGrams: G,
+            keepBelow: (1 - lo) * G,
+            keepAbove: (hi - 1) * G,
+            rank: 0,
+          },
+        ];
+      }
+      const ratio = massRatioOf(candidate, rho);
+      const maxShare = candidate.maxShare ?? 1;
+      const partial = candidate.partial === true || maxShare < 1;
+      const common = {
+        ...base,
+        y: `y_${position}_${j}`,
+        above: a > 0 ? `z_${position}_${j}` : undefined,
+        densityGPerMl: candidate.densityGPerMl,
+        ratio,
+        tolerance: a,
+        rank: candidate.approved ? 1 : 2,
+      };
+      if (!partial) return [{ ...common, kind: 'swap', centreGrams: ratio * G, spanGrams: a * ratio * G }];
       return [
         {
-          candidate,
-          position: j,
-          original: isOriginal,
-          y: isOriginal ? undefined : `y_${position}_${j}`,
-          below: isOriginal ? `b_${position}` : undefined,
-          above: isOriginal ? `h_${position}` : `z_${position}_${j}`,
-          densityGPerMl,
-          centreMl,
-          centreGrams,
-          spanGrams: a * centreGrams,
-          rank: isOriginal ? 0 : candidate.approved ? 1 : 2,
+          ...common,
+          kind: 'partial',
+          share: `w_${position}_${j}`,
+          centreGrams: ratio * maxShare * G,
+          minShareGrams: Math.min(MIN_SHARE, maxShare) * G,
+          maxShareGrams: maxShare * G,
         },
       ];
     });
@@ -129,7 +209,7 @@ export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: 
     const keep = options.pruneDominated
       ? new Set(
           keptCandidates(
-            all.map((s) => ({ ...s, per100g: s.candidate.per100g, cost: s.rank })),
+            all.map((s) => ({ per100g: s.candidate.per100g, shape: shapeOf(s), cost: s.rank, original: s.kind === 'original' })),
             rows,
           ),
         )

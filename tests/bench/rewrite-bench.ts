@@ -1,6 +1,5 @@
 import { pathToFileURL } from 'node:url';
-import { buildRewriteModel } from '../../shared/rewrite/build-model';
-import { toLpFormat } from '../../shared/rewrite/lp-format';
+import { buildRewriteModel, modelText } from '../../shared/rewrite/build-model';
 import { solveLp } from '../../shared/rewrite/solve-lp';
 import { solveRewrite } from '../../shared/rewrite/solve-rewrite';
 import type { RewriteObjective, RewriteOptions, Targets } from '../../shared/rewrite/types';
@@ -28,16 +27,20 @@ interface Case {
   options: RewriteOptions;
 }
 
+/** What the substitution rules bring: ratios other than 1, partial swaps, amount bands, held lines. */
+const RULES = { massRatioShare: 0.3, partialShare: 0.3, keepScaleShare: 0.2, heldShare: 0.1 } as const;
+
 /**
  * Recipes of `size` lines, K = 8 candidates besides the original per line, 10 % of lines locked,
- * 15 % of candidates coach-approved; targets a plan with up to three swaps meets (so every case has
- * an answer, as most real requests do), at most 3 swaps, default tolerances.
+ * 15 % of candidates coach-approved, the rules' share of ratios, partial swaps, amount bands and
+ * held lines (RULES); targets a plan with up to three swaps meets (so every case has an answer, as
+ * most real requests do), at most 3 swaps, default tolerances.
  */
 function cases(size: number): Case[] {
   const out: Case[] = [];
   for (let r = 0; r < RECIPES_PER_SIZE; r++) {
     const rng = seededRandom(size * 1000 + r);
-    const lines = randomRecipe(rng, { lines: size, candidates: CANDIDATES, lockedShare: 0.1, approvedShare: 0.15 });
+    const lines = randomRecipe(rng, { lines: size, candidates: CANDIDATES, lockedShare: 0.1, approvedShare: 0.15, ...RULES });
     const targets = plantedTargets(rng, lines, SERVINGS, 3);
     for (const objective of OBJECTIVES) out.push({ lines, targets, options: { objective, maxSwaps: 3 } });
   }
@@ -48,7 +51,7 @@ function cases(size: number): Case[] {
 function outOfReach(size: number): Case[] {
   return Array.from({ length: 10 }, (_, r) => {
     const rng = seededRandom(size * 7777 + r);
-    const lines = randomRecipe(rng, { lines: size, candidates: CANDIDATES, lockedShare: 0.1, approvedShare: 0.15 });
+    const lines = randomRecipe(rng, { lines: size, candidates: CANDIDATES, lockedShare: 0.1, approvedShare: 0.15, ...RULES });
     const written = perServingAsWritten(lines, SERVINGS);
     return { lines, targets: { proteinMinG: written.proteinG * 3, kcalMax: written.kcal * 0.7 }, options: { objective: 'closest', maxSwaps: 3 } };
   });
@@ -56,7 +59,7 @@ function outOfReach(size: number): Case[] {
 
 export async function runRewriteBench(): Promise<void> {
   const highs = await loadHighs();
-  console.log(`rewrite solver bench: ${RECIPES_PER_SIZE} recipes × ${OBJECTIVES.length} objectives per size, K = ${CANDIDATES} + original per line`);
+  console.log(`rewrite solver bench: ${RECIPES_PER_SIZE} recipes × ${OBJECTIVES.length} objectives per size, K = ${CANDIDATES} + original per line, with rules (${JSON.stringify(RULES)})`);
   console.log('lines  kept/line  jsLPSolver p50   p95    max  |  HiGHS p50   p95  |  p95 ratio  budget');
   let withinBudget = true;
   for (const size of SIZES) {
@@ -74,7 +77,7 @@ export async function runRewriteBench(): Promise<void> {
       const solved = solveLp(built.model);
       if (solved.status !== 'optimal') throw new Error(`bench case not solved: ${solved.status}`);
       js.push(solved.ms);
-      const lp = toLpFormat(built.model);
+      const lp = modelText(built);
       const t = now();
       const result = highs.solve(lp, HIGHS_OPTIONS);
       hi.push(now() - t);
