@@ -6,7 +6,7 @@ import type { LineFunction } from '../../shared/culinary/types';
 import { analyzeLines, culinaryLineOf, requestLines, type FoodVisibility } from './analysis';
 import { recipeCandidates, type ApprovedSwap } from './candidates';
 import { foodSummary } from './foods';
-import { runRewrite } from './solver-pool';
+import { runRewrite, SOLVER_TIMEOUT_MS } from './solver-pool';
 import { HttpError, badRequest } from '../lib/http-error';
 
 export interface RewriteViewer {
@@ -90,6 +90,7 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
         volumeTolerancePct: input.volumeTolerancePct,
         lineTolerancePct: input.lineTolerancePct,
         maxSwaps: input.maxSwaps,
+        timeoutMs: SOLVER_TIMEOUT_MS,
         explain,
       },
     });
@@ -107,6 +108,7 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
       suggestions: result.suggestions,
       before: publicPlan(engine, result.before),
       closest: publicPlan(engine, result.closest),
+      held: result.held ?? [],
       skippedLines,
       solver: result.solver,
     });

@@ -1,3 +1,4 @@
+import { LINE_FUNCTION_WORDS } from '../culinary/infer-dish';
 import { nutrientsForGrams, sumNutrients } from '../nutrition';
 import type { CandidateSlot } from './line-slots';
 import type { LineChoice } from './read-plan';
@@ -102,7 +103,7 @@ export function explainChanges(
     if (!swap) {
       const [lo, hi] = choice.line.line.keepScale ?? [1, 1];
       const role = choice.line.line.role;
-      const may = `${role ? `as ${role.replace(/-/g, ' ')} it` : 'it'} may use ${percent(lo)}–${percent(hi)} % of the written amount`;
+      const may = `${role ? `as ${LINE_FUNCTION_WORDS[role] ?? role} it` : 'it'} may use ${percent(lo)}–${percent(hi)} % of the written amount`;
       what = `${added.grams > was.grams ? 'More' : 'Less'} ${from} (${grams(was.grams)} → ${grams(added.grams)}; ${may})`;
     } else if (partial) {
       const kept = now.parts[0].grams;

@@ -61,8 +61,8 @@ export function solveRewrite(
     solveElastic(lines, targets, servings, opts, { objective: { kind } }, log, Infinity, floorMs);
   let objective = opts.objective;
   let outcome = solveFor(objective);
-  if (outcome && !outcome.meetsTargets && outcome.solution.status !== 'optimal') {
-    // Time ran out before a plan meeting the targets turned up, which proves nothing. The
+  if (!outcome || (!outcome.meetsTargets && outcome.solution.status !== 'optimal')) {
+    // Time ran out before a plan (meeting the targets) turned up, which proves nothing. The
     // nutrient objectives' relaxations are tight, so their branch and bound finds plans fast:
     // one of those, not proven best for the cook's objective, beats a wrong "out of reach".
     // A nutrient solve that finishes and still misses is the proof the targets are out of reach.
@@ -74,11 +74,11 @@ export function solveRewrite(
         break;
       }
     }
+    if (!outcome) throw new RewriteSolverError('the solver stopped without a plan', 'time-limit');
     if (!outcome.meetsTargets && outcome.solution.status !== 'optimal') {
       throw new RewriteSolverError('the solver ran out of time before settling whether the targets can be met', 'time-limit');
     }
   }
-  if (!outcome) throw new RewriteSolverError('the solver stopped without a plan', 'time-limit');
   const found = outcome;
   const written = writtenChoices(found.built.variables);
   const before = planOf(written, servings);

@@ -3,10 +3,11 @@
  * foods by id only; the server answers with the catalogue's food summary in their place.
  */
 import type { Nutrients } from '../../../shared/nutrition';
-import type { ChangePurpose, SolverInfo, Suggestion, TargetName } from '../../../shared/rewrite/types';
+import type { ChangePurpose, HeldLine, RuleRef, SolverInfo, Suggestion, TargetName } from '../../../shared/rewrite/types';
 import type { FoodSummary } from '../../../shared/schemas/analyze';
 import { isApiError } from '../../lib/api-client';
 
+/** One food of a plan's line; a shared line (part original, part substitute) has two with the same index. */
 export interface RewritePlanLine {
   /** the line's position in the recipe as sent */
   index: number;
@@ -31,9 +32,15 @@ export interface RewriteChange {
   gramsAfter: number;
   swapped: boolean;
   approvedBy?: string;
+  /** the coach's note for an approved swap, else the rule's note */
   note?: string;
   serves: ChangePurpose[];
   reason: string;
+  /** the line is shared: `from` keeps keptGrams, `to` takes gramsAfter */
+  partial?: boolean;
+  keptGrams?: number;
+  /** the substitution rule behind the swap */
+  rule?: RuleRef;
 }
 
 /** A line the rewrite left out: no food matched, or no amount. */
@@ -48,6 +55,8 @@ export interface RewriteAnswer {
   before: RewritePlan;
   after: RewritePlan;
   changes: RewriteChange[];
+  /** lines kept exactly as written because of what they do in the dish */
+  held?: HeldLine[];
   skippedLines: SkippedLine[];
   solver: SolverInfo;
 }
@@ -59,6 +68,7 @@ export interface InfeasibleDetails {
   suggestions: Suggestion[];
   before: RewritePlan;
   closest: RewritePlan;
+  held: HeldLine[];
   skippedLines: SkippedLine[];
   solver?: SolverInfo;
 }
@@ -76,6 +86,7 @@ export function infeasibleDetailsOf(error: unknown): InfeasibleDetails | null {
     suggestions: d.suggestions as Suggestion[],
     before: d.before as RewritePlan,
     closest: d.closest as RewritePlan,
+    held: Array.isArray(d.held) ? (d.held as HeldLine[]) : [],
     skippedLines: Array.isArray(d.skippedLines) ? (d.skippedLines as SkippedLine[]) : [],
     solver: isObject(d.solver) ? (d.solver as unknown as SolverInfo) : undefined,
   };
