@@ -118,20 +118,18 @@ function add(column: Record<string, number>, row: string, value: number): void {
  * as changes to the recipe as written so that the all-zero start is the written recipe.
  *
  * The product's model, for free line i with written grams G_i and candidate c of mass ratio r_c:
- * binary y_ic, grams x_ic, at most one substitute per line, and
- *  - a whole-line swap: (1−a)·r_c·G_i·y_ic ≤ x_ic ≤ (1+a)·r_c·G_i·y_ic;
- *  - a partial swap: a share w_ic ∈ [minShare·G_i·y_ic, maxShare_c·G_i·y_ic] of the written grams,
- *    replaced by (1−a)·r_c·w_ic ≤ x_ic ≤ (1+a)·r_c·w_ic, the written food keeping G_i − w_ic;
+ * binary y_ics, grams x_ics, at most one substitute and share per line, and
+ *  - a swap of share s (1 for the whole line; for a partial candidate each of SHARES up to its
+ *    maxShare): (1−a)·r_c·s·G_i·y_ics ≤ x_ics ≤ (1+a)·r_c·s·G_i·y_ics, the written food keeping (1−s)·G_i;
  *  - unswapped, the written food at exactly G_i, or within keepScale_i·G_i where a rule allows;
  * dish volume Σ x/ρ within (1 ± t)·ΣV (a sanity bound), per-serving targets, Σ y ≤ M, and for
- * 'closest' each line's mL away from its centre (r_c·G_i, r_c·w_ic or G_i) plus the mL of written
- * food a swap gives up (the whole line, or the share w_ic). Here it is the same model after exact substitutions:
- *  - y_i,orig = 1 − Σ_c y_ic, so Σ_c y_ic ≤ 1 (row pick_i);
- *  - x_i,orig = G_i·(1 − Σ_swap y) − Σ_partial w − b_i + h_i with b_i ≤ (1−lo)·G_i·y_i,orig and
+ * 'closest' each line's mL away from its centre (r_c·s·G_i, or G_i) plus the mL of written food a
+ * swap gives up (s·G_i/ρ_orig). Here it is the same model after exact substitutions:
+ *  - y_i,orig = 1 − Σ y_ics, so Σ y_ics ≤ 1 (row pick_i);
+ *  - x_i,orig = G_i·(1 − Σ s·y_ics) − b_i + h_i with b_i ≤ (1−lo)·G_i·y_i,orig and
  *    h_i ≤ (hi−1)·G_i·y_i,orig (rows kb_i, ka_i; b_i and h_i exist only with keepScale);
- *  - x_ic = (1−a)·r_c·G_i·y_ic + z_ic with z_ic ≤ 2a·r_c·G_i·y_ic (swap), or
- *    x_ic = (1−a)·r_c·w_ic + z_ic with z_ic ≤ 2a·r_c·w_ic (partial), one row zb each;
- *  - for 'closest', one deviation per line, dev_i ≥ ±[(h_i − b_i)/ρ_orig + Σ_c (z_ic − a·r_c·(G_i·y_ic or w_ic))/ρ_c]:
+ *  - x_ics = (1−a)·r_c·s·G_i·y_ics + z_ics with z_ics ≤ 2a·r_c·s·G_i·y_ics, one row zb each;
+ *  - for 'closest', one deviation per line, dev_i ≥ ±[(h_i − b_i)/ρ_orig + Σ (z_ics − a·r_c·s·G_i·y_ics)/ρ_c]:
  *    at most one substitute of a line is used, so this is that food's |volume − centre|.
  * Every nutrient, volume and objective row then reads as "change from the written recipe", the
  * written values moving to the right-hand sides. Fixed lines are constants there too.
@@ -139,8 +137,8 @@ function add(column: Record<string, number>, row: string, value: number): void {
  * starts its simplex at all zeros. Starting from x = 0 its phase 1 had to repair every line's
  * Σy = 1 and the dish volume at once and, on these degenerate rows, its pivoting blew up
  * numerically; from the written recipe only unmet targets need repair, and with elastic targets
- * (below) nothing does. Few rows and columns (about K + 1 rows and 2K columns a line for K
- * whole-line swaps, two rows and a column more for each partial one) make each pivot cheaper.
+ * (below) nothing does. Few rows and columns (about K + 1 rows and 2K columns a line for K swap
+ * slots) make each pivot cheaper.
  */
 export function buildModel(
   lines: RewriteLine[],
@@ -156,7 +154,7 @@ export function buildModel(
   const elastic = variant.penaltyFactor !== undefined;
   const slots = lineSlots(lines, options, activeTargets(targets).map((t) => t.row));
   const maxSwaps = variant.maxSwaps === undefined ? options.maxSwaps : variant.maxSwaps;
-  const weights = closestWeights(slots, maxSwaps, options.lineTolerance);
+  const weights = closestWeights(slots, maxSwaps);
 
   const writtenTotals = sumNutrients(slots.map((l) => nutrientsForGrams(l.original.per100g, Math.max(0, l.line.grams))));
   const writtenPerServing = zeroNutrients();
@@ -231,33 +229,14 @@ export function buildModel(
       if (objective.kind === 'swaps') add(y, OBJ, 1);
       if (closest) add(y, OBJ, s.candidate.approved ? weights.approvedSwap : weights.swap);
       const rho = s.densityGPerMl;
-      const band = `zb_${p}_${s.position}`;
-      if (s.kind === 'swap') {
-        // the whole line: the written food goes, the swap comes in at the low end of its band
-        addFood(y, orig.candidate, rhoOrig, -orig.centreGrams);
-        addFood(y, s.candidate, rho, s.centreGrams - s.spanGrams);
-        deviation(y, -s.spanGrams / rho);
-        add(y, band, -2 * s.spanGrams);
-        // 'closest' prices the written food given up, the whole line here, a share in a partial swap
-        if (closest) add(y, OBJ, (weights.perMl * orig.centreGrams) / rhoOrig);
-      } else {
-        // w grams of the written food replaced by (1 − a)·r·w + z of the substitute, w within its shares
-        const a = s.tolerance;
-        const share = s.share!;
-        const shareMax = `wmax_${p}_${s.position}`;
-        const shareMin = `wmin_${p}_${s.position}`;
-        constraints[shareMax] = { max: 0 };
-        constraints[shareMin] = { min: 0 };
-        add(y, shareMax, -s.maxShareGrams);
-        add(y, shareMin, -s.minShareGrams);
-        const w: Record<string, number> = { [shareMax]: 1, [shareMin]: 1 };
-        addFood(w, orig.candidate, rhoOrig, -1);
-        addFood(w, s.candidate, rho, (1 - a) * s.ratio);
-        add(w, band, -2 * a * s.ratio);
-        deviation(w, (-a * s.ratio) / rho);
-        if (closest) add(w, OBJ, weights.perMl / rhoOrig);
-        variables[share] = w;
-      }
+      const band = `zb_${p}_${s.key}`;
+      // the written food gives up its share s, the substitute comes in at the low end of its band
+      addFood(y, orig.candidate, rhoOrig, -s.share * orig.centreGrams);
+      addFood(y, s.candidate, rho, s.centreGrams - s.spanGrams);
+      deviation(y, -s.spanGrams / rho);
+      add(y, band, -2 * s.spanGrams);
+      // 'closest' prices the written food given up, so a partial swap replaces no more than it must
+      if (closest) add(y, OBJ, (weights.perMl * s.share * orig.centreGrams) / rhoOrig);
       variables[s.y!] = y;
       ints[s.y!] = 1;
       if (s.above) {

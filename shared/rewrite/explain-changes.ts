@@ -107,7 +107,7 @@ export function explainChanges(
       what = `${added.grams > was.grams ? 'More' : 'Less'} ${from} (${grams(was.grams)} → ${grams(added.grams)}; ${may})`;
     } else if (partial) {
       const kept = now.parts[0].grams;
-      what = `Replace ${shareWords((was.grams - kept) / was.grams)} of the ${from} with ${grams(added.grams)} ${added.food.name} (${grams(kept)} of the ${grams(was.grams)} kept) — ${ruleText(swap, from)}`;
+      what = `Replace ${shareWords(swap.share)} of the ${from} with ${grams(added.grams)} ${added.food.name} (${grams(kept)} of the ${grams(was.grams)} kept) — ${ruleText(swap, from)}`;
     } else {
       what = `Swap ${grams(was.grams)} ${from} for ${grams(added.grams)} ${added.food.name} — ${ruleText(swap, from)}`;
     }

@@ -6,44 +6,48 @@ import type { Candidate, RewriteLine } from './types';
 /**
  * How a candidate takes part in its line (see buildModel for the algebra):
  *  - 'original': the written food, at exactly its written grams G, or within keepScale·G;
- *  - 'swap': the whole line, at (1 ± a)·r·G grams (r the mass ratio);
- *  - 'partial': a share w ∈ [minShare·G, maxShare·G] of the written grams, replaced by
- *    (1 ± a)·r·w grams of the substitute, the original keeping G − w.
+ *  - 'swap': a share s of the line (1 for the whole line) replaced by (1 ± a)·r·s·G grams of the
+ *    substitute (r its mass ratio), the written food keeping (1 − s)·G.
  */
-export type SlotKind = 'original' | 'swap' | 'partial';
+export type SlotKind = 'original' | 'swap';
 
-/** The smallest share of a line a partial swap replaces: a cook splits by quarters, thirds, halves, not slivers. */
-export const MIN_SHARE = 0.25;
+/**
+ * The shares of a line a partial swap may replace: a cook splits a line in half ("half beef, half
+ * turkey", "half the butter as yogurt") or swaps it whole, not 91 % of it. A partial candidate
+ * gets one slot per share up to its maxShare (its maxShare itself when that is below a half); the
+ * ±a band around each share's amount gives the substitute its room. (Quarters and thirds as well
+ * tripled the binaries and the 20-line p95.)
+ */
+export const SHARES = [1 / 2, 1] as const;
 
 export interface CandidateSlot {
   candidate: Candidate;
   /** index in line.candidates */
   position: number;
+  /** unique among the line's slots: the position, and the share's number for a partial candidate */
+  key: string;
   kind: SlotKind;
   /** binary "this swap is made"; the original has none (it is kept when no swap is made) */
   y?: string;
   /** original with keepScale: grams less than written */
   below?: string;
-  /** original with keepScale: grams more than written; swap and partial: grams above the low end of the band (absent when a = 0) */
+  /** original with keepScale: grams more than written; swap: grams above the low end of its band (absent when a = 0) */
   above?: string;
-  /** partial: grams of the written food replaced, w */
-  share?: string;
+  /** s, the share of the written grams the swap replaces (1: the whole line; 1 for the original too) */
+  share: number;
   /** ρ used in the model; the original food's comes from the line itself (grams ÷ volumeMl) */
   densityGPerMl: number;
   /** r: grams of this food per gram of the written food (1 for the original) */
   ratio: number;
-  /** original: G; swap: r·G; partial: r·maxShare·G (the substitute's largest centre) */
+  /** original: G; swap: r·s·G */
   centreGrams: number;
-  /** swap: a·r·G, how far grams may go either way; original and partial: 0 */
+  /** swap: a·r·s·G, how far grams may go either way; original: 0 */
   spanGrams: number;
   /** a, the line tolerance of a substitute's band (0 for the original) */
   tolerance: number;
   /** original: grams it may go below and above G when not swapped (keepScale) */
   keepBelow: number;
   keepAbove: number;
-  /** partial: the bounds of w in grams */
-  minShareGrams: number;
-  maxShareGrams: number;
   /** rank for pruning and the 'closest' price: 0 original, 1 approved swap, 2 unapproved swap */
   rank: number;
 }
@@ -114,16 +118,14 @@ function keepScaleOf(line: RewriteLine): [number, number] {
 
 /**
  * The most the slot's amounts may cost in 'closest', in mL: the substitute's distance from its
- * centre plus the written food it replaces (a swap's whole line, a partial swap's share).
+ * centre plus the written food it replaces.
  */
-export function maxDeviationMl(slot: CandidateSlot, originalDensity: number, lineTolerance: number): number {
+export function maxDeviationMl(slot: CandidateSlot, originalDensity: number): number {
   switch (slot.kind) {
     case 'original':
       return Math.max(slot.keepBelow, slot.keepAbove) / slot.densityGPerMl;
     case 'swap':
       return slot.spanGrams / slot.densityGPerMl + slot.centreGrams / slot.ratio / originalDensity;
-    case 'partial':
-      return (lineTolerance * slot.ratio * slot.maxShareGrams) / slot.densityGPerMl + slot.maxShareGrams / originalDensity;
   }
 }
 
@@ -138,20 +140,20 @@ export function maxDeviationMl(slot: CandidateSlot, originalDensity: number, lin
  * (Fixed costs like 1000 and 600 would not do this: four approved swaps, 2400, would beat three
  * unapproved ones, 3000.)
  */
-export function closestWeights(lines: LineSlot[], maxSwaps: number | null, lineTolerance: number): ClosestWeights {
+export function closestWeights(lines: LineSlot[], maxSwaps: number | null): ClosestWeights {
   const swappable = lines.filter((l) => l.slots.some((s) => s.kind !== 'original')).length;
   const k = Math.max(1, Math.min(swappable, maxSwaps ?? swappable));
   const delta = SWAP_COST / (k + 1);
   const maxDeviation = lines.reduce((sum, l) => {
     const rho = l.slots[0]?.densityGPerMl ?? 1;
-    return sum + Math.max(0, ...l.slots.map((s) => maxDeviationMl(s, rho, lineTolerance)));
+    return sum + Math.max(0, ...l.slots.map((s) => maxDeviationMl(s, rho)));
   }, 0);
   return { swap: SWAP_COST, approvedSwap: SWAP_COST - delta, perMl: maxDeviation > 0 ? delta / (2 * maxDeviation) : 0 };
 }
 
 /** Slots that allow exactly the same grams, volumes and amount costs; only these can stand in for each other. */
 function shapeOf(s: CandidateSlot): string {
-  return [s.kind, s.densityGPerMl, s.ratio, s.centreGrams, s.spanGrams, s.keepBelow, s.keepAbove, s.minShareGrams, s.maxShareGrams].join('|');
+  return [s.kind, s.densityGPerMl, s.ratio, s.share, s.centreGrams, s.spanGrams, s.keepBelow, s.keepAbove].join('|');
 }
 
 export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: readonly TargetRow[]): LineSlot[] {
@@ -164,7 +166,7 @@ export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: 
     const [lo, hi] = keepScaleOf(line);
     const all = line.candidates.flatMap((candidate, j): CandidateSlot[] => {
       if (!usable(candidate)) return [];
-      const base = { candidate, position: j, spanGrams: 0, tolerance: 0, keepBelow: 0, keepAbove: 0, minShareGrams: 0, maxShareGrams: 0 };
+      const base = { candidate, position: j, key: String(j), share: 1, spanGrams: 0, tolerance: 0, keepBelow: 0, keepAbove: 0 };
       if (candidate.original) {
         return [
           {
@@ -184,26 +186,25 @@ export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: 
       const ratio = massRatioOf(candidate, rho);
       const maxShare = candidate.maxShare ?? 1;
       const partial = candidate.partial === true || maxShare < 1;
-      const common = {
-        ...base,
-        y: `y_${position}_${j}`,
-        above: a > 0 ? `z_${position}_${j}` : undefined,
-        densityGPerMl: candidate.densityGPerMl,
-        ratio,
-        tolerance: a,
-        rank: candidate.approved ? 1 : 2,
-      };
-      if (!partial) return [{ ...common, kind: 'swap', centreGrams: ratio * G, spanGrams: a * ratio * G }];
-      return [
-        {
-          ...common,
-          kind: 'partial',
-          share: `w_${position}_${j}`,
-          centreGrams: ratio * maxShare * G,
-          minShareGrams: Math.min(MIN_SHARE, maxShare) * G,
-          maxShareGrams: maxShare * G,
-        },
-      ];
+      const allowed = SHARES.filter((share) => share <= maxShare + 1e-9);
+      const shares = !partial ? [1] : allowed.length ? allowed : [maxShare];
+      return shares.map((share, k): CandidateSlot => {
+        const key = partial ? `${j}_${k}` : String(j);
+        return {
+          ...base,
+          kind: 'swap',
+          key,
+          share,
+          y: `y_${position}_${key}`,
+          above: a > 0 ? `z_${position}_${key}` : undefined,
+          densityGPerMl: candidate.densityGPerMl,
+          ratio,
+          tolerance: a,
+          centreGrams: ratio * share * G,
+          spanGrams: a * ratio * share * G,
+          rank: candidate.approved ? 1 : 2,
+        };
+      });
     });
     all.sort((p, q) => p.rank - q.rank);
     const keep = options.pruneDominated

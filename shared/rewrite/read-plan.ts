@@ -18,9 +18,6 @@ export interface LineChoice {
   swap: CandidateSlot | null;
 }
 
-/** A partial swap whose written food keeps less than this share of the line is a whole-line swap. */
-const WHOLE_LINE = 1e-9;
-
 function writtenVolume(line: LineSlot): number {
   return line.line.volumeMl > 0 ? line.line.volumeMl : 0;
 }
@@ -51,13 +48,8 @@ export function solvedChoices(meta: RewriteModelMeta, values: Record<string, num
     if (!swap) {
       return { line, parts: [part(orig.candidate, G - value(orig.below) + value(orig.above), orig.densityGPerMl)], swap: null };
     }
-    if (swap.kind === 'swap') {
-      return { line, parts: [part(swap.candidate, swap.centreGrams - swap.spanGrams + value(swap.above), swap.densityGPerMl)], swap };
-    }
-    const w = Math.min(G, Math.max(0, value(swap.share)));
-    const substitute = part(swap.candidate, (1 - swap.tolerance) * swap.ratio * w + value(swap.above), swap.densityGPerMl);
-    const kept = G - w;
-    const parts = kept > WHOLE_LINE * G ? [part(orig.candidate, kept, orig.densityGPerMl), substitute] : [substitute];
+    const substitute = part(swap.candidate, swap.centreGrams - swap.spanGrams + value(swap.above), swap.densityGPerMl);
+    const parts = swap.share < 1 ? [part(orig.candidate, (1 - swap.share) * G, orig.densityGPerMl), substitute] : [substitute];
     return { line, parts, swap };
   });
 }

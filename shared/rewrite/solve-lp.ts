@@ -154,5 +154,7 @@ export function solveLp(model: LpModel, options: LpSolveOptions = {}): LpSolutio
       if (polished && findViolations(model, polished).length === 0) return finish('optimal', polished, 'polished');
     }
   }
+  // Branch and bound stopped by its budget before an integer plan turned up: no plan, not a failure.
+  if (integer && now() - started >= opts.timeoutMs) return finish('time-limit', {}, 'none', violations);
   return finish('failed', {}, 'none', violations);
 }

@@ -256,3 +256,16 @@ export async function solveWithHighs(lpText: string): Promise<HighsOutcome> {
 export function relativeGap(a: number, b: number): number {
   return Math.abs(a - b) / Math.max(1, Math.abs(b));
 }
+
+/**
+ * Whether an outside solver's optimum on the exported LP text agrees with solver.objectiveValue:
+ * within relative 1e-6, or within 1e-8 of the objective's constant term. That constant (the
+ * elastic repair's price × the written recipe's shortfall) can be 10³–10⁶ times the plan's value
+ * and cancels against the repair columns, whose values each solver holds only to its feasibility
+ * tolerance (seen: up to 3e-9 of the constant), so the two optima differ by that much.
+ */
+export function objectiveAgrees(outside: number, ours: number, lpText: string): boolean {
+  const constant = /([+-]) ([0-9.e+-]+)\nSubject To/.exec(lpText);
+  const magnitude = constant ? Math.abs(Number(constant[2])) : 0;
+  return relativeGap(outside, ours) <= 1e-6 || Math.abs(outside - ours) <= 1e-8 * magnitude;
+}
