@@ -1,4 +1,6 @@
 import { parseLine, type ParsedLine } from '../../shared/parse-line';
+import { readDish } from '../../shared/culinary/infer-dish';
+import type { CulinaryLine } from '../../shared/culinary/types';
 import { divideNutrients, nutrientsForGrams, sumNutrients, zeroNutrients, type Nutrients } from '../../shared/nutrition';
 import type { AnalyzeRequest, AnalyzeResponse, AnalyzedLine, LineInput } from '../../shared/schemas/analyze';
 import type { CatalogueFood } from '../../shared/food';
@@ -114,6 +116,11 @@ export function lineVolumeMl(engine: FoodEngine<CatalogueFood>, input: string, f
   return grams / food.densityGPerMl;
 }
 
+/** What the culinary reading (dish type, line functions) needs of an analysed line. */
+export function culinaryLineOf(line: AnalyzedLineWithFood): CulinaryLine & { food: CatalogueFood | null } {
+  return { phrase: line.parsed.name || line.input, comment: line.parsed.comment, food: line.matchedFood, grams: line.grams };
+}
+
 export function analyzeLines(engine: FoodEngine<CatalogueFood>, lines: LineInput[], servings: number, canUse: FoodVisibility = catalogueOnly) {
   const analyzed = lines.map((line) => analyzeLine(engine, line, canUse));
   const totals = sumNutrients(analyzed.map((l) => l.nutrients));
@@ -129,5 +136,10 @@ export function analyzeLines(engine: FoodEngine<CatalogueFood>, lines: LineInput
 
 /** The public answer: the in-memory food objects stripped. */
 export function toAnalyzeResponse(result: ReturnType<typeof analyzeLines>): AnalyzeResponse {
-  return { ...result, lines: result.lines.map(({ matchedFood: _food, ...line }) => line) };
+  const dish = readDish(result.lines.map(culinaryLineOf));
+  return {
+    ...result,
+    dishType: dish.dishType,
+    lines: result.lines.map(({ matchedFood: _food, ...line }, i) => ({ ...line, role: dish.lines[i].role })),
+  };
 }

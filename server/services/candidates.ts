@@ -1,43 +1,59 @@
 import type { CatalogueFood, DietFlag, Role } from '../../shared/food';
-import type { Candidate } from '../../shared/rewrite/types';
-import type { FoodEngine } from './food-engine';
-
-/**
- * Roles whose foods Hearthswap will trade for a lighter one. Vegetables, herbs, spices, leaveners and
- * the like stay as written: swapping them changes the dish, not its weight on the waistline.
- */
-export const SWAPPABLE_ROLES: ReadonlySet<Role> = new Set<Role>([
-  'melting-cheese', 'hard-cheese', 'soft-cheese', 'cured-meat-topping', 'ground-meat', 'poultry', 'red-meat',
-  'pork', 'sausage', 'plant-protein', 'flatbread-wrap', 'bread', 'pasta', 'rice-grain', 'tomato-sauce',
-  'cream-sauce-base', 'cooking-fat', 'dairy-milk', 'cream', 'sour-cream-yogurt', 'sweetener', 'flour',
-  'breadcrumb-coating', 'egg', 'chocolate',
-]);
+import { allergensOf, allergensOfRecipe, type Allergen } from '../../shared/allergens';
+import { heldReasonFor, readDish } from '../../shared/culinary/infer-dish';
+import { keepScaleOf, rulesForLine } from '../../shared/culinary/match-rules';
+import type { CulinaryLine, DishContext, DishType, LineFunction } from '../../shared/culinary/types';
+import type { Candidate, RuleRef } from '../../shared/rewrite/types';
+import { resolvedRulesFor, type ResolvedRule } from './substitution-rules';
 
 /** SR28 groups never offered as a swap: baby foods, fast foods, meals and entrées, restaurant foods. */
 const NEVER_CANDIDATE_GROUPS = new Set(['03', '21', '22', '36']);
 
-const COOKED = /\b(cooked|boiled|roasted|baked|braised|grilled|fried|broiled|stewed|steamed|microwaved|simmered|pan-broiled|scrambled|poached|toasted)\b/i;
-
-/** Raw and cooked forms weigh differently per cup; a swap keeps the form the recipe was written in. */
-function sameState(a: CatalogueFood, b: CatalogueFood) {
-  return COOKED.test(a.name) === COOKED.test(b.name);
-}
-
-/** An approved swap from the cook's coach (filled in once the coach library exists). */
+/** An approved swap from the cook's coach. */
 export interface ApprovedSwap {
   fromFoodId?: number;
   fromRole?: Role;
   toFoodId: number;
+  /** mL of the swap per mL of the original */
   volumeRatio: number;
+  /** grams of the swap per gram of the original, when the coach gave the ratio by mass */
+  massRatio?: number;
   note?: string;
   coachName: string;
 }
 
 export interface CandidateOptions {
-  k: number;
   diet: DietFlag[];
   excludedFoodIds: ReadonlySet<number>;
   approved: ApprovedSwap[];
+  /** allergens the cook allows a swap to bring into the recipe */
+  allowAllergens?: readonly Allergen[];
+  /** the cook's choice of function by line index */
+  lineRoles?: Readonly<Record<number, LineFunction>>;
+  /** which custom foods the viewer may use (their own and their coach's) */
+  canUse?: (food: CatalogueFood) => boolean;
+}
+
+/** A recipe line as the candidate builder reads it. */
+export interface CandidateLine {
+  food: CatalogueFood | null;
+  /** the food phrase as written */
+  phrase: string;
+  comment?: string | null;
+  grams: number;
+}
+
+export interface LineCandidates {
+  role: LineFunction;
+  context: DishContext;
+  candidates: Candidate[];
+  keepScale?: [number, number];
+  heldReason?: string;
+}
+
+export interface RecipeCandidates {
+  dishType: DishType;
+  lines: LineCandidates[];
 }
 
 export function toCandidate(food: CatalogueFood, extra: Partial<Candidate> = {}): Candidate {
@@ -45,65 +61,116 @@ export function toCandidate(food: CatalogueFood, extra: Partial<Candidate> = {})
   return { foodId: food.id, name: food.name, densityGPerMl: food.densityGPerMl, per100g, ...extra };
 }
 
-function kcalPerMl(f: CatalogueFood) {
-  return (f.per100g.kcal / 100) * f.densityGPerMl;
+function toCulinaryLine(line: CandidateLine): CulinaryLine {
+  return { phrase: line.phrase, comment: line.comment ?? null, food: line.food, grams: line.grams };
 }
 
-function proteinPerKcal(f: CatalogueFood) {
-  return f.per100g.kcal > 0 ? f.per100g.proteinG / f.per100g.kcal : f.per100g.proteinG > 0 ? 1 : 0;
+/** The coach's ratio by mass: given by mass, or from the volume ratio and the two densities. */
+export function approvedMassRatio(swap: ApprovedSwap, from: CatalogueFood, to: CatalogueFood): number {
+  if (swap.massRatio !== undefined && swap.massRatio > 0) return swap.massRatio;
+  return (swap.volumeRatio * to.densityGPerMl) / from.densityGPerMl;
 }
 
-/** Foods sharing a swappable role with `food`, indexed once per engine. */
-const roleIndexes = new WeakMap<FoodEngine, Map<Role, CatalogueFood[]>>();
-function foodsByRole(engine: FoodEngine) {
-  let index = roleIndexes.get(engine);
-  if (!index) {
-    index = new Map();
-    for (const f of engine.foods) {
-      if (f.branded || f.source !== 'usda-sr28' || NEVER_CANDIDATE_GROUPS.has(f.foodGroup)) continue;
-      for (const role of f.roles) {
-        if (!SWAPPABLE_ROLES.has(role)) continue;
-        const list = index.get(role) ?? [];
-        list.push(f);
-        index.set(role, list);
+interface Filters {
+  diet: DietFlag[];
+  excluded: ReadonlySet<number>;
+  /** allergens already in the recipe, plus those the cook allows */
+  allowed: ReadonlySet<Allergen>;
+}
+
+/** Why a food may not join this recipe, or null when it may. */
+function refusal(food: CatalogueFood, filters: Filters): string | null {
+  if (filters.excluded.has(food.id)) return 'excluded';
+  if (food.branded || NEVER_CANDIDATE_GROUPS.has(food.foodGroup)) return 'branded or prepared';
+  if (!filters.diet.every((d) => food.diet.includes(d))) return 'diet';
+  const added = allergensOf(food).filter((a) => !filters.allowed.has(a));
+  return added.length ? `brings ${added.join(', ')}` : null;
+}
+
+function ruleCandidates(engine: { foods: readonly CatalogueFood[] }, rule: ResolvedRule, filters: Filters, canUse: ((f: CatalogueFood) => boolean) | undefined): Candidate[] {
+  const out: Candidate[] = [];
+  const ref = (): RuleRef => ({ ...rule.ref, ...(rule.ref.cautions ? { cautions: [...rule.ref.cautions] } : {}) });
+  const extra = (massRatio: number): Partial<Candidate> => ({
+    massRatio,
+    maxShare: rule.rule.maxShare,
+    ...(rule.rule.partial ? { partial: true } : {}),
+    rule: ref(),
+  });
+  for (const t of rule.targets) {
+    if (t.kind === 'food') {
+      if (refusal(t.food, filters)) continue;
+      out.push(toCandidate(t.food, extra(t.massRatio)));
+    } else if (canUse) {
+      for (const f of engine.foods) {
+        if (f.source !== 'custom' || !f.roles.includes(t.role as Role) || !canUse(f)) continue;
+        if (!filters.diet.every((d) => f.diet.includes(d)) || filters.excluded.has(f.id)) continue;
+        if (allergensOf(f).some((a) => !filters.allowed.has(a))) continue;
+        out.push(toCandidate(f, extra(t.massRatio)));
       }
     }
-    roleIndexes.set(engine, index);
   }
-  return index;
+  return out;
 }
 
 /**
- * A line's candidates (PRODUCT.md step 5): the original food; up to K foods sharing its primary role
- * that pass the diet filters, ranked by lightness (kcal per mL down, protein per kcal up, by the sum
- * of the two ranks); and every approved swap from the cook's coach for that food or role.
+ * Every line's function and candidates (PRODUCT.md step 5): the original food; the targets of the
+ * substitution rules that apply to its food class in this dish context, kept only when they pass the
+ * diet filters and bring no major allergen absent from the recipe (unless the cook allows it); and
+ * every approved swap of the cook's coach for that food or role, which takes the place of a general
+ * rule offering the same food. A held line (seasoning, leavener, cooking liquid…) has only its original
+ * food; a line no rule covers keeps its food at the written grams.
  */
-export function candidatesFor(engine: FoodEngine, food: CatalogueFood, options: CandidateOptions): Candidate[] {
-  const out: Candidate[] = [toCandidate(food, { original: true })];
-  const seen = new Set([food.id]);
-  // The first swappable role is the most specific one (ROLES is ordered that way): ground beef is
-  // ground meat before it is red meat, so its candidates are other minces, not steaks or game.
-  const primary = food.roles.find((r) => SWAPPABLE_ROLES.has(r));
+export function recipeCandidates(engine: { foods: readonly CatalogueFood[]; byId: ReadonlyMap<number, CatalogueFood> }, lines: readonly CandidateLine[], options: CandidateOptions): RecipeCandidates {
+  const reading = readDish(lines.map(toCulinaryLine), options.lineRoles ?? {});
+  const resolved = resolvedRulesFor(engine.foods as CatalogueFood[]);
+  const recipeAllergens = allergensOfRecipe(lines.flatMap((l) => (l.food ? [l.food] : [])));
+  const filters: Filters = {
+    diet: options.diet,
+    excluded: options.excludedFoodIds,
+    allowed: new Set<Allergen>([...recipeAllergens, ...(options.allowAllergens ?? [])]),
+  };
+  const rules = resolved.map((r) => r.rule);
+  const byRule = new Map(resolved.map((r) => [r.rule, r]));
 
-  for (const swap of options.approved) {
-    const applies = swap.fromFoodId === food.id || (swap.fromRole !== undefined && food.roles.includes(swap.fromRole));
-    const to = engine.byId.get(swap.toFoodId);
-    if (!applies || !to || seen.has(to.id) || options.excludedFoodIds.has(to.id)) continue;
-    if (!options.diet.every((d) => to.diet.includes(d))) continue;
-    seen.add(to.id);
-    out.push(toCandidate(to, { approved: { by: swap.coachName, note: swap.note, volumeRatio: swap.volumeRatio } }));
-  }
-  if (!primary || options.k === 0) return out;
+  const out = lines.map((line, i): LineCandidates => {
+    const { role, context } = reading.lines[i];
+    const food = line.food;
+    if (!food) return { role, context, candidates: [] };
+    const original = toCandidate(food, { original: true, massRatio: 1 });
+    const heldReason = heldReasonFor(role);
+    if (heldReason) return { role, context, candidates: [original], heldReason };
 
-  const list = (foodsByRole(engine).get(primary) ?? []).filter(
-    (f) => !seen.has(f.id) && !options.excludedFoodIds.has(f.id) && sameState(food, f) && options.diet.every((d) => f.diet.includes(d)),
-  );
-  const byEnergy = [...list].sort((a, b) => kcalPerMl(a) - kcalPerMl(b));
-  const byProtein = [...list].sort((a, b) => proteinPerKcal(b) - proteinPerKcal(a));
-  const rank = new Map<number, number>();
-  byEnergy.forEach((f, i) => rank.set(f.id, i));
-  byProtein.forEach((f, i) => rank.set(f.id, (rank.get(f.id) ?? 0) + i));
-  list.sort((a, b) => rank.get(a.id)! - rank.get(b.id)! || a.name.length - b.name.length || a.id - b.id);
-  for (const f of list.slice(0, options.k)) out.push(toCandidate(f));
-  return out;
+    const applicable = rulesForLine(rules, { food, phrase: line.phrase, role, dishType: reading.dishType, context });
+    const seen = new Map<number, Candidate>();
+    const candidates: Candidate[] = [original];
+    seen.set(food.id, original);
+
+    for (const swap of options.approved) {
+      const applies = swap.fromFoodId === food.id || (swap.fromRole !== undefined && food.roles.includes(swap.fromRole));
+      const to = engine.byId.get(swap.toFoodId);
+      if (!applies || !to || seen.has(to.id)) continue;
+      if (filters.excluded.has(to.id) || !filters.diet.every((d) => to.diet.includes(d))) continue;
+      if (allergensOf(to).some((a) => !filters.allowed.has(a))) continue;
+      const massRatio = approvedMassRatio(swap, food, to);
+      const c = toCandidate(to, {
+        massRatio,
+        maxShare: 1,
+        approved: { by: swap.coachName, note: swap.note, volumeRatio: swap.volumeRatio, massRatio },
+      });
+      seen.set(to.id, c);
+      candidates.push(c);
+    }
+    for (const rule of applicable) {
+      const r = byRule.get(rule)!;
+      for (const c of ruleCandidates(engine, r, filters, options.canUse)) {
+        if (seen.has(c.foodId)) continue;
+        seen.set(c.foodId, c);
+        candidates.push(c);
+      }
+    }
+    const keep = keepScaleOf(applicable);
+    if (keep) original.rule = byRule.get(keep.rule)!.ref;
+    return { role, context, candidates, ...(keep ? { keepScale: keep.range } : {}) };
+  });
+  return { dishType: reading.dishType, lines: out };
 }

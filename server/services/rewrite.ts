@@ -2,13 +2,12 @@ import type { InfeasibleDetails, RewriteRequest, RewriteResponse, SkippedLine } 
 import type { RewriteLine, RewriteResult, Plan, Change, FoodRef } from '../../shared/rewrite/types';
 import { RewriteSolverError } from '../../shared/rewrite/solve-log';
 import type { FoodEngine } from './food-engine';
-import { analyzeLines, requestLines, type FoodVisibility } from './analysis';
-import { candidatesFor, type ApprovedSwap } from './candidates';
+import type { LineFunction } from '../../shared/culinary/types';
+import { analyzeLines, culinaryLineOf, requestLines, type FoodVisibility } from './analysis';
+import { recipeCandidates, type ApprovedSwap } from './candidates';
 import { foodSummary } from './foods';
-import { runRewrite } from './solver-pool';
+import { runRewrite, SOLVER_TIMEOUT_MS } from './solver-pool';
 import { HttpError, badRequest } from '../lib/http-error';
-
-const DEFAULT_K = 8;
 
 export interface RewriteViewer {
   approvedSwaps: ApprovedSwap[];
@@ -38,25 +37,42 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
   for (const index of locked) {
     if (index >= lines.length) throw badRequest(`lockedLines: line ${index} does not exist (the recipe has ${lines.length}).`, { fieldErrors: { lockedLines: ['Unknown line index.'] } });
   }
+  const lineRoles: Record<number, LineFunction> = {};
+  for (const [key, role] of Object.entries(input.lineRoles ?? {})) {
+    const index = Number(key);
+    if (index >= lines.length) throw badRequest(`lineRoles: line ${index} does not exist (the recipe has ${lines.length}).`, { fieldErrors: { lineRoles: ['Unknown line index.'] } });
+    lineRoles[index] = role;
+  }
   const analysis = analyzeLines(engine, lines, input.servings, viewer.canUse);
-  const options = {
-    k: input.candidatesPerLine ?? DEFAULT_K,
-    diet: input.diet ?? [],
-    excludedFoodIds: new Set(input.excludedFoodIds ?? []),
-    approved: viewer.approvedSwaps,
-  };
+  const culinary = recipeCandidates(
+    engine,
+    analysis.lines.map(culinaryLineOf),
+    {
+      diet: input.diet ?? [],
+      excludedFoodIds: new Set(input.excludedFoodIds ?? []),
+      approved: viewer.approvedSwaps,
+      allowAllergens: input.allowAllergens ?? [],
+      lineRoles,
+      canUse: viewer.canUse,
+    },
+  );
   const modelLines: RewriteLine[] = [];
   const skippedLines: SkippedLine[] = [];
   analysis.lines.forEach((line, index) => {
     if (!line.matchedFood) return skippedLines.push({ line: index, input: line.input, reason: 'no food matched' });
     if (line.grams <= 0) return skippedLines.push({ line: index, input: line.input, reason: 'no amount' });
+    const c = culinary.lines[index];
+    const isLocked = locked.has(index);
     modelLines.push({
       index,
       foodId: line.matchedFood.id,
       grams: line.grams,
       volumeMl: line.volumeMl,
-      locked: locked.has(index),
-      candidates: locked.has(index) ? candidatesFor(engine, line.matchedFood, { ...options, k: 0, approved: [] }) : candidatesFor(engine, line.matchedFood, options),
+      locked: isLocked,
+      role: c.role,
+      candidates: isLocked ? c.candidates.filter((x) => x.original) : c.candidates,
+      ...(c.heldReason ? { heldReason: c.heldReason } : {}),
+      ...(c.keepScale && !isLocked ? { keepScale: c.keepScale } : {}),
     });
   });
   if (modelLines.length === 0) {
@@ -74,6 +90,7 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
         volumeTolerancePct: input.volumeTolerancePct,
         lineTolerancePct: input.lineTolerancePct,
         maxSwaps: input.maxSwaps,
+        timeoutMs: SOLVER_TIMEOUT_MS,
         explain,
       },
     });
@@ -91,6 +108,7 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
       suggestions: result.suggestions,
       before: publicPlan(engine, result.before),
       closest: publicPlan(engine, result.closest),
+      held: result.held ?? [],
       skippedLines,
       solver: result.solver,
     } satisfies InfeasibleDetails);
@@ -100,6 +118,8 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
     before: publicPlan(engine, result.before),
     after: publicPlan(engine, result.after),
     changes: result.changes.map((c) => publicChange(engine, c)),
+    ...(result.held ? { held: result.held } : {}),
+    dishType: culinary.dishType,
     skippedLines,
     solver: result.solver,
   };

@@ -1,5 +1,6 @@
 import { nutrientsForGrams, sumNutrients, zeroNutrients, type NutrientKey, type Nutrients } from '../nutrition';
 import { closestWeights, lineSlots, type ClosestWeights, type LineSlot } from './line-slots';
+import { toLpFormat } from './lp-format';
 import { FEASIBILITY_TOLERANCE, type LpModel } from './lp-model';
 import { resolveOptions, type ResolvedOptions } from './rewrite-options';
 import { activeTargets } from './targets';
@@ -116,26 +117,28 @@ function add(column: Record<string, number>, row: string, value: number): void {
  * The rewrite as a javascript-lp-solver JSON model (PRODUCT.md "The computation", step 6), written
  * as changes to the recipe as written so that the all-zero start is the written recipe.
  *
- * The product's model, for free line i and candidate c: binary y_ic, grams x_ic, Σ_c y_ic = 1,
- * (1−a)·C_ic·ρ_c·y_ic ≤ x_ic ≤ (1+a)·C_ic·ρ_c·y_ic (C_ic = V_i, or V_i·r for an approved swap),
- * dish volume Σ x_ic/ρ_c within (1 ± t)·ΣV, per-serving targets, Σ_{c swapped} y_ic ≤ M, and for
- * 'closest' the volume deviations |x_ic/ρ_c − C_ic·y_ic|. Here it is the same model after exact
- * substitutions:
- *  - y_i,orig = 1 − Σ_{c swapped} y_ic (Σ_c y_ic = 1 becomes Σ_{swapped} y_ic ≤ 1, implied by the
- *    next row when a > 0);
- *  - x_i,orig = g_i·y_i,orig − b_i + h_i with b_i, h_i ≤ a·g_i·y_i,orig (g_i the written grams): rows
- *    b_i + a·g_i·Σ y ≤ a·g_i and h_i + a·g_i·Σ y ≤ a·g_i;
- *  - x_ic = (1−a)·C_ic·ρ_c·y_ic + z_ic with z_ic ≤ 2a·C_ic·ρ_c·y_ic, one row per swap;
- *  - for 'closest', one deviation per line, dev_i ≥ ±[(h_i − b_i)/ρ_orig + Σ_c (z_ic/ρ_c − a·C_ic·y_ic)]:
- *    at most one food of a line is used, so this is that food's |volume − centre|.
+ * The product's model, for free line i with written grams G_i and candidate c of mass ratio r_c:
+ * binary y_ics, grams x_ics, at most one substitute and share per line, and
+ *  - a swap of share s (1 for the whole line; for a partial candidate each of SHARES up to its
+ *    maxShare): (1−a)·r_c·s·G_i·y_ics ≤ x_ics ≤ (1+a)·r_c·s·G_i·y_ics, the written food keeping (1−s)·G_i;
+ *  - unswapped, the written food at exactly G_i, or within keepScale_i·G_i where a rule allows;
+ * dish volume Σ x/ρ within (1 ± t)·ΣV (a sanity bound), per-serving targets, Σ y ≤ M, and for
+ * 'closest' each line's mL away from its centre (r_c·s·G_i, or G_i) plus the mL of written food a
+ * swap gives up (s·G_i/ρ_orig). Here it is the same model after exact substitutions:
+ *  - y_i,orig = 1 − Σ y_ics, so Σ y_ics ≤ 1 (row pick_i);
+ *  - x_i,orig = G_i·(1 − Σ s·y_ics) − b_i + h_i with b_i ≤ (1−lo)·G_i·y_i,orig and
+ *    h_i ≤ (hi−1)·G_i·y_i,orig (rows kb_i, ka_i; b_i and h_i exist only with keepScale);
+ *  - x_ics = (1−a)·r_c·s·G_i·y_ics + z_ics with z_ics ≤ 2a·r_c·s·G_i·y_ics, one row zb each;
+ *  - for 'closest', one deviation per line, dev_i ≥ ±[(h_i − b_i)/ρ_orig + Σ (z_ics − a·r_c·s·G_i·y_ics)/ρ_c]:
+ *    at most one substitute of a line is used, so this is that food's |volume − centre|.
  * Every nutrient, volume and objective row then reads as "change from the written recipe", the
  * written values moving to the right-hand sides. Fixed lines are constants there too.
  * Why: javascript-lp-solver keeps a dense tableau, has no variable bounds (each bound is a row) and
  * starts its simplex at all zeros. Starting from x = 0 its phase 1 had to repair every line's
  * Σy = 1 and the dish volume at once and, on these degenerate rows, its pivoting blew up
  * numerically; from the written recipe only unmet targets need repair, and with elastic targets
- * (below) nothing does. Fewer rows and columns (K + 2 rows and 2K + 2 columns a line for K swaps,
- * instead of 4K + 5 and 3K + 3) make each pivot cheaper.
+ * (below) nothing does. Few rows and columns (about K + 1 rows and 2K columns a line for K swap
+ * slots) make each pivot cheaper.
  */
 export function buildModel(
   lines: RewriteLine[],
@@ -151,7 +154,7 @@ export function buildModel(
   const elastic = variant.penaltyFactor !== undefined;
   const slots = lineSlots(lines, options, activeTargets(targets).map((t) => t.row));
   const maxSwaps = variant.maxSwaps === undefined ? options.maxSwaps : variant.maxSwaps;
-  const weights = closestWeights(slots, maxSwaps, options.lineTolerance);
+  const weights = closestWeights(slots, maxSwaps);
 
   const writtenTotals = sumNutrients(slots.map((l) => nutrientsForGrams(l.original.per100g, Math.max(0, l.line.grams))));
   const writtenPerServing = zeroNutrients();
@@ -183,56 +186,66 @@ export function buildModel(
   for (const l of free) {
     const [orig, ...swaps] = l.slots;
     const p = l.position;
-    const keepBelow = `kb_${p}`;
-    const keepAbove = `ka_${p}`;
-    constraints[keepBelow] = { max: orig.spanGrams };
-    constraints[keepAbove] = { max: orig.spanGrams };
-    if (swaps.length && !(orig.spanGrams > 0)) constraints[`pick_${p}`] = { max: 1 };
+    const closest = objective.kind === 'closest';
+    const rhoOrig = orig.densityGPerMl;
+    // dev_i − Δ_i ≥ 0 and dev_i + Δ_i ≥ 0, Δ_i the line's mL away from its centre (made on first use)
     const deviationUp = `dvu_${p}`;
     const deviationDown = `dvd_${p}`;
-    const closest = objective.kind === 'closest';
-    if (closest) {
-      // dev − Δ ≥ 0 and dev + Δ ≥ 0, Δ the line's volume away from its centre
-      constraints[deviationUp] = { min: 0 };
-      constraints[deviationDown] = { min: 0 };
-      variables[`dev_${p}`] = { [deviationUp]: 1, [deviationDown]: 1, [OBJ]: weights.perMl };
+    const deviation = (column: Record<string, number>, perMl: number) => {
+      if (!closest || perMl === 0) return;
+      if (!constraints[deviationUp]) {
+        constraints[deviationUp] = { min: 0 };
+        constraints[deviationDown] = { min: 0 };
+        variables[`dev_${p}`] = { [deviationUp]: 1, [deviationDown]: 1, [OBJ]: weights.perMl };
+      }
+      add(column, deviationUp, -perMl);
+      add(column, deviationDown, perMl);
+    };
+    const keepBelow = `kb_${p}`;
+    const keepAbove = `ka_${p}`;
+    if (orig.below) {
+      constraints[keepBelow] = { max: orig.keepBelow };
+      const below: Record<string, number> = { [keepBelow]: 1 };
+      addFood(below, orig.candidate, rhoOrig, -1);
+      deviation(below, -1 / rhoOrig);
+      variables[orig.below] = below;
     }
-    const below: Record<string, number> = { [keepBelow]: 1 };
-    const above: Record<string, number> = { [keepAbove]: 1 };
-    addFood(below, orig.candidate, orig.densityGPerMl, -1);
-    addFood(above, orig.candidate, orig.densityGPerMl, 1);
-    if (closest) {
-      add(below, deviationUp, 1 / orig.densityGPerMl);
-      add(below, deviationDown, -1 / orig.densityGPerMl);
-      add(above, deviationUp, -1 / orig.densityGPerMl);
-      add(above, deviationDown, 1 / orig.densityGPerMl);
+    if (orig.above) {
+      constraints[keepAbove] = { max: orig.keepAbove };
+      const above: Record<string, number> = { [keepAbove]: 1 };
+      addFood(above, orig.candidate, rhoOrig, 1);
+      deviation(above, 1 / rhoOrig);
+      variables[orig.above] = above;
     }
-    variables[orig.below!] = below;
-    variables[orig.above] = above;
+    const pick = `pick_${p}`;
+    if (swaps.length) constraints[pick] = { max: 1 };
 
     for (const s of swaps) {
-      const y: Record<string, number> = { [keepBelow]: orig.spanGrams, [keepAbove]: orig.spanGrams };
-      if (constraints[`pick_${p}`]) add(y, `pick_${p}`, 1);
-      // making the swap removes the written food and adds the swap at the low end of its band
-      addFood(y, orig.candidate, orig.densityGPerMl, -orig.centreGrams);
-      addFood(y, s.candidate, s.densityGPerMl, s.centreGrams - s.spanGrams);
+      const y: Record<string, number> = { [pick]: 1 };
+      // a swap leaves the written food's own amount band shut
+      if (orig.below) add(y, keepBelow, orig.keepBelow);
+      if (orig.above) add(y, keepAbove, orig.keepAbove);
       add(y, 'swaps', 1);
       if (objective.kind === 'swaps') add(y, OBJ, 1);
-      const band = `zb_${p}_${s.position}`;
+      if (closest) add(y, OBJ, s.candidate.approved ? weights.approvedSwap : weights.swap);
+      const rho = s.densityGPerMl;
+      const band = `zb_${p}_${s.key}`;
+      // the written food gives up its share s, the substitute comes in at the low end of its band
+      addFood(y, orig.candidate, rhoOrig, -s.share * orig.centreGrams);
+      addFood(y, s.candidate, rho, s.centreGrams - s.spanGrams);
+      deviation(y, -s.spanGrams / rho);
       add(y, band, -2 * s.spanGrams);
-      constraints[band] = { max: 0 };
-      const z: Record<string, number> = { [band]: 1 };
-      addFood(z, s.candidate, s.densityGPerMl, 1);
-      if (closest) {
-        add(y, OBJ, s.candidate.approved ? weights.approvedSwap : weights.swap);
-        add(y, deviationUp, s.spanGrams / s.densityGPerMl);
-        add(y, deviationDown, -s.spanGrams / s.densityGPerMl);
-        add(z, deviationUp, -1 / s.densityGPerMl);
-        add(z, deviationDown, 1 / s.densityGPerMl);
-      }
+      // 'closest' prices the written food given up, so a partial swap replaces no more than it must
+      if (closest) add(y, OBJ, (weights.perMl * s.share * orig.centreGrams) / rhoOrig);
       variables[s.y!] = y;
-      variables[s.above] = z;
       ints[s.y!] = 1;
+      if (s.above) {
+        constraints[band] = { max: 0 };
+        const z: Record<string, number> = { [band]: 1 };
+        addFood(z, s.candidate, rho, 1);
+        deviation(z, 1 / rho);
+        variables[s.above] = z;
+      }
     }
   }
 
@@ -312,4 +325,9 @@ export function buildRewriteModel(
     objective: { kind: resolved.objective },
     penaltyFactor: form.hardTargets ? undefined : FIRST_PENALTY_FACTOR,
   });
+}
+
+/** The built model as CPLEX LP text with its objective constant: an outside solver's optimum on it is the plan's objective value. */
+export function modelText(built: BuiltRewriteModel): string {
+  return toLpFormat(built.model, { objectiveConstant: built.variables.objectiveConstant });
 }

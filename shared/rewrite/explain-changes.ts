@@ -1,5 +1,7 @@
-import { nutrientsForGrams } from '../nutrition';
-import type { PlanChoice } from './read-plan';
+import { LINE_FUNCTION_WORDS } from '../culinary/infer-dish';
+import { nutrientsForGrams, sumNutrients } from '../nutrition';
+import type { CandidateSlot } from './line-slots';
+import type { LineChoice } from './read-plan';
 import { activeTargets } from './targets';
 import type { Change, ChangePurpose, RewriteObjective, Targets } from './types';
 
@@ -18,31 +20,67 @@ function listed(items: string[]): string {
   return items.length <= 1 ? items.join('') : `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
 }
 
+/** "1:1 by weight", "0.75:1 by weight": grams of the substitute per gram of the written food. */
+export function ratioWords(ratio: number): string {
+  const text = Number(ratio.toFixed(2)).toString();
+  return `${text}:1 by weight`;
+}
+
+const SHARES: [number, string][] = [
+  [1 / 4, 'a quarter'],
+  [1 / 3, 'a third'],
+  [1 / 2, 'half'],
+  [2 / 3, 'two thirds'],
+  [3 / 4, 'three quarters'],
+];
+
+/** "half", "a third", "40 %" of a line. */
+export function shareWords(share: number): string {
+  const named = SHARES.find(([value]) => Math.abs(share - value) < 0.005);
+  return named ? named[1] : `${Math.round(share * 100)} %`;
+}
+
+function percent(factor: number): string {
+  return `${Math.round(factor * 100)}`;
+}
+
+/** What rule a swap follows, as the cook reads it: the rule's own label, or the coach's swap and its ratio. */
+function ruleText(swap: CandidateSlot, from: string): string {
+  const { rule, approved, name } = swap.candidate;
+  if (rule && !approved) return rule.label;
+  if (approved) return `${name} for ${from}, ${ratioWords(swap.ratio)}, a swap approved by ${approved.by}`;
+  return `${name} for ${from}, ${ratioWords(swap.ratio)}`;
+}
+
 /**
- * One entry per line whose food or grams changed, saying what it does per serving and which
- * target it serves. A change that moves no target nutrient the right way is there for the dish's
- * volume (when its own volume changed) or for the objective.
+ * One entry per line whose food or grams changed, saying what it does per serving, the rule it
+ * follows and the target it serves. A change that moves no target nutrient the right way is there
+ * for the dish's volume (when its own volume changed) or for the objective.
  */
 export function explainChanges(
-  before: PlanChoice[],
-  after: PlanChoice[],
+  before: LineChoice[],
+  after: LineChoice[],
   targets: Targets,
   servings: number,
   objective: RewriteObjective,
   volumeRangeMl: [number, number],
 ): Change[] {
   const rows = activeTargets(targets).map((t) => t.row);
+  const volumeOf = (c: LineChoice) => c.parts.reduce((s, p) => s + p.volumeMl, 0);
   // When the dish ends at a volume bound, a line that moves the other way helps keep it there.
-  const dishVolume = after.reduce((s, c) => s + c.volumeMl, 0);
+  const dishVolume = after.reduce((s, c) => s + volumeOf(c), 0);
   const atCeiling = dishVolume >= volumeRangeMl[1] * (1 - 1e-6);
   const atFloor = dishVolume <= volumeRangeMl[0] * (1 + 1e-6);
   const changes: Change[] = [];
-  before.forEach((was, i) => {
+  before.forEach((choice, i) => {
+    const was = choice.parts[0];
     const now = after[i];
-    const swapped = now.food !== was.food;
-    if (!swapped && Math.abs(now.grams - was.grams) <= SAME_GRAMS * Math.max(1, was.grams)) return;
+    const swap = now.swap;
+    const added = now.parts[now.parts.length - 1];
+    if (!swap && Math.abs(added.grams - was.grams) <= SAME_GRAMS * Math.max(1, was.grams)) return;
+    const partial = swap !== null && now.parts.length === 2;
     const b = nutrientsForGrams(was.food.per100g, was.grams);
-    const a = nutrientsForGrams(now.food.per100g, now.grams);
+    const a = sumNutrients(now.parts.map((p) => nutrientsForGrams(p.food.per100g, p.grams)));
     const effects: string[] = [];
     const serves: ChangePurpose[] = [];
     const servedLabels: string[] = [];
@@ -56,14 +94,23 @@ export function explainChanges(
         servedLabels.push(`the ${row.label}`);
       }
     }
-    const volumeDelta = now.volumeMl - was.volumeMl;
+    const volumeDelta = volumeOf(now) - was.volumeMl;
     const keepsVolume = (atCeiling && volumeDelta <= -0.5) || (atFloor && volumeDelta >= 0.5);
     if (keepsVolume || (serves.length === 0 && Math.abs(volumeDelta) >= 0.5)) serves.push('volume');
     if (serves.length === 0) serves.push('objective');
-    const what = swapped
-      ? `Swap ${was.food.name} for ${now.food.name}`
-      : `${now.grams > was.grams ? 'More' : 'Less'} ${was.food.name}`;
-    const amounts = `(${grams(was.grams)} → ${grams(now.grams)})`;
+    const from = was.food.name;
+    let what: string;
+    if (!swap) {
+      const [lo, hi] = choice.line.line.keepScale ?? [1, 1];
+      const role = choice.line.line.role;
+      const may = `${role ? `as ${LINE_FUNCTION_WORDS[role] ?? role} it` : 'it'} may use ${percent(lo)}–${percent(hi)} % of the written amount`;
+      what = `${added.grams > was.grams ? 'More' : 'Less'} ${from} (${grams(was.grams)} → ${grams(added.grams)}; ${may})`;
+    } else if (partial) {
+      const kept = now.parts[0].grams;
+      what = `Replace ${shareWords(swap.share)} of the ${from} with ${grams(added.grams)} ${added.food.name} (${grams(kept)} of the ${grams(was.grams)} kept) — ${ruleText(swap, from)}`;
+    } else {
+      what = `Swap ${grams(was.grams)} ${from} for ${grams(added.grams)} ${added.food.name} — ${ruleText(swap, from)}`;
+    }
     const per = effects.length ? `: ${listed(effects)} per serving` : '';
     const volumeNote = `keep the dish's volume (${signed(volumeDelta, 0, 'mL')})`;
     const why =
@@ -72,21 +119,26 @@ export function explainChanges(
         : servedLabels.length === 0
           ? `to ${volumeNote}`
           : `for ${listed(servedLabels)}${serves.includes('volume') ? ` and to ${volumeNote}` : ''}`;
-    const approval = swapped ? now.food.approved : undefined;
+    const approval = swap?.candidate.approved;
+    const rule = swap?.candidate.rule;
     const change: Change = {
-      line: was.line.line.index,
+      line: choice.line.line.index,
       from: { foodId: was.food.foodId, name: was.food.name },
-      to: { foodId: now.food.foodId, name: now.food.name },
+      to: { foodId: added.food.foodId, name: added.food.name },
       gramsBefore: was.grams,
-      gramsAfter: now.grams,
-      swapped,
+      gramsAfter: added.grams,
+      swapped: swap !== null,
       serves,
-      reason: `${what} ${amounts}${per}, ${why}${approval ? `; a swap approved by ${approval.by}` : ''}.`,
+      reason: `${what}${per}, ${why}.`,
     };
-    if (approval) {
-      change.approvedBy = approval.by;
-      if (approval.note) change.note = approval.note;
+    if (partial) {
+      change.partial = true;
+      change.keptGrams = now.parts[0].grams;
     }
+    if (rule) change.rule = rule;
+    if (approval) change.approvedBy = approval.by;
+    const note = approval?.note ?? rule?.note;
+    if (note) change.note = note;
     changes.push(change);
   });
   return changes;

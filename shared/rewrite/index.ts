@@ -1,4 +1,4 @@
-export { buildRewriteModel, type BuiltRewriteModel, type RewriteModelMeta } from './build-model';
+export { buildRewriteModel, modelText, type BuiltRewriteModel, type RewriteModelMeta } from './build-model';
 export { toLpFormat } from './lp-format';
 export { solveLp, type LpSolution, type LpSolveOptions } from './solve-lp';
 export { applySuggestion, solveRewrite } from './solve-rewrite';

@@ -1,14 +1,14 @@
 import type { Nutrients } from '../nutrition';
 import type { ResolvedOptions } from './rewrite-options';
 import { solveElastic, type ElasticOutcome } from './elastic-solve';
-import { planOf, solvedChoices, writtenChoices, type PlanChoice } from './read-plan';
+import { planOf, solvedChoices, writtenChoices, type LineChoice } from './read-plan';
 import type { SolveLog } from './solve-log';
 import { activeTargets, targetRow, type TargetRow } from './targets';
 import type { RewriteLine, Suggestion, TargetName, Targets } from './types';
 
 export interface InfeasibilityReport {
   /** the plan that comes closest to the targets */
-  closest: PlanChoice[];
+  closest: LineChoice[];
   perServing: Nutrients;
   binding: TargetName[];
   suggestions: Suggestion[];
@@ -71,7 +71,7 @@ export function analyseInfeasible(
   if (options.maxSwaps !== null) {
     const fewest = resolve({ objective: { kind: 'swaps' }, maxSwaps: null });
     if (fewest) {
-      const needed = solvedChoices(fewest.built.variables, fewest.solution.values).filter((c) => c.food !== c.line.original).length;
+      const needed = solvedChoices(fewest.built.variables, fewest.solution.values).filter((c) => c.swap !== null).length;
       if (needed > options.maxSwaps) {
         const more = needed - options.maxSwaps;
         suggestions.push({ kind: 'more-swaps', value: needed, message: `allow ${more} more swap${more === 1 ? '' : 's'} (${needed} in all)` });

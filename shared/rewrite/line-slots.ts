@@ -4,37 +4,52 @@ import type { TargetRow } from './targets';
 import type { Candidate, RewriteLine } from './types';
 
 /**
- * One candidate of a free line as it appears in the model (see buildModel for the algebra).
- * The original's grams are written grams − below + above; a swap's are (1 − a)·centre + extra,
- * and only when its y is 1.
+ * How a candidate takes part in its line (see buildModel for the algebra):
+ *  - 'original': the written food, at exactly its written grams G, or within keepScale·G;
+ *  - 'swap': a share s of the line (1 for the whole line) replaced by (1 ± a)·r·s·G grams of the
+ *    substitute (r its mass ratio), the written food keeping (1 − s)·G.
  */
+export type SlotKind = 'original' | 'swap';
+
+/**
+ * The shares of a line a partial swap may replace: a cook splits a line in half ("half beef, half
+ * turkey", "half the butter as yogurt") or swaps it whole, not 91 % of it. A partial candidate
+ * gets one slot per share up to its maxShare (its maxShare itself when that is below a half); the
+ * ±a band around each share's amount gives the substitute its room. (Quarters and thirds as well
+ * tripled the binaries and the 20-line p95.)
+ */
+export const SHARES = [1 / 2, 1] as const;
+
 export interface CandidateSlot {
   candidate: Candidate;
   /** index in line.candidates */
   position: number;
-  original: boolean;
+  /** unique among the line's slots: the position, and the share's number for a partial candidate */
+  key: string;
+  kind: SlotKind;
   /** binary "this swap is made"; the original has none (it is kept when no swap is made) */
   y?: string;
-  /** original only: grams less than written */
+  /** original with keepScale: grams less than written */
   below?: string;
-  /** original: grams more than written; a swap: grams above the low end of its band */
-  above: string;
+  /** original with keepScale: grams more than written; swap: grams above the low end of its band (absent when a = 0) */
+  above?: string;
+  /** s, the share of the written grams the swap replaces (1: the whole line; 1 for the original too) */
+  share: number;
   /** ρ used in the model; the original food's comes from the line itself (grams ÷ volumeMl) */
   densityGPerMl: number;
-  /** V_i, or V_i·r for an approved swap with volume ratio r */
-  centreMl: number;
+  /** r: grams of this food per gram of the written food (1 for the original) */
+  ratio: number;
+  /** original: G; swap: r·s·G */
   centreGrams: number;
-  /** a·centreGrams: how far grams may go either way */
+  /** swap: a·r·s·G, how far grams may go either way; original: 0 */
   spanGrams: number;
-  /** rank for pruning: 0 original, 1 approved swap, 2 unapproved swap */
+  /** a, the line tolerance of a substitute's band (0 for the original) */
+  tolerance: number;
+  /** original: grams it may go below and above G when not swapped (keepScale) */
+  keepBelow: number;
+  keepAbove: number;
+  /** rank for pruning and the 'closest' price: 0 original, 1 approved swap, 2 unapproved swap */
   rank: number;
-}
-
-/** Grams of the slot's food in a solution (meaningful for the chosen slot). */
-export function slotGrams(slot: CandidateSlot, values: Record<string, number>): number {
-  const above = values[slot.above] ?? 0;
-  if (slot.original) return slot.centreGrams - (values[slot.below!] ?? 0) + above;
-  return slot.centreGrams - slot.spanGrams + above;
 }
 
 export interface LineSlot {
@@ -42,7 +57,7 @@ export interface LineSlot {
   /** position in the lines array */
   position: number;
   original: Candidate;
-  /** fixed lines (locked, no grams or no volume) are constants, with no slots */
+  /** fixed lines (locked, held, no grams or no volume) are constants, with no slots */
   fixed: boolean;
   /** the original's slot first */
   slots: CandidateSlot[];
@@ -55,7 +70,7 @@ export interface ClosestWeights {
   swap: number;
   /** cost of a coach-approved swap */
   approvedSwap: number;
-  /** cost per mL of volume away from the band centre */
+  /** cost per mL of a line away from its rule's amount, and per mL of the written food a swap replaces */
   perMl: number;
 }
 
@@ -67,33 +82,78 @@ function originalOf(line: RewriteLine): Candidate {
   return originals[0];
 }
 
-function isFixed(line: RewriteLine): boolean {
-  return line.locked || !(line.grams > 0) || !(line.volumeMl > 0);
+export function isFixed(line: RewriteLine): boolean {
+  return line.locked || Boolean(line.heldReason) || !(line.grams > 0) || !(line.volumeMl > 0);
+}
+
+const positive = (v: number | undefined): v is number => v !== undefined && Number.isFinite(v) && v > 0;
+
+/**
+ * r for a substitute: the coach's own ratio first (by mass, or by volume turned into grams with
+ * both densities), then the rule's mass ratio, else 1 — equal weight, never equal volume between
+ * foods of different density.
+ */
+export function massRatioOf(c: Candidate, originalDensity: number): number {
+  if (positive(c.approved?.massRatio)) return c.approved.massRatio;
+  if (positive(c.approved?.volumeRatio)) return (c.approved.volumeRatio * c.densityGPerMl) / originalDensity;
+  if (positive(c.massRatio)) return c.massRatio;
+  return 1;
 }
 
 function usable(c: Candidate): boolean {
-  return c.original === true || (Number.isFinite(c.densityGPerMl) && c.densityGPerMl > 0);
+  if (c.original) return true;
+  if (!positive(c.densityGPerMl)) return false;
+  if (c.massRatio !== undefined && !positive(c.massRatio)) return false;
+  return c.maxShare === undefined || (positive(c.maxShare) && c.maxShare <= 1);
+}
+
+function keepScaleOf(line: RewriteLine): [number, number] {
+  if (!line.keepScale) return [1, 1];
+  const [lo, hi] = line.keepScale;
+  if (!(Number.isFinite(lo) && Number.isFinite(hi) && lo >= 0 && lo <= 1 && hi >= 1)) {
+    throw new RangeError(`line ${line.index}: keepScale must be [lo, hi] with 0 ≤ lo ≤ 1 ≤ hi`);
+  }
+  return [lo, hi];
+}
+
+/**
+ * The most the slot's amounts may cost in 'closest', in mL: the substitute's distance from its
+ * centre plus the written food it replaces.
+ */
+export function maxDeviationMl(slot: CandidateSlot, originalDensity: number): number {
+  switch (slot.kind) {
+    case 'original':
+      return Math.max(slot.keepBelow, slot.keepAbove) / slot.densityGPerMl;
+    case 'swap':
+      return slot.spanGrams / slot.densityGPerMl + slot.centreGrams / slot.ratio / originalDensity;
+  }
 }
 
 /**
  * Weights of the 'closest' objective, chosen so that its order is lexicographic:
- * fewest swaps first, then approved swaps before unapproved ones, then the smallest volume changes.
+ * fewest swaps first, then approved swaps before unapproved ones, then the smallest changes (the
+ * written food replaced, and every amount away from its centre).
  * With at most k swaps possible, an approved swap costs S − δ and an unapproved one S, δ = S/(k+1),
- * and all volume change together costs at most δ/2 (λ = δ / (2·Dmax), Dmax the largest total
- * deviation the line bands allow). Then n swaps always cost less than n + 1 (n·S + δ/2 < (n+1)(S − δ)
- * for n < k), at equal swap counts one more approved swap saves δ, more than any volume term.
+ * and all amount changes together cost at most δ/2 (λ = δ / (2·Dmax), Dmax the largest total
+ * change, in mL, the lines allow). Then n swaps always cost less than n + 1 (n·S + δ/2 < (n+1)(S − δ)
+ * for n < k), at equal swap counts one more approved swap saves δ, more than any amount term.
  * (Fixed costs like 1000 and 600 would not do this: four approved swaps, 2400, would beat three
  * unapproved ones, 3000.)
  */
-export function closestWeights(lines: LineSlot[], maxSwaps: number | null, lineTolerance: number): ClosestWeights {
-  const swappable = lines.filter((l) => l.slots.some((s) => !s.original)).length;
+export function closestWeights(lines: LineSlot[], maxSwaps: number | null): ClosestWeights {
+  const swappable = lines.filter((l) => l.slots.some((s) => s.kind !== 'original')).length;
   const k = Math.max(1, Math.min(swappable, maxSwaps ?? swappable));
   const delta = SWAP_COST / (k + 1);
-  const maxDeviation = lines.reduce(
-    (sum, l) => sum + Math.max(0, ...l.slots.map((s) => lineTolerance * s.centreMl)),
-    0,
-  );
+  const maxDeviation = lines.reduce((sum, l) => {
+    const rho = l.slots[0]?.densityGPerMl ?? 1;
+    return sum + Math.max(0, ...l.slots.map((s) => maxDeviationMl(s, rho)));
+  }, 0);
   return { swap: SWAP_COST, approvedSwap: SWAP_COST - delta, perMl: maxDeviation > 0 ? delta / (2 * maxDeviation) : 0 };
+}
+
+/** Slots that allow exactly the same grams, volumes and amount costs; only these can stand in for each other. */
+function shapeOf(s: CandidateSlot): string {
+  return [s.kind, s.densityGPerMl, s.ratio, s.share, s.centreGrams, s.spanGrams, s.keepBelow, s.keepAbove].join('|');
 }
 
 export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: readonly TargetRow[]): LineSlot[] {
@@ -101,34 +161,56 @@ export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: 
   return lines.map((line, position) => {
     const original = originalOf(line);
     if (isFixed(line)) return { line, position, original, fixed: true, slots: [], pruned: [] };
+    const G = line.grams;
+    const rho = G / line.volumeMl;
+    const [lo, hi] = keepScaleOf(line);
     const all = line.candidates.flatMap((candidate, j): CandidateSlot[] => {
       if (!usable(candidate)) return [];
-      const isOriginal = candidate.original === true;
-      const densityGPerMl = isOriginal ? line.grams / line.volumeMl : candidate.densityGPerMl;
-      const ratio = !isOriginal && candidate.approved?.volumeRatio ? candidate.approved.volumeRatio : 1;
-      const centreMl = line.volumeMl * ratio;
-      const centreGrams = isOriginal ? line.grams : centreMl * densityGPerMl;
-      return [
-        {
-          candidate,
-          position: j,
-          original: isOriginal,
-          y: isOriginal ? undefined : `y_${position}_${j}`,
-          below: isOriginal ? `b_${position}` : undefined,
-          above: isOriginal ? `h_${position}` : `z_${position}_${j}`,
-          densityGPerMl,
-          centreMl,
-          centreGrams,
-          spanGrams: a * centreGrams,
-          rank: isOriginal ? 0 : candidate.approved ? 1 : 2,
-        },
-      ];
+      const base = { candidate, position: j, key: String(j), share: 1, spanGrams: 0, tolerance: 0, keepBelow: 0, keepAbove: 0 };
+      if (candidate.original) {
+        return [
+          {
+            ...base,
+            kind: 'original',
+            below: lo < 1 ? `b_${position}` : undefined,
+            above: hi > 1 ? `h_${position}` : undefined,
+            densityGPerMl: rho,
+            ratio: 1,
+            centreGrams: G,
+            keepBelow: (1 - lo) * G,
+            keepAbove: (hi - 1) * G,
+            rank: 0,
+          },
+        ];
+      }
+      const ratio = massRatioOf(candidate, rho);
+      const maxShare = candidate.maxShare ?? 1;
+      const partial = candidate.partial === true || maxShare < 1;
+      const allowed = SHARES.filter((share) => share <= maxShare + 1e-9);
+      const shares = !partial ? [1] : allowed.length ? allowed : [maxShare];
+      return shares.map((share, k): CandidateSlot => {
+        const key = partial ? `${j}_${k}` : String(j);
+        return {
+          ...base,
+          kind: 'swap',
+          key,
+          share,
+          y: `y_${position}_${key}`,
+          above: a > 0 ? `z_${position}_${key}` : undefined,
+          densityGPerMl: candidate.densityGPerMl,
+          ratio,
+          tolerance: a,
+          centreGrams: ratio * share * G,
+          spanGrams: a * ratio * share * G,
+          rank: candidate.approved ? 1 : 2,
+        };
+      });
     });
     all.sort((p, q) => p.rank - q.rank);
     const keep = options.pruneDominated
       ? new Set(
           keptCandidates(
-            all.map((s) => ({ ...s, per100g: s.candidate.per100g, cost: s.rank })),
+            all.map((s) => ({ per100g: s.candidate.per100g, shape: shapeOf(s), cost: s.rank, original: s.kind === 'original' })),
             rows,
           ),
         )

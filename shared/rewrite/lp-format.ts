@@ -54,8 +54,9 @@ function writeRow(name: string, terms: [string, number][], sense: '>=' | '<=' | 
  * text is the very model solved. A row with both bounds becomes two rows (`name` for ≥ and
  * `name_max` for ≤), as javascript-lp-solver builds it too; `binaries` go to Binaries (bounds 0..1),
  * `ints` to General, `unrestricted` variables are declared free, every other variable is ≥ 0.
+ * `objectiveConstant` is written as the objective's constant term.
  */
-export function toLpFormat(model: LpModel): string {
+export function toLpFormat(model: LpModel, options: { objectiveConstant?: number } = {}): string {
   const objective = objectiveAttribute(model);
   const variableNames = Object.keys(model.variables);
   if (variableNames.length === 0) throw new Error('model has no variables');
@@ -77,7 +78,15 @@ export function toLpFormat(model: LpModel): string {
     '\\ Hearthswap model, written from the javascript-lp-solver JSON model',
     model.opType === 'max' ? 'Maximize' : 'Minimize',
   ];
+  const constant = options.objectiveConstant ?? 0;
   const objectiveExpression = linearExpression(objectiveTerms.length ? objectiveTerms : [[variableNames[0], 0]]);
+  if (constant !== 0) {
+    // The constant part the JSON model cannot hold, so that a solver on this text reaches the plan's value.
+    const last = objectiveExpression.length - 1;
+    const term = `${constant < 0 ? '-' : '+'} ${formatNumber(Math.abs(constant))}`;
+    if (objectiveExpression[last].length + term.length + 1 > MAX_LINE) objectiveExpression.push(term);
+    else objectiveExpression[last] = `${objectiveExpression[last]} ${term}`;
+  }
   out.push(` obj: ${objectiveExpression.join('\n   ')}`);
 
   out.push('Subject To');

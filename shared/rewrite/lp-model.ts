@@ -180,3 +180,8 @@ export function scaleRows(model: LpModel): LpModel {
   }
   return { ...model, constraints, variables };
 }
+
+/** The same model with its columns in reverse order: another pivoting path when the simplex cycles. */
+export function reverseColumns(model: LpModel): LpModel {
+  return { ...model, variables: Object.fromEntries(Object.entries(model.variables).reverse()) };
+}

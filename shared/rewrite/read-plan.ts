@@ -1,49 +1,70 @@
 import { divideNutrients, nutrientsForGrams, sumNutrients } from '../nutrition';
 import type { RewriteModelMeta } from './build-model';
-import { slotGrams, type LineSlot } from './line-slots';
+import type { CandidateSlot, LineSlot } from './line-slots';
 import type { Candidate, Plan, PlanLine } from './types';
 
-export interface PlanChoice {
-  line: LineSlot;
+/** One food of a line in a plan, with its grams and volume. */
+export interface PlanPart {
   food: Candidate;
   grams: number;
   volumeMl: number;
+}
+
+/** What a plan does with one line: its foods (two for a shared line, original first) and the swap made, if any. */
+export interface LineChoice {
+  line: LineSlot;
+  parts: PlanPart[];
+  /** the substitute's slot, or null when the written food is kept */
+  swap: CandidateSlot | null;
 }
 
 function writtenVolume(line: LineSlot): number {
   return line.line.volumeMl > 0 ? line.line.volumeMl : 0;
 }
 
+function written(line: LineSlot): LineChoice {
+  return { line, parts: [{ food: line.original, grams: Math.max(0, line.line.grams), volumeMl: writtenVolume(line) }], swap: null };
+}
+
 /** The recipe as written. */
-export function writtenChoices(meta: RewriteModelMeta): PlanChoice[] {
-  return meta.lines.map((line) => ({
-    line,
-    food: line.original,
-    grams: Math.max(0, line.line.grams),
-    volumeMl: writtenVolume(line),
-  }));
+export function writtenChoices(meta: RewriteModelMeta): LineChoice[] {
+  return meta.lines.map(written);
+}
+
+function part(food: Candidate, grams: number, density: number): PlanPart {
+  const g = Math.max(0, grams);
+  return { food, grams: g, volumeMl: g / density };
 }
 
 /** The foods and grams a solution picks, line by line. */
-export function solvedChoices(meta: RewriteModelMeta, values: Record<string, number>): PlanChoice[] {
+export function solvedChoices(meta: RewriteModelMeta, values: Record<string, number>): LineChoice[] {
+  const value = (name: string | undefined) => (name ? (values[name] ?? 0) : 0);
   return meta.lines.map((line) => {
-    if (line.fixed) return { line, food: line.original, grams: Math.max(0, line.line.grams), volumeMl: writtenVolume(line) };
+    if (line.fixed) return written(line);
+    const [orig] = line.slots;
+    const G = line.line.grams;
     // The written food stays unless a swap's indicator is on.
-    const chosen = line.slots.find((s) => s.y !== undefined && (values[s.y] ?? 0) > 0.5) ?? line.slots[0];
-    const grams = Math.max(0, slotGrams(chosen, values));
-    return { line, food: chosen.candidate, grams, volumeMl: grams / chosen.densityGPerMl };
+    const swap = line.slots.find((s) => s.y !== undefined && value(s.y) > 0.5);
+    if (!swap) {
+      return { line, parts: [part(orig.candidate, G - value(orig.below) + value(orig.above), orig.densityGPerMl)], swap: null };
+    }
+    const substitute = part(swap.candidate, swap.centreGrams - swap.spanGrams + value(swap.above), swap.densityGPerMl);
+    const parts = swap.share < 1 ? [part(orig.candidate, (1 - swap.share) * G, orig.densityGPerMl), substitute] : [substitute];
+    return { line, parts, swap };
   });
 }
 
 /** Nutrients recomputed from each food's values per 100 g × grams; the solver's sums are not used. */
-export function planOf(choices: PlanChoice[], servings: number): Plan {
-  const lines: PlanLine[] = choices.map((c) => ({
-    index: c.line.line.index,
-    food: { foodId: c.food.foodId, name: c.food.name },
-    grams: c.grams,
-    volumeMl: c.volumeMl,
-    nutrients: nutrientsForGrams(c.food.per100g, c.grams),
-  }));
+export function planOf(choices: LineChoice[], servings: number): Plan {
+  const lines: PlanLine[] = choices.flatMap((c) =>
+    c.parts.map((p) => ({
+      index: c.line.line.index,
+      food: { foodId: p.food.foodId, name: p.food.name },
+      grams: p.grams,
+      volumeMl: p.volumeMl,
+      nutrients: nutrientsForGrams(p.food.per100g, p.grams),
+    })),
+  );
   const totals = sumNutrients(lines.map((l) => l.nutrients));
   return {
     lines,

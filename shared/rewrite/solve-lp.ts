@@ -1,5 +1,5 @@
 import solver, { type SolveResult } from 'javascript-lp-solver';
-import { findViolations, fixVariables, isIntegerVariable, objectiveValue, scaleRows, type LpModel } from './lp-model';
+import { findViolations, fixVariables, isIntegerVariable, objectiveValue, reverseColumns, scaleRows, type LpModel } from './lp-model';
 import { guarded, SolverStalled } from './pivot-guard';
 
 export type LpStatus = 'optimal' | 'infeasible' | 'unbounded' | 'time-limit' | 'failed';
@@ -93,7 +93,8 @@ function polish(model: LpModel, values: Record<string, number>, options: Require
  * row, bound and integrality within 1e-6 (scaled), and the objective is recomputed from them.
  * When the check fails, the integer choice is kept and the continuous part re-solved as an LP
  * ("polished"); failing that, or when the simplex cycles (see pivot-guard), the model is solved
- * again with its rows scaled, then with presolve switched the other way ("retried").
+ * again with its rows scaled, then with its columns reversed, then with presolve switched the
+ * other way ("retried").
  *
  * Presolve is off by default: javascript-lp-solver's presolve zeroes the cost of variables it fixes
  * and assumes integer variables without an explicit bound lie in [0, 1], so its reported objective
@@ -123,10 +124,12 @@ export function solveLp(model: LpModel, options: LpSolveOptions = {}): LpSolutio
   };
 
   // Attempts in turn, each with what is left of the budget: the model itself, then the same model
-  // with its rows scaled (another pivoting path), then with presolve switched the other way.
+  // with its rows scaled or its columns reversed (other pivoting paths), then with presolve
+  // switched the other way.
   const attempts: { model: LpModel; presolve: boolean }[] = [
     { model, presolve: opts.presolve },
     { model: scaleRows(model), presolve: opts.presolve },
+    { model: reverseColumns(model), presolve: opts.presolve },
     { model, presolve: !opts.presolve },
   ];
   let violations: string[] = [];
@@ -151,5 +154,7 @@ export function solveLp(model: LpModel, options: LpSolveOptions = {}): LpSolutio
       if (polished && findViolations(model, polished).length === 0) return finish('optimal', polished, 'polished');
     }
   }
+  // Branch and bound stopped by its budget before an integer plan turned up: no plan, not a failure.
+  if (integer && now() - started >= opts.timeoutMs) return finish('time-limit', {}, 'none', violations);
   return finish('failed', {}, 'none', violations);
 }

@@ -2,8 +2,7 @@ import { resolveOptions } from './rewrite-options';
 import { solveElastic } from './elastic-solve';
 import { explainChanges } from './explain-changes';
 import { analyseInfeasible, formatTargetValue } from './infeasibility';
-import { toLpFormat } from './lp-format';
-import type { LpModel } from './lp-model';
+import { modelText } from './build-model';
 import { planOf, solvedChoices, writtenChoices } from './read-plan';
 import { RewriteSolverError, SolveLog } from './solve-log';
 import { activeTargets } from './targets';
@@ -62,8 +61,8 @@ export function solveRewrite(
     solveElastic(lines, targets, servings, opts, { objective: { kind } }, log, Infinity, floorMs);
   let objective = opts.objective;
   let outcome = solveFor(objective);
-  if (outcome && !outcome.meetsTargets && outcome.solution.status !== 'optimal') {
-    // Time ran out before a plan meeting the targets turned up, which proves nothing. The
+  if (!outcome || (!outcome.meetsTargets && outcome.solution.status !== 'optimal')) {
+    // Time ran out before a plan (meeting the targets) turned up, which proves nothing. The
     // nutrient objectives' relaxations are tight, so their branch and bound finds plans fast:
     // one of those, not proven best for the cook's objective, beats a wrong "out of reach".
     // A nutrient solve that finishes and still misses is the proof the targets are out of reach.
@@ -75,16 +74,16 @@ export function solveRewrite(
         break;
       }
     }
+    if (!outcome) throw new RewriteSolverError('the solver stopped without a plan', 'time-limit');
     if (!outcome.meetsTargets && outcome.solution.status !== 'optimal') {
       throw new RewriteSolverError('the solver ran out of time before settling whether the targets can be met', 'time-limit');
     }
   }
-  if (!outcome) throw new RewriteSolverError('the solver stopped without a plan', 'time-limit');
   const found = outcome;
   const written = writtenChoices(found.built.variables);
   const before = planOf(written, servings);
   const chosen = solvedChoices(found.built.variables, found.solution.values);
-  const info = (model: LpModel): SolverInfo => {
+  const info = (): SolverInfo => {
     const out: SolverInfo = {
       objective,
       objectiveValue: found.solution.objective + found.built.variables.objectiveConstant,
@@ -92,17 +91,19 @@ export function solveRewrite(
       solves: log.solves,
       provenOptimal: found.solution.status === 'optimal' && objective === opts.objective,
     };
-    if (opts.explain) out.model = toLpFormat(model);
+    if (opts.explain) out.model = modelText(found.built);
     return out;
   };
 
+  const held = lines.filter((l) => l.heldReason).map((l) => ({ line: l.index, reason: l.heldReason! }));
   if (found.meetsTargets) {
     return {
       status: 'optimal',
       before,
       after: planOf(chosen, servings),
       changes: explainChanges(written, chosen, targets, servings, objective, found.built.variables.volumeRangeMl),
-      solver: info(found.built.model),
+      ...(held.length ? { held } : {}),
+      solver: info(),
     };
   }
   const report = analyseInfeasible(lines, targets, servings, opts, found, log);
@@ -114,6 +115,7 @@ export function solveRewrite(
     bestReachable: report.perServing,
     binding: report.binding,
     suggestions: report.suggestions,
-    solver: info(found.built.model),
+    ...(held.length ? { held } : {}),
+    solver: info(),
   };
 }

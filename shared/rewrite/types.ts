@@ -1,24 +1,51 @@
+import type { LineFunction } from '../culinary/types';
 import type { Nutrients } from '../nutrition';
+
+/** Why a candidate is offered: the substitution rule behind it. */
+export interface RuleRef {
+  /** stable id of the rule in data/substitution-rules.json, e.g. "ground-beef-to-lean-turkey" */
+  id: string;
+  /** what the cook reads: "lean ground turkey for 80/20 beef, 1:1 by weight" */
+  label: string;
+  /** one line: why it works in this dish */
+  why: string;
+  /** the cook's note shown with the change ("bake 5 minutes longer so the lower-fat cheese melts") */
+  note?: string;
+  cautions?: string[];
+}
 
 /** A coach's approval of a swap, with an optional cooking note and volume ratio. */
 export interface SwapApproval {
   /** who approved it (the coach's display name or id) */
   by: string;
   note?: string;
-  /** mL of the swap per mL of the original food; the band is centred on V·ratio */
+  /** mL of the swap per mL of the original food; the band is centred on V·ratio (used when massRatio is absent) */
   volumeRatio?: number;
+  /** grams of the swap per gram of the original food; wins over the candidate's own massRatio */
+  massRatio?: number;
 }
 
-/** One food a line may use: the original food or a lighter one sharing its role. */
+/** One food a line may use: the original food or a substitute a rule or a coach offers. */
 export interface Candidate {
   foodId: number;
   name: string;
-  /** ρ, grams per mL */
+  /** ρ, grams per mL (for the whole-dish volume check) */
   densityGPerMl: number;
   per100g: Nutrients;
   /** the food the recipe was written with; exactly one candidate per line carries it */
   original?: boolean;
   approved?: SwapApproval;
+  /**
+   * grams of this food per gram of the line's written food at the rule's amount; the band is
+   * (1−a)·massRatio·G … (1+a)·massRatio·G. Absent: the approval's massRatio, else its volumeRatio
+   * turned into grams with both densities, else 1 (equal weight).
+   */
+  massRatio?: number;
+  /** the largest share of the written grams this candidate may replace (default 1, the whole line) */
+  maxShare?: number;
+  /** the candidate may share the line with the original food (implied by maxShare < 1) */
+  partial?: boolean;
+  rule?: RuleRef;
 }
 
 export interface RewriteLine {
@@ -31,6 +58,12 @@ export interface RewriteLine {
   /** a locked line stays exactly as written */
   locked: boolean;
   candidates: Candidate[];
+  /** what the line does in the dish (shared/culinary); read only for explanations */
+  role?: LineFunction;
+  /** factors of the written grams the original food may take when it is not swapped; absent = exactly as written */
+  keepScale?: [number, number];
+  /** why the line is held as written; a held line keeps its original food and grams */
+  heldReason?: string;
 }
 
 /** Per-serving targets. */
@@ -73,6 +106,7 @@ export interface FoodRef {
   name: string;
 }
 
+/** One food of a plan's line; a partially swapped line has two, with the same index (original first). */
 export interface PlanLine {
   index: number;
   food: FoodRef;
@@ -98,9 +132,21 @@ export interface Change {
   gramsBefore: number;
   gramsAfter: number;
   swapped: boolean;
+  /** the line is shared between the original food (keptGrams) and the substitute */
+  partial?: boolean;
+  /** the original food's remaining grams in a partial swap */
+  keptGrams?: number;
+  rule?: RuleRef;
   approvedBy?: string;
+  /** the coach's note for an approved swap, else the rule's note for the cook */
   note?: string;
   serves: ChangePurpose[];
+  reason: string;
+}
+
+/** A line held as written, and why. */
+export interface HeldLine {
+  line: number;
   reason: string;
 }
 
@@ -135,6 +181,7 @@ export interface OptimalRewrite {
   before: Plan;
   after: Plan;
   changes: Change[];
+  held?: HeldLine[];
   solver: SolverInfo;
 }
 
@@ -147,6 +194,7 @@ export interface InfeasibleRewrite {
   bestReachable: Nutrients;
   binding: TargetName[];
   suggestions: Suggestion[];
+  held?: HeldLine[];
   solver: SolverInfo;
 }
 

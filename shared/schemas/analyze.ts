@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { Nutrients } from '../nutrition';
+import type { DishType, LineFunction } from '../culinary/types';
 
 export const MAX_LINES = 100;
 export const MAX_TEXT_CHARS = 20_000;
@@ -64,10 +65,14 @@ export interface AnalyzedLine {
   checkMatch: boolean;
   /** a word of the line that changes the food ("turkey", "low-fat") and that no catalogue food has */
   missingModifier: string | null;
+  /** what the line does in the dish, inferred from the whole recipe */
+  role?: LineFunction;
 }
 
 export interface AnalyzeResponse {
   servings: number;
+  /** the kind of dish, inferred from every line */
+  dishType?: DishType;
   lines: AnalyzedLine[];
   totals: Nutrients;
   perServing: Nutrients;

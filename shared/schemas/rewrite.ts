@@ -1,8 +1,11 @@
 import { z } from 'zod';
 import type { Nutrients } from '../nutrition';
-import type { Change, Plan, PlanLine, SolverInfo, Suggestion, TargetName } from '../rewrite/types';
+import type { DishType } from '../culinary/types';
+import type { Change, HeldLine, Plan, PlanLine, SolverInfo, Suggestion, TargetName } from '../rewrite/types';
 import type { FoodSummary } from './analyze';
 import { DIET_FLAGS } from '../food';
+import { ALLERGENS } from '../allergens';
+import { LINE_FUNCTIONS, type LineFunction } from '../culinary/types';
 import { lineInputSchema, MAX_LINES, MAX_TEXT_CHARS, servingsSchema } from './analyze';
 
 const positive = (field: string, max: number) =>
@@ -46,6 +49,16 @@ export const rewriteRequestSchema = z
     diet: z.array(z.enum(DIET_FLAGS, { message: `diet holds ${DIET_FLAGS.join(', ')}.` })).max(DIET_FLAGS.length).optional(),
     objective: z.enum(OBJECTIVES, { message: `objective is one of ${OBJECTIVES.join(', ')}.` }).optional(),
     candidatesPerLine: z.number().int().min(1).max(20).optional(),
+    /** the cook's choice of what a line does, by line index ("3": "vegetable" unlocks an aromatic) */
+    lineRoles: z
+      .record(
+        z.string().regex(/^\d+$/, { message: 'lineRoles is keyed by line index (0, 1, 2…).' }),
+        z.enum(LINE_FUNCTIONS as [LineFunction, ...LineFunction[]], { message: `lineRoles values are one of ${LINE_FUNCTIONS.join(', ')}.` }),
+        { message: 'lineRoles maps line indexes to line functions.' },
+      )
+      .optional(),
+    /** major allergens a swap may bring into the recipe */
+    allowAllergens: z.array(z.enum(ALLERGENS, { message: `allowAllergens holds ${ALLERGENS.join(', ')}.` })).max(ALLERGENS.length).optional(),
   })
   .refine((v) => v.text !== undefined || v.lines !== undefined, { message: 'Send the recipe as text or as lines.', path: ['text'] });
 export type RewriteRequest = z.infer<typeof rewriteRequestSchema>;
@@ -72,8 +85,12 @@ export interface RewriteResponse {
   before: RewritePlan;
   after: RewritePlan;
   changes: RewriteChange[];
+  /** lines kept exactly as written because of what they do in the dish */
+  held?: HeldLine[];
   skippedLines: SkippedLine[];
   solver: SolverInfo;
+  /** the kind of dish the recipe was read as */
+  dishType?: DishType;
 }
 
 /** The details of a 422 `infeasible`: how close the dish can get, and what would make it reachable. */
@@ -83,6 +100,7 @@ export interface InfeasibleDetails {
   suggestions: Suggestion[];
   before: RewritePlan;
   closest: RewritePlan;
+  held: HeldLine[];
   skippedLines: SkippedLine[];
   solver?: SolverInfo;
 }

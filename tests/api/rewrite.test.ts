@@ -63,8 +63,10 @@ describe('POST /api/rewrite', () => {
 
   it('keeps locked lines exactly as written', async () => {
     const before = await analyze(LASAGNA, 8);
-    const targets = { proteinMinG: before.perServing.proteinG * 1.2, kcalMax: before.perServing.kcal * 0.85 };
+    // With the beef and the mozzarella locked, the other lines' rules reach +10 % protein and −10 % kcal.
+    const targets = { proteinMinG: before.perServing.proteinG * 1.1, kcalMax: before.perServing.kcal * 0.9 };
     const res = await request(t.app).post('/api/rewrite').send({ text: LASAGNA, servings: 8, targets, lockedLines: [1, 2] }).expect(200);
+    expect(res.body.changes.length).toBeGreaterThan(0);
     for (const i of [1, 2]) {
       const planned = res.body.after.lines.find((l: { index: number }) => l.index === i);
       expect(planned.food.id).toBe(before.lines[i].food.id);
@@ -98,6 +100,38 @@ describe('POST /api/rewrite', () => {
     expect(badLock.body.error.message).toMatch(/lockedLines/);
     const negative = await request(t.app).post('/api/rewrite').send({ text: LASAGNA, servings: 8, targets: { proteinMinG: -1, kcalMax: 500 } }).expect(400);
     expect(negative.body.error.message).toMatch(/targets\.proteinMinG/);
+  });
+
+  it('answers bad lineRoles or allowAllergens with 400 naming the field', async () => {
+    const targets = { proteinMinG: 20, kcalMax: 500 };
+    const badRole = await request(t.app).post('/api/rewrite').send({ text: LASAGNA, servings: 8, targets, lineRoles: { 1: 'garnish-ish' } }).expect(400);
+    expect(badRole.body.error.message).toMatch(/lineRoles/);
+    const badKey = await request(t.app).post('/api/rewrite').send({ text: LASAGNA, servings: 8, targets, lineRoles: { first: 'vegetable' } }).expect(400);
+    expect(badKey.body.error.message).toMatch(/lineRoles/);
+    const outOfRange = await request(t.app).post('/api/rewrite').send({ text: LASAGNA, servings: 8, targets, lineRoles: { 40: 'vegetable' } }).expect(400);
+    expect(outOfRange.body.error.details.fieldErrors.lineRoles).toBeDefined();
+    const badAllergen = await request(t.app).post('/api/rewrite').send({ text: LASAGNA, servings: 8, targets, allowAllergens: ['gluten'] }).expect(400);
+    expect(badAllergen.body.error.message).toMatch(/allowAllergens/);
+  });
+
+  it("analyze reads the dish type and each line's function; the rewrite keeps held lines as written", async () => {
+    const text = `${LASAGNA}\n1 teaspoon salt\n2 cloves garlic, minced`;
+    const before = await analyze(text, 8);
+    expect(before.dishType).toBe('assembled-bake');
+    const roles = before.lines.map((l: { role: string }) => l.role);
+    expect(roles.slice(0, 8)).toEqual(['starch', 'main-protein', 'melting-cheese', 'fresh-cheese', 'sauce', 'hard-cheese', 'binder', 'cooking-fat']);
+    expect(roles.slice(8)).toEqual(['salt', 'aromatic']);
+    const targets = { proteinMinG: before.perServing.proteinG * 1.1, kcalMax: before.perServing.kcal * 0.9 };
+    for (const objective of ['closest', 'max-protein', 'min-kcal']) {
+      const res = await request(t.app).post('/api/rewrite').send({ text, servings: 8, targets, objective, lineRoles: { 4: 'sauce' } }).expect(200);
+      expect(res.body.dishType).toBe('assembled-bake');
+      for (const i of [8, 9]) {
+        const planned = res.body.after.lines.filter((l: { index: number }) => l.index === i);
+        expect(planned).toHaveLength(1);
+        expect(planned[0].food.id).toBe(before.lines[i].food.id);
+        expect(planned[0].grams).toBeCloseTo(before.lines[i].grams, 6);
+      }
+    }
   });
 
   it('answers a recipe with nothing to rewrite with 422', async () => {

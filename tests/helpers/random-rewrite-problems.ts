@@ -1,4 +1,5 @@
 import { divideNutrients, nutrientsForGrams, sumNutrients, type Nutrients } from '../../shared/nutrition';
+import { massRatioOf } from '../../shared/rewrite/line-slots';
 import type { Candidate, RewriteLine, RewriteObjective, RewriteOptions, Targets } from '../../shared/rewrite/types';
 
 /** Small seeded generator (mulberry32), so every run builds the same problems. */
@@ -62,15 +63,30 @@ function variantOf(rng: Rng, base: Nutrients): Nutrients {
 
 export interface RandomRecipeShape {
   lines: number;
-  /** candidates per line besides the original */
-  candidates: number;
+  /** candidates per line besides the original: a number, or [fewest, most] drawn per line */
+  candidates: number | [number, number];
   /** share of lines that are locked */
   lockedShare?: number;
   /** share of candidates a coach approved */
   approvedShare?: number;
   /** add one line with no grams ("salt to taste") */
   withEmptyLine?: boolean;
+  /** share of substitutes whose rule gives a mass ratio other than 1 (as egg → whites does) */
+  massRatioShare?: number;
+  /** share of substitutes whose rule allows a partial swap (some only up to half or three quarters) */
+  partialShare?: number;
+  /** share of lines a rule lets move (less oil, more vegetables) */
+  keepScaleShare?: number;
+  /** share of lines held as written */
+  heldShare?: number;
 }
+
+const RATIOS = [0.5, 0.75, 1, 1, 1.32, 1.5] as const;
+const KEEP_SCALES: [number, number][] = [
+  [0.5, 1],
+  [1, 1.5],
+  [0.75, 1.25],
+];
 
 export function randomRecipe(rng: Rng, shape: RandomRecipeShape): RewriteLine[] {
   let nextFoodId = 1;
@@ -82,27 +98,41 @@ export function randomRecipe(rng: Rng, shape: RandomRecipeShape): RewriteLine[] 
     const per100g = syntheticNutrients(rng, kind);
     const original: Candidate = { foodId: nextFoodId++, name: `food ${i} as written`, densityGPerMl: density, per100g, original: true };
     const candidates: Candidate[] = [original];
-    for (let k = 0; k < shape.candidates; k++) {
+    const count = typeof shape.candidates === 'number' ? shape.candidates : shape.candidates[0] + Math.floor(rng() * (shape.candidates[1] - shape.candidates[0] + 1));
+    for (let k = 0; k < count; k++) {
+      // Substitutes of like density are common (lean for fatty meat); they also give pruning work.
       const c: Candidate = {
         foodId: nextFoodId++,
         name: `food ${i} option ${k + 1}`,
-        densityGPerMl: density * between(rng, 0.7, 1.3),
+        densityGPerMl: rng() < 0.4 ? density : density * between(rng, 0.7, 1.3),
         per100g: variantOf(rng, per100g),
       };
+      const ratio = rng() < (shape.massRatioShare ?? 0) ? pick(rng, RATIOS) : undefined;
+      if (ratio !== undefined) c.massRatio = ratio;
+      if (rng() < (shape.partialShare ?? 0)) {
+        c.partial = true;
+        if (rng() < 0.5) c.maxShare = pick(rng, [0.5, 0.75]);
+      }
+      c.rule = { id: `rule-${i}-${k + 1}`, label: `${c.name} for ${original.name}, ${ratio ?? 1}:1 by weight`, why: 'invented test rule' };
       if (rng() < (shape.approvedShare ?? 0)) {
         c.approved = { by: 'Coach Wren', note: 'invented test note' };
-        if (rng() < 0.5) c.approved.volumeRatio = Number(between(rng, 0.8, 1.2).toFixed(2));
+        const own = rng();
+        if (own < 0.3) c.approved.volumeRatio = Number(between(rng, 0.8, 1.2).toFixed(2));
+        else if (own < 0.6) c.approved.massRatio = Number(between(rng, 0.8, 1.2).toFixed(2));
       }
       candidates.push(c);
     }
-    lines.push({
+    const line: RewriteLine = {
       index: i,
       foodId: original.foodId,
       grams: volumeMl * density,
       volumeMl,
       locked: rng() < (shape.lockedShare ?? 0),
       candidates,
-    });
+    };
+    if (rng() < (shape.keepScaleShare ?? 0)) line.keepScale = pick(rng, KEEP_SCALES);
+    else if (rng() < (shape.heldShare ?? 0)) line.heldReason = 'invented: kept as written';
+    lines.push(line);
   }
   if (shape.withEmptyLine) {
     const salt: Candidate = {
@@ -134,11 +164,11 @@ export interface RandomProblem {
 
 /**
  * Targets a known plan meets: up to `swaps` lines swapped to their leanest-per-mL candidate at the
- * band centre, the targets set just around that plan's own per-serving values. The rewrite can
+ * rule's amount (a partial swap at its largest share), the targets set just around that plan's own per-serving values. The rewrite can
  * always reach them, and needs about that many swaps.
  */
 export function plantedTargets(rng: Rng, lines: RewriteLine[], servings: number, swaps: number): Targets {
-  const free = lines.filter((l) => !l.locked && l.grams > 0 && l.candidates.length > 1);
+  const free = lines.filter((l) => !l.locked && !l.heldReason && l.grams > 0 && l.candidates.length > 1);
   const order = free.map((l) => ({ l, k: rng() })).sort((a, b) => a.k - b.k).slice(0, swaps);
   const planned = new Map<RewriteLine, Candidate>();
   for (const { l } of order) {
@@ -149,8 +179,12 @@ export function plantedTargets(rng: Rng, lines: RewriteLine[], servings: number,
   const totals = sumNutrients(
     lines.map((l) => {
       const c = planned.get(l);
-      if (!c) return nutrientsForGrams(l.candidates.find((o) => o.original)!.per100g, Math.max(0, l.grams));
-      return nutrientsForGrams(c.per100g, l.volumeMl * (c.approved?.volumeRatio ?? 1) * c.densityGPerMl);
+      const original = l.candidates.find((o) => o.original)!;
+      if (!c) return nutrientsForGrams(original.per100g, Math.max(0, l.grams));
+      // At the rule's amount; a partial swap at its largest share.
+      const share = c.maxShare ?? 1;
+      const swapped = nutrientsForGrams(c.per100g, massRatioOf(c, l.grams / l.volumeMl) * share * l.grams);
+      return sumNutrients([swapped, nutrientsForGrams(original.per100g, (1 - share) * l.grams)]);
     }),
   );
   const plan = divideNutrients(totals, servings);
@@ -166,6 +200,10 @@ export function randomProblem(seed: number, shape?: Partial<RandomRecipeShape>):
     lockedShare: shape?.lockedShare ?? 0.15,
     approvedShare: shape?.approvedShare ?? 0.2,
     withEmptyLine: shape?.withEmptyLine ?? rng() < 0.3,
+    massRatioShare: shape?.massRatioShare ?? 0.3,
+    partialShare: shape?.partialShare ?? 0.3,
+    keepScaleShare: shape?.keepScaleShare ?? 0.2,
+    heldShare: shape?.heldShare ?? 0.1,
   });
   const servings = pick(rng, [1, 2, 4, 6, 8]);
   const written = perServingAsWritten(lines, servings);
@@ -217,4 +255,17 @@ export async function solveWithHighs(lpText: string): Promise<HighsOutcome> {
 /** Relative difference scaled by max(1, |b|): objectives near 0 compare absolutely. */
 export function relativeGap(a: number, b: number): number {
   return Math.abs(a - b) / Math.max(1, Math.abs(b));
+}
+
+/**
+ * Whether an outside solver's optimum on the exported LP text agrees with solver.objectiveValue:
+ * within relative 1e-6, or within 1e-8 of the objective's constant term. That constant (the
+ * elastic repair's price × the written recipe's shortfall) can be 10³–10⁶ times the plan's value
+ * and cancels against the repair columns, whose values each solver holds only to its feasibility
+ * tolerance (seen: up to 3e-9 of the constant), so the two optima differ by that much.
+ */
+export function objectiveAgrees(outside: number, ours: number, lpText: string): boolean {
+  const constant = /([+-]) ([0-9.e+-]+)\nSubject To/.exec(lpText);
+  const magnitude = constant ? Math.abs(Number(constant[2])) : 0;
+  return relativeGap(outside, ours) <= 1e-6 || Math.abs(outside - ours) <= 1e-8 * magnitude;
 }

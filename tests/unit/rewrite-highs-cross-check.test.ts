@@ -6,7 +6,8 @@ import { toLpFormat } from '../../shared/rewrite/lp-format';
 import { findViolations, objectiveValue } from '../../shared/rewrite/lp-model';
 import { solveLp } from '../../shared/rewrite/solve-lp';
 import { SolveLog } from '../../shared/rewrite/solve-log';
-import { HIGHS_OPTIONS, loadHighs, randomProblem, relativeGap, solveWithHighs, type RandomProblem } from '../helpers/random-rewrite-problems';
+import { solveRewrite } from '../../shared/rewrite/solve-rewrite';
+import { HIGHS_OPTIONS, loadHighs, objectiveAgrees, randomProblem, relativeGap, solveWithHighs, type RandomProblem } from '../helpers/random-rewrite-problems';
 
 // Outside check: the HiGHS solver (npm `highs`, the WebAssembly build of HiGHS, University of
 // Edinburgh) reading the CPLEX LP text that toLpFormat writes from the model objects.
@@ -105,6 +106,22 @@ describe('rewrite models against HiGHS', () => {
     }
     expect(mismatches).toEqual([]);
     expect(checked).toBeGreaterThanOrEqual(10);
+  });
+
+  it('HiGHS on the exported LP text (?explain=1) reaches exactly solver.objectiveValue, objective constant included', SLOW, async () => {
+    const mismatches: string[] = [];
+    let checked = 0;
+    for (const p of problems.slice(0, 30)) {
+      const result = solveRewrite(p.lines, p.targets, p.servings, { ...p.options, explain: true, timeoutMs: BUDGET_MS });
+      if (!result.solver.provenOptimal) continue;
+      checked += 1;
+      const highs = await solveWithHighs(result.solver.model!);
+      if (!highs.feasible || !objectiveAgrees(highs.objective, result.solver.objectiveValue, result.solver.model!)) {
+        mismatches.push(`seed ${p.seed}: objectiveValue ${result.solver.objectiveValue}, HiGHS ${highs.status} ${highs.objective}`);
+      }
+    }
+    expect(mismatches).toEqual([]);
+    expect(checked).toBeGreaterThanOrEqual(25);
   });
 
   it('keep the optimum when dominated candidates are pruned (HiGHS on the unpruned model)', SLOW, async () => {

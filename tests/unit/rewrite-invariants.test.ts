@@ -2,7 +2,10 @@ import { describe, expect, it } from 'vitest';
 import { NUTRIENT_KEYS, type Nutrients } from '../../shared/nutrition';
 import { applySuggestion, solveRewrite } from '../../shared/rewrite/solve-rewrite';
 import { activeTargets } from '../../shared/rewrite/targets';
-import type { OptimalRewrite, Plan, RewriteLine, RewriteResult, Targets } from '../../shared/rewrite/types';
+
+/** The share a cook splits a line by (what the model offers a partial swap below the whole line). */
+const SHARES = [1 / 2];
+import type { Candidate, OptimalRewrite, Plan, RewriteLine, RewriteResult, Targets } from '../../shared/rewrite/types';
 import { randomProblem, type RandomProblem } from '../helpers/random-rewrite-problems';
 
 const TOL = 1e-6;
@@ -19,6 +22,13 @@ function meets(perServing: Nutrients, targets: Targets): boolean {
   );
 }
 
+/** The rule's grams per gram of the written food, as the types document it (coach's ratio first, else the rule's, else 1). */
+function expectedRatio(line: RewriteLine, c: Candidate): number {
+  if (c.approved?.massRatio) return c.approved.massRatio;
+  if (c.approved?.volumeRatio) return (c.approved.volumeRatio * c.densityGPerMl) / (line.grams / line.volumeMl);
+  return c.massRatio ?? 1;
+}
+
 /** Every property an optimal rewrite must have, checked from the inputs alone. */
 function checkOptimal(p: RandomProblem, r: OptimalRewrite): void {
   const t = (p.options.volumeTolerancePct ?? 10) / 100;
@@ -27,28 +37,62 @@ function checkOptimal(p: RandomProblem, r: OptimalRewrite): void {
   expect(meets(perServing, p.targets)).toBe(true);
   const writtenVolume = p.lines.reduce((s, l) => s + Math.max(0, l.volumeMl), 0);
   expect(within(r.after.volumeMl, (1 - t) * writtenVolume, (1 + t) * writtenVolume)).toBe(true);
+  expect(r.after.lines.map((l) => l.index)).toEqual([...r.after.lines.map((l) => l.index)].sort((x, y) => x - y));
   let swaps = 0;
-  p.lines.forEach((line, i) => {
-    const planned = r.after.lines[i];
-    const food = line.candidates.find((c) => c.foodId === planned.food.foodId);
-    expect(food, `line ${i}: food from its candidate set`).toBeDefined();
-    // Nutrients are the food's values per 100 g × grams.
-    for (const k of NUTRIENT_KEYS) expect(planned.nutrients[k]).toBeCloseTo((food!.per100g[k] * planned.grams) / 100, 9);
-    const fixed = line.locked || !(line.grams > 0) || !(line.volumeMl > 0);
-    if (fixed) {
-      expect(planned.food.foodId).toBe(original(line).foodId);
-      expect(planned.grams).toBe(Math.max(0, line.grams));
-      return;
+  for (const line of p.lines) {
+    const parts = r.after.lines.filter((l) => l.index === line.index);
+    const orig = original(line);
+    for (const planned of parts) {
+      const food = line.candidates.find((c) => c.foodId === planned.food.foodId);
+      expect(food, `line ${line.index}: food from its candidate set`).toBeDefined();
+      // Nutrients are the food's values per 100 g × grams.
+      for (const k of NUTRIENT_KEYS) expect(planned.nutrients[k]).toBeCloseTo((food!.per100g[k] * planned.grams) / 100, 9);
     }
-    if (!food!.original) swaps += 1;
-    const centre = food!.original ? line.volumeMl : line.volumeMl * (food!.approved?.volumeRatio ?? 1);
-    const volume = food!.original ? (planned.grams * line.volumeMl) / line.grams : planned.grams / food!.densityGPerMl;
-    expect(within(volume, (1 - a) * centre, (1 + a) * centre), `line ${i}: volume within its band`).toBe(true);
-    expect(planned.volumeMl).toBeCloseTo(volume, 6);
-  });
+    const fixed = line.locked || Boolean(line.heldReason) || !(line.grams > 0) || !(line.volumeMl > 0);
+    if (fixed) {
+      expect(parts).toHaveLength(1);
+      expect(parts[0].food.foodId).toBe(orig.foodId);
+      expect(parts[0].grams).toBe(Math.max(0, line.grams));
+      continue;
+    }
+    expect(parts.length).toBeGreaterThanOrEqual(1);
+    expect(parts.length).toBeLessThanOrEqual(2);
+    const kept = parts.find((l) => l.food.foodId === orig.foodId);
+    const sub = parts.find((l) => l.food.foodId !== orig.foodId);
+    if (!sub) {
+      // Unswapped: exactly the written grams, or within the band a rule allows; never filler.
+      const [lo, hi] = line.keepScale ?? [1, 1];
+      expect(within(kept!.grams, lo * line.grams, hi * line.grams), `line ${line.index}: ${kept!.grams} of ${line.grams} g`).toBe(true);
+      expect(kept!.volumeMl).toBeCloseTo((kept!.grams * line.volumeMl) / line.grams, 6);
+      continue;
+    }
+    swaps += 1;
+    const food = line.candidates.find((c) => c.foodId === sub.food.foodId)!;
+    const replaced = line.grams - (kept?.grams ?? 0);
+    const maxShare = food.maxShare ?? 1;
+    if (kept) {
+      expect(parts[0]).toBe(kept);
+      expect(food.partial || maxShare < 1, `line ${line.index}: only a partial rule shares a line`).toBe(true);
+      // A cook's share of the line: half, or the rule's whole maxShare when that is less, never more.
+      const share = replaced / line.grams;
+      expect(SHARES.some((s) => Math.abs(s - share) < 1e-9) || Math.abs(share - maxShare) < 1e-9, `line ${line.index}: share ${share}`).toBe(true);
+      expect(share).toBeLessThanOrEqual(maxShare + 1e-9);
+    } else expect(maxShare).toBe(1);
+    const ratio = expectedRatio(line, food);
+    expect(within(sub.grams, (1 - a) * ratio * replaced, (1 + a) * ratio * replaced), `line ${line.index}: band`).toBe(true);
+    expect(sub.volumeMl).toBeCloseTo(sub.grams / food.densityGPerMl, 6);
+    const change = r.changes.find((c) => c.line === line.index)!;
+    expect(change.swapped).toBe(true);
+    expect(change.partial ?? false).toBe(Boolean(kept));
+    if (kept) expect(change.keptGrams).toBeCloseTo(kept.grams, 9);
+    expect(change.rule).toEqual(food.rule);
+    if (!food.approved) expect(change.reason).toContain(food.rule!.label);
+  }
   if (p.options.maxSwaps !== undefined) expect(swaps).toBeLessThanOrEqual(p.options.maxSwaps);
   expect(r.changes.filter((c) => c.swapped)).toHaveLength(swaps);
   for (const change of r.changes) expect(change.reason.length).toBeGreaterThan(10);
+  const held = p.lines.filter((l) => l.heldReason).map((l) => ({ line: l.index, reason: l.heldReason }));
+  expect(r.held ?? []).toEqual(held);
 }
 
 function sumPerServing(plan: Plan, servings: number): Nutrients {
@@ -68,12 +112,22 @@ describe('invariants of every rewrite answer (40 generated problems)', () => {
     expect(results.size - optimal).toBeGreaterThanOrEqual(5);
   });
 
+  it('exercises what the rules bring: partial swaps, mass ratios other than 1, amount bands, held lines', () => {
+    const optimal = [...results].filter((e): e is [RandomProblem, OptimalRewrite] => e[1].status === 'optimal');
+    const changes = optimal.flatMap(([, r]) => r.changes);
+    expect(changes.filter((c) => c.partial).length).toBeGreaterThan(0);
+    expect(changes.filter((c) => !c.swapped).length).toBeGreaterThan(0);
+    expect(changes.filter((c) => c.swapped && Math.abs(c.gramsAfter / c.gramsBefore - 1) > 0.3).length).toBeGreaterThan(0);
+    expect(optimal.filter(([, r]) => r.held?.length).length).toBeGreaterThan(0);
+  });
+
   it('optimal: targets met, volumes within tolerance, swaps within the limit, locked lines kept, foods from the candidates', () => {
     for (const [p, r] of results) if (r.status === 'optimal') checkOptimal(p, r);
   });
 
   it('before is the recipe as written', () => {
     for (const [p, r] of results) {
+      expect(r.before.lines).toHaveLength(p.lines.length);
       r.before.lines.forEach((l, i) => {
         expect(l.food.foodId).toBe(original(p.lines[i]).foodId);
         expect(l.grams).toBe(Math.max(0, p.lines[i].grams));

@@ -8,7 +8,7 @@ const withFat = activeTargets({ proteinMinG: 30, kcalMax: 500, fatMaxG: 20 }).ma
 
 function food(kcal: number, proteinG: number, fatG = 0, extra: Partial<PrunableCandidate> = {}): PrunableCandidate {
   const per100g: Nutrients = { kcal, proteinG, fatG, satFatG: 0, carbsG: 0, fiberG: 0, sugarG: 0, sodiumMg: 0 };
-  return { per100g, densityGPerMl: 1, centreMl: 200, cost: 2, original: false, ...extra };
+  return { per100g, shape: 'swap|1|1|200', cost: 2, original: false, ...extra };
 }
 
 describe('dominance pruning of candidates', () => {
@@ -18,11 +18,13 @@ describe('dominance pruning of candidates', () => {
     expect(keptCandidates([original, food(150, 19), food(180, 18)], rows)).toEqual([0, 1]);
   });
 
-  it('compares per mL, not per 100 g: a denser food carries more of everything per mL', () => {
-    const light = food(100, 10, 0, { densityGPerMl: 0.5 });
-    const dense = food(100, 10, 0, { densityGPerMl: 1 });
-    // Per mL the dense food has twice the protein and twice the kcal: neither is better.
-    expect(keptCandidates([original, light, dense], rows)).toEqual([0, 1, 2]);
+  it('compares only candidates of the same shape: density, ratio, band and share decide which plans each allows', () => {
+    const denser = food(100, 10, 0, { shape: 'swap|1.2|1|200' });
+    const partial = food(90, 12, 0, { shape: 'partial|1|1|200' });
+    const same = food(120, 9, 0);
+    // Better per gram, but it allows other volumes or other amounts: neither can stand in for the other.
+    expect(keptCandidates([original, same, denser, partial], rows)).toEqual([0, 1, 2, 3]);
+    expect(keptCandidates([original, same, food(100, 10)], rows)).toEqual([0, 2]);
   });
 
   it('only counts the nutrients that have targets', () => {
@@ -40,7 +42,7 @@ describe('dominance pruning of candidates', () => {
   it('keeps a candidate that is cheaper in the closest objective or centred elsewhere', () => {
     const unapproved = food(100, 25);
     const approved = food(120, 20, 0, { cost: 1 });
-    const otherCentre = food(130, 19, 0, { centreMl: 160 });
+    const otherCentre = food(130, 19, 0, { shape: 'swap|1|0.75|150' });
     expect(keptCandidates([original, unapproved, approved, otherCentre], rows)).toEqual([0, 1, 2, 3]);
     // The approved swap itself beats a worse unapproved one.
     expect(keptCandidates([original, approved, food(130, 19)], rows)).toEqual([0, 1]);

@@ -16,6 +16,7 @@
  */
 import { createContext, useContext } from 'react';
 import type { AnalyzeResponse, LineInput } from '../../../shared/schemas/analyze';
+import type { LineFunction } from '../../../shared/culinary/types';
 
 export interface CurrentAnalysis {
   /** the request lines the analysis answered, in order */
@@ -24,6 +25,8 @@ export interface CurrentAnalysis {
   analysis: AnalyzeResponse;
   /** the cook has changed something and a newer analysis is on its way */
   updating: boolean;
+  /** what the cook says lines do, by index into `lines`, over Hearthswap's reading */
+  lineRoles: Partial<Record<number, LineFunction>>;
 }
 
 export const CurrentAnalysisContext = createContext<CurrentAnalysis | null>(null);

@@ -1,9 +1,12 @@
 /** The recipe on the Kitchen page as lines the cook can pin, and the pure edits made to them. */
 import type { AnalyzedLine, LineInput } from '../../../shared/schemas/analyze';
+import type { LineFunction } from '../../../shared/culinary/types';
 
 /** A line of the recipe with a key that stays with it while lines are added and removed. */
 export interface KitchenLine extends LineInput {
   key: string;
+  /** what the cook says the line does, over Hearthswap's reading (sent with a rewrite, not an analysis) */
+  role?: LineFunction;
 }
 
 let keyCounter = 0;
@@ -41,6 +44,22 @@ export function withFood(lines: readonly KitchenLine[], key: string, foodId: num
 /** Pin a weight to a line, or (null) weigh it from the line's own amount again. */
 export function withGrams(lines: readonly KitchenLine[], key: string, grams: number | null): KitchenLine[] {
   return edit(lines, key, ({ grams: _drop, ...line }) => (grams === null ? line : { ...line, grams }));
+}
+
+/** Set what a line does in the dish, or (null) go back to Hearthswap's reading. */
+export function withRole(lines: readonly KitchenLine[], key: string, role: LineFunction | null): KitchenLine[] {
+  return edit(lines, key, ({ role: _drop, ...line }) => (role === null ? line : { ...line, role }));
+}
+
+/** The cook's line functions by position in the answered request, for the rewrite's `lineRoles`. */
+export function lineRolesFor(lines: readonly KitchenLine[], answeredKeys: readonly string[]): Partial<Record<number, LineFunction>> {
+  const byKey = new Map(lines.map((l) => [l.key, l.role]));
+  const out: Partial<Record<number, LineFunction>> = {};
+  answeredKeys.forEach((key, i) => {
+    const role = byKey.get(key);
+    if (role) out[i] = role;
+  });
+  return out;
 }
 
 export function withoutLine(lines: readonly KitchenLine[], key: string): KitchenLine[] {

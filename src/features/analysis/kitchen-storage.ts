@@ -1,6 +1,7 @@
 /** The Kitchen page's recipe and analysis in sessionStorage, so a reload of the tab keeps them. */
 import type { AnalyzeResponse, LineInput } from '../../../shared/schemas/analyze';
 import type { KitchenLine } from './kitchen-lines';
+import { LINE_FUNCTIONS, type LineFunction } from '../../../shared/culinary/types';
 
 export const KITCHEN_STORAGE_KEY = 'hearthswap:kitchen';
 const VERSION = 1;
@@ -50,7 +51,8 @@ function isLineInput(v: unknown): v is LineInput {
 }
 
 function isKitchenLine(v: unknown): v is KitchenLine {
-  return isLineInput(v) && typeof (v as Record<string, unknown>).key === 'string';
+  const role = (v as Record<string, unknown>)?.role;
+  return isLineInput(v) && typeof (v as Record<string, unknown>).key === 'string' && (role === undefined || LINE_FUNCTIONS.includes(role as LineFunction));
 }
 
 // The analysis came from our own server; checking its outline is enough to catch a stale or foreign entry.

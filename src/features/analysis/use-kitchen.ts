@@ -2,7 +2,8 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { AnalyzedLine, AnalyzeRequest, AnalyzeResponse, FoodSummary, LineInput } from '../../../shared/schemas/analyze';
 import { useAnalyzeRecipe } from './api/analyze-recipe';
 import type { CurrentAnalysis } from './current-analysis';
-import { lineInputs, linesFromAnalysis, newLineKey, requestSignature, withFood, withGrams, withoutLine, type KitchenLine } from './kitchen-lines';
+import type { LineFunction } from '../../../shared/culinary/types';
+import { lineInputs, lineRolesFor, linesFromAnalysis, newLineKey, requestSignature, withFood, withGrams, withoutLine, withRole, type KitchenLine } from './kitchen-lines';
 import { emptyKitchen, loadKitchen, saveKitchen, type KitchenSnapshot, type KitchenSource } from './kitchen-storage';
 
 const storage = (): Storage | undefined => (typeof window === 'undefined' ? undefined : window.sessionStorage);
@@ -31,6 +32,8 @@ export interface Kitchen {
   setServings: (servings: number) => void;
   chooseFood: (key: string, food: FoodSummary | null) => void;
   setGrams: (key: string, grams: number | null) => void;
+  /** what the line does in the dish, or null for Hearthswap's reading; no new analysis is needed */
+  setRole: (key: string, role: LineFunction | null) => void;
   addLine: (line: LineInput) => void;
   removeLine: (key: string) => void;
   /** puts a line removed a moment ago back where it was */
@@ -144,8 +147,11 @@ export function useKitchen(): Kitchen {
   );
 
   const current = useMemo<CurrentAnalysis | null>(
-    () => (analysis && answered && lines.length > 0 ? { lines: answered.lines, servings: answered.servings, analysis, updating: stale } : null),
-    [analysis, answered, lines.length, stale],
+    () =>
+      analysis && answered && lines.length > 0
+        ? { lines: answered.lines, servings: answered.servings, analysis, updating: stale, lineRoles: lineRolesFor(lines, answered.keys) }
+        : null,
+    [analysis, answered, lines, stale],
   );
 
   const analysing = mutation.isPending;
@@ -166,6 +172,7 @@ export function useKitchen(): Kitchen {
     setServings: (n) => editAndAsk((s) => ({ ...s, servings: n })),
     chooseFood: (key, food) => editAndAsk((s) => ({ ...s, lines: withFood(s.lines, key, food ? food.id : null) })),
     setGrams: (key, grams) => editAndAsk((s) => ({ ...s, lines: withGrams(s.lines, key, grams) })),
+    setRole: (key, role) => update((s) => ({ ...s, lines: withRole(s.lines, key, role) })),
     addLine: (line) => editAndAsk((s) => ({ ...s, lines: [...s.lines, { ...line, key: newLineKey() }] })),
     removeLine: (key) => {
       const index = snapshotRef.current.lines.findIndex((l) => l.key === key);

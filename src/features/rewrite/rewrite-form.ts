@@ -8,6 +8,7 @@ import type { Nutrients } from '../../../shared/nutrition';
 import type { LineInput } from '../../../shared/schemas/analyze';
 import { OBJECTIVES, targetsSchema, type RewriteRequest, type TargetsInput } from '../../../shared/schemas/rewrite';
 import type { RewriteObjective, Suggestion, TargetName } from '../../../shared/rewrite/types';
+import type { LineFunction } from '../../../shared/culinary/types';
 
 /** More protein and fewer calories than the dish as written: the starting point of a rewrite. */
 export const DEFAULT_PROTEIN_GAIN = 0.3;
@@ -159,7 +160,10 @@ export function requestLines(lines: LineInput[]): LineInput[] {
 }
 
 /** The request for the recipe's lines (with the cook's pins) and the form's values. */
-export function rewriteRequestFor(recipe: { lines: LineInput[]; servings: number }, values: RewriteFormValues): RewriteRequest {
+export function rewriteRequestFor(
+  recipe: { lines: LineInput[]; servings: number; lineRoles?: Partial<Record<number, LineFunction>> },
+  values: RewriteFormValues,
+): RewriteRequest {
   const lockedLines = [...new Set(values.lockedLines)].filter((i) => i < recipe.lines.length).sort((a, b) => a - b);
   const request: RewriteRequest = {
     lines: requestLines(recipe.lines),
@@ -172,6 +176,8 @@ export function rewriteRequestFor(recipe: { lines: LineInput[]; servings: number
   if (lockedLines.length > 0) request.lockedLines = lockedLines;
   if (values.excludedFoods.length > 0) request.excludedFoodIds = [...new Set(values.excludedFoods.map((f) => f.id))];
   if (values.diet.length > 0) request.diet = [...values.diet] as DietFlag[];
+  const lineRoles = Object.entries(recipe.lineRoles ?? {}).filter(([i, role]) => role !== undefined && Number(i) < recipe.lines.length);
+  if (lineRoles.length > 0) request.lineRoles = Object.fromEntries(lineRoles) as Record<string, LineFunction>;
   return request;
 }
 

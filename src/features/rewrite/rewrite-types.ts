@@ -3,7 +3,7 @@
  * server change breaks the client's typecheck; here only the reading of a 422 `infeasible`.
  */
 import type { Nutrients } from '../../../shared/nutrition';
-import type { SolverInfo, Suggestion, TargetName } from '../../../shared/rewrite/types';
+import type { HeldLine, SolverInfo, Suggestion, TargetName } from '../../../shared/rewrite/types';
 import type { InfeasibleDetails, RewritePlan, SkippedLine } from '../../../shared/schemas/rewrite';
 import { isApiError } from '../../lib/api-client';
 
@@ -29,6 +29,7 @@ export function infeasibleDetailsOf(error: unknown): InfeasibleDetails | null {
     suggestions: d.suggestions as Suggestion[],
     before: d.before as RewritePlan,
     closest: d.closest as RewritePlan,
+    held: Array.isArray(d.held) ? (d.held as HeldLine[]) : [],
     skippedLines: Array.isArray(d.skippedLines) ? (d.skippedLines as SkippedLine[]) : [],
     solver: isObject(d.solver) ? (d.solver as unknown as SolverInfo) : undefined,
   };

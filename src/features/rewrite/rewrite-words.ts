@@ -80,3 +80,9 @@ export function volumeChangeText(beforeMl: number, afterMl: number): string {
 export function orderedChanges(changes: RewriteChange[]): RewriteChange[] {
   return [...changes].sort((a, b) => Number(b.swapped) - Number(a.swapped) || a.line - b.line);
 }
+
+/** A held line's reason as the cook reads it: "leavener: kept as written" → "Leavener, kept as written". */
+export function heldWords(reason: string): string {
+  const text = reason.trim().replace(/:\s*kept as written\.?$/i, ', kept as written');
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}

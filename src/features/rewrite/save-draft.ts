@@ -5,7 +5,7 @@ import { orderedChanges } from './rewrite-words';
 import type { RewriteAnswer } from './rewrite-types';
 
 export type WrittenLine = { input: string; foodId?: number; grams?: number };
-export type RewrittenLine = { food: { id: number; name: string }; grams: number } | { input: string };
+export type RewrittenLine = { food: { id: number; name: string }; grams: number; input?: string } | { input: string };
 
 export interface RewriteDraft {
   title: string;
@@ -30,9 +30,27 @@ export function originalLinesOf(request: RewriteRequest, answer: RewriteAnswer):
   });
 }
 
+function wholeGrams(g: number): string {
+  return g >= 10 ? String(Math.round(g)) : String(Math.round(g * 10) / 10);
+}
+
+/**
+ * The rewrite in recipe order. A line shared between its food and a substitute is saved as both
+ * parts, each with its grams and a text that says which line it shares ("227 g … — shares line 2
+ * with …"); a stable sort keeps the original part first.
+ */
 export function rewrittenLinesOf(answer: RewriteAnswer): RewrittenLine[] {
+  const parts = new Map<number, number>();
+  for (const l of answer.after.lines) parts.set(l.index, (parts.get(l.index) ?? 0) + 1);
   const rows: { index: number; line: RewrittenLine }[] = [
-    ...answer.after.lines.map((l) => ({ index: l.index, line: { food: { id: l.food.id, name: l.food.name }, grams: l.grams } })),
+    ...answer.after.lines.map((l) => {
+      const line: RewrittenLine = { food: { id: l.food.id, name: l.food.name }, grams: l.grams };
+      if ((parts.get(l.index) ?? 0) > 1) {
+        const other = answer.after.lines.find((o) => o.index === l.index && o !== l);
+        line.input = `${wholeGrams(l.grams)} g ${l.food.name} — shares line ${l.index + 1} with ${other?.food.name ?? 'a substitute'}`;
+      }
+      return { index: l.index, line };
+    }),
     ...answer.skippedLines.map((s) => ({ index: s.line, line: { input: s.input } })),
   ];
   return rows.sort((a, b) => a.index - b.index).map((r) => r.line);
@@ -41,7 +59,7 @@ export function rewrittenLinesOf(answer: RewriteAnswer): RewrittenLine[] {
 /** "Lighter rewrite: Beef, ground … → Ground turkey …; less pasta." */
 export function rewriteNote(answer: RewriteAnswer): string {
   const changes = orderedChanges(answer.changes);
-  const swaps = changes.filter((c) => c.swapped).map((c) => `${c.from.name} → ${c.to.name}`);
+  const swaps = changes.filter((c) => c.swapped).map((c) => `${c.from.name} → ${c.partial ? 'part ' : ''}${c.to.name}`);
   const amounts = changes.filter((c) => !c.swapped).length;
   const parts = [
     swaps.length > 0 ? swaps.join('; ') : 'No swaps',

@@ -10,6 +10,8 @@ import { formatParsedAmount } from '../amount-words';
 import type { KitchenLine } from '../kitchen-lines';
 import { LineFoodPicker } from './line-food-picker';
 import { LineGramsField } from './line-grams-field';
+import { LineRolePicker } from './line-role-picker';
+import type { LineFunction } from '../../../../shared/culinary/types';
 
 /** Under this the match is worth a second look (the matcher's own "weak match" mark is 0.6). */
 export const CHECK_MATCH_BELOW = 0.6;
@@ -29,6 +31,8 @@ export interface AnalysisLinesProps {
   totals: { grams: number; kcal: number; proteinG: number } | null;
   onChooseFood: (key: string, food: FoodSummary | null) => void;
   onSetGrams: (key: string, grams: number | null) => void;
+  /** what the line does in the dish, or null for Hearthswap's reading */
+  onSetRole?: (key: string, role: LineFunction | null) => void;
   onRemove: (key: string) => void;
   /** a catalogue search for one line, rendered by the page (features do not import each other) */
   renderFoodSearch?: (args: FoodSearchSlotArgs) => ReactNode;
@@ -57,6 +61,7 @@ function LineRow({
   unitSystem,
   onChooseFood,
   onSetGrams,
+  onSetRole,
   onRemove,
   renderFoodSearch,
   foodHref,
@@ -187,6 +192,14 @@ function LineRow({
                 </a>
               )}
             </span>
+            {analysed?.role && food && onSetRole && (
+              <LineRolePicker
+                label={`What line ${number} does in the dish`}
+                inferred={analysed.role}
+                chosen={line.role}
+                onChoose={(role) => onSetRole(line.key, role)}
+              />
+            )}
           </div>
         ) : (
           <span className="inline-flex items-center gap-2 text-ink-soft">

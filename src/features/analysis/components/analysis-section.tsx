@@ -10,6 +10,7 @@ import type { UnitSystem } from '../../../lib/user';
 import type { Kitchen } from '../use-kitchen';
 import { AnalysisLines, type FoodSearchSlotArgs } from './analysis-lines';
 import { DishPanels, ServingHeadline } from './dish-figures';
+import { DISH_TYPE_WORDS } from '../../../../shared/culinary/infer-dish';
 import { ServingsField } from './servings-field';
 
 export interface AnalysisSectionProps {
@@ -105,6 +106,13 @@ export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHre
           “{kitchen.removed.input}” is out of the recipe.
         </Alert>
       )}
+      {analysis?.dishType && (
+        <p className="text-sm text-ink-soft">
+          Hearthswap reads this as <strong className="text-ink">{DISH_TYPE_WORDS[analysis.dishType]}</strong> and says under each food what it
+          does in the dish. Salt, spices, leaveners, extracts, aromatics and cooking liquids are kept as written in a rewrite; pick another job
+          for a line to let the rewrite change it.
+        </p>
+      )}
 
       <AnalysisLines
         lines={lines}
@@ -114,6 +122,7 @@ export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHre
         totals={analysis ? { grams: analysis.totalGrams, kcal: analysis.totals.kcal, proteinG: analysis.totals.proteinG } : null}
         onChooseFood={kitchen.chooseFood}
         onSetGrams={kitchen.setGrams}
+        onSetRole={kitchen.setRole}
         onRemove={kitchen.removeLine}
         renderFoodSearch={renderFoodSearch}
         foodHref={foodHref}

@@ -30,11 +30,26 @@ function gramsChange(change: RewriteChange, unitSystem: UnitSystem) {
   );
 }
 
+function SharedLine({ change, unitSystem }: { change: RewriteChange; unitSystem: UnitSystem }) {
+  return (
+    <ul className="flex flex-col gap-1 tabular-nums" aria-label="The line, shared between two foods">
+      <li>
+        Keep <strong>{formatWeight(change.keptGrams ?? 0, unitSystem)}</strong> {change.from.name}{' '}
+        <span className="text-ink-soft">(of {formatWeight(change.gramsBefore, unitSystem)} as written)</span>
+      </li>
+      <li>
+        Add <strong className="text-herb-800">{formatWeight(change.gramsAfter, unitSystem)}</strong> {change.to.name}
+      </li>
+    </ul>
+  );
+}
+
 function ChangeItem({ change, lineInput, unitSystem, onExclude, excluding }: { change: RewriteChange; lineInput: string | undefined } & Omit<ChangeListProps, 'changes' | 'lineInputs'>) {
+  const cautions = change.rule?.cautions ?? [];
   return (
     <li className="flex flex-col gap-2 rounded-field border border-line bg-surface p-4">
       <div className="flex flex-wrap items-center gap-2">
-        <Badge tone={change.swapped ? 'ember' : 'neutral'}>{change.swapped ? 'Swap' : 'Amount'}</Badge>
+        <Badge tone={change.swapped ? 'ember' : 'neutral'}>{change.partial ? 'Part swap' : change.swapped ? 'Swap' : 'Amount'}</Badge>
         <span className="text-sm font-semibold text-ink-soft">
           Line {change.line + 1}
           {lineInput && <>: “{lineInput}”</>}
@@ -43,20 +58,34 @@ function ChangeItem({ change, lineInput, unitSystem, onExclude, excluding }: { c
       {change.swapped ? (
         <p className="font-bold">
           {change.from.name} <span aria-hidden="true">→</span>
-          <span className="sr-only">becomes</span> <span className="text-herb-800">{change.to.name}</span>
+          <span className="sr-only">{change.partial ? 'shared with' : 'becomes'}</span> <span className="text-herb-800">{change.to.name}</span>
         </p>
       ) : (
         <p className="font-bold">{change.to.name}</p>
       )}
-      <p>{gramsChange(change, unitSystem)}</p>
+      {change.partial ? <SharedLine change={change} unitSystem={unitSystem} /> : <p>{gramsChange(change, unitSystem)}</p>}
+      {change.rule && (
+        <p className="text-sm">
+          <span className="font-bold">Rule:</span> {change.rule.label}
+        </p>
+      )}
       <p className="text-ink-soft">{change.reason}</p>
-      {change.approvedBy && (
+      {change.approvedBy ? (
         <div className="flex flex-col gap-1 rounded-field bg-herb-50 px-3 py-2 text-herb-900">
           <p className="flex flex-wrap items-center gap-2 text-sm font-bold">
             <Badge tone="herb">Coach approved</Badge> {change.approvedBy}
           </p>
           {change.note && <p className="text-sm">Note: {change.note}</p>}
         </div>
+      ) : (
+        change.note && <p className="rounded-field bg-oat-100 px-3 py-2 text-sm">Cook’s note: {change.note}</p>
+      )}
+      {cautions.length > 0 && (
+        <ul className="list-inside list-disc text-sm text-ink-soft" aria-label="Cautions">
+          {cautions.map((c) => (
+            <li key={c}>{c}</li>
+          ))}
+        </ul>
       )}
       {change.swapped && onExclude && (
         <Button variant="quiet" size="sm" className="self-start underline underline-offset-2" disabled={excluding} onClick={() => onExclude({ id: change.to.id, name: change.to.name })}>

@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import type { LineFunction } from '../../../../shared/culinary/types';
 import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { useForm, useWatch, type Path } from 'react-hook-form';
 import type { AnalyzeResponse, LineInput } from '../../../../shared/schemas/analyze';
@@ -42,6 +43,8 @@ export interface RewriteRecipe {
   analysis: AnalyzeResponse;
   /** a newer analysis is on its way */
   updating: boolean;
+  /** what the cook says lines do, by line index, over Hearthswap's reading */
+  lineRoles?: Partial<Record<number, LineFunction>>;
 }
 
 export interface RewritePanelProps {

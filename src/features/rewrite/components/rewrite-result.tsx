@@ -3,7 +3,9 @@ import { Alert } from '../../../components/ui/alert';
 import { Card } from '../../../components/ui/card';
 import type { UnitSystem } from '../../../lib/user';
 import { DEFAULT_VOLUME_TOLERANCE_PCT } from '../rewrite-form';
+import type { HeldLine } from '../../../../shared/rewrite/types';
 import type { RewriteAnswer, SkippedLine } from '../rewrite-types';
+import { heldWords } from '../rewrite-words';
 import { LazyBeforeAfterChart as BeforeAfterChart } from './lazy-before-after-chart';
 import { BeforeAfterHeadline, BeforeAfterNumbers } from './before-after-numbers';
 import { ChangeList } from './change-list';
@@ -32,6 +34,26 @@ export function SkippedLinesNote({ skipped }: { skipped: SkippedLine[] }) {
             Line {s.line + 1}, “{s.input}”: {s.reason}.
           </li>
         ))}
+      </ul>
+    </Alert>
+  );
+}
+
+/** Lines the rewrite never touches, and why, in the order of the recipe. */
+export function HeldLinesNote({ held, lineInputs }: { held: HeldLine[]; lineInputs: string[] }) {
+  if (held.length === 0) return null;
+  return (
+    <Alert tone="info" title="Kept as written" announce={false}>
+      <p>These lines season, raise or set the dish, so the rewrite leaves them alone. Change what a line does in the Kitchen to let the rewrite touch it.</p>
+      <ul className="list-inside list-disc">
+        {[...held]
+          .sort((a, b) => a.line - b.line)
+          .map((h) => (
+            <li key={h.line}>
+              Line {h.line + 1}
+              {lineInputs[h.line] && <>, “{lineInputs[h.line]}”</>}: {heldWords(h.reason)}.
+            </li>
+          ))}
       </ul>
     </Alert>
   );
@@ -74,6 +96,7 @@ export function RewriteResult({ request, answer, unitSystem, onExclude, busy }: 
         <Card title="What changes, and why" headingLevel={3} description={solverNote(answer)}>
           <div className="flex flex-col gap-4">
             <SkippedLinesNote skipped={answer.skippedLines} />
+            <HeldLinesNote held={answer.held ?? []} lineInputs={lineInputs} />
             <ChangeList changes={answer.changes} lineInputs={lineInputs} unitSystem={unitSystem} onExclude={onExclude} excluding={busy} />
           </div>
         </Card>

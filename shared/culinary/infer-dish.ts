@@ -1,0 +1,247 @@
+import { lineKind, type LineKind } from './line-kind';
+import type { CulinaryLine, DishContext, DishType, LineFunction } from './types';
+
+export interface DishReading {
+  dishType: DishType;
+  /** a butter-and-flour (or oil-and-flour) roux thickens milk or cream */
+  hasRoux: boolean;
+  lines: { kind: LineKind; role: LineFunction; context: DishContext }[];
+}
+
+const TOPPING_WORDS = /\b(for (the )?(top|topping|serving|garnish|sprinkling)|to (serve|garnish|sprinkle|top)|on top|topping|garnish|sprinkle|dollop)\b/i;
+const GREASE_WORDS = /\b(for (the )?(pan|griddle|skillet|greasing|frying)|to grease|greasing|for the dish)\b/i;
+const COATING_WORDS = /\b(for (dredging|coating|dusting|breading)|dredg|dust(ing)?)\b/i;
+const BAKE_TYPES: readonly DishType[] = ['leavened-bake', 'batter', 'dough'];
+
+function gramsBy(lines: readonly CulinaryLine[], kinds: readonly LineKind[], of: readonly LineKind[]) {
+  return lines.reduce((s, l, i) => (of.includes(kinds[i]) ? s + Math.max(0, l.grams) : s), 0);
+}
+
+/** The dish type from every line's kind and weight (PRODUCT.md step 5). */
+export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly LineKind[] = lines.map(lineKind)): DishType {
+  const g = (...of: LineKind[]) => gramsBy(lines, kinds, of);
+  const has = (...of: LineKind[]) => kinds.some((k) => of.includes(k));
+  const total = lines.reduce((s, l) => s + Math.max(0, l.grams), 0) || 1;
+  const flour = g('flour');
+  const comments = lines.map((l) => `${l.phrase} ${l.comment ?? ''}`).join(' ');
+
+  if (has('yeast') && flour > 0) return 'dough';
+  const savouryMain = has('meat', 'cured-meat', 'fish', 'starch', 'wrap', 'condensed-soup');
+  const bakeCore = flour + g('sugar', 'chocolate');
+  if (flour > 0 && !savouryMain && bakeCore >= 0.25 * total) {
+    const liquid = g('milk', 'liquid', 'cultured');
+    if (liquid >= 0.8 * flour && g('sugar') < 0.5 * flour) return 'batter';
+    // rich and dry (cookies, shortbread, pastry): the fat is the dough's structure
+    const moisture = liquid + g('fruit', 'vegetable', 'legume');
+    if (g('butter-oil') >= 0.5 * flour && moisture < 0.25 * flour) return 'dough';
+    return 'leavened-bake';
+  }
+  if (g('dressing') >= 0.08 * total && !has('condensed-soup', 'flour')) return 'cold-dish';
+  const pieCrust = lines.some((l) => /\b(pie crust|pastry|biscuit dough|puff pastry)\b/i.test(`${l.phrase} ${l.food?.name ?? ''}`));
+  const layered = /\b(layer|lasagna|casserole|baked|gratin)\b/i.test(comments);
+  const cheese = has('melting-cheese', 'fresh-cheese', 'hard-cheese');
+  const mashedTop = lines.some((l, i) => kinds[i] === 'starch' && /\bpotato/i.test(l.food?.name ?? '')) && has('meat');
+  if (
+    pieCrust ||
+    has('condensed-soup') ||
+    layered ||
+    (has('fresh-cheese') && has('starch') && has('melting-cheese')) ||
+    (has('crumbs') && has('starch') && cheese) ||
+    (mashedTop && !has('wrap'))
+  ) {
+    return 'assembled-bake';
+  }
+  // a sauce baked over the dish (enchilada sauce), not one served beside it (salsa, ketchup)
+  const bakedSauce = lines.reduce((s, l, i) => (kinds[i] === 'sauce' && !/salsa|catsup|ketchup/i.test(`${l.phrase} ${l.food?.name ?? ''}`) ? s + l.grams : s), 0);
+  if (has('wrap') && cheese) return bakedSauce >= 0.1 * total || has('fresh-cheese') ? 'assembled-bake' : 'griddle-saute';
+  // a loaf or meatballs: mince held together by crumbs and egg
+  if (has('meat') && has('crumbs') && has('egg') && !has('starch', 'wrap')) return 'assembled-bake';
+  const wet = g('liquid', 'tomato', 'sauce');
+  if (has('starch') && has('cream', 'milk', 'melting-cheese', 'hard-cheese', 'egg') && wet < 0.25 * total) return 'stovetop-sauce';
+  if (wet >= 0.25 * total || (has('legume') && has('tomato'))) return 'simmered-dish';
+  if (has('meat', 'fish', 'wrap')) return 'griddle-saute';
+  return 'other';
+}
+
+function roleOf(line: CulinaryLine, kind: LineKind, dish: DishType, ctx: { hasRoux: boolean; kinds: readonly LineKind[]; sugarIsStructure: boolean; rouxFat: number }, index: number): LineFunction {
+  const note = `${line.comment ?? ''}`;
+  const topping = TOPPING_WORDS.test(note) || TOPPING_WORDS.test(line.phrase);
+  const bake = BAKE_TYPES.includes(dish);
+  const has = (...of: LineKind[]) => ctx.kinds.some((k) => of.includes(k));
+  switch (kind) {
+    case 'salt': return 'salt';
+    case 'yeast': return 'yeast';
+    case 'leavener': return 'leavener';
+    case 'extract': return 'extract';
+    case 'acid': return 'acid';
+    case 'seasoning': return 'seasoning';
+    case 'aromatic': return 'aromatic';
+    case 'liquid': return bake ? 'structure' : 'cooking-liquid';
+    case 'flour':
+      if (COATING_WORDS.test(note)) return 'coating';
+      return bake ? 'structure' : 'thickener';
+    case 'starch':
+    case 'wrap':
+      return bake ? 'structure' : 'starch';
+    case 'crumbs':
+      if (topping) return 'topping';
+      if (has('meat') && has('egg') && !COATING_WORDS.test(note)) return 'binder';
+      return dish === 'assembled-bake' ? 'topping' : 'coating';
+    case 'egg':
+      if (bake) return 'structure';
+      if (has('meat') && has('crumbs')) return 'binder';
+      if (dish === 'assembled-bake' && has('fresh-cheese')) return 'binder';
+      if (dish === 'stovetop-sauce' && has('starch') && !has('milk', 'cream')) return 'sauce';
+      if (COATING_WORDS.test(note) || has('crumbs')) return 'coating';
+      return 'main-protein';
+    case 'sugar':
+      if (bake) return ctx.sugarIsStructure ? 'structure' : 'sweetener';
+      return 'sweetener';
+    case 'syrup':
+      return topping ? 'topping' : 'sweetener';
+    case 'chocolate':
+      return bake ? 'structure' : 'other';
+    case 'mix-in':
+      return topping ? 'topping' : 'other';
+    case 'butter-oil':
+      if (GREASE_WORDS.test(note)) return 'cooking-fat';
+      if (bake) return 'baking-fat';
+      if (ctx.hasRoux && index === ctx.rouxFat) return 'fat-for-roux';
+      return 'cooking-fat';
+    case 'milk':
+      // milk soaking the crumbs of a meatloaf or meatballs (a panade) binds them
+      if (!bake && has('meat') && has('crumbs') && has('egg')) return 'binder';
+      return 'dairy-liquid';
+    case 'cream':
+      return topping ? 'topping' : 'cream';
+    case 'cultured':
+      // sour cream beside tacos, quesadillas or chili is served on top; in a stovetop sauce it is the sauce
+      if (topping || dish === 'cold-dish' || dish === 'griddle-saute' || dish === 'simmered-dish') return 'topping';
+      return bake ? 'dairy-liquid' : 'cream';
+    case 'melting-cheese':
+      return topping ? 'topping' : 'melting-cheese';
+    case 'hard-cheese':
+      return 'hard-cheese';
+    case 'fresh-cheese':
+      return 'fresh-cheese';
+    case 'meat':
+    case 'fish':
+      return 'main-protein';
+    case 'cured-meat':
+      return topping ? 'topping' : 'main-protein';
+    case 'legume':
+    case 'vegetable':
+      return bake ? 'other' : 'vegetable';
+    case 'tomato':
+    case 'sauce':
+    case 'condensed-soup':
+    case 'dressing':
+      return 'sauce';
+    case 'fruit':
+      return bake ? 'structure' : topping ? 'topping' : 'other';
+    case 'nut':
+      return topping ? 'topping' : 'other';
+    default:
+      return 'other';
+  }
+}
+
+/** Where the line's food is cooked, from its function, the dish type and the cook's note. */
+export function contextOf(role: LineFunction, dish: DishType, hasRoux: boolean, comment?: string | null): DishContext {
+  if (role === 'topping' || role === 'coating' || TOPPING_WORDS.test(comment ?? '')) return 'topping';
+  if (role === 'cooking-fat') return 'griddle-saute';
+  if (role === 'fat-for-roux' || role === 'thickener') return 'roux-white-sauce';
+  if (BAKE_TYPES.includes(dish)) return dish === 'dough' && (role === 'melting-cheese' || role === 'hard-cheese' || role === 'main-protein' || role === 'vegetable' || role === 'sauce') ? 'topping' : 'baked-batter-dough';
+  const saucy = role === 'dairy-liquid' || role === 'cream' || role === 'melting-cheese' || role === 'hard-cheese' || role === 'sauce';
+  if (hasRoux && saucy && role !== 'sauce') return 'roux-white-sauce';
+  switch (dish) {
+    case 'cold-dish':
+      return 'cold-dressing';
+    case 'griddle-saute':
+      return 'griddle-saute';
+    case 'stovetop-sauce':
+    case 'simmered-dish':
+      return saucy || role === 'main-protein' || role === 'vegetable' || role === 'fresh-cheese' ? 'boiled-sauce' : 'filling';
+    case 'assembled-bake':
+      return role === 'dairy-liquid' ? 'boiled-sauce' : 'filling';
+    default:
+      return saucy ? 'boiled-sauce' : 'filling';
+  }
+}
+
+/**
+ * Reads a whole recipe: its dish type, whether it has a roux, and each line's function and context.
+ * `overrides` are the cook's choices of function by line index; their contexts follow from them.
+ */
+export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Record<number, LineFunction>> = {}): DishReading {
+  const kinds = lines.map(lineKind);
+  const dishType = inferDishType(lines, kinds);
+  const g = (k: LineKind) => gramsBy(lines, kinds, [k]);
+  const flourGrams = g('flour');
+  const dairyForSauce = kinds.some((k) => k === 'milk' || k === 'cream' || k === 'liquid');
+  const hasRoux = !BAKE_TYPES.includes(dishType) && flourGrams > 0 && kinds.includes('butter-oil') && dairyForSauce;
+  // the roux fat: butter when there is some, else the first fat
+  const fats = kinds.map((k, i) => (k === 'butter-oil' ? i : -1)).filter((i) => i >= 0);
+  const rouxFat = fats.find((i) => /^butter\b/i.test(lines[i].food?.name ?? '')) ?? fats[0] ?? -1;
+  // sugar is structure where it outweighs the flour (brownies, pound cake) or melts into chocolate
+  const sugarIsStructure = kinds.includes('chocolate') || g('sugar') >= flourGrams;
+  const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat };
+  const out = lines.map((line, i) => {
+    const role = overrides[i] ?? roleOf(line, kinds[i], dishType, ctx, i);
+    return { kind: kinds[i], role, context: contextOf(role, dishType, hasRoux, line.comment) };
+  });
+  return { dishType, hasRoux, lines: out };
+}
+
+/** Functions that keep a line exactly as written unless the cook unlocks it (PRODUCT.md step 5). */
+export const HELD_FUNCTIONS: ReadonlySet<LineFunction> = new Set<LineFunction>([
+  'seasoning', 'leavener', 'yeast', 'salt', 'extract', 'acid', 'aromatic', 'cooking-liquid',
+]);
+
+/** A line function in a cook's plain words, for the Kitchen and held-line reasons. */
+export const LINE_FUNCTION_WORDS: Record<LineFunction, string> = {
+  seasoning: 'seasoning',
+  leavener: 'leavener',
+  yeast: 'yeast',
+  salt: 'salt',
+  extract: 'flavouring extract',
+  acid: 'acid (brightens)',
+  aromatic: 'aromatic',
+  'cooking-liquid': 'cooking liquid',
+  structure: 'structure of the bake',
+  thickener: 'thickener',
+  binder: 'binder',
+  'main-protein': 'main protein',
+  'melting-cheese': 'melting cheese',
+  'hard-cheese': 'hard cheese',
+  'fresh-cheese': 'fresh cheese',
+  'dairy-liquid': 'milk or dairy liquid',
+  cream: 'cream',
+  'fat-for-roux': 'fat for the roux',
+  'cooking-fat': 'fat for the pan',
+  'baking-fat': 'fat in the bake',
+  sweetener: 'sweetener',
+  starch: 'starch (pasta, bread, potato)',
+  vegetable: 'vegetable',
+  sauce: 'sauce',
+  topping: 'topping',
+  coating: 'coating or crumbs',
+  other: 'other',
+};
+
+export const DISH_TYPE_WORDS: Record<DishType, string> = {
+  'leavened-bake': 'a leavened bake',
+  batter: 'a batter',
+  dough: 'a dough',
+  'stovetop-sauce': 'a stovetop sauce dish',
+  'simmered-dish': 'a simmered dish',
+  'assembled-bake': 'an assembled or layered bake',
+  'griddle-saute': 'a griddle or sauté dish',
+  'cold-dish': 'a cold dish',
+  other: 'a dish',
+};
+
+/** The reason shown for a held line: "leavener: kept as written". */
+export function heldReasonFor(role: LineFunction): string | undefined {
+  return HELD_FUNCTIONS.has(role) ? `${LINE_FUNCTION_WORDS[role]}: kept as written` : undefined;
+}

@@ -1,0 +1,160 @@
+/**
+ * Dish type and line function read from small invented recipes (PRODUCT.md step 5). The foods are
+ * hand-made stand-ins carrying the SR28 group, a readable name and the catalogue roles; which line does
+ * what in which dish is *common practice*.
+ */
+import { describe, expect, it } from 'vitest';
+import { contextOf, heldReasonFor, inferDishType, readDish } from '../../shared/culinary/infer-dish';
+import { inFoodClass, keepScaleOf, ruleHoldsIn, rulesForLine } from '../../shared/culinary/match-rules';
+import { parseRuleFile } from '../../shared/culinary/rule-schema';
+import type { CulinaryLine } from '../../shared/culinary/types';
+import ruleFile from '../../data/substitution-rules.json';
+
+type Spec = [phrase: string, grams: number, name: string, group: string, roles: string[], comment?: string, ndb?: string, fatG?: number];
+
+const line = ([phrase, grams, name, group, roles, comment, ndb, fatG]: Spec): CulinaryLine => ({
+  phrase,
+  grams,
+  comment: comment ?? null,
+  food: { name, foodGroup: group, sourceId: ndb ?? '00000', roles, per100g: { fatG: fatG ?? 0 } },
+});
+const recipe = (...specs: Spec[]) => specs.map(line);
+
+const FLOUR: Spec = ['all-purpose flour', 250, 'Wheat flour, white, all-purpose, enriched, bleached', '20', ['flour'], undefined, '20081'];
+const SUGAR = (g: number): Spec => ['sugar', g, 'Sugars, granulated', '19', ['sweetener'], undefined, '19335'];
+const EGGS: Spec = ['eggs', 100, 'Egg, whole, raw, fresh', '01', ['egg'], undefined, '01123', 9.5];
+const BUTTER = (g: number, comment?: string): Spec => ['butter', g, 'Butter, with salt', '01', ['cooking-fat'], comment, '01001', 81];
+const MILK = (g: number): Spec => ['whole milk', g, 'Milk, whole, 3.25% milkfat, with added vitamin D', '01', ['dairy-milk'], undefined, '01077', 3.3];
+const SALT: Spec = ['salt', 3, 'Salt, table', '02', ['herb-spice'], undefined, '02047'];
+const POWDER: Spec = ['baking powder', 9, 'Leavening agents, baking powder, double-acting', '18', ['baking-leavener']];
+const SODA: Spec = ['baking soda', 5, 'Leavening agents, baking soda', '18', ['baking-leavener']];
+const VANILLA: Spec = ['vanilla extract', 4, 'Vanilla extract', '02', ['herb-spice']];
+const PASTA: Spec = ['elbow macaroni', 454, 'Pasta, dry, enriched', '20', ['pasta'], undefined, '20120', 1.5];
+const CHEDDAR = (comment?: string): Spec => ['sharp cheddar cheese', 226, 'Cheese, cheddar', '01', ['melting-cheese'], comment, '01009', 33];
+const ONION: Spec = ['onion', 110, 'Onions, raw', '11', ['vegetable']];
+const BEEF: Spec = ['ground beef', 454, 'Beef, ground, 80% lean meat / 20% fat, raw', '13', ['ground-meat', 'red-meat'], undefined, '23572', 20];
+
+describe('dish type from the whole recipe', () => {
+  it('reads pancakes as a batter: as much milk as flour, little sugar, a leavener', () => {
+    expect(inferDishType(recipe(FLOUR, MILK(480), EGGS, SUGAR(25), POWDER, SALT, BUTTER(40)))).toBe('batter');
+  });
+
+  it('reads banana bread as a leavened bake and cookies (rich, dry) as a dough', () => {
+    const banana: Spec = ['ripe bananas, mashed', 350, 'Bananas, raw', '09', ['fruit']];
+    expect(inferDishType(recipe(FLOUR, SODA, SALT, BUTTER(113), SUGAR(150), EGGS, banana, VANILLA))).toBe('leavened-bake');
+    expect(inferDishType(recipe(FLOUR, SODA, SALT, BUTTER(227), SUGAR(300), EGGS, VANILLA))).toBe('dough');
+  });
+
+  it('reads anything with yeast and flour as a dough', () => {
+    const yeast: Spec = ['active dry yeast', 7, "Leavening agents, yeast, baker's, active dry", '18', ['baking-leavener']];
+    const water: Spec = ['warm water', 240, 'Water, tap, municipal', '14', ['other']];
+    expect(inferDishType(recipe(FLOUR, yeast, water, SALT))).toBe('dough');
+  });
+
+  it('reads pasta in a cream sauce as a stovetop sauce dish, and with a crumb topping as an assembled bake', () => {
+    const cream: Spec = ['heavy cream', 357, 'Cream, fluid, heavy whipping', '01', ['cream', 'cream-sauce-base'], undefined, '01053', 36];
+    expect(inferDishType(recipe(PASTA, BUTTER(57), cream, SALT))).toBe('stovetop-sauce');
+    const crumbs: Spec = ['dry bread crumbs', 54, 'Bread crumbs, dry, grated, plain', '18', ['breadcrumb-coating']];
+    expect(inferDishType(recipe(PASTA, BUTTER(57), ['all-purpose flour', 31, FLOUR[2], '20', ['flour']], MILK(732), CHEDDAR(), crumbs))).toBe('assembled-bake');
+  });
+
+  it('reads chili as a simmered dish, a quesadilla as a griddle dish, a tuna salad as a cold dish', () => {
+    const tomatoes: Spec = ['crushed tomatoes', 794, 'Tomatoes, crushed, canned', '11', ['tomato-sauce']];
+    const beans: Spec = ['kidney beans, drained', 440, 'Beans, kidney, red, mature seeds, canned', '16', ['legume']];
+    expect(inferDishType(recipe(BEEF, ONION, tomatoes, beans, SALT))).toBe('simmered-dish');
+    const tortillas: Spec = ['flour tortillas', 192, 'Tortillas, ready-to-bake or -fry, flour, refrigerated', '18', ['flatbread-wrap']];
+    expect(inferDishType(recipe(tortillas, CHEDDAR(), ['cooked chicken', 280, 'Chicken, broilers or fryers, meat only, cooked, roasted', '05', ['poultry']]))).toBe('griddle-saute');
+    const tuna: Spec = ['canned tuna, drained', 280, 'Fish, tuna, light, canned in water, drained solids', '15', ['fish-seafood']];
+    const mayo: Spec = ['mayonnaise', 110, 'Salad dressing, mayonnaise, regular', '04', ['condiment'], undefined, '04025'];
+    expect(inferDishType(recipe(tuna, mayo, ['celery', 50, 'Celery, raw', '11', ['vegetable']]))).toBe('cold-dish');
+  });
+});
+
+describe('line function', () => {
+  it('holds salt, leaveners, extracts and aromatics, and says why', () => {
+    const read = readDish(recipe(FLOUR, MILK(480), EGGS, SUGAR(25), POWDER, SALT, BUTTER(40), VANILLA, ONION));
+    const roles = read.lines.map((l) => l.role);
+    expect(roles).toEqual(['structure', 'dairy-liquid', 'structure', 'sweetener', 'leavener', 'salt', 'baking-fat', 'extract', 'aromatic']);
+    expect(heldReasonFor('leavener')).toBe('leavener: kept as written');
+    expect(heldReasonFor('salt')).toBe('salt: kept as written');
+    expect(heldReasonFor('structure')).toBeUndefined();
+    expect(read.lines[0].context).toBe('baked-batter-dough');
+  });
+
+  it('finds the roux: butter is its fat, flour its thickener, milk and cheese cook in the white sauce', () => {
+    const read = readDish(recipe(PASTA, BUTTER(57), ['all-purpose flour', 31, FLOUR[2], '20', ['flour']], MILK(732), CHEDDAR(), ['dry mustard', 2, 'Spices, mustard seed, ground', '02', ['herb-spice']]));
+    expect(read.hasRoux).toBe(true);
+    expect(read.lines.map((l) => l.role)).toEqual(['starch', 'fat-for-roux', 'thickener', 'dairy-liquid', 'melting-cheese', 'seasoning']);
+    expect(read.lines[3].context).toBe('roux-white-sauce');
+    expect(read.lines[4].context).toBe('roux-white-sauce');
+  });
+
+  it('sugar is structure where it outweighs the flour (brownies), a sweetener where it does not', () => {
+    const cocoa: Spec = ['cocoa powder', 40, 'Cocoa, dry powder, unsweetened', '19', ['chocolate']];
+    const brownies = readDish(recipe(['flour', 65, FLOUR[2], '20', ['flour']], SUGAR(250), BUTTER(113), EGGS, cocoa, SALT));
+    expect(brownies.lines[1].role).toBe('structure');
+    const pancakes = readDish(recipe(FLOUR, MILK(480), EGGS, SUGAR(25), POWDER));
+    expect(pancakes.lines[3].role).toBe('sweetener');
+  });
+
+  it('eggs bind a meatloaf, make the sauce of a carbonara, and are structure in a bake', () => {
+    const crumbs: Spec = ['dry bread crumbs', 108, 'Bread crumbs, dry, grated, plain', '18', ['breadcrumb-coating']];
+    expect(readDish(recipe(BEEF, crumbs, EGGS, MILK(120), ONION, SALT)).lines[2].role).toBe('binder');
+    const pecorino: Spec = ['grated Pecorino Romano', 99, 'Cheese, romano', '01', ['hard-cheese']];
+    expect(readDish(recipe(PASTA, EGGS, pecorino, SALT)).lines[1].role).toBe('sauce');
+    expect(readDish(recipe(FLOUR, MILK(480), EGGS, POWDER)).lines[2].role).toBe('structure');
+  });
+
+  it('a cheese "for the top" is a topping; oil "for the pan" is fat for the pan', () => {
+    const read = readDish(recipe(PASTA, CHEDDAR('for the top'), ['olive oil', 14, 'Oil, olive, salad or cooking', '04', ['cooking-fat'], 'for the pan']));
+    expect(read.lines[1]).toMatchObject({ role: 'topping', context: 'topping' });
+    expect(read.lines[2]).toMatchObject({ role: 'cooking-fat', context: 'griddle-saute' });
+  });
+
+  it("the cook's override wins and its context follows", () => {
+    const read = readDish(recipe(BEEF, ONION, SALT), { 1: 'vegetable' });
+    expect(read.lines[1].role).toBe('vegetable');
+    expect(heldReasonFor(read.lines[1].role)).toBeUndefined();
+    expect(contextOf('topping', 'simmered-dish', false)).toBe('topping');
+  });
+});
+
+describe('rule matching by food class and dish context', () => {
+  const rules = parseRuleFile(ruleFile);
+  const rule = (id: string) => rules.find((r) => r.id === id)!;
+
+  it('matches full-fat ground beef, not lean beef or cooked crumbles', () => {
+    const cls = rule('ground-beef-to-lean-turkey').from;
+    const food = (name: string, fatG: number) => ({ name, foodGroup: '13', sourceId: '23572', roles: ['ground-meat'], per100g: { fatG } });
+    expect(inFoodClass(cls, food('Beef, ground, 80% lean meat / 20% fat, raw', 20), 'ground beef')).toBe(true);
+    expect(inFoodClass(cls, food('Beef, ground, 95% lean meat / 5% fat, raw', 5), 'lean ground beef')).toBe(false);
+    expect(inFoodClass(cls, food('Beef, ground, 80% lean meat / 20% fat, crumbles, cooked, pan-browned', 18), 'cooked beef')).toBe(false);
+  });
+
+  it('reads "pancetta" from what the cook wrote even when the catalogue weighs it as bacon', () => {
+    const bacon = { name: 'Pork, cured, bacon, unprepared', foodGroup: '10', sourceId: '10123', roles: ['cured-meat-topping'], per100g: { fatG: 42 } };
+    const applicable = rulesForLine(rules, { food: bacon, phrase: 'pancetta', role: 'main-protein', dishType: 'stovetop-sauce', context: 'boiled-sauce' }).map((r) => r.id);
+    expect(applicable).toContain('pancetta-to-lean-ham');
+    expect(applicable).not.toContain('bacon-to-turkey-or-canadian-bacon');
+    expect(keepScaleOf(rulesForLine(rules, { food: bacon, phrase: 'pancetta', role: 'main-protein', dishType: 'stovetop-sauce', context: 'boiled-sauce' }))?.range).toEqual([0.67, 1]);
+  });
+
+  it('sour cream → Greek yogurt on top, never in a boiled sauce; a bake needs a rule that names bakes', () => {
+    const sour = rule('sour-cream-to-greek-yogurt');
+    expect(ruleHoldsIn(sour, 'topping', 'griddle-saute', 'topping')).toBe(true);
+    expect(ruleHoldsIn(sour, 'cream', 'stovetop-sauce', 'boiled-sauce')).toBe(false);
+    expect(ruleHoldsIn(rule('ground-beef-to-lean-turkey'), 'structure', 'leavened-bake', 'baked-batter-dough')).toBe(false);
+    expect(ruleHoldsIn(rule('all-purpose-flour-to-whole-wheat'), 'structure', 'batter', 'baked-batter-dough')).toBe(true);
+    expect(ruleHoldsIn(rule('all-purpose-flour-to-whole-wheat'), 'thickener', 'assembled-bake', 'roux-white-sauce')).toBe(false);
+  });
+
+  it('butter: up to half as applesauce in a quick bread, not in cookies; a quarter less in a roux; half for sautéing', () => {
+    const apple = rule('quick-bread-fat-to-applesauce');
+    expect(ruleHoldsIn(apple, 'baking-fat', 'leavened-bake', 'baked-batter-dough')).toBe(true);
+    expect(ruleHoldsIn(apple, 'baking-fat', 'dough', 'baked-batter-dough')).toBe(false);
+    expect(ruleHoldsIn(apple, 'fat-for-roux', 'assembled-bake', 'roux-white-sauce')).toBe(false);
+    const butter = { name: 'Butter, with salt', foodGroup: '01', sourceId: '01001', roles: ['cooking-fat'], per100g: { fatG: 81 } };
+    expect(keepScaleOf(rulesForLine(rules, { food: butter, phrase: 'butter', role: 'fat-for-roux', dishType: 'assembled-bake', context: 'roux-white-sauce' }))?.range).toEqual([0.75, 1]);
+    expect(keepScaleOf(rulesForLine(rules, { food: butter, phrase: 'butter', role: 'cooking-fat', dishType: 'stovetop-sauce', context: 'griddle-saute' }))?.range).toEqual([0.5, 1]);
+  });
+});

