@@ -8,6 +8,7 @@ import { uniqueEmail } from '../helpers/test-app';
 const live = useLiveBrowser();
 
 /** A JSON call in the page's session (cookies shared with the page), CSRF token included. */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- test answers are read loosely by each assertion
 async function apiAs<T = any>(page: Page, method: 'get' | 'post' | 'put' | 'patch', path: string, data?: unknown): Promise<T> {
   const csrf = (await (await page.request.get(`${live.server.url}/api/auth/csrf`)).json()).token as string;
   const res = await page.request.fetch(`${live.server.url}${path}`, { method: method.toUpperCase(), data, headers: { 'X-CSRF-Token': csrf } });

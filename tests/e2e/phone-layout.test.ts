@@ -10,6 +10,7 @@ const DESKTOP = { width: 1280, height: 900 };
 const PHONE = { width: 390, height: 844 };
 const NARROW_PHONE = { width: 360, height: 800 };
 
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- test answers are read loosely by each assertion
 async function getJson<T = any>(page: Page, path: string): Promise<T> {
   return (await (await page.request.get(`${live.server.url}${path}`)).json()) as T;
 }

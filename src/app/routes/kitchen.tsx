@@ -12,7 +12,6 @@ import { AnalysisSection } from '../../features/analysis/components/analysis-sec
 import { RecipeInputForm } from '../../features/analysis/components/recipe-input-form';
 import { CurrentAnalysisContext } from '../../features/analysis/current-analysis';
 import { lineInputs } from '../../features/analysis/kitchen-lines';
-import type { KitchenSource } from '../../features/analysis/kitchen-storage';
 import { useKitchen, type Kitchen } from '../../features/analysis/use-kitchen';
 import { AddFoodLineForm } from '../../features/foods/components/add-food-line-form';
 import { FoodCombobox } from '../../features/foods/components/food-combobox';
