@@ -19,7 +19,7 @@ import { analyzeRouter } from './routes/analyze';
 import { foodsRouter } from './routes/foods';
 import { rewriteRouter } from './routes/rewrite';
 import { recipesRouter } from './routes/recipes';
-import { clientsRouter, commentsRouter, customFoodsRoute, invitationsRouter, myCoachRouter, outboxQuery, swapsRouter, targetsRouter } from './routes/coaching';
+import { clientsRouter, commentsRouter, invitationsRouter, myCoachRouter, outboxQuery, swapsRouter, targetsRouter } from './routes/coaching';
 import { requireRole } from './middleware/auth';
 import { prepRouter, shoppingListsRouter } from './routes/prep';
 import { parse } from './middleware/validate';
@@ -106,7 +106,6 @@ export function createApp(context: AppContext) {
   api.use('/recipes/:id/versions/:number/prep', prepRouter(sequelize));
   api.use('/shopping-lists', shoppingListsRouter(sequelize));
   api.use('/recipes', recipesRouter(sequelize, config));
-  api.post('/foods', ...customFoodsRoute(sequelize));
   api.use('/swaps', swapsRouter(sequelize));
   api.use('/clients', clientsRouter(sequelize, mail));
   api.use('/invitations', invitationsRouter(sequelize));

@@ -8,16 +8,19 @@ import { migrate } from './migrations';
 import { seed } from './seeders';
 import { getFoodEngine } from './services/food-engine';
 import { closeSolverPool } from './services/solver-pool';
+import { startFoodSync, type FoodSync } from './services/food-sync';
+import { closeLabelReader } from './services/label-reader';
 import { createMailContext } from './mail-context';
 
 // Sequelize models are bound to one instance per process, so apps in one process (tests) share it.
-const shared = new Map<string, { sequelize: Sequelize; users: number }>();
+const shared = new Map<string, { sequelize: Sequelize; users: number; foodSync: FoodSync }>();
 
 /** Everything a running server holds, so that tests and scripts can start and stop it cleanly. */
 export async function openServices(config: AppConfig) {
   let entry = shared.get(config.databaseUrl);
   if (!entry) {
-    entry = { sequelize: createSequelize(config.databaseUrl), users: 0 };
+    const sequelize = createSequelize(config.databaseUrl);
+    entry = { sequelize, users: 0, foodSync: startFoodSync(sequelize, config.databaseUrl) };
     shared.set(config.databaseUrl, entry);
   }
   entry.users++;
@@ -31,11 +34,13 @@ export async function openServices(config: AppConfig) {
     await sessionPool.end().catch(() => {});
     if (--entry.users === 0) {
       shared.delete(config.databaseUrl);
+      await entry.foodSync.stop();
       await closeSolverPool().catch(() => {});
+      await closeLabelReader().catch(() => {});
       await sequelize.close().catch(() => {});
     }
   };
-  return { sequelize, sessionPool, close };
+  return { sequelize, sessionPool, foodSync: entry.foodSync, close };
 }
 
 export async function prepareDatabase(config: AppConfig, services: Awaited<ReturnType<typeof openServices>>) {
@@ -48,6 +53,7 @@ export async function startServer(config: AppConfig) {
   const mail = await createMailContext(config);
   const app = createApp({ config, ...services, mail: mail.mail });
   await getFoodEngine(services.sequelize);
+  await services.foodSync.ready;
   const server = await new Promise<Server>((resolve) => {
     const s = app.listen(config.port, config.host, () => resolve(s));
   });

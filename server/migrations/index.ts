@@ -4,6 +4,7 @@ import * as m0001 from './0001-users-and-sessions';
 import * as m0002 from './0002-catalogue';
 import * as m0003 from './0003-recipes';
 import * as m0004 from './0004-coaching';
+import * as m0005 from './0005-my-foods';
 
 /** Every migration in order; add new ones at the end and never edit one that has shipped. */
 const MIGRATIONS = [
@@ -11,6 +12,7 @@ const MIGRATIONS = [
   { name: '0002-catalogue', ...m0002 },
   { name: '0003-recipes', ...m0003 },
   { name: '0004-coaching', ...m0004 },
+  { name: '0005-my-foods', ...m0005 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

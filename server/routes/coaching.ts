@@ -1,11 +1,10 @@
-import { Router, type RequestHandler } from 'express';
+import { Router } from 'express';
 import type { Sequelize } from 'sequelize';
 import { z } from 'zod';
 import {
   clientTargetsSchema,
   commentSchema,
   createSwapSchema,
-  customFoodSchema,
   invitationSchema,
   tokenParam,
   updateSwapSchema,
@@ -16,8 +15,6 @@ import { idParam, versionParam } from '../../shared/schemas/recipes';
 import { parse } from '../middleware/validate';
 import { requireAuth, requireRole } from '../middleware/auth';
 import { getFoodEngine } from '../services/food-engine';
-import { foodDetail } from '../services/foods';
-import { createCustomFood } from '../services/custom-foods';
 import * as coaching from '../services/coaching';
 import { findReadableRecipe, getVersion } from '../services/recipes';
 import type { Mailer } from '../mail';
@@ -62,17 +59,6 @@ export function swapsRouter(sequelize: Sequelize) {
     res.status(204).end();
   });
   return router;
-}
-
-export function customFoodsRoute(sequelize: Sequelize): RequestHandler[] {
-  return [
-    requireRole('coach'),
-    async (req, res) => {
-      const input = parse(customFoodSchema, req.body);
-      const food = await createCustomFood(sequelize, await getFoodEngine(sequelize), req.user!, input);
-      res.status(201).json(foodDetail(food));
-    },
-  ];
 }
 
 export function clientsRouter(sequelize: Sequelize, mail: MailContext) {

@@ -7,6 +7,7 @@ import { weighLine } from '../matching/weigh-line';
 import type { FoodEngine } from './food-engine';
 import { foodSummary } from './foods';
 import { badRequest } from '../lib/http-error';
+import { matchOwnFood } from './own-food-match';
 
 /** Splits pasted text into ingredient lines: blank lines and bullet marks dropped. */
 export function textToLines(text: string): LineInput[] {
@@ -38,13 +39,24 @@ function finite(n: number): number {
 export type FoodVisibility = (food: CatalogueFood) => boolean;
 const catalogueOnly: FoodVisibility = (food) => food.source === 'usda-sr28';
 
-export function analyzeLine(engine: FoodEngine, line: LineInput, canUse: FoodVisibility = catalogueOnly): AnalyzedLineWithFood {
+/**
+ * One line matched and weighed. `ownFoods` (the viewer's foods from labels, then their coach's) are
+ * tried first: a phrase that names one of them gets it, weighed by its household measure.
+ */
+export function analyzeLine(engine: FoodEngine, line: LineInput, canUse: FoodVisibility = catalogueOnly, ownFoods: readonly CatalogueFood[] = []): AnalyzedLineWithFood {
   const parsed: ParsedLine = parseLine(line.input);
   const warnings: string[] = [];
-  const match = engine.matcher.match(parsed.name || line.input);
+  const phrase = parsed.name || line.input;
+  const match = engine.matcher.match(phrase);
   let food: CatalogueFood | null = match.food;
   let confidence = match.confidence;
   let alternatives = match.alternatives;
+  const own = ownFoods.length > 0 ? matchOwnFood(phrase, ownFoods) : null;
+  if (own) {
+    alternatives = [...(food ? [food] : []), ...alternatives].filter((f) => f.id !== own.id);
+    food = own;
+    confidence = 1;
+  }
   if (line.foodId !== undefined) {
     const found = engine.byId.get(line.foodId);
     const pinned = found && canUse(found) ? found : undefined;
@@ -91,8 +103,8 @@ export function analyzeLine(engine: FoodEngine, line: LineInput, canUse: FoodVis
   };
 }
 
-export function analyzeLines(engine: FoodEngine, lines: LineInput[], servings: number, canUse: FoodVisibility = catalogueOnly) {
-  const analyzed = lines.map((line) => analyzeLine(engine, line, canUse));
+export function analyzeLines(engine: FoodEngine, lines: LineInput[], servings: number, canUse: FoodVisibility = catalogueOnly, ownFoods: readonly CatalogueFood[] = []) {
+  const analyzed = lines.map((line) => analyzeLine(engine, line, canUse, ownFoods));
   const totals = sumNutrients(analyzed.map((l) => l.nutrients));
   return {
     servings,

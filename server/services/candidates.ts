@@ -38,6 +38,11 @@ export interface CandidateOptions {
   diet: DietFlag[];
   excludedFoodIds: ReadonlySet<number>;
   approved: ApprovedSwap[];
+  /**
+   * Foods the viewer (or their coach) entered from labels, with the culinary roles they were given:
+   * each is a candidate for lines whose food plays one of those roles.
+   */
+  ownFoods?: readonly CatalogueFood[];
 }
 
 export function toCandidate(food: CatalogueFood, extra: Partial<Candidate> = {}): Candidate {
@@ -94,6 +99,13 @@ export function candidatesFor(engine: FoodEngine, food: CatalogueFood, options: 
     out.push(toCandidate(to, { approved: { by: swap.coachName, note: swap.note, volumeRatio: swap.volumeRatio } }));
   }
   if (!primary || options.k === 0) return out;
+
+  for (const own of options.ownFoods ?? []) {
+    if (seen.has(own.id) || options.excludedFoodIds.has(own.id) || !own.roles.includes(primary)) continue;
+    if (!options.diet.every((d) => own.diet.includes(d))) continue;
+    seen.add(own.id);
+    out.push(toCandidate(own));
+  }
 
   const list = (foodsByRole(engine).get(primary) ?? []).filter(
     (f) => !seen.has(f.id) && !options.excludedFoodIds.has(f.id) && sameState(food, f) && options.diet.every((d) => f.diet.includes(d)),

@@ -2,6 +2,7 @@ import type { RewriteRequest } from '../../shared/schemas/rewrite';
 import type { RewriteLine, RewriteResult, Plan, Change, FoodRef } from '../../shared/rewrite/types';
 import { RewriteSolverError } from '../../shared/rewrite/solve-log';
 import type { FoodEngine } from './food-engine';
+import type { CatalogueFood } from '../../shared/food';
 import { analyzeLines, requestLines, type FoodVisibility } from './analysis';
 import { candidatesFor, type ApprovedSwap } from './candidates';
 import { foodSummary } from './foods';
@@ -13,6 +14,8 @@ const DEFAULT_K = 8;
 export interface RewriteViewer {
   approvedSwaps: ApprovedSwap[];
   canUse?: FoodVisibility;
+  /** the viewer's foods from labels, then their coach's: matched first, and swap candidates for their roles */
+  ownFoods?: readonly CatalogueFood[];
 }
 
 function publicFood(engine: FoodEngine, ref: FoodRef) {
@@ -38,12 +41,13 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
   for (const index of locked) {
     if (index >= lines.length) throw badRequest(`lockedLines: line ${index} does not exist (the recipe has ${lines.length}).`, { fieldErrors: { lockedLines: ['Unknown line index.'] } });
   }
-  const analysis = analyzeLines(engine, lines, input.servings, viewer.canUse);
+  const analysis = analyzeLines(engine, lines, input.servings, viewer.canUse, viewer.ownFoods ?? []);
   const options = {
     k: input.candidatesPerLine ?? DEFAULT_K,
     diet: input.diet ?? [],
     excludedFoodIds: new Set(input.excludedFoodIds ?? []),
     approved: viewer.approvedSwaps,
+    ownFoods: viewer.ownFoods ?? [],
   };
   const modelLines: RewriteLine[] = [];
   const skippedLines: { line: number; input: string; reason: string }[] = [];
@@ -56,7 +60,7 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
       grams: line.grams,
       volumeMl: line.volumeMl,
       locked: locked.has(index),
-      candidates: locked.has(index) ? candidatesFor(engine, line.matchedFood, { ...options, k: 0, approved: [] }) : candidatesFor(engine, line.matchedFood, options),
+      candidates: locked.has(index) ? candidatesFor(engine, line.matchedFood, { ...options, k: 0, approved: [], ownFoods: [] }) : candidatesFor(engine, line.matchedFood, options),
     });
   });
   if (modelLines.length === 0) {
