@@ -7,21 +7,12 @@ import type { Migration } from './types';
  *
  * Rows entered before the limits existed may be impossible (a serving of 4.9e-324 g made every value
  * per 100 g Infinity): they are hidden, never deleted, so versions that use them keep their lines.
+ *
+ * HIDE_IMPOSSIBLE_FOODS hides custom foods whose stored values no food can have. Limits and rounding slack as in
+ * shared/label-food.ts: per 100 g, 900 kcal (+5 kcal a serving), 100 g of macros (+ the larger of
+ * 2 g and 1.5 g a serving), 40,000 mg sodium; the serving is the food's first portion.
  */
-export const up: Migration = async ({ context: qi }) => {
-  await qi.sequelize.query(`
-    ALTER TABLE foods
-      ADD COLUMN serving_g double precision,
-      ADD COLUMN serving_ml double precision,
-      ADD COLUMN serving_label text,
-      ADD COLUMN barcode varchar(14),
-      ADD COLUMN label jsonb,
-      ADD COLUMN energy_from_atwater boolean NOT NULL DEFAULT false,
-      ADD COLUMN hidden_at timestamptz,
-      ADD COLUMN hidden_reason text;
-
-    -- limits and rounding slack as shared/label-food.ts: per 100 g, 900 kcal (+5 kcal a serving),
-    -- 100 g of macros (+ the larger of 2 g and 1.5 g a serving), 40,000 mg sodium
+export const HIDE_IMPOSSIBLE_FOODS = `
     WITH serving AS (
       SELECT f.id, (SELECT p.grams FROM food_portions p WHERE p.food_id = f.id ORDER BY p.seq LIMIT 1) AS g
       FROM foods f WHERE f.source = 'custom'
@@ -37,7 +28,21 @@ export const up: Migration = async ({ context: qi }) => {
       OR GREATEST(foods.protein_g, foods.fat_g, foods.carbs_g, foods.sat_fat_g, foods.fiber_g, foods.sugar_g) > 100 + GREATEST(2, 150 / s.g)
       OR foods.protein_g + foods.fat_g + foods.carbs_g > 100 + GREATEST(2, 150 / s.g)
       OR foods.sodium_mg > 40000
-    );
+    );`;
+
+export const up: Migration = async ({ context: qi }) => {
+  await qi.sequelize.query(`
+    ALTER TABLE foods
+      ADD COLUMN serving_g double precision,
+      ADD COLUMN serving_ml double precision,
+      ADD COLUMN serving_label text,
+      ADD COLUMN barcode varchar(14),
+      ADD COLUMN label jsonb,
+      ADD COLUMN energy_from_atwater boolean NOT NULL DEFAULT false,
+      ADD COLUMN hidden_at timestamptz,
+      ADD COLUMN hidden_reason text;
+
+    ${HIDE_IMPOSSIBLE_FOODS}
     -- their broken portions would still weigh lines; the food itself stays for the versions that name it
     DELETE FROM food_portions p USING foods f WHERE p.food_id = f.id AND f.hidden_reason = 'impossible values';
 
