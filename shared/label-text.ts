@@ -52,7 +52,7 @@ const NAMES: Record<keyof typeof FIELD_WORDS, RegExp[]> = {
 
 /** An amount after a nutrient's name: "2.5g", "0 g", "Og", "Less than 1g", "<1g", "450mg", "1,200 mg", "2.59". */
 const AMOUNT =
-  /^[\s:.,-]*(less\s*than\s*|<\s*)?(\d{1,3}(?:,\d{3})+|\d+(?:\.\d+)?|\.\d+|[Oo](?=\s*m?[gq9]\b))\s*(mg|m9|mq|g|q|¢)?(?![\d.]*\s*%)/i;
+  /^[\s:.,-]*(less\s*than\s*|<\s*)?(\d{1,3}(?:,\d{3})+|\d+(?:\.\d+)?|\.\d+|[Oo](?=\s*m?[gq9]\b))\s*(mg|m9|mq|g|q|¢)?(?![\d.]*[ \t]*%)/i;
 
 const PERCENT = /^[^%\n]{0,14}?(\d{1,3})\s*%/;
 
@@ -161,7 +161,7 @@ function readServing(text: string, fields: LabelScanFields, notes: string[]) {
 }
 
 function readCalories(text: string): number | null {
-  const re = /\bcalories\b(?!\s*from)\s*:?\s*(\d{1,4})(?!\s*%)/gi;
+  const re = /\bcalories\b(?!\s*from)\s*:?\s*(\d{1,4})(?!\d)(?![ \t]*%)/gi;
   const m = re.exec(text);
   return m ? Number(m[1]) : null;
 }
