@@ -82,17 +82,20 @@ function readAmount(field: LabelField, after: string): Amount | null {
   const unit = m[3]?.toLowerCase() ?? '';
   const value = number(digits);
   if (!Number.isFinite(value)) return null;
-  const candidates: { value: number; reread: boolean }[] = [{ value, reread: false }];
+  const candidates: { value: number; reread: boolean; needsPercent: boolean }[] = [{ value, reread: false, needsPercent: false }];
+  const plain = digits.replace(/,/g, '');
   // "2.59" for "2.5g", "199" for "19g": a unit read as a 9 (or a 9 followed by a stray unit character).
-  if ((unit === '' || unit === 'q' || unit === '¢') && /\d9$/.test(digits.replace(/,/g, ''))) {
-    candidates.push({ value: number(digits.replace(/,/g, '').slice(0, -1)), reread: true });
-  }
+  if ((unit === '' || unit === 'q' || unit === '¢') && /\d9$/.test(plain)) candidates.push({ value: number(plain.slice(0, -1)), reread: true, needsPercent: false });
+  // "199g" for "19g": the g doubled as "9g"; taken only when the printed % Daily Value says so.
+  else if ((unit === 'g' || unit === 'mg') && /\d9$/.test(plain)) candidates.push({ value: number(plain.slice(0, -1)), reread: true, needsPercent: true });
   if (candidates.length > 1 && !lessThan) {
     const dv = DAILY_VALUES[field];
     const pct = PERCENT.exec(after.slice(m[0].length));
-    const score = (c: { value: number }) => {
+    const agrees = (c: { value: number }) => Boolean(dv && pct && Math.abs((c.value / dv) * 100 - Number(pct[1])) <= 1.5);
+    const score = (c: { value: number; needsPercent: boolean }) => {
+      if (c.needsPercent && !agrees(c)) return 99;
       let s = onGrid(field, c.value) ? 0 : 2;
-      if (dv && pct) s += Math.abs((c.value / dv) * 100 - Number(pct[1])) <= 1.5 ? 0 : 3;
+      if (dv && pct) s += agrees(c) ? 0 : 3;
       return s;
     };
     candidates.sort((a, b) => score(a) - score(b));

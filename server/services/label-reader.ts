@@ -18,9 +18,13 @@ import { HttpError, badRequest } from '../lib/http-error';
 export const MAX_LABEL_PHOTO_BYTES = 8 * 1024 * 1024;
 /** decoded pixels refused above this (a 12-megapixel phone photo is well under) */
 const MAX_INPUT_PIXELS = 40_000_000;
-/** text height that tesseract reads best sits around 30 px; a panel is upscaled to at least this width */
-const MIN_WIDTH_PX = 1400;
-const MAX_EDGE_PX = 2600;
+/**
+ * tesseract's LSTM model misreads small bold digits ("45g" as "459g"); enlarging a photo to at least
+ * this width fixed every such slip on the tuning panels (tests/api/label-scan-ocr.test.ts), while
+ * contrast stretching (normalise) made them worse.
+ */
+const MIN_WIDTH_PX = 3000;
+const MAX_EDGE_PX = 4000;
 
 const require = createRequire(import.meta.url);
 
@@ -63,7 +67,7 @@ export async function closeLabelReader() {
   if (w) await (await w.catch(() => null))?.terminate();
 }
 
-/** Decoded safely and made easy to read: upright, grayscale, stretched contrast, sized for OCR. */
+/** Decoded safely and made easy to read: upright, flattened on white, grayscale, sized for OCR. */
 export async function prepareLabelImage(buffer: Buffer): Promise<Buffer> {
   let meta: Metadata;
   try {
@@ -91,8 +95,7 @@ export async function prepareLabelImage(buffer: Buffer): Promise<Buffer> {
       .flatten({ background: '#ffffff' })
       .grayscale()
       .resize({ width: Math.round(width * scale), kernel: 'lanczos3' })
-      .normalise()
-      .png()
+      .png({ compressionLevel: 1 })
       .toBuffer();
   } catch {
     throw badRequest('This photo could not be decoded; it may be damaged. Take it again.', { fieldErrors: { image: ['Could not be decoded.'] } });
