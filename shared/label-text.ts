@@ -26,6 +26,8 @@ export interface LabelReading {
   fields: LabelScanFields;
   /** which of the ten fields were found */
   found: LabelField[];
+  /** fields read as printed that OCR may have garbled ("289g" for "28g"): worth a second reading */
+  doubtful: LabelField[];
   notes: string[];
 }
 
@@ -71,6 +73,8 @@ interface Amount {
   value: number;
   lessThan: boolean;
   reread: boolean;
+  /** read as printed, though it ends in a 9 that may be a misread "g" and no % Daily Value settled it */
+  doubtful: boolean;
 }
 
 /** The readings an OCR'd amount allows, best first. */
@@ -101,7 +105,8 @@ function readAmount(field: LabelField, after: string): Amount | null {
     candidates.sort((a, b) => score(a) - score(b));
   }
   const best = candidates[0];
-  return { value: lessThan ? best.value / 2 : best.value, lessThan, reread: best.reread };
+  const doubtful = candidates.length > 1 && !best.reread && !(DAILY_VALUES[field] && PERCENT.test(after.slice(m[0].length)));
+  return { value: lessThan ? best.value / 2 : best.value, lessThan, reread: best.reread, doubtful };
 }
 
 function findAmount(text: string, field: keyof typeof FIELD_WORDS): Amount | null {
@@ -126,8 +131,8 @@ function cleanMeasure(text: string) {
 }
 
 /** "1 tortilla (45g)", "2/3 cup (55g)", "45g (1 tortilla)", "1 cup (240mL)", "17 slices (30g)". */
-function readServing(text: string, fields: LabelScanFields, notes: string[]) {
-  const m = /serving\s*size\s*:?\s*([^\n]*)/i.exec(text);
+function readServing(text: string, fields: LabelScanFields, notes: string[], doubtful: LabelField[]) {
+  const m = /se[rn][vu]ing\s*s[il1]ze\s*:?\s*([^\n]*)/i.exec(text);
   if (!m) return;
   let line = m[1];
   // In a one-line panel the next nutrient follows on the same line.
@@ -141,9 +146,12 @@ function readServing(text: string, fields: LabelScanFields, notes: string[]) {
   if (inParens) {
     metric = grams.exec(inParens[1]);
     if (!metric) {
-      // "(459)": a metric amount always has a unit, so a bare number ending in 9 had its "g" read as 9.
-      const bare = /^\s*(?:about\s*)?(\d+)9\s*$/i.exec(inParens[1]);
-      if (bare) metric = Object.assign([`${bare[1]}g`, bare[1], 'g'], { index: 0, input: inParens[1] }) as unknown as RegExpExecArray;
+      // "(459)", "(1500)": a metric amount always has a unit, so a bare number's last 9 or 0 was its "g".
+      const bare = /^\s*(?:about\s*)?(\d+)[90]\s*$/i.exec(inParens[1]);
+      if (bare) {
+        metric = Object.assign([`${bare[1]}g`, bare[1], 'g'], { index: 0, input: inParens[1] }) as unknown as RegExpExecArray;
+        notes.push(`Serving size: read “(${inParens[1].trim()})” as ${bare[1]} g.`);
+      }
     }
     household = line.slice(0, inParens.index);
     if (metric && cleanMeasure(household) === '') household = inParens[1].replace(metric[0], '');
@@ -158,6 +166,7 @@ function readServing(text: string, fields: LabelScanFields, notes: string[]) {
     if (unit === 'ml') fields.servingSizeMl = value;
     else fields.servingSizeG = value;
     if (unit === '9') notes.push(`Serving size: read “${metric[0]}” as ${value} g.`);
+    else if (/\d9$/.test(metric[1])) doubtful.push(unit === 'ml' ? 'servingSizeMl' : 'servingSizeG');
   }
   const label = cleanMeasure(household.replace(/[()]/g, ' '));
   if (label && /\d|[¼½¾⅓⅔⅛]/.test(label)) fields.servingLabel = label;
@@ -178,16 +187,39 @@ export function readLabelText(raw: string): LabelReading {
   const text = raw.replace(/\r\n?/g, '\n').replace(/[|]/g, ' ');
   const fields = emptyScanFields();
   const notes: string[] = [];
-  readServing(text, fields, notes);
+  const doubtful: LabelField[] = [];
+  readServing(text, fields, notes, doubtful);
   fields.kcal = readCalories(text);
   for (const field of Object.keys(FIELD_WORDS) as (keyof typeof FIELD_WORDS)[]) {
     const amount = findAmount(text, field);
     if (!amount) continue;
     fields[field] = amount.value;
+    if (amount.doubtful) doubtful.push(field);
     const unit = field === 'sodiumMg' ? 'mg' : 'g';
     if (amount.lessThan) notes.push(`${FIELD_WORDS[field]} said “less than ${amount.value * 2} ${unit}”: read as ${amount.value} ${unit}, the least it can be. Check it.`);
     if (amount.reread) notes.push(`${FIELD_WORDS[field]}: a “g” may have been read as a 9; read as ${amount.value} ${unit}.`);
   }
   const found = (Object.keys(fields) as LabelField[]).filter((k) => fields[k] !== null && !(k === 'servingSizeMl' && fields.servingSizeG !== null));
-  return { fields, found, notes };
+  return { fields, found, doubtful, notes };
+}
+
+/**
+ * Two readings of one photo combined: the second fills what the first missed and replaces what the
+ * first read doubtfully, when the second read it plainly.
+ */
+export function mergeReadings(first: LabelReading, second: LabelReading): LabelReading {
+  const fields = { ...first.fields };
+  const doubtful: LabelField[] = [];
+  for (const key of Object.keys(fields) as LabelField[]) {
+    const other = second.fields[key];
+    if (other === null) {
+      if (first.doubtful.includes(key)) doubtful.push(key);
+      continue;
+    }
+    if (fields[key] === null || (first.doubtful.includes(key) && !second.doubtful.includes(key))) (fields as Record<string, unknown>)[key] = other;
+    else if (first.doubtful.includes(key)) doubtful.push(key);
+  }
+  if (fields.servingSizeG !== null) fields.servingSizeMl = first.fields.servingSizeG !== null ? first.fields.servingSizeMl : second.fields.servingSizeMl;
+  const found = (Object.keys(fields) as LabelField[]).filter((k) => fields[k] !== null && !(k === 'servingSizeMl' && fields.servingSizeG !== null));
+  return { fields, found, doubtful, notes: [...new Set([...first.notes, ...second.notes])] };
 }

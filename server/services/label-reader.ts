@@ -11,7 +11,7 @@ import { createRequire } from 'node:module';
 import path from 'node:path';
 import sharp, { type Metadata } from 'sharp';
 import { createWorker, OEM, PSM, type Worker } from 'tesseract.js';
-import { readLabelText } from '../../shared/label-text';
+import { mergeReadings, readLabelText } from '../../shared/label-text';
 import type { LabelScanResponse } from '../../shared/schemas/foods';
 import { HttpError, badRequest } from '../lib/http-error';
 
@@ -51,7 +51,7 @@ function getWorker(): Promise<Worker> {
   if (!worker) {
     worker = (async () => {
       const w = await createWorker('eng', OEM.LSTM_ONLY, workerOptions());
-      await w.setParameters({ tessedit_pageseg_mode: PSM.SINGLE_BLOCK, user_defined_dpi: '300', preserve_interword_spaces: '1' });
+      await w.setParameters({ user_defined_dpi: '300', preserve_interword_spaces: '1' });
       return w;
     })();
     worker.catch(() => {
@@ -103,9 +103,10 @@ export async function prepareLabelImage(buffer: Buffer): Promise<Buffer> {
 }
 
 /** OCR of a prepared image, queued behind any scan already running. */
-async function recognise(image: Buffer): Promise<{ text: string; confidence: number }> {
+async function recognise(image: Buffer, psm: PSM = PSM.SINGLE_BLOCK): Promise<{ text: string; confidence: number }> {
   const run = queue.then(async () => {
     const w = await getWorker();
+    await w.setParameters({ tessedit_pageseg_mode: psm });
     const { data } = await w.recognize(image);
     return { text: data.text, confidence: data.confidence };
   });
@@ -113,15 +114,27 @@ async function recognise(image: Buffer): Promise<{ text: string; confidence: num
   return run;
 }
 
+/**
+ * One reading as a single block of text; when fields are missing or doubtful, a second one at a larger
+ * scale with automatic page layout (side-by-side columns), the two combined (mergeReadings).
+ */
 export async function readLabelPhoto(buffer: Buffer): Promise<LabelScanResponse> {
   const image = await prepareLabelImage(buffer);
   let ocr: { text: string; confidence: number };
+  let reading;
   try {
     ocr = await recognise(image);
+    reading = readLabelText(ocr.text);
+    if (reading.found.length >= 2 && (reading.found.length < 10 || reading.doubtful.length > 0)) {
+      const { width } = await sharp(image).metadata();
+      const larger = await sharp(image).resize({ width: Math.round((width ?? MIN_WIDTH_PX) * 1.25) }).png({ compressionLevel: 1 }).toBuffer();
+      const second = await recognise(larger, PSM.AUTO);
+      reading = mergeReadings(reading, readLabelText(second.text));
+      ocr = { text: `${ocr.text}\n${second.text}`, confidence: (ocr.confidence + second.confidence) / 2 };
+    }
   } catch (error) {
     throw new HttpError(503, 'ocr_failed', `The label could not be read this time (${String((error as Error)?.message ?? error).slice(0, 120)}). Try again, or type the numbers in.`);
   }
-  const reading = readLabelText(ocr.text);
   const amounts = reading.found.filter((f) => f !== 'servingLabel' && f !== 'servingSizeG' && f !== 'servingSizeMl');
   if (amounts.length < 2) {
     throw new HttpError(422, 'no_label_found', 'No Nutrition Facts panel could be read in this photo. Fill the frame with the panel, hold the phone straight, and avoid glare — or type the numbers in.', {
