@@ -3,18 +3,20 @@ import path from 'node:path';
 import { build } from 'vite';
 import { resolveDatabaseUrl } from './database-url';
 import { ensureS3 } from './local-s3';
-import { loadConfig } from '../server/config';
-import { openServices, prepareDatabase } from '../server/boot';
+import { deploymentWarnings, loadConfig } from '../server/config';
+import { keepServingOnStrayRejections, openServices, prepareDatabase } from '../server/boot';
 import { createApp } from '../server/app';
 import { DEMO_ACCOUNTS } from '../server/seeders/demo-accounts';
 import { getFoodEngine } from '../server/services/food-engine';
 import { createMailContext } from '../server/mail-context';
 
 const started = Date.now();
+keepServingOnStrayRejections();
 const db = await resolveDatabaseUrl('postgres', Number(process.env.PG_PORT ?? 54329), 'hearthswap');
 process.env.DATABASE_URL = db.url;
 const s3 = await ensureS3('.data/s3', Number(process.env.S3_LOCAL_PORT ?? 0));
 const config = loadConfig(process.env, { clientDir: path.resolve('dist/client') });
+for (const warning of deploymentWarnings(config)) console.warn(`Warning: ${warning}`);
 
 const services = await openServices(config);
 const report = await prepareDatabase(config, services);

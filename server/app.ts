@@ -1,8 +1,7 @@
-import express, { type RequestHandler } from 'express';
+import express from 'express';
 import session from 'express-session';
 import connectPgSimple from 'connect-pg-simple';
 import helmet from 'helmet';
-import { csrfSync } from 'csrf-sync';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { Sequelize } from 'sequelize';
@@ -23,6 +22,8 @@ import { clientsRouter, commentsRouter, invitationsRouter, myCoachRouter, outbox
 import { requireRole } from './middleware/auth';
 import { prepRouter, shoppingListsRouter } from './routes/prep';
 import { parse } from './middleware/validate';
+import { rejectUnsafeText } from './middleware/text-safety';
+import { createCsrf } from './middleware/csrf';
 import { HttpError } from './lib/http-error';
 import type { Mailer, StoredMail } from './mail';
 
@@ -41,9 +42,6 @@ const NO_MAILER: Mailer = {
     throw new HttpError(503, 'mail_unavailable', 'E-mail is not configured on this server (set SMTP_HOST and SMTP_PORT).');
   },
 };
-
-/** Routes that compute and change nothing: callable without a CSRF token (anonymous API use). */
-const CSRF_EXEMPT = new Set(['/api/analyze', '/api/rewrite', '/api/targets/estimate']);
 
 export function createApp(context: AppContext) {
   const { config, sequelize, sessionPool } = context;
@@ -65,6 +63,10 @@ export function createApp(context: AppContext) {
     }),
   );
   app.use(express.json({ limit: '1mb' }));
+  app.use(rejectUnsafeText);
+  // Before the session: a probe never needs one, and must answer { db: 'down' } even when the
+  // session store cannot be read.
+  app.use('/api/health', healthRouter(sequelize));
 
   const PgStore = connectPgSimple(session);
   app.use(
@@ -87,17 +89,12 @@ export function createApp(context: AppContext) {
   app.use(passport.initialize());
   app.use(passport.session());
 
-  const { generateToken, csrfSynchronisedProtection } = csrfSync({
-    getTokenFromRequest: (req) => req.headers['x-csrf-token'] as string | undefined,
-  });
-  const csrf: RequestHandler = (req, res, next) =>
-    CSRF_EXEMPT.has(req.originalUrl.split('?')[0]) ? next() : csrfSynchronisedProtection(req, res, next);
+  const csrf = createCsrf(config);
 
   const limits = createRateLimits(config.limits);
   const api = express.Router();
-  api.use(csrf);
-  api.use('/health', healthRouter(sequelize));
-  api.use('/auth', authRouter(limits, (req) => generateToken(req), mail));
+  api.use(csrf.protect);
+  api.use('/auth', authRouter({ sequelize, limits, csrf, mail }));
   api.use('/admin', adminRouter());
   api.use('/analyze', analyzeRouter(sequelize, limits.compute));
   api.use('/foods', foodsRouter(sequelize));
@@ -105,7 +102,7 @@ export function createApp(context: AppContext) {
   api.use('/recipes/:id/versions/:number/comments', commentsRouter());
   api.use('/recipes/:id/versions/:number/prep', prepRouter(sequelize));
   api.use('/shopping-lists', shoppingListsRouter(sequelize));
-  api.use('/recipes', recipesRouter(sequelize, config));
+  api.use('/recipes', recipesRouter(sequelize, config, limits));
   api.use('/swaps', swapsRouter(sequelize));
   api.use('/clients', clientsRouter(sequelize, mail));
   api.use('/invitations', invitationsRouter(sequelize));

@@ -15,6 +15,15 @@ import { createMailContext } from './mail-context';
 // Sequelize models are bound to one instance per process, so apps in one process (tests) share it.
 const shared = new Map<string, { sequelize: Sequelize; users: number; foodSync: FoodSync }>();
 
+/**
+ * A promise nobody awaited (a background mail, a store callback) must not take every signed-in
+ * cook's request down with it: log it and keep serving. Route errors never get here; Express 5
+ * hands them to the error handler.
+ */
+export function keepServingOnStrayRejections(log: (message: string, reason: unknown) => void = console.error) {
+  process.on('unhandledRejection', (reason) => log('Unhandled promise rejection (still serving):', reason));
+}
+
 /** Everything a running server holds, so that tests and scripts can start and stop it cleanly. */
 export async function openServices(config: AppConfig) {
   let entry = shared.get(config.databaseUrl);
@@ -26,7 +35,10 @@ export async function openServices(config: AppConfig) {
   entry.users++;
   const { sequelize } = entry;
   await sequelize.authenticate();
-  const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5 });
+  const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, connectionTimeoutMillis: 5_000 });
+  // An idle client losing its connection (PostgreSQL restarting) emits 'error' on the pool; without a
+  // listener Node would exit. The pool drops that client and the next request connects afresh.
+  sessionPool.on('error', (error) => console.warn(`Session store: lost a database connection (${error.message}).`));
   let closed = false;
   const close = async () => {
     if (closed) return;

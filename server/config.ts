@@ -42,6 +42,7 @@ export interface RateLimitConfig {
   signupsPerHour: number;
   anonymousComputePerMin: number;
   userComputePerMin: number;
+  recipeImportsPerHour: number;
 }
 
 export const DEFAULT_SESSION_SECRET = 'hearthswap-development-secret-change-me';
@@ -51,6 +52,7 @@ export const DEFAULT_LIMITS: RateLimitConfig = {
   signupsPerHour: 30,
   anonymousComputePerMin: 60,
   userComputePerMin: 600,
+  recipeImportsPerHour: 60,
 };
 
 function parseTrustProxy(value: string | undefined): number | boolean {
@@ -82,4 +84,30 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     throw new Error('SESSION_SECRET must be at least 32 characters in production.');
   }
   return config;
+}
+
+/**
+ * Start-up warnings for a production server whose cookie settings look wrong for where it runs.
+ * The app itself speaks plain HTTP, so in production TLS is terminated in front of it: unless
+ * Express trusts that proxy (TRUST_PROXY) or the cookie is forced Secure (COOKIE_SECURE=true),
+ * the session cookie goes out without its Secure flag.
+ */
+export function deploymentWarnings(config: AppConfig, env: NodeJS.ProcessEnv = process.env): string[] {
+  if (config.env !== 'production') return [];
+  const warnings: string[] = [];
+  if (config.secureCookies === false) {
+    warnings.push('COOKIE_SECURE=false: the session cookie will be sent over plain HTTP. Remove it, or set COOKIE_SECURE=true behind HTTPS.');
+  } else if (config.secureCookies === 'auto' && config.trustProxy === false) {
+    warnings.push(
+      'TRUST_PROXY is not set, so behind a TLS-terminating proxy every request looks like plain HTTP and the session cookie loses its Secure flag. ' +
+        'Set TRUST_PROXY to the number of proxies in front of Hearthswap (usually 1), or COOKIE_SECURE=true.',
+    );
+  }
+  if (config.trustProxy === true) {
+    warnings.push('TRUST_PROXY=true trusts every X-Forwarded-For hop, so clients can choose the address rate limits see. Set the number of proxies instead (usually 1).');
+  }
+  if (env.APP_URL && !env.APP_URL.startsWith('https://')) {
+    warnings.push(`APP_URL is ${env.APP_URL}: links in e-mails will use plain HTTP. Give the public https:// address.`);
+  }
+  return warnings;
 }

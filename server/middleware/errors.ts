@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { HttpError } from '../lib/http-error';
+import { isDatabaseUnavailable } from '../lib/database-errors';
 
 export const apiNotFound: RequestHandler = (req, res) => {
   res.status(404).json({ error: { code: 'not_found', message: `No API route ${req.method} ${req.path}.` } });
@@ -35,6 +36,13 @@ export function errorHandler(log: (error: unknown) => void = console.error): Err
     }
     if (typeof e?.status === 'number' && e.status >= 400 && e.status < 500) {
       res.status(e.status).json({ error: { code: 'bad_request', message: e.message || 'Bad request.' } });
+      return;
+    }
+    if (isDatabaseUnavailable(error)) {
+      res.setHeader('Retry-After', '5');
+      res.status(503).json({
+        error: { code: 'database_unavailable', message: 'The database is not reachable just now. Nothing was changed; try again in a few seconds.' },
+      });
       return;
     }
     log(error);

@@ -47,7 +47,16 @@ export function createRateLimits(limits: RateLimitConfig) {
     legacyHeaders: false,
     message: tooMany('Too many requests in a minute. Slow down a little, or sign in for a higher limit.'),
   });
-  return { login: [loginFailuresByIp, loginFailuresByAccount], signups, compute };
+  /** Each import parses a file and matches every line: kept to a cook's pace, not a script's. */
+  const recipeImports: RequestHandler = rateLimit({
+    windowMs: HOUR,
+    limit: limits.recipeImportsPerHour,
+    keyGenerator: (req) => (req.user ? `user:${req.user.id}` : ipKey(req)),
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    message: tooMany('Too many recipe imports in an hour. Try again later, or paste the recipe instead.'),
+  });
+  return { login: [loginFailuresByIp, loginFailuresByAccount], signups, compute, recipeImports };
 }
 
 export type RateLimits = ReturnType<typeof createRateLimits>;

@@ -1,8 +1,10 @@
-import { Router, type Request } from 'express';
+import { Router, type Request, type Response } from 'express';
+import type { Sequelize } from 'sequelize';
+import type { Csrf } from '../middleware/csrf';
 import passport from 'passport';
 import { loginSchema, registerSchema, updateMeSchema } from '../../shared/schemas/auth';
 import { passwordResetConfirmSchema, passwordResetRequestSchema } from '../../shared/schemas/coaching';
-import { confirmPasswordReset, requestPasswordReset } from '../services/password-reset';
+import { confirmPasswordReset, requestPasswordResetInBackground } from '../services/password-reset';
 import type { Mailer } from '../mail';
 import { parse } from '../middleware/validate';
 import { requireAuth } from '../middleware/auth';
@@ -11,24 +13,29 @@ import { HttpError } from '../lib/http-error';
 import type { RateLimits } from '../middleware/rate-limits';
 import type { User } from '../models';
 
-function logIn(req: Request, user: User) {
-  // passport regenerates the session id on login; keepSessionInfo carries the CSRF token across.
-  return new Promise<void>((resolve, reject) => {
-    req.login(user, { session: true, keepSessionInfo: true }, (error) => (error ? reject(error) : resolve()));
-  });
-}
-
-export function authRouter(limits: RateLimits, generateCsrfToken: (req: Request) => string, mail: { mailer: Mailer; appUrl: string }) {
+export function authRouter({ sequelize, limits, csrf, mail }: { sequelize: Sequelize; limits: RateLimits; csrf: Csrf; mail: { mailer: Mailer; appUrl: string } }) {
   const router = Router();
 
+  function logIn(req: Request, res: Response, user: User) {
+    // passport regenerates the session id on login; keepSessionInfo carries session data across,
+    // and the visitor's anonymous CSRF token moves into the session.
+    return new Promise<void>((resolve, reject) => {
+      req.login(user, { session: true, keepSessionInfo: true }, (error) => {
+        if (error) return reject(error);
+        csrf.adoptAnonymousToken(req, res);
+        resolve();
+      });
+    });
+  }
+
   router.get('/csrf', (req, res) => {
-    res.json({ token: generateCsrfToken(req) });
+    res.json({ token: csrf.generateToken(req) });
   });
 
   router.post('/register', limits.signups, async (req, res) => {
     const input = parse(registerSchema, req.body);
     const user = await createUser(input);
-    await logIn(req, user);
+    await logIn(req, res, user);
     res.status(201).json(user.toPublic());
   });
 
@@ -40,7 +47,7 @@ export function authRouter(limits: RateLimits, generateCsrfToken: (req: Request)
       )(req, res, reject);
     });
     if (!user) throw new HttpError(401, 'invalid_credentials', 'That e-mail and password do not match an account.');
-    await logIn(req, user);
+    await logIn(req, res, user);
     res.json(user.toPublic());
   });
 
@@ -56,13 +63,13 @@ export function authRouter(limits: RateLimits, generateCsrfToken: (req: Request)
 
   router.post('/password-reset', limits.signups, async (req, res) => {
     const { email } = parse(passwordResetRequestSchema, req.body);
-    await requestPasswordReset(email, mail);
+    requestPasswordResetInBackground(email, mail);
     res.status(202).json({ ok: true, message: 'If that address has an account, a reset link is on its way.' });
   });
 
   router.post('/password-reset/confirm', async (req, res) => {
     const { token, password } = parse(passwordResetConfirmSchema, req.body);
-    await confirmPasswordReset(token, password);
+    await confirmPasswordReset(sequelize, token, password, req.sessionID ?? null);
     res.json({ ok: true });
   });
 

@@ -8,8 +8,10 @@ import {
   idParam,
   recipeListQuerySchema,
   updateRecipeSchema,
+  photoUploadFieldsSchema,
   versionParam,
 } from '../../shared/schemas/recipes';
+import { MAX_LINES } from '../../shared/schemas/analyze';
 import { parse } from '../middleware/validate';
 import { requireAuth } from '../middleware/auth';
 import { getFoodEngine } from '../services/food-engine';
@@ -24,11 +26,14 @@ import {
   listVersions,
   recipeDetail,
   restoreVersion,
+  setRecipePhoto,
   undeleteRecipe,
   updateRecipe,
   versionDetail,
 } from '../services/recipes';
-import { parseRecipeFile } from '../services/recipe-import';
+import { parseRecipeFile, type ImportedRecipe } from '../services/recipe-import';
+import { assertSafeText } from '../middleware/text-safety';
+import type { RateLimits } from '../middleware/rate-limits';
 import { toJsonLd } from '../services/recipe-export';
 import { MAX_PHOTO_BYTES, processPhoto, readPhoto, removePhoto, storePhoto } from '../services/photo-storage';
 import { HttpError, badRequest } from '../lib/http-error';
@@ -37,7 +42,26 @@ import { singleFile } from '../middleware/upload';
 
 const MAX_IMPORT_BYTES = 1024 * 1024;
 
-export function recipesRouter(sequelize: Sequelize, config: AppConfig) {
+/** An imported file passes the same schema and limits as a typed recipe; failures name the field in the file. */
+function importedRecipeInput(imported: ImportedRecipe) {
+  const input = {
+    title: imported.title,
+    servings: imported.servings,
+    notes: imported.notes,
+    method: imported.method,
+    // One line past the limit is enough for the schema to refuse; no need to build 100,000 objects.
+    lines: imported.ingredients.slice(0, MAX_LINES + 1).map((line) => ({ input: line })),
+  };
+  try {
+    assertSafeText(input);
+    return parse(createRecipeSchema, input);
+  } catch (error) {
+    if (error instanceof HttpError) throw new HttpError(400, error.code, `file: the recipe in this file cannot be saved as it is — ${error.message}`, error.details);
+    throw error;
+  }
+}
+
+export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: RateLimits) {
   const router = Router();
   router.use(requireAuth);
   const engine = () => getFoodEngine(sequelize);
@@ -53,16 +77,10 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig) {
     res.status(201).json(await recipeDetail(recipe));
   });
 
-  router.post('/import', singleFile(MAX_IMPORT_BYTES, 'recipe file'), async (req, res) => {
+  router.post('/import', limits.recipeImports, singleFile(MAX_IMPORT_BYTES, 'recipe file'), async (req, res) => {
     if (!req.file) throw badRequest('file: attach the recipe in the form field "file".', { fieldErrors: { file: ['Required.'] } });
     const imported = parseRecipeFile(req.file.buffer);
-    const recipe = await createRecipe(sequelize, await engine(), req.user!, {
-      title: imported.title,
-      servings: imported.servings,
-      notes: imported.notes,
-      method: imported.method,
-      lines: imported.ingredients.map((input) => ({ input })),
-    });
+    const recipe = await createRecipe(sequelize, await engine(), req.user!, importedRecipeInput(imported));
     res.status(201).json({ ...(await recipeDetail(recipe)), importedFrom: imported.format });
   });
 
@@ -133,18 +151,21 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig) {
 
   router.post('/:id/photo', singleFile(MAX_PHOTO_BYTES, 'photo'), async (req, res) => {
     const { id } = parse(idParam, req.params);
-    const recipe = await Recipe.findOne({ where: { id, ownerId: req.user!.id, deletedAt: null } });
-    if (!recipe) throw new HttpError(404, 'not_found', 'No recipe with that id.');
+    const { revision } = parse(photoUploadFieldsSchema, req.body);
+    const owned = await Recipe.findOne({ where: { id, ownerId: req.user!.id, deletedAt: null } });
+    if (!owned) throw new HttpError(404, 'not_found', 'No recipe with that id.');
     if (!req.file) throw badRequest('file: attach the photo in the form field "file".', { fieldErrors: { file: ['Required.'] } });
     const image = await processPhoto(req.file.buffer);
-    const stored = await storePhoto(config.s3, recipe.id, image);
-    const previous = recipe.photoKey;
-    recipe.photoKey = stored.key;
-    recipe.photoType = stored.type;
-    recipe.revision += 1;
-    await recipe.save();
-    if (previous) await removePhoto(config.s3, previous);
-    res.status(201).json(await recipeDetail(recipe));
+    const stored = await storePhoto(config.s3, owned.id, image);
+    let saved: Awaited<ReturnType<typeof setRecipePhoto>>;
+    try {
+      saved = await setRecipePhoto(sequelize, req.user!, id, revision, stored);
+    } catch (error) {
+      await removePhoto(config.s3, stored.key);
+      throw error;
+    }
+    if (saved.previousKey) await removePhoto(config.s3, saved.previousKey);
+    res.status(201).json(await recipeDetail(saved.recipe));
   });
 
   router.get('/:id/photo', async (req, res) => {

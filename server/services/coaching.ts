@@ -169,6 +169,13 @@ export async function acceptInvitation(sequelize: Sequelize, viewer: User, token
     const inv = await usableInvitation(token);
     await Invitation.findOne({ where: { id: inv.id }, transaction, lock: transaction.LOCK.UPDATE });
     if (viewer.role !== 'cook') throw forbidden('Only a cook account can join a coach. Sign in with your cook account.');
+    if (inv.email.trim().toLowerCase() !== viewer.email.trim().toLowerCase()) {
+      throw new HttpError(
+        403,
+        'invitation_other_address',
+        'This invitation was sent to a different e-mail address. Sign in with the account for that address, or ask your coach to invite the address you use here.',
+      );
+    }
     if (viewer.coachId && viewer.coachId !== inv.coachId) {
       throw new HttpError(409, 'conflict', 'You already have a coach. Leave them first on “My coach”, then open this link again.');
     }

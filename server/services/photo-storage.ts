@@ -40,7 +40,12 @@ export async function processPhoto(buffer: Buffer): Promise<Buffer> {
     throw badRequest('file: this is not an image Hearthswap can read; upload a JPEG, PNG or WebP photo.');
   }
   if (!format || !ACCEPTED.has(format)) throw badRequest(`file: ${format ?? 'this'} images are not accepted; upload a JPEG, PNG or WebP photo.`);
-  return sharp(buffer).rotate().resize({ width: MAX_EDGE_PX, height: MAX_EDGE_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 82 }).toBuffer();
+  try {
+    return await sharp(buffer).rotate().resize({ width: MAX_EDGE_PX, height: MAX_EDGE_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 82 }).toBuffer();
+  } catch {
+    // The header read fine but the pixels do not decode: a truncated or damaged file.
+    throw badRequest('file: This file is not a readable photo (it may be cut short or damaged); upload the JPEG, PNG or WebP again.');
+  }
 }
 
 export async function storePhoto(config: S3Config | null, recipeId: number, image: Buffer): Promise<{ key: string; type: string }> {

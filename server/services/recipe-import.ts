@@ -10,6 +10,25 @@ export interface ImportedRecipe {
 }
 
 const MAX_SERVINGS = 100;
+/** schema.org Recipe files nest a few levels (graph → recipe → sections → steps); 64 is generous. */
+export const MAX_JSON_DEPTH = 64;
+
+/** The deepest [ / { nesting in JSON text, counted without recursion (strings skipped). */
+export function jsonNestingDepth(text: string): number {
+  let depth = 0;
+  let deepest = 0;
+  let inString = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (inString) {
+      if (c === 0x5c) i++; // backslash: skip the escaped character
+      else if (c === 0x22) inString = false;
+    } else if (c === 0x22) inString = true;
+    else if (c === 0x5b || c === 0x7b) deepest = Math.max(deepest, ++depth);
+    else if (c === 0x5d || c === 0x7d) depth--;
+  }
+  return deepest;
+}
 
 function clampServings(n: number | null): number {
   if (n === null || !Number.isFinite(n) || n < 1) return 4;
@@ -141,6 +160,9 @@ export function parseRecipeFile(buffer: Buffer): ImportedRecipe {
   if (text.includes('\uFFFD')) throw badRequest('file: the file is not UTF-8 text; upload a .txt or .md recipe or a schema.org Recipe .json/.jsonld file.');
   const trimmed = text.trim();
   if (trimmed.startsWith('{') || trimmed.startsWith('[')) {
+    if (jsonNestingDepth(trimmed) > MAX_JSON_DEPTH) {
+      throw badRequest(`file: the JSON is nested more than ${MAX_JSON_DEPTH} levels deep; a recipe file is never that deep.`);
+    }
     let doc: unknown;
     try {
       doc = JSON.parse(trimmed);

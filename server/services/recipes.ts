@@ -228,6 +228,30 @@ export async function updateRecipe(
   });
 }
 
+/**
+ * Points the recipe at a newly stored photo. The row is locked and the revision bumped in one
+ * transaction, so a concurrent edit and a photo can never be acknowledged as the same revision;
+ * a stale `revision` (when the client sends one) is a 409. Returns the photo key it replaced.
+ */
+export async function setRecipePhoto(
+  sequelize: Sequelize,
+  viewer: User,
+  id: number,
+  revision: number | undefined,
+  photo: { key: string; type: string },
+): Promise<{ recipe: Recipe; previousKey: string | null }> {
+  return sequelize.transaction(async (transaction) => {
+    const recipe = await findOwnRecipe(viewer, id, transaction);
+    if (revision !== undefined) checkRevision(recipe, revision);
+    const previousKey = recipe.photoKey;
+    recipe.photoKey = photo.key;
+    recipe.photoType = photo.type;
+    recipe.revision += 1;
+    await recipe.save({ transaction });
+    return { recipe, previousKey };
+  });
+}
+
 export async function deleteRecipe(sequelize: Sequelize, viewer: User, id: number, revision: number) {
   return sequelize.transaction(async (transaction) => {
     const recipe = await findOwnRecipe(viewer, id, transaction);

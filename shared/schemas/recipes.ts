@@ -40,7 +40,7 @@ export const createRecipeSchema = z
     notes: notes.optional(),
     method: notes.optional(),
     text: z.string().max(MAX_TEXT_CHARS).optional(),
-    lines: z.array(versionLineSchema).max(MAX_LINES).optional(),
+    lines: z.array(versionLineSchema).max(MAX_LINES, { message: `A recipe has at most ${MAX_LINES} lines.` }).optional(),
   })
   .refine((v) => v.text !== undefined || v.lines !== undefined, { message: 'Send the ingredients as text or as lines.', path: ['text'] });
 
@@ -52,11 +52,16 @@ export const updateRecipeSchema = z.object({
   method: notes.optional(),
 });
 
+/** Form fields beside a photo upload: the revision the client read, checked when sent. */
+export const photoUploadFieldsSchema = z.object({
+  revision: z.coerce.number({ message: 'revision must be the revision you read.' }).int().min(1).optional(),
+});
+
 export const deleteRecipeSchema = z.object({ revision: z.coerce.number({ message: 'revision is required: send the revision you read.' }).int().min(1) });
 
 export const createVersionSchema = z.object({
   kind: z.enum(VERSION_KINDS, { message: 'kind is one of original, rewrite, edit.' }),
-  lines: z.array(versionLineSchema).min(1, { message: 'A version needs at least one line.' }).max(MAX_LINES),
+  lines: z.array(versionLineSchema).min(1, { message: 'A version needs at least one line.' }).max(MAX_LINES, { message: `A recipe has at most ${MAX_LINES} lines.` }),
   servings: servingsSchema.optional(),
   targets: targetsSchema.nullable().optional(),
   note: z.string().max(2_000, { message: 'note is at most 2,000 characters.' }).optional(),

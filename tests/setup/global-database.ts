@@ -13,7 +13,7 @@ export default async function setup(project: TestProject) {
   let stop = () => {};
   let url = process.env.HEARTHSWAP_TEST_DATABASE_URL;
   if (!url) {
-    const server = await startPrivatePostgres({ dataDir: '.data/postgres-test', port: Number(process.env.PG_TEST_PORT ?? 54330), database: 'postgres' });
+    const server = await startPrivatePostgres({ dataDir: '.data/postgres-test', port: Number(process.env.PG_TEST_PORT ?? 54330), database: 'postgres', durable: false });
     stop = server.stop;
     url = server.url.replace(/\/postgres$/, '/hearthswap_test');
     await recreateDatabase(server.url, 'hearthswap_test');
@@ -40,6 +40,7 @@ export default async function setup(project: TestProject) {
 
 async function recreateDatabase(adminUrl: string, name: string) {
   const client = new pg.Client({ connectionString: adminUrl });
+  client.on('error', () => {}); // a dropped connection fails the query instead of crashing the process
   await client.connect();
   try {
     await client.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`);

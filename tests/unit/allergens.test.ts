@@ -2,12 +2,12 @@
  * Major food allergens of US law: FALCPA (Food Allergen Labeling and Consumer Protection Act of 2004)
  * names milk, egg, fish, crustacean shellfish, tree nuts, peanuts, wheat and soybeans; the FASTER Act
  * of 2021 added sesame. Foods are real SR28 entries (names and groups checked below against
- * ../shared/reference/usda-sr28/FOOD_DES.txt) plus custom foods, which have no group.
+ * tests/reference/usda-sr28/FOOD_DES.txt.gz) plus custom foods, which have no group.
  */
 import { describe, expect, it } from 'vitest';
 import { ALLERGENS, ALLERGEN_LABELS, allergensOf, allergensOfRecipe, type Allergen } from '../../shared/allergens';
 import type { Role } from '../../shared/food';
-import { readFoodDes } from '../helpers/sr28';
+import { readFoodDes } from '../helpers/reference-data';
 
 interface Case {
   ndb: string;

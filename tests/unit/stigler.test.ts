@@ -1,19 +1,10 @@
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { LpModel } from '../../shared/rewrite/lp-model';
 import { toLpFormat } from '../../shared/rewrite/lp-format';
 import { solveLp } from '../../shared/rewrite/solve-lp';
+import { readStigler } from '../helpers/reference-data';
 
-interface StiglerReference {
-  nutrients: { name: string; dailyMinimum: number }[];
-  commodities: { name: string; perDollar: number[] }[];
-  expected: { dailyCostDollars: number; annualCostDollars: number; basis: string[] };
-}
-
-const reference: StiglerReference = JSON.parse(
-  readFileSync(path.resolve(process.cwd(), '../shared/reference/stigler-1945.json'), 'utf8'),
-);
+const reference = readStigler();
 
 /** Dollars per day on each commodity, minimising the total, every nutrient at or above its daily minimum. */
 function stiglerModel(): LpModel {

