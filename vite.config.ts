@@ -1,12 +1,19 @@
 import { defineConfig } from 'vitest/config';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { compression } from 'vite-plugin-compression2';
 import { fileURLToPath } from 'node:url';
 
 const apiPort = Number(process.env.PORT ?? 3000);
 
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  plugins: [
+    react(),
+    tailwindcss(),
+    // .br and .gz beside each script and style sheet at the strongest settings, served as they are
+    // (server/app.ts), so no request pays for compressing them
+    compression({ include: /\.(js|css)$/, threshold: 1024, algorithms: ['gzip', 'brotliCompress'], logLevel: 'silent' }),
+  ],
   resolve: {
     alias: {
       '@shared': fileURLToPath(new URL('./shared', import.meta.url)),
@@ -18,7 +25,8 @@ export default defineConfig({
     port: 5173,
     proxy: { '/api': `http://127.0.0.1:${apiPort}` },
   },
-  build: { outDir: 'dist/client', emptyOutDir: true },
+  // the manifest lets the server preload each page's chunks (server/lib/client-shell.ts)
+  build: { outDir: 'dist/client', emptyOutDir: true, manifest: true },
   test: {
     projects: [
       {

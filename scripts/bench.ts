@@ -1,6 +1,9 @@
 /** `npm run bench`: speed and memory figures, printed. Targets live here, not in timed tests. */
 import { resolveDatabaseUrl } from './database-url';
 import { runServerBench } from '../tests/bench/server-bench';
+import { rssMb, startBenchServer } from '../tests/bench/bench-server';
+import { runBrowserBench } from '../tests/bench/browser-bench';
+import { machineLoad, printLoad, runLoad, scenarios, signInCookie } from '../tests/bench/load-bench';
 
 const db = await resolveDatabaseUrl('postgres', Number(process.env.PG_PORT ?? 54329), 'hearthswap');
 console.log('== Server: analysis, search, start-up, memory, isolation of the solver ==');
@@ -13,6 +16,19 @@ for (const [title, file, fn] of benches) {
   console.log(`\n== ${title} ==`);
   const mod = (await import(file)) as Record<string, () => Promise<void>>;
   await mod[fn]();
+}
+
+console.log('\n== Serving process: compiled server under node, memory, first visit in Chromium, load mix ==');
+const server = await startBenchServer({ LIMIT_ANONYMOUS_COMPUTE_PER_MIN: '100000000', LIMIT_USER_COMPUTE_PER_MIN: '100000000', HEARTHSWAP_QUIET: '1' }, db.url);
+try {
+  await new Promise((r) => setTimeout(r, 2_000));
+  console.log(`serving process RSS after start: ${rssMb(server.pid).toFixed(0)} MB (goal ≤ 350 MB); ${machineLoad()}`);
+  await runBrowserBench(server.url);
+  const mix = scenarios(await signInCookie(server.url)).at(-1)!;
+  printLoad(await runLoad(server.url, server.pid, mix, 20));
+  console.log(`(npm run bench:load runs every load scenario; ${machineLoad()})`);
+} finally {
+  await server.stop();
 }
 db.stop();
 process.exit(0);

@@ -1,48 +1,69 @@
-/** `npm start`: database up, migrate, seed, build the client, serve API and client from one process. */
-import path from 'node:path';
-import { build } from 'vite';
+/**
+ * `npm start`: database up (a private cluster unless DATABASE_URL is set), photo store up, then in
+ * separate processes: migrate + seed, build the client (Vite) and compile the server (esbuild), and
+ * finally serve with plain `node dist/server/index.js`. The serving process compiles nothing and
+ * holds no build tools. Ctrl-C stops everything, the database included.
+ */
+import { spawn } from 'node:child_process';
 import { resolveDatabaseUrl } from './database-url';
 import { ensureS3 } from './local-s3';
-import { deploymentWarnings, loadConfig } from '../server/config';
-import { keepServingOnStrayRejections, openServices, prepareDatabase } from '../server/boot';
-import { createApp } from '../server/app';
-import { DEMO_ACCOUNTS } from '../server/seeders/demo-accounts';
-import { getFoodEngine } from '../server/services/food-engine';
-import { createMailContext } from '../server/mail-context';
+import { buildServer } from './build-server';
 
 const started = Date.now();
-keepServingOnStrayRejections();
 const db = await resolveDatabaseUrl('postgres', Number(process.env.PG_PORT ?? 54329), 'hearthswap');
 process.env.DATABASE_URL = db.url;
 const s3 = await ensureS3('.data/s3', Number(process.env.S3_LOCAL_PORT ?? 0));
-const config = loadConfig(process.env, { clientDir: path.resolve('dist/client') });
-for (const warning of deploymentWarnings(config)) console.warn(`Warning: ${warning}`);
+console.log(`Database ready (${db.private ? 'private cluster in .data/postgres' : 'DATABASE_URL'})`);
 
-const services = await openServices(config);
-const report = await prepareDatabase(config, services);
-console.log(`Database ready (${db.private ? 'private cluster in .data/postgres' : 'DATABASE_URL'}); seeded: ${JSON.stringify(report)}`);
-
-if (!process.env.SKIP_BUILD) {
-  console.log('Building the client…');
-  await build({ logLevel: 'warn' });
+function run(command: string, args: string[], env: NodeJS.ProcessEnv = process.env) {
+  return new Promise<void>((resolve, reject) => {
+    const child = spawn(command, args, { stdio: 'inherit', env });
+    child.on('error', reject);
+    child.on('exit', (code, signal) => (code === 0 ? resolve() : reject(new Error(`${command} ${args.join(' ')} ended with ${signal ?? `code ${code}`}`))));
+  });
 }
 
-const engine = await getFoodEngine(services.sequelize);
-console.log(`Catalogue loaded: ${engine.foods.length} foods, indexes built in ${engine.builtMs.toFixed(0)} ms`);
-const mail = await createMailContext(config);
-const app = createApp({ config, ...services, mail: mail.mail });
-const server = app.listen(config.port, config.host, () => {
-  console.log(`\nHearthswap is serving on http://${config.host}:${config.port}  (ready in ${((Date.now() - started) / 1000).toFixed(1)} s)`);
-  if (config.env !== 'production') {
-    console.log('Demo sign-in:');
-    for (const a of DEMO_ACCOUNTS) console.log(`  ${a.role.padEnd(6)} ${a.email} / ${a.password}`);
-  }
-  console.log('Press Ctrl-C to stop.');
-});
+async function stopAll(code: number) {
+  await s3.close().catch(() => {});
+  db.stop();
+  process.exit(code);
+}
 
-const shutdown = () => {
-  server.close();
-  Promise.allSettled([services.close(), s3.close(), mail.close()]).finally(() => process.exit(0));
+try {
+  const server = await buildServer();
+  console.log(`Server compiled to dist/server in ${server.ms.toFixed(0)} ms`);
+  const client = process.env.SKIP_BUILD ? Promise.resolve() : (console.log('Building the client…'), run(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn'], { ...process.env, NODE_ENV: 'production' }));
+  await Promise.all([run(process.execPath, ['dist/server/prepare.js']), client]);
+} catch (error) {
+  console.error(String(error));
+  await stopAll(1);
+}
+
+let stopping = false;
+let serving = serve();
+const restarts: number[] = [];
+console.log(`Serving process ${serving.pid} started ${((Date.now() - started) / 1000).toFixed(1)} s after npm start. Press Ctrl-C to stop.`);
+
+/** The serving process; should it ever die on its own it is started again (at most 5 times a minute). */
+function serve() {
+  const child = spawn(process.execPath, ['dist/server/index.js'], { stdio: 'inherit', env: process.env });
+  child.on('exit', (code, signal) => {
+    const now = Date.now();
+    restarts.push(now);
+    while (restarts.length && restarts[0] < now - 60_000) restarts.shift();
+    if (stopping || restarts.length > 5) return void stopAll(code ?? 0);
+    console.error(`The serving process ended (${signal ?? `code ${code}`}); starting it again.`);
+    setTimeout(() => {
+      serving = serve();
+    }, 1_000);
+  });
+  return child;
+}
+
+const stop = (signal: NodeJS.Signals) => () => {
+  stopping = true;
+  if (serving.exitCode === null && serving.signalCode === null) serving.kill(signal);
+  else void stopAll(0);
 };
-process.on('SIGINT', shutdown);
-process.on('SIGTERM', shutdown);
+process.on('SIGINT', stop('SIGINT'));
+process.on('SIGTERM', stop('SIGTERM'));

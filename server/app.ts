@@ -1,7 +1,10 @@
 import express from 'express';
 import session from 'express-session';
+import cookieParser from 'cookie-parser';
 import connectPgSimple from 'connect-pg-simple';
 import helmet from 'helmet';
+import compression from 'compression';
+import expressStaticGzip from 'express-static-gzip';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { Sequelize } from 'sequelize';
@@ -26,14 +29,15 @@ import { rejectUnsafeText } from './middleware/text-safety';
 import { createCsrf } from './middleware/csrf';
 import { HttpError } from './lib/http-error';
 import type { Mailer, StoredMail } from './mail';
+import { createClientShell } from './lib/client-shell';
 
 export interface AppContext {
   config: AppConfig;
   sequelize: Sequelize;
-  /** pg pool for the session store */
+  /** pg pool for the session store, the rate-limit counters and the development outbox */
   sessionPool: pg.Pool;
-  /** outgoing mail; the development outbox is readable when `outbox` is given */
-  mail?: { mailer: Mailer; appUrl: string; outbox?: () => StoredMail[] };
+  /** outgoing mail; the development outbox (newest first) is readable when `outbox` is given */
+  mail?: { mailer: Mailer; appUrl: string; outbox?: (limit: number) => Promise<StoredMail[]> };
 }
 
 /** Without SMTP settings mail is refused with a clear 503 rather than silently dropped. */
@@ -62,12 +66,16 @@ export function createApp(context: AppContext) {
       },
     }),
   );
+  // gzip, or brotli when the browser offers it; small answers (< 1 KB) go as they are
+  app.use(compression({ threshold: 1024 }));
   app.use(express.json({ limit: '1mb' }));
   app.use(rejectUnsafeText);
   // Before the session: a probe never needs one, and must answer { db: 'down' } even when the
   // session store cannot be read.
   app.use('/api/health', healthRouter(sequelize));
 
+  // signed cookies (the known-browser cookie of sign-in limits) use the session secret
+  app.use(cookieParser(config.sessionSecret));
   const PgStore = connectPgSimple(session);
   app.use(
     session({
@@ -91,7 +99,7 @@ export function createApp(context: AppContext) {
 
   const csrf = createCsrf(config);
 
-  const limits = createRateLimits(config.limits);
+  const limits = createRateLimits(sessionPool, config.limits, config.secureCookies);
   const api = express.Router();
   api.use(csrf.protect);
   api.use('/auth', authRouter({ sequelize, limits, csrf, mail }));
@@ -110,9 +118,9 @@ export function createApp(context: AppContext) {
   api.use('/targets', targetsRouter());
   if (config.env !== 'production' && context.mail?.outbox) {
     const outbox = context.mail.outbox;
-    api.get('/dev/outbox', requireRole('admin'), (req, res) => {
+    api.get('/dev/outbox', requireRole('admin'), async (req, res) => {
       const { limit } = parse(outboxQuery, req.query);
-      res.json({ messages: outbox().slice(-limit).reverse() });
+      res.json({ messages: await outbox(limit) });
     });
   }
   api.use(apiNotFound);
@@ -120,8 +128,26 @@ export function createApp(context: AppContext) {
 
   if (config.clientDir && existsSync(path.join(config.clientDir, 'index.html'))) {
     const clientDir = config.clientDir;
-    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
-    app.get(/^(?!\/api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+    const shell = createClientShell(clientDir);
+    // Vite names every file under assets/ by its content hash: a changed file gets a new name. The
+    // build leaves .br and .gz copies beside them (vite.config.ts); those go out as they are.
+    app.use(
+      '/assets',
+      expressStaticGzip(path.join(clientDir, 'assets'), {
+        enableBrotli: true,
+        orderPreference: ['br', 'gz'],
+        serveStatic: { index: false, immutable: true, maxAge: '1y' },
+      }),
+    );
+    // a chunk an old page asks for after a deploy: a 404, not index.html served as JavaScript
+    app.use('/assets', (_req, res) => {
+      res.status(404).type('text/plain').send('Not found');
+    });
+    app.use(express.static(clientDir, { index: false, setHeaders: (res) => res.setHeader('Cache-Control', 'no-cache') }));
+    app.get(/^(?!\/api\/).*/, (req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.type('html').send(shell.html(req.path));
+    });
   }
 
   app.use(errorHandler());

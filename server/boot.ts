@@ -62,7 +62,7 @@ export async function prepareDatabase(config: AppConfig, services: Awaited<Retur
 
 export async function startServer(config: AppConfig) {
   const services = await openServices(config);
-  const mail = await createMailContext(config);
+  const mail = await createMailContext(config, process.env, services.sessionPool);
   const app = createApp({ config, ...services, mail: mail.mail });
   await getFoodEngine(services.sequelize);
   await services.foodSync.ready;

@@ -38,10 +38,20 @@ export function s3FromEnv(env: NodeJS.ProcessEnv): S3Config | null {
 }
 
 export interface RateLimitConfig {
+  /** failed sign-ins per account and address (or known browser) in 15 minutes */
   loginFailuresPer15Min: number;
+  /** failed sign-ins per account from anywhere in a day; past it only known browsers may try */
+  loginFailuresPerAccountPerDay: number;
+  /** failed sign-ins per address across accounts in an hour; past it only known browsers may try */
+  loginFailuresPerAddressPerHour: number;
   signupsPerHour: number;
   anonymousComputePerMin: number;
   userComputePerMin: number;
+  /**
+   * Counters are shared (in PostgreSQL) by every process with the same scope; tests give each app
+   * its own scope so one test's requests do not count against another's.
+   */
+  scope: string;
   recipeImportsPerHour: number;
 }
 
@@ -49,11 +59,26 @@ export const DEFAULT_SESSION_SECRET = 'hearthswap-development-secret-change-me';
 
 export const DEFAULT_LIMITS: RateLimitConfig = {
   loginFailuresPer15Min: 10,
+  loginFailuresPerAccountPerDay: 50,
+  loginFailuresPerAddressPerHour: 100,
   signupsPerHour: 30,
   anonymousComputePerMin: 60,
   userComputePerMin: 600,
+  scope: 'app',
   recipeImportsPerHour: 60,
 };
+
+function limitsFromEnv(env: NodeJS.ProcessEnv): RateLimitConfig {
+  const positive = (value: string | undefined, fallback: number) => {
+    const n = Number(value);
+    return value && Number.isInteger(n) && n > 0 ? n : fallback;
+  };
+  return {
+    ...DEFAULT_LIMITS,
+    anonymousComputePerMin: positive(env.LIMIT_ANONYMOUS_COMPUTE_PER_MIN, DEFAULT_LIMITS.anonymousComputePerMin),
+    userComputePerMin: positive(env.LIMIT_USER_COMPUTE_PER_MIN, DEFAULT_LIMITS.userComputePerMin),
+  };
+}
 
 function parseTrustProxy(value: string | undefined): number | boolean {
   if (!value || value === 'false' || value === '0') return false;
@@ -73,7 +98,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     trustProxy: parseTrustProxy(env.TRUST_PROXY),
     secureCookies: env.COOKIE_SECURE === 'true' ? true : env.COOKIE_SECURE === 'false' ? false : 'auto',
     clientDir: null,
-    limits: { ...DEFAULT_LIMITS },
+    limits: limitsFromEnv(env),
     s3: s3FromEnv(env),
     ...overrides,
   };

@@ -1,11 +1,13 @@
-import { createMailer, startFakeSmtp, type FakeSmtp } from './mail';
+import type pg from 'pg';
+import { createMailer, createOutboxStore, startFakeSmtp, type FakeSmtp } from './mail';
 import type { AppConfig } from './config';
 
 /**
  * SMTP from SMTP_HOST / SMTP_PORT when set; otherwise, outside production, a fake SMTP server on
- * loopback that keeps every message for the development outbox.
+ * loopback that keeps every message for the development outbox: in PostgreSQL when a pool is given
+ * (every app process on the database reads the same outbox), otherwise in this process's memory.
  */
-export async function createMailContext(config: AppConfig, env: NodeJS.ProcessEnv = process.env) {
+export async function createMailContext(config: AppConfig, env: NodeJS.ProcessEnv = process.env, pool?: pg.Pool) {
   const from = env.MAIL_FROM ?? 'Hearthswap <no-reply@hearthswap.test>';
   const appUrl = env.APP_URL ?? `http://${config.host}:${config.port}`;
   if (env.SMTP_HOST) {
@@ -14,7 +16,9 @@ export async function createMailContext(config: AppConfig, env: NodeJS.ProcessEn
     return { mail: { mailer, appUrl }, close: async () => {} };
   }
   if (config.env === 'production') return { mail: undefined, close: async () => {} };
-  const smtp: FakeSmtp = await startFakeSmtp({ port: Number(env.SMTP_FAKE_PORT ?? 0), host: '127.0.0.1' });
+  const store = pool ? createOutboxStore(pool) : null;
+  const smtp: FakeSmtp = await startFakeSmtp({ port: Number(env.SMTP_FAKE_PORT ?? 0), host: '127.0.0.1', onMessage: store?.save });
   const mailer = createMailer({ smtpHost: smtp.host, smtpPort: smtp.port, from, ignoreTLS: true });
-  return { mail: { mailer, appUrl, outbox: () => smtp.messages }, close: () => smtp.close(), smtp };
+  const outbox = async (limit: number) => (store ? store.list(limit) : smtp.messages.slice(-limit).reverse());
+  return { mail: { mailer, appUrl, outbox }, close: () => smtp.close(), smtp };
 }

@@ -31,6 +31,8 @@ export interface FakeSmtpOptions {
   outboxFile?: string;
   /** oldest messages are dropped from memory past this many (default 1,000) */
   maxMessages?: number;
+  /** when given, each message is handed here (the PostgreSQL outbox) before the server accepts it */
+  onMessage?: (mail: StoredMail) => Promise<void>;
 }
 
 export interface FakeSmtp {
@@ -45,7 +47,8 @@ const MAX_MESSAGE_BYTES = 10 * 1024 * 1024;
 
 /**
  * A catch-all SMTP server for development and tests: accepts any sender and recipient without
- * authentication or TLS, and keeps what it receives in memory. It only listens on loopback.
+ * authentication or TLS, and keeps what it receives in memory (and, given `onMessage`, wherever
+ * that puts it). It only listens on loopback.
  */
 export async function startFakeSmtp(options: FakeSmtpOptions = {}): Promise<FakeSmtp> {
   const host = options.host ?? '127.0.0.1';
@@ -67,6 +70,7 @@ export async function startFakeSmtp(options: FakeSmtpOptions = {}): Promise<Fake
     if (parsed.html !== undefined) mail.html = parsed.html;
     if (parsed.messageId) mail.messageId = parsed.messageId;
     if (options.outboxFile) await appendFile(options.outboxFile, `${JSON.stringify(mail)}\n`, 'utf8');
+    if (options.onMessage) await options.onMessage(mail);
     messages.push(mail);
     if (messages.length > maxMessages) messages.splice(0, messages.length - maxMessages);
   }

@@ -6,3 +6,5 @@ export { escapeHtml, formatExpiry, mailTemplates } from './templates';
 export type { InvitationMail, MailContent, PasswordResetMail } from './templates';
 export { parseMessage } from './parse-message';
 export type { ParsedMessage } from './parse-message';
+export { createOutboxStore } from './outbox-store';
+export type { OutboxStore } from './outbox-store';

@@ -39,14 +39,20 @@ export function authRouter({ sequelize, limits, csrf, mail }: { sequelize: Seque
     res.status(201).json(user.toPublic());
   });
 
-  router.post('/login', ...limits.login, async (req, res) => {
-    req.body = parse(loginSchema, req.body);
+  router.post('/login', async (req, res) => {
+    const input = parse(loginSchema, req.body);
+    req.body = input;
+    const attempt = await limits.signIn(req, res, input.email);
     const user = await new Promise<User | false>((resolve, reject) => {
       passport.authenticate('local', { session: false }, (error: unknown, found: User | false) =>
         error ? reject(error) : resolve(found),
       )(req, res, reject);
     });
-    if (!user) throw new HttpError(401, 'invalid_credentials', 'That e-mail and password do not match an account.');
+    if (!user) {
+      await attempt.failed();
+      throw new HttpError(401, 'invalid_credentials', 'That e-mail and password do not match an account.');
+    }
+    await attempt.succeeded();
     await logIn(req, res, user);
     res.json(user.toPublic());
   });

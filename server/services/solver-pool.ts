@@ -11,11 +11,13 @@ let pool: Piscina | null = null;
 
 function getPool() {
   if (!pool) {
-    const workerFile = fileURLToPath(new URL('../workers/rewrite-worker.ts', import.meta.url));
+    // From source (tsx, Vitest) the worker is TypeScript loaded through tsx; compiled (dist/server,
+    // everything bundled into index.js) it is the plain JavaScript file beside the bundle.
+    const compiled = !import.meta.url.endsWith('.ts');
+    const workerFile = fileURLToPath(new URL(compiled ? './workers/rewrite-worker.js' : '../workers/rewrite-worker.ts', import.meta.url));
     pool = new Piscina({
       filename: workerFile,
-      // Workers load TypeScript through tsx, as the server itself does.
-      execArgv: ['--import', 'tsx'],
+      execArgv: compiled ? [] : ['--import', 'tsx'],
       minThreads: 1,
       // One core stays free for the request thread, so sign-in and analysis stay fast during a burst.
       maxThreads: Math.max(1, availableParallelism() - 1),

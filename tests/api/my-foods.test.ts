@@ -5,7 +5,7 @@ import { createTestApp, signUp, type TestApp } from '../helpers/test-app';
 import { openServices } from '../../server/boot';
 import { loadConfig } from '../../server/config';
 import { inject } from 'vitest';
-import { HIDE_IMPOSSIBLE_FOODS } from '../../server/migrations/0005-my-foods';
+import { HIDE_IMPOSSIBLE_FOODS } from '../../server/migrations/0006-my-foods';
 import { DEMO_ACCOUNTS } from '../../server/seeders/demo-accounts';
 
 let t: TestApp;

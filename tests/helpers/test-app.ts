@@ -1,7 +1,8 @@
 import { inject } from 'vitest';
+import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import type { Express } from 'express';
-import { loadConfig, type RateLimitConfig } from '../../server/config';
+import { loadConfig, type AppConfig, type RateLimitConfig } from '../../server/config';
 import { openServices } from '../../server/boot';
 import { createApp } from '../../server/app';
 import { createMailContext } from '../../server/mail-context';
@@ -9,21 +10,39 @@ import type { Mailer, StoredMail } from '../../server/mail';
 
 export interface TestApp {
   app: Express;
-  /** every message the app sent, through a fake SMTP server on loopback */
+  config: AppConfig;
+  /**
+   * every message this app sent, through its fake SMTP server on loopback, oldest first: each is
+   * in the PostgreSQL outbox before it shows here
+   */
   outbox: () => StoredMail[];
+  /** the shared PostgreSQL outbox (mail from every app on the test database), newest first */
+  readOutbox: (limit?: number) => Promise<StoredMail[]>;
   close: () => Promise<void>;
 }
 
 /** The real app on the test database; each call is a fresh process-like instance. */
-export async function createTestApp(limits: Partial<RateLimitConfig> = {}, options: { mailer?: Mailer } = {}): Promise<TestApp> {
-  const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), ...inject('s3Env') });
-  config.limits = { ...config.limits, loginFailuresPer15Min: 1000, signupsPerHour: 1000, anonymousComputePerMin: 10_000, ...limits };
+export async function createTestApp(limits: Partial<RateLimitConfig> = {}, options: { mailer?: Mailer; config?: Partial<AppConfig> } = {}): Promise<TestApp> {
+  const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), ...inject('s3Env') }, options.config);
+  config.limits = {
+    ...config.limits,
+    loginFailuresPer15Min: 1000,
+    loginFailuresPerAccountPerDay: 1000,
+    loginFailuresPerAddressPerHour: 1000,
+    signupsPerHour: 1000,
+    anonymousComputePerMin: 10_000,
+    // counters are in PostgreSQL: each test app counts alone, as a fresh process did before
+    scope: `test-${randomUUID()}`,
+    ...limits,
+  };
   const services = await openServices(config);
-  const mail = await createMailContext(config, { APP_URL: 'http://hearthswap.test' });
+  const mail = await createMailContext(config, { APP_URL: 'http://hearthswap.test' }, services.sessionPool);
   const app = createApp({ config, ...services, mail: options.mailer && mail.mail ? { ...mail.mail, mailer: options.mailer } : mail.mail });
   return {
     app,
-    outbox: () => mail.mail?.outbox?.() ?? [],
+    config,
+    outbox: () => [...(mail.smtp?.messages ?? [])],
+    readOutbox: (limit = 100) => mail.mail?.outbox?.(limit) ?? Promise.resolve([]),
     close: async () => {
       await mail.close();
       await services.close();

@@ -1,0 +1,113 @@
+import { existsSync, readFileSync } from 'node:fs';
+import path from 'node:path';
+
+/**
+ * Which client route module each page path loads (src/app/router.tsx). index.html gets
+ * `<link rel="modulepreload">` for that module and its imports, so the browser fetches the page's
+ * code in parallel with the entry instead of discovering it chunk by chunk after the entry ran.
+ * tests/unit/route-preloads.test.ts checks that every lazy route in the router is listed here.
+ */
+export const ROUTE_MODULES: readonly [pattern: string, module: string][] = [
+  ['/', 'kitchen'],
+  ['/foods', 'foods'],
+  ['/foods/:id', 'food-detail'],
+  ['/sign-in', 'sign-in'],
+  ['/sign-up', 'sign-up'],
+  ['/forgot-password', 'forgot-password'],
+  ['/reset-password/:token', 'reset-password'],
+  ['/invitations/:token', 'invitation'],
+  ['/account', 'account'],
+  ['/recipes/:id/versions/:number/prep', 'prep'],
+  ['/recipes', 'recipe-book'],
+  ['/recipes/:id', 'recipe-detail'],
+  ['/recipes/:id/compare', 'recipe-compare'],
+  ['/recipes/:id/print', 'recipe-print'],
+  ['/shopping', 'shopping-list'],
+  ['/coach', 'my-coach'],
+  ['/swaps', 'swap-library'],
+  ['/clients', 'clients'],
+  ['/clients/:id', 'client-detail'],
+  ['/clients/:id/versions/:recipeId/:number', 'client-version'],
+  ['/admin/users', 'people'],
+  ['/admin/outbox', 'outbox'],
+];
+
+interface ManifestChunk {
+  file: string;
+  imports?: string[];
+  css?: string[];
+  isEntry?: boolean;
+}
+type Manifest = Record<string, ManifestChunk>;
+
+function segments(p: string) {
+  return p.split('/').filter(Boolean);
+}
+
+export function routeModuleFor(pathname: string): string | null {
+  const parts = segments(pathname);
+  for (const [pattern, module] of ROUTE_MODULES) {
+    const want = segments(pattern);
+    if (want.length === parts.length && want.every((w, i) => w.startsWith(':') || w === parts[i])) return module;
+  }
+  return null;
+}
+
+/** Every file a manifest chunk needs, itself first, its static imports after (depth first, once). */
+function chunkFiles(manifest: Manifest, key: string, seen = new Set<string>()): { js: string[]; css: string[] } {
+  const out = { js: [] as string[], css: [] as string[] };
+  if (seen.has(key) || !manifest[key]) return out;
+  seen.add(key);
+  const chunk = manifest[key];
+  out.js.push(chunk.file);
+  out.css.push(...(chunk.css ?? []));
+  for (const dep of chunk.imports ?? []) {
+    const sub = chunkFiles(manifest, dep, seen);
+    out.js.push(...sub.js);
+    out.css.push(...sub.css);
+  }
+  return out;
+}
+
+/**
+ * The built index.html with per-page preloads. Without Vite's manifest (an older build) every page
+ * gets the plain index.html.
+ */
+export function createClientShell(clientDir: string) {
+  const indexHtml = readFileSync(path.join(clientDir, 'index.html'), 'utf8');
+  const manifestFile = path.join(clientDir, '.vite', 'manifest.json');
+  const manifest: Manifest | null = existsSync(manifestFile) ? (JSON.parse(readFileSync(manifestFile, 'utf8')) as Manifest) : null;
+  const entryKey = manifest ? Object.keys(manifest).find((k) => manifest[k].isEntry) : undefined;
+  const inEntry = new Set(manifest && entryKey ? chunkFiles(manifest, entryKey).js : []);
+  const pages = new Map<string, string>();
+
+  function htmlFor(module: string): string {
+    const cached = pages.get(module);
+    if (cached) return cached;
+    let html = indexHtml;
+    const key = `src/app/routes/${module}.tsx`;
+    if (manifest?.[key]) {
+      const { js, css } = chunkFiles(manifest, key);
+      const links = [
+        ...[...new Set(css)].map((f) => `<link rel="stylesheet" crossorigin href="/${f}">`),
+        ...[...new Set(js)].filter((f) => !inEntry.has(f)).map((f) => `<link rel="modulepreload" crossorigin href="/${f}">`),
+      ];
+      html = indexHtml.replace('</head>', `    ${links.join('\n    ')}\n  </head>`);
+    }
+    pages.set(module, html);
+    return html;
+  }
+
+  return {
+    /** index.html for a page path, preloading that page's code */
+    html(pathname: string): string {
+      const module = routeModuleFor(pathname);
+      return module ? htmlFor(module) : indexHtml;
+    },
+    preloads(pathname: string): string[] {
+      const module = routeModuleFor(pathname);
+      if (!module || !manifest?.[`src/app/routes/${module}.tsx`]) return [];
+      return chunkFiles(manifest, `src/app/routes/${module}.tsx`).js.filter((f) => !inEntry.has(f));
+    },
+  };
+}
