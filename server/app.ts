@@ -22,7 +22,6 @@ import { foodsRouter } from './routes/foods';
 import { rewriteRouter } from './routes/rewrite';
 import { recipesRouter } from './routes/recipes';
 import { swapsRouter } from './routes/swaps';
-import { customFoodsRoute } from './routes/custom-foods';
 import { clientsRouter } from './routes/clients';
 import { invitationsRouter } from './routes/invitations';
 import { myCoachRouter } from './routes/my-coach';
@@ -116,7 +115,6 @@ export function createApp(context: AppContext) {
   api.use('/recipes/:id/versions/:number/prep', prepRouter(sequelize));
   api.use('/shopping-lists', shoppingListsRouter(sequelize));
   api.use('/recipes', recipesRouter(sequelize, config, limits));
-  api.post('/foods', ...customFoodsRoute(sequelize));
   api.use('/swaps', swapsRouter(sequelize));
   api.use('/clients', clientsRouter(sequelize, mail));
   api.use('/invitations', invitationsRouter(sequelize));

@@ -8,11 +8,13 @@ import { migrate } from './migrations';
 import { seed } from './seeders';
 import { getFoodEngine } from './services/food-engine';
 import { closeSolverPool } from './services/solver-pool';
+import { startFoodSync, type FoodSync } from './services/food-sync';
+import { closeLabelReader } from './services/label-reader';
 import { createMailContext } from './mail-context';
 import { onFallback } from '../shared/fallbacks';
 
 // Sequelize models are bound to one instance per process, so apps in one process (tests) share it.
-const shared = new Map<string, { sequelize: Sequelize; users: number }>();
+const shared = new Map<string, { sequelize: Sequelize; users: number; foodSync: FoodSync }>();
 
 /**
  * A promise nobody awaited (a background mail, a store callback) must not take every signed-in
@@ -27,7 +29,8 @@ export function keepServingOnStrayRejections(log: (message: string, reason: unkn
 export async function openServices(config: AppConfig) {
   let entry = shared.get(config.databaseUrl);
   if (!entry) {
-    entry = { sequelize: createSequelize(config.databaseUrl), users: 0 };
+    const sequelize = createSequelize(config.databaseUrl);
+    entry = { sequelize, users: 0, foodSync: startFoodSync(sequelize, config.databaseUrl) };
     shared.set(config.databaseUrl, entry);
   }
   entry.users++;
@@ -44,11 +47,13 @@ export async function openServices(config: AppConfig) {
     await sessionPool.end().catch(() => {});
     if (--entry.users === 0) {
       shared.delete(config.databaseUrl);
+      await entry.foodSync.stop();
       await closeSolverPool().catch(() => {});
+      await closeLabelReader().catch(() => {});
       await sequelize.close().catch(() => {});
     }
   };
-  return { sequelize, sessionPool, close };
+  return { sequelize, sessionPool, foodSync: entry.foodSync, close };
 }
 
 export async function prepareDatabase(config: AppConfig, services: Awaited<ReturnType<typeof openServices>>) {
@@ -63,6 +68,7 @@ export async function startServer(config: AppConfig) {
   await getFoodEngine(services.sequelize);
   // A fallback means a bug was caught on a user's line: say where, so it gets fixed.
   const stopFallbackLog = onFallback((site, error) => console.warn(`fallback taken at ${site}:`, error));
+  await services.foodSync.ready;
   const server = await new Promise<Server>((resolve) => {
     const s = app.listen(config.port, config.host, () => resolve(s));
   });

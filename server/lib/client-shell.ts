@@ -11,6 +11,7 @@ export const ROUTE_MODULES: readonly [pattern: string, module: string][] = [
   ['/', 'kitchen'],
   ['/foods', 'foods'],
   ['/foods/:id', 'food-detail'],
+  ['/my-foods', 'my-foods'],
   ['/sign-in', 'sign-in'],
   ['/sign-up', 'sign-up'],
   ['/forgot-password', 'forgot-password'],

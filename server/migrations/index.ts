@@ -5,6 +5,7 @@ import * as m0002 from './0002-catalogue';
 import * as m0003 from './0003-recipes';
 import * as m0004 from './0004-coaching';
 import * as m0005 from './0005-shared-process-state';
+import * as m0006 from './0006-my-foods';
 
 /** Every migration in order; add new ones at the end and never edit one that has shipped. */
 const MIGRATIONS = [
@@ -13,6 +14,7 @@ const MIGRATIONS = [
   { name: '0003-recipes', ...m0003 },
   { name: '0004-coaching', ...m0004 },
   { name: '0005-shared-process-state', ...m0005 },
+  { name: '0006-my-foods', ...m0006 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

@@ -4,7 +4,7 @@ import { analyzeRequestSchema } from '../../shared/schemas/analyze';
 import { parse } from '../middleware/validate';
 import { getFoodEngine } from '../services/food-engine';
 import { analyzeLines, requestLines, toAnalyzeResponse } from '../services/analysis';
-import { canSeeFood } from '../services/custom-foods';
+import { canSeeFood, ownFoodsFor } from '../services/custom-foods';
 import type { StoredFood } from '../services/catalogue';
 
 export function analyzeRouter(sequelize: Sequelize, limit: RequestHandler) {
@@ -12,8 +12,9 @@ export function analyzeRouter(sequelize: Sequelize, limit: RequestHandler) {
   router.post('/', limit, async (req, res) => {
     const input = parse(analyzeRequestSchema, req.body);
     const engine = await getFoodEngine(sequelize);
-    const canUse = (food: StoredFood) => canSeeFood(food, req.user ?? null);
-    res.json(toAnalyzeResponse(analyzeLines(engine, requestLines(input), input.servings, (f) => canUse(f as StoredFood))));
+    const viewer = req.user ?? null;
+    const canUse = (food: StoredFood) => canSeeFood(food, viewer);
+    res.json(toAnalyzeResponse(analyzeLines(engine, requestLines(input), input.servings, (f) => canUse(f as StoredFood), ownFoodsFor(engine, viewer))));
   });
   return router;
 }

@@ -1,5 +1,4 @@
-import { Router, type RequestHandler } from 'express';
-import multer from 'multer';
+import { Router } from 'express';
 import type { Sequelize } from 'sequelize';
 import type { AppConfig } from '../config';
 import {
@@ -40,22 +39,9 @@ import { toJsonLd } from '../services/recipe-export';
 import { MAX_PHOTO_BYTES, readPhoto } from '../services/photo-storage';
 import { replaceRecipePhoto } from '../services/recipe-photo';
 import { HttpError, badRequest } from '../lib/http-error';
+import { singleFile } from '../middleware/upload';
 
 const MAX_IMPORT_BYTES = 1024 * 1024;
-
-/** multer with its errors mapped to ours: too large → 413, anything else → 400 naming the field. */
-function singleFile(maxBytes: number, what: string): RequestHandler {
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1 } }).single('file');
-  return (req, res, next) =>
-    upload(req, res, (error: unknown) => {
-      if (!error) return next();
-      if (error instanceof multer.MulterError && error.code === 'LIMIT_FILE_SIZE') {
-        return next(new HttpError(413, 'payload_too_large', `The ${what} is larger than ${(maxBytes / 1024 / 1024).toFixed(0)} MB.`));
-      }
-      if (error instanceof multer.MulterError) return next(badRequest(`file: ${error.message}. Send one file in the form field "file".`));
-      next(error);
-    });
-}
 
 /** An imported file passes the same schema and limits as a typed recipe; failures name the field in the file. */
 function importedRecipeInput(imported: ImportedRecipe) {

@@ -5,7 +5,7 @@ import { parse } from '../middleware/validate';
 import { getFoodEngine } from '../services/food-engine';
 import { rewriteRecipe } from '../services/rewrite';
 import { publishedSwapsForClient as approvedSwapsFor } from '../services/swaps';
-import { canSeeFood } from '../services/custom-foods';
+import { canSeeFood, ownFoodsFor } from '../services/custom-foods';
 import type { StoredFood } from '../services/catalogue';
 
 export function rewriteRouter(sequelize: Sequelize, limit: RequestHandler) {
@@ -16,7 +16,7 @@ export function rewriteRouter(sequelize: Sequelize, limit: RequestHandler) {
     const engine = await getFoodEngine(sequelize);
     const approvedSwaps = await approvedSwapsFor(req.user ?? null);
     const canUse = (food: unknown) => canSeeFood(food as StoredFood, req.user ?? null);
-    res.json(await rewriteRecipe(engine, input, { approvedSwaps, canUse }, explain));
+    res.json(await rewriteRecipe(engine, input, { approvedSwaps, canUse, ownFoods: ownFoodsFor(engine, req.user ?? null) }, explain));
   });
   return router;
 }

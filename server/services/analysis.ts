@@ -11,6 +11,7 @@ import { drainedShareFor } from '../matching/drained-share';
 import type { FoodEngine } from './food-engine';
 import { foodSummary } from './foods';
 import { badRequest } from '../lib/http-error';
+import { matchOwnFood } from './own-food-match';
 
 /** Splits pasted text into ingredient lines: blank lines and bullet marks dropped. */
 export function textToLines(text: string): LineInput[] {
@@ -42,14 +43,24 @@ function finite(n: number): number {
 export type FoodVisibility = (food: CatalogueFood) => boolean;
 const catalogueOnly: FoodVisibility = (food) => food.source === 'usda-sr28';
 
-export function analyzeLine(engine: FoodEngine<CatalogueFood>, line: LineInput, canUse: FoodVisibility = catalogueOnly): AnalyzedLineWithFood {
+/**
+ * One line matched and weighed. `ownFoods` (the viewer's foods from labels, then their coach's) are
+ * tried first: a phrase that names one of them gets it, weighed by its household measure.
+ */
+export function analyzeLine(engine: FoodEngine<CatalogueFood>, line: LineInput, canUse: FoodVisibility = catalogueOnly, ownFoods: readonly CatalogueFood[] = []): AnalyzedLineWithFood {
   const parsed: ParsedLine = parseLine(line.input);
   const warnings: string[] = [];
   const match = matchLine(engine.matcher, parsed, line.input);
-  warnings.push(...match.warnings);
+  const own = ownFoods.length > 0 ? matchOwnFood(parsed.name || line.input, ownFoods) : null;
+  if (!own) warnings.push(...match.warnings);
   let food: CatalogueFood | null = match.food;
   let confidence = match.confidence;
   let alternatives = match.alternatives;
+  if (own) {
+    alternatives = [...(food ? [food] : []), ...alternatives].filter((f) => f.id !== own.id);
+    food = own;
+    confidence = 1;
+  }
   if (line.foodId !== undefined) {
     const found = engine.byId.get(line.foodId);
     const pinned = found && canUse(found) ? found : undefined;
@@ -98,8 +109,8 @@ export function analyzeLine(engine: FoodEngine<CatalogueFood>, line: LineInput, 
     warnings: [...new Set(warnings)],
     portionUsed,
     pinned: { food: pinnedFood, grams: line.grams !== undefined },
-    checkMatch: Boolean(food) && !pinnedFood && (match.checkMatch || confidence < CHECK_MATCH_BELOW),
-    missingModifier: pinnedFood ? null : match.missingModifier,
+    checkMatch: Boolean(food) && !pinnedFood && !own && (match.checkMatch || confidence < CHECK_MATCH_BELOW),
+    missingModifier: pinnedFood || own ? null : match.missingModifier,
     matchedFood: food,
   };
 }
@@ -121,8 +132,8 @@ export function culinaryLineOf(line: AnalyzedLineWithFood): CulinaryLine & { foo
   return { phrase: line.parsed.name || line.input, comment: line.parsed.comment, food: line.matchedFood, grams: line.grams };
 }
 
-export function analyzeLines(engine: FoodEngine<CatalogueFood>, lines: LineInput[], servings: number, canUse: FoodVisibility = catalogueOnly) {
-  const analyzed = lines.map((line) => analyzeLine(engine, line, canUse));
+export function analyzeLines(engine: FoodEngine<CatalogueFood>, lines: LineInput[], servings: number, canUse: FoodVisibility = catalogueOnly, ownFoods: readonly CatalogueFood[] = []) {
+  const analyzed = lines.map((line) => analyzeLine(engine, line, canUse, ownFoods));
   const totals = sumNutrients(analyzed.map((l) => l.nutrients));
   return {
     servings,

@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import type { CatalogueFood, DietFlag, Portion, Role } from '../../shared/food';
+import type { LabelPanel } from '../../shared/label-food';
 
 interface FoodRow {
   id: number;
@@ -23,6 +24,15 @@ interface FoodRow {
   diet: DietFlag[];
   branded: boolean;
   owner_id: number | null;
+  serving_g: number | null;
+  serving_ml: number | null;
+  serving_label: string | null;
+  barcode: string | null;
+  label: LabelPanel | null;
+  energy_from_atwater: boolean;
+  hidden_at: Date | null;
+  created_at: Date;
+  updated_at: Date;
 }
 
 interface PortionRow {
@@ -33,9 +43,25 @@ interface PortionRow {
   grams: number;
 }
 
+/** What a food entered from a label keeps beside its per-100 g values. */
+export interface LabelRecord {
+  servingG: number | null;
+  servingMl: number | null;
+  servingLabel: string | null;
+  barcode: string | null;
+  /** the panel per serving as entered; null for foods entered before panels were kept */
+  panel: LabelPanel | null;
+  energyFromAtwater: boolean;
+  createdAt: Date;
+  updatedAt: Date;
+}
+
 export interface StoredFood extends CatalogueFood {
-  /** the coach who entered a custom food; null for catalogue foods */
+  /** the cook or coach who entered a custom food; null for catalogue foods */
   ownerId: number | null;
+  /** a deleted custom food that saved versions still use: kept for them, offered nowhere else */
+  hidden: boolean;
+  label: LabelRecord | null;
 }
 
 function toFood(row: FoodRow, portions: Portion[]): StoredFood {
@@ -64,21 +90,92 @@ function toFood(row: FoodRow, portions: Portion[]): StoredFood {
     diet: row.diet,
     branded: row.branded,
     ownerId: row.owner_id,
+    hidden: row.hidden_at != null,
+    label:
+      row.source === 'custom'
+        ? {
+            servingG: row.serving_g,
+            servingMl: row.serving_ml,
+            servingLabel: row.serving_label,
+            barcode: row.barcode,
+            panel: row.label,
+            energyFromAtwater: row.energy_from_atwater,
+            createdAt: row.created_at,
+            updatedAt: row.updated_at,
+          }
+        : null,
   };
 }
 
-/** Every food with its portions, read once from PostgreSQL. */
-export async function readAllFoods(sequelize: Sequelize): Promise<StoredFood[]> {
-  const [foods] = (await sequelize.query('SELECT * FROM foods ORDER BY id')) as [FoodRow[], unknown];
-  const [portions] = (await sequelize.query('SELECT food_id, label, amount, measure, grams FROM food_portions ORDER BY food_id, seq')) as [
-    PortionRow[],
-    unknown,
-  ];
+const finiteAtLeastZero = (n: number | null) => n === null || (Number.isFinite(n) && n >= 0);
+
+/**
+ * A food the engine can compute with: every value finite and not negative, a density above 0.
+ * PostgreSQL's double precision holds Infinity and NaN, and rows entered before the label limits
+ * existed may carry them; such a row is refused here so that no line, prep or rewrite ever sees it.
+ */
+export function isUsableFood(food: CatalogueFood): boolean {
+  const values = Object.values(food.per100g) as (number | null)[];
+  return values.every(finiteAtLeastZero) && Number.isFinite(food.densityGPerMl) && food.densityGPerMl > 0;
+}
+
+function usablePortions(portions: Portion[]) {
+  return portions.filter((p) => Number.isFinite(p.grams) && p.grams > 0 && Number.isFinite(p.amount) && p.amount > 0);
+}
+
+function readRows(foods: FoodRow[], portions: PortionRow[]): { foods: StoredFood[]; refused: number[] } {
   const byFood = new Map<number, Portion[]>();
   for (const p of portions) {
     const list = byFood.get(p.food_id) ?? [];
     list.push({ label: p.label, amount: p.amount, measure: p.measure, grams: p.grams });
     byFood.set(p.food_id, list);
   }
-  return foods.map((row) => toFood(row, byFood.get(row.id) ?? []));
+  const out: StoredFood[] = [];
+  const refused: number[] = [];
+  for (const row of foods) {
+    const food = toFood(row, usablePortions(byFood.get(row.id) ?? []));
+    if (isUsableFood(food)) out.push(food);
+    else refused.push(row.id);
+  }
+  return { foods: out, refused };
+}
+
+function warnRefused(refused: number[]) {
+  if (refused.length > 0) console.warn(`Foods ${refused.join(', ')} have impossible values (non-finite or negative) and were not loaded.`);
+}
+
+/** Every usable food with its portions, read once from PostgreSQL. */
+export async function readAllFoods(sequelize: Sequelize): Promise<StoredFood[]> {
+  const [foods] = (await sequelize.query('SELECT * FROM foods ORDER BY id')) as [FoodRow[], unknown];
+  const [portions] = (await sequelize.query('SELECT food_id, label, amount, measure, grams FROM food_portions ORDER BY food_id, seq')) as [
+    PortionRow[],
+    unknown,
+  ];
+  const read = readRows(foods, portions);
+  warnRefused(read.refused);
+  return read.foods;
+}
+
+/** One custom food as it is now in the database: null when it is gone or unusable. */
+export async function readCustomFood(sequelize: Sequelize, id: number): Promise<StoredFood | null> {
+  const [foods] = (await sequelize.query("SELECT * FROM foods WHERE id = $1 AND source = 'custom'", { bind: [id] })) as [FoodRow[], unknown];
+  if (foods.length === 0) return null;
+  const [portions] = (await sequelize.query('SELECT food_id, label, amount, measure, grams FROM food_portions WHERE food_id = $1 ORDER BY seq', { bind: [id] })) as [
+    PortionRow[],
+    unknown,
+  ];
+  const read = readRows(foods, portions);
+  warnRefused(read.refused);
+  return read.foods[0] ?? null;
+}
+
+/** Every custom food as it is now: what a process re-reads after missing notifications. */
+export async function readCustomFoods(sequelize: Sequelize): Promise<StoredFood[]> {
+  const [foods] = (await sequelize.query("SELECT * FROM foods WHERE source = 'custom' ORDER BY id")) as [FoodRow[], unknown];
+  const [portions] = (await sequelize.query(
+    "SELECT p.food_id, p.label, p.amount, p.measure, p.grams FROM food_portions p JOIN foods f ON f.id = p.food_id WHERE f.source = 'custom' ORDER BY p.food_id, p.seq",
+  )) as [PortionRow[], unknown];
+  const read = readRows(foods, portions);
+  warnRefused(read.refused);
+  return read.foods;
 }

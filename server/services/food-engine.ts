@@ -10,6 +10,8 @@ import { countDefaultFor, loadCuratedPortions, portionsFor } from '../matching/p
 export interface FoodEngine<F extends CatalogueFood = StoredFood> {
   foods: F[];
   byId: Map<number, F>;
+  /** the foods cooks and coaches entered from labels, hidden ones included; kept current by food-sync */
+  custom: Map<number, F>;
   /** catalogue foods (USDA); custom foods are matched per viewer */
   matcher: FoodMatcher;
   /** the size word a bare count means for a food ("3 eggs" → large) */
@@ -29,6 +31,11 @@ export function getFoodEngine(sequelize: Sequelize): Promise<FoodEngine> {
     engines.set(sequelize, engine);
   }
   return engine;
+}
+
+/** The engine when one is built or building for this database, without starting a build. */
+export function existingFoodEngine(sequelize: Sequelize): Promise<FoodEngine> | undefined {
+  return engines.get(sequelize);
 }
 
 /** Call after a custom food is added or changed. */
@@ -52,6 +59,40 @@ export function engineFromFoods<F extends CatalogueFood>(foods: F[]): FoodEngine
   }
   const catalogue = foods.filter((f) => f.source === 'usda-sr28');
   const matcher = createFoodMatcher(catalogue, DEFAULT_ALIASES);
+  const custom = new Map(foods.filter((f) => f.source === 'custom').map((f) => [f.id, f]));
   const nearPortions = nearVolumePortions(catalogue);
-  return { foods, byId: new Map(foods.map((f) => [f.id, f])), matcher, countDefaults, nearPortions, builtMs: performance.now() - started };
+  return { foods, byId: new Map(foods.map((f) => [f.id, f])), custom, matcher, countDefaults, nearPortions, builtMs: performance.now() - started };
+}
+
+/** Puts a custom food as it now is into the engine (added or replaced in place). */
+export function putCustomFood(engine: FoodEngine, food: StoredFood) {
+  if (food.source !== 'custom') return;
+  food.portions = portionsFor(food);
+  const old = engine.custom.get(food.id);
+  if (old) {
+    const at = engine.foods.indexOf(old);
+    if (at >= 0) engine.foods[at] = food;
+    else engine.foods.push(food);
+  } else {
+    engine.foods.push(food);
+  }
+  engine.custom.set(food.id, food);
+  engine.byId.set(food.id, food);
+}
+
+/** Takes a custom food out of the engine (deleted, or its row became unusable). */
+export function dropCustomFood(engine: FoodEngine, id: number) {
+  const old = engine.custom.get(id);
+  if (!old) return;
+  engine.custom.delete(id);
+  engine.byId.delete(id);
+  const at = engine.foods.indexOf(old);
+  if (at >= 0) engine.foods.splice(at, 1);
+}
+
+/** Makes the engine's custom foods exactly `foods`: after a lost connection may have missed changes. */
+export function replaceCustomFoods(engine: FoodEngine, foods: StoredFood[]) {
+  const keep = new Set(foods.map((f) => f.id));
+  for (const id of [...engine.custom.keys()]) if (!keep.has(id)) dropCustomFood(engine, id);
+  for (const food of foods) putCustomFood(engine, food);
 }

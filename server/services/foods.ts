@@ -2,6 +2,12 @@ import type { CatalogueFood } from '../../shared/food';
 import type { FoodDetail, FoodSummary } from '../../shared/schemas/analyze';
 import { notFound } from '../lib/http-error';
 import type { FoodEngine } from './food-engine';
+import type { StoredFood } from './catalogue';
+
+function ownerOf(food: CatalogueFood, viewerId: number | null): 'you' | 'coach' | null {
+  if (food.source !== 'custom') return null;
+  return (food as StoredFood).ownerId === viewerId ? 'you' : 'coach';
+}
 
 export function foodSummary(food: CatalogueFood): FoodSummary {
   return { id: food.id, source: food.source, sourceId: food.sourceId, name: food.name };
@@ -20,9 +26,11 @@ export function foodDetail(food: CatalogueFood): FoodDetail {
   };
 }
 
-export function searchFoods(engine: FoodEngine, q: string, limit: number, extra: CatalogueFood[] = []) {
+/** Catalogue hits after `extra` (the viewer's own foods, then their coach's), each marked whose it is. */
+export function searchFoods(engine: FoodEngine, q: string, limit: number, extra: StoredFood[] = [], viewerId: number | null = null) {
   const hits = [...extra.map((food) => ({ food, score: 1 })), ...engine.matcher.search(q, limit)].slice(0, limit);
   return hits.map((hit) => ({
+    owner: ownerOf(hit.food, viewerId),
     ...foodSummary(hit.food),
     foodGroup: hit.food.foodGroup,
     roles: hit.food.roles,

@@ -14,7 +14,8 @@ import type {
 import type { TargetsInput } from '../../shared/schemas/rewrite';
 import type { LineInput } from '../../shared/schemas/analyze';
 import { analyzeLine, lineVolumeMl, textToLines, type FoodVisibility } from './analysis';
-import { canSeeFood } from './custom-foods';
+import { canSeeFood, ownFoodsFor } from './custom-foods';
+import type { CatalogueFood } from '../../shared/food';
 import type { StoredFood } from './catalogue';
 import type { FoodEngine } from './food-engine';
 import { HttpError, badRequest, conflict, notFound } from '../lib/http-error';
@@ -24,7 +25,12 @@ function formatGramsForText(grams: number) {
 }
 
 /** Turns lines as typed or as a rewrite returns them into stored lines, each weighed and matched. */
-export function normaliseLines(engine: FoodEngine, lines: VersionLineInput[], canUse: FoodVisibility = (f) => f.source === 'usda-sr28'): StoredLine[] {
+export function normaliseLines(
+  engine: FoodEngine,
+  lines: VersionLineInput[],
+  canUse: FoodVisibility = (f) => f.source === 'usda-sr28',
+  ownFoods: readonly CatalogueFood[] = [],
+): StoredLine[] {
   return lines.map((line, i) => {
     if ('food' in line) {
       const found = engine.byId.get(line.food.id);
@@ -35,7 +41,7 @@ export function normaliseLines(engine: FoodEngine, lines: VersionLineInput[], ca
     const typed: LineInput = { input: line.input };
     if (line.foodId != null) typed.foodId = line.foodId;
     if (line.grams !== undefined) typed.grams = line.grams;
-    const analysed = analyzeLine(engine, typed, canUse);
+    const analysed = analyzeLine(engine, typed, canUse, ownFoods);
     const stored: StoredLine = { input: line.input, foodId: analysed.matchedFood?.id ?? null, foodName: analysed.matchedFood?.name ?? null, grams: analysed.grams };
     if (analysed.warnings.length > 0) stored.warnings = analysed.warnings;
     if (analysed.checkMatch) stored.checkMatch = true;
@@ -194,7 +200,7 @@ export async function createRecipe(
 ) {
   const lineInputs: VersionLineInput[] = input.lines ?? textToLines(input.text ?? '');
   if (lineInputs.length === 0) throw badRequest('text: the recipe has no ingredient lines.', { fieldErrors: { text: ['No ingredient lines.'] } });
-  const lines = normaliseLines(engine, lineInputs, (f) => canSeeFood(f as StoredFood, viewer));
+  const lines = normaliseLines(engine, lineInputs, (f) => canSeeFood(f as StoredFood, viewer), ownFoodsFor(engine, viewer));
   return sequelize.transaction(async (transaction) => {
     const recipe = await Recipe.create(
       { ownerId: viewer.id, title: input.title, servings: input.servings, notes: input.notes ?? '', method: input.method ?? '' },
@@ -297,7 +303,7 @@ export async function addVersion(
   id: number,
   input: { kind: VersionKind; lines: VersionLineInput[]; servings?: number; targets?: TargetsInput | null; note?: string; parentNumber?: number },
 ) {
-  const lines = normaliseLines(engine, input.lines, (f) => canSeeFood(f as StoredFood, viewer));
+  const lines = normaliseLines(engine, input.lines, (f) => canSeeFood(f as StoredFood, viewer), ownFoodsFor(engine, viewer));
   return sequelize.transaction(async (transaction) => {
     const recipe = await findOwnRecipe(viewer, id, transaction);
     return insertVersion(engine, recipe, { ...input, lines, servings: input.servings ?? recipe.servings }, viewer.id, transaction);

@@ -2,6 +2,7 @@ import type { InfeasibleDetails, RewriteRequest, RewriteResponse, SkippedLine } 
 import type { RewriteLine, RewriteResult, Plan, Change, FoodRef } from '../../shared/rewrite/types';
 import { RewriteSolverError } from '../../shared/rewrite/solve-log';
 import type { FoodEngine } from './food-engine';
+import type { CatalogueFood } from '../../shared/food';
 import type { LineFunction } from '../../shared/culinary/types';
 import { analyzeLines, culinaryLineOf, requestLines, type FoodVisibility } from './analysis';
 import { recipeCandidates, type ApprovedSwap } from './candidates';
@@ -12,6 +13,8 @@ import { HttpError, badRequest } from '../lib/http-error';
 export interface RewriteViewer {
   approvedSwaps: ApprovedSwap[];
   canUse?: FoodVisibility;
+  /** the viewer's foods from labels, then their coach's: matched first, and swap candidates for their roles */
+  ownFoods?: readonly CatalogueFood[];
 }
 
 function publicFood(engine: FoodEngine, ref: FoodRef) {
@@ -43,7 +46,7 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
     if (index >= lines.length) throw badRequest(`lineRoles: line ${index} does not exist (the recipe has ${lines.length}).`, { fieldErrors: { lineRoles: ['Unknown line index.'] } });
     lineRoles[index] = role;
   }
-  const analysis = analyzeLines(engine, lines, input.servings, viewer.canUse);
+  const analysis = analyzeLines(engine, lines, input.servings, viewer.canUse, viewer.ownFoods ?? []);
   const culinary = recipeCandidates(
     engine,
     analysis.lines.map(culinaryLineOf),

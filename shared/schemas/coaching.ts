@@ -47,24 +47,5 @@ export const passwordResetConfirmSchema = z.object({
   password: z.string().min(10, { message: 'Use at least 10 characters.' }).max(200),
 });
 
-const labelNumber = (field: string, max: number) => z.number({ message: `${field} must be a number.` }).min(0, { message: `${field} cannot be negative.` }).max(max);
-
-/** A custom food from a package label: values per serving as printed; stored per 100 g. */
-export const customFoodSchema = z
-  .object({
-    name: z.string({ message: 'Name the food.' }).trim().min(2, { message: 'Name the food.' }).max(200),
-    servingSizeG: labelNumber('servingSizeG', 5_000).refine((v) => v > 0, { message: 'servingSizeG must be above 0.' }).optional(),
-    servingSizeMl: labelNumber('servingSizeMl', 5_000).refine((v) => v > 0, { message: 'servingSizeMl must be above 0.' }).optional(),
-    densityGPerMl: z.number().min(0.05).max(2).optional(),
-    kcal: labelNumber('kcal', 5_000).optional(),
-    proteinG: labelNumber('proteinG', 1_000),
-    fatG: labelNumber('fatG', 1_000),
-    satFatG: labelNumber('satFatG', 1_000).optional(),
-    carbsG: labelNumber('carbsG', 1_000),
-    fiberG: labelNumber('fiberG', 1_000).optional(),
-    sugarG: labelNumber('sugarG', 1_000).optional(),
-    sodiumMg: labelNumber('sodiumMg', 50_000).optional(),
-    roles: z.array(z.enum(ROLES)).max(5).optional(),
-  })
-  .refine((v) => v.servingSizeG !== undefined || v.servingSizeMl !== undefined, { message: 'Give the serving size in g or mL.', path: ['servingSizeG'] });
-export type CustomFoodInput = z.infer<typeof customFoodSchema>;
+/** A custom food from a package label: the schema of `POST /api/foods` (shared/schemas/foods.ts). */
+export { labelFoodSchema as customFoodSchema, type LabelFoodInput as CustomFoodInput } from './foods';

@@ -4,6 +4,7 @@ import type { User, UserRole } from '../lib/user';
 export const PAGE_ROLES = {
   recipeBook: ['cook'],
   myCoach: ['cook'],
+  myFoods: ['cook', 'coach'],
   swapLibrary: ['coach'],
   clients: ['coach'],
   admin: ['admin'],
@@ -19,6 +20,7 @@ export interface NavItem {
 export const NAV_ITEMS: readonly NavItem[] = [
   { to: '/', label: 'Kitchen', roles: null },
   { to: '/foods', label: 'Foods', roles: null },
+  { to: '/my-foods', label: 'My foods', roles: PAGE_ROLES.myFoods },
   { to: '/recipes', label: 'Recipe book', roles: PAGE_ROLES.recipeBook },
   { to: '/shopping', label: 'Shopping', roles: PAGE_ROLES.recipeBook },
   { to: '/coach', label: 'My coach', roles: PAGE_ROLES.myCoach },

@@ -57,6 +57,10 @@ export const routes: RouteObject[] = [
             ],
           },
           {
+            element: <RequireRole roles={PAGE_ROLES.myFoods} />,
+            children: [{ path: 'my-foods', lazy: () => import('./routes/my-foods').then((m) => ({ Component: m.MyFoodsPage })) }],
+          },
+          {
             element: <RequireRole roles={PAGE_ROLES.myCoach} />,
             children: [
               { path: 'coach', lazy: () => import('./routes/my-coach').then((m) => ({ Component: m.MyCoachPage })) },

@@ -10,6 +10,7 @@ export const queryKeys = {
     all: ['foods'] as const,
     search: (q: string) => ['foods', 'search', q] as const,
     detail: (id: number | string) => ['foods', 'detail', String(id)] as const,
+    mine: () => ['foods', 'mine'] as const,
   },
   recipes: {
     all: ['recipes'] as const,

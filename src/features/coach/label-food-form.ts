@@ -1,5 +1,8 @@
 import { ROLES, type Role } from '../../../shared/food';
 import type { CustomFoodInput } from '../../../shared/schemas/coaching';
+import { readNumber } from '../../lib/read-number';
+
+export { readNumber };
 
 /** The label form as typed: every number is text until it is checked. */
 export interface LabelFoodValues {
@@ -23,16 +26,6 @@ export type LabelFoodErrors = Partial<Record<LabelFoodField, string>>;
 
 export function emptyLabelFood(): LabelFoodValues {
   return { name: '', servingSizeG: '', servingSizeMl: '', kcal: '', proteinG: '', fatG: '', satFatG: '', carbsG: '', fiberG: '', sugarG: '', sodiumMg: '', role: '' };
-}
-
-/** '' → undefined; "1,5" reads as 1.5 and "1,000" as 1000; anything else that isn't a number → NaN. */
-export function readNumber(text: string): number | undefined {
-  const t = text.trim().replace(/\s+/g, '');
-  if (t === '') return undefined;
-  // "1,000" and "12,500" are thousands; "2,5" and "0,125" are a decimal comma.
-  const thousands = /^[1-9]\d{0,2}(,\d{3})+$/.test(t);
-  const normalised = thousands ? t.replace(/,/g, '') : /^\d+,\d+$/.test(t) ? t.replace(',', '.') : t;
-  return /^[+-]?(\d+\.?\d*|\.\d+)$/.test(normalised) ? Number(normalised) : Number.NaN;
 }
 
 // The server's upper limits (customFoodSchema in shared/schemas/coaching.ts).

@@ -25,8 +25,8 @@ describe('navItemsFor', () => {
   const labels = (u: User | null) => navItemsFor(u).map((i) => i.label);
   it('shows each role its own pages', () => {
     expect(labels(null)).toEqual(['Kitchen', 'Foods']);
-    expect(labels(user('cook'))).toEqual(['Kitchen', 'Foods', 'Recipe book', 'Shopping', 'My coach']);
-    expect(labels(user('coach'))).toEqual(['Kitchen', 'Foods', 'Swap library', 'Clients']);
+    expect(labels(user('cook'))).toEqual(['Kitchen', 'Foods', 'My foods', 'Recipe book', 'Shopping', 'My coach']);
+    expect(labels(user('coach'))).toEqual(['Kitchen', 'Foods', 'My foods', 'Swap library', 'Clients']);
     expect(labels(user('admin'))).toEqual(['Kitchen', 'Foods', 'People', 'Outbox']);
   });
 });

@@ -12,6 +12,8 @@ export interface FoodSearchHit extends FoodSummary {
   proteinPer100g: number;
   /** 0..1, how well the name answers the query */
   score: number;
+  /** a food entered from a label: 'you' entered it, or your 'coach' did; null for catalogue foods */
+  owner: 'you' | 'coach' | null;
 }
 
 export interface FoodSearchResponse {

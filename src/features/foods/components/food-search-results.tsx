@@ -44,6 +44,8 @@ export function FoodSearchResults({ results, foodHref, linkState, listRef, onLea
                 <span className="flex flex-wrap items-center gap-2 text-sm text-ink-soft">
                   {group && <span>{group}</span>}
                   {hit.branded && <Badge>Brand or restaurant</Badge>}
+                  {hit.owner === 'you' && <Badge tone="herb">Your food</Badge>}
+                  {hit.owner === 'coach' && <Badge tone="honey">From your coach</Badge>}
                 </span>
               </span>
               <dl className="grid grid-cols-3 gap-3 text-sm tabular-nums sm:w-[26rem]">
