@@ -113,6 +113,28 @@ function ruleCandidates(engine: { foods: readonly CatalogueFood[] }, rule: Resol
 }
 
 /**
+ * The cook's own foods (and their coach's), entered from labels with the culinary roles they play: a
+ * swap, weight for weight, for a line whose food plays the food's main role, where the line may change.
+ */
+function ownFoodCandidates(engine: { foods: readonly CatalogueFood[] }, food: CatalogueFood, filters: Filters, canUse: ((f: CatalogueFood) => boolean) | undefined): Candidate[] {
+  const main = food.roles[0];
+  if (!canUse || !main) return [];
+  const out: Candidate[] = [];
+  for (const f of engine.foods) {
+    if (f.source !== 'custom' || f.id === food.id || !f.roles.includes(main) || !canUse(f)) continue;
+    if (refusal(f, filters)) continue;
+    out.push(
+      toCandidate(f, {
+        massRatio: 1,
+        maxShare: 1,
+        rule: { id: 'own-food', label: `your ${f.name} for ${food.name}, 1:1 by weight`, why: 'a food you entered from its label for this role' },
+      }),
+    );
+  }
+  return out;
+}
+
+/**
  * Every line's function and candidates (PRODUCT.md step 5): the original food; the targets of the
  * substitution rules that apply to its food class in this dish context, kept only when they pass the
  * diet filters and bring no major allergen absent from the recipe (unless the cook allows it); and
@@ -167,6 +189,11 @@ export function recipeCandidates(engine: { foods: readonly CatalogueFood[]; byId
         seen.set(c.foodId, c);
         candidates.push(c);
       }
+    }
+    for (const c of ownFoodCandidates(engine, food, filters, options.canUse)) {
+      if (seen.has(c.foodId)) continue;
+      seen.set(c.foodId, c);
+      candidates.push(c);
     }
     const keep = keepScaleOf(applicable);
     if (keep) original.rule = byRule.get(keep.rule)!.ref;

@@ -135,21 +135,32 @@ function movedTargets(
   let reached = closest;
   const raised = (Object.keys(floors) as TargetName[]).some((t) => floors[t]! > roundOutward(closest[targetRow(t).key], targetRow(t)));
   const ceilings = binding.filter((t) => targetRow(t).sense === 'max');
+  // Every ceiling is relaxed in the re-solve: one the closest plan met may be one the dish as written breaks.
+  const allCeilings = (Object.keys(targets) as TargetName[]).filter((t) => targets[t] !== undefined && targetRow(t).sense === 'max');
   if (raised && ceilings.length > 0) {
+    // Floors the dish as written already meets can always be met together; the closest plan's floors
+    // may not be, when it traded one floor for another.
+    const writtenFloors: Partial<Targets> = {};
+    for (const target of Object.keys(floors) as TargetName[]) writtenFloors[target] = roundOutward(Math.min(targets[target]!, written[targetRow(target).key]), targetRow(target));
     const first = targetRow(ceilings[0]);
-    const outcome = solveElastic(
-      lines,
-      { ...targets, ...floors },
-      servings,
-      options,
-      { objective: { kind: 'nutrient', key: first.key, sense: 'min' }, dropTargets: ceilings },
-      log,
-      log.budgetMs / 4,
-    );
-    if (outcome?.meetsTargets) reached = planOf(solvedChoices(outcome.built.variables, outcome.solution.values), servings).perServing;
+    for (const tried of [floors, writtenFloors]) {
+      const outcome = solveElastic(
+        lines,
+        { ...targets, ...tried },
+        servings,
+        options,
+        { objective: { kind: 'nutrient', key: first.key, sense: 'min' }, dropTargets: allCeilings },
+        log,
+        log.budgetMs / 4,
+      );
+      if (outcome?.meetsTargets) {
+        reached = planOf(solvedChoices(outcome.built.variables, outcome.solution.values), servings).perServing;
+        break;
+      }
+    }
   }
   const moved: Partial<Targets> = {};
-  for (const target of binding) {
+  for (const target of new Set([...binding, ...allCeilings])) {
     const row = targetRow(target);
     const value = row.sense === 'min' ? Math.min(targets[target]!, reached[row.key]) : reached[row.key];
     const out = roundOutward(value, row);

@@ -51,7 +51,7 @@ describe('my foods in the browser', () => {
     await page.getByRole('button', { name: /analyse/i }).click();
     await expect.poll(() => page.getByText('Energy per serving').first().isVisible(), { timeout: 30_000 }).toBe(true);
     await expect.poll(() => page.getByText('Cloudmeadow carb-smart tortilla').first().isVisible(), { timeout: 10_000 }).toBe(true);
-    expect(await page.getByText(/from a label/).first().isVisible()).toBe(true);
+    expect(await page.getByText(/from a label/i).first().isVisible()).toBe(true);
     expect(await page.getByText(/\b90 g\b/).first().isVisible()).toBe(true);
     await screenshot(page, 'my-foods-matched');
 
