@@ -7,7 +7,13 @@ export const LOCAL_S3_KEYS = { accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' 
 /** An S3-compatible fake (s3rver) on loopback for photos in development and tests. */
 export async function startLocalS3(directory: string, port: number, bucket = 'hearthswap-photos') {
   mkdirSync(path.resolve(directory), { recursive: true });
-  const server = new S3rver({ port, address: '127.0.0.1', silent: true, directory: path.resolve(directory), configureBuckets: [{ name: bucket, configs: [] }] });
+  const server = new S3rver({
+    port,
+    address: '127.0.0.1',
+    silent: true,
+    directory: path.resolve(directory),
+    configureBuckets: [{ name: bucket, configs: [] }],
+  });
   const address = await server.run();
   return {
     env: {

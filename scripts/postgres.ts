@@ -112,8 +112,16 @@ export async function startPrivatePostgres(options: PrivatePostgresOptions): Pro
     ensureOwner(pwFile);
     try {
       runAsOwner(path.join(bin, 'initdb'), [
-        '-D', clusterDir, '-U', 'postgres', '-E', 'UTF8', '--locale=C.UTF-8',
-        '--auth-local=trust', '--auth-host=scram-sha-256', `--pwfile=${pwFile}`,
+        '-D',
+        clusterDir,
+        '-U',
+        'postgres',
+        '-E',
+        'UTF8',
+        '--locale=C.UTF-8',
+        '--auth-local=trust',
+        '--auth-host=scram-sha-256',
+        `--pwfile=${pwFile}`,
       ]);
     } finally {
       spawnSync('rm', ['-f', pwFile]);

@@ -32,7 +32,10 @@ async function stopAll(code: number) {
 try {
   const server = await buildServer();
   console.log(`Server compiled to dist/server in ${server.ms.toFixed(0)} ms`);
-  const client = process.env.SKIP_BUILD ? Promise.resolve() : (console.log('Building the client…'), run(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn'], { ...process.env, NODE_ENV: 'production' }));
+  const client = process.env.SKIP_BUILD
+    ? Promise.resolve()
+    : (console.log('Building the client…'),
+      run(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn'], { ...process.env, NODE_ENV: 'production' }));
   await Promise.all([run(process.execPath, ['dist/server/prepare.js']), client]);
 } catch (error) {
   console.error(String(error));

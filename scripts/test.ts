@@ -24,7 +24,12 @@ async function testDatabaseUrl(): Promise<string> {
   if (process.env.DATABASE_URL) {
     adminUrl = process.env.DATABASE_URL;
   } else {
-    const server = await startPrivatePostgres({ dataDir: '.data/postgres-test', port: Number(process.env.PG_TEST_PORT ?? 54330), database: 'postgres', durable: false });
+    const server = await startPrivatePostgres({
+      dataDir: '.data/postgres-test',
+      port: Number(process.env.PG_TEST_PORT ?? 54330),
+      database: 'postgres',
+      durable: false,
+    });
     onExit(server.stop);
     adminUrl = server.url;
   }

@@ -129,7 +129,9 @@ export function deploymentWarnings(config: AppConfig, env: NodeJS.ProcessEnv = p
     );
   }
   if (config.trustProxy === true) {
-    warnings.push('TRUST_PROXY=true trusts every X-Forwarded-For hop, so clients can choose the address rate limits see. Set the number of proxies instead (usually 1).');
+    warnings.push(
+      'TRUST_PROXY=true trusts every X-Forwarded-For hop, so clients can choose the address rate limits see. Set the number of proxies instead (usually 1).',
+    );
   }
   if (env.APP_URL && !env.APP_URL.startsWith('https://')) {
     warnings.push(`APP_URL is ${env.APP_URL}: links in e-mails will use plain HTTP. Give the public https:// address.`);

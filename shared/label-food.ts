@@ -88,16 +88,26 @@ export function panelIssues(panel: LabelPanel): PanelIssue[] {
   }
   const sum = per100(panel.proteinG + panel.fatG + panel.carbsG);
   if (sum > PER_100G_LIMITS.macroG + slack.macroG && issues.length === 0) {
-    issues.push({ field: 'carbsG', message: `Protein, fat and carbohydrate add up to ${fmt(sum)} g per 100 g: more than the food weighs. Check the serving size and the amounts.` });
+    issues.push({
+      field: 'carbsG',
+      message: `Protein, fat and carbohydrate add up to ${fmt(sum)} g per 100 g: more than the food weighs. Check the serving size and the amounts.`,
+    });
   }
   if ((panel.satFatG ?? 0) > panel.fatG + 0.5) issues.push({ field: 'satFatG', message: 'Saturated fat is part of the total fat, so it cannot be more.' });
   if ((panel.sugarG ?? 0) > panel.carbsG + 1) issues.push({ field: 'sugarG', message: 'Sugars are part of the carbohydrate, so they cannot be more.' });
-  if ((panel.fiberG ?? 0) > panel.carbsG + 1) issues.push({ field: 'fiberG', message: 'Fiber is part of the carbohydrate on a US label, so it cannot be more.' });
+  if ((panel.fiberG ?? 0) > panel.carbsG + 1)
+    issues.push({ field: 'fiberG', message: 'Fiber is part of the carbohydrate on a US label, so it cannot be more.' });
   if (panel.kcal !== undefined && per100(panel.kcal) > PER_100G_LIMITS.kcal + slack.kcal) {
-    issues.push({ field: 'kcal', message: `${fmt(panel.kcal)} kcal in ${fmt(servingG)} g is ${fmt(per100(panel.kcal))} kcal per 100 g; no food has more than ${PER_100G_LIMITS.kcal}.` });
+    issues.push({
+      field: 'kcal',
+      message: `${fmt(panel.kcal)} kcal in ${fmt(servingG)} g is ${fmt(per100(panel.kcal))} kcal per 100 g; no food has more than ${PER_100G_LIMITS.kcal}.`,
+    });
   }
   if (per100(panel.sodiumMg) > PER_100G_LIMITS.sodiumMg) {
-    issues.push({ field: 'sodiumMg', message: `${fmt(panel.sodiumMg ?? 0)} mg of sodium in ${fmt(servingG)} g is saltier than salt. Check the serving size and the sodium.` });
+    issues.push({
+      field: 'sodiumMg',
+      message: `${fmt(panel.sodiumMg ?? 0)} mg of sodium in ${fmt(servingG)} g is saltier than salt. Check the serving size and the sodium.`,
+    });
   }
   return issues;
 }

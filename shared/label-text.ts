@@ -53,8 +53,7 @@ const NAMES: Record<keyof typeof FIELD_WORDS, RegExp[]> = {
 };
 
 /** An amount after a nutrient's name: "2.5g", "0 g", "Og", "Less than 1g", "<1g", "450mg", "1,200 mg", "2.59". */
-const AMOUNT =
-  /^[\s:.,-]*(less\s*than\s*|<\s*)?(\d{1,3}(?:,\d{3})+|\d+(?:\.\d+)?|\.\d+|[Oo](?=\s*m?[gq9]\b))\s*(mg|m9|mq|g|q|¢)?(?![\d.]*[ \t]*%)/i;
+const AMOUNT = /^[\s:.,-]*(less\s*than\s*|<\s*)?(\d{1,3}(?:,\d{3})+|\d+(?:\.\d+)?|\.\d+|[Oo](?=\s*m?[gq9]\b))\s*(mg|m9|mq|g|q|¢)?(?![\d.]*[ \t]*%)/i;
 
 const PERCENT = /^[^%\n]{0,14}?(\d{1,3})\s*%/;
 
@@ -89,7 +88,8 @@ function readAmount(field: LabelField, after: string): Amount | null {
   const candidates: { value: number; reread: boolean; needsPercent: boolean }[] = [{ value, reread: false, needsPercent: false }];
   const plain = digits.replace(/,/g, '');
   // "2.59" for "2.5g", "199" for "19g": a unit read as a 9 (or a 9 followed by a stray unit character).
-  if ((unit === '' || unit === 'q' || unit === '¢') && /\d9$/.test(plain)) candidates.push({ value: number(plain.slice(0, -1)), reread: true, needsPercent: false });
+  if ((unit === '' || unit === 'q' || unit === '¢') && /\d9$/.test(plain))
+    candidates.push({ value: number(plain.slice(0, -1)), reread: true, needsPercent: false });
   // "199g" for "19g": the g doubled as "9g"; taken only when the printed % Daily Value says so.
   else if ((unit === 'g' || unit === 'mg') && /\d9$/.test(plain)) candidates.push({ value: number(plain.slice(0, -1)), reread: true, needsPercent: true });
   if (candidates.length > 1 && !lessThan) {
@@ -179,7 +179,19 @@ function readCalories(text: string): number | null {
 }
 
 export function emptyScanFields(): LabelScanFields {
-  return { servingSizeG: null, servingSizeMl: null, servingLabel: null, kcal: null, fatG: null, satFatG: null, carbsG: null, fiberG: null, sugarG: null, proteinG: null, sodiumMg: null };
+  return {
+    servingSizeG: null,
+    servingSizeMl: null,
+    servingLabel: null,
+    kcal: null,
+    fatG: null,
+    satFatG: null,
+    carbsG: null,
+    fiberG: null,
+    sugarG: null,
+    proteinG: null,
+    sodiumMg: null,
+  };
 }
 
 /** The ten fields of a panel's text; those it could not find stay null. */
@@ -196,7 +208,8 @@ export function readLabelText(raw: string): LabelReading {
     fields[field] = amount.value;
     if (amount.doubtful) doubtful.push(field);
     const unit = field === 'sodiumMg' ? 'mg' : 'g';
-    if (amount.lessThan) notes.push(`${FIELD_WORDS[field]} said “less than ${amount.value * 2} ${unit}”: read as ${amount.value} ${unit}, the least it can be. Check it.`);
+    if (amount.lessThan)
+      notes.push(`${FIELD_WORDS[field]} said “less than ${amount.value * 2} ${unit}”: read as ${amount.value} ${unit}, the least it can be. Check it.`);
     if (amount.reread) notes.push(`${FIELD_WORDS[field]}: a “g” may have been read as a 9; read as ${amount.value} ${unit}.`);
   }
   const found = (Object.keys(fields) as LabelField[]).filter((k) => fields[k] !== null && !(k === 'servingSizeMl' && fields.servingSizeG !== null));

@@ -10,16 +10,7 @@ export interface Nutrients {
   sodiumMg: number;
 }
 
-export const NUTRIENT_KEYS = [
-  'kcal',
-  'proteinG',
-  'fatG',
-  'satFatG',
-  'carbsG',
-  'fiberG',
-  'sugarG',
-  'sodiumMg',
-] as const satisfies readonly (keyof Nutrients)[];
+export const NUTRIENT_KEYS = ['kcal', 'proteinG', 'fatG', 'satFatG', 'carbsG', 'fiberG', 'sugarG', 'sodiumMg'] as const satisfies readonly (keyof Nutrients)[];
 
 export type NutrientKey = (typeof NUTRIENT_KEYS)[number];
 

@@ -24,17 +24,7 @@ export interface Amount {
 }
 
 export type ParseFlag =
-  | 'range'
-  | 'compound'
-  | 'to-taste'
-  | 'needs-amount'
-  | 'optional'
-  | 'group-header'
-  | 'approximate'
-  | 'implied-quantity'
-  | 'truncated'
-  | 'empty'
-  | 'unparsed';
+  'range' | 'compound' | 'to-taste' | 'needs-amount' | 'optional' | 'group-header' | 'approximate' | 'implied-quantity' | 'truncated' | 'empty' | 'unparsed';
 
 export interface ParsedLine {
   /** the line exactly as given */
@@ -68,21 +58,48 @@ export interface ParsedLine {
 const PACKAGE_UNITS: UnitOfMeasureDefinitions = Object.fromEntries(
   UNITS.map((u) => {
     const spellings = [...u.spellings, ...(u.caseSensitive ?? [])].filter((s) => /^[\p{L}][\p{L}. -]*$/u.test(s));
-    return [
-      `hearthswap-${u.id}`,
-      { short: spellings[0] ?? u.id, plural: spellings[1] ?? spellings[0] ?? u.id, alternates: spellings },
-    ];
+    return [`hearthswap-${u.id}`, { short: spellings[0] ?? u.id, plural: spellings[1] ?? spellings[0] ?? u.id, alternates: spellings }];
   }),
 );
 
 const PACKAGE_OPTIONS: ParseIngredientOptions = {
   round: false,
   additionalUOMs: PACKAGE_UNITS,
-  leadingQuantityPrefixes: ['approximately', 'approx.', 'approx', 'about', 'around', 'roughly', 'up to', 'at least', 'scant', 'generous', 'heaping', 'heaped', '~'],
+  leadingQuantityPrefixes: [
+    'approximately',
+    'approx.',
+    'approx',
+    'about',
+    'around',
+    'roughly',
+    'up to',
+    'at least',
+    'scant',
+    'generous',
+    'heaping',
+    'heaped',
+    '~',
+  ],
 };
 
 /** Words between a quantity and its unit that change nothing we can weigh: "2 heaping tbsp". */
-const UNIT_MODIFIERS = new Set(['heaping', 'heaped', 'scant', 'level', 'rounded', 'generous', 'good', 'full', 'big', 'small', 'medium', 'large', 'packed', 'thin', 'thick']);
+const UNIT_MODIFIERS = new Set([
+  'heaping',
+  'heaped',
+  'scant',
+  'level',
+  'rounded',
+  'generous',
+  'good',
+  'full',
+  'big',
+  'small',
+  'medium',
+  'large',
+  'packed',
+  'thin',
+  'thick',
+]);
 
 /** Units that give a counted food's size rather than a measure: "2 large eggs". */
 const SIZE_UNITS = new Set(['large', 'medium', 'small', 'extra-large', 'jumbo']);
@@ -153,7 +170,7 @@ function readAmounts(text: string): Amount[] {
     if (!a?.amount || (a.kind !== 'mass' && a.kind !== 'volume')) continue;
     // "1 lb 5 oz": a compound amount is one amount.
     const b = readAmount(piece.slice(a.text.length).replace(/^\s*(?:plus|\+|and)?\s*/i, ''));
-    out.push(b?.amount && b.kind === a.kind ? addAmounts(a.amount, b.amount) ?? a.amount : a.amount);
+    out.push(b?.amount && b.kind === a.kind ? (addAmounts(a.amount, b.amount) ?? a.amount) : a.amount);
   }
   return out;
 }
@@ -284,7 +301,6 @@ function parseCleanLine(input: string): ParsedLine {
   for (const pass of PASSES) pass(state);
   return finish(state);
 }
-
 
 /** The passes, in order: each reads what the package left in the description. */
 const PASSES: readonly ((s: LineState) => void)[] = [

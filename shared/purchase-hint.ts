@@ -28,9 +28,38 @@ const SIZE_WORDS = ['extra large', 'extra small', 'large', 'medium', 'small', 'j
 const WHOLE_WORDS = ['whole', 'each', 'item', 'fruit'];
 /** Measures that name the counted piece, bought or used whole. Slices, pieces and strips are cut, not bought. */
 const COUNT_NOUNS = [
-  'clove', 'tortilla', 'egg', 'ear', 'head', 'bulb', 'link', 'patty', 'fillet', 'breast', 'thigh',
-  'drumstick', 'wing', 'leg', 'bun', 'roll', 'bagel', 'muffin', 'pita', 'stick', 'stalk', 'potato',
-  'onion', 'pepper', 'carrot', 'banana', 'apple', 'lemon', 'lime', 'avocado', 'sausage', 'chop',
+  'clove',
+  'tortilla',
+  'egg',
+  'ear',
+  'head',
+  'bulb',
+  'link',
+  'patty',
+  'fillet',
+  'breast',
+  'thigh',
+  'drumstick',
+  'wing',
+  'leg',
+  'bun',
+  'roll',
+  'bagel',
+  'muffin',
+  'pita',
+  'stick',
+  'stalk',
+  'potato',
+  'onion',
+  'pepper',
+  'carrot',
+  'banana',
+  'apple',
+  'lemon',
+  'lime',
+  'avocado',
+  'sausage',
+  'chop',
 ];
 
 /** The measure without its parenthetical or its preparation: "medium (2-1/2" dia)" → "medium", "cup, shredded" → "cup". */
@@ -183,12 +212,7 @@ export function purchaseWeight(grams: number, unitSystem: UnitSystem): string {
  * loose foods (cups in US units only), else a weight. `foodName` names counted items ("3 large eggs").
  * Returns '' for 0 g: nothing to buy.
  */
-export function purchaseHint(
-  grams: number,
-  portions: readonly Portion[],
-  unitSystem: UnitSystem,
-  foodName?: string,
-): string {
+export function purchaseHint(grams: number, portions: readonly Portion[], unitSystem: UnitSystem, foodName?: string): string {
   if (!Number.isFinite(grams) || grams < 0) throw new RangeError(`grams must be a finite number ≥ 0, got ${grams}`);
   if (grams === 0) return '';
   return countHint(grams, portions, foodName) ?? volumeHint(grams, portions, unitSystem) ?? purchaseWeight(grams, unitSystem);

@@ -55,7 +55,9 @@ export function estimateTargets(input: EstimateTargetsInput): TargetEstimate {
   const cautions = [...ALWAYS_CAUTIONS];
   const floor = SUPERVISED_KCAL_FLOOR[input.sex];
   if (kcalPerDay < floor) {
-    cautions.push(`This comes to less than ${floor.toLocaleString('en-US')} kcal a day, an intake usually followed only with a physician or registered dietitian.`);
+    cautions.push(
+      `This comes to less than ${floor.toLocaleString('en-US')} kcal a day, an intake usually followed only with a physician or registered dietitian.`,
+    );
   }
   const bmi = input.weightKg / (input.heightCm / 100) ** 2;
   if (bmi >= PROTEIN_BY_WEIGHT_BMI_LIMIT) {

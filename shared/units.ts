@@ -51,13 +51,14 @@ const mass = (id: string, grams: number, basis: UnitBasis, spellings: string[]):
   basis,
   spellings,
 });
-const volume = (
-  id: string,
-  ml: number,
-  basis: UnitBasis,
-  spellings: string[],
-  caseSensitive?: string[],
-): UnitDef => ({ id, kind: 'volume', ml, basis, spellings, caseSensitive });
+const volume = (id: string, ml: number, basis: UnitBasis, spellings: string[], caseSensitive?: string[]): UnitDef => ({
+  id,
+  kind: 'volume',
+  ml,
+  basis,
+  spellings,
+  caseSensitive,
+});
 const count = (id: string, spellings: string[]): UnitDef => ({
   id,
   kind: 'count',
@@ -72,33 +73,34 @@ export const UNITS: readonly UnitDef[] = [
   mass('oz', GRAMS_PER_OUNCE, 'nist-exact', ['oz', 'ozs', 'ounce', 'ounces', 'onz']),
   mass('lb', GRAMS_PER_POUND, 'nist-exact', ['lb', 'lbs', 'pound', 'pounds', '#', 'ib', 'ibs']),
 
-  volume('ml', 1, 'metric-exact', [
-    'ml', 'mls', 'millilitre', 'millilitres', 'milliliter', 'milliliters', 'cc',
-  ]),
+  volume('ml', 1, 'metric-exact', ['ml', 'mls', 'millilitre', 'millilitres', 'milliliter', 'milliliters', 'cc']),
   volume('cl', 10, 'metric-exact', ['cl', 'centilitre', 'centilitres', 'centiliter', 'centiliters']),
   volume('dl', 100, 'metric-exact', ['dl', 'decilitre', 'decilitres', 'deciliter', 'deciliters']),
   volume('l', 1000, 'metric-exact', ['l', 'ltr', 'ltrs', 'litre', 'litres', 'liter', 'liters']),
-  volume(
-    'tsp',
-    ML_PER_TSP,
-    'nist-exact',
-    ['tsp', 'tsps', 'tspn', 'tspns', 'teaspoon', 'teaspoons', 'teaspoonful', 'teaspoonfuls', 'teasp'],
-    ['t', 'ts'],
-  ),
+  volume('tsp', ML_PER_TSP, 'nist-exact', ['tsp', 'tsps', 'tspn', 'tspns', 'teaspoon', 'teaspoons', 'teaspoonful', 'teaspoonfuls', 'teasp'], ['t', 'ts']),
   volume(
     'tbsp',
     ML_PER_TBSP,
     'nist-exact',
-    [
-      'tbsp', 'tbsps', 'tbs', 'tbl', 'tbls', 'tblsp', 'tblsps', 'tblspn', 'tbsn', 'tablespoon',
-      'tablespoons', 'tablespoonful', 'tablespoonfuls', 'tablesp',
-    ],
+    ['tbsp', 'tbsps', 'tbs', 'tbl', 'tbls', 'tblsp', 'tblsps', 'tblspn', 'tbsn', 'tablespoon', 'tablespoons', 'tablespoonful', 'tablespoonfuls', 'tablesp'],
     ['T', 'Tb', 'TB'],
   ),
   volume('cup', ML_PER_CUP, 'nist-exact', ['c', 'cup', 'cups', 'cupful', 'cupfuls']),
   volume('fl-oz', ML_PER_FL_OZ, 'nist-exact', [
-    'fl oz', 'fl. oz', 'fl.oz', 'floz', 'fl-oz', 'fl ounce', 'fl ounces', 'fluid oz', 'fluid ounce',
-    'fluid ounces', 'fluid-ounce', 'fluid-ounces', 'fluidounce', 'fluidounces',
+    'fl oz',
+    'fl. oz',
+    'fl.oz',
+    'floz',
+    'fl-oz',
+    'fl ounce',
+    'fl ounces',
+    'fluid oz',
+    'fluid ounce',
+    'fluid ounces',
+    'fluid-ounce',
+    'fluid-ounces',
+    'fluidounce',
+    'fluidounces',
   ]),
   volume('pint', ML_PER_PINT, 'nist-exact', ['pt', 'pts', 'pint', 'pints']),
   volume('quart', ML_PER_QUART, 'nist-exact', ['qt', 'qts', 'quart', 'quarts']),
@@ -174,9 +176,7 @@ for (const u of UNITS) {
 }
 
 /** The longest unit spelling, in words; a unit phrase is never longer than this. */
-export const MAX_UNIT_WORDS = Math.max(
-  ...UNITS.flatMap((u) => [...u.spellings, ...(u.caseSensitive ?? [])].map((s) => s.split(' ').length)),
-);
+export const MAX_UNIT_WORDS = Math.max(...UNITS.flatMap((u) => [...u.spellings, ...(u.caseSensitive ?? [])].map((s) => s.split(' ').length)));
 
 /**
  * The canonical unit id of a spelling ("Tbsp." → "tbsp", "T" → "tbsp", "t" → "tsp",

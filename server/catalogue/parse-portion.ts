@@ -1,7 +1,12 @@
 import type { Portion } from '../../shared/food';
 
 const UNICODE_FRACTIONS: Record<string, number> = {
-  '½': 0.5, '⅓': 1 / 3, '⅔': 2 / 3, '¼': 0.25, '¾': 0.75, '⅛': 0.125,
+  '½': 0.5,
+  '⅓': 1 / 3,
+  '⅔': 2 / 3,
+  '¼': 0.25,
+  '¾': 0.75,
+  '⅛': 0.125,
 };
 
 /**
@@ -25,7 +30,10 @@ function splitAmount(text: string): { amount: number; rest: string } | null {
 
 /** Tidy a measure: trim, collapse runs of spaces, drop a stray leading comma. */
 function tidy(measure: string): string {
-  return measure.replace(/\s+/g, ' ').replace(/^[\s,]+/, '').trim();
+  return measure
+    .replace(/\s+/g, ' ')
+    .replace(/^[\s,]+/, '')
+    .trim();
 }
 
 /**

@@ -3,7 +3,8 @@ import { ConnectionError } from 'sequelize';
 /** SQLSTATE codes that mean "the server is going or gone", not "your query is wrong". */
 const UNAVAILABLE_SQLSTATES = new Set(['57P01', '57P02', '57P03', '53300']);
 const UNAVAILABLE_NODE_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'EPIPE', 'ETIMEDOUT', 'ENOTFOUND', 'EHOSTUNREACH', 'EAI_AGAIN']);
-const UNAVAILABLE_MESSAGES = /Connection terminated|connection error and is not queryable|timeout exceeded when trying to connect|Client was closed and is not queryable/i;
+const UNAVAILABLE_MESSAGES =
+  /Connection terminated|connection error and is not queryable|timeout exceeded when trying to connect|Client was closed and is not queryable/i;
 
 interface MaybeDriverError {
   code?: unknown;

@@ -33,7 +33,14 @@ export function createOutboxStore(pool: pg.Pool) {
     async list(limit: number): Promise<StoredMail[]> {
       const { rows } = await pool.query<OutboxRow>('SELECT * FROM dev_outbox ORDER BY received_at DESC, id LIMIT $1', [limit]);
       return rows.map((row) => {
-        const mail: StoredMail = { id: row.id, from: row.sender, to: row.recipients, subject: row.subject, text: row.body_text, receivedAt: row.received_at.toISOString() };
+        const mail: StoredMail = {
+          id: row.id,
+          from: row.sender,
+          to: row.recipients,
+          subject: row.subject,
+          text: row.body_text,
+          receivedAt: row.received_at.toISOString(),
+        };
         if (row.body_html !== null) mail.html = row.body_html;
         if (row.message_id !== null) mail.messageId = row.message_id;
         return mail;

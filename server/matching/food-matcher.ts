@@ -13,14 +13,7 @@
  */
 import type { CatalogueFood } from '../../shared/food';
 import { recordFallback } from '../../shared/fallbacks';
-import {
-  aliasVocabulary,
-  buildAliasIndex,
-  containedAliases,
-  DEFAULT_ALIASES,
-  type AliasIndex,
-  type AliasTable,
-} from './alias-index';
+import { aliasVocabulary, buildAliasIndex, containedAliases, DEFAULT_ALIASES, type AliasIndex, type AliasTable } from './alias-index';
 import {
   buildFoodIndex,
   FLAG_BABY,
@@ -38,16 +31,7 @@ import {
   type FoodIndex,
   type IndexedFood,
 } from './food-index';
-import {
-  CONTRADICTIONS,
-  PHRASE_ABBREVIATIONS,
-  PIECE_WORDS,
-  PREPARATION_WORDS,
-  STOP_WORDS,
-  SYNONYMS,
-  withoutParentheticals,
-  words,
-} from './normalise-phrase';
+import { CONTRADICTIONS, PHRASE_ABBREVIATIONS, PIECE_WORDS, PREPARATION_WORDS, STOP_WORDS, SYNONYMS, withoutParentheticals, words } from './normalise-phrase';
 import { createSpellingCorrector, type SpellingCorrector } from './spelling';
 
 /** A match scoring under this comes back with `food: null` (its alternatives are still given). */
@@ -161,8 +145,19 @@ const SIBLINGS_LOOKED_AT = 60;
 const MODIFIER_WORDS = new Set([
   ...VARIANT_WORDS,
   ...STATE_WORDS,
-  'canned', 'frozen', 'dried', 'dry', 'raw', 'skim', 'unsalted', 'salted', 'lean', 'sweetened',
-  'unsweetened', 'smoked', 'instant',
+  'canned',
+  'frozen',
+  'dried',
+  'dry',
+  'raw',
+  'skim',
+  'unsalted',
+  'salted',
+  'lean',
+  'sweetened',
+  'unsweetened',
+  'smoked',
+  'instant',
 ]);
 
 function isContentWord(w: string): boolean {
@@ -234,10 +229,11 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
         continue;
       }
       const fixed = speller.correct(w);
-      if (fixed) for (const c of fixed.words) {
-        all.push(c);
-        closeness.push(fixed.closeness);
-      }
+      if (fixed)
+        for (const c of fixed.words) {
+          all.push(c);
+          closeness.push(fixed.closeness);
+        }
       else {
         all.push(w);
         closeness.push(1);
@@ -474,7 +470,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
 
   /** False when `b` is another form of `a` ("tortilla chips" beside "tortillas") the phrase did not ask for. */
   function sameForm(a: IndexedFood, b: IndexedFood, q: PreparedQuery): boolean {
-    const changed = (b.flags & ~a.flags) & (FLAG_SNACK | FLAG_BABY | FLAG_MIXED_DISH);
+    const changed = b.flags & ~a.flags & (FLAG_SNACK | FLAG_BABY | FLAG_MIXED_DISH);
     if (changed) return false;
     for (const id of b.forms) if (!a.tokens.has(id) && !q.wordSet.has(index.wordText[id])) return false;
     return true;
@@ -499,7 +495,10 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
     const unknownWords = q.terms.filter((t) => t.alternatives.length === 0 && !aliases.vocabulary.has(t.word)).map((t) => t.word);
     const ranked = rank(q, false, Math.max(wanted + 2, SIBLINGS_LOOKED_AT));
     const alternativesWithout = (position: number | null) =>
-      ranked.filter((r) => r.position !== position).slice(0, wanted).map((r) => index.foods[r.position].food);
+      ranked
+        .filter((r) => r.position !== position)
+        .slice(0, wanted)
+        .map((r) => index.foods[r.position].food);
 
     const exact = exactAlias(q);
     if (exact !== null) {
@@ -511,7 +510,13 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
     const best = ranked[0];
     const bestScore = best ? Math.min(MAX_PARTIAL_CONFIDENCE, best.score) : 0;
     if (partial && partial.score >= bestScore && partial.score >= MATCH_CONFIDENCE_FLOOR) {
-      return { food: index.foods[partial.position].food, confidence: partial.score, alternatives: alternativesWithout(partial.position), via: 'alias', unknownWords };
+      return {
+        food: index.foods[partial.position].food,
+        confidence: partial.score,
+        alternatives: alternativesWithout(partial.position),
+        via: 'alias',
+        unknownWords,
+      };
     }
     if (best && bestScore >= MATCH_CONFIDENCE_FLOOR) {
       return { food: index.foods[best.position].food, confidence: bestScore, alternatives: alternativesWithout(best.position), via: 'fuzzy', unknownWords };
@@ -579,7 +584,10 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
  */
 export function choicesIn(text: string, splitAnd = true): string[] {
   const out: string[] = [];
-  const orParts = text.split(/\s+or\s+|\s*\/\s*/i).map((p) => p.trim()).filter(Boolean);
+  const orParts = text
+    .split(/\s+or\s+|\s*\/\s*/i)
+    .map((p) => p.trim())
+    .filter(Boolean);
   if (orParts.length > 1) {
     const last = orParts[orParts.length - 1].split(/\s+/);
     const head = last[last.length - 1];
@@ -589,7 +597,12 @@ export function choicesIn(text: string, splitAnd = true): string[] {
       out.push(orParts[i]);
     }
   }
-  if (splitAnd) for (const p of text.split(/\s+and\s+|\s*,\s*/i).map((x) => x.trim()).filter(Boolean)) out.push(p);
+  if (splitAnd)
+    for (const p of text
+      .split(/\s+and\s+|\s*,\s*/i)
+      .map((x) => x.trim())
+      .filter(Boolean))
+      out.push(p);
   return [...new Set(out)].filter((p) => p !== text);
 }
 

@@ -21,7 +21,10 @@ export interface FoodModifier {
 
 const LOWER_FAT = [['lowfat'], ['light'], ['reduced', 'fat'], ['nonfat'], ['skim'], ['1%'], ['2%'], ['part', 'skim']];
 const LESS_SODIUM = [['low', 'sodium'], ['reduced', 'sodium'], ['less', 'sodium'], ['unsalted'], ['lower', 'sodium']];
-const WHOLE_GRAIN = [['whole', 'wheat'], ['whole', 'grain']];
+const WHOLE_GRAIN = [
+  ['whole', 'wheat'],
+  ['whole', 'grain'],
+];
 const HOT = [['hot'], ['spicy'], ['chili'], ['jalapeno'], ['cayenne'], ['chipotle'], ['pepper']];
 const TEMPERATURE_FOODS = ['water', 'milk', 'tea', 'coffee', 'broth', 'stock', 'dog', 'chocolate', 'cocoa'];
 
@@ -42,7 +45,12 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   { label: 'plant-based', asks: ['plant', 'based'], honouredBy: [['vegetarian'], ['meatless'], ['imitation'], ['soy'], ['tofu'], ['nondairy']] },
   { label: 'low-fat', asks: ['lowfat'], honouredBy: LOWER_FAT },
   { label: 'reduced-fat', asks: ['reduced', 'fat'], honouredBy: LOWER_FAT },
-  { label: 'light', asks: ['light'], honouredBy: LOWER_FAT, neutralFor: ['brown', 'sugar', 'soy', 'olive', 'rum', 'molasses', 'green', 'corn', 'cream', 'red', 'kidney', 'meat'] },
+  {
+    label: 'light',
+    asks: ['light'],
+    honouredBy: LOWER_FAT,
+    neutralFor: ['brown', 'sugar', 'soy', 'olive', 'rum', 'molasses', 'green', 'corn', 'cream', 'red', 'kidney', 'meat'],
+  },
   { label: 'fat-free', asks: ['nonfat'], honouredBy: [['skim']] },
   { label: 'skim', asks: ['skim'], honouredBy: [['nonfat']] },
   { label: 'part-skim', asks: ['part', 'skim'], honouredBy: [['lowfat'], ['reduced', 'fat'], ['light']] },
@@ -51,7 +59,14 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   { label: 'less-sodium', asks: ['less', 'sodium'], honouredBy: LESS_SODIUM },
   { label: 'whole-wheat', asks: ['whole', 'wheat'], honouredBy: WHOLE_GRAIN },
   { label: 'whole-grain', asks: ['whole', 'grain'], honouredBy: WHOLE_GRAIN },
-  { label: 'low-carb', asks: ['low', 'carb'], honouredBy: [['low', 'carbohydrate'], ['reduced', 'carbohydrate']] },
+  {
+    label: 'low-carb',
+    asks: ['low', 'carb'],
+    honouredBy: [
+      ['low', 'carbohydrate'],
+      ['reduced', 'carbohydrate'],
+    ],
+  },
   { label: 'sugar-free', asks: ['sugar', 'free'], honouredBy: [['unsweetened'], ['diet'], ['sugar', 'substitute'], ['no', 'sugar']] },
   { label: 'gluten-free', asks: ['gluten', 'free'] },
   { label: 'sweet', asks: ['sweet'], neutralFor: ['paprika', 'basil', 'vermouth', 'butter', 'cream', 'relish'] },

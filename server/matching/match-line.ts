@@ -37,7 +37,37 @@ const CANNED_UNITS = new Set(['can', 'jar']);
 const CANNED_FORMS = new Set(['crushed', 'diced', 'stewed', 'whole', 'peeled', 'pureed', 'puree', 'fire', 'roasted', 'sliced']);
 
 /** Phrases that could be many foods: "cheese", "oil", "neutral oil", "nuts". */
-const GENERIC_WORDS = new Set(['cheese', 'oil', 'seed', 'nut', 'meat', 'fish', 'bean', 'sauce', 'seasoning', 'spice', 'herb', 'green', 'sausage', 'vinegar', 'wine', 'chile', 'chili', 'pepper', 'berry', 'fruit', 'vegetable', 'squash', 'lettuce', 'stock', 'broth', 'flour', 'sugar', 'salt', 'milk']);
+const GENERIC_WORDS = new Set([
+  'cheese',
+  'oil',
+  'seed',
+  'nut',
+  'meat',
+  'fish',
+  'bean',
+  'sauce',
+  'seasoning',
+  'spice',
+  'herb',
+  'green',
+  'sausage',
+  'vinegar',
+  'wine',
+  'chile',
+  'chili',
+  'pepper',
+  'berry',
+  'fruit',
+  'vegetable',
+  'squash',
+  'lettuce',
+  'stock',
+  'broth',
+  'flour',
+  'sugar',
+  'salt',
+  'milk',
+]);
 /** …except these, which recipes use for one plain food (all-purpose flour, granulated sugar, table salt, black pepper, whole milk). */
 const PLAIN_DEFAULTS = new Set(['flour', 'sugar', 'salt', 'pepper', 'milk']);
 const GENERIC_ADJECTIVES = new Set(['neutral', 'cooking', 'mixed', 'assorted', 'favorite', 'favourite', 'any', 'other', 'your', 'plain', 'some', 'kind']);
@@ -89,7 +119,9 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
     const leaveOut = [...asked.map((m) => [m]), asked];
     for (const out of leaveOut) {
       const asks = new Set(out.flatMap((m) => m.asks));
-      const plain = words(phrase).filter((w) => !asks.has(w)).join(' ');
+      const plain = words(phrase)
+        .filter((w) => !asks.has(w))
+        .join(' ');
       const nearest = plain ? matcher.match(plain) : null;
       if (nearest?.food) {
         match = { ...nearest, confidence: Math.min(nearest.confidence, MISSING_MODIFIER_CONFIDENCE) };
@@ -102,8 +134,13 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
   const byCan = (parsed.unit !== null && CANNED_UNITS.has(parsed.unit)) || /\bcan(?:ned|s)?\b|\btins?\b/i.test(`${parsed.sizeText ?? ''} ${phrase}`);
   const saysCanned = /\bcanned\b/i.test(phrase);
   if (byCan && !isCanned(match.food)) {
-    const forms = words(parsed.preparation ?? '').filter((w) => CANNED_FORMS.has(w)).join(' ');
-    const bare = phrase.replace(/\bcanned\b/i, ' ').replace(/\s+/g, ' ').trim();
+    const forms = words(parsed.preparation ?? '')
+      .filter((w) => CANNED_FORMS.has(w))
+      .join(' ');
+    const bare = phrase
+      .replace(/\bcanned\b/i, ' ')
+      .replace(/\s+/g, ' ')
+      .trim();
     for (const variant of [forms ? `${forms} ${bare}` : null, `canned ${forms} ${bare}`]) {
       if (!variant) continue;
       const canned = matcher.match(variant.replace(/\s+/g, ' '));
@@ -142,7 +179,9 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
         confidence = Math.min(confidence, MISSING_MODIFIER_CONFIDENCE);
         check = true;
         const names = unmet.map((m) => `“${m.label}”`).join(' and ');
-        warnings.push(`The catalogue has no ${names} version of this food: weighed as its nearest food, ${food.name}. Add it from its label for exact figures.`);
+        warnings.push(
+          `The catalogue has no ${names} version of this food: weighed as its nearest food, ${food.name}. Add it from its label for exact figures.`,
+        );
       }
     }
     const generic = isGenericPhrase(phrase);

@@ -26,15 +26,61 @@ const LABEL_SERVING_WORDS = new Set(['serving', 'nlea', 'per', 'approximate', 'w
 
 /** Participles and plurals of the words household measures use, to one stem. */
 const STEMS: Record<string, string> = {
-  chopped: 'chop', chop: 'chop', diced: 'dice', dice: 'dice', minced: 'mince', mince: 'mince', cubed: 'cube',
-  cube: 'cube', shredded: 'shred', shred: 'shred', grated: 'grate', grate: 'grate', sliced: 'slice',
-  slice: 'slice', crumbled: 'crumble', crumble: 'crumble', mashed: 'mash', mash: 'mash', melted: 'melt',
-  melt: 'melt', packed: 'pack', pack: 'pack', unpacked: 'unpack', sifted: 'sift', unsifted: 'unsift',
-  whipped: 'whip', whip: 'whip', pureed: 'puree', puree: 'puree', halved: 'half', half: 'half',
-  quartered: 'quarter', section: 'section', strip: 'strip', crushed: 'crush', flaked: 'flake', flake: 'flake',
-  piece: 'piece', floret: 'floret', spear: 'spear', chunk: 'chunk', slivered: 'sliver', sliver: 'sliver',
-  ground: 'ground', whole: 'whole', cooked: 'cook', raw: 'raw', drained: 'drain', thawed: 'thaw',
-  frozen: 'frozen', canned: 'canned', fluid: 'fluid', ring: 'ring', julienned: 'strip', torn: 'piece',
+  chopped: 'chop',
+  chop: 'chop',
+  diced: 'dice',
+  dice: 'dice',
+  minced: 'mince',
+  mince: 'mince',
+  cubed: 'cube',
+  cube: 'cube',
+  shredded: 'shred',
+  shred: 'shred',
+  grated: 'grate',
+  grate: 'grate',
+  sliced: 'slice',
+  slice: 'slice',
+  crumbled: 'crumble',
+  crumble: 'crumble',
+  mashed: 'mash',
+  mash: 'mash',
+  melted: 'melt',
+  melt: 'melt',
+  packed: 'pack',
+  pack: 'pack',
+  unpacked: 'unpack',
+  sifted: 'sift',
+  unsifted: 'unsift',
+  whipped: 'whip',
+  whip: 'whip',
+  pureed: 'puree',
+  puree: 'puree',
+  halved: 'half',
+  half: 'half',
+  quartered: 'quarter',
+  section: 'section',
+  strip: 'strip',
+  crushed: 'crush',
+  flaked: 'flake',
+  flake: 'flake',
+  piece: 'piece',
+  floret: 'floret',
+  spear: 'spear',
+  chunk: 'chunk',
+  slivered: 'sliver',
+  sliver: 'sliver',
+  ground: 'ground',
+  whole: 'whole',
+  cooked: 'cook',
+  raw: 'raw',
+  drained: 'drain',
+  thawed: 'thaw',
+  frozen: 'frozen',
+  canned: 'canned',
+  fluid: 'fluid',
+  ring: 'ring',
+  julienned: 'strip',
+  torn: 'piece',
 };
 
 /** The stem of a preparation word, or the singular word when it has none. */
@@ -98,7 +144,10 @@ export function parseMeasure(measure: string): MeasureInfo {
 function readMeasure(measure: string): MeasureInfo {
   const text = measure.toLowerCase().replace(/\s+/g, ' ').trim();
   const parens = [...text.matchAll(/\(([^)]*)\)?/g)].map((m) => m[1] ?? '');
-  const main = text.replace(/\([^)]*\)?/g, ' ').replace(/\s+/g, ' ').trim();
+  const main = text
+    .replace(/\([^)]*\)?/g, ' ')
+    .replace(/\s+/g, ' ')
+    .trim();
   const ws = main.split(/[\s,]+/).filter((w) => w && !/^\d/.test(w));
 
   let unit: string | null = null;

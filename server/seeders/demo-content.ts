@@ -16,7 +16,13 @@ export async function seedDemoContent(sequelize: Sequelize) {
   let recipes = 0;
   for (const r of demo.recipes) {
     if (await Recipe.findOne({ where: { ownerId: cook.id, title: r.title } })) continue;
-    await createRecipe(sequelize, engine, cook, { title: r.title, servings: r.servings, notes: r.notes, method: r.method, lines: r.ingredients.map((input) => ({ input })) });
+    await createRecipe(sequelize, engine, cook, {
+      title: r.title,
+      servings: r.servings,
+      notes: r.notes,
+      method: r.method,
+      lines: r.ingredients.map((input) => ({ input })),
+    });
     recipes++;
   }
   let swaps = 0;
@@ -25,7 +31,16 @@ export async function seedDemoContent(sequelize: Sequelize) {
     const to = engine.matcher.search(s.to, 1)[0]?.food;
     if (!from || !to || from.id === to.id) continue;
     if (await Swap.findOne({ where: { coachId: coach.id, fromFoodId: from.id, toFoodId: to.id } })) continue;
-    await Swap.create({ coachId: coach.id, fromFoodId: from.id, fromRole: null, toFoodId: to.id, volumeRatio: 1, note: s.note, tags: s.tags, status: 'published' });
+    await Swap.create({
+      coachId: coach.id,
+      fromFoodId: from.id,
+      fromRole: null,
+      toFoodId: to.id,
+      volumeRatio: 1,
+      note: s.note,
+      tags: s.tags,
+      status: 'published',
+    });
     swaps++;
   }
   // On the first seed the demo cook becomes the demo coach's client, with per-meal targets.

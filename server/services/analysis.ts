@@ -47,7 +47,12 @@ const catalogueOnly: FoodVisibility = (food) => food.source === 'usda-sr28';
  * One line matched and weighed. `ownFoods` (the viewer's foods from labels, then their coach's) are
  * tried first: a phrase that names one of them gets it, weighed by its household measure.
  */
-export function analyzeLine(engine: FoodEngine<CatalogueFood>, line: LineInput, canUse: FoodVisibility = catalogueOnly, ownFoods: readonly CatalogueFood[] = []): AnalyzedLineWithFood {
+export function analyzeLine(
+  engine: FoodEngine<CatalogueFood>,
+  line: LineInput,
+  canUse: FoodVisibility = catalogueOnly,
+  ownFoods: readonly CatalogueFood[] = [],
+): AnalyzedLineWithFood {
   const parsed: ParsedLine = parseLine(line.input);
   const warnings: string[] = [];
   const match = matchLine(engine.matcher, parsed, line.input);
@@ -120,7 +125,13 @@ export function analyzeLine(engine: FoodEngine<CatalogueFood>, line: LineInput, 
  * grams were changed (a pinned weight, a rewrite), else grams ÷ the food's density. The Kitchen,
  * saved versions and Compare all use this one, so a dish has one volume per serving everywhere.
  */
-export function lineVolumeMl(engine: FoodEngine<CatalogueFood>, input: string, food: CatalogueFood | null, grams: number, parsed: ParsedLine = parseLine(input)): number {
+export function lineVolumeMl(
+  engine: FoodEngine<CatalogueFood>,
+  input: string,
+  food: CatalogueFood | null,
+  grams: number,
+  parsed: ParsedLine = parseLine(input),
+): number {
   if (!food || !(grams > 0)) return 0;
   const weighed = weighLine(parsed, food, food.portions ?? [], { countDefault: engine.countDefaults.get(food.id) });
   if (weighed.volumeMl !== null && weighed.volumeMl > 0 && weighed.grams > 0) return (weighed.volumeMl * grams) / weighed.grams;
@@ -132,7 +143,13 @@ export function culinaryLineOf(line: AnalyzedLineWithFood): CulinaryLine & { foo
   return { phrase: line.parsed.name || line.input, comment: line.parsed.comment, food: line.matchedFood, grams: line.grams };
 }
 
-export function analyzeLines(engine: FoodEngine<CatalogueFood>, lines: LineInput[], servings: number, canUse: FoodVisibility = catalogueOnly, ownFoods: readonly CatalogueFood[] = []) {
+export function analyzeLines(
+  engine: FoodEngine<CatalogueFood>,
+  lines: LineInput[],
+  servings: number,
+  canUse: FoodVisibility = catalogueOnly,
+  ownFoods: readonly CatalogueFood[] = [],
+) {
   const analyzed = lines.map((line) => analyzeLine(engine, line, canUse, ownFoods));
   const totals = sumNutrients(analyzed.map((l) => l.nutrients));
   return {

@@ -87,7 +87,12 @@ function refusal(food: CatalogueFood, filters: Filters): string | null {
   return added.length ? `brings ${added.join(', ')}` : null;
 }
 
-function ruleCandidates(engine: { foods: readonly CatalogueFood[] }, rule: ResolvedRule, filters: Filters, canUse: ((f: CatalogueFood) => boolean) | undefined): Candidate[] {
+function ruleCandidates(
+  engine: { foods: readonly CatalogueFood[] },
+  rule: ResolvedRule,
+  filters: Filters,
+  canUse: ((f: CatalogueFood) => boolean) | undefined,
+): Candidate[] {
   const out: Candidate[] = [];
   const ref = (): RuleRef => ({ ...rule.ref, ...(rule.ref.cautions ? { cautions: [...rule.ref.cautions] } : {}) });
   const extra = (massRatio: number): Partial<Candidate> => ({
@@ -116,7 +121,12 @@ function ruleCandidates(engine: { foods: readonly CatalogueFood[] }, rule: Resol
  * The cook's own foods (and their coach's), entered from labels with the culinary roles they play: a
  * swap, weight for weight, for a line whose food plays the food's main role, where the line may change.
  */
-function ownFoodCandidates(engine: { foods: readonly CatalogueFood[] }, food: CatalogueFood, filters: Filters, canUse: ((f: CatalogueFood) => boolean) | undefined): Candidate[] {
+function ownFoodCandidates(
+  engine: { foods: readonly CatalogueFood[] },
+  food: CatalogueFood,
+  filters: Filters,
+  canUse: ((f: CatalogueFood) => boolean) | undefined,
+): Candidate[] {
   const main = food.roles[0];
   if (!canUse || !main) return [];
   const out: Candidate[] = [];
@@ -142,7 +152,11 @@ function ownFoodCandidates(engine: { foods: readonly CatalogueFood[] }, food: Ca
  * rule offering the same food. A held line (seasoning, leavener, cooking liquid…) has only its original
  * food; a line no rule covers keeps its food at the written grams.
  */
-export function recipeCandidates(engine: { foods: readonly CatalogueFood[]; byId: ReadonlyMap<number, CatalogueFood> }, lines: readonly CandidateLine[], options: CandidateOptions): RecipeCandidates {
+export function recipeCandidates(
+  engine: { foods: readonly CatalogueFood[]; byId: ReadonlyMap<number, CatalogueFood> },
+  lines: readonly CandidateLine[],
+  options: CandidateOptions,
+): RecipeCandidates {
   const reading = readDish(lines.map(toCulinaryLine), options.lineRoles ?? {});
   const resolved = resolvedRulesFor(engine.foods as CatalogueFood[]);
   const recipeAllergens = allergensOfRecipe(lines.flatMap((l) => (l.food ? [l.food] : [])));

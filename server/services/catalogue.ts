@@ -160,10 +160,9 @@ export async function readAllFoods(sequelize: Sequelize): Promise<StoredFood[]> 
 export async function readCustomFood(sequelize: Sequelize, id: number): Promise<StoredFood | null> {
   const [foods] = (await sequelize.query("SELECT * FROM foods WHERE id = $1 AND source = 'custom'", { bind: [id] })) as [FoodRow[], unknown];
   if (foods.length === 0) return null;
-  const [portions] = (await sequelize.query('SELECT food_id, label, amount, measure, grams FROM food_portions WHERE food_id = $1 ORDER BY seq', { bind: [id] })) as [
-    PortionRow[],
-    unknown,
-  ];
+  const [portions] = (await sequelize.query('SELECT food_id, label, amount, measure, grams FROM food_portions WHERE food_id = $1 ORDER BY seq', {
+    bind: [id],
+  })) as [PortionRow[], unknown];
   const read = readRows(foods, portions);
   warnRefused(read.refused);
   return read.foods[0] ?? null;

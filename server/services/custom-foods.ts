@@ -30,9 +30,26 @@ async function writeFood(sequelize: Sequelize, transaction: Transaction, ownerId
   const { portions, densityGPerMl } = panelPortions(panel, servingG);
   const density = densityGPerMl === null ? roleDefaultDensity(roles) : Math.min(DENSITY_BOUNDS.max, Math.max(DENSITY_BOUNDS.min, densityGPerMl));
   const values = [
-    input.name, per100g.kcal, per100g.proteinG, per100g.fatG, per100g.satFatG, per100g.carbsG, per100g.fiberG, per100g.sugarG, per100g.sodiumMg,
-    density, densityGPerMl === null ? 'role-default' : 'portion', roles, diet, ownerId,
-    input.servingSizeG ?? null, input.servingSizeMl ?? null, input.servingLabel || null, input.barcode ?? null, JSON.stringify(panel), energyFromAtwater,
+    input.name,
+    per100g.kcal,
+    per100g.proteinG,
+    per100g.fatG,
+    per100g.satFatG,
+    per100g.carbsG,
+    per100g.fiberG,
+    per100g.sugarG,
+    per100g.sodiumMg,
+    density,
+    densityGPerMl === null ? 'role-default' : 'portion',
+    roles,
+    diet,
+    ownerId,
+    input.servingSizeG ?? null,
+    input.servingSizeMl ?? null,
+    input.servingLabel || null,
+    input.barcode ?? null,
+    JSON.stringify(panel),
+    energyFromAtwater,
   ];
   let foodId: number;
   if (id === null) {
@@ -108,8 +125,17 @@ function storedInput(food: StoredFood): LabelFoodInput {
   const f = servingG / 100;
   const v = food.per100g;
   return {
-    name: food.name, servingSizeG: servingG, kcal: v.kcal * f, proteinG: v.proteinG * f, fatG: v.fatG * f, satFatG: v.satFatG * f,
-    carbsG: v.carbsG * f, fiberG: v.fiberG * f, sugarG: v.sugarG * f, sodiumMg: v.sodiumMg * f, roles: food.roles,
+    name: food.name,
+    servingSizeG: servingG,
+    kcal: v.kcal * f,
+    proteinG: v.proteinG * f,
+    fatG: v.fatG * f,
+    satFatG: v.satFatG * f,
+    carbsG: v.carbsG * f,
+    fiberG: v.fiberG * f,
+    sugarG: v.sugarG * f,
+    sodiumMg: v.sodiumMg * f,
+    roles: food.roles,
   };
 }
 

@@ -127,19 +127,31 @@ export async function readLabelPhoto(buffer: Buffer): Promise<LabelScanResponse>
     reading = readLabelText(ocr.text);
     if (reading.found.length >= 2 && (reading.found.length < 10 || reading.doubtful.length > 0)) {
       const { width } = await sharp(image).metadata();
-      const larger = await sharp(image).resize({ width: Math.round((width ?? MIN_WIDTH_PX) * 1.25) }).png({ compressionLevel: 1 }).toBuffer();
+      const larger = await sharp(image)
+        .resize({ width: Math.round((width ?? MIN_WIDTH_PX) * 1.25) })
+        .png({ compressionLevel: 1 })
+        .toBuffer();
       const second = await recognise(larger, PSM.AUTO);
       reading = mergeReadings(reading, readLabelText(second.text));
       ocr = { text: `${ocr.text}\n${second.text}`, confidence: (ocr.confidence + second.confidence) / 2 };
     }
   } catch (error) {
-    throw new HttpError(503, 'ocr_failed', `The label could not be read this time (${String((error as Error)?.message ?? error).slice(0, 120)}). Try again, or type the numbers in.`);
+    throw new HttpError(
+      503,
+      'ocr_failed',
+      `The label could not be read this time (${String((error as Error)?.message ?? error).slice(0, 120)}). Try again, or type the numbers in.`,
+    );
   }
   const amounts = reading.found.filter((f) => f !== 'servingLabel' && f !== 'servingSizeG' && f !== 'servingSizeMl');
   if (amounts.length < 2) {
-    throw new HttpError(422, 'no_label_found', 'No Nutrition Facts panel could be read in this photo. Fill the frame with the panel, hold the phone straight, and avoid glare — or type the numbers in.', {
-      text: ocr.text.trim().slice(0, 2000),
-    });
+    throw new HttpError(
+      422,
+      'no_label_found',
+      'No Nutrition Facts panel could be read in this photo. Fill the frame with the panel, hold the phone straight, and avoid glare — or type the numbers in.',
+      {
+        text: ocr.text.trim().slice(0, 2000),
+      },
+    );
   }
   return {
     fields: reading.fields,

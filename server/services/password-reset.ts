@@ -11,7 +11,11 @@ const RESET_HOURS = 2;
  * Starts the reset off the request path: the caller answers at once and in the same time whether
  * or not the address has an account; the look-up, the token and the mail happen afterwards.
  */
-export function requestPasswordResetInBackground(email: string, mail: { mailer: Mailer; appUrl: string }, log: (message: string, error: unknown) => void = console.error) {
+export function requestPasswordResetInBackground(
+  email: string,
+  mail: { mailer: Mailer; appUrl: string },
+  log: (message: string, error: unknown) => void = console.error,
+) {
   setImmediate(() => {
     requestPasswordReset(email, mail).catch((error) => log('Password reset: could not send the mail:', error));
   });

@@ -41,7 +41,11 @@ export async function processPhoto(buffer: Buffer): Promise<Buffer> {
   }
   if (!format || !ACCEPTED.has(format)) throw badRequest(`file: ${format ?? 'this'} images are not accepted; upload a JPEG, PNG or WebP photo.`);
   try {
-    return await sharp(buffer).rotate().resize({ width: MAX_EDGE_PX, height: MAX_EDGE_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 82 }).toBuffer();
+    return await sharp(buffer)
+      .rotate()
+      .resize({ width: MAX_EDGE_PX, height: MAX_EDGE_PX, fit: 'inside', withoutEnlargement: true })
+      .webp({ quality: 82 })
+      .toBuffer();
   } catch {
     // The header read fine but the pixels do not decode: a truncated or damaged file.
     throw badRequest('file: This file is not a readable photo (it may be cut short or damaged); upload the JPEG, PNG or WebP again.');
@@ -63,5 +67,7 @@ export async function readPhoto(config: S3Config | null, key: string): Promise<B
 
 export async function removePhoto(config: S3Config | null, key: string) {
   if (!config) return;
-  await client(config).send(new DeleteObjectCommand({ Bucket: config.bucket, Key: key })).catch(() => {});
+  await client(config)
+    .send(new DeleteObjectCommand({ Bucket: config.bucket, Key: key }))
+    .catch(() => {});
 }

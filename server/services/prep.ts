@@ -84,11 +84,22 @@ export function prepFor(engine: FoodEngine, recipe: Recipe, version: RecipeVersi
   const servingSizeG = version.lines.reduce((s, l) => s + l.grams, 0) / version.servings;
   const shopping = shoppingList(engine, [plan.batch], viewer.unitSystem ?? 'us');
   return {
-    recipe: { id: recipe.id, title: recipe.title, method: recipe.method, notes: recipe.notes, photoUrl: recipe.photoKey ? `/api/recipes/${recipe.id}/photo?v=${encodeURIComponent(recipe.photoKey)}` : null },
+    recipe: {
+      id: recipe.id,
+      title: recipe.title,
+      method: recipe.method,
+      notes: recipe.notes,
+      photoUrl: recipe.photoKey ? `/api/recipes/${recipe.id}/photo?v=${encodeURIComponent(recipe.photoKey)}` : null,
+    },
     version: { number: version.number, kind: version.kind, servings: version.servings },
     portions: plan.portions,
     perPortion: plan.perPortion.map((l) => ({ food: foodOf(engine, l.foodId, l.name), grams: roundPrepGrams(l.grams), display: l.display })),
-    batch: plan.batch.map((l) => ({ food: foodOf(engine, l.foodId, l.name), grams: roundPrepGrams(l.grams), display: l.display, household: l.measure ? measureHint(l.measure) : '' })),
+    batch: plan.batch.map((l) => ({
+      food: foodOf(engine, l.foodId, l.name),
+      grams: roundPrepGrams(l.grams),
+      display: l.display,
+      household: l.measure ? measureHint(l.measure) : '',
+    })),
     shopping,
     shoppingText: shoppingText(shopping),
     storage: storageFor({ foods, method: `${recipe.method}\n${recipe.notes}` }),

@@ -29,7 +29,10 @@ export function methodSteps(method: string): string[] {
 }
 
 /** A saved version as a schema.org Recipe document. */
-export function toJsonLd(recipe: { title: string; notes: string; method: string; createdAt: Date }, version: { servings: number; lines: StoredLine[]; perServing: Nutrients; number: number }): WithContext<SchemaRecipe> {
+export function toJsonLd(
+  recipe: { title: string; notes: string; method: string; createdAt: Date },
+  version: { servings: number; lines: StoredLine[]; perServing: Nutrients; number: number },
+): WithContext<SchemaRecipe> {
   const steps = methodSteps(recipe.method);
   const doc: WithContext<SchemaRecipe> = {
     '@context': 'https://schema.org',

@@ -21,7 +21,8 @@ export function jsonNestingDepth(text: string): number {
   for (let i = 0; i < text.length; i++) {
     const c = text.charCodeAt(i);
     if (inString) {
-      if (c === 0x5c) i++; // backslash: skip the escaped character
+      if (c === 0x5c)
+        i++; // backslash: skip the escaped character
       else if (c === 0x22) inString = false;
     } else if (c === 0x22) inString = true;
     else if (c === 0x5b || c === 0x7b) deepest = Math.max(deepest, ++depth);
@@ -89,7 +90,10 @@ function fromJsonLd(doc: unknown): ImportedRecipe {
     .filter(Boolean);
   if (ingredients.length === 0) throw badRequest('file: the Recipe has no recipeIngredient list.');
   return {
-    title: String(node.name ?? 'Imported recipe').trim().slice(0, 200) || 'Imported recipe',
+    title:
+      String(node.name ?? 'Imported recipe')
+        .trim()
+        .slice(0, 200) || 'Imported recipe',
     servings: clampServings(servingsFrom(node.recipeYield)),
     ingredients,
     method: textOf(node.recipeInstructions).trim(),

@@ -2,15 +2,7 @@ import { Op, type Sequelize, type Transaction } from 'sequelize';
 import { Recipe, RecipeVersion, User } from '../models';
 import { divideNutrients, nutrientsForGrams, sumNutrients, zeroNutrients } from '../../shared/nutrition';
 import { isIncompleteLine, NO_FOOD_WARNING, ZERO_GRAMS_WARNING } from '../../shared/line-status';
-import type {
-  RecipeDetail,
-  RecipeSummary,
-  StoredLine,
-  VersionDetail,
-  VersionKind,
-  VersionLineInput,
-  VersionSummary,
-} from '../../shared/schemas/recipes';
+import type { RecipeDetail, RecipeSummary, StoredLine, VersionDetail, VersionKind, VersionLineInput, VersionSummary } from '../../shared/schemas/recipes';
 import type { TargetsInput } from '../../shared/schemas/rewrite';
 import type { LineInput } from '../../shared/schemas/analyze';
 import { analyzeLine, lineVolumeMl, textToLines, type FoodVisibility } from './analysis';
@@ -35,14 +27,20 @@ export function normaliseLines(
     if ('food' in line) {
       const found = engine.byId.get(line.food.id);
       const food = found && canUse(found) ? found : undefined;
-      if (!food) throw badRequest(`lines.${i}.food.id: no food ${line.food.id} in the catalogue.`, { fieldErrors: { [`lines.${i}.food.id`]: ['Unknown food.'] } });
+      if (!food)
+        throw badRequest(`lines.${i}.food.id: no food ${line.food.id} in the catalogue.`, { fieldErrors: { [`lines.${i}.food.id`]: ['Unknown food.'] } });
       return { input: line.input ?? `${formatGramsForText(line.grams)} g ${food.name}`, foodId: food.id, foodName: food.name, grams: line.grams };
     }
     const typed: LineInput = { input: line.input };
     if (line.foodId != null) typed.foodId = line.foodId;
     if (line.grams !== undefined) typed.grams = line.grams;
     const analysed = analyzeLine(engine, typed, canUse, ownFoods);
-    const stored: StoredLine = { input: line.input, foodId: analysed.matchedFood?.id ?? null, foodName: analysed.matchedFood?.name ?? null, grams: analysed.grams };
+    const stored: StoredLine = {
+      input: line.input,
+      foodId: analysed.matchedFood?.id ?? null,
+      foodName: analysed.matchedFood?.name ?? null,
+      grams: analysed.grams,
+    };
     if (analysed.warnings.length > 0) stored.warnings = analysed.warnings;
     if (analysed.checkMatch) stored.checkMatch = true;
     return stored;
@@ -125,7 +123,11 @@ export async function findReadableRecipe(viewer: User, id: number): Promise<Reci
 }
 
 async function findOwnRecipe(viewer: User, id: number, transaction?: Transaction, includeDeleted = false): Promise<Recipe> {
-  const recipe = await Recipe.findOne({ where: { id, ownerId: viewer.id, ...(includeDeleted ? {} : { deletedAt: null }) }, transaction, lock: transaction ? transaction.LOCK.UPDATE : undefined });
+  const recipe = await Recipe.findOne({
+    where: { id, ownerId: viewer.id, ...(includeDeleted ? {} : { deletedAt: null }) },
+    transaction,
+    lock: transaction ? transaction.LOCK.UPDATE : undefined,
+  });
   if (!recipe) throw notFound('No recipe with that id.');
   return recipe;
 }
@@ -175,7 +177,7 @@ async function insertVersion(engine: FoodEngine, recipe: Recipe, input: NewVersi
       recipeId: recipe.id,
       number: (last ?? 0) + 1,
       kind: input.kind,
-      parentNumber: input.parentNumber ?? (last ?? null),
+      parentNumber: input.parentNumber ?? last ?? null,
       servings: input.servings,
       lines: input.lines,
       targets: input.targets ?? null,
@@ -213,9 +215,12 @@ export async function createRecipe(
 
 function checkRevision(recipe: Recipe, revision: number) {
   if (recipe.revision !== revision) {
-    throw conflict(`This recipe changed since you opened it (you sent revision ${revision}, it is now ${recipe.revision}). Reload to see the latest; nothing was changed.`, {
-      currentRevision: recipe.revision,
-    });
+    throw conflict(
+      `This recipe changed since you opened it (you sent revision ${revision}, it is now ${recipe.revision}). Reload to see the latest; nothing was changed.`,
+      {
+        currentRevision: recipe.revision,
+      },
+    );
   }
 }
 
@@ -336,7 +341,19 @@ export async function duplicateRecipe(sequelize: Sequelize, engine: FoodEngine, 
       { ownerId: viewer.id, title: `${source.title} (copy)`.slice(0, 200), servings: latest.servings, notes: source.notes, method: source.method },
       { transaction },
     );
-    await insertVersion(engine, copy, { kind: 'original', lines: latest.lines, servings: latest.servings, targets: latest.targets, note: `Copied from “${source.title}” version ${latest.number}` }, viewer.id, transaction);
+    await insertVersion(
+      engine,
+      copy,
+      {
+        kind: 'original',
+        lines: latest.lines,
+        servings: latest.servings,
+        targets: latest.targets,
+        note: `Copied from “${source.title}” version ${latest.number}`,
+      },
+      viewer.id,
+      transaction,
+    );
     return copy;
   });
 }

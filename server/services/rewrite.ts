@@ -38,27 +38,27 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
   const lines = requestLines(input);
   const locked = new Set(input.lockedLines ?? []);
   for (const index of locked) {
-    if (index >= lines.length) throw badRequest(`lockedLines: line ${index} does not exist (the recipe has ${lines.length}).`, { fieldErrors: { lockedLines: ['Unknown line index.'] } });
+    if (index >= lines.length)
+      throw badRequest(`lockedLines: line ${index} does not exist (the recipe has ${lines.length}).`, {
+        fieldErrors: { lockedLines: ['Unknown line index.'] },
+      });
   }
   const lineRoles: Record<number, LineFunction> = {};
   for (const [key, role] of Object.entries(input.lineRoles ?? {})) {
     const index = Number(key);
-    if (index >= lines.length) throw badRequest(`lineRoles: line ${index} does not exist (the recipe has ${lines.length}).`, { fieldErrors: { lineRoles: ['Unknown line index.'] } });
+    if (index >= lines.length)
+      throw badRequest(`lineRoles: line ${index} does not exist (the recipe has ${lines.length}).`, { fieldErrors: { lineRoles: ['Unknown line index.'] } });
     lineRoles[index] = role;
   }
   const analysis = analyzeLines(engine, lines, input.servings, viewer.canUse, viewer.ownFoods ?? []);
-  const culinary = recipeCandidates(
-    engine,
-    analysis.lines.map(culinaryLineOf),
-    {
-      diet: input.diet ?? [],
-      excludedFoodIds: new Set(input.excludedFoodIds ?? []),
-      approved: viewer.approvedSwaps,
-      allowAllergens: input.allowAllergens ?? [],
-      lineRoles,
-      canUse: viewer.canUse,
-    },
-  );
+  const culinary = recipeCandidates(engine, analysis.lines.map(culinaryLineOf), {
+    diet: input.diet ?? [],
+    excludedFoodIds: new Set(input.excludedFoodIds ?? []),
+    approved: viewer.approvedSwaps,
+    allowAllergens: input.allowAllergens ?? [],
+    lineRoles,
+    canUse: viewer.canUse,
+  });
   const modelLines: RewriteLine[] = [];
   const skippedLines: SkippedLine[] = [];
   analysis.lines.forEach((line, index) => {

@@ -25,7 +25,15 @@ const WARM_UP: RewriteTask = {
       grams: 1,
       volumeMl: 1,
       locked: true,
-      candidates: [{ foodId: 1, name: 'warm-up', densityGPerMl: 1, original: true, per100g: { kcal: 0, proteinG: 0, fatG: 0, satFatG: 0, carbsG: 0, fiberG: 0, sugarG: 0, sodiumMg: 0 } }],
+      candidates: [
+        {
+          foodId: 1,
+          name: 'warm-up',
+          densityGPerMl: 1,
+          original: true,
+          per100g: { kcal: 0, proteinG: 0, fatG: 0, satFatG: 0, carbsG: 0, fiberG: 0, sugarG: 0, sodiumMg: 0 },
+        },
+      ],
     },
   ],
   targets: { proteinMinG: 0, kcalMax: 1 },
@@ -64,7 +72,11 @@ export async function runRewrite(task: RewriteTask, budgetMs = DEFAULT_SOLVE_BUD
     return (await workers.run(task, { signal })) as RewriteResult;
   } catch (error) {
     if (signal.aborted) {
-      throw new HttpError(503, 'solver_timeout', `The rewrite took longer than ${((budgetMs + WORKER_MARGIN_MS) / 1000).toFixed(1)} s and was stopped. Try fewer candidates per line, fewer lines, or lock the lines you do not want changed.`);
+      throw new HttpError(
+        503,
+        'solver_timeout',
+        `The rewrite took longer than ${((budgetMs + WORKER_MARGIN_MS) / 1000).toFixed(1)} s and was stopped. Try fewer candidates per line, fewer lines, or lock the lines you do not want changed.`,
+      );
     }
     throw error;
   }

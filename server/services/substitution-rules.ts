@@ -4,9 +4,7 @@ import { parseRuleFile, type PerPiece, type SubstitutionRule } from '../../share
 import type { RuleRef } from '../../shared/rewrite/types';
 
 /** A rule target with its quantity settled against the catalogue. */
-export type ResolvedTarget =
-  | { kind: 'food'; food: CatalogueFood; massRatio: number }
-  | { kind: 'own-food-role'; role: string; massRatio: number };
+export type ResolvedTarget = { kind: 'food'; food: CatalogueFood; massRatio: number } | { kind: 'own-food-role'; role: string; massRatio: number };
 
 export interface ResolvedRule {
   rule: SubstitutionRule;
@@ -45,7 +43,10 @@ export function perPieceMassRatio(perPiece: PerPiece, fromFood: Pick<CatalogueFo
 }
 
 function normalised(s: string) {
-  return s.toLowerCase().replace(/[^a-z0-9%]+/g, ' ').trim();
+  return s
+    .toLowerCase()
+    .replace(/[^a-z0-9%]+/g, ' ')
+    .trim();
 }
 
 /**
@@ -69,7 +70,8 @@ export function resolveRules(bySourceId: ReadonlyMap<string, CatalogueFood>, rul
       else {
         const from = bySourceId.get(q.perPiece.fromNdb);
         const ratio = from ? perPieceMassRatio(q.perPiece, from, food) : null;
-        if (!ratio) throw new Error(`rule ${rule.id}: no SR28 portion gives ${q.perPiece.fromMeasure} of ${q.perPiece.fromNdb} or ${q.perPiece.toMeasure} of ${t.ndb}`);
+        if (!ratio)
+          throw new Error(`rule ${rule.id}: no SR28 portion gives ${q.perPiece.fromMeasure} of ${q.perPiece.fromNdb} or ${q.perPiece.toMeasure} of ${t.ndb}`);
         massRatio = ratio;
       }
       return { kind: 'food', food, massRatio };

@@ -52,7 +52,10 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
     return 'assembled-bake';
   }
   // a sauce baked over the dish (enchilada sauce), not one served beside it (salsa, ketchup)
-  const bakedSauce = lines.reduce((s, l, i) => (kinds[i] === 'sauce' && !/salsa|catsup|ketchup/i.test(`${l.phrase} ${l.food?.name ?? ''}`) ? s + l.grams : s), 0);
+  const bakedSauce = lines.reduce(
+    (s, l, i) => (kinds[i] === 'sauce' && !/salsa|catsup|ketchup/i.test(`${l.phrase} ${l.food?.name ?? ''}`) ? s + l.grams : s),
+    0,
+  );
   if (has('wrap') && cheese) return bakedSauce >= 0.1 * total || has('fresh-cheese') ? 'assembled-bake' : 'griddle-saute';
   // a loaf or meatballs: mince held together by crumbs and egg
   if (has('meat') && has('crumbs') && has('egg') && !has('starch', 'wrap')) return 'assembled-bake';
@@ -63,20 +66,34 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
   return 'other';
 }
 
-function roleOf(line: CulinaryLine, kind: LineKind, dish: DishType, ctx: { hasRoux: boolean; kinds: readonly LineKind[]; sugarIsStructure: boolean; rouxFat: number }, index: number): LineFunction {
+function roleOf(
+  line: CulinaryLine,
+  kind: LineKind,
+  dish: DishType,
+  ctx: { hasRoux: boolean; kinds: readonly LineKind[]; sugarIsStructure: boolean; rouxFat: number },
+  index: number,
+): LineFunction {
   const note = `${line.comment ?? ''}`;
   const topping = TOPPING_WORDS.test(note) || TOPPING_WORDS.test(line.phrase);
   const bake = BAKE_TYPES.includes(dish);
   const has = (...of: LineKind[]) => ctx.kinds.some((k) => of.includes(k));
   switch (kind) {
-    case 'salt': return 'salt';
-    case 'yeast': return 'yeast';
-    case 'leavener': return 'leavener';
-    case 'extract': return 'extract';
-    case 'acid': return 'acid';
-    case 'seasoning': return 'seasoning';
-    case 'aromatic': return 'aromatic';
-    case 'liquid': return bake ? 'structure' : 'cooking-liquid';
+    case 'salt':
+      return 'salt';
+    case 'yeast':
+      return 'yeast';
+    case 'leavener':
+      return 'leavener';
+    case 'extract':
+      return 'extract';
+    case 'acid':
+      return 'acid';
+    case 'seasoning':
+      return 'seasoning';
+    case 'aromatic':
+      return 'aromatic';
+    case 'liquid':
+      return bake ? 'structure' : 'cooking-liquid';
     case 'flour':
       if (COATING_WORDS.test(note)) return 'coating';
       return bake ? 'structure' : 'thickener';
@@ -151,7 +168,10 @@ export function contextOf(role: LineFunction, dish: DishType, hasRoux: boolean, 
   if (role === 'topping' || role === 'coating' || TOPPING_WORDS.test(comment ?? '')) return 'topping';
   if (role === 'cooking-fat') return 'griddle-saute';
   if (role === 'fat-for-roux' || role === 'thickener') return 'roux-white-sauce';
-  if (BAKE_TYPES.includes(dish)) return dish === 'dough' && (role === 'melting-cheese' || role === 'hard-cheese' || role === 'main-protein' || role === 'vegetable' || role === 'sauce') ? 'topping' : 'baked-batter-dough';
+  if (BAKE_TYPES.includes(dish))
+    return dish === 'dough' && (role === 'melting-cheese' || role === 'hard-cheese' || role === 'main-protein' || role === 'vegetable' || role === 'sauce')
+      ? 'topping'
+      : 'baked-batter-dough';
   const saucy = role === 'dairy-liquid' || role === 'cream' || role === 'melting-cheese' || role === 'hard-cheese' || role === 'sauce';
   if (hasRoux && saucy && role !== 'sauce') return 'roux-white-sauce';
   switch (dish) {
@@ -195,7 +215,14 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
 
 /** Functions that keep a line exactly as written unless the cook unlocks it (PRODUCT.md step 5). */
 export const HELD_FUNCTIONS: ReadonlySet<LineFunction> = new Set<LineFunction>([
-  'seasoning', 'leavener', 'yeast', 'salt', 'extract', 'acid', 'aromatic', 'cooking-liquid',
+  'seasoning',
+  'leavener',
+  'yeast',
+  'salt',
+  'extract',
+  'acid',
+  'aromatic',
+  'cooking-liquid',
 ]);
 
 /** A line function in a cook's plain words, for the Kitchen and held-line reasons. */

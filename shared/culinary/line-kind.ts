@@ -5,11 +5,42 @@ import type { CulinaryLine } from './types';
  * and name, and the words the cook wrote. Dish type and line function are built on these kinds.
  */
 export type LineKind =
-  | 'salt' | 'yeast' | 'leavener' | 'extract' | 'acid' | 'seasoning' | 'aromatic' | 'liquid'
-  | 'flour' | 'starch' | 'crumbs' | 'egg' | 'sugar' | 'syrup' | 'chocolate' | 'mix-in'
-  | 'butter-oil' | 'milk' | 'cream' | 'cultured' | 'melting-cheese' | 'hard-cheese' | 'fresh-cheese'
-  | 'meat' | 'cured-meat' | 'fish' | 'legume' | 'tomato' | 'vegetable' | 'fruit' | 'nut'
-  | 'sauce' | 'condensed-soup' | 'dressing' | 'wrap' | 'other';
+  | 'salt'
+  | 'yeast'
+  | 'leavener'
+  | 'extract'
+  | 'acid'
+  | 'seasoning'
+  | 'aromatic'
+  | 'liquid'
+  | 'flour'
+  | 'starch'
+  | 'crumbs'
+  | 'egg'
+  | 'sugar'
+  | 'syrup'
+  | 'chocolate'
+  | 'mix-in'
+  | 'butter-oil'
+  | 'milk'
+  | 'cream'
+  | 'cultured'
+  | 'melting-cheese'
+  | 'hard-cheese'
+  | 'fresh-cheese'
+  | 'meat'
+  | 'cured-meat'
+  | 'fish'
+  | 'legume'
+  | 'tomato'
+  | 'vegetable'
+  | 'fruit'
+  | 'nut'
+  | 'sauce'
+  | 'condensed-soup'
+  | 'dressing'
+  | 'wrap'
+  | 'other';
 
 const has = (roles: readonly string[], ...r: string[]) => r.some((x) => roles.includes(x));
 
@@ -34,8 +65,14 @@ export function lineKind(line: CulinaryLine): LineKind {
   if (/\byeast\b/i.test(name)) return 'yeast';
   if (has(roles, 'baking-leavener') || /\bleavening\b|baking (soda|powder)|cream of tartar/i.test(name)) return 'leavener';
   if (EXTRACT.test(name) || EXTRACT.test(line.phrase)) return 'extract';
-  if (/^(vinegar|lemon juice|lime juice)\b/i.test(name) || (has(roles, 'fruit', 'condiment') && ACID.test(line.phrase) && !/\bzest\b/i.test(line.phrase))) return 'acid';
-  if (has(roles, 'broth-stock') || /^(water|beverages, water)\b|^alcoholic beverage/i.test(name) || (LIQUID.test(line.phrase) && !has(roles, 'dairy-milk', 'cream'))) return 'liquid';
+  if (/^(vinegar|lemon juice|lime juice)\b/i.test(name) || (has(roles, 'fruit', 'condiment') && ACID.test(line.phrase) && !/\bzest\b/i.test(line.phrase)))
+    return 'acid';
+  if (
+    has(roles, 'broth-stock') ||
+    /^(water|beverages, water)\b|^alcoholic beverage/i.test(name) ||
+    (LIQUID.test(line.phrase) && !has(roles, 'dairy-milk', 'cream'))
+  )
+    return 'liquid';
   if (has(roles, 'herb-spice')) return 'seasoning';
   if (AROMATIC.test(line.phrase) && has(roles, 'vegetable', 'herb-spice', 'other')) return 'aromatic';
   if (/^soup,.*condensed/i.test(name)) return 'condensed-soup';

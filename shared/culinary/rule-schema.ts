@@ -22,7 +22,10 @@ export const foodClassSchema = z
     /** exact NDB numbers (any of them) */
     ndb: z.array(ndb).min(1).optional(),
     /** SR28 food groups (two digits) */
-    groups: z.array(z.string().regex(/^\d{2}$/)).min(1).optional(),
+    groups: z
+      .array(z.string().regex(/^\d{2}$/))
+      .min(1)
+      .optional(),
     /** the readable catalogue name must match (case-insensitive) */
     name: pattern.optional(),
     /** … and must not match */
@@ -62,10 +65,7 @@ export const perPieceSchema = z.object({
 });
 export type PerPiece = z.infer<typeof perPieceSchema>;
 
-export const quantitySchema = z.union([
-  z.object({ massRatio: z.number().positive().max(4) }),
-  z.object({ perPiece: perPieceSchema }),
-]);
+export const quantitySchema = z.union([z.object({ massRatio: z.number().positive().max(4) }), z.object({ perPiece: perPieceSchema })]);
 
 const functionEnum = z.enum(LINE_FUNCTIONS as [LineFunction, ...LineFunction[]]);
 const contextEnum = z.enum(DISH_CONTEXTS as [DishContext, ...DishContext[]]);

@@ -1,14 +1,5 @@
 /** What kind of dish a recipe is, inferred from all of its lines. */
-export type DishType =
-  | 'leavened-bake'
-  | 'batter'
-  | 'dough'
-  | 'stovetop-sauce'
-  | 'simmered-dish'
-  | 'assembled-bake'
-  | 'griddle-saute'
-  | 'cold-dish'
-  | 'other';
+export type DishType = 'leavened-bake' | 'batter' | 'dough' | 'stovetop-sauce' | 'simmered-dish' | 'assembled-bake' | 'griddle-saute' | 'cold-dish' | 'other';
 
 /** What one line does in the dish. */
 export type LineFunction =
@@ -41,28 +32,59 @@ export type LineFunction =
   | 'other';
 
 /** Where in the dish a food is cooked: decides which substitutions hold up. */
-export type DishContext =
-  | 'baked-batter-dough'
-  | 'roux-white-sauce'
-  | 'boiled-sauce'
-  | 'filling'
-  | 'topping'
-  | 'cold-dressing'
-  | 'griddle-saute';
+export type DishContext = 'baked-batter-dough' | 'roux-white-sauce' | 'boiled-sauce' | 'filling' | 'topping' | 'cold-dressing' | 'griddle-saute';
 
 /** Every line function, in the order the Kitchen lists them. */
 export const LINE_FUNCTIONS: readonly LineFunction[] = [
-  'main-protein', 'starch', 'vegetable', 'melting-cheese', 'hard-cheese', 'fresh-cheese', 'dairy-liquid', 'cream',
-  'sauce', 'topping', 'coating', 'binder', 'structure', 'thickener', 'sweetener', 'baking-fat', 'fat-for-roux',
-  'cooking-fat', 'aromatic', 'seasoning', 'salt', 'extract', 'acid', 'leavener', 'yeast', 'cooking-liquid', 'other',
+  'main-protein',
+  'starch',
+  'vegetable',
+  'melting-cheese',
+  'hard-cheese',
+  'fresh-cheese',
+  'dairy-liquid',
+  'cream',
+  'sauce',
+  'topping',
+  'coating',
+  'binder',
+  'structure',
+  'thickener',
+  'sweetener',
+  'baking-fat',
+  'fat-for-roux',
+  'cooking-fat',
+  'aromatic',
+  'seasoning',
+  'salt',
+  'extract',
+  'acid',
+  'leavener',
+  'yeast',
+  'cooking-liquid',
+  'other',
 ];
 
 export const DISH_TYPES: readonly DishType[] = [
-  'leavened-bake', 'batter', 'dough', 'stovetop-sauce', 'simmered-dish', 'assembled-bake', 'griddle-saute', 'cold-dish', 'other',
+  'leavened-bake',
+  'batter',
+  'dough',
+  'stovetop-sauce',
+  'simmered-dish',
+  'assembled-bake',
+  'griddle-saute',
+  'cold-dish',
+  'other',
 ];
 
 export const DISH_CONTEXTS: readonly DishContext[] = [
-  'baked-batter-dough', 'roux-white-sauce', 'boiled-sauce', 'filling', 'topping', 'cold-dressing', 'griddle-saute',
+  'baked-batter-dough',
+  'roux-white-sauce',
+  'boiled-sauce',
+  'filling',
+  'topping',
+  'cold-dressing',
+  'griddle-saute',
 ];
 
 /** What the culinary inference reads of one recipe line. */

@@ -4,8 +4,7 @@ import { numericQuantity } from 'numeric-quantity';
 const VULGAR = '¼½¾⅐⅑⅒⅓⅔⅕⅖⅗⅘⅙⅚⅛⅜⅝⅞';
 
 /** One quantity as written: "1 1/2", "1½", "½", "14.5", "3/4", "2,5" is not accepted. */
-export const QUANTITY_SOURCE =
-  `(?:\\d+(?:\\.\\d+)?\\s*[${VULGAR}]|\\d+\\s+\\d+\\s*/\\s*\\d+|\\d+\\s*/\\s*\\d+|\\d*\\.\\d+|\\d+|[${VULGAR}])`;
+export const QUANTITY_SOURCE = `(?:\\d+(?:\\.\\d+)?\\s*[${VULGAR}]|\\d+\\s+\\d+\\s*/\\s*\\d+|\\d+\\s*/\\s*\\d+|\\d*\\.\\d+|\\d+|[${VULGAR}])`;
 
 /** A finite, non-negative number from quantity text, or null. */
 export function quantityValue(text: string): number | null {

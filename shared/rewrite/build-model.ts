@@ -8,10 +8,7 @@ import type { Candidate, RewriteLine, RewriteObjective, RewriteOptions, TargetNa
 
 /** What the builder wants optimised; the last three serve the infeasibility analysis. */
 export type ModelObjective =
-  | { kind: RewriteObjective }
-  | { kind: 'nutrient'; key: NutrientKey; sense: 'min' | 'max' }
-  | { kind: 'swaps' }
-  | { kind: 'dish-volume' };
+  { kind: RewriteObjective } | { kind: 'nutrient'; key: NutrientKey; sense: 'min' | 'max' } | { kind: 'swaps' } | { kind: 'dish-volume' };
 
 export interface ModelVariant {
   objective: ModelObjective;
@@ -103,7 +100,8 @@ function dropEmptyRows(constraints: LpModel['constraints'], variables: LpModel['
     if (used.has(name) || typeof bound !== 'object') continue;
     const lo = bound.equal ?? bound.min;
     const hi = bound.equal ?? bound.max;
-    const fits = (lo === undefined || lo <= FEASIBILITY_TOLERANCE * Math.max(1, Math.abs(lo))) &&
+    const fits =
+      (lo === undefined || lo <= FEASIBILITY_TOLERANCE * Math.max(1, Math.abs(lo))) &&
       (hi === undefined || hi >= -FEASIBILITY_TOLERANCE * Math.max(1, Math.abs(hi)));
     if (fits) delete constraints[name];
   }
@@ -152,7 +150,11 @@ export function buildModel(
   const dropped = new Set(variant.dropTargets ?? []);
   const active = activeTargets(targets).filter(({ row }) => !dropped.has(row.target));
   const elastic = variant.penaltyFactor !== undefined;
-  const slots = lineSlots(lines, options, activeTargets(targets).map((t) => t.row));
+  const slots = lineSlots(
+    lines,
+    options,
+    activeTargets(targets).map((t) => t.row),
+  );
   const maxSwaps = variant.maxSwaps === undefined ? options.maxSwaps : variant.maxSwaps;
   const weights = closestWeights(slots, maxSwaps);
 

@@ -39,7 +39,5 @@ function dominates(other: PrunableCandidate, otherFirst: boolean, c: PrunableCan
 
 /** Indexes of the candidates worth a variable; the original is always kept. */
 export function keptCandidates(candidates: readonly PrunableCandidate[], rows: readonly TargetRow[]): number[] {
-  return candidates.flatMap((c, i) =>
-    candidates.some((other, j) => j !== i && dominates(other, j < i, c, rows)) ? [] : [i],
-  );
+  return candidates.flatMap((c, i) => (candidates.some((other, j) => j !== i && dominates(other, j < i, c, rows)) ? [] : [i]));
 }

@@ -93,7 +93,12 @@ export function analyseInfeasible(
     const moved = movedTargets(lines, targets, servings, options, elastic, binding, perServing, log);
     const parts = binding.filter((t) => moved[t] !== undefined).map((t) => relaxation(targetRow(t), moved[t]!));
     if (parts.length > 0) {
-      suggestions.push({ kind: 'targets', value: parts.length, targets: moved, message: `${parts.slice(0, -1).join(', ')}${parts.length > 1 ? ' and ' : ''}${parts[parts.length - 1]}` });
+      suggestions.push({
+        kind: 'targets',
+        value: parts.length,
+        targets: moved,
+        message: `${parts.slice(0, -1).join(', ')}${parts.length > 1 ? ' and ' : ''}${parts[parts.length - 1]}`,
+      });
     }
   }
   const volume = resolve({ objective: { kind: 'dish-volume' } });
@@ -141,7 +146,8 @@ function movedTargets(
     // Floors the dish as written already meets can always be met together; the closest plan's floors
     // may not be, when it traded one floor for another.
     const writtenFloors: Partial<Targets> = {};
-    for (const target of Object.keys(floors) as TargetName[]) writtenFloors[target] = roundOutward(Math.min(targets[target]!, written[targetRow(target).key]), targetRow(target));
+    for (const target of Object.keys(floors) as TargetName[])
+      writtenFloors[target] = roundOutward(Math.min(targets[target]!, written[targetRow(target).key]), targetRow(target));
     const first = targetRow(ceilings[0]);
     for (const tried of [floors, writtenFloors]) {
       const outcome = solveElastic(

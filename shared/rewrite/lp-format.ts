@@ -74,10 +74,7 @@ export function toLpFormat(model: LpModel, options: { objectiveConstant?: number
     }
   }
 
-  const out: string[] = [
-    '\\ Hearthswap model, written from the javascript-lp-solver JSON model',
-    model.opType === 'max' ? 'Maximize' : 'Minimize',
-  ];
+  const out: string[] = ['\\ Hearthswap model, written from the javascript-lp-solver JSON model', model.opType === 'max' ? 'Maximize' : 'Minimize'];
   const constant = options.objectiveConstant ?? 0;
   const objectiveExpression = linearExpression(objectiveTerms.length ? objectiveTerms : [[variableNames[0], 0]]);
   if (constant !== 0) {

@@ -66,11 +66,7 @@ export function objectiveValue(model: LpModel, values: Record<string, number>): 
  * Every way `values` breaks the model: rows outside their bounds, negative non-free variables,
  * binaries above 1 and integer variables off an integer, each beyond `tol` (scaled as above).
  */
-export function findViolations(
-  model: LpModel,
-  values: Record<string, number>,
-  tol = FEASIBILITY_TOLERANCE,
-): string[] {
+export function findViolations(model: LpModel, values: Record<string, number>, tol = FEASIBILITY_TOLERANCE): string[] {
   const violations: string[] = [];
   const activity = constraintActivities(model, values);
   for (const name of Object.keys(model.constraints)) {
@@ -168,7 +164,8 @@ export function scaleRows(model: LpModel): LpModel {
   for (const name of Object.keys(model.constraints)) {
     const { min, max } = constraintBounds(model, name);
     const f = factor(name);
-    constraints[name] = min !== undefined && min === max ? { equal: min / f } : { min: min === undefined ? undefined : min / f, max: max === undefined ? undefined : max / f };
+    constraints[name] =
+      min !== undefined && min === max ? { equal: min / f } : { min: min === undefined ? undefined : min / f, max: max === undefined ? undefined : max / f };
     if (min === undefined) delete (constraints[name] as LpBound).min;
     if (max === undefined) delete (constraints[name] as LpBound).max;
   }

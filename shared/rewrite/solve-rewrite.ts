@@ -10,11 +10,7 @@ import type { Nutrients } from '../nutrition';
 import type { RewriteLine, RewriteObjective, RewriteOptions, RewriteResult, SolverInfo, Suggestion, Targets } from './types';
 
 /** The request with a suggestion taken. */
-export function applySuggestion(
-  targets: Targets,
-  options: RewriteOptions,
-  suggestion: Suggestion,
-): { targets: Targets; options: RewriteOptions } {
+export function applySuggestion(targets: Targets, options: RewriteOptions, suggestion: Suggestion): { targets: Targets; options: RewriteOptions } {
   switch (suggestion.kind) {
     case 'more-swaps':
       return { targets, options: { ...options, maxSwaps: suggestion.value } };
@@ -48,17 +44,11 @@ function describeReachable(perServing: Nutrients, targets: Targets): string {
  * closest plan, the targets that bind and suggestions that each come from a re-solve.
  * Pure and synchronous; throws RewriteSolverError when the solver gives no trustworthy answer.
  */
-export function solveRewrite(
-  lines: RewriteLine[],
-  targets: Targets,
-  servings: number,
-  options: RewriteOptions = {},
-): RewriteResult {
+export function solveRewrite(lines: RewriteLine[], targets: Targets, servings: number, options: RewriteOptions = {}): RewriteResult {
   checkTargets(targets);
   const opts = resolveOptions(options);
   const log = new SolveLog(opts.timeoutMs);
-  const solveFor = (kind: RewriteObjective, floorMs?: number) =>
-    solveElastic(lines, targets, servings, opts, { objective: { kind } }, log, Infinity, floorMs);
+  const solveFor = (kind: RewriteObjective, floorMs?: number) => solveElastic(lines, targets, servings, opts, { objective: { kind } }, log, Infinity, floorMs);
   let objective = opts.objective;
   let outcome = solveFor(objective);
   if (!outcome || (!outcome.meetsTargets && outcome.solution.status !== 'optimal')) {

@@ -9,7 +9,11 @@ export const MAX_TEXT_CHARS = 20_000;
 export const lineInputSchema = z.object({
   input: z.string({ message: 'Each line needs its text.' }).max(1_000, { message: 'A line is at most 1,000 characters.' }),
   foodId: z.number().int().positive().optional(),
-  grams: z.number({ message: 'grams must be a number.' }).min(0, { message: 'grams cannot be negative.' }).max(100_000, { message: 'grams is at most 100,000.' }).optional(),
+  grams: z
+    .number({ message: 'grams must be a number.' })
+    .min(0, { message: 'grams cannot be negative.' })
+    .max(100_000, { message: 'grams is at most 100,000.' })
+    .optional(),
 });
 export type LineInput = z.infer<typeof lineInputSchema>;
 
@@ -21,8 +25,14 @@ export const servingsSchema = z
 
 export const recipeSourceSchema = z
   .object({
-    text: z.string().max(MAX_TEXT_CHARS, { message: `text is at most ${MAX_TEXT_CHARS.toLocaleString('en-US')} characters.` }).optional(),
-    lines: z.array(lineInputSchema).max(MAX_LINES, { message: `A recipe has at most ${MAX_LINES} lines.` }).optional(),
+    text: z
+      .string()
+      .max(MAX_TEXT_CHARS, { message: `text is at most ${MAX_TEXT_CHARS.toLocaleString('en-US')} characters.` })
+      .optional(),
+    lines: z
+      .array(lineInputSchema)
+      .max(MAX_LINES, { message: `A recipe has at most ${MAX_LINES} lines.` })
+      .optional(),
     servings: servingsSchema,
   })
   .refine((v) => v.text !== undefined || v.lines !== undefined, { message: 'Send the recipe as text or as lines.', path: ['text'] });

@@ -6,7 +6,12 @@ export type UserRole = (typeof ROLES_USER)[number];
 export const UNIT_SYSTEMS = ['us', 'metric'] as const;
 export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
 
-const email = z.string().trim().toLowerCase().pipe(z.email({ message: 'Enter a valid e-mail address.' })).pipe(z.string().max(254));
+const email = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .pipe(z.email({ message: 'Enter a valid e-mail address.' }))
+  .pipe(z.string().max(254));
 const password = z
   .string({ message: 'Enter a password.' })
   .min(10, { message: 'Use at least 10 characters.' })

@@ -1,7 +1,11 @@
 import { z } from 'zod';
 import { ROLES } from '../food';
 
-const email = z.string({ message: 'Enter an e-mail address.' }).trim().toLowerCase().pipe(z.email({ message: 'Enter a valid e-mail address.' }));
+const email = z
+  .string({ message: 'Enter an e-mail address.' })
+  .trim()
+  .toLowerCase()
+  .pipe(z.email({ message: 'Enter a valid e-mail address.' }));
 
 export const SWAP_STATUSES = ['draft', 'published'] as const;
 
@@ -9,7 +13,11 @@ const swapFields = {
   fromFoodId: z.number({ message: 'fromFoodId must be a food id.' }).int().positive().nullable().optional(),
   fromRole: z.enum(ROLES, { message: 'fromRole must be one of the culinary roles.' }).nullable().optional(),
   toFoodId: z.number({ message: 'toFoodId must be a food id.' }).int().positive(),
-  volumeRatio: z.number({ message: 'volumeRatio must be a number.' }).gt(0, { message: 'volumeRatio must be above 0.' }).max(4, { message: 'volumeRatio is at most 4.' }).optional(),
+  volumeRatio: z
+    .number({ message: 'volumeRatio must be a number.' })
+    .gt(0, { message: 'volumeRatio must be above 0.' })
+    .max(4, { message: 'volumeRatio is at most 4.' })
+    .optional(),
   note: z.string().max(2_000, { message: 'note is at most 2,000 characters.' }).optional(),
   tags: z.array(z.string().trim().min(1).max(40)).max(20, { message: 'At most 20 tags.' }).optional(),
   status: z.enum(SWAP_STATUSES, { message: 'status is draft or published.' }).optional(),
@@ -39,7 +47,13 @@ export const clientTargetsSchema = z.object({
 });
 export type ClientTargets = z.infer<typeof clientTargetsSchema>;
 
-export const commentSchema = z.object({ body: z.string({ message: 'Write a comment.' }).trim().min(1, { message: 'Write a comment.' }).max(4_000, { message: 'A comment is at most 4,000 characters.' }) });
+export const commentSchema = z.object({
+  body: z
+    .string({ message: 'Write a comment.' })
+    .trim()
+    .min(1, { message: 'Write a comment.' })
+    .max(4_000, { message: 'A comment is at most 4,000 characters.' }),
+});
 
 export const passwordResetRequestSchema = z.object({ email });
 export const passwordResetConfirmSchema = z.object({

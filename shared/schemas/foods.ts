@@ -4,8 +4,17 @@ import { MIN_SERVING, panelIssues, type LabelPanel } from '../label-food';
 import type { FoodDetail } from './analyze';
 
 export const foodSearchQuerySchema = z.object({
-  q: z.string({ message: 'q is required.' }).trim().min(1, { message: 'q needs at least one character.' }).max(200, { message: 'q is at most 200 characters.' }),
-  limit: z.coerce.number({ message: 'limit must be a number.' }).int().min(1, { message: 'limit is at least 1.' }).max(50, { message: 'limit is at most 50.' }).default(10),
+  q: z
+    .string({ message: 'q is required.' })
+    .trim()
+    .min(1, { message: 'q needs at least one character.' })
+    .max(200, { message: 'q is at most 200 characters.' }),
+  limit: z.coerce
+    .number({ message: 'limit must be a number.' })
+    .int()
+    .min(1, { message: 'limit is at least 1.' })
+    .max(50, { message: 'limit is at most 50.' })
+    .default(10),
 });
 
 export const foodIdParamSchema = z.object({
@@ -31,7 +40,11 @@ const labelFields = {
   name: z.string({ message: 'Name the food.' }).trim().min(2, { message: 'Name the food.' }).max(200, { message: 'name is at most 200 characters.' }),
   servingSizeG: servingSize('servingSizeG').optional(),
   servingSizeMl: servingSize('servingSizeMl').optional(),
-  densityGPerMl: z.number({ message: 'densityGPerMl must be a number.' }).min(0.05, { message: 'densityGPerMl is at least 0.05.' }).max(2, { message: 'densityGPerMl is at most 2.' }).optional(),
+  densityGPerMl: z
+    .number({ message: 'densityGPerMl must be a number.' })
+    .min(0.05, { message: 'densityGPerMl is at least 0.05.' })
+    .max(2, { message: 'densityGPerMl is at most 2.' })
+    .optional(),
   servingLabel: z.string({ message: 'servingLabel must be text.' }).trim().max(80, { message: 'servingLabel is at most 80 characters.' }).optional(),
   kcal: amount('kcal', 5_000).optional(),
   proteinG: amount('proteinG', 5_000),
@@ -41,8 +54,15 @@ const labelFields = {
   fiberG: amount('fiberG', 5_000).optional(),
   sugarG: amount('sugarG', 5_000).optional(),
   sodiumMg: amount('sodiumMg', 200_000).optional(),
-  barcode: z.string({ message: 'barcode must be text.' }).trim().regex(/^\d{6,14}$/, { message: 'barcode is 6 to 14 digits (UPC or EAN).' }).optional(),
-  roles: z.array(z.enum(ROLES, { message: 'roles: choose from the listed culinary roles.' })).max(5, { message: 'roles: at most 5.' }).optional(),
+  barcode: z
+    .string({ message: 'barcode must be text.' })
+    .trim()
+    .regex(/^\d{6,14}$/, { message: 'barcode is 6 to 14 digits (UPC or EAN).' })
+    .optional(),
+  roles: z
+    .array(z.enum(ROLES, { message: 'roles: choose from the listed culinary roles.' }))
+    .max(5, { message: 'roles: at most 5.' })
+    .optional(),
 };
 
 /** Physical limits per 100 g (shared/label-food.ts), each failure naming its field. */
@@ -59,7 +79,10 @@ export const labelFoodSchema = z.object(labelFields).superRefine(checkPanel);
 export type LabelFoodInput = z.infer<typeof labelFoodSchema>;
 
 /** `PATCH /api/foods/:id`: any fields; the merged panel is checked again as a whole. */
-export const labelFoodPatchSchema = z.object(labelFields).partial().refine((v) => Object.keys(v).length > 0, { message: 'Send at least one field to change.' });
+export const labelFoodPatchSchema = z
+  .object(labelFields)
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, { message: 'Send at least one field to change.' });
 export type LabelFoodPatch = z.infer<typeof labelFoodPatchSchema>;
 
 /** What a label photo was read as: every field may be missing when the panel did not show it. */

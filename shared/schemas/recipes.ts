@@ -18,7 +18,11 @@ export interface StoredLine {
   checkMatch?: boolean;
 }
 
-const title = z.string({ message: 'Give the recipe a title.' }).trim().min(1, { message: 'Give the recipe a title.' }).max(200, { message: 'title is at most 200 characters.' });
+const title = z
+  .string({ message: 'Give the recipe a title.' })
+  .trim()
+  .min(1, { message: 'Give the recipe a title.' })
+  .max(200, { message: 'title is at most 200 characters.' });
 const notes = z.string().max(20_000, { message: 'notes are at most 20,000 characters.' });
 const revision = z.number({ message: 'revision is required: send the revision you read.' }).int().min(1);
 
@@ -44,7 +48,10 @@ export const createRecipeSchema = z
     notes: notes.optional(),
     method: notes.optional(),
     text: z.string().max(MAX_TEXT_CHARS).optional(),
-    lines: z.array(versionLineSchema).max(MAX_LINES, { message: `A recipe has at most ${MAX_LINES} lines.` }).optional(),
+    lines: z
+      .array(versionLineSchema)
+      .max(MAX_LINES, { message: `A recipe has at most ${MAX_LINES} lines.` })
+      .optional(),
   })
   .refine((v) => v.text !== undefined || v.lines !== undefined, { message: 'Send the ingredients as text or as lines.', path: ['text'] });
 
@@ -65,7 +72,10 @@ export const deleteRecipeSchema = z.object({ revision: z.coerce.number({ message
 
 export const createVersionSchema = z.object({
   kind: z.enum(VERSION_KINDS, { message: 'kind is one of original, rewrite, edit.' }),
-  lines: z.array(versionLineSchema).min(1, { message: 'A version needs at least one line.' }).max(MAX_LINES, { message: `A recipe has at most ${MAX_LINES} lines.` }),
+  lines: z
+    .array(versionLineSchema)
+    .min(1, { message: 'A version needs at least one line.' })
+    .max(MAX_LINES, { message: `A recipe has at most ${MAX_LINES} lines.` }),
   servings: servingsSchema.optional(),
   targets: targetsSchema.nullable().optional(),
   note: z.string().max(2_000, { message: 'note is at most 2,000 characters.' }).optional(),

@@ -41,12 +41,22 @@ export const rewriteRequestSchema = z
     lines: z.array(lineInputSchema).max(MAX_LINES).optional(),
     servings: servingsSchema,
     targets: targetsSchema,
-    volumeTolerancePct: z.number({ message: 'volumeTolerancePct must be a number.' }).min(0).max(50, { message: 'volumeTolerancePct is at most 50.' }).optional(),
+    volumeTolerancePct: z
+      .number({ message: 'volumeTolerancePct must be a number.' })
+      .min(0)
+      .max(50, { message: 'volumeTolerancePct is at most 50.' })
+      .optional(),
     lineTolerancePct: z.number({ message: 'lineTolerancePct must be a number.' }).min(0).max(100, { message: 'lineTolerancePct is at most 100.' }).optional(),
     maxSwaps: z.number({ message: 'maxSwaps must be a whole number.' }).int().min(0).max(MAX_LINES).optional(),
-    lockedLines: z.array(z.number().int().min(0, { message: 'lockedLines holds line indexes from 0.' })).max(MAX_LINES).optional(),
+    lockedLines: z
+      .array(z.number().int().min(0, { message: 'lockedLines holds line indexes from 0.' }))
+      .max(MAX_LINES)
+      .optional(),
     excludedFoodIds: z.array(z.number().int().positive()).max(500).optional(),
-    diet: z.array(z.enum(DIET_FLAGS, { message: `diet holds ${DIET_FLAGS.join(', ')}.` })).max(DIET_FLAGS.length).optional(),
+    diet: z
+      .array(z.enum(DIET_FLAGS, { message: `diet holds ${DIET_FLAGS.join(', ')}.` }))
+      .max(DIET_FLAGS.length)
+      .optional(),
     objective: z.enum(OBJECTIVES, { message: `objective is one of ${OBJECTIVES.join(', ')}.` }).optional(),
     candidatesPerLine: z.number().int().min(1).max(20).optional(),
     /** the cook's choice of what a line does, by line index ("3": "vegetable" unlocks an aromatic) */
@@ -58,7 +68,10 @@ export const rewriteRequestSchema = z
       )
       .optional(),
     /** major allergens a swap may bring into the recipe */
-    allowAllergens: z.array(z.enum(ALLERGENS, { message: `allowAllergens holds ${ALLERGENS.join(', ')}.` })).max(ALLERGENS.length).optional(),
+    allowAllergens: z
+      .array(z.enum(ALLERGENS, { message: `allowAllergens holds ${ALLERGENS.join(', ')}.` }))
+      .max(ALLERGENS.length)
+      .optional(),
   })
   .refine((v) => v.text !== undefined || v.lines !== undefined, { message: 'Send the recipe as text or as lines.', path: ['text'] });
 export type RewriteRequest = z.infer<typeof rewriteRequestSchema>;

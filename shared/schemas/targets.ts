@@ -15,8 +15,7 @@ export const TARGET_LIMITS = {
   mealsPerDay: { min: 1, max: 8 },
 } as const;
 
-const ADULTS_ONLY =
-  'Estimates here are for adults; for anyone under 18 ask a physician or registered dietitian.';
+const ADULTS_ONLY = 'Estimates here are for adults; for anyone under 18 ask a physician or registered dietitian.';
 
 function rangedNumber(field: keyof typeof TARGET_LIMITS, unit: string, options: { integer: boolean; note?: string }) {
   const { min, max } = TARGET_LIMITS[field];

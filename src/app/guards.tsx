@@ -17,9 +17,7 @@ function SessionPending() {
   if (auth.status === 'checking') return <LoadingState label="Checking your sign-in…" />;
   return (
     <Page width="narrow" title="Waiting to check your sign-in">
-      <p className="text-ink-soft">
-        This page is for signed-in members. It will open as soon as Hearthswap can confirm who you are.
-      </p>
+      <p className="text-ink-soft">This page is for signed-in members. It will open as soon as Hearthswap can confirm who you are.</p>
     </Page>
   );
 }

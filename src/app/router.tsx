@@ -62,9 +62,7 @@ export const routes: RouteObject[] = [
           },
           {
             element: <RequireRole roles={PAGE_ROLES.myCoach} />,
-            children: [
-              { path: 'coach', lazy: () => import('./routes/my-coach').then((m) => ({ Component: m.MyCoachPage })) },
-            ],
+            children: [{ path: 'coach', lazy: () => import('./routes/my-coach').then((m) => ({ Component: m.MyCoachPage })) }],
           },
           {
             element: <RequireRole roles={PAGE_ROLES.swapLibrary} />,

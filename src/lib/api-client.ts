@@ -14,13 +14,7 @@ export class ApiError extends Error {
   /** seconds from a Retry-After header, when the server sent one */
   readonly retryAfterSeconds: number | null;
 
-  constructor(init: {
-    status: number;
-    code: string;
-    message: string;
-    details?: unknown;
-    retryAfterSeconds?: number | null;
-  }) {
+  constructor(init: { status: number; code: string; message: string; details?: unknown; retryAfterSeconds?: number | null }) {
     super(init.message);
     this.name = 'ApiError';
     this.status = init.status;
@@ -28,8 +22,7 @@ export class ApiError extends Error {
     this.details = init.details;
     // Field messages come only with validation failures; other details (e.g. an infeasible
     // rewrite's best reachable values) are not about form fields.
-    this.fieldErrors =
-      init.status === 400 || /valid/i.test(init.code) ? fieldErrorsFrom(init.details) : {};
+    this.fieldErrors = init.status === 400 || /valid/i.test(init.code) ? fieldErrorsFrom(init.details) : {};
     this.retryAfterSeconds = init.retryAfterSeconds ?? null;
   }
 
@@ -106,10 +99,7 @@ export function fieldErrorsFrom(details: unknown): FieldErrors {
 function readableStatusMessage(status: number, retryAfterSeconds: number | null): string {
   if (status === 429) {
     if (retryAfterSeconds && retryAfterSeconds > 0) {
-      const wait =
-        retryAfterSeconds < 90
-          ? `${retryAfterSeconds} second${retryAfterSeconds === 1 ? '' : 's'}`
-          : `${Math.ceil(retryAfterSeconds / 60)} minutes`;
+      const wait = retryAfterSeconds < 90 ? `${retryAfterSeconds} second${retryAfterSeconds === 1 ? '' : 's'}` : `${Math.ceil(retryAfterSeconds / 60)} minutes`;
       return `Too many attempts in a short time. Please wait ${wait} and try again.`;
     }
     return 'Too many attempts in a short time. Please wait a minute and try again.';
@@ -135,8 +125,7 @@ function parseRetryAfter(header: string | null): number | null {
 /** Builds an ApiError from a failed response and its parsed body (if any). */
 export function apiErrorFromResponse(status: number, body: unknown, retryAfterHeader: string | null): ApiError {
   const retryAfterSeconds = parseRetryAfter(retryAfterHeader);
-  const envelope =
-    body && typeof body === 'object' && 'error' in body ? (body as { error: unknown }).error : undefined;
+  const envelope = body && typeof body === 'object' && 'error' in body ? (body as { error: unknown }).error : undefined;
 
   let code = status === 429 ? 'rate_limited' : `http_${status}`;
   let message = '';
@@ -164,13 +153,7 @@ export interface RequestOptions {
   headers?: Record<string, string>;
 }
 
-async function send<T>(
-  fetchImpl: typeof fetch,
-  method: string,
-  path: string,
-  body: unknown,
-  options: RequestOptions,
-): Promise<T> {
+async function send<T>(fetchImpl: typeof fetch, method: string, path: string, body: unknown, options: RequestOptions): Promise<T> {
   const headers: Record<string, string> = { Accept: 'application/json', ...options.headers };
   const init: RequestInit = { method, credentials: 'same-origin', headers, signal: options.signal };
   if (body !== undefined) {

@@ -6,11 +6,7 @@ import { isApiError } from './api-client';
  * Returns true when at least one field got a message; messages for fields the form
  * doesn't have are left for the form-level alert.
  */
-export function applyServerFieldErrors<T extends FieldValues>(
-  error: unknown,
-  setError: UseFormSetError<T>,
-  fields: readonly Path<T>[],
-): boolean {
+export function applyServerFieldErrors<T extends FieldValues>(error: unknown, setError: UseFormSetError<T>, fields: readonly Path<T>[]): boolean {
   if (!isApiError(error)) return false;
   let applied = false;
   for (const field of fields) {

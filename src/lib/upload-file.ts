@@ -63,8 +63,7 @@ function sendOnce<T>(path: string, file: Blob, token: string, options: UploadOpt
       if (xhr.status >= 200 && xhr.status < 300) resolve(body as T);
       else reject(apiErrorFromResponse(xhr.status, body, xhr.getResponseHeader('Retry-After')));
     };
-    xhr.onerror = () =>
-      reject(new ApiError({ status: 0, code: 'network', message: "Can't reach Hearthswap right now. Check your connection and try again." }));
+    xhr.onerror = () => reject(new ApiError({ status: 0, code: 'network', message: "Can't reach Hearthswap right now. Check your connection and try again." }));
     xhr.onabort = () => reject(new DOMException('The upload was cancelled.', 'AbortError'));
 
     const abort = () => xhr.abort();

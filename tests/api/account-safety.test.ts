@@ -16,7 +16,10 @@ afterAll(async () => {
 async function mailTo(app: TestApp, address: string, pattern: RegExp) {
   return vi.waitFor(
     () => {
-      const found = app.outbox().filter((m) => m.to.includes(address) && pattern.test(m.text)).at(-1);
+      const found = app
+        .outbox()
+        .filter((m) => m.to.includes(address) && pattern.test(m.text))
+        .at(-1);
       if (!found) throw new Error(`no mail to ${address} yet`);
       return found;
     },
@@ -60,11 +63,19 @@ describe('password reset', () => {
     expect(second).not.toBe(first);
     expect(await PasswordReset.count({ where: { userId: cook.user.id, usedAt: null } })).toBe(2);
 
-    await visitor.agent.post('/api/auth/password-reset/confirm').set('X-CSRF-Token', visitor.csrf).send({ token: second, password: 'a fresh kitchen password' }).expect(200);
+    await visitor.agent
+      .post('/api/auth/password-reset/confirm')
+      .set('X-CSRF-Token', visitor.csrf)
+      .send({ token: second, password: 'a fresh kitchen password' })
+      .expect(200);
     // Both devices signed in before the reset are signed out; the older link no longer works.
     await cook.agent.get('/api/auth/me').expect(401);
     await phone.agent.get('/api/auth/me').expect(401);
-    const old = await visitor.agent.post('/api/auth/password-reset/confirm').set('X-CSRF-Token', visitor.csrf).send({ token: first, password: 'an attacker password!' }).expect(410);
+    const old = await visitor.agent
+      .post('/api/auth/password-reset/confirm')
+      .set('X-CSRF-Token', visitor.csrf)
+      .send({ token: first, password: 'an attacker password!' })
+      .expect(410);
     expect(old.body.error.code).toBe('reset_used');
     await visitor.agent.post('/api/auth/login').set('X-CSRF-Token', visitor.csrf).send({ email: cook.email, password: 'a fresh kitchen password' }).expect(200);
   });
@@ -146,7 +157,12 @@ describe('anonymous CSRF tokens', () => {
     const other = await agentWithCsrf(t.app);
     await agent.post('/api/auth/login').set('X-CSRF-Token', other.csrf).send({ email: cook.email, password: cook.password }).expect(403);
     // A forged cookie without the server's signature is ignored.
-    await request(t.app).post('/api/auth/login').set('Cookie', 'hearthswap.csrf=abc.def').set('X-CSRF-Token', 'abc').send({ email: cook.email, password: cook.password }).expect(403);
+    await request(t.app)
+      .post('/api/auth/login')
+      .set('Cookie', 'hearthswap.csrf=abc.def')
+      .set('X-CSRF-Token', 'abc')
+      .send({ email: cook.email, password: cook.password })
+      .expect(403);
     // The token fetched before signing in keeps working after it, now from the session.
     await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: cook.email, password: cook.password }).expect(200);
     await agent.post('/api/recipes').set('X-CSRF-Token', csrf).send({ title: 'Oats', servings: 1, text: '1 cup oats' }).expect(201);

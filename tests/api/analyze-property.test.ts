@@ -52,7 +52,13 @@ describe('analysis never falls back and never yields NaN, negative or infinite g
     resetFallbacks();
     fc.assert(
       fc.property(fc.array(line, { minLength: 5, maxLength: 5 }), fc.integer({ min: 1, max: 100 }), (inputs, servings) => {
-        assertSane(analyzeLines(engine, inputs.map((input) => ({ input })), servings));
+        assertSane(
+          analyzeLines(
+            engine,
+            inputs.map((input) => ({ input })),
+            servings,
+          ),
+        );
       }),
       { numRuns: 1_000, seed: 20261201 },
     );
@@ -67,7 +73,10 @@ describe('analysis never falls back and never yields NaN, negative or infinite g
       expect([200, 400]).toContain(res.status);
       if (res.status === 200) for (const l of res.body.lines) expect(Number.isFinite(l.grams) && l.grams >= 0).toBe(true);
     }
-    const tooLong = await request(t.app).post('/api/analyze').send({ text: 'x'.repeat(65_536), servings: 1 }).expect(400);
+    const tooLong = await request(t.app)
+      .post('/api/analyze')
+      .send({ text: 'x'.repeat(65_536), servings: 1 })
+      .expect(400);
     expect(tooLong.body.error.message).toMatch(/text/);
   });
 });

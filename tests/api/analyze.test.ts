@@ -86,9 +86,15 @@ describe('POST /api/analyze', () => {
     expect(zero.body.error.message).toMatch(/servings/);
     const nothing = await request(t.app).post('/api/analyze').send({ servings: 2 }).expect(400);
     expect(nothing.body.error.details.fieldErrors.text).toBeDefined();
-    const negative = await request(t.app).post('/api/analyze').send({ lines: [{ input: 'egg', grams: -5 }], servings: 1 }).expect(400);
+    const negative = await request(t.app)
+      .post('/api/analyze')
+      .send({ lines: [{ input: 'egg', grams: -5 }], servings: 1 })
+      .expect(400);
     expect(negative.body.error.message).toMatch(/lines\.0\.grams/);
-    const tooMany = await request(t.app).post('/api/analyze').send({ text: Array(101).fill('1 egg').join('\n'), servings: 1 }).expect(400);
+    const tooMany = await request(t.app)
+      .post('/api/analyze')
+      .send({ text: Array(101).fill('1 egg').join('\n'), servings: 1 })
+      .expect(400);
     expect(tooMany.body.error.message).toMatch(/at most 100/);
   });
 

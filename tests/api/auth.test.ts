@@ -21,11 +21,7 @@ describe('health', () => {
 describe('sign-up', () => {
   it('names every invalid field in a 400', async () => {
     const { agent, csrf } = await agentWithCsrf(t.app);
-    const res = await agent
-      .post('/api/auth/register')
-      .set('X-CSRF-Token', csrf)
-      .send({ email: 'not-an-email', password: 'short', role: 'chef' })
-      .expect(400);
+    const res = await agent.post('/api/auth/register').set('X-CSRF-Token', csrf).send({ email: 'not-an-email', password: 'short', role: 'chef' }).expect(400);
     expect(res.body.error.code).toBe('validation_failed');
     const fields = Object.keys(res.body.error.details.fieldErrors).sort();
     expect(fields).toEqual(['displayName', 'email', 'password', 'role']);
@@ -154,12 +150,7 @@ describe('roles', () => {
 describe('malformed input', () => {
   it('answers malformed JSON with 400', async () => {
     const { agent, csrf } = await agentWithCsrf(t.app);
-    const res = await agent
-      .post('/api/auth/login')
-      .set('X-CSRF-Token', csrf)
-      .set('Content-Type', 'application/json')
-      .send('{"email": ')
-      .expect(400);
+    const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).set('Content-Type', 'application/json').send('{"email": ').expect(400);
     expect(res.body.error.code).toBe('malformed_json');
   });
 
@@ -191,7 +182,11 @@ describe('rate limits', () => {
       const { email } = await signUp(limited.app);
       const { agent, csrf } = await agentWithCsrf(limited.app);
       for (let i = 0; i < 10; i++) {
-        await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email, password: `wrong-${i}-password` }).expect(401);
+        await agent
+          .post('/api/auth/login')
+          .set('X-CSRF-Token', csrf)
+          .send({ email, password: `wrong-${i}-password` })
+          .expect(401);
       }
       const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email, password: 'correct horse battery' }).expect(429);
       expect(res.body.error.code).toBe('rate_limited');

@@ -28,7 +28,10 @@ async function coachWithClient() {
   const coach = await signUp(t.app, 'coach');
   const client = await signUp(t.app, 'cook');
   await coach.agent.post('/api/clients/invitations').set('X-CSRF-Token', coach.csrf).send({ email: client.email }).expect(201);
-  const mail = t.outbox().filter((m) => m.to.includes(client.email)).at(-1)!;
+  const mail = t
+    .outbox()
+    .filter((m) => m.to.includes(client.email))
+    .at(-1)!;
   const token = tokenFrom(mail.text);
   await client.agent.post(`/api/invitations/${token}/accept`).set('X-CSRF-Token', client.csrf).expect(200);
   return { coach, client, token };
@@ -39,7 +42,10 @@ describe('invitations by e-mail', () => {
     const coach = await signUp(t.app, 'coach');
     const cook = await signUp(t.app, 'cook');
     await coach.agent.post('/api/clients/invitations').set('X-CSRF-Token', coach.csrf).send({ email: cook.email }).expect(201);
-    const mail = t.outbox().filter((m) => m.to.includes(cook.email)).at(-1)!;
+    const mail = t
+      .outbox()
+      .filter((m) => m.to.includes(cook.email))
+      .at(-1)!;
     expect(mail.subject.length).toBeGreaterThan(0);
     expect(mail.text).toContain('http://hearthswap.test/invitations/');
     const token = tokenFrom(mail.text);
@@ -60,11 +66,19 @@ describe('invitations by e-mail', () => {
     const coach = await signUp(t.app, 'coach');
     const cook = await signUp(t.app, 'cook');
     await coach.agent.post('/api/clients/invitations').set('X-CSRF-Token', coach.csrf).send({ email: cook.email }).expect(201);
-    const token = tokenFrom(t.outbox().filter((m) => m.to.includes(cook.email)).at(-1)!.text);
+    const token = tokenFrom(
+      t
+        .outbox()
+        .filter((m) => m.to.includes(cook.email))
+        .at(-1)!.text,
+    );
     await Invitation.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { email: cook.email } });
     const res = await cook.agent.post(`/api/invitations/${token}/accept`).set('X-CSRF-Token', cook.csrf).expect(410);
     expect(res.body.error.code).toBe('invitation_expired');
-    await cook.agent.post(`/api/invitations/${'x'.repeat(32)}/accept`).set('X-CSRF-Token', cook.csrf).expect(404);
+    await cook.agent
+      .post(`/api/invitations/${'x'.repeat(32)}/accept`)
+      .set('X-CSRF-Token', cook.csrf)
+      .expect(404);
   });
 
   it('lets a client leave and a coach remove a client', async () => {
@@ -83,7 +97,11 @@ describe('swap library', () => {
     const { coach, client } = await coachWithClient();
     const from = await foodId('cheese mozzarella whole milk');
     const to = await foodId('cheese mozzarella part skim milk');
-    const draft = await coach.agent.post('/api/swaps').set('X-CSRF-Token', coach.csrf).send({ fromFoodId: from, toFoodId: to, note: 'Bake 5 minutes longer for melt' }).expect(201);
+    const draft = await coach.agent
+      .post('/api/swaps')
+      .set('X-CSRF-Token', coach.csrf)
+      .send({ fromFoodId: from, toFoodId: to, note: 'Bake 5 minutes longer for melt' })
+      .expect(201);
     expect(draft.body.status).toBe('draft');
     expect((await client.agent.get('/api/swaps').expect(200)).body.swaps).toHaveLength(0);
     await coach.agent.post(`/api/swaps/${draft.body.id}/publish`).set('X-CSRF-Token', coach.csrf).expect(200);
@@ -93,7 +111,11 @@ describe('swap library', () => {
     const other = await signUp(t.app, 'coach');
     await other.agent.patch(`/api/swaps/${draft.body.id}`).set('X-CSRF-Token', other.csrf).send({ note: 'mine now' }).expect(404);
     expect((await other.agent.get('/api/swaps')).body.swaps).toHaveLength(0);
-    const bad = await coach.agent.post('/api/swaps').set('X-CSRF-Token', coach.csrf).send({ fromFoodId: from, fromRole: 'melting-cheese', toFoodId: to }).expect(400);
+    const bad = await coach.agent
+      .post('/api/swaps')
+      .set('X-CSRF-Token', coach.csrf)
+      .send({ fromFoodId: from, fromRole: 'melting-cheese', toFoodId: to })
+      .expect(400);
     expect(bad.body.error.details.fieldErrors.fromFoodId).toBeDefined();
     await request(t.app).get('/api/swaps').expect(401);
   });
@@ -102,13 +124,20 @@ describe('swap library', () => {
     const { coach, client } = await coachWithClient();
     const from = await foodId('cheese mozzarella whole milk');
     const to = await foodId('cheese mozzarella part skim milk');
-    const swap = await coach.agent.post('/api/swaps').set('X-CSRF-Token', coach.csrf).send({ fromFoodId: from, toFoodId: to, note: 'Bake 5 minutes longer for melt', status: 'published' }).expect(201);
+    const swap = await coach.agent
+      .post('/api/swaps')
+      .set('X-CSRF-Token', coach.csrf)
+      .send({ fromFoodId: from, toFoodId: to, note: 'Bake 5 minutes longer for melt', status: 'published' })
+      .expect(201);
     expect(swap.body.status).toBe('published');
     const text = '2 cups shredded mozzarella\n8 oz dry pasta\n1 cup marinara sauce';
     const before = (await request(t.app).post('/api/analyze').send({ text, servings: 4 })).body;
     // Pasta and sauce locked and a tight line band: only a cheese swap can save 15 kcal a serving.
     const targets = { proteinMinG: before.perServing.proteinG * 0.9, kcalMax: before.perServing.kcal - 15 };
-    const res = await client.agent.post('/api/rewrite').send({ text, servings: 4, targets, maxSwaps: 1, lockedLines: [1, 2], lineTolerancePct: 5 }).expect(200);
+    const res = await client.agent
+      .post('/api/rewrite')
+      .send({ text, servings: 4, targets, maxSwaps: 1, lockedLines: [1, 2], lineTolerancePct: 5 })
+      .expect(200);
     const change = res.body.changes.find((c: { swapped: boolean }) => c.swapped);
     expect(change.to.id).toBe(to);
     expect(change.approvedBy).toBe('Test coach');
@@ -126,7 +155,10 @@ describe('targets', () => {
     expect(res.body.tdeeKcal).toBeCloseTo(1780 * 1.55, 6);
     expect(res.body.kcalPerDay).toBeCloseTo(1780 * 1.55 * 0.8, 6);
     expect(res.body.perMeal.kcal).toBeCloseTo(res.body.kcalPerDay / 4, 6);
-    const bad = await request(t.app).post('/api/targets/estimate').send({ sex: 'male', ageYears: 15, heightCm: 180, weightKg: 80, activity: 'moderate', goal: 'lose', mealsPerDay: 4 }).expect(400);
+    const bad = await request(t.app)
+      .post('/api/targets/estimate')
+      .send({ sex: 'male', ageYears: 15, heightCm: 180, weightKg: 80, activity: 'moderate', goal: 'lose', mealsPerDay: 4 })
+      .expect(400);
     expect(bad.body.error.details.fieldErrors.ageYears).toBeDefined();
   });
 
@@ -140,7 +172,11 @@ describe('targets', () => {
     const other = await signUp(t.app, 'coach');
     await other.agent.put(`/api/clients/${client.user.id}/targets`).set('X-CSRF-Token', other.csrf).send(targets).expect(404);
     await client.agent.put(`/api/clients/${client.user.id}/targets`).set('X-CSRF-Token', client.csrf).send(targets).expect(403);
-    const bad = await coach.agent.put(`/api/clients/${client.user.id}/targets`).set('X-CSRF-Token', coach.csrf).send({ perMeal: { kcal: -1, proteinG: 40 } }).expect(400);
+    const bad = await coach.agent
+      .put(`/api/clients/${client.user.id}/targets`)
+      .set('X-CSRF-Token', coach.csrf)
+      .send({ perMeal: { kcal: -1, proteinG: 40 } })
+      .expect(400);
     expect(bad.body.error.message).toMatch(/perMeal\.kcal/);
   });
 });
@@ -148,11 +184,21 @@ describe('targets', () => {
 describe('review', () => {
   it('shows a coach their clients’ saved versions only, and carries comments both ways', async () => {
     const { coach, client } = await coachWithClient();
-    const recipe = (await client.agent.post('/api/recipes').set('X-CSRF-Token', client.csrf).send({ title: 'Turkey chili', servings: 4, text: '1 lb ground turkey\n1 (15 oz) can kidney beans' }).expect(201)).body;
+    const recipe = (
+      await client.agent
+        .post('/api/recipes')
+        .set('X-CSRF-Token', client.csrf)
+        .send({ title: 'Turkey chili', servings: 4, text: '1 lb ground turkey\n1 (15 oz) can kidney beans' })
+        .expect(201)
+    ).body;
     const versions = await coach.agent.get(`/api/clients/${client.user.id}/versions`).expect(200);
     expect(versions.body.versions[0]).toMatchObject({ recipeId: recipe.id, number: 1, recipeTitle: 'Turkey chili' });
     await coach.agent.get(`/api/recipes/${recipe.id}`).expect(200);
-    await coach.agent.post(`/api/recipes/${recipe.id}/versions/1/comments`).set('X-CSRF-Token', coach.csrf).send({ body: 'Try 93% lean next time.' }).expect(201);
+    await coach.agent
+      .post(`/api/recipes/${recipe.id}/versions/1/comments`)
+      .set('X-CSRF-Token', coach.csrf)
+      .send({ body: 'Try 93% lean next time.' })
+      .expect(201);
     const seen = await client.agent.get(`/api/recipes/${recipe.id}/versions/1/comments`).expect(200);
     expect(seen.body.comments[0]).toMatchObject({ body: 'Try 93% lean next time.', author: { role: 'coach' } });
     const other = await signUp(t.app, 'coach');
@@ -181,12 +227,22 @@ describe('custom foods from a label', () => {
     await request(t.app).get(`/api/foods/${res.body.id}`).expect(404);
     const found = await client.agent.get('/api/foods/search').query({ q: 'house test' }).expect(200);
     expect(found.body.results[0].id).toBe(res.body.id);
-    const pinned = await client.agent.post('/api/analyze').send({ lines: [{ input: '1 wrap', foodId: res.body.id, grams: 50 }], servings: 1 }).expect(200);
+    const pinned = await client.agent
+      .post('/api/analyze')
+      .send({ lines: [{ input: '1 wrap', foodId: res.body.id, grams: 50 }], servings: 1 })
+      .expect(200);
     expect(pinned.body.lines[0].food.id).toBe(res.body.id);
-    const leaked = await request(t.app).post('/api/analyze').send({ lines: [{ input: '1 wrap', foodId: res.body.id, grams: 50 }], servings: 1 }).expect(200);
+    const leaked = await request(t.app)
+      .post('/api/analyze')
+      .send({ lines: [{ input: '1 wrap', foodId: res.body.id, grams: 50 }], servings: 1 })
+      .expect(200);
     expect(leaked.body.lines[0].food?.id).not.toBe(res.body.id);
     // any cook may add a food from a label now (tests/api/my-foods.test.ts has the full matrix)
-    await client.agent.post('/api/foods').set('X-CSRF-Token', client.csrf).send({ name: 'x food', servingSizeG: 10, proteinG: 1, carbsG: 1, fatG: 1 }).expect(201);
+    await client.agent
+      .post('/api/foods')
+      .set('X-CSRF-Token', client.csrf)
+      .send({ name: 'x food', servingSizeG: 10, proteinG: 1, carbsG: 1, fatG: 1 })
+      .expect(201);
     const bad = await coach.agent.post('/api/foods').set('X-CSRF-Token', coach.csrf).send({ name: 'No size', proteinG: 1, carbsG: 1, fatG: 1 }).expect(400);
     expect(bad.body.error.details.fieldErrors.servingSizeG).toBeDefined();
   });
@@ -201,7 +257,10 @@ describe('password reset', () => {
     // The mail goes out after the answer, off the request path.
     const mail = await vi.waitFor(
       () => {
-        const sent = t.outbox().filter((m) => m.to.includes(cook.email)).at(-1);
+        const sent = t
+          .outbox()
+          .filter((m) => m.to.includes(cook.email))
+          .at(-1);
         if (!sent) throw new Error('no reset mail yet');
         return sent;
       },
@@ -217,9 +276,16 @@ describe('password reset', () => {
 describe('role matrix', () => {
   it('refuses each coach route to cooks (403) and the signed-out (401), and the outbox to non-admins', async () => {
     const cook = await signUp(t.app, 'cook');
-    for (const [method, path] of [['get', '/api/clients'], ['post', '/api/clients/invitations'], ['put', '/api/clients/1/targets'], ['get', '/api/clients/1/versions'], ['post', '/api/swaps']] as const) {
+    for (const [method, path] of [
+      ['get', '/api/clients'],
+      ['post', '/api/clients/invitations'],
+      ['put', '/api/clients/1/targets'],
+      ['get', '/api/clients/1/versions'],
+      ['post', '/api/swaps'],
+    ] as const) {
       await cook.agent[method](path).set('X-CSRF-Token', cook.csrf).send({}).expect(403);
-      await request(t.app)[method](path).expect(method === 'get' ? 401 : 403);
+      const anonymous = request(t.app);
+      await anonymous[method](path).expect(method === 'get' ? 401 : 403);
     }
     await cook.agent.get('/api/dev/outbox').expect(403);
     const admin = DEMO_ACCOUNTS.find((a) => a.role === 'admin')!;

@@ -68,7 +68,14 @@ describe('comfort-food panel: would a cook cook these plans?', () => {
       for (const v of o.verdicts.filter((x) => !x.ok)) report.push(`  ✗ ${o.recipe.id} [${o.objective}] line ${v.line} "${v.text}": ${v.detail}`);
     }
     console.log(
-      ['Comfort-food panel', describeScore('tune', scores.tune), describeScore('held-out', scores['held-out']), describeScore('all', scores.all), 'Offending changes and refusals:', ...report].join('\n'),
+      [
+        'Comfort-food panel',
+        describeScore('tune', scores.tune),
+        describeScore('held-out', scores['held-out']),
+        describeScore('all', scores.all),
+        'Offending changes and refusals:',
+        ...report,
+      ].join('\n'),
     );
     // Only a plan or an honest refusal: never a server error or a solver that gave up.
     expect(outcomes.filter((o) => o.status !== 200 && o.status !== 422).map((o) => `${o.recipe.id} ${o.objective}: ${o.status} ${o.message}`)).toEqual([]);

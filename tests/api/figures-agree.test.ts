@@ -20,7 +20,8 @@ describe('one volume per serving on every screen', () => {
   it('the Kitchen (analysis), the saved version (Compare) and a pinned-grams analysis agree', async () => {
     const cook = await signUp(t.app);
     const analysis = (await cook.agent.post('/api/analyze').send({ text: TEXT, servings: 4 }).expect(200)).body;
-    const recipe = (await cook.agent.post('/api/recipes').set('X-CSRF-Token', cook.csrf).send({ title: 'Tomato mac', servings: 4, text: TEXT }).expect(201)).body;
+    const recipe = (await cook.agent.post('/api/recipes').set('X-CSRF-Token', cook.csrf).send({ title: 'Tomato mac', servings: 4, text: TEXT }).expect(201))
+      .body;
     const version = (await cook.agent.get(`/api/recipes/${recipe.id}/versions/1`).expect(200)).body;
     expect(servingVolumeMl(version.volumeMl, version.servings)).toBe(servingVolumeMl(analysis.volumeMl, 4));
     // The Kitchen with every line pinned to its food and grams (as a saved version opens there)

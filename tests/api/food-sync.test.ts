@@ -58,12 +58,24 @@ async function stopApp(app: AppProcess | undefined) {
 async function signIn(url: string, email: string, password: string, register: boolean) {
   const agent = request.agent(url);
   const csrf = (await agent.get('/api/auth/csrf').expect(200)).body.token as string;
-  if (register) await agent.post('/api/auth/register').set('X-CSRF-Token', csrf).send({ email, password, displayName: 'Two-process cook', role: 'cook' }).expect(201);
+  if (register)
+    await agent.post('/api/auth/register').set('X-CSRF-Token', csrf).send({ email, password, displayName: 'Two-process cook', role: 'cook' }).expect(201);
   else await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email, password }).expect(200);
   return { agent, csrf };
 }
 
-const FOOD = { name: 'Brightfield protein tortilla', servingSizeG: 45, servingLabel: '1 tortilla', kcal: 70, fatG: 2.5, carbsG: 19, fiberG: 14, proteinG: 6, sodiumMg: 450, roles: ['flatbread-wrap'] };
+const FOOD = {
+  name: 'Brightfield protein tortilla',
+  servingSizeG: 45,
+  servingLabel: '1 tortilla',
+  kcal: 70,
+  fatG: 2.5,
+  carbsG: 19,
+  fiberG: 14,
+  proteinG: 6,
+  sodiumMg: 450,
+  roles: ['flatbread-wrap'],
+};
 
 let a: AppProcess;
 let b: AppProcess;
@@ -75,7 +87,7 @@ afterAll(async () => {
 });
 
 describe('two app processes on one database', () => {
-  it('B sees what A adds, changes and deletes, and B analyses A\'s saved version with its kcal', { timeout: 120_000 }, async () => {
+  it("B sees what A adds, changes and deletes, and B analyses A's saved version with its kcal", { timeout: 120_000 }, async () => {
     const email = `sync-${Date.now().toString(36)}@example.test`;
     const onA = await signIn(a.url, email, 'correct horse battery', true);
     const onB = await signIn(b.url, email, 'correct horse battery', false);
@@ -86,17 +98,30 @@ describe('two app processes on one database', () => {
     expect(onBList.body.foods.map((f: { id: number }) => f.id)).toEqual([food.id]);
 
     const recipe = (
-      await onA.agent.post('/api/recipes').set('X-CSRF-Token', onA.csrf).send({ title: 'Two-process wraps', servings: 2, text: '2 Brightfield protein tortillas' }).expect(201)
+      await onA.agent
+        .post('/api/recipes')
+        .set('X-CSRF-Token', onA.csrf)
+        .send({ title: 'Two-process wraps', servings: 2, text: '2 Brightfield protein tortillas' })
+        .expect(201)
     ).body;
     const version = await onB.agent.get(`/api/recipes/${recipe.id}/versions/1`).expect(200);
     expect(version.body.lines[0].foodId).toBe(food.id);
     expect(version.body.lines[0].nutrients.kcal).toBeCloseTo(140, 9);
-    const analysis = await onB.agent.post('/api/analyze').send({ lines: version.body.lines.map((l: { input: string }) => ({ input: l.input })), servings: 2 }).expect(200);
+    const analysis = await onB.agent
+      .post('/api/analyze')
+      .send({ lines: version.body.lines.map((l: { input: string }) => ({ input: l.input })), servings: 2 })
+      .expect(200);
     expect(analysis.body.lines[0].food.id).toBe(food.id);
     expect(analysis.body.perServing.kcal).toBeCloseTo(70, 9);
 
     // an unused food changed in place on A: B follows
-    const other = (await onA.agent.post('/api/foods').set('X-CSRF-Token', onA.csrf).send({ ...FOOD, name: 'Brightfield spinach wrap' }).expect(201)).body;
+    const other = (
+      await onA.agent
+        .post('/api/foods')
+        .set('X-CSRF-Token', onA.csrf)
+        .send({ ...FOOD, name: 'Brightfield spinach wrap' })
+        .expect(201)
+    ).body;
     await onA.agent.patch(`/api/foods/${other.id}`).set('X-CSRF-Token', onA.csrf).send({ kcal: 90 }).expect(200);
     await expect.poll(async () => (await onB.agent.get(`/api/foods/${other.id}`)).body.per100g?.kcal, { timeout: 15_000 }).toBeCloseTo(200, 9);
     await onA.agent.delete(`/api/foods/${other.id}`).set('X-CSRF-Token', onA.csrf).expect(200);
@@ -121,7 +146,13 @@ describe('two app processes on one database', () => {
     } finally {
       await admin.end();
     }
-    const food = (await onA.agent.post('/api/foods').set('X-CSRF-Token', onA.csrf).send({ ...FOOD, name: 'Brightfield after the cut' }).expect(201)).body;
+    const food = (
+      await onA.agent
+        .post('/api/foods')
+        .set('X-CSRF-Token', onA.csrf)
+        .send({ ...FOOD, name: 'Brightfield after the cut' })
+        .expect(201)
+    ).body;
     await expect.poll(async () => (await onB.agent.get(`/api/foods/${food.id}`)).status, { timeout: 20_000 }).toBe(200);
     expect(b.output.join('')).toMatch(/Food sync lost its database connection/);
   });

@@ -48,12 +48,18 @@ describe('reading label photos', () => {
     const misses: string[] = [];
     for (const [i, panel] of panels.entries()) {
       const photo = await photograph(panel, first + i);
-      const res = await cook.agent.post('/api/foods/label-scan').set('X-CSRF-Token', cook.csrf).attach('image', photo, `panel-${first + i + 1}.jpg`);
+      const res = await cook.agent
+        .post('/api/foods/label-scan')
+        .set('X-CSRF-Token', cook.csrf)
+        .attach('image', photo, `panel-${first + i + 1}.jpg`);
       expect(res.status, JSON.stringify(res.body).slice(0, 300)).toBe(200);
       expect(res.body.confidence).toBeGreaterThan(0);
       const wrong = Object.entries(panel.expected).filter(([k, v]) => res.body.fields[k] !== v);
       exact.push(wrong.length === 0);
-      if (wrong.length) misses.push(`${first + i + 1} ${panel.product}: ${wrong.map(([k, v]) => `${k} ${JSON.stringify(res.body.fields[k])}≠${JSON.stringify(v)}`).join(', ')}`);
+      if (wrong.length)
+        misses.push(
+          `${first + i + 1} ${panel.product}: ${wrong.map(([k, v]) => `${k} ${JSON.stringify(res.body.fields[k])}≠${JSON.stringify(v)}`).join(', ')}`,
+        );
     }
     return { exact: exact.filter(Boolean).length, misses };
   }
@@ -78,7 +84,11 @@ describe('reading label photos', () => {
     await page.close();
     const res = await cook.agent.post('/api/foods/label-scan').set('X-CSRF-Token', cook.csrf).attach('image', notLabel, 'card.png').expect(422);
     expect(res.body.error.message).toMatch(/No Nutrition Facts panel/);
-    const truncated = (await sharp({ create: { width: 800, height: 600, channels: 3, background: '#fff' } }).jpeg().toBuffer()).subarray(0, 300);
+    const truncated = (
+      await sharp({ create: { width: 800, height: 600, channels: 3, background: '#fff' } })
+        .jpeg()
+        .toBuffer()
+    ).subarray(0, 300);
     const broken = await cook.agent.post('/api/foods/label-scan').set('X-CSRF-Token', cook.csrf).attach('image', truncated, 'broken.jpg');
     expect([400, 422]).toContain(broken.status);
     expect(broken.body.error.message.length).toBeGreaterThan(10);

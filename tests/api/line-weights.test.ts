@@ -30,7 +30,8 @@ describe('the same weights in every view of a recipe', () => {
     expect(analysed.lines[0].grams).toBeCloseTo(4 * roll!.gmWgt, 6);
 
     const cook = await signUp(t.app);
-    const recipe = (await cook.agent.post('/api/recipes').set('X-CSRF-Token', cook.csrf).send({ title: 'Burger night', servings: 4, text: TEXT }).expect(201)).body;
+    const recipe = (await cook.agent.post('/api/recipes').set('X-CSRF-Token', cook.csrf).send({ title: 'Burger night', servings: 4, text: TEXT }).expect(201))
+      .body;
     const version = (await cook.agent.get(`/api/recipes/${recipe.id}/versions/1`).expect(200)).body;
     version.lines.forEach((line: { grams: number }, i: number) => expect(line.grams).toBeCloseTo(analysed.lines[i].grams, 9));
 

@@ -45,7 +45,10 @@ async function coachWithClient() {
   const coach = await signUp(t.app, 'coach');
   const client = await signUp(t.app, 'cook');
   await coach.agent.post('/api/clients/invitations').set('X-CSRF-Token', coach.csrf).send({ email: client.email }).expect(201);
-  const mail = t.outbox().filter((m) => m.to.includes(client.email)).at(-1)!;
+  const mail = t
+    .outbox()
+    .filter((m) => m.to.includes(client.email))
+    .at(-1)!;
   const token = /\/invitations\/([A-Za-z0-9_-]+)/.exec(mail.text)![1];
   await client.agent.post(`/api/invitations/${token}/accept`).set('X-CSRF-Token', client.csrf).expect(200);
   return { coach, client };
@@ -65,7 +68,10 @@ describe('adding a food from its label', () => {
     // 70 kcal is within the fiber-aware 4/4/9 range (66.5–122.5 kcal), so no warning
     expect(res.body.warnings).toEqual([]);
 
-    const analysis = await cook.agent.post('/api/analyze').send({ text: '2 Cloudmeadow carb-smart tortillas, warmed\n1 cup shredded mozzarella', servings: 2 }).expect(200);
+    const analysis = await cook.agent
+      .post('/api/analyze')
+      .send({ text: '2 Cloudmeadow carb-smart tortillas, warmed\n1 cup shredded mozzarella', servings: 2 })
+      .expect(200);
     expect(analysis.body.lines[0].food.id).toBe(res.body.id);
     expect(analysis.body.lines[0].grams).toBeCloseTo(90, 9);
     expect(analysis.body.lines[0].nutrients.kcal).toBeCloseTo(140, 9);
@@ -83,7 +89,15 @@ describe('adding a food from its label', () => {
 
   it('counts slices by the label ("17 slices" = 30 g) and takes energy from 4/4/9 when the label has none', async () => {
     const cook = await signUp(t.app, 'cook');
-    const res = await addFood(cook, { name: 'Ridgeline turkey pepperoni', servingSizeG: 30, servingLabel: '17 slices', proteinG: 9, fatG: 3, carbsG: 0, sodiumMg: 480 });
+    const res = await addFood(cook, {
+      name: 'Ridgeline turkey pepperoni',
+      servingSizeG: 30,
+      servingLabel: '17 slices',
+      proteinG: 9,
+      fatG: 3,
+      carbsG: 0,
+      sodiumMg: 480,
+    });
     // general Atwater factors 4/4/9 (USDA Handbook 74): 4·9 + 4·0 + 9·3 = 63 kcal per 30 g
     expect(res.body.per100g.kcal).toBeCloseTo((63 * 100) / 30, 9);
     expect(res.body.energyFromAtwater).toBe(true);
@@ -193,7 +207,11 @@ describe('who may do what with a food', () => {
     expect((await stranger.agent.get('/api/foods/mine').expect(200)).body.foods).toEqual([]);
 
     // owners change and delete their own
-    const renamed = await client.agent.patch(`/api/foods/${clientFood.id}`).set('X-CSRF-Token', client.csrf).send({ name: 'Client wrap, renamed', kcal: 80 }).expect(200);
+    const renamed = await client.agent
+      .patch(`/api/foods/${clientFood.id}`)
+      .set('X-CSRF-Token', client.csrf)
+      .send({ name: 'Client wrap, renamed', kcal: 80 })
+      .expect(200);
     expect(renamed.body).toMatchObject({ id: clientFood.id, name: 'Client wrap, renamed' });
     expect(renamed.body.per100g.kcal).toBeCloseTo((80 * 100) / 45, 9);
     const gone = await client.agent.delete(`/api/foods/${clientFood.id}`).set('X-CSRF-Token', client.csrf).expect(200);
@@ -258,16 +276,22 @@ describe('saved versions keep their numbers', () => {
     );
     await services.sequelize.query('UPDATE food_portions SET grams = 4.9e-324 WHERE food_id = $1', { bind: [food.id] });
     await services.sequelize.query(HIDE_IMPOSSIBLE_FOODS);
-    const [rows] = (await services.sequelize.query('SELECT hidden_reason FROM foods WHERE id = $1', { bind: [food.id] })) as [{ hidden_reason: string }[], unknown];
+    const [rows] = (await services.sequelize.query('SELECT hidden_reason FROM foods WHERE id = $1', { bind: [food.id] })) as [
+      { hidden_reason: string }[],
+      unknown,
+    ];
     expect(rows[0].hidden_reason).toBe('impossible values');
     // the test app's engine hears of it through NOTIFY and refuses the row
     await expect.poll(async () => (await cook.agent.get(`/api/foods/${food.id}`)).status, { timeout: 10_000 }).toBe(404);
     const version = await cook.agent.get(`/api/recipes/${recipe.id}/versions/1`).expect(200);
     expect(Number.isFinite(version.body.lines[0].nutrients.kcal)).toBe(true);
     await cook.agent.get(`/api/recipes/${recipe.id}/versions/1/prep`).query({ portions: 4 }).expect(200);
-    const rewrite = await cook.agent
-      .post('/api/rewrite')
-      .send({ lines: version.body.lines.map((l: { input: string }) => ({ input: l.input })), servings: 2, targets: { proteinMinG: 10, kcalMax: 2000 }, candidatesPerLine: 3 });
+    const rewrite = await cook.agent.post('/api/rewrite').send({
+      lines: version.body.lines.map((l: { input: string }) => ({ input: l.input })),
+      servings: 2,
+      targets: { proteinMinG: 10, kcalMax: 2000 },
+      candidatesPerLine: 3,
+    });
     // 200, or an honest 422/503 (a busy machine can time the solver out) — never the 500 of a crash
     expect(rewrite.status, JSON.stringify(rewrite.body).slice(0, 400)).not.toBe(500);
     expect(rewrite.body.error?.code ?? 'ok').not.toBe('internal');
@@ -275,10 +299,16 @@ describe('saved versions keep their numbers', () => {
 });
 
 describe('own foods as swaps', () => {
-  it('offers a cook\'s food for lines whose food plays one of its roles, and not for others', async () => {
+  it("offers a cook's food for lines whose food plays one of its roles, and not for others", async () => {
     const cook = await signUp(t.app, 'cook');
     const food = (await addFood(cook, { ...TORTILLA, name: 'Lakeshore fiber wrap' })).body;
-    const body = { text: '4 large flour tortillas\n8 oz cheddar cheese, shredded', servings: 4, targets: { proteinMinG: 5, kcalMax: 2000 }, objective: 'min-kcal', candidatesPerLine: 4 };
+    const body = {
+      text: '4 large flour tortillas\n8 oz cheddar cheese, shredded',
+      servings: 4,
+      targets: { proteinMinG: 5, kcalMax: 2000 },
+      objective: 'min-kcal',
+      candidatesPerLine: 4,
+    };
     const res = await cook.agent.post('/api/rewrite').send(body).expect(200);
     const toIds = res.body.changes.filter((c: { swapped: boolean }) => c.swapped).map((c: { line: number; to: { id: number } }) => [c.line, c.to.id]);
     expect(toIds).toContainEqual([0, food.id]);
@@ -292,7 +322,11 @@ describe('own foods as swaps', () => {
 describe('label photos', () => {
   it('answers 400 "This file is not a photo" for a file that is not an image, and 400 without a file', async () => {
     const cook = await signUp(t.app, 'cook');
-    const res = await cook.agent.post('/api/foods/label-scan').set('X-CSRF-Token', cook.csrf).attach('image', Buffer.from('%PDF-1.4 not a photo'), 'label.pdf').expect(400);
+    const res = await cook.agent
+      .post('/api/foods/label-scan')
+      .set('X-CSRF-Token', cook.csrf)
+      .attach('image', Buffer.from('%PDF-1.4 not a photo'), 'label.pdf')
+      .expect(400);
     expect(res.body.error.message).toMatch(/This file is not a photo/);
     await cook.agent.post('/api/foods/label-scan').set('X-CSRF-Token', cook.csrf).field('note', 'x').expect(400);
     await request(t.app).post('/api/foods/label-scan').attach('image', Buffer.from('x'), 'x.png').expect(403);
@@ -300,7 +334,9 @@ describe('label photos', () => {
 
   it('answers 422 with a clear message for a photo with no Nutrition Facts panel', async () => {
     const cook = await signUp(t.app, 'cook');
-    const sky = await sharp({ create: { width: 640, height: 480, channels: 3, background: { r: 120, g: 170, b: 230 } } }).jpeg().toBuffer();
+    const sky = await sharp({ create: { width: 640, height: 480, channels: 3, background: { r: 120, g: 170, b: 230 } } })
+      .jpeg()
+      .toBuffer();
     const res = await cook.agent.post('/api/foods/label-scan').set('X-CSRF-Token', cook.csrf).attach('image', sky, 'sky.jpg').expect(422);
     expect(res.body.error.code).toBe('no_label_found');
     expect(res.body.error.message).toMatch(/No Nutrition Facts panel/);

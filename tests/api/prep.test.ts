@@ -18,7 +18,9 @@ const TEXT = `1 lb lean ground turkey
 
 async function cookWithVersion(method = 'Roll, wrap each in foil and bake at 375 °F for 20 minutes.') {
   const cook = await signUp(t.app);
-  const recipe = (await cook.agent.post('/api/recipes').set('X-CSRF-Token', cook.csrf).send({ title: 'Turkey bean wraps', servings: 6, text: TEXT, method }).expect(201)).body;
+  const recipe = (
+    await cook.agent.post('/api/recipes').set('X-CSRF-Token', cook.csrf).send({ title: 'Turkey bean wraps', servings: 6, text: TEXT, method }).expect(201)
+  ).body;
   return { ...cook, recipe };
 }
 
@@ -84,7 +86,12 @@ describe('POST /api/shopping-lists', () => {
     const res = await agent
       .post('/api/shopping-lists')
       .set('X-CSRF-Token', csrf)
-      .send({ items: [{ recipeId: recipe.id, versionNumber: 1, portions: 6 }, { recipeId: recipe.id, versionNumber: 1, portions: 6 }] })
+      .send({
+        items: [
+          { recipeId: recipe.id, versionNumber: 1, portions: 6 },
+          { recipeId: recipe.id, versionNumber: 1, portions: 6 },
+        ],
+      })
       .expect(201);
     expect(res.body.items).toHaveLength(single.shopping.length);
     res.body.items.forEach((item: { grams: number }, i: number) => expect(Math.abs(item.grams - 2 * single.shopping[i].grams)).toBeLessThanOrEqual(1));
@@ -102,7 +109,9 @@ describe('shopping lines in the measure the recipe named', () => {
 
   it('scales cups, spoons and cans honestly and never switches a cup measure to pounds', async () => {
     const cook = await signUp(t.app);
-    const recipe = (await cook.agent.post('/api/recipes').set('X-CSRF-Token', cook.csrf).send({ title: 'Creamy tomato sauce', servings: 4, text: SAUCE }).expect(201)).body;
+    const recipe = (
+      await cook.agent.post('/api/recipes').set('X-CSRF-Token', cook.csrf).send({ title: 'Creamy tomato sauce', servings: 4, text: SAUCE }).expect(201)
+    ).body;
     const purchases = async (portions: number) => {
       const body = (await cook.agent.get(`/api/recipes/${recipe.id}/versions/1/prep`).query({ portions }).expect(200)).body;
       return body.shopping.map((s: { purchase: string }) => s.purchase) as string[];

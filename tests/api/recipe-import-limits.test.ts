@@ -22,7 +22,11 @@ describe('recipe import takes the same limits as a typed recipe', () => {
   it('refuses 100,000 ingredient lines with a 400 naming the lines, and stores nothing', async () => {
     const { agent, csrf } = await signUp(t.app);
     const lines = Array.from({ length: 100_000 }, (_, i) => `${(i % 9) + 1} egg`);
-    const res = await agent.post('/api/recipes/import').set('X-CSRF-Token', csrf).attach('file', jsonLd({ recipeIngredient: lines }), 'huge.jsonld').expect(400);
+    const res = await agent
+      .post('/api/recipes/import')
+      .set('X-CSRF-Token', csrf)
+      .attach('file', jsonLd({ recipeIngredient: lines }), 'huge.jsonld')
+      .expect(400);
     expect(res.body.error.message).toMatch(/^file: /);
     expect(res.body.error.details.fieldErrors.lines[0]).toContain(`at most ${MAX_LINES} lines`);
     expect(await countRecipes(agent)).toBe(0);

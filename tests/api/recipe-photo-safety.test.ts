@@ -28,11 +28,21 @@ describe('photo uploads and the recipe revision', () => {
     const { agent, csrf, recipe } = await cookWithRecipe();
     await agent.patch(`/api/recipes/${recipe.id}`).set('X-CSRF-Token', csrf).send({ revision: 1, title: 'Baked ziti, lighter' }).expect(200);
     const png = await noisyPng();
-    const stale = await agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).field('revision', '1').attach('file', png, 'ziti.png').expect(409);
+    const stale = await agent
+      .post(`/api/recipes/${recipe.id}/photo`)
+      .set('X-CSRF-Token', csrf)
+      .field('revision', '1')
+      .attach('file', png, 'ziti.png')
+      .expect(409);
     expect(stale.body.error.details.currentRevision).toBe(2);
     const now = await agent.get(`/api/recipes/${recipe.id}`).expect(200);
     expect(now.body).toMatchObject({ revision: 2, photoUrl: null });
-    const fresh = await agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).field('revision', '2').attach('file', png, 'ziti.png').expect(201);
+    const fresh = await agent
+      .post(`/api/recipes/${recipe.id}/photo`)
+      .set('X-CSRF-Token', csrf)
+      .field('revision', '2')
+      .attach('file', png, 'ziti.png')
+      .expect(201);
     expect(fresh.body.revision).toBe(3);
   });
 

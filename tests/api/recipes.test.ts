@@ -84,7 +84,11 @@ describe('recipes', () => {
     const other = await signUp(t.app);
     await other.agent.get(`/api/recipes/${recipe.id}`).expect(404);
     await other.agent.patch(`/api/recipes/${recipe.id}`).set('X-CSRF-Token', other.csrf).send({ revision: 1, title: 'x' }).expect(404);
-    await other.agent.post(`/api/recipes/${recipe.id}/versions`).set('X-CSRF-Token', other.csrf).send({ kind: 'edit', lines: [{ input: '1 egg' }] }).expect(404);
+    await other.agent
+      .post(`/api/recipes/${recipe.id}/versions`)
+      .set('X-CSRF-Token', other.csrf)
+      .send({ kind: 'edit', lines: [{ input: '1 egg' }] })
+      .expect(404);
     await request(t.app).get('/api/recipes').expect(401);
     await request(t.app).get(`/api/recipes/${recipe.id}/versions/1`).expect(401);
   });
@@ -95,7 +99,11 @@ describe('recipes', () => {
     expect(Object.keys(res.body.error.details.fieldErrors).sort()).toEqual(['servings', 'title']);
     const noRevision = await agent.patch(`/api/recipes/${recipe.id}`).set('X-CSRF-Token', csrf).send({ title: 'x' }).expect(400);
     expect(noRevision.body.error.message).toMatch(/revision/);
-    const badKind = await agent.post(`/api/recipes/${recipe.id}/versions`).set('X-CSRF-Token', csrf).send({ kind: 'draft', lines: [{ input: '1 egg' }] }).expect(400);
+    const badKind = await agent
+      .post(`/api/recipes/${recipe.id}/versions`)
+      .set('X-CSRF-Token', csrf)
+      .send({ kind: 'draft', lines: [{ input: '1 egg' }] })
+      .expect(400);
     expect(badKind.body.error.details.fieldErrors.kind).toBeDefined();
     await agent.get(`/api/recipes/${recipe.id}/versions/9`).expect(404);
   });
@@ -122,7 +130,14 @@ describe('export and import', () => {
     for (const k of keys) expect(doc).toHaveProperty(k);
     const nutrition = doc.nutrition as Exclude<NutritionInformation, string> & Record<string, unknown>;
     const nKeys: (keyof Exclude<NutritionInformation, string> & string)[] = [
-      'calories', 'proteinContent', 'fatContent', 'saturatedFatContent', 'carbohydrateContent', 'fiberContent', 'sugarContent', 'sodiumContent',
+      'calories',
+      'proteinContent',
+      'fatContent',
+      'saturatedFatContent',
+      'carbohydrateContent',
+      'fiberContent',
+      'sugarContent',
+      'sodiumContent',
     ];
     for (const k of nKeys) expect(nutrition).toHaveProperty(k);
     expect(nutrition['@type']).toBe('NutritionInformation');
@@ -162,10 +177,16 @@ describe('export and import', () => {
 
   it('refuses binary, recipe-less JSON and missing files with 400, and files over 1 MB with 413', async () => {
     const { agent, csrf } = await signUp(t.app);
-    const png = await sharp({ create: { width: 4, height: 4, channels: 3, background: '#c05a2b' } }).png().toBuffer();
+    const png = await sharp({ create: { width: 4, height: 4, channels: 3, background: '#c05a2b' } })
+      .png()
+      .toBuffer();
     const binary = await agent.post('/api/recipes/import').set('X-CSRF-Token', csrf).attach('file', png, 'recipe.txt').expect(400);
     expect(binary.body.error.message).toMatch(/binary/);
-    const noRecipe = await agent.post('/api/recipes/import').set('X-CSRF-Token', csrf).attach('file', Buffer.from('{"@type":"Person","name":"x"}'), 'r.json').expect(400);
+    const noRecipe = await agent
+      .post('/api/recipes/import')
+      .set('X-CSRF-Token', csrf)
+      .attach('file', Buffer.from('{"@type":"Person","name":"x"}'), 'r.json')
+      .expect(400);
     expect(noRecipe.body.error.message).toMatch(/schema\.org Recipe/);
     await agent.post('/api/recipes/import').set('X-CSRF-Token', csrf).field('other', 'x').expect(400);
     const big = Buffer.alloc(1024 * 1024 + 10, 'a');
@@ -182,11 +203,15 @@ describe('photos', () => {
       .toBuffer();
     const up = await agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).attach('file', jpeg, 'photo.png').expect(201);
     expect(up.body.photoUrl).toMatch(/\/photo/);
-    const got = await agent.get(`/api/recipes/${recipe.id}/photo`).buffer(true).parse((res, cb) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (c: Buffer) => chunks.push(c));
-      res.on('end', () => cb(null, Buffer.concat(chunks)));
-    }).expect(200);
+    const got = await agent
+      .get(`/api/recipes/${recipe.id}/photo`)
+      .buffer(true)
+      .parse((res, cb) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => cb(null, Buffer.concat(chunks)));
+      })
+      .expect(200);
     const meta = await sharp(got.body as Buffer).metadata();
     expect(meta.format).toBe('webp');
     expect(Math.max(meta.width!, meta.height!)).toBe(1600);
@@ -198,8 +223,16 @@ describe('photos', () => {
 
   it('refuses a non-image (400) and a photo over 5 MB (413)', async () => {
     const { agent, csrf, recipe } = await cookWithRecipe();
-    const res = await agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).attach('file', Buffer.from('not an image at all'), 'a.jpg').expect(400);
+    const res = await agent
+      .post(`/api/recipes/${recipe.id}/photo`)
+      .set('X-CSRF-Token', csrf)
+      .attach('file', Buffer.from('not an image at all'), 'a.jpg')
+      .expect(400);
     expect(res.body.error.message).toMatch(/JPEG, PNG or WebP/);
-    await agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).attach('file', Buffer.alloc(5 * 1024 * 1024 + 1), 'big.jpg').expect(413);
+    await agent
+      .post(`/api/recipes/${recipe.id}/photo`)
+      .set('X-CSRF-Token', csrf)
+      .attach('file', Buffer.alloc(5 * 1024 * 1024 + 1), 'big.jpg')
+      .expect(413);
   });
 });

@@ -12,17 +12,14 @@ afterAll(async () => {
 });
 
 describe('worked demo: the invented baked ziti', () => {
-  it('is rewritten by cook\'s swaps for +30 % protein and −20 % kcal per serving with ≤ 3 swaps, volume within 10 %', async () => {
+  it("is rewritten by cook's swaps for +30 % protein and −20 % kcal per serving with ≤ 3 swaps, volume within 10 %", async () => {
     const recipe = demo.recipes.find((r) => r.title === 'Weeknight baked ziti')!;
     const text = recipe.ingredients.join('\n');
     const before = (await request(t.app).post('/api/analyze').send({ text, servings: recipe.servings }).expect(200)).body;
     expect(before.lines.every((l: { food: unknown }) => l.food !== null)).toBe(true);
     // The product's default targets; +40 % / −25 % is out of reach of the substitution rules (a 422), by design.
     const targets = { proteinMinG: before.perServing.proteinG * 1.3, kcalMax: before.perServing.kcal * 0.8 };
-    const res = await request(t.app)
-      .post('/api/rewrite')
-      .send({ text, servings: recipe.servings, targets, maxSwaps: 3, volumeTolerancePct: 10 })
-      .expect(200);
+    const res = await request(t.app).post('/api/rewrite').send({ text, servings: recipe.servings, targets, maxSwaps: 3, volumeTolerancePct: 10 }).expect(200);
     const { after, changes } = res.body;
     expect(after.perServing.proteinG / before.perServing.proteinG).toBeGreaterThanOrEqual(1.3 - 1e-9);
     expect(after.perServing.kcal / before.perServing.kcal).toBeLessThanOrEqual(0.8 + 1e-9);

@@ -65,7 +65,10 @@ describe('POST /api/rewrite', () => {
     const before = await analyze(LASAGNA, 8);
     // With the beef and the mozzarella locked, the other lines' rules reach +10 % protein and −10 % kcal.
     const targets = { proteinMinG: before.perServing.proteinG * 1.1, kcalMax: before.perServing.kcal * 0.9 };
-    const res = await request(t.app).post('/api/rewrite').send({ text: LASAGNA, servings: 8, targets, lockedLines: [1, 2] }).expect(200);
+    const res = await request(t.app)
+      .post('/api/rewrite')
+      .send({ text: LASAGNA, servings: 8, targets, lockedLines: [1, 2] })
+      .expect(200);
     expect(res.body.changes.length).toBeGreaterThan(0);
     for (const i of [1, 2]) {
       const planned = res.body.after.lines.find((l: { index: number }) => l.index === i);
@@ -98,19 +101,34 @@ describe('POST /api/rewrite', () => {
       .send({ text: LASAGNA, servings: 8, targets: { proteinMinG: 20, kcalMax: 500 }, lockedLines: [40] })
       .expect(400);
     expect(badLock.body.error.message).toMatch(/lockedLines/);
-    const negative = await request(t.app).post('/api/rewrite').send({ text: LASAGNA, servings: 8, targets: { proteinMinG: -1, kcalMax: 500 } }).expect(400);
+    const negative = await request(t.app)
+      .post('/api/rewrite')
+      .send({ text: LASAGNA, servings: 8, targets: { proteinMinG: -1, kcalMax: 500 } })
+      .expect(400);
     expect(negative.body.error.message).toMatch(/targets\.proteinMinG/);
   });
 
   it('answers bad lineRoles or allowAllergens with 400 naming the field', async () => {
     const targets = { proteinMinG: 20, kcalMax: 500 };
-    const badRole = await request(t.app).post('/api/rewrite').send({ text: LASAGNA, servings: 8, targets, lineRoles: { 1: 'garnish-ish' } }).expect(400);
+    const badRole = await request(t.app)
+      .post('/api/rewrite')
+      .send({ text: LASAGNA, servings: 8, targets, lineRoles: { 1: 'garnish-ish' } })
+      .expect(400);
     expect(badRole.body.error.message).toMatch(/lineRoles/);
-    const badKey = await request(t.app).post('/api/rewrite').send({ text: LASAGNA, servings: 8, targets, lineRoles: { first: 'vegetable' } }).expect(400);
+    const badKey = await request(t.app)
+      .post('/api/rewrite')
+      .send({ text: LASAGNA, servings: 8, targets, lineRoles: { first: 'vegetable' } })
+      .expect(400);
     expect(badKey.body.error.message).toMatch(/lineRoles/);
-    const outOfRange = await request(t.app).post('/api/rewrite').send({ text: LASAGNA, servings: 8, targets, lineRoles: { 40: 'vegetable' } }).expect(400);
+    const outOfRange = await request(t.app)
+      .post('/api/rewrite')
+      .send({ text: LASAGNA, servings: 8, targets, lineRoles: { 40: 'vegetable' } })
+      .expect(400);
     expect(outOfRange.body.error.details.fieldErrors.lineRoles).toBeDefined();
-    const badAllergen = await request(t.app).post('/api/rewrite').send({ text: LASAGNA, servings: 8, targets, allowAllergens: ['gluten'] }).expect(400);
+    const badAllergen = await request(t.app)
+      .post('/api/rewrite')
+      .send({ text: LASAGNA, servings: 8, targets, allowAllergens: ['gluten'] })
+      .expect(400);
     expect(badAllergen.body.error.message).toMatch(/allowAllergens/);
   });
 
@@ -123,7 +141,10 @@ describe('POST /api/rewrite', () => {
     expect(roles.slice(8)).toEqual(['salt', 'aromatic']);
     const targets = { proteinMinG: before.perServing.proteinG * 1.1, kcalMax: before.perServing.kcal * 0.9 };
     for (const objective of ['closest', 'max-protein', 'min-kcal']) {
-      const res = await request(t.app).post('/api/rewrite').send({ text, servings: 8, targets, objective, lineRoles: { 4: 'sauce' } }).expect(200);
+      const res = await request(t.app)
+        .post('/api/rewrite')
+        .send({ text, servings: 8, targets, objective, lineRoles: { 4: 'sauce' } })
+        .expect(200);
       expect(res.body.dishType).toBe('assembled-bake');
       for (const i of [8, 9]) {
         const planned = res.body.after.lines.filter((l: { index: number }) => l.index === i);
@@ -135,7 +156,10 @@ describe('POST /api/rewrite', () => {
   });
 
   it('answers a recipe with nothing to rewrite with 422', async () => {
-    const res = await request(t.app).post('/api/rewrite').send({ text: 'salt to taste', servings: 1, targets: { proteinMinG: 10, kcalMax: 500 } }).expect(422);
+    const res = await request(t.app)
+      .post('/api/rewrite')
+      .send({ text: 'salt to taste', servings: 1, targets: { proteinMinG: 10, kcalMax: 500 } })
+      .expect(422);
     expect(res.body.error.code).toBe('nothing_to_rewrite');
   });
 });

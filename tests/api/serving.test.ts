@@ -22,7 +22,10 @@ beforeAll(async () => {
   dir = await mkdtemp(path.join(os.tmpdir(), 'hearthswap-client-'));
   await mkdir(path.join(dir, 'assets'));
   await mkdir(path.join(dir, '.vite'));
-  await writeFile(path.join(dir, 'index.html'), `<!doctype html><html><head><script type="module" crossorigin src="/${ENTRY}"></script></head><body><div id="root"></div></body></html>`);
+  await writeFile(
+    path.join(dir, 'index.html'),
+    `<!doctype html><html><head><script type="module" crossorigin src="/${ENTRY}"></script></head><body><div id="root"></div></body></html>`,
+  );
   for (const file of [ENTRY, PAGE, SHARED]) await writeFile(path.join(dir, file), BIG_SCRIPT);
   // the build's precompressed copy (vite-plugin-compression2); PAGE and SHARED have none
   await writeFile(path.join(dir, `${ENTRY}.br`), PRECOMPRESSED);

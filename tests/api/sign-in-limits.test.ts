@@ -10,10 +10,7 @@ const PASSWORD = 'correct horse battery';
 let t: TestApp;
 
 beforeAll(async () => {
-  t = await createTestApp(
-    { loginFailuresPer15Min: 5, loginFailuresPerAccountPerDay: 12, loginFailuresPerAddressPerHour: 20 },
-    { config: { trustProxy: 1 } },
-  );
+  t = await createTestApp({ loginFailuresPer15Min: 5, loginFailuresPerAccountPerDay: 12, loginFailuresPerAddressPerHour: 20 }, { config: { trustProxy: 1 } });
 });
 afterAll(() => t.close());
 
@@ -91,7 +88,11 @@ describe('sign-in limits', () => {
     try {
       const agent = request.agent(second.app);
       const csrf = (await agent.get('/api/auth/csrf').set('X-Forwarded-For', '203.0.113.200')).body.token as string;
-      const res = await agent.post('/api/auth/login').set('X-Forwarded-For', '203.0.113.200').set('X-CSRF-Token', csrf).send({ email: victim.email, password: PASSWORD });
+      const res = await agent
+        .post('/api/auth/login')
+        .set('X-Forwarded-For', '203.0.113.200')
+        .set('X-CSRF-Token', csrf)
+        .send({ email: victim.email, password: PASSWORD });
       expect(res.status).toBe(429);
     } finally {
       await second.close();

@@ -24,7 +24,11 @@ async function linkedCoachAndClient() {
   const coach = await signUp(t.app, 'coach');
   const client = await signUp(t.app, 'cook');
   await coach.agent.post('/api/clients/invitations').set('X-CSRF-Token', coach.csrf).send({ email: client.email }).expect(201);
-  const token = t.outbox().filter((m) => m.to.includes(client.email)).at(-1)!.text.match(/\/invitations\/([A-Za-z0-9_-]+)/)![1];
+  const token = t
+    .outbox()
+    .filter((m) => m.to.includes(client.email))
+    .at(-1)!
+    .text.match(/\/invitations\/([A-Za-z0-9_-]+)/)![1];
   await client.agent.post(`/api/invitations/${token}/accept`).set('X-CSRF-Token', client.csrf).expect(200);
   return { coach, client };
 }
@@ -32,24 +36,49 @@ async function linkedCoachAndClient() {
 describe('null bytes and lone surrogates are refused with a 400 naming the field', () => {
   it('in recipe lines, titles and the list search', async () => {
     const { agent, csrf } = await signUp(t.app);
-    expectNamed(await agent.post('/api/recipes').set('X-CSRF-Token', csrf).send({ title: 'Mac', servings: 2, lines: [{ input: '1 egg' }, { input: NUL }] }), 'lines.1.input');
+    expectNamed(
+      await agent
+        .post('/api/recipes')
+        .set('X-CSRF-Token', csrf)
+        .send({ title: 'Mac', servings: 2, lines: [{ input: '1 egg' }, { input: NUL }] }),
+      'lines.1.input',
+    );
     expectNamed(await agent.post('/api/recipes').set('X-CSRF-Token', csrf).send({ title: LONE, servings: 2, text: '1 egg' }), 'title');
     expectNamed(await agent.get('/api/recipes').query({ q: NUL }), 'q');
-    expectNamed(await request(t.app).post('/api/analyze').send({ servings: 1, text: `1 cup ${LONE}` }), 'text');
+    expectNamed(
+      await request(t.app)
+        .post('/api/analyze')
+        .send({ servings: 1, text: `1 cup ${LONE}` }),
+      'text',
+    );
     expect((await agent.get('/api/recipes').expect(200)).body.recipes).toHaveLength(0);
   });
 
   it('in comments, target notes and swap tags', async () => {
     const { coach, client } = await linkedCoachAndClient();
-    const recipe = (await client.agent.post('/api/recipes').set('X-CSRF-Token', client.csrf).send({ title: 'Chili', servings: 4, text: '1 lb ground beef' }).expect(201)).body;
-    expectNamed(await coach.agent.post(`/api/recipes/${recipe.id}/versions/1/comments`).set('X-CSRF-Token', coach.csrf).send({ body: `Nice ${LONE}` }), 'body');
+    const recipe = (
+      await client.agent.post('/api/recipes').set('X-CSRF-Token', client.csrf).send({ title: 'Chili', servings: 4, text: '1 lb ground beef' }).expect(201)
+    ).body;
     expectNamed(
-      await coach.agent.put(`/api/clients/${client.user.id}/targets`).set('X-CSRF-Token', coach.csrf).send({ perMeal: { kcal: 600, proteinG: 40 }, note: NUL }),
+      await coach.agent
+        .post(`/api/recipes/${recipe.id}/versions/1/comments`)
+        .set('X-CSRF-Token', coach.csrf)
+        .send({ body: `Nice ${LONE}` }),
+      'body',
+    );
+    expectNamed(
+      await coach.agent
+        .put(`/api/clients/${client.user.id}/targets`)
+        .set('X-CSRF-Token', coach.csrf)
+        .send({ perMeal: { kcal: 600, proteinG: 40 }, note: NUL }),
       'note',
     );
     const foods = (await request(t.app).get('/api/foods/search').query({ q: 'cheddar', limit: 2 }).expect(200)).body.results;
     expectNamed(
-      await coach.agent.post('/api/swaps').set('X-CSRF-Token', coach.csrf).send({ fromFoodId: foods[0].id, toFoodId: foods[1].id, tags: ['melt', NUL] }),
+      await coach.agent
+        .post('/api/swaps')
+        .set('X-CSRF-Token', coach.csrf)
+        .send({ fromFoodId: foods[0].id, toFoodId: foods[1].id, tags: ['melt', NUL] }),
       'tags.1',
     );
     expect((await coach.agent.get('/api/swaps').expect(200)).body.swaps).toHaveLength(0);

@@ -42,7 +42,12 @@ describe('two app processes on one database', () => {
   it('share sessions: signed up on one, the cookie works on the other, signed out everywhere', async () => {
     const jar = new CookieJar();
     const email = uniqueEmail('twoproc');
-    const created = await jar.json(`${a.url}/api/auth/register`, 'POST', { email, password: 'correct horse battery', displayName: 'Two Rooms', role: 'cook' }, await csrf(jar, a));
+    const created = await jar.json(
+      `${a.url}/api/auth/register`,
+      'POST',
+      { email, password: 'correct horse battery', displayName: 'Two Rooms', role: 'cook' },
+      await csrf(jar, a),
+    );
     expect(created.status).toBe(201);
     const me = await jar.json(`${b.url}/api/auth/me`);
     expect(me.status).toBe(200);
@@ -58,7 +63,16 @@ describe('two app processes on one database', () => {
   it('share rate-limit counters: failed sign-ins on both add up', async () => {
     const owner = new CookieJar();
     const email = uniqueEmail('twoproc-limit');
-    expect((await owner.json(`${a.url}/api/auth/register`, 'POST', { email, password: 'correct horse battery', displayName: 'Limit', role: 'cook' }, await csrf(owner, a))).status).toBe(201);
+    expect(
+      (
+        await owner.json(
+          `${a.url}/api/auth/register`,
+          'POST',
+          { email, password: 'correct horse battery', displayName: 'Limit', role: 'cook' },
+          await csrf(owner, a),
+        )
+      ).status,
+    ).toBe(201);
     const guesser = new CookieJar();
     // default limit: 10 failures per account and address in 15 minutes; 5 on each process
     for (let i = 0; i < 10; i++) {
@@ -75,7 +89,16 @@ describe('two app processes on one database', () => {
   it('share the development outbox: mail sent through one is read through the other', async () => {
     const jar = new CookieJar();
     const email = uniqueEmail('twoproc-mail');
-    expect((await jar.json(`${a.url}/api/auth/register`, 'POST', { email, password: 'correct horse battery', displayName: 'Mail', role: 'cook' }, await csrf(jar, a))).status).toBe(201);
+    expect(
+      (
+        await jar.json(
+          `${a.url}/api/auth/register`,
+          'POST',
+          { email, password: 'correct horse battery', displayName: 'Mail', role: 'cook' },
+          await csrf(jar, a),
+        )
+      ).status,
+    ).toBe(201);
     const anon = new CookieJar();
     expect((await anon.json(`${a.url}/api/auth/password-reset`, 'POST', { email }, await csrf(anon, a))).status).toBe(202);
     const admin = new CookieJar();

@@ -24,7 +24,12 @@ interface Visit {
   encodings: Set<string>;
 }
 
-async function firstVisit(browser: Browser, url: string, ready: (page: Page) => Promise<void>, prepare?: (context: BrowserContext) => Promise<void>): Promise<Visit> {
+async function firstVisit(
+  browser: Browser,
+  url: string,
+  ready: (page: Page) => Promise<void>,
+  prepare?: (context: BrowserContext) => Promise<void>,
+): Promise<Visit> {
   const context = await browser.newContext(PHONE);
   try {
     if (prepare) await prepare(context);
@@ -56,7 +61,10 @@ export async function runBrowserBench(baseUrl: string, rounds = 7) {
   const cook = DEMO_ACCOUNTS.find((a) => a.role === 'cook')!;
   const signIn = async (context: BrowserContext) => {
     const csrf = (await (await context.request.get(`${baseUrl}/api/auth/csrf`)).json()) as { token: string };
-    const res = await context.request.post(`${baseUrl}/api/auth/login`, { headers: { 'X-CSRF-Token': csrf.token }, data: { email: cook.email, password: cook.password } });
+    const res = await context.request.post(`${baseUrl}/api/auth/login`, {
+      headers: { 'X-CSRF-Token': csrf.token },
+      data: { email: cook.email, password: cook.password },
+    });
     if (!res.ok()) throw new Error(`demo sign-in failed: ${res.status()}`);
   };
   const pages: [string, string, (page: Page) => Promise<void>, ((c: BrowserContext) => Promise<void>)?][] = [

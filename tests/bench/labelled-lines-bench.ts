@@ -21,11 +21,16 @@ export async function runLabelledLinesBench(showFailures = process.argv.includes
   const labels = readHandLabelledLines();
   console.log('labelled lines (acceptable food AND grams within 15 %; goal ≥ 92 % held-out)');
   for (const half of ['tune', 'held-out'] as const) {
-    const s = scoreHalf(labels.filter((l) => l.half === half), answer);
+    const s = scoreHalf(
+      labels.filter((l) => l.half === half),
+      answer,
+    );
     console.log(`  ${half.padEnd(8)} ${s.lines} lines: both ${pct(s.both, s.lines)}, food ${pct(s.food, s.lines)}, grams ${pct(s.grams, s.lines)}`);
     if (showFailures && half === 'tune') {
       for (const f of s.failures) {
-        console.log(`    #${f.label.row} ${f.label.input}\n      got ${f.answer.food?.sourceId ?? '-'} ${f.answer.food?.name ?? ''} ${f.answer.grams.toFixed(1)} g${f.answer.checkMatch ? ' (check)' : ''}; want ${f.label.foods.slice(0, 4).join('/') || 'none'} ${f.label.grams ?? '-'} g${f.food ? '' : ' FOOD'}${f.grams ? '' : ' GRAMS'}`);
+        console.log(
+          `    #${f.label.row} ${f.label.input}\n      got ${f.answer.food?.sourceId ?? '-'} ${f.answer.food?.name ?? ''} ${f.answer.grams.toFixed(1)} g${f.answer.checkMatch ? ' (check)' : ''}; want ${f.label.foods.slice(0, 4).join('/') || 'none'} ${f.label.grams ?? '-'} g${f.food ? '' : ' FOOD'}${f.grams ? '' : ' GRAMS'}`,
+        );
       }
     }
   }

@@ -9,7 +9,6 @@ import { DEMO_ACCOUNTS } from '../../server/seeders/demo-accounts';
 import { percentile, RECIPE_20 } from './server-bench';
 import { rssMb } from './bench-server';
 
-
 const REWRITE_TEXT = `12 oz elbow macaroni
 2 cups shredded sharp cheddar
 2 1/2 cups whole milk
@@ -23,7 +22,10 @@ const REWRITE_TEXT = `12 oz elbow macaroni
 export async function signInCookie(baseUrl: string): Promise<string> {
   const cook = DEMO_ACCOUNTS.find((a) => a.role === 'cook')!;
   const first = await fetch(`${baseUrl}/api/auth/csrf`);
-  const anonymous = first.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+  const anonymous = first.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
   const { token } = (await first.json()) as { token: string };
   const res = await fetch(`${baseUrl}/api/auth/login`, {
     method: 'POST',
@@ -31,7 +33,10 @@ export async function signInCookie(baseUrl: string): Promise<string> {
     body: JSON.stringify({ email: cook.email, password: cook.password }),
   });
   if (res.status !== 200) throw new Error(`demo sign-in failed: ${res.status}`);
-  return res.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+  return res.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
 }
 
 type Request = { method: 'GET' | 'POST'; path: string; body?: string; headers?: Record<string, string> };
@@ -56,7 +61,10 @@ export function scenarios(cookie: string): LoadScenario[] {
     { name: 'analyze (anonymous, 20 lines)', requests: [analyze] },
     { name: 'signed-in recipe list', requests: [list] },
     // each connection walks this list in turn: 1 rewrite, 3 analyses and 6 list reads in 10 requests
-    { name: 'mix: list 60%, analyze 30%, rewrite 10%', requests: [list, signedInAnalyze, list, rewrite, list, signedInAnalyze, list, list, signedInAnalyze, list] },
+    {
+      name: 'mix: list 60%, analyze 30%, rewrite 10%',
+      requests: [list, signedInAnalyze, list, rewrite, list, signedInAnalyze, list, list, signedInAnalyze, list],
+    },
   ];
 }
 
@@ -79,7 +87,9 @@ export async function runLoad(baseUrl: string, pid: number, scenario: LoadScenar
     peak = Math.max(peak, rssMb(pid));
   }, 200);
   const result = await new Promise<autocannon.Result>((resolve, reject) => {
-    const instance = autocannon({ url: baseUrl, connections, duration: seconds, requests: scenario.requests, timeout: 10 }, (error, r) => (error ? reject(error) : resolve(r)));
+    const instance = autocannon({ url: baseUrl, connections, duration: seconds, requests: scenario.requests, timeout: 10 }, (error, r) =>
+      error ? reject(error) : resolve(r),
+    );
     instance.on('response', (_client, _status, _bytes, responseTime) => latencies.push(responseTime));
   });
   clearInterval(sampler);
@@ -105,5 +115,7 @@ export function printLoad(f: LoadFigures) {
 }
 
 export function machineLoad() {
-  return `load average ${loadavg().map((l) => l.toFixed(1)).join(' ')} on this machine`;
+  return `load average ${loadavg()
+    .map((l) => l.toFixed(1))
+    .join(' ')} on this machine`;
 }

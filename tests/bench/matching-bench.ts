@@ -94,7 +94,9 @@ export async function runMatchingBench(): Promise<void> {
 
   console.log('matching bench');
   console.log(`  catalogue: ${foods.length} foods loaded in ${ms(loadMs)}; matcher built in ${ms(buildMs)}`);
-  console.log(`  search: ${times.length} queries, p50 ${ms(percentile(times, 0.5))}, p95 ${ms(percentile(times, 0.95))}, max ${ms(times[times.length - 1] ?? 0)} (target p95 ≤ 5 ms)`);
+  console.log(
+    `  search: ${times.length} queries, p50 ${ms(percentile(times, 0.5))}, p95 ${ms(percentile(times, 0.95))}, max ${ms(times[times.length - 1] ?? 0)} (target p95 ≤ 5 ms)`,
+  );
   const rate = (p: { ms: number }) => Math.round((lines.length / p.ms) * 1000);
   console.log(
     `  parse+match+weigh: ${lines.length} lines, first pass ${ms(first.ms)} = ${rate(first)} lines/s, second pass ${ms(second.ms)} = ${rate(second)} lines/s (target ≥ 5,000); ${first.matched} matched, ${Math.round(first.grams)} g in all`,

@@ -76,7 +76,9 @@ export async function runRewriteBench(): Promise<void> {
   const highs = await loadHighs();
   let withinBudget = true;
   for (const shape of SHAPES) {
-    console.log(`\nrewrite solver bench, ${shape.name}: ${RECIPES_PER_SIZE} recipes × ${OBJECTIVES.length} objectives per size, rules ${JSON.stringify(RULES)}`);
+    console.log(
+      `\nrewrite solver bench, ${shape.name}: ${RECIPES_PER_SIZE} recipes × ${OBJECTIVES.length} objectives per size, rules ${JSON.stringify(RULES)}`,
+    );
     console.log('lines  kept/line  jsLPSolver p50   p95    max  |  HiGHS p50   p95  |  p95 ratio  budget');
     for (const size of SIZES) {
       const js: number[] = [];
@@ -129,7 +131,9 @@ export async function runRewriteBench(): Promise<void> {
         if (r.status !== 'infeasible') throw new Error('expected targets out of reach');
       }
       ms.sort((a, b) => a - b);
-      console.log(`${String(size).padStart(5)} lines: p50 ${percentile(ms, 0.5).toFixed(1)}  p95 ${percentile(ms, 0.95).toFixed(1)}  (${(solves / ms.length).toFixed(1)} solves each)`);
+      console.log(
+        `${String(size).padStart(5)} lines: p50 ${percentile(ms, 0.5).toFixed(1)}  p95 ${percentile(ms, 0.95).toFixed(1)}  (${(solves / ms.length).toFixed(1)} solves each)`,
+      );
     }
   }
   console.log(withinBudget ? '\nall p95 budgets met' : '\nSOME p95 BUDGETS MISSED');

@@ -50,7 +50,9 @@ async function time(fn: () => Promise<unknown> | unknown) {
 
 async function burst(app: Express) {
   const rewrites = Array.from({ length: 8 }, () =>
-    request(app).post('/api/rewrite').send({ text: RECIPE_20, servings: 8, targets: { proteinMinG: 45, kcalMax: 520 }, objective: 'closest' }),
+    request(app)
+      .post('/api/rewrite')
+      .send({ text: RECIPE_20, servings: 8, targets: { proteinMinG: 45, kcalMax: 520 }, objective: 'closest' }),
   );
   const during: { health: number[]; login: number[]; analyze: number[] } = { health: [], login: [], analyze: [] };
   const probes = (async () => {
@@ -59,7 +61,9 @@ async function burst(app: Express) {
       during.analyze.push(await time(() => request(app).post('/api/analyze').send({ text: RECIPE_20, servings: 8 })));
       const agent = request.agent(app);
       const csrf = (await agent.get('/api/auth/csrf')).body.token;
-      during.login.push(await time(() => agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'cook@hearthswap.test', password: 'hearthswap-demo-cook' })));
+      during.login.push(
+        await time(() => agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'cook@hearthswap.test', password: 'hearthswap-demo-cook' })),
+      );
     }
   })();
   const t0 = performance.now();
@@ -80,7 +84,9 @@ export async function runServerBench(databaseUrl: string) {
   const engine = await getFoodEngine(services.sequelize);
   console.log(`catalogue load + index build at start-up: ${engine.builtMs.toFixed(0)} ms`);
   global.gc?.();
-  console.log(`resident memory of this bench process (tsx, with the seeder loaded) after catalogue and indexes: ${(process.memoryUsage().rss / 1024 / 1024).toFixed(0)} MB; the serving process is measured below`);
+  console.log(
+    `resident memory of this bench process (tsx, with the seeder loaded) after catalogue and indexes: ${(process.memoryUsage().rss / 1024 / 1024).toFixed(0)} MB; the serving process is measured below`,
+  );
 
   const lines = textToLines(RECIPE_20);
   for (let i = 0; i < 20; i++) analyzeLines(engine, lines, 8);
@@ -93,7 +99,18 @@ export async function runServerBench(databaseUrl: string) {
   for (let i = 0; i < 50; i++) http.push(await time(() => request(app).post('/api/analyze').send({ text: RECIPE_20, servings: 8 })));
   console.log(`POST /api/analyze, 20 lines, through HTTP: ${fmt(http)}`);
 
-  const queries = ['mozzarella', 'lean ground beef', 'greek yogurt nonfat', 'whole wheat tortilla', 'chicken breast', 'cottage cheese', 'panko', 'olive oil', 'broccoli', 'turkey pepperoni'];
+  const queries = [
+    'mozzarella',
+    'lean ground beef',
+    'greek yogurt nonfat',
+    'whole wheat tortilla',
+    'chicken breast',
+    'cottage cheese',
+    'panko',
+    'olive oil',
+    'broccoli',
+    'turkey pepperoni',
+  ];
   const search: number[] = [];
   for (let r = 0; r < 20; r++) for (const q of queries) search.push(await time(() => engine.matcher.search(q, 10)));
   console.log(`food search (matcher.search): ${fmt(search)} (target p95 ≤ 5 ms)`);

@@ -16,7 +16,12 @@ describe('a coach and a client in the browser', () => {
   it('coach invites, client accepts, coach publishes a swap, the client’s rewrite uses it', async () => {
     // A coach of our own, so the demo coach's seeded swaps stay out of this test.
     const coach = await live.browser.newPage({ viewport: { width: 1280, height: 900 } });
-    const registered = await apiAs(coach, 'post', '/api/auth/register', { email: uniqueEmail('e2e-coach'), password: 'a sturdy coaching password', displayName: 'Coach Rowan Tilly', role: 'coach' });
+    const registered = await apiAs(coach, 'post', '/api/auth/register', {
+      email: uniqueEmail('e2e-coach'),
+      password: 'a sturdy coaching password',
+      displayName: 'Coach Rowan Tilly',
+      role: 'coach',
+    });
     expect(registered.role).toBe('coach');
     const clientEmail = uniqueEmail('e2e-client');
 
@@ -26,13 +31,20 @@ describe('a coach and a client in the browser', () => {
     await expect.poll(() => live.server.outbox().some((m) => m.to.includes(clientEmail)), { timeout: 10_000 }).toBe(true);
     await expect.poll(() => coach.getByText(clientEmail).first().isVisible(), { timeout: 10_000 }).toBe(true);
     await screenshot(coach, 'coach-invited');
-    const link = live.server.outbox().find((m) => m.to.includes(clientEmail))!.text.match(/https?:\/\/\S+\/invitations\/[A-Za-z0-9_-]+/)![0];
+    const link = live.server
+      .outbox()
+      .find((m) => m.to.includes(clientEmail))!
+      .text.match(/https?:\/\/\S+\/invitations\/[A-Za-z0-9_-]+/)![0];
     const token = link.split('/invitations/')[1];
 
     // The client signs up from the link and accepts.
     const client = await live.browser.newPage({ viewport: { width: 1280, height: 900 } });
     await client.goto(`${live.server.url}/invitations/${token}`);
-    await client.locator('main').getByRole('link', { name: /create|sign up/i }).first().click();
+    await client
+      .locator('main')
+      .getByRole('link', { name: /create|sign up/i })
+      .first()
+      .click();
     await client.getByRole('textbox', { name: 'Display name' }).fill('Idris Fennel');
     await client.getByRole('textbox', { name: 'E-mail' }).fill(clientEmail);
     await client.getByLabel('Password', { exact: true }).fill('a sturdy kitchen password');
@@ -58,7 +70,9 @@ describe('a coach and a client in the browser', () => {
     const text = '2 cups shredded mozzarella\n8 oz dry pasta\n1 cup marinara sauce';
     const before = await apiAs(client, 'post', '/api/analyze', { text, servings: 4 });
     const me = await apiAs(client, 'get', '/api/auth/me');
-    await apiAs(coach, 'put', `/api/clients/${me.id}/targets`, { perMeal: { kcal: Math.floor(before.perServing.kcal * 0.9), proteinG: Math.ceil(before.perServing.proteinG) } });
+    await apiAs(coach, 'put', `/api/clients/${me.id}/targets`, {
+      perMeal: { kcal: Math.floor(before.perServing.kcal * 0.9), proteinG: Math.ceil(before.perServing.proteinG) },
+    });
 
     await client.goto(`${live.server.url}/coach`);
     await expect.poll(() => client.getByText(note).first().isVisible(), { timeout: 10_000 }).toBe(true);

@@ -60,7 +60,11 @@ describe('paths that were broken', () => {
     await expect.poll(() => page.getByText(email).isVisible(), { timeout: 15_000 }).toBe(true);
     expect(await page.getByText('No accounts listed').count()).toBe(0);
     await page.getByLabel('Role of Tamsin Oakley').last().selectOption('coach');
-    await expect.poll(async () => (await apiAs<{ users: { id: number; role: string }[] }>(page, 'get', '/api/admin/users')).users.find((u) => u.id === user.id)?.role, { timeout: 10_000 }).toBe('coach');
+    await expect
+      .poll(async () => (await apiAs<{ users: { id: number; role: string }[] }>(page, 'get', '/api/admin/users')).users.find((u) => u.id === user.id)?.role, {
+        timeout: 10_000,
+      })
+      .toBe('coach');
     await screenshot(page, 'paths-admin-people');
     await page.close();
   });
@@ -133,7 +137,10 @@ describe('paths that were broken', () => {
     await expect.poll(() => page.getByRole('button', { name: 'Undo' }).isVisible(), { timeout: 5_000 }).toBe(true);
     await page.getByRole('button', { name: 'Undo' }).click();
     await expect.poll(() => page.getByText('4 lines.').isVisible(), { timeout: 10_000 }).toBe(true);
-    await page.getByRole('button', { name: /Remove line 4/ }).first().click();
+    await page
+      .getByRole('button', { name: /Remove line 4/ })
+      .first()
+      .click();
     await expect.poll(() => page.getByText('3 lines.').isVisible(), { timeout: 10_000 }).toBe(true);
     await screenshot(page, 'paths-kitchen-editing-saved');
 
@@ -159,11 +166,19 @@ describe('paths that were broken', () => {
 
   it('the coach’s client view judges targets on the figures it shows', async () => {
     const coach = await live.browser.newPage({ viewport: { width: 1280, height: 900 } });
-    await apiAs(coach, 'post', '/api/auth/register', { email: uniqueEmail('e2e-paths-coach'), password: 'a sturdy coaching password', displayName: 'Coach Ivo Brand', role: 'coach' });
+    await apiAs(coach, 'post', '/api/auth/register', {
+      email: uniqueEmail('e2e-paths-coach'),
+      password: 'a sturdy coaching password',
+      displayName: 'Coach Ivo Brand',
+      role: 'coach',
+    });
     const { page: client, email } = await newCook(live.browser);
     await apiAs(coach, 'post', '/api/clients/invitations', { email });
     await expect.poll(() => live.server.outbox().some((m) => m.to.includes(email)), { timeout: 10_000 }).toBe(true);
-    const token = live.server.outbox().find((m) => m.to.includes(email))!.text.match(/\/invitations\/([A-Za-z0-9_-]+)/)![1];
+    const token = live.server
+      .outbox()
+      .find((m) => m.to.includes(email))!
+      .text.match(/\/invitations\/([A-Za-z0-9_-]+)/)![1];
     await apiAs(client, 'post', `/api/invitations/${token}/accept`);
 
     // Servings chosen so protein per serving shows rounded up (x.5–x.95 g): the target is the shown figure.

@@ -26,7 +26,8 @@ function culprits(page: Page): Promise<string[]> {
     const out: string[] = [];
     for (const el of Array.from(document.querySelectorAll('body *'))) {
       const r = el.getBoundingClientRect();
-      if (r.right > window.innerWidth + 1 && r.width > 0) out.push(`${el.tagName.toLowerCase()}.${(el.className || '').toString().slice(0, 60)} → ${Math.round(r.right)}px`);
+      if (r.right > window.innerWidth + 1 && r.width > 0)
+        out.push(`${el.tagName.toLowerCase()}.${(el.className || '').toString().slice(0, 60)} → ${Math.round(r.right)}px`);
       if (out.length >= 5) break;
     }
     return out;
@@ -92,7 +93,16 @@ describe('every page at 1280 px, 390 px and 360 px', () => {
     await page.getByRole('link', { name: /Edit in the Kitchen/ }).click();
     await expect.poll(() => page.getByText('Energy per serving').first().isVisible(), { timeout: 20_000 }).toBe(true);
     await page.getByRole('button', { name: 'Rewrite', exact: true }).click();
-    await expect.poll(() => page.getByText(/What changes, and why|Ways to make it reachable/).first().isVisible(), { timeout: 30_000 }).toBe(true);
+    await expect
+      .poll(
+        () =>
+          page
+            .getByText(/What changes, and why|Ways to make it reachable/)
+            .first()
+            .isVisible(),
+        { timeout: 30_000 },
+      )
+      .toBe(true);
     await walk(page, 'kitchen-rewritten', null, /What changes, and why|Ways to make it reachable/);
     await context.close();
   }, 300_000);

@@ -13,15 +13,37 @@ describe('batch prep in the browser', () => {
     await page.getByRole('link', { name: 'Weeknight baked ziti' }).first().click();
     await page.getByRole('link', { name: /Batch prep/ }).click();
     await expect.poll(() => page.url()).toMatch(/\/versions\/\d+\/prep/);
-    await expect.poll(() => page.getByText(/Check every package label/i).first().isVisible(), { timeout: 15_000 }).toBe(true);
+    await expect
+      .poll(
+        () =>
+          page
+            .getByText(/Check every package label/i)
+            .first()
+            .isVisible(),
+        { timeout: 15_000 },
+      )
+      .toBe(true);
     // The seeded ziti is baked under foil: USDA FSIS reheating and the foil caution are shown.
-    expect(await page.getByText(/165 °F/).first().isVisible()).toBe(true);
-    expect(await page.getByText(/metal foil in a microwave/i).first().isVisible()).toBe(true);
+    expect(
+      await page
+        .getByText(/165 °F/)
+        .first()
+        .isVisible(),
+    ).toBe(true);
+    expect(
+      await page
+        .getByText(/metal foil in a microwave/i)
+        .first()
+        .isVisible(),
+    ).toBe(true);
 
     const portions = page.getByRole('spinbutton').first();
     const firstBatchCell = async () => (await page.locator('table').first().locator('tbody tr').first().innerText()).replace(/\s+/g, ' ');
     const before = await firstBatchCell();
-    await page.getByRole('button', { name: /increase|more|\+/i }).first().click();
+    await page
+      .getByRole('button', { name: /increase|more|\+/i })
+      .first()
+      .click();
     await expect.poll(() => page.url()).toMatch(/portions=7/);
     await expect.poll(async () => (await firstBatchCell()) !== before, { timeout: 10_000 }).toBe(true);
     expect(await portions.inputValue()).toBe('7');

@@ -33,12 +33,22 @@ describe('paste, rewrite, save, compare', () => {
     await page.getByRole('button', { name: /analyse/i }).click();
     await expect.poll(() => page.getByText('Energy per serving').first().isVisible(), { timeout: 15_000 }).toBe(true);
     // The food's catalogue details are one click away; reference numbers are not in the cook's way.
-    expect(await page.getByRole('link', { name: /About this food/ }).first().isVisible()).toBe(true);
+    expect(
+      await page
+        .getByRole('link', { name: /About this food/ })
+        .first()
+        .isVisible(),
+    ).toBe(true);
     expect(await page.getByText(/NDB \d{5}/).count()).toBe(0);
 
     await page.getByRole('button', { name: 'Rewrite', exact: true }).click();
     await expect.poll(() => page.getByText('What changes, and why').isVisible(), { timeout: 20_000 }).toBe(true);
-    expect(await page.getByText(/target at least .* met/i).first().isVisible()).toBe(true);
+    expect(
+      await page
+        .getByText(/target at least .* met/i)
+        .first()
+        .isVisible(),
+    ).toBe(true);
     await screenshot(page, 'rewrite-result');
 
     await page.getByRole('textbox', { name: 'Recipe title' }).fill('Lighter lasagna');
@@ -48,9 +58,21 @@ describe('paste, rewrite, save, compare', () => {
     await page.goto(`${live.server.url}/recipes`);
     await expect.poll(() => page.getByRole('link', { name: 'Lighter lasagna' }).first().isVisible(), { timeout: 10_000 }).toBe(true);
     await page.getByRole('link', { name: 'Lighter lasagna' }).first().click();
-    await page.getByRole('link', { name: /Compare/ }).first().click();
+    await page
+      .getByRole('link', { name: /Compare/ })
+      .first()
+      .click();
     await expect.poll(() => page.url()).toMatch(/compare\?a=\d&b=\d/);
-    await expect.poll(() => page.getByText(/Swapped/).first().isVisible(), { timeout: 10_000 }).toBe(true);
+    await expect
+      .poll(
+        () =>
+          page
+            .getByText(/Swapped/)
+            .first()
+            .isVisible(),
+        { timeout: 10_000 },
+      )
+      .toBe(true);
     await screenshot(page, 'compare-versions');
     await page.close();
   });

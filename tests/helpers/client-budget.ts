@@ -60,7 +60,9 @@ export function firstVisitBudgets(clientDir = path.resolve('dist/client')): Page
   };
   return [...new Set(ROUTE_MODULES.map(([, module]) => module))].map((module) => {
     const files = [...staticClosure(manifest, `src/app/routes/${module}.tsx`, staticClosure(manifest, entry))];
-    const total = files.map(size).reduce((acc, s) => ({ raw: acc.raw + s.raw, gzip: acc.gzip + s.gzip, brotli: acc.brotli + s.brotli }), { raw: 0, gzip: 0, brotli: 0 });
+    const total = files
+      .map(size)
+      .reduce((acc, s) => ({ raw: acc.raw + s.raw, gzip: acc.gzip + s.gzip, brotli: acc.brotli + s.brotli }), { raw: 0, gzip: 0, brotli: 0 });
     return { module, files, rawBytes: total.raw, gzipBytes: total.gzip, brotliBytes: total.brotli };
   });
 }

@@ -98,7 +98,8 @@ export function randomRecipe(rng: Rng, shape: RandomRecipeShape): RewriteLine[] 
     const per100g = syntheticNutrients(rng, kind);
     const original: Candidate = { foodId: nextFoodId++, name: `food ${i} as written`, densityGPerMl: density, per100g, original: true };
     const candidates: Candidate[] = [original];
-    const count = typeof shape.candidates === 'number' ? shape.candidates : shape.candidates[0] + Math.floor(rng() * (shape.candidates[1] - shape.candidates[0] + 1));
+    const count =
+      typeof shape.candidates === 'number' ? shape.candidates : shape.candidates[0] + Math.floor(rng() * (shape.candidates[1] - shape.candidates[0] + 1));
     for (let k = 0; k < count; k++) {
       // Substitutes of like density are common (lean for fatty meat); they also give pruning work.
       const c: Candidate = {
@@ -148,9 +149,7 @@ export function randomRecipe(rng: Rng, shape: RandomRecipeShape): RewriteLine[] 
 }
 
 export function perServingAsWritten(lines: RewriteLine[], servings: number): Nutrients {
-  const totals = sumNutrients(
-    lines.map((l) => nutrientsForGrams(l.candidates.find((c) => c.original)!.per100g, Math.max(0, l.grams))),
-  );
+  const totals = sumNutrients(lines.map((l) => nutrientsForGrams(l.candidates.find((c) => c.original)!.per100g, Math.max(0, l.grams))));
   return divideNutrients(totals, servings);
 }
 
@@ -169,7 +168,10 @@ export interface RandomProblem {
  */
 export function plantedTargets(rng: Rng, lines: RewriteLine[], servings: number, swaps: number): Targets {
   const free = lines.filter((l) => !l.locked && !l.heldReason && l.grams > 0 && l.candidates.length > 1);
-  const order = free.map((l) => ({ l, k: rng() })).sort((a, b) => a.k - b.k).slice(0, swaps);
+  const order = free
+    .map((l) => ({ l, k: rng() }))
+    .sort((a, b) => a.k - b.k)
+    .slice(0, swaps);
   const planned = new Map<RewriteLine, Candidate>();
   for (const { l } of order) {
     const score = (c: Candidate) => (c.per100g.proteinG * 4 - c.per100g.kcal * 0.5) * c.densityGPerMl;
@@ -228,7 +230,7 @@ export function randomProblem(seed: number, shape?: Partial<RandomRecipeShape>):
 
 // HiGHS, the outside solver these problems are checked against.
 
-type Highs = Awaited<ReturnType<typeof import('highs')['default']>>;
+type Highs = Awaited<ReturnType<(typeof import('highs'))['default']>>;
 let loading: Promise<Highs> | null = null;
 
 /** HiGHS (npm `highs`, WebAssembly), loaded once per test file. Test-only: never used by the product. */

@@ -52,10 +52,7 @@ const groundChicken = swap(`${NOT_COOKED}Chicken, ground`);
 const leanerMince = [leanGroundBeef, groundTurkey, groundChicken];
 const lighterMilk = swap('^Milk, (reduced fat|lowfat|nonfat), fluid', [0.8, 1.25]);
 const evaporatedSkim = swap('^Milk, canned, evaporated, nonfat', [0.6, 1.25]);
-const lighterCream = [
-  swap('^Cream, (fluid, half and half|half and half, (lowfat|fat free)|fluid, light \\(coffee)', [0.8, 1.25]),
-  evaporatedSkim,
-];
+const lighterCream = [swap('^Cream, (fluid, half and half|half and half, (lowfat|fat free)|fluid, light \\(coffee)', [0.8, 1.25]), evaporatedSkim];
 const plainYogurt = swap('^Yogurt, (Greek, plain, (nonfat|lowfat)|plain, (low fat|skim milk))', [0.7, 1.3]);
 const lighterSourCream = swap('^(Sour cream, (reduced fat|light|fat free)|Cream, sour, reduced fat)', [0.75, 1.3]);
 const reducedFatCheddar = swap('^(Cheese, cheddar, reduced fat|Cheese, low fat, cheddar|USDA commodity, cheese, cheddar, reduced fat)');
@@ -68,13 +65,13 @@ const wholeGrainPasta = swap('^Pasta, (whole-wheat|whole grain).*dry');
 const proteinPasta = swap('^(Spaghetti|Macaroni), protein-fortified, dry');
 const betterPasta = [wholeGrainPasta, proteinPasta];
 const halfWholeWheatFlour = swap('^Wheat flour, whole-grain', [0.85, 1.15], 0.5);
-const eggWhites = (maxShare = 1) => [
-  swap('^Egg, white, raw', [1.0, 1.75], maxShare),
-  swap('^Egg substitute, liquid', [0.9, 1.75], maxShare),
-];
+const eggWhites = (maxShare = 1) => [swap('^Egg, white, raw', [1.0, 1.75], maxShare), swap('^Egg substitute, liquid', [0.9, 1.75], maxShare)];
 const halfAsApplesauce = swap('^Applesauce, canned, unsweetened', [0.5, 1.3], 0.5);
 const halfAsYogurt = { ...plainYogurt, maxShare: 0.5 };
-const chickenBreastCooked = swap('^(Chicken, broilers or fryers, breast, meat only, cooked, (roasted|stewed)|Turkey, .*breast, meat only, cooked, roasted)', [0.8, 1.25]);
+const chickenBreastCooked = swap(
+  '^(Chicken, broilers or fryers, breast, meat only, cooked, (roasted|stewed)|Turkey, .*breast, meat only, cooked, roasted)',
+  [0.8, 1.25],
+);
 const chickenBreastRaw = swap('^Chicken, broilers or fryers, breast, (skinless, boneless, )?meat only.*raw', [0.8, 1.25]);
 const turkeySausage = swap(`${NOT_COOKED}(Turkey sausage|Sausage,? .*turkey)`);
 const leanPorkSausage = swap(`${NOT_COOKED}Pork sausage, link/patty, reduced fat`);
@@ -459,7 +456,10 @@ export const COMFORT_PANEL: PanelRecipe[] = [
     servings: 4,
     half: 'held-out',
     lines: [
-      { text: '3 cups cooked white rice', swaps: [swap('^Rice, brown, .*cooked', [0.8, 1.25]), swap('^Cauliflower, (raw|frozen, unprepared)', [0.7, 1.3], 0.5)] },
+      {
+        text: '3 cups cooked white rice',
+        swaps: [swap('^Rice, brown, .*cooked', [0.8, 1.25]), swap('^Cauliflower, (raw|frozen, unprepared)', [0.7, 1.3], 0.5)],
+      },
       { text: '2 tablespoons vegetable oil', keep: 'frying fat', scale: LESS(0.4) },
       { text: '2 large eggs', keep: 'part of the dish', swaps: eggWhites() },
       { text: '1 lb boneless skinless chicken thighs, diced', swaps: [chickenBreastRaw] },

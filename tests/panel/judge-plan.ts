@@ -70,7 +70,12 @@ export function judgePlan(recipe: PanelRecipe, before: JudgedPlanLine[], after: 
       continue;
     }
     if (others.length > 1) {
-      verdicts.push({ ...base, kind: 'swapped', ok: false, detail: `split between ${others.length} substitutes: ${others.map((o) => o.food.name).join('; ')}` });
+      verdicts.push({
+        ...base,
+        kind: 'swapped',
+        ok: false,
+        detail: `split between ${others.length} substitutes: ${others.map((o) => o.food.name).join('; ')}`,
+      });
       continue;
     }
     const sub = others[0];
@@ -81,7 +86,10 @@ export function judgePlan(recipe: PanelRecipe, before: JudgedPlanLine[], after: 
     const kind = original ? 'partial' : 'swapped';
     const fits = matchingSwap(label, sub.food.name);
     const ok = replaced > 0 && fits.some((s) => within(ratio, s.ratio, 0.005) && share <= (s.maxShare ?? 1) + 0.01);
-    const why = fits.length === 0 ? 'not a substitute a cook accepts here' : `accepted ×${fits.map((s) => `${s.ratio[0]}–${s.ratio[1]} up to ${Math.round((s.maxShare ?? 1) * 100)} %`).join(' or ')}`;
+    const why =
+      fits.length === 0
+        ? 'not a substitute a cook accepts here'
+        : `accepted ×${fits.map((s) => `${s.ratio[0]}–${s.ratio[1]} up to ${Math.round((s.maxShare ?? 1) * 100)} %`).join(' or ')}`;
     verdicts.push({
       ...base,
       kind,

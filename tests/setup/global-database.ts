@@ -13,7 +13,12 @@ export default async function setup(project: TestProject) {
   let stop = () => {};
   let url = process.env.HEARTHSWAP_TEST_DATABASE_URL;
   if (!url) {
-    const server = await startPrivatePostgres({ dataDir: '.data/postgres-test', port: Number(process.env.PG_TEST_PORT ?? 54330), database: 'postgres', durable: false });
+    const server = await startPrivatePostgres({
+      dataDir: '.data/postgres-test',
+      port: Number(process.env.PG_TEST_PORT ?? 54330),
+      database: 'postgres',
+      durable: false,
+    });
     stop = server.stop;
     url = server.url.replace(/\/postgres$/, '/hearthswap_test');
     await recreateDatabase(server.url, 'hearthswap_test');

@@ -37,7 +37,13 @@ const SR28_CASES: Case[] = [
   { ndb: '15261', name: 'Fish, tilapia, raw', group: '15', roles: ['fish-seafood'], expected: ['fish'] },
   { ndb: '06971', name: 'Sauce, worcestershire', group: '06', roles: ['condiment'], expected: ['fish'] }, // anchovies (*common practice*)
   // crustacean shellfish — FALCPA
-  { ndb: '15149', name: 'Crustaceans, shrimp, mixed species, raw (may have been previously frozen)', group: '15', roles: ['fish-seafood'], expected: ['shellfish'] },
+  {
+    ndb: '15149',
+    name: 'Crustaceans, shrimp, mixed species, raw (may have been previously frozen)',
+    group: '15',
+    roles: ['fish-seafood'],
+    expected: ['shellfish'],
+  },
   { ndb: '15139', name: 'Crustaceans, crab, blue, raw', group: '15', roles: ['fish-seafood'], expected: ['shellfish'] },
   { ndb: '15147', name: 'Crustaceans, lobster, northern, raw', group: '15', roles: ['fish-seafood'], expected: ['shellfish'] },
   { ndb: '15145', name: 'Crustaceans, crayfish, mixed species, wild, raw', group: '15', roles: ['fish-seafood'], expected: ['shellfish'] },
@@ -88,7 +94,13 @@ const SR28_CASES: Case[] = [
   { ndb: '04044', name: 'Oil, soybean, salad or cooking', group: '04', roles: ['cooking-fat'], expected: [] },
   // sesame — FASTER Act 2021
   { ndb: '12023', name: 'Seeds, sesame seeds, whole, dried', group: '12', roles: ['nut-seed'], expected: ['sesame'] },
-  { ndb: '12166', name: 'Seeds, sesame butter, tahini, from roasted and toasted kernels (most common type)', group: '12', roles: ['nut-seed'], expected: ['sesame'] },
+  {
+    ndb: '12166',
+    name: 'Seeds, sesame butter, tahini, from roasted and toasted kernels (most common type)',
+    group: '12',
+    roles: ['nut-seed'],
+    expected: ['sesame'],
+  },
   { ndb: '04058', name: 'Oil, sesame, salad or cooking', group: '04', roles: ['cooking-fat'], expected: ['sesame'] },
   { ndb: '16137', name: 'Hummus, home prepared', group: '16', roles: ['legume'], expected: ['sesame'] }, // tahini (*common practice*)
   // mixed foods
@@ -226,7 +238,9 @@ describe('allergensOfRecipe', () => {
   });
 
   it('is empty for a dish of none of the nine, and for no foods', () => {
-    expect(allergensOfRecipe([food('Oil, olive, salad or cooking', '04'), food('Garlic, raw', '11'), food('Mollusks, clam, mixed species, raw', '15')])).toEqual([]);
+    expect(
+      allergensOfRecipe([food('Oil, olive, salad or cooking', '04'), food('Garlic, raw', '11'), food('Mollusks, clam, mixed species, raw', '15')]),
+    ).toEqual([]);
     expect(allergensOfRecipe([])).toEqual([]);
   });
 

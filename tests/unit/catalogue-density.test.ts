@@ -80,7 +80,9 @@ describe('density', () => {
     ratios.sort((a, b) => a - b);
     const within = ratios.filter((r) => r >= 0.5 && r <= 2).length / ratios.length;
     const median = ratios[Math.floor(ratios.length / 2)];
-    console.log(`role-default density vs SR28 WEIGHT volume portion: ${ratios.length} foods, median ratio ${median.toFixed(2)}, within a factor of 2: ${(within * 100).toFixed(1)} %`);
+    console.log(
+      `role-default density vs SR28 WEIGHT volume portion: ${ratios.length} foods, median ratio ${median.toFixed(2)}, within a factor of 2: ${(within * 100).toFixed(1)} %`,
+    );
     expect(ratios.length).toBeGreaterThan(40);
     expect(median).toBeGreaterThan(0.75);
     expect(median).toBeLessThan(1.33);

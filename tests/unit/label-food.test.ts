@@ -15,7 +15,11 @@ describe('a label panel per 100 g', () => {
   it('turns the household measure into a portion: "17 slices" = 30 g, "1/4 cup" gives a density (NIST cup 236.5882365 mL)', () => {
     expect(readServingLabel('17 slices')).toEqual({ amount: 17, measure: 'slices' });
     expect(readServingLabel('about a handful')).toBeNull();
-    expect(panelPortions({ ...tortilla, servingLabel: '17 slices', servingSizeG: 30 }, 30).portions[0]).toMatchObject({ amount: 17, measure: 'slices', grams: 30 });
+    expect(panelPortions({ ...tortilla, servingLabel: '17 slices', servingSizeG: 30 }, 30).portions[0]).toMatchObject({
+      amount: 17,
+      measure: 'slices',
+      grams: 30,
+    });
     const cup = panelPortions({ servingSizeG: 28, servingLabel: '1/4 cup', proteinG: 1, fatG: 1, carbsG: 1 }, 28);
     expect(cup.densityGPerMl).toBeCloseTo(28 / (236.5882365 / 4), 9);
   });

@@ -4,15 +4,7 @@
  * exactly halfway … round up", is from memory). Paragraph numbers of 101.9(c) are from memory.
  */
 import { describe, expect, it } from 'vitest';
-import {
-  roundCalories,
-  roundFatGrams,
-  roundGramNutrient,
-  roundHalfUp,
-  roundLabel,
-  roundServingGrams,
-  roundSodiumMg,
-} from '../../shared/label-rounding';
+import { roundCalories, roundFatGrams, roundGramNutrient, roundHalfUp, roundLabel, roundServingGrams, roundSodiumMg } from '../../shared/label-rounding';
 import type { Nutrients } from '../../shared/nutrition';
 
 describe('calories — 21 CFR 101.9(c)(1): < 5 → 0; ≤ 50 → nearest 5; > 50 → nearest 10', () => {

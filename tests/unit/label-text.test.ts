@@ -19,14 +19,39 @@ Dietary Fiber 14g 50%
 Total Sugars Less than 1g
 Includes 0g Added Sugars 0%
 Protein 6g`);
-    expect(r.fields).toEqual({ servingSizeG: 45, servingSizeMl: null, servingLabel: '1 tortilla', kcal: 70, fatG: 2.5, satFatG: 0, carbsG: 19, fiberG: 14, sugarG: 0.5, proteinG: 6, sodiumMg: 450 });
+    expect(r.fields).toEqual({
+      servingSizeG: 45,
+      servingSizeMl: null,
+      servingLabel: '1 tortilla',
+      kcal: 70,
+      fatG: 2.5,
+      satFatG: 0,
+      carbsG: 19,
+      fiberG: 14,
+      sugarG: 0.5,
+      proteinG: 6,
+      sodiumMg: 450,
+    });
     expect(r.found).toHaveLength(10);
     expect(r.notes.join(' ')).toMatch(/less than 1 g.*0\.5 g/);
   });
 
   it('reads "Sodium 450mg", "<1g", thousands and a one-line panel', () => {
-    const r = readLabelText('Nutrition Facts Serving size 17 slices (30g) Calories 70 Total Fat 3g (4% DV), Sat. Fat 1g (5% DV), Trans Fat 0g, Sodium 1,200mg (52% DV), Total Carb. 0g (0% DV), Fiber <1g, Total Sugars 0g (Incl. 0g Added Sugars, 0% DV), Protein 9g');
-    expect(r.fields).toMatchObject({ servingSizeG: 30, servingLabel: '17 slices', kcal: 70, fatG: 3, satFatG: 1, sodiumMg: 1200, carbsG: 0, fiberG: 0.5, sugarG: 0, proteinG: 9 });
+    const r = readLabelText(
+      'Nutrition Facts Serving size 17 slices (30g) Calories 70 Total Fat 3g (4% DV), Sat. Fat 1g (5% DV), Trans Fat 0g, Sodium 1,200mg (52% DV), Total Carb. 0g (0% DV), Fiber <1g, Total Sugars 0g (Incl. 0g Added Sugars, 0% DV), Protein 9g',
+    );
+    expect(r.fields).toMatchObject({
+      servingSizeG: 30,
+      servingLabel: '17 slices',
+      kcal: 70,
+      fatG: 3,
+      satFatG: 1,
+      sodiumMg: 1200,
+      carbsG: 0,
+      fiberG: 0.5,
+      sugarG: 0,
+      proteinG: 9,
+    });
   });
 
   it('reads "Serving size 1 tortilla (45g)", "2/3 cup (55g)", "45g (1 tortilla)" and millilitres', () => {

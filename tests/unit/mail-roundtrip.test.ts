@@ -50,7 +50,7 @@ describe('mail round trip through the fake SMTP server', () => {
     expect(stored!.html).toBeDefined();
     expect(stored!.html).toContain('Juno &lt;b&gt;Fennick&lt;/b&gt; &amp; Crew');
     expect(stored!.html).not.toContain('<b>Fennick');
-    expect(stored!.html).toContain(`href="${LINK.replace(/&/g, "&amp;")}"`);
+    expect(stored!.html).toContain(`href="${LINK.replace(/&/g, '&amp;')}"`);
     expect(Number.isNaN(Date.parse(stored!.receivedAt))).toBe(false);
   });
 
@@ -109,8 +109,8 @@ describe('fake SMTP server lifecycle', () => {
 
 describe('createMailer', () => {
   it('refuses to send credentials without TLS', () => {
-    expect(() =>
-      createMailer({ smtpHost: '127.0.0.1', smtpPort: 2525, from: 'a@hearthswap.test', ignoreTLS: true, auth: { user: 'u', pass: 'p' } }),
-    ).toThrow(/TLS/);
+    expect(() => createMailer({ smtpHost: '127.0.0.1', smtpPort: 2525, from: 'a@hearthswap.test', ignoreTLS: true, auth: { user: 'u', pass: 'p' } })).toThrow(
+      /TLS/,
+    );
   });
 });

@@ -288,7 +288,15 @@ describe('garbage and edge input', () => {
     expect(empty.match('eggs')).toMatchObject({ food: null, via: 'none' });
     expect(empty.search('eggs', 5)).toEqual([]);
     expect(empty.skippedAliases.length).toBe(Object.keys(DEFAULT_ALIASES.aliases).length);
-    const custom: CatalogueFood = { ...foods[0], id: 9001, source: 'custom', sourceId: 'c-1', name: 'Hearthswap protein pancake mix', foodGroup: '', branded: false };
+    const custom: CatalogueFood = {
+      ...foods[0],
+      id: 9001,
+      source: 'custom',
+      sourceId: 'c-1',
+      name: 'Hearthswap protein pancake mix',
+      foodGroup: '',
+      branded: false,
+    };
     const own = createFoodMatcher([custom]);
     expect(own.match('protein pancake mix').food?.id).toBe(9001);
   });
@@ -299,7 +307,10 @@ describe('brand-named and restaurant foods', () => {
     for (const phrase of ["applebee's mozzarella sticks", "mcdonald's big mac", 'hot pockets', 'cheerios', 'pizza hut pepperoni pizza']) {
       const m = matcher.match(phrase);
       expect(m.food?.branded ?? false, phrase).toBe(false);
-      expect(m.alternatives.filter((f) => f.branded), phrase).toEqual([]);
+      expect(
+        m.alternatives.filter((f) => f.branded),
+        phrase,
+      ).toEqual([]);
     }
   });
 
@@ -308,7 +319,10 @@ describe('brand-named and restaurant foods', () => {
     expect(named[0]?.food.branded).toBe(true);
     expect(named[0]?.food.name.toLowerCase()).toContain('applebee');
     for (const q of ['mozzarella sticks', 'pepperoni pizza', 'cheese', 'chicken nuggets']) {
-      expect(matcher.search(q, 20).filter((h) => h.food.branded), q).toEqual([]);
+      expect(
+        matcher.search(q, 20).filter((h) => h.food.branded),
+        q,
+      ).toEqual([]);
     }
   });
 });
@@ -328,5 +342,4 @@ describe('search', () => {
     expect(hits[0].food.sourceId).toBe('11124');
     if (baby >= 0) expect(baby).toBeGreaterThan(0);
   });
-
 });

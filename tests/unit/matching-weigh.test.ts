@@ -32,12 +32,7 @@ function line(p: Partial<ParsedLine>): ParsedLine {
 
 const portion = (amount: number, measure: string, grams: number): Portion => ({ label: `${amount} ${measure}`, amount, measure, grams });
 
-const CHEESE_PORTIONS = [
-  portion(1, 'cup, shredded', 112),
-  portion(1, 'cup, diced', 132),
-  portion(1, 'oz', 28.35),
-  portion(1, 'slice (1 oz)', 28),
-];
+const CHEESE_PORTIONS = [portion(1, 'cup, shredded', 112), portion(1, 'cup, diced', 132), portion(1, 'oz', 28.35), portion(1, 'slice (1 oz)', 28)];
 
 function food(p: Partial<CatalogueFood> = {}): CatalogueFood {
   return {
@@ -116,7 +111,13 @@ describe('volume units', () => {
 });
 
 describe('counts and household pieces', () => {
-  const egg = [portion(1, 'large', 50), portion(1, 'extra large', 56), portion(1, 'medium', 44), portion(1, 'small', 38), portion(1, 'cup (4.86 large eggs)', 243)];
+  const egg = [
+    portion(1, 'large', 50),
+    portion(1, 'extra large', 56),
+    portion(1, 'medium', 44),
+    portion(1, 'small', 38),
+    portion(1, 'cup (4.86 large eggs)', 243),
+  ];
 
   it('use the size the line names', () => {
     expect(weighLine(line({ quantity: 2, unit: 'small' }), food(), egg).grams).toBe(76);
@@ -142,7 +143,12 @@ describe('counts and household pieces', () => {
   });
 
   it('pick a tortilla by its diameter', () => {
-    const tortillas = [portion(1, 'tortilla', 48), portion(1, 'tortilla medium (approx 6" dia)', 30), portion(1, 'tortilla (approx 10" dia)', 72), portion(1, 'tortilla (approx 7-8" dia)', 49)];
+    const tortillas = [
+      portion(1, 'tortilla', 48),
+      portion(1, 'tortilla medium (approx 6" dia)', 30),
+      portion(1, 'tortilla (approx 10" dia)', 72),
+      portion(1, 'tortilla (approx 7-8" dia)', 49),
+    ];
     expect(weighLine(line({ quantity: 2, sizeText: '8-inch', name: 'flour tortillas' }), food(), tortillas).grams).toBe(98);
     expect(weighLine(line({ quantity: 1, sizeText: '10-inch', name: 'flour tortilla' }), food(), tortillas).grams).toBe(72);
     expect(weighLine(line({ quantity: 1, name: 'flour tortilla' }), food(), tortillas).grams).toBe(48);

@@ -154,7 +154,9 @@ describe('parseLine accuracy on labelled lines (tastecooking-2024.csv, ingredien
 
   it('measures what it measured: quantity ≥ 99.8 %, unit ≥ 99.8 %, name token overlap ≥ 98 % on each half', () => {
     if (process.env.PARSE_MISSES) console.log(tuning.misses.join('\n'));
-    console.log(`parse-line accuracy, single-quantity single-unit lines\n  ${describeScore('tuning half', tuning)}\n  ${describeScore('held-out half', heldOut)}`);
+    console.log(
+      `parse-line accuracy, single-quantity single-unit lines\n  ${describeScore('tuning half', tuning)}\n  ${describeScore('held-out half', heldOut)}`,
+    );
     for (const r of [tuning, heldOut]) {
       expect(r.quantity).toBeGreaterThanOrEqual(99.8);
       expect(r.unit).toBeGreaterThanOrEqual(99.8);

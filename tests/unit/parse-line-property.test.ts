@@ -36,13 +36,34 @@ const quantityText = fc.oneof(
   fc.tuple(fc.nat({ max: 20 }), fc.nat({ max: 20 })).map(([a, b]) => `${a}/${b}`),
   fc.tuple(fc.nat({ max: 20 }), fc.nat({ max: 20 })).map(([a, b]) => `${a}-${b}`),
 );
-const unitText = fc.oneof(
-  fc.constantFrom(...UNITS.flatMap((u) => [...u.spellings, ...(u.caseSensitive ?? [])])),
-  fc.constant(''),
-);
+const unitText = fc.oneof(fc.constantFrom(...UNITS.flatMap((u) => [...u.spellings, ...(u.caseSensitive ?? [])])), fc.constant(''));
 const wordText = fc.constantFrom(
-  'flour', 'shredded', 'mozzarella', 'cheese,', 'finely', 'chopped', '(15 oz)', '(8-inch)', 'to taste', 'plus',
-  'or', '(optional)', '(', ')', ',', 'of', '—', '🧀', '\u0000', '\u0007', '\u200b', '\u00ad', '\ud83d', '\n', '\t', 'x2',
+  'flour',
+  'shredded',
+  'mozzarella',
+  'cheese,',
+  'finely',
+  'chopped',
+  '(15 oz)',
+  '(8-inch)',
+  'to taste',
+  'plus',
+  'or',
+  '(optional)',
+  '(',
+  ')',
+  ',',
+  'of',
+  '—',
+  '🧀',
+  '\u0000',
+  '\u0007',
+  '\u200b',
+  '\u00ad',
+  '\ud83d',
+  '\n',
+  '\t',
+  'x2',
 );
 const recipeLike = fc
   .tuple(quantityText, unitText, fc.array(fc.oneof(wordText, fc.string({ maxLength: 8 })), { maxLength: 8 }))
@@ -92,7 +113,20 @@ describe('parseLine properties (fast-check)', () => {
   });
 
   it('non-string input is read as text (or as nothing) without a fallback', () => {
-    const odd: unknown[] = [undefined, null, 42, NaN, {}, [], Symbol('x'), { toString: () => { throw new Error('no'); } }];
+    const odd: unknown[] = [
+      undefined,
+      null,
+      42,
+      NaN,
+      {},
+      [],
+      Symbol('x'),
+      {
+        toString: () => {
+          throw new Error('no');
+        },
+      },
+    ];
     for (const value of odd) {
       const line = parseLine(value);
       expect(line.quantity === null || Number.isFinite(line.quantity)).toBe(true);

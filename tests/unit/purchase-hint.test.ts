@@ -56,7 +56,17 @@ describe('counted foods: whole items, rounded up', () => {
     expect(purchaseHint(100, onion, 'us', 'Onions, raw')).toBe('1 large onion');
     expect(purchaseHint(250, tomato, 'us', 'Tomatoes, red, ripe, raw, year round average')).toBe('2 large tomatoes'); // 182 g each
     expect(purchaseHint(250, banana, 'us', 'Bananas, raw')).toBe('2 large bananas'); // 136 g each, not "extra large"
-    expect(purchaseHint(150, [{ label: '1 medium', amount: 1, measure: 'medium', grams: 44 }, { label: '1 small', amount: 1, measure: 'small', grams: 38 }], 'us', 'Egg')).toBe('4 medium eggs');
+    expect(
+      purchaseHint(
+        150,
+        [
+          { label: '1 medium', amount: 1, measure: 'medium', grams: 44 },
+          { label: '1 small', amount: 1, measure: 'small', grams: 38 },
+        ],
+        'us',
+        'Egg',
+      ),
+    ).toBe('4 medium eggs');
   });
 
   it('counts pieces that name themselves: cloves, tortillas, sticks', () => {

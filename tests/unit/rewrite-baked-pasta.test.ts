@@ -8,10 +8,28 @@ import { objectiveAgrees, perServingAsWritten, relativeGap, solveWithHighs } fro
 // An invented baked-pasta recipe for six with lighter candidates for its lines. Values per 100 g
 // and densities are approximate, from memory, close to USDA SR28 entries; the pulse pastas are
 // label-style values, also from memory. Not catalogue data.
-type Food = [name: string, densityGPerMl: number, kcal: number, proteinG: number, fatG: number, satFatG: number, carbsG: number, fiberG: number, sugarG: number, sodiumMg: number];
+type Food = [
+  name: string,
+  densityGPerMl: number,
+  kcal: number,
+  proteinG: number,
+  fatG: number,
+  satFatG: number,
+  carbsG: number,
+  fiberG: number,
+  sugarG: number,
+  sodiumMg: number,
+];
 
 const n = ([, , kcal, proteinG, fatG, satFatG, carbsG, fiberG, sugarG, sodiumMg]: Food): Nutrients => ({
-  kcal, proteinG, fatG, satFatG, carbsG, fiberG, sugarG, sodiumMg,
+  kcal,
+  proteinG,
+  fatG,
+  satFatG,
+  carbsG,
+  fiberG,
+  sugarG,
+  sodiumMg,
 });
 
 let nextId = 1;
@@ -50,7 +68,11 @@ function bakedPasta(): RewriteLine[] {
       ],
       {
         'whole-wheat penne, dry': { massRatio: 1, rule: rule('pasta-to-whole-wheat', 'whole-wheat penne for penne, 1:1 by weight') },
-        'chickpea penne, dry': { massRatio: 1, partial: true, rule: rule('pasta-to-pulse', 'chickpea penne for penne, 1:1 by weight', 'boil it 2 minutes less; it softens fast') },
+        'chickpea penne, dry': {
+          massRatio: 1,
+          partial: true,
+          rule: rule('pasta-to-pulse', 'chickpea penne for penne, 1:1 by weight', 'boil it 2 minutes less; it softens fast'),
+        },
         'red lentil penne, dry': { massRatio: 1, partial: true, rule: rule('pasta-to-pulse-lentil', 'red lentil penne for penne, 1:1 by weight') },
       },
     ),
@@ -74,11 +96,14 @@ function bakedPasta(): RewriteLine[] {
         ['mozzarella, whole milk, shredded', 0.47, 299, 22.2, 22.4, 13.2, 2.2, 0, 1.0, 627],
         ['mozzarella, part-skim, shredded', 0.47, 254, 24.3, 15.9, 10.1, 2.8, 0, 1.1, 619],
       ],
-      { 'mozzarella, part-skim, shredded': { massRatio: 1, rule: rule('mozzarella-part-skim', 'part-skim mozzarella for whole-milk, 1:1 by weight', 'bake 5 minutes longer so it melts') } },
+      {
+        'mozzarella, part-skim, shredded': {
+          massRatio: 1,
+          rule: rule('mozzarella-part-skim', 'part-skim mozzarella for whole-milk, 1:1 by weight', 'bake 5 minutes longer so it melts'),
+        },
+      },
     ),
-    line(3, 680, [
-      ['marinara sauce', 1.06, 51, 1.4, 1.5, 0.2, 8.1, 1.8, 5.4, 437],
-    ]),
+    line(3, 680, [['marinara sauce', 1.06, 51, 1.4, 1.5, 0.2, 8.1, 1.8, 5.4, 437]]),
     line(
       4,
       425,
@@ -105,7 +130,16 @@ function bakedPasta(): RewriteLine[] {
       { 'egg white, raw': { massRatio: 66 / 50, rule: EGG_TO_WHITES } },
     ),
     // Offered a substitute, but held: the model must keep it as written.
-    line(9, 6, [['salt, table', 1.2, 0, 0, 0, 0, 0, 0, 0, 38758], ['salt substitute', 1.2, 0, 0, 0, 0, 0, 0, 0, 0]], {}, { heldReason: 'salt: kept as written' }),
+    line(
+      9,
+      6,
+      [
+        ['salt, table', 1.2, 0, 0, 0, 0, 0, 0, 0, 38758],
+        ['salt substitute', 1.2, 0, 0, 0, 0, 0, 0, 0, 0],
+      ],
+      {},
+      { heldReason: 'salt: kept as written' },
+    ),
   ];
 }
 
@@ -205,7 +239,9 @@ describe('baked pasta rewrite', () => {
       expect(parts.map((p) => p.food.name)).toEqual([change.from.name, change.to.name]);
       expect(parts[0].grams).toBeCloseTo(change.keptGrams!, 9);
       expect(parts[1].grams).toBeCloseTo(change.gramsAfter, 9);
-      expect(change.reason).toMatch(new RegExp(`^Replace (half|a third|a quarter|two thirds|three quarters) of the ${change.from.name.replace(/[()/,]/g, '.')} with \\d+ g `));
+      expect(change.reason).toMatch(
+        new RegExp(`^Replace (half|a third|a quarter|two thirds|three quarters) of the ${change.from.name.replace(/[()/,]/g, '.')} with \\d+ g `),
+      );
       expect(change.reason).toContain(`g of the ${change.gramsBefore.toFixed(0)} g kept) — ${change.rule!.label}`);
     }
   });
@@ -250,7 +286,10 @@ describe('baked pasta rewrite', () => {
       expect(result.solver.model).toBe(modelText(elastic));
       const highs = await solveWithHighs(result.solver.model!);
       expect(highs.feasible).toBe(true);
-      expect(objectiveAgrees(highs.objective, result.solver.objectiveValue, result.solver.model!), `${objective}: ${highs.objective} vs ${result.solver.objectiveValue}`).toBe(true);
+      expect(
+        objectiveAgrees(highs.objective, result.solver.objectiveValue, result.solver.model!),
+        `${objective}: ${highs.objective} vs ${result.solver.objectiveValue}`,
+      ).toBe(true);
     }
   });
 

@@ -9,8 +9,7 @@ import type { Candidate, OptimalRewrite, Plan, RewriteLine, RewriteResult, Targe
 import { randomProblem, type RandomProblem } from '../helpers/random-rewrite-problems';
 
 const TOL = 1e-6;
-const within = (value: number, lo: number, hi: number) =>
-  value >= lo - TOL * Math.max(1, Math.abs(lo)) && value <= hi + TOL * Math.max(1, Math.abs(hi));
+const within = (value: number, lo: number, hi: number) => value >= lo - TOL * Math.max(1, Math.abs(lo)) && value <= hi + TOL * Math.max(1, Math.abs(hi));
 
 function original(line: RewriteLine) {
   return line.candidates.find((c) => c.original)!;

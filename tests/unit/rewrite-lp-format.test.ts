@@ -60,7 +60,13 @@ describe('toLpFormat', () => {
   it('wraps long rows onto continuation lines that still parse', async () => {
     const variables: LpModel['variables'] = {};
     for (let i = 0; i < 200; i++) variables[`item_${i}`] = { weight: 1 + (i % 7) / 3, value: 1 + ((i * 37) % 11) };
-    const knapsack: LpModel = { optimize: 'value', opType: 'max', constraints: { weight: { max: 50 } }, variables, binaries: Object.fromEntries(Object.keys(variables).map((v) => [v, 1])) };
+    const knapsack: LpModel = {
+      optimize: 'value',
+      opType: 'max',
+      constraints: { weight: { max: 50 } },
+      variables,
+      binaries: Object.fromEntries(Object.keys(variables).map((v) => [v, 1])),
+    };
     const lp = toLpFormat(knapsack);
     expect(Math.max(...lp.split('\n').map((l) => l.length))).toBeLessThanOrEqual(255);
     // HiGHS reads the wrapped text and agrees with javascript-lp-solver on the optimum.

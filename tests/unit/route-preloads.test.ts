@@ -17,7 +17,11 @@ describe('page preloads', () => {
     expect(routes.length).toBeGreaterThan(15);
     const listed = new Set(ROUTE_MODULES.map(([, module]) => module));
     for (const [, module] of routes) expect(listed, module).toContain(module);
-    for (const module of listed) expect(routes.map(([, m]) => m), module).toContain(module);
+    for (const module of listed)
+      expect(
+        routes.map(([, m]) => m),
+        module,
+      ).toContain(module);
   });
 
   it('matches page paths to route modules, most specific shape first', () => {

@@ -24,7 +24,12 @@ beforeAll(() => {
   byNdb = new Map(foods.map((f) => [f.sourceId, f]));
 });
 
-const at = (ndb: string, phrase: string, grams: number, comment?: string): CandidateLine => ({ food: byNdb.get(ndb)!, phrase, grams, comment: comment ?? null });
+const at = (ndb: string, phrase: string, grams: number, comment?: string): CandidateLine => ({
+  food: byNdb.get(ndb)!,
+  phrase,
+  grams,
+  comment: comment ?? null,
+});
 const none = (): CandidateOptions => ({ diet: [], excludedFoodIds: new Set(), approved: [] });
 
 /** An invented baked macaroni and cheese. */
@@ -149,7 +154,10 @@ describe('candidates from rules', () => {
     expect(r.lines[0].keepScale).toBeUndefined();
     expect(r.lines[0].heldReason).toBeUndefined();
     expect(r.lines[1].heldReason).toBe('aromatic: kept as written');
-    const unlocked = recipeCandidates(engine, [at('06931', 'marinara sauce', 680), at('11282', 'onion', 110), at('23572', 'ground beef', 454)], { ...none(), lineRoles: { 1: 'vegetable' } });
+    const unlocked = recipeCandidates(engine, [at('06931', 'marinara sauce', 680), at('11282', 'onion', 110), at('23572', 'ground beef', 454)], {
+      ...none(),
+      lineRoles: { 1: 'vegetable' },
+    });
     expect(unlocked.lines[1]).toMatchObject({ role: 'vegetable', keepScale: [1, 1.5] });
     expect(unlocked.lines[1].heldReason).toBeUndefined();
   });
@@ -162,7 +170,11 @@ describe('candidates from rules', () => {
     expect(loaf.lines[2].candidates.some((c) => /dried|powder/i.test(c.name))).toBe(false);
     const bread = recipeCandidates(engine, oilBananaBread(), none());
     expect(bread.lines[5].candidates.find((c) => c.name.startsWith('Egg, white'))).toMatchObject({ maxShare: 0.5, rule: { id: 'egg-in-bake-to-whites' } });
-    const carbonara = recipeCandidates(engine, [at('20120', 'spaghetti', 454), at('01123', 'large eggs', 150), at('01038', 'grated Pecorino Romano cheese', 99)], none());
+    const carbonara = recipeCandidates(
+      engine,
+      [at('20120', 'spaghetti', 454), at('01123', 'large eggs', 150), at('01038', 'grated Pecorino Romano cheese', 99)],
+      none(),
+    );
     expect(carbonara.lines[1].role).toBe('sauce');
     expect(carbonara.lines[1].candidates.slice(1).map((c) => [c.name, c.maxShare])).toEqual([['Egg, white, raw, fresh', 0.5]]);
   });
@@ -172,7 +184,11 @@ describe('candidates from rules', () => {
     const flour = bread.lines[0].candidates.slice(1);
     expect(flour.map((c) => c.name)).toEqual(['Wheat flour, whole-grain', 'Wheat flour, whole-grain, soft wheat']);
     for (const c of flour) expect(c).toMatchObject({ massRatio: 1, maxShare: 0.5, partial: true });
-    const brownies = recipeCandidates(engine, [at('20081', 'flour', 65), at('19335', 'sugar', 250), at('01001', 'butter', 113), at('01123', 'eggs', 100), at('19165', 'cocoa powder', 40)], none());
+    const brownies = recipeCandidates(
+      engine,
+      [at('20081', 'flour', 65), at('19335', 'sugar', 250), at('01001', 'butter', 113), at('01123', 'eggs', 100), at('19165', 'cocoa powder', 40)],
+      none(),
+    );
     expect(brownies.lines[1]).toMatchObject({ role: 'structure' });
     expect(brownies.lines[1].keepScale).toBeUndefined();
     expect(brownies.lines[1].candidates).toHaveLength(1);

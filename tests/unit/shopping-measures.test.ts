@@ -71,7 +71,12 @@ describe('a shopping line names what the cook buys, in the recipe’s own measur
 });
 
 describe('batches and merging keep the measure honest', () => {
-  const cream = (grams: number): PrepLine => ({ foodId: 1, name: 'Cream', grams, measure: writtenMeasure(parseLine('1 cup heavy cream'), 238) && { ...writtenMeasure(parseLine('1 cup heavy cream'), 238)!, amount: grams / 238 } });
+  const cream = (grams: number): PrepLine => ({
+    foodId: 1,
+    name: 'Cream',
+    grams,
+    measure: writtenMeasure(parseLine('1 cup heavy cream'), 238) && { ...writtenMeasure(parseLine('1 cup heavy cream'), 238)!, amount: grams / 238 },
+  });
 
   it('scales the measure with the grams', () => {
     const plan = scaleVersion({ servings: 4, lines: [cream(238)] }, 6);

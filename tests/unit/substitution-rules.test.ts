@@ -32,7 +32,8 @@ beforeAll(() => {
 });
 
 const rules = () => resolved.map((r) => r.rule);
-const foodTargets = () => resolved.flatMap((r) => r.targets.flatMap((t) => (t.kind === 'food' ? [{ rule: r.rule, food: t.food, massRatio: t.massRatio }] : [])));
+const foodTargets = () =>
+  resolved.flatMap((r) => r.targets.flatMap((t) => (t.kind === 'food' ? [{ rule: r.rule, food: t.food, massRatio: t.massRatio }] : [])));
 
 /** Grams of one `measure` of a food straight from USDA SR28 WEIGHT.txt (Gm_Wgt ÷ Amount). */
 function sr28Grams(ndb: string, measure: string): number {
@@ -55,13 +56,46 @@ describe('the rule file', () => {
   it('refuses a rule with targets but no quantity, or a duplicate id', () => {
     const base = { id: 'x-to-y', label: 'y for x, 1:1', why: 'because it is lighter', source: 'common practice', from: { ndb: ['01009'] } };
     expect(() => parseRuleFile({ rules: [{ ...base, targets: [{ ndb: '01260', name: 'Cheese' }] }] })).toThrow(/quantity/);
-    expect(() => parseRuleFile({ rules: [{ ...base, keepScale: [0.5, 1] }, { ...base, keepScale: [0.5, 1] }] })).toThrow(/duplicate id x-to-y/);
+    expect(() =>
+      parseRuleFile({
+        rules: [
+          { ...base, keepScale: [0.5, 1] },
+          { ...base, keepScale: [0.5, 1] },
+        ],
+      }),
+    ).toThrow(/duplicate id x-to-y/);
     expect(() => parseRuleFile({ rules: [{ ...base, from: { name: '(' }, keepScale: [0.5, 1] }] })).toThrow(/rules\.0\.from\.name/);
   });
 
   it('covers the comfort-food classes the brief names', () => {
-    const ids = rules().map((r) => r.id).join(' ');
-    for (const cls of ['ground-beef', 'chicken', 'bacon', 'pancetta', 'cheddar', 'mozzarella', 'parmesan', 'ricotta', 'cream-cheese', 'milk', 'cream', 'sour-cream', 'roux', 'saute', 'quick-bread', 'egg', 'flour', 'pasta', 'bread', 'buns', 'sugar', 'crumbs', 'reduced-sodium']) {
+    const ids = rules()
+      .map((r) => r.id)
+      .join(' ');
+    for (const cls of [
+      'ground-beef',
+      'chicken',
+      'bacon',
+      'pancetta',
+      'cheddar',
+      'mozzarella',
+      'parmesan',
+      'ricotta',
+      'cream-cheese',
+      'milk',
+      'cream',
+      'sour-cream',
+      'roux',
+      'saute',
+      'quick-bread',
+      'egg',
+      'flour',
+      'pasta',
+      'bread',
+      'buns',
+      'sugar',
+      'crumbs',
+      'reduced-sodium',
+    ]) {
       expect(ids, cls).toContain(cls);
     }
   });
@@ -74,8 +108,17 @@ describe('every target exists and is what the rule says (USDA SR28 FOOD_DES)', (
       for (const t of r.targets) {
         if (!('ndb' in t)) continue;
         expect(longDesc.has(t.ndb), `${r.id}: ${t.ndb} in FOOD_DES`).toBe(true);
-        expect(bySourceId.get(t.ndb)?.name.toLowerCase().replace(/[^a-z0-9%]+/g, ' '), `${r.id} → ${t.ndb}`).toContain(
-          t.name.toLowerCase().replace(/[^a-z0-9%]+/g, ' ').trim(),
+        expect(
+          bySourceId
+            .get(t.ndb)
+            ?.name.toLowerCase()
+            .replace(/[^a-z0-9%]+/g, ' '),
+          `${r.id} → ${t.ndb}`,
+        ).toContain(
+          t.name
+            .toLowerCase()
+            .replace(/[^a-z0-9%]+/g, ' ')
+            .trim(),
         );
       }
     }
@@ -83,7 +126,17 @@ describe('every target exists and is what the rule says (USDA SR28 FOOD_DES)', (
 
   it('throws when a rule names a target that is not in the catalogue or is another food', () => {
     const rule = parseRuleFile({
-      rules: [{ id: 'bad', label: 'a rule with a wrong target', why: 'to prove the check works', source: 'common practice', from: { ndb: ['01009'] }, targets: [{ ndb: '01260', name: 'Cheese, swiss' }], quantity: { massRatio: 1 } }],
+      rules: [
+        {
+          id: 'bad',
+          label: 'a rule with a wrong target',
+          why: 'to prove the check works',
+          source: 'common practice',
+          from: { ndb: ['01009'] },
+          targets: [{ ndb: '01260', name: 'Cheese, swiss' }],
+          quantity: { massRatio: 1 },
+        },
+      ],
     });
     expect(() => resolveRules(bySourceId, rule)).toThrow(/01260 is “Cheese, cheddar, reduced fat”/);
     const missing: SubstitutionRule[] = [{ ...rule[0], targets: [{ ndb: '99999', name: 'Nothing' }] }];

@@ -63,7 +63,10 @@ export function ClientDetailPage() {
     <Page title={client.displayName} description={<span className="break-all">{client.email}</span>}>
       <BackToClients />
       <TargetsEditor key={client.id} client={client} defaultUnits={unitSystemOf(user) === 'metric' ? 'metric' : 'us'} />
-      <Card title="Recent saved versions" description={`The recipes ${client.displayName} keeps, newest first. Open one to review its lines and leave a comment.`}>
+      <Card
+        title="Recent saved versions"
+        description={`The recipes ${client.displayName} keeps, newest first. Open one to review its lines and leave a comment.`}
+      >
         <ClientVersionList
           clientId={client.id}
           clientName={client.displayName}

@@ -35,15 +35,18 @@ export function ClientsPage() {
             <ErrorState title="Your clients didn't load" error={clients.error} onRetry={() => void clients.refetch()} retrying={clients.isFetching} />
           ) : clients.data.clients.length === 0 ? (
             <EmptyState title="No clients yet">
-              Once someone accepts your invitation they are listed here with their targets; open one to set targets and read
-              the versions they save.
+              Once someone accepts your invitation they are listed here with their targets; open one to set targets and read the versions they save.
             </EmptyState>
           ) : (
             <ClientList clients={clients.data.clients} clientHref={clientPath} />
           )}
         </section>
 
-        <Card title="Invitations" className="lg:col-start-2" description={clients.isSuccess && clients.data.invitations.length > 0 ? 'Newest first. A link works for 7 days.' : undefined}>
+        <Card
+          title="Invitations"
+          className="lg:col-start-2"
+          description={clients.isSuccess && clients.data.invitations.length > 0 ? 'Newest first. A link works for 7 days.' : undefined}
+        >
           {clients.isPending ? (
             <LoadingState label="Loading invitations…" />
           ) : clients.isError ? (

@@ -44,7 +44,10 @@ export function KitchenPage() {
       description="Paste a recipe you love. Hearthswap reads every ingredient line, weighs it in grams, and works out calories, protein, carbs, fat, fiber, sugar and sodium per serving. Then it looks for lighter foods that play the same part in the dish, so the plate stays just as full."
       actions={
         hasLines && (
-          <Button variant="secondary" size="sm" onClick={() => {
+          <Button
+            variant="secondary"
+            size="sm"
+            onClick={() => {
               kitchen.clear();
               setRound((n) => n + 1);
             }}
@@ -141,9 +144,26 @@ function KitchenRewrite({ recipe, unitSystem, kitchen }: { recipe: RewriteRecipe
           // Lines the cook changed first become a version of their own, so the rewrite is compared with them.
           let parent = source.versionNumber;
           if (editedSinceOpened) {
-            parent = (await saveVersion({ recipeId: source.recipeId, kind: 'edit', lines: draft.originalLines, servings: draft.servings, parentNumber: source.versionNumber, note: `Edited in the Kitchen from version ${source.versionNumber}.` })).number;
+            parent = (
+              await saveVersion({
+                recipeId: source.recipeId,
+                kind: 'edit',
+                lines: draft.originalLines,
+                servings: draft.servings,
+                parentNumber: source.versionNumber,
+                note: `Edited in the Kitchen from version ${source.versionNumber}.`,
+              })
+            ).number;
           }
-          const saved = await saveVersion({ recipeId: source.recipeId, kind: 'rewrite', lines: draft.rewrittenLines, servings: draft.servings, targets: draft.targets, note: draft.note, parentNumber: parent });
+          const saved = await saveVersion({
+            recipeId: source.recipeId,
+            kind: 'rewrite',
+            lines: draft.rewrittenLines,
+            servings: draft.servings,
+            targets: draft.targets,
+            note: draft.note,
+            parentNumber: parent,
+          });
           setSource(null);
           navigate(recipePath(source.recipeId, saved.number));
         },
@@ -221,7 +241,8 @@ function useOpenFromBook(kitchen: Kitchen, onOpened: () => void) {
 
   if (recipeId === null || number === null) return null;
   const error = recipe.error ?? version.error;
-  if (error) return <ErrorState title="That saved version didn't open" error={error} onRetry={() => void (recipe.isError ? recipe.refetch() : version.refetch())} />;
+  if (error)
+    return <ErrorState title="That saved version didn't open" error={error} onRetry={() => void (recipe.isError ? recipe.refetch() : version.refetch())} />;
   return <LoadingState label="Bringing the saved version to the Kitchen…" />;
 }
 
@@ -233,7 +254,14 @@ function EditingSavedRecipe({ kitchen }: { kitchen: Kitchen }) {
   const lines = lineInputs(kitchen.lines);
   const edited = JSON.stringify(lines) !== source.openedLines;
   const save = async () => {
-    const saved = await saveVersion({ recipeId: source.recipeId, kind: 'edit', lines, servings: kitchen.servings, parentNumber: source.versionNumber, note: `Edited in the Kitchen from version ${source.versionNumber}.` });
+    const saved = await saveVersion({
+      recipeId: source.recipeId,
+      kind: 'edit',
+      lines,
+      servings: kitchen.servings,
+      parentNumber: source.versionNumber,
+      note: `Edited in the Kitchen from version ${source.versionNumber}.`,
+    });
     kitchen.setSource(null);
     navigate(recipePath(source.recipeId, saved.number));
   };
@@ -244,7 +272,13 @@ function EditingSavedRecipe({ kitchen }: { kitchen: Kitchen }) {
       announce={false}
       action={
         <div className="flex flex-wrap gap-2">
-          <Button size="sm" onClick={() => void save().catch(() => undefined)} loading={isPending} loadingLabel="Saving…" disabled={!edited || lines.length === 0}>
+          <Button
+            size="sm"
+            onClick={() => void save().catch(() => undefined)}
+            loading={isPending}
+            loadingLabel="Saving…"
+            disabled={!edited || lines.length === 0}
+          >
             Save my changes as version {source.latestNumber + 1}
           </Button>
           <Link to={recipePath(source.recipeId, source.versionNumber)} className={buttonClasses({ variant: 'secondary', size: 'sm' })}>

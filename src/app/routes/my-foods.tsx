@@ -34,7 +34,10 @@ export function MyFoodsPage() {
     if (!window.confirm(`Delete “${food.name}”? Saved recipe versions that use it keep their numbers.`)) return;
     remove.mutate(food.id, {
       onSuccess: ({ hidden }) =>
-        setNotice({ tone: 'success', text: hidden ? `“${food.name}” is gone from your foods; the saved versions that use it keep it.` : `Deleted “${food.name}”.` }),
+        setNotice({
+          tone: 'success',
+          text: hidden ? `“${food.name}” is gone from your foods; the saved versions that use it keep it.` : `Deleted “${food.name}”.`,
+        }),
     });
   }
 

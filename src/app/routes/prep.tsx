@@ -96,9 +96,7 @@ export function PrepPage() {
         error={portionsError}
         busy={prep.isFetching && shown !== null}
       />
-      {portionsError && shown && (
-        <p className="mt-2 text-sm text-ink-soft">Still showing the last batch that worked out: {portionsWord(shown.portions)}.</p>
-      )}
+      {portionsError && shown && <p className="mt-2 text-sm text-ink-soft">Still showing the last batch that worked out: {portionsWord(shown.portions)}.</p>}
     </>
   );
 

@@ -119,20 +119,15 @@ export function RecipeBookPage() {
           </div>
         }
       >
-        Bring in a recipe you already cook, from a file or by pasting it, or work one out in the Kitchen and keep the
-        version you like. Each recipe you keep lands here with every version you saved.
+        Bring in a recipe you already cook, from a file or by pasting it, or work one out in the Kitchen and keep the version you like. Each recipe you keep
+        lands here with every version you saved.
       </EmptyState>
     );
   } else {
     const count = recipes.data.length;
     body = (
       <div className="flex flex-col gap-4">
-        <RecipeListControls
-          query={typed}
-          onQueryChange={setTyped}
-          sort={sort}
-          onSortChange={(next) => updateParams({ sort: next })}
-        />
+        <RecipeListControls query={typed} onQueryChange={setTyped} sort={sort} onSortChange={(next) => updateParams({ sort: next })} />
         <p className="text-sm text-ink-soft" aria-live="polite">
           {q ? `${count} recipe${count === 1 ? '' : 's'} with “${q}” in the title.` : `${count} recipe${count === 1 ? '' : 's'} in the book.`}
           {recipes.isFetching && !recipes.isPending && <span className="ml-2">Updating…</span>}

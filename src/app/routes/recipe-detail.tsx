@@ -68,9 +68,7 @@ function RecipeView({ recipe, onReload }: { recipe: RecipeDetail; onReload: () =
         },
         onError: (error) =>
           toast.show(
-            isRevisionConflict(error)
-              ? 'This recipe changed elsewhere — reload before deleting it.'
-              : `Not deleted: ${errorMessage(error)}`,
+            isRevisionConflict(error) ? 'This recipe changed elsewhere — reload before deleting it.' : `Not deleted: ${errorMessage(error)}`,
             'danger',
           ),
       },
@@ -151,7 +149,10 @@ function RecipeView({ recipe, onReload }: { recipe: RecipeDetail; onReload: () =
             <EmptyState title="No versions yet">This recipe has no saved ingredients.</EmptyState>
           )}
           {selected && user?.coachId != null && (
-            <Card title={`Notes with your coach on version ${selected.number}`} description="Your coach reviews the versions you save and can leave a comment here.">
+            <Card
+              title={`Notes with your coach on version ${selected.number}`}
+              description="Your coach reviews the versions you save and can leave a comment here."
+            >
               <CommentThread recipeId={recipe.id} number={selected.number} viewerId={user.id} otherName="your coach" />
             </Card>
           )}

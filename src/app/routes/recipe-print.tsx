@@ -72,7 +72,12 @@ export function RecipePrintPage() {
   let body;
   if (recipe.isPending || (chosen && version.isPending)) body = <LoadingState label="Laying out the card…" className="justify-center" />;
   else if (recipe.isError) body = <ErrorState title="This recipe didn't load" error={recipe.error} onRetry={() => void recipe.refetch()} />;
-  else if (!chosen) body = <Alert tone="info" title="Nothing to print yet">This recipe has no saved version.</Alert>;
+  else if (!chosen)
+    body = (
+      <Alert tone="info" title="Nothing to print yet">
+        This recipe has no saved version.
+      </Alert>
+    );
   else if (version.isError) body = <ErrorState title={`Version ${chosen.number} didn't load`} error={version.error} onRetry={() => void version.refetch()} />;
   else if (version.data) body = <RecipePrintCard recipe={recipe.data} version={version.data} extras={extras} />;
 

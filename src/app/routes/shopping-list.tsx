@@ -75,7 +75,8 @@ export function ShoppingListPage() {
 
   let picker;
   if (choices.isPending) picker = <LoadingState label="Opening your recipe book…" />;
-  else if (choices.isError) picker = <ErrorState title="Your recipes didn't load" error={choices.error} onRetry={() => void choices.refetch()} retrying={choices.isFetching} />;
+  else if (choices.isError)
+    picker = <ErrorState title="Your recipes didn't load" error={choices.error} onRetry={() => void choices.refetch()} retrying={choices.isFetching} />;
   else if (withVersions.length === 0)
     picker = (
       <EmptyState
@@ -156,8 +157,7 @@ export function ShoppingListPage() {
               <MergedShoppingList list={build.data} onPrint={() => print('list')} />
             ) : (
               <EmptyState title="The list shows up here" className="print:hidden">
-                Add each batch you mean to cook, then build the list. Foods that several recipes share are added
-                together, with how to buy them.
+                Add each batch you mean to cook, then build the list. Foods that several recipes share are added together, with how to buy them.
               </EmptyState>
             )}
           </div>

@@ -12,10 +12,7 @@ export function initialsOf(displayName: string): string {
 
 export function Avatar({ user }: { user: User }) {
   return (
-    <span
-      aria-hidden="true"
-      className="flex size-9 shrink-0 items-center justify-center rounded-pill bg-herb-700 text-sm font-black text-herb-50"
-    >
+    <span aria-hidden="true" className="flex size-9 shrink-0 items-center justify-center rounded-pill bg-herb-700 text-sm font-black text-herb-50">
       {initialsOf(user.displayName)}
     </span>
   );
@@ -72,17 +69,11 @@ export function AccountMenu({ user }: { user: User }) {
           <path d="M5 7.5 10 12.5 15 7.5" stroke="currentColor" strokeWidth="2" fill="none" strokeLinecap="round" />
         </svg>
       </button>
-      <div
-        id={panelId}
-        hidden={!open}
-        className="absolute right-0 z-50 mt-2 w-72 rounded-card border border-line bg-surface p-2 shadow-pop"
-      >
+      <div id={panelId} hidden={!open} className="absolute right-0 z-50 mt-2 w-72 rounded-card border border-line bg-surface p-2 shadow-pop">
         <div className="px-3 py-2">
           <p className="truncate font-bold text-ink">{user.displayName}</p>
           <p className="truncate text-sm text-ink-soft">{user.email}</p>
-          <p className="mt-1 inline-block rounded-pill bg-herb-100 px-2.5 py-0.5 text-xs font-bold text-herb-800">
-            {ROLE_LABELS[user.role]}
-          </p>
+          <p className="mt-1 inline-block rounded-pill bg-herb-100 px-2.5 py-0.5 text-xs font-bold text-herb-800">{ROLE_LABELS[user.role]}</p>
         </div>
         <hr className="my-1 border-line" />
         <Link to="/account" className="block rounded-field px-3 py-2.5 font-semibold text-ink hover:bg-oat-100">

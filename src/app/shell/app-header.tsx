@@ -53,12 +53,7 @@ function MobileAccount() {
       <Link to="/account" className={buttonClasses({ variant: 'secondary', size: 'lg', fullWidth: true })}>
         Account and preferences
       </Link>
-      <button
-        type="button"
-        onClick={signOut}
-        disabled={signingOut}
-        className={buttonClasses({ variant: 'quiet', size: 'lg', fullWidth: true })}
-      >
+      <button type="button" onClick={signOut} disabled={signingOut} className={buttonClasses({ variant: 'quiet', size: 'lg', fullWidth: true })}>
         {signingOut ? 'Signing out…' : 'Sign out'}
       </button>
     </div>

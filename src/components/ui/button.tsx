@@ -6,10 +6,8 @@ export type ButtonVariant = 'primary' | 'secondary' | 'quiet' | 'danger';
 export type ButtonSize = 'sm' | 'md' | 'lg';
 
 const VARIANTS: Record<ButtonVariant, string> = {
-  primary:
-    'bg-accent text-white shadow-sm hover:bg-accent-strong active:bg-ember-800 disabled:bg-oat-300 disabled:text-oat-800',
-  secondary:
-    'bg-surface text-ink border border-line-strong hover:bg-oat-100 active:bg-oat-200 disabled:text-oat-600',
+  primary: 'bg-accent text-white shadow-sm hover:bg-accent-strong active:bg-ember-800 disabled:bg-oat-300 disabled:text-oat-800',
+  secondary: 'bg-surface text-ink border border-line-strong hover:bg-oat-100 active:bg-oat-200 disabled:text-oat-600',
   quiet: 'bg-transparent text-ink hover:bg-oat-100 active:bg-oat-200 disabled:text-oat-600',
   danger: 'bg-beet-700 text-white shadow-sm hover:bg-beet-800 disabled:bg-oat-300 disabled:text-oat-800',
 };
@@ -21,9 +19,7 @@ const SIZES: Record<ButtonSize, string> = {
 };
 
 /** Button styling, also for links that look like buttons. */
-export function buttonClasses(
-  options: { variant?: ButtonVariant; size?: ButtonSize; fullWidth?: boolean; className?: string } = {},
-): string {
+export function buttonClasses(options: { variant?: ButtonVariant; size?: ButtonSize; fullWidth?: boolean; className?: string } = {}): string {
   const { variant = 'primary', size = 'md', fullWidth = false, className } = options;
   return cx(
     'inline-flex items-center justify-center rounded-pill font-bold transition-colors select-none',
@@ -45,18 +41,7 @@ export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   loadingLabel?: ReactNode;
 }
 
-export function Button({
-  variant,
-  size,
-  fullWidth,
-  loading = false,
-  loadingLabel,
-  className,
-  children,
-  disabled,
-  type = 'button',
-  ...rest
-}: ButtonProps) {
+export function Button({ variant, size, fullWidth, loading = false, loadingLabel, className, children, disabled, type = 'button', ...rest }: ButtonProps) {
   return (
     <button
       type={type}

@@ -114,9 +114,7 @@ export function CheckList({ label, items, storageKey, className }: CheckListProp
                   {item.detail && <span className="text-sm text-ink-soft">{item.detail}</span>}
                 </span>
                 {item.amount && (
-                  <span className={cx('shrink-0 text-right font-extrabold tabular-nums', isChecked ? 'text-ink-soft' : 'text-ink')}>
-                    {item.amount}
-                  </span>
+                  <span className={cx('shrink-0 text-right font-extrabold tabular-nums', isChecked ? 'text-ink-soft' : 'text-ink')}>{item.amount}</span>
                 )}
               </label>
             </li>

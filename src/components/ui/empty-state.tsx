@@ -11,12 +11,7 @@ export interface EmptyStateProps {
 /** What a list or page shows when there is nothing in it yet. */
 export function EmptyState({ title, children, action, className }: EmptyStateProps) {
   return (
-    <div
-      className={cx(
-        'flex flex-col items-center gap-3 rounded-card border-2 border-dashed border-oat-300 bg-oat-100/60 px-6 py-10 text-center',
-        className,
-      )}
-    >
+    <div className={cx('flex flex-col items-center gap-3 rounded-card border-2 border-dashed border-oat-300 bg-oat-100/60 px-6 py-10 text-center', className)}>
       <svg aria-hidden="true" viewBox="0 0 48 48" className="size-12 text-oat-500" fill="none">
         <path d="M7 24h34c0 9.4-7.6 17-17 17S7 33.4 7 24Z" stroke="currentColor" strokeWidth="2.5" strokeLinejoin="round" />
         <path d="M4 24h40" stroke="currentColor" strokeWidth="2.5" strokeLinecap="round" />

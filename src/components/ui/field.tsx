@@ -58,18 +58,7 @@ export interface TextFieldProps extends Omit<InputHTMLAttributes<HTMLInputElemen
   ref?: Ref<HTMLInputElement>;
 }
 
-export function TextField({
-  label,
-  hint,
-  error,
-  optional,
-  containerClassName,
-  trailing,
-  id: givenId,
-  className,
-  ref,
-  ...input
-}: TextFieldProps) {
+export function TextField({ label, hint, error, optional, containerClassName, trailing, id: givenId, className, ref, ...input }: TextFieldProps) {
   const autoId = useId();
   const id = givenId ?? autoId;
   const control = (
@@ -105,17 +94,7 @@ export interface TextAreaFieldProps extends Omit<TextareaHTMLAttributes<HTMLText
   ref?: Ref<HTMLTextAreaElement>;
 }
 
-export function TextAreaField({
-  label,
-  hint,
-  error,
-  optional,
-  containerClassName,
-  id: givenId,
-  className,
-  ref,
-  ...textarea
-}: TextAreaFieldProps) {
+export function TextAreaField({ label, hint, error, optional, containerClassName, id: givenId, className, ref, ...textarea }: TextAreaFieldProps) {
   const autoId = useId();
   const id = givenId ?? autoId;
   return (
@@ -150,22 +129,10 @@ export interface ChoiceCardsProps<V extends string> {
 }
 
 /** Radio buttons laid out as cards, each with a label and a line of explanation. */
-export function ChoiceCards<V extends string>({
-  legend,
-  options,
-  inputProps,
-  hint,
-  error,
-  columns = 2,
-  className,
-}: ChoiceCardsProps<V>) {
+export function ChoiceCards<V extends string>({ legend, options, inputProps, hint, error, columns = 2, className }: ChoiceCardsProps<V>) {
   const id = useId();
   return (
-    <fieldset
-      className={cx('flex flex-col gap-2', className)}
-      aria-describedby={describedBy(id, hint, error)}
-      aria-invalid={error ? true : undefined}
-    >
+    <fieldset className={cx('flex flex-col gap-2', className)} aria-describedby={describedBy(id, hint, error)} aria-invalid={error ? true : undefined}>
       <legend className="mb-1.5 font-bold text-ink">{legend}</legend>
       {hint && (
         <p id={`${id}-hint`} className="-mt-1 mb-1 text-sm text-ink-soft">

@@ -42,9 +42,6 @@ export function usePrintPart<Part extends string>() {
   }, []);
 
   const wrapperProps = { 'data-print-only': only ?? undefined };
-  const partProps = useCallback(
-    (part: Part) => ({ 'data-print-part': part, 'data-print-chosen': only === part ? '' : undefined }),
-    [only],
-  );
+  const partProps = useCallback((part: Part) => ({ 'data-print-part': part, 'data-print-chosen': only === part ? '' : undefined }), [only]);
   return { only, print, wrapperProps, partProps };
 }

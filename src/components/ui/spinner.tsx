@@ -2,12 +2,7 @@ import { cx } from '../../lib/cx';
 
 export function Spinner({ className }: { className?: string }) {
   return (
-    <svg
-      aria-hidden="true"
-      viewBox="0 0 24 24"
-      className={cx('size-5 animate-spin text-current', className)}
-      fill="none"
-    >
+    <svg aria-hidden="true" viewBox="0 0 24 24" className={cx('size-5 animate-spin text-current', className)} fill="none">
       <circle cx="12" cy="12" r="9" stroke="currentColor" strokeOpacity="0.25" strokeWidth="3" />
       <path d="M21 12a9 9 0 0 0-9-9" stroke="currentColor" strokeWidth="3" strokeLinecap="round" />
     </svg>

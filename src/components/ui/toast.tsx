@@ -66,10 +66,7 @@ export function ToastProvider({ children }: { children: ReactNode }) {
         {toasts.map((toast) => (
           <div
             key={toast.id}
-            className={cx(
-              'pointer-events-auto flex max-w-sm items-center gap-3 rounded-field px-4 py-3 shadow-pop',
-              TONE_CLASSES[toast.tone],
-            )}
+            className={cx('pointer-events-auto flex max-w-sm items-center gap-3 rounded-field px-4 py-3 shadow-pop', TONE_CLASSES[toast.tone])}
           >
             <span className="flex-1">{toast.message}</span>
             <button

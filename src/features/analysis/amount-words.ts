@@ -31,8 +31,38 @@ export function formatQuantity(quantity: number): string {
 // Unit ids (shared/units.ts) whose written form is not the id itself.
 const UNIT_TEXT: Record<string, string> = { 'fl-oz': 'fl oz', 'extra-large': 'extra-large', l: 'L', ml: 'mL', cl: 'cL', dl: 'dL' };
 // Abbreviations and sizes read the same for one or many.
-const INVARIANT = new Set(['g', 'kg', 'mg', 'oz', 'lb', 'ml', 'cl', 'dl', 'l', 'tsp', 'tbsp', 'fl-oz', 'large', 'medium', 'small', 'extra-large', 'jumbo', 'cm', 'dozen']);
-const IRREGULAR: Record<string, string> = { leaf: 'leaves', loaf: 'loaves', inch: 'inches', box: 'boxes', bunch: 'bunches', pinch: 'pinches', dash: 'dashes', batch: 'batches', glass: 'glasses' };
+const INVARIANT = new Set([
+  'g',
+  'kg',
+  'mg',
+  'oz',
+  'lb',
+  'ml',
+  'cl',
+  'dl',
+  'l',
+  'tsp',
+  'tbsp',
+  'fl-oz',
+  'large',
+  'medium',
+  'small',
+  'extra-large',
+  'jumbo',
+  'cm',
+  'dozen',
+]);
+const IRREGULAR: Record<string, string> = {
+  leaf: 'leaves',
+  loaf: 'loaves',
+  inch: 'inches',
+  box: 'boxes',
+  bunch: 'bunches',
+  pinch: 'pinches',
+  dash: 'dashes',
+  batch: 'batches',
+  glass: 'glasses',
+};
 
 /** A unit id in words for a quantity: ("cup", 2) → "cups", ("tbsp", 3) → "tbsp", ("fl-oz", 1) → "fl oz". */
 export function unitWords(unit: string, quantity: number | null): string {

@@ -73,7 +73,16 @@ function isAnswered(v: unknown, analysis: AnalyzeResponse): v is AnsweredRequest
 }
 
 function isSource(v: unknown): v is KitchenSource {
-  return isObject(v) && typeof v.recipeId === 'number' && v.recipeId >= 1 && typeof v.title === 'string' && typeof v.versionNumber === 'number' && v.versionNumber >= 1 && typeof v.latestNumber === 'number' && typeof v.openedLines === 'string';
+  return (
+    isObject(v) &&
+    typeof v.recipeId === 'number' &&
+    v.recipeId >= 1 &&
+    typeof v.title === 'string' &&
+    typeof v.versionNumber === 'number' &&
+    v.versionNumber >= 1 &&
+    typeof v.latestNumber === 'number' &&
+    typeof v.openedLines === 'string'
+  );
 }
 
 /** A snapshot read back from storage, or null when there is none or it is not one of ours. */

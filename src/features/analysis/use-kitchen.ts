@@ -3,7 +3,18 @@ import type { AnalyzedLine, AnalyzeRequest, AnalyzeResponse, FoodSummary, LineIn
 import { useAnalyzeRecipe } from './api/analyze-recipe';
 import type { CurrentAnalysis } from './current-analysis';
 import type { LineFunction } from '../../../shared/culinary/types';
-import { lineInputs, lineRolesFor, linesFromAnalysis, newLineKey, requestSignature, withFood, withGrams, withoutLine, withRole, type KitchenLine } from './kitchen-lines';
+import {
+  lineInputs,
+  lineRolesFor,
+  linesFromAnalysis,
+  newLineKey,
+  requestSignature,
+  withFood,
+  withGrams,
+  withoutLine,
+  withRole,
+  type KitchenLine,
+} from './kitchen-lines';
 import { emptyKitchen, loadKitchen, saveKitchen, type KitchenSnapshot, type KitchenSource } from './kitchen-storage';
 
 const storage = (): Storage | undefined => (typeof window === 'undefined' ? undefined : window.sessionStorage);

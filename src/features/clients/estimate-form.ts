@@ -21,7 +21,19 @@ export type EstimateField = Exclude<keyof EstimateValues, 'units'> | 'height' | 
 export type EstimateErrors = Partial<Record<EstimateField, string>>;
 
 export function emptyEstimate(units: BodyUnits): EstimateValues {
-  return { units, sex: '', ageYears: '', heightCm: '', heightFeet: '', heightInches: '', weightKg: '', weightLb: '', activity: 'moderate', goal: 'maintain', mealsPerDay: '3' };
+  return {
+    units,
+    sex: '',
+    ageYears: '',
+    heightCm: '',
+    heightFeet: '',
+    heightInches: '',
+    weightKg: '',
+    weightLb: '',
+    activity: 'moderate',
+    goal: 'maintain',
+    mealsPerDay: '3',
+  };
 }
 
 export type EstimateResult = { ok: true; input: EstimateTargetsInput } | { ok: false; errors: EstimateErrors };
@@ -54,7 +66,8 @@ export function estimateInput(values: EstimateValues): EstimateResult {
   const { ageYears: ageLimits, heightCm: heightLimits, weightKg: weightLimits, mealsPerDay: mealLimits } = TARGET_LIMITS;
   if (age === undefined || Number.isNaN(age)) errors.ageYears = 'Enter their age in years.';
   else if (!Number.isInteger(age)) errors.ageYears = 'Enter whole years.';
-  else if (age < ageLimits.min) errors.ageYears = 'These estimates are for adults. For anyone under 18, targets belong with a physician or registered dietitian.';
+  else if (age < ageLimits.min)
+    errors.ageYears = 'These estimates are for adults. For anyone under 18, targets belong with a physician or registered dietitian.';
   else if (age > ageLimits.max) errors.ageYears = `Enter an age up to ${ageLimits.max}.`;
 
   let heightCm: number | undefined;
@@ -70,15 +83,18 @@ export function estimateInput(values: EstimateValues): EstimateResult {
     } else heightCm = cmFromFeetInches(feet, inches);
   }
   if (heightCm !== undefined && !inRange(heightCm, heightLimits)) {
-    errors.height = values.units === 'metric' ? `Enter a height from ${heightLimits.min} to ${heightLimits.max} cm.` : `Enter a height from ${US_HEIGHT_RANGE}.`;
+    errors.height =
+      values.units === 'metric' ? `Enter a height from ${heightLimits.min} to ${heightLimits.max} cm.` : `Enter a height from ${US_HEIGHT_RANGE}.`;
   }
 
   let weightKg: number | undefined;
   const weight = readNumber(values.units === 'metric' ? values.weightKg : values.weightLb);
-  if (weight === undefined || Number.isNaN(weight)) errors.weight = values.units === 'metric' ? 'Enter their weight in kilograms.' : 'Enter their weight in pounds.';
+  if (weight === undefined || Number.isNaN(weight))
+    errors.weight = values.units === 'metric' ? 'Enter their weight in kilograms.' : 'Enter their weight in pounds.';
   else weightKg = values.units === 'metric' ? weight : kgFromPounds(weight);
   if (weightKg !== undefined && !inRange(weightKg, weightLimits)) {
-    errors.weight = values.units === 'metric' ? `Enter a weight from ${weightLimits.min} to ${weightLimits.max} kg.` : `Enter a weight from ${US_WEIGHT_RANGE}.`;
+    errors.weight =
+      values.units === 'metric' ? `Enter a weight from ${weightLimits.min} to ${weightLimits.max} kg.` : `Enter a weight from ${US_WEIGHT_RANGE}.`;
   }
 
   const meals = readNumber(values.mealsPerDay);
@@ -86,7 +102,16 @@ export function estimateInput(values: EstimateValues): EstimateResult {
     errors.mealsPerDay = `Enter a whole number of meals from ${mealLimits.min} to ${mealLimits.max}.`;
   }
 
-  if (Object.keys(errors).length > 0 || !sex || !activity || !goal || age === undefined || heightCm === undefined || weightKg === undefined || meals === undefined) {
+  if (
+    Object.keys(errors).length > 0 ||
+    !sex ||
+    !activity ||
+    !goal ||
+    age === undefined ||
+    heightCm === undefined ||
+    weightKg === undefined ||
+    meals === undefined
+  ) {
     return { ok: false, errors };
   }
   return { ok: true, input: { sex, ageYears: age, heightCm, weightKg, activity, goal, mealsPerDay: meals } };
@@ -97,7 +122,13 @@ export function estimateErrorsFrom(fieldErrors: Record<string, string>): Estimat
   const errors: EstimateErrors = {};
   for (const [key, message] of Object.entries(fieldErrors)) {
     const field: EstimateField | null =
-      key === 'heightCm' ? 'height' : key === 'weightKg' ? 'weight' : ['sex', 'ageYears', 'activity', 'goal', 'mealsPerDay'].includes(key) ? (key as EstimateField) : null;
+      key === 'heightCm'
+        ? 'height'
+        : key === 'weightKg'
+          ? 'weight'
+          : ['sex', 'ageYears', 'activity', 'goal', 'mealsPerDay'].includes(key)
+            ? (key as EstimateField)
+            : null;
     if (field) errors[field] ??= message;
   }
   return errors;

@@ -86,7 +86,8 @@ export function targetsFromValues(values: TargetsValues): TargetsResult {
     if (Number.isNaN(value)) errors[rule.field] = 'Enter a number.';
     else if (rule.integer && !Number.isInteger(value)) errors[rule.field] = 'Enter a whole number.';
     else if (tooLow || value > rule.max) {
-      errors[rule.field] = `Enter ${rule.what} from ${rule.minExclusive ? 'above ' : ''}${rule.min.toLocaleString('en-US')} to ${rule.max.toLocaleString('en-US')}.`;
+      errors[rule.field] =
+        `Enter ${rule.what} from ${rule.minExclusive ? 'above ' : ''}${rule.min.toLocaleString('en-US')} to ${rule.max.toLocaleString('en-US')}.`;
     } else read[rule.field] = value;
   }
   const note = values.note.trim();

@@ -25,7 +25,20 @@ export type LabelFoodField = keyof LabelFoodValues;
 export type LabelFoodErrors = Partial<Record<LabelFoodField, string>>;
 
 export function emptyLabelFood(): LabelFoodValues {
-  return { name: '', servingSizeG: '', servingSizeMl: '', kcal: '', proteinG: '', fatG: '', satFatG: '', carbsG: '', fiberG: '', sugarG: '', sodiumMg: '', role: '' };
+  return {
+    name: '',
+    servingSizeG: '',
+    servingSizeMl: '',
+    kcal: '',
+    proteinG: '',
+    fatG: '',
+    satFatG: '',
+    carbsG: '',
+    fiberG: '',
+    sugarG: '',
+    sodiumMg: '',
+    role: '',
+  };
 }
 
 // The server's upper limits (customFoodSchema in shared/schemas/coaching.ts).

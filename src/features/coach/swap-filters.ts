@@ -15,7 +15,10 @@ export function hasSwapFilters(filters: SwapFilters): boolean {
 
 /** Lowercase, without accents, so "Creme" finds "crème". */
 function fold(text: string): string {
-  return text.normalize('NFD').replace(/[\u0300-\u036f]/g, '').toLowerCase();
+  return text
+    .normalize('NFD')
+    .replace(/[\u0300-\u036f]/g, '')
+    .toLowerCase();
 }
 
 /**
@@ -29,14 +32,7 @@ export function filterSwaps(swaps: readonly Swap[], filters: SwapFilters, roleLa
     if (filters.role !== 'all' && swap.fromRole !== filters.role) return false;
     if (words.length === 0) return true;
     const haystack = fold(
-      [
-        swap.fromFood?.name,
-        swap.fromRole,
-        swap.fromRole ? roleLabel(swap.fromRole) : '',
-        swap.toFood?.name,
-        swap.note,
-        ...swap.tags,
-      ]
+      [swap.fromFood?.name, swap.fromRole, swap.fromRole ? roleLabel(swap.fromRole) : '', swap.toFood?.name, swap.note, ...swap.tags]
         .filter(Boolean)
         .join(' \u0000 '),
     );

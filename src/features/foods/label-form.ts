@@ -24,7 +24,20 @@ export interface LabelFormValues {
 export type LabelFormField = keyof LabelFormValues;
 
 export const EMPTY_LABEL_FORM: LabelFormValues = {
-  name: '', servingSizeG: '', servingSizeMl: '', servingLabel: '', kcal: '', fatG: '', satFatG: '', carbsG: '', fiberG: '', sugarG: '', proteinG: '', sodiumMg: '', barcode: '', role: '',
+  name: '',
+  servingSizeG: '',
+  servingSizeMl: '',
+  servingLabel: '',
+  kcal: '',
+  fatG: '',
+  satFatG: '',
+  carbsG: '',
+  fiberG: '',
+  sugarG: '',
+  proteinG: '',
+  sodiumMg: '',
+  barcode: '',
+  role: '',
 };
 
 const optionalNumber = z.string().transform((text, ctx) => {
@@ -72,7 +85,9 @@ export const labelFormSchema = z
   })
   .transform(
     ({ role, ...v }) =>
-      defined({ ...v, name: v.name.trim(), servingLabel: v.servingLabel.trim(), barcode: v.barcode.trim(), roles: role ? [role] : undefined }) as z.input<typeof labelFoodSchema>,
+      defined({ ...v, name: v.name.trim(), servingLabel: v.servingLabel.trim(), barcode: v.barcode.trim(), roles: role ? [role] : undefined }) as z.input<
+        typeof labelFoodSchema
+      >,
   )
   .pipe(labelFoodSchema);
 

@@ -30,8 +30,7 @@ function commonPairs(a: string[], b: string[]): Array<[number, number]> {
   const table = new Uint16Array(rows * cols);
   for (let i = a.length - 1; i >= 0; i--) {
     for (let j = b.length - 1; j >= 0; j--) {
-      table[i * cols + j] =
-        a[i] === b[j] ? table[(i + 1) * cols + j + 1] + 1 : Math.max(table[(i + 1) * cols + j], table[i * cols + j + 1]);
+      table[i * cols + j] = a[i] === b[j] ? table[(i + 1) * cols + j + 1] + 1 : Math.max(table[(i + 1) * cols + j], table[i * cols + j + 1]);
     }
   }
   const pairs: Array<[number, number]> = [];
@@ -50,8 +49,29 @@ function commonPairs(a: string[], b: string[]): Array<[number, number]> {
 
 /** Words of a food's name that say what it is, not how it is sold or cooked. */
 const PLAIN_WORDS = new Set([
-  'raw', 'cooked', 'dry', 'fat', 'lean', 'meat', 'with', 'and', 'without', 'the', 'plain', 'ready', 'serve',
-  'added', 'salt', 'enriched', 'unenriched', 'prepared', 'frozen', 'canned', 'fresh', 'regular', 'commercial',
+  'raw',
+  'cooked',
+  'dry',
+  'fat',
+  'lean',
+  'meat',
+  'with',
+  'and',
+  'without',
+  'the',
+  'plain',
+  'ready',
+  'serve',
+  'added',
+  'salt',
+  'enriched',
+  'unenriched',
+  'prepared',
+  'frozen',
+  'canned',
+  'fresh',
+  'regular',
+  'commercial',
 ]);
 
 function nameWords(line: VersionLine): Set<string> {
@@ -90,9 +110,7 @@ export function compareLines(before: VersionLine[], after: VersionLine[], option
     const arrived = after.slice(j, untilJ);
     const taken = new Set<number>();
     for (const [k, line] of gone.entries()) {
-      const match = options.inPlace
-        ? k < arrived.length ? k : -1
-        : arrived.findIndex((candidate, m) => !taken.has(m) && shareAWord(line, candidate));
+      const match = options.inPlace ? (k < arrived.length ? k : -1) : arrived.findIndex((candidate, m) => !taken.has(m) && shareAWord(line, candidate));
       if (match >= 0) {
         taken.add(match);
         changes.push({ kind: 'swapped', before: line, after: arrived[match] });
@@ -114,10 +132,7 @@ export function compareLines(before: VersionLine[], after: VersionLine[], option
 }
 
 /** Whether `after` was rewritten line by line from `before`, so swaps sit in place. */
-export function rewrittenInPlace(
-  before: Pick<VersionDetail, 'number' | 'lines'>,
-  after: Pick<VersionDetail, 'kind' | 'parentNumber' | 'lines'>,
-): boolean {
+export function rewrittenInPlace(before: Pick<VersionDetail, 'number' | 'lines'>, after: Pick<VersionDetail, 'kind' | 'parentNumber' | 'lines'>): boolean {
   return after.kind === 'rewrite' && after.parentNumber === before.number && after.lines.length === before.lines.length;
 }
 

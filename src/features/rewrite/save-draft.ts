@@ -61,10 +61,7 @@ export function rewriteNote(answer: RewriteAnswer): string {
   const changes = orderedChanges(answer.changes);
   const swaps = changes.filter((c) => c.swapped).map((c) => `${c.from.name} → ${c.partial ? 'part ' : ''}${c.to.name}`);
   const amounts = changes.filter((c) => !c.swapped).length;
-  const parts = [
-    swaps.length > 0 ? swaps.join('; ') : 'No swaps',
-    amounts > 0 ? `${amounts} amount${amounts === 1 ? '' : 's'} adjusted` : '',
-  ].filter(Boolean);
+  const parts = [swaps.length > 0 ? swaps.join('; ') : 'No swaps', amounts > 0 ? `${amounts} amount${amounts === 1 ? '' : 's'} adjusted` : ''].filter(Boolean);
   const note = `Lighter rewrite: ${parts.join('. ')}.`;
   return note.length > NOTE_MAX ? `${note.slice(0, NOTE_MAX - 1)}…` : note;
 }

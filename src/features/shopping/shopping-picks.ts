@@ -24,7 +24,9 @@ export function isValidPortions(portions: number): boolean {
 function isPick(value: unknown): value is ShoppingPick {
   if (!value || typeof value !== 'object') return false;
   const p = value as Record<string, unknown>;
-  return wholeIn(p.recipeId, 1, Number.MAX_SAFE_INTEGER) && wholeIn(p.versionNumber, 1, Number.MAX_SAFE_INTEGER) && wholeIn(p.portions, MIN_PORTIONS, MAX_PORTIONS);
+  return (
+    wholeIn(p.recipeId, 1, Number.MAX_SAFE_INTEGER) && wholeIn(p.versionNumber, 1, Number.MAX_SAFE_INTEGER) && wholeIn(p.portions, MIN_PORTIONS, MAX_PORTIONS)
+  );
 }
 
 export function loadPicks(): ShoppingPick[] {

@@ -1,12 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import {
-  everydayVolume,
-  formatParsedAmount,
-  formatQuantity,
-  formatVolume,
-  readGrams,
-  unitWords,
-} from '../../../src/features/analysis/amount-words';
+import { everydayVolume, formatParsedAmount, formatQuantity, formatVolume, readGrams, unitWords } from '../../../src/features/analysis/amount-words';
 import { ML_PER_CUP, ML_PER_TBSP, ML_PER_TSP } from '../../../shared/units';
 
 describe('formatQuantity', () => {

@@ -11,7 +11,14 @@ import {
   withoutLine,
   type KitchenLine,
 } from '../../../src/features/analysis/kitchen-lines';
-import { KITCHEN_STORAGE_KEY, loadKitchen, parseKitchen, saveKitchen, serializeKitchen, type KitchenSnapshot } from '../../../src/features/analysis/kitchen-storage';
+import {
+  KITCHEN_STORAGE_KEY,
+  loadKitchen,
+  parseKitchen,
+  saveKitchen,
+  serializeKitchen,
+  type KitchenSnapshot,
+} from '../../../src/features/analysis/kitchen-storage';
 
 const lines: KitchenLine[] = [
   { key: 'a', input: '12 oz elbow macaroni' },

@@ -64,8 +64,12 @@ describe('apiErrorFromResponse', () => {
   it('is readable on 429 without a body', () => {
     expect(apiErrorFromResponse(429, undefined, null).message).toMatch(/wait a minute/);
   });
-  it('does not treat an infeasible rewrite\'s details as field errors', () => {
-    const e = apiErrorFromResponse(422, { error: { code: 'infeasible', message: 'Best reachable…', details: { bestReachable: { kcal: 1 }, binding: ['proteinMinG'] } } }, null);
+  it("does not treat an infeasible rewrite's details as field errors", () => {
+    const e = apiErrorFromResponse(
+      422,
+      { error: { code: 'infeasible', message: 'Best reachable…', details: { bestReachable: { kcal: 1 }, binding: ['proteinMinG'] } } },
+      null,
+    );
     expect(e.fieldErrors).toEqual({});
     expect(e.details).toEqual({ bestReachable: { kcal: 1 }, binding: ['proteinMinG'] });
   });
@@ -105,9 +109,7 @@ describe('createApiClient', () => {
     let tokenN = 0;
     const { impl, calls } = fakeFetch((call) => {
       if (call.url === '/api/auth/csrf') return json(200, { token: `tok-${++tokenN}` });
-      return header(call, 'X-CSRF-Token') === 'tok-1'
-        ? json(403, { error: { code: 'csrf_invalid', message: 'Invalid CSRF token' } })
-        : json(200, { ok: true });
+      return header(call, 'X-CSRF-Token') === 'tok-1' ? json(403, { error: { code: 'csrf_invalid', message: 'Invalid CSRF token' } }) : json(200, { ok: true });
     });
     const api = createApiClient(impl);
     await expect(api.post('/api/x', {})).resolves.toEqual({ ok: true });

@@ -15,7 +15,9 @@ describe('splitLinks', () => {
     expect(links('https://example.test/wiki/Pie_(dish), then')).toEqual(['https://example.test/wiki/Pie_(dish)']);
   });
   it('links nothing else', () => {
-    expect(splitLinks('javascript:alert(1) ftp://x.test mailto:a@b.test')).toEqual([{ kind: 'text', text: 'javascript:alert(1) ftp://x.test mailto:a@b.test' }]);
+    expect(splitLinks('javascript:alert(1) ftp://x.test mailto:a@b.test')).toEqual([
+      { kind: 'text', text: 'javascript:alert(1) ftp://x.test mailto:a@b.test' },
+    ]);
     expect(splitLinks('')).toEqual([]);
   });
 });
@@ -23,6 +25,10 @@ describe('splitLinks', () => {
 describe('newestFirst', () => {
   it('orders by the time received', () => {
     const m = (id: string, receivedAt: string): OutboxMessage => ({ id, from: '', to: [], subject: '', text: '', receivedAt });
-    expect(newestFirst([m('a', '2026-01-01T10:00:00Z'), m('b', '2026-01-02T09:00:00Z'), m('c', '2026-01-01T11:00:00Z')]).map((x) => x.id)).toEqual(['b', 'c', 'a']);
+    expect(newestFirst([m('a', '2026-01-01T10:00:00Z'), m('b', '2026-01-02T09:00:00Z'), m('c', '2026-01-01T11:00:00Z')]).map((x) => x.id)).toEqual([
+      'b',
+      'c',
+      'a',
+    ]);
   });
 });

@@ -26,7 +26,12 @@ function swap(over: Partial<Swap>): Swap {
 
 const library: Swap[] = [
   swap({ id: 1, fromRole: 'melting-cheese', note: 'Bake 5 minutes longer for melt', tags: ['Pizza night'], status: 'published' }),
-  swap({ id: 2, fromFood: { id: 3, source: 'usda-sr28', sourceId: '01036', name: 'Cheese, ricotta, whole milk' }, note: 'Blend smooth first', tags: ['bakes'] }),
+  swap({
+    id: 2,
+    fromFood: { id: 3, source: 'usda-sr28', sourceId: '01036', name: 'Cheese, ricotta, whole milk' },
+    note: 'Blend smooth first',
+    tags: ['bakes'],
+  }),
   swap({ id: 3, fromRole: 'cream', note: 'Crème légère stirs in off the heat', status: 'published' }),
 ];
 
@@ -87,7 +92,15 @@ describe('swapRequestFromDraft', () => {
     }
   });
   it('builds a food swap, sending status only for a new one', () => {
-    const draft = { ...emptySwapDraft(), fromFood: mozzarella, toFood: light, volumeRatio: '1,25', note: '  Bake 5 minutes longer  ', tags: 'a, b', publishNow: true };
+    const draft = {
+      ...emptySwapDraft(),
+      fromFood: mozzarella,
+      toFood: light,
+      volumeRatio: '1,25',
+      note: '  Bake 5 minutes longer  ',
+      tags: 'a, b',
+      publishNow: true,
+    };
     const created = swapRequestFromDraft(draft, { isNew: true });
     expect(created).toEqual({
       ok: true,
@@ -97,14 +110,20 @@ describe('swapRequestFromDraft', () => {
     expect(edited.ok && 'status' in edited.request).toBe(false);
   });
   it('builds a role swap without the food chosen before switching', () => {
-    const r = swapRequestFromDraft({ ...emptySwapDraft(), fromKind: 'role', fromRole: 'melting-cheese', fromFood: mozzarella, toFood: light }, { isNew: false });
+    const r = swapRequestFromDraft(
+      { ...emptySwapDraft(), fromKind: 'role', fromRole: 'melting-cheese', fromFood: mozzarella, toFood: light },
+      { isNew: false },
+    );
     expect(r.ok && r.request.fromFoodId).toBe(null);
     expect(r.ok && r.request.fromRole).toBe('melting-cheese');
   });
   it('round-trips a saved swap through the form', () => {
     const saved = library[0];
     const r = swapRequestFromDraft(draftFromSwap(saved), { isNew: false });
-    expect(r).toEqual({ ok: true, request: { fromFoodId: null, fromRole: 'melting-cheese', toFoodId: 20, volumeRatio: 1, note: saved.note, tags: saved.tags } });
+    expect(r).toEqual({
+      ok: true,
+      request: { fromFoodId: null, fromRole: 'melting-cheese', toFoodId: 20, volumeRatio: 1, note: saved.note, tags: saved.tags },
+    });
   });
   it('puts the server field messages under the form fields', () => {
     expect(swapDraftErrorsFrom({ toFoodId: 'Unknown food.', fromFoodId: 'Give either fromFoodId or fromRole.' }, 'role')).toEqual({

@@ -20,7 +20,17 @@ describe('body units', () => {
 });
 
 describe('estimateInput', () => {
-  const us = { ...emptyEstimate('us'), sex: 'female', ageYears: '34', heightFeet: '5', heightInches: '6', weightLb: '150', activity: 'moderate', goal: 'lose', mealsPerDay: '3' };
+  const us = {
+    ...emptyEstimate('us'),
+    sex: 'female',
+    ageYears: '34',
+    heightFeet: '5',
+    heightInches: '6',
+    weightLb: '150',
+    activity: 'moderate',
+    goal: 'lose',
+    mealsPerDay: '3',
+  };
 
   it('converts US stats to what the estimate takes', () => {
     const r = estimateInput(us);
@@ -31,7 +41,16 @@ describe('estimateInput', () => {
     expect(r.input).toMatchObject({ sex: 'female', ageYears: 34, activity: 'moderate', goal: 'lose', mealsPerDay: 3 });
   });
   it('gives the same input from metric stats', () => {
-    const metric = { ...emptyEstimate('metric'), sex: 'female', ageYears: '34', heightCm: '167.64', weightKg: '68.0388555', activity: 'moderate', goal: 'lose', mealsPerDay: '3' };
+    const metric = {
+      ...emptyEstimate('metric'),
+      sex: 'female',
+      ageYears: '34',
+      heightCm: '167.64',
+      weightKg: '68.0388555',
+      activity: 'moderate',
+      goal: 'lose',
+      mealsPerDay: '3',
+    };
     const a = estimateInput(us);
     const b = estimateInput(metric);
     expect(a.ok && b.ok).toBe(true);
@@ -52,7 +71,15 @@ describe('estimateInput', () => {
 });
 
 describe('targets form', () => {
-  const estimate = { bmrKcal: 1397.15, tdeeKcal: 2165.58, kcalPerDay: 1732.47, proteinGPerDay: 136.08, proteinGPerKg: 2, perMeal: { kcal: 577.49, proteinG: 45.36 }, cautions: [] };
+  const estimate = {
+    bmrKcal: 1397.15,
+    tdeeKcal: 2165.58,
+    kcalPerDay: 1732.47,
+    proteinGPerDay: 136.08,
+    proteinGPerKg: 2,
+    perMeal: { kcal: 577.49, proteinG: 45.36 },
+    cautions: [],
+  };
 
   it('applies an estimate as whole numbers and keeps the rest of the form', () => {
     const before = { ...targetsValues(null), fiberMinG: '8', note: 'Keep lunches light.' };

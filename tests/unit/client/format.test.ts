@@ -1,14 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import {
-  everydayWeight,
-  formatGrams,
-  formatKcal,
-  formatMacroG,
-  formatMg,
-  formatNumber,
-  formatWeight,
-  GRAMS_PER_OUNCE,
-} from '../../../src/lib/format';
+import { everydayWeight, formatGrams, formatKcal, formatMacroG, formatMg, formatNumber, formatWeight, GRAMS_PER_OUNCE } from '../../../src/lib/format';
 
 describe('format', () => {
   it('keeps one decimal under 10 and whole numbers above', () => {

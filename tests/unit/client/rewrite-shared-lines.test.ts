@@ -9,7 +9,13 @@ const beef = food(23557, 'Beef, ground, 80% lean meat / 20% fat, raw');
 const turkey = food(5305, 'Turkey, ground, 93% lean, 7% fat, raw');
 const onion = food(11282, 'Onions, raw');
 
-const planLine = (index: number, f: ReturnType<typeof food>, grams: number): RewritePlanLine => ({ index, food: f, grams, volumeMl: grams, nutrients: zeroNutrients() });
+const planLine = (index: number, f: ReturnType<typeof food>, grams: number): RewritePlanLine => ({
+  index,
+  food: f,
+  grams,
+  volumeMl: grams,
+  nutrients: zeroNutrients(),
+});
 const plan = (lines: RewritePlanLine[]) => ({ lines, totals: zeroNutrients(), perServing: zeroNutrients(), volumeMl: 0 });
 
 // An invented chili: line 0 shared half and half (beef kept, turkey in), line 1 unchanged, line 2 unread.

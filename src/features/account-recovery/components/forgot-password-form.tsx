@@ -32,8 +32,8 @@ export function ForgotPasswordForm() {
     return (
       <div className="flex flex-col gap-4">
         <Alert tone="success" title="Check your e-mail">
-          If <strong className="break-all">{sentTo}</strong> has a Hearthswap account, a link to choose a new password is on
-          its way. It works for 2 hours and only once.
+          If <strong className="break-all">{sentTo}</strong> has a Hearthswap account, a link to choose a new password is on its way. It works for 2 hours and
+          only once.
         </Alert>
         <p className="text-ink-soft">
           Nothing after a few minutes? Look in the spam folder, or{' '}

@@ -34,7 +34,8 @@ export function ResetPasswordForm({ token }: { token: string }) {
   }
 
   const linkProblem =
-    isApiError(confirm.error) && (confirm.error.status === 410 || confirm.error.status === 404 || (confirm.error.status === 400 && 'token' in confirm.error.fieldErrors));
+    isApiError(confirm.error) &&
+    (confirm.error.status === 410 || confirm.error.status === 404 || (confirm.error.status === 400 && 'token' in confirm.error.fieldErrors));
   if (linkProblem && isApiError(confirm.error)) {
     return (
       <div className="flex flex-col gap-4">
@@ -56,10 +57,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
       return;
     }
     setError(undefined);
-    confirm.mutate(
-      { token, password },
-      { onError: (e) => setError(isApiError(e) ? e.fieldErrors.password : undefined) },
-    );
+    confirm.mutate({ token, password }, { onError: (e) => setError(isApiError(e) ? e.fieldErrors.password : undefined) });
   }
 
   return (

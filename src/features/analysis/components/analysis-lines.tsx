@@ -51,7 +51,10 @@ function sourceNote(food: FoodSummary): string {
 
 /** "1 cup, fluid (yields 2 cups whipped)" → "1 cup": the measure, without the catalogue's asides. */
 function measureWords(portion: string): string {
-  return portion.replace(/\s*\([^)]*\)/g, '').split(',')[0].trim();
+  return portion
+    .replace(/\s*\([^)]*\)/g, '')
+    .split(',')[0]
+    .trim();
 }
 
 function LineRow({
@@ -89,9 +92,7 @@ function LineRow({
   const shownFood = line.foodId !== undefined ? (picked.find((p) => p.id === line.foodId) ?? food) : food;
   const amount = analysed ? formatParsedAmount(analysed.parsed) : null;
   // A line with no food needs a food first, unless it also gave no amount ("salt to taste").
-  const needsAmount = Boolean(
-    analysed && analysed.grams === 0 && line.grams === undefined && (analysed.food !== null || analysed.parsed.quantity === null),
-  );
+  const needsAmount = Boolean(analysed && analysed.grams === 0 && line.grams === undefined && (analysed.food !== null || analysed.parsed.quantity === null));
   const checkMatch = Boolean(food && analysed && !analysed.pinned.food && (analysed.checkMatch || analysed.confidence < CHECK_MATCH_BELOW));
   const missingModifier = analysed && !analysed.pinned.food ? analysed.missingModifier : null;
   const grams = line.grams ?? analysed?.grams ?? null;

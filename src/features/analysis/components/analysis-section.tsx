@@ -49,8 +49,8 @@ export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHre
           <ErrorState title="The recipe wasn't analysed" error={kitchen.error} onRetry={kitchen.retry} />
         ) : (
           <EmptyState title="Nothing on the board yet">
-            Paste an ingredient list and press Analyse recipe, or add foods one by one. Every line shows up here with its weight in
-            grams, and the dish with its calories and protein per serving.
+            Paste an ingredient list and press Analyse recipe, or add foods one by one. Every line shows up here with its weight in grams, and the dish with its
+            calories and protein per serving.
           </EmptyState>
         )}
       </section>
@@ -79,20 +79,14 @@ export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHre
       </div>
 
       {kitchen.error != null && (
-        <ErrorState
-          title={analysis ? 'The numbers didn’t update' : "The recipe wasn't analysed"}
-          error={kitchen.error}
-          onRetry={kitchen.retry}
-        />
+        <ErrorState title={analysis ? 'The numbers didn’t update' : "The recipe wasn't analysed"} error={kitchen.error} onRetry={kitchen.retry} />
       )}
 
-      {analysis ? (
-        <ServingHeadline analysis={analysis} />
-      ) : (
-        kitchen.error == null && <LoadingState label="Reading and weighing every line…" />
-      )}
+      {analysis ? <ServingHeadline analysis={analysis} /> : kitchen.error == null && <LoadingState label="Reading and weighing every line…" />}
 
-      {analysis && !kitchen.stale && <IncompleteTotalsAlert lineNumbers={incompleteLineNumbers(analysis.lines.map((l) => ({ food: l.food, grams: l.grams })))} />}
+      {analysis && !kitchen.stale && (
+        <IncompleteTotalsAlert lineNumbers={incompleteLineNumbers(analysis.lines.map((l) => ({ food: l.food, grams: l.grams })))} />
+      )}
       {kitchen.removed && (
         <Alert
           tone="info"
@@ -108,9 +102,9 @@ export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHre
       )}
       {analysis?.dishType && (
         <p className="text-sm text-ink-soft">
-          Hearthswap reads this as <strong className="text-ink">{DISH_TYPE_WORDS[analysis.dishType]}</strong> and says under each food what it
-          does in the dish. Salt, spices, leaveners, extracts, aromatics and cooking liquids are kept as written in a rewrite; pick another job
-          for a line to let the rewrite change it.
+          Hearthswap reads this as <strong className="text-ink">{DISH_TYPE_WORDS[analysis.dishType]}</strong> and says under each food what it does in the dish.
+          Salt, spices, leaveners, extracts, aromatics and cooking liquids are kept as written in a rewrite; pick another job for a line to let the rewrite
+          change it.
         </p>
       )}
 

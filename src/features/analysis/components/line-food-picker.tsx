@@ -22,9 +22,7 @@ export interface LineFoodPickerProps {
 
 /** Which catalogue food a line is: the match, the alternatives, a search, or back to the automatic match. */
 export function LineFoodPicker({ label, food, options, pinned, disabled, onChoose, onSearch, ref }: LineFoodPickerProps) {
-  const choices = [...(food ? [food] : []), ...options.filter((o) => o.id !== food?.id)].filter(
-    (o, i, all) => all.findIndex((x) => x.id === o.id) === i,
-  );
+  const choices = [...(food ? [food] : []), ...options.filter((o) => o.id !== food?.id)].filter((o, i, all) => all.findIndex((x) => x.id === o.id) === i);
   return (
     <SelectField
       ref={ref}

@@ -14,7 +14,8 @@ export const recipeInputSchema = z.object({
     .max(RECIPE_TEXT_MAX_LENGTH, { error: `Keep the recipe under ${RECIPE_TEXT_MAX_LENGTH.toLocaleString('en-US')} characters.` })
     .refine((text) => ingredientLines(text).length > 0, { error: 'Paste at least one ingredient line.' })
     .refine((text) => ingredientLines(text).length <= MAX_LINES, {
-      error: (issue) => `A recipe has at most ${MAX_LINES} ingredient lines; this has ${ingredientLines(String(issue.input)).length}. Split it or leave out the lines that aren’t ingredients.`,
+      error: (issue) =>
+        `A recipe has at most ${MAX_LINES} ingredient lines; this has ${ingredientLines(String(issue.input)).length}. Split it or leave out the lines that aren’t ingredients.`,
     }),
   servings: z
     .number({ error: 'Enter how many servings the recipe makes.' })

@@ -50,13 +50,7 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: User) => void })
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-6">
       <FormErrorAlert error={signUp.error} fieldsShown={fieldsShown} />
-      <ChoiceCards
-        legend="How will you use Hearthswap?"
-        options={ROLE_CHOICES}
-        columns={2}
-        error={errors.role?.message}
-        inputProps={register('role')}
-      />
+      <ChoiceCards legend="How will you use Hearthswap?" options={ROLE_CHOICES} columns={2} error={errors.role?.message} inputProps={register('role')} />
       <TextField
         label="Display name"
         hint="Shown to your coach or clients. A first name is plenty."

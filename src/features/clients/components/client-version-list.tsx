@@ -33,7 +33,10 @@ export interface ClientVersionListProps {
 export function ClientVersionList({ clientId, clientName, targets, reviewHref }: ClientVersionListProps) {
   const versions = useClientVersions(clientId);
   if (versions.isPending) return <LoadingState label="Loading their saved versions…" />;
-  if (versions.isError) return <ErrorState title="Their saved versions didn't load" error={versions.error} onRetry={() => void versions.refetch()} retrying={versions.isFetching} />;
+  if (versions.isError)
+    return (
+      <ErrorState title="Their saved versions didn't load" error={versions.error} onRetry={() => void versions.refetch()} retrying={versions.isFetching} />
+    );
   if (versions.data.length === 0) {
     return (
       <EmptyState title="Nothing saved yet">
@@ -44,7 +47,10 @@ export function ClientVersionList({ clientId, clientName, targets, reviewHref }:
   return (
     <ul aria-label={`Versions ${clientName} saved`} className="flex flex-col divide-y divide-line">
       {versions.data.map((version) => (
-        <li key={`${version.recipeId}-${version.number}`} className="flex flex-col gap-2 py-4 first:pt-0 last:pb-0 sm:flex-row sm:items-start sm:justify-between sm:gap-6">
+        <li
+          key={`${version.recipeId}-${version.number}`}
+          className="flex flex-col gap-2 py-4 first:pt-0 last:pb-0 sm:flex-row sm:items-start sm:justify-between sm:gap-6"
+        >
           <div className="flex min-w-0 flex-col gap-1">
             <Link to={reviewHref(version)} className="self-start font-extrabold text-accent-strong underline-offset-2 hover:underline">
               {version.recipeTitle || 'Untitled recipe'}

@@ -49,7 +49,10 @@ export function CommentThread({ recipeId, number, viewerId, otherName }: { recip
           {comments.data.map((comment) => {
             const mine = comment.author.id === viewerId;
             return (
-              <li key={comment.id} className={mine ? 'rounded-card border border-ember-200 bg-ember-50 p-4 sm:ml-10' : 'rounded-card border border-line bg-surface p-4 sm:mr-10'}>
+              <li
+                key={comment.id}
+                className={mine ? 'rounded-card border border-ember-200 bg-ember-50 p-4 sm:ml-10' : 'rounded-card border border-line bg-surface p-4 sm:mr-10'}
+              >
                 <p className="flex flex-wrap items-center gap-x-2 gap-y-1 text-sm">
                   <span className="font-bold text-ink">{mine ? 'You' : comment.author.displayName}</span>
                   {comment.author.role === 'coach' && <Badge tone="ember">Coach</Badge>}

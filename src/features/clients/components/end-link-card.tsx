@@ -15,8 +15,7 @@ export function EndLinkCard({ client, onEnded }: { client: Client; onEnded: () =
     <Card title="End the link" className="border-beet-200">
       <div className="flex flex-col gap-4">
         <p className="text-ink-soft">
-          {client.displayName} stops getting your swaps and targets, and you can no longer see the versions they save. Their
-          recipes stay theirs.
+          {client.displayName} stops getting your swaps and targets, and you can no longer see the versions they save. Their recipes stay theirs.
         </p>
         <Button variant="danger" className="self-start" onClick={() => setConfirming(true)}>
           End the link with {client.displayName}

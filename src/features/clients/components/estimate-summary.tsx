@@ -18,7 +18,12 @@ export function EstimateSummary({ estimate, mealsPerDay }: { estimate: TargetEst
         </ul>
       </Alert>
       <dl className="grid grid-cols-2 gap-3">
-        <Stat label="Per meal, energy" value={formatKcal(rounded.perMeal.kcal)} note={`over ${mealsPerDay} meal${mealsPerDay === 1 ? '' : 's'}`} className="border-ember-200 bg-ember-50" />
+        <Stat
+          label="Per meal, energy"
+          value={formatKcal(rounded.perMeal.kcal)}
+          note={`over ${mealsPerDay} meal${mealsPerDay === 1 ? '' : 's'}`}
+          className="border-ember-200 bg-ember-50"
+        />
         <Stat label="Per meal, protein" value={formatMacroG(rounded.perMeal.proteinG)} note="at least" className="border-herb-200 bg-herb-50" />
       </dl>
       <dl className="flex flex-col">

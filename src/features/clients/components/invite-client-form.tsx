@@ -41,20 +41,20 @@ export function InviteClientForm({ onInvited }: { onInvited: (email: string) => 
         </Alert>
       )}
       <TextField
-          label="Client's e-mail"
-          hint="They get a link that works for 7 days. They sign in with a cook account — or create one — and accept."
-          type="email"
-          inputMode="email"
-          autoComplete="off"
-          autoCapitalize="none"
-          spellCheck={false}
-          value={email}
-          onChange={(e) => {
-            setEmail(e.target.value);
-            if (error) setError(undefined);
-          }}
-          error={error}
-        />
+        label="Client's e-mail"
+        hint="They get a link that works for 7 days. They sign in with a cook account — or create one — and accept."
+        type="email"
+        inputMode="email"
+        autoComplete="off"
+        autoCapitalize="none"
+        spellCheck={false}
+        value={email}
+        onChange={(e) => {
+          setEmail(e.target.value);
+          if (error) setError(undefined);
+        }}
+        error={error}
+      />
       <Button type="submit" loading={invite.isPending} loadingLabel="Sending…" className="self-start">
         Send the invitation
       </Button>

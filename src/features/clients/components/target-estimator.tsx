@@ -35,11 +35,13 @@ export function TargetEstimator({ defaultUnits, onApply }: TargetEstimatorProps)
   const [errors, setErrors] = useState<EstimateErrors>({});
   const [estimatedFor, setEstimatedFor] = useState<number | null>(null);
 
-  const set = (field: keyof EstimateValues, errorField: keyof EstimateErrors = field as keyof EstimateErrors) => (event: { target: { value: string } }) => {
-    const value = event.target.value;
-    setValues((v) => ({ ...v, [field]: value }));
-    if (errors[errorField]) setErrors((e) => ({ ...e, [errorField]: undefined }));
-  };
+  const set =
+    (field: keyof EstimateValues, errorField: keyof EstimateErrors = field as keyof EstimateErrors) =>
+    (event: { target: { value: string } }) => {
+      const value = event.target.value;
+      setValues((v) => ({ ...v, [field]: value }));
+      if (errors[errorField]) setErrors((e) => ({ ...e, [errorField]: undefined }));
+    };
 
   function submit(event: FormEvent) {
     event.preventDefault();
@@ -64,8 +66,8 @@ export function TargetEstimator({ defaultUnits, onApply }: TargetEstimatorProps)
   return (
     <div className="flex flex-col gap-5">
       <Alert tone="caution" title="For healthy adults only" announce={false}>
-        Estimates, not medical advice. For a medical condition, pregnancy, an eating disorder or anyone under 18, targets
-        belong with a physician or registered dietitian.
+        Estimates, not medical advice. For a medical condition, pregnancy, an eating disorder or anyone under 18, targets belong with a physician or registered
+        dietitian.
       </Alert>
       <form onSubmit={submit} noValidate className="flex flex-col gap-4">
         <fieldset className="flex flex-col gap-2" aria-describedby={errors.sex ? `${id}-sex-error` : undefined}>
@@ -128,13 +130,33 @@ export function TargetEstimator({ defaultUnits, onApply }: TargetEstimatorProps)
           )}
         </div>
         {values.units === 'metric' ? (
-          <TextField label="Height (cm)" {...numeric} value={values.heightCm} onChange={set('heightCm', 'height')} error={errors.height} containerClassName="sm:max-w-[calc(50%-0.5rem)]" />
+          <TextField
+            label="Height (cm)"
+            {...numeric}
+            value={values.heightCm}
+            onChange={set('heightCm', 'height')}
+            error={errors.height}
+            containerClassName="sm:max-w-[calc(50%-0.5rem)]"
+          />
         ) : (
           <fieldset className="flex flex-col gap-1.5" aria-describedby={errors.height ? `${id}-height-error` : undefined}>
             <legend className="mb-1.5 font-bold text-ink">Height</legend>
             <div className="grid grid-cols-2 gap-4">
-              <TextField label="Feet" inputMode="numeric" autoComplete="off" value={values.heightFeet} onChange={set('heightFeet', 'height')} aria-invalid={errors.height ? true : undefined} />
-              <TextField label="Inches" {...numeric} value={values.heightInches} onChange={set('heightInches', 'height')} aria-invalid={errors.height ? true : undefined} />
+              <TextField
+                label="Feet"
+                inputMode="numeric"
+                autoComplete="off"
+                value={values.heightFeet}
+                onChange={set('heightFeet', 'height')}
+                aria-invalid={errors.height ? true : undefined}
+              />
+              <TextField
+                label="Inches"
+                {...numeric}
+                value={values.heightInches}
+                onChange={set('heightInches', 'height')}
+                aria-invalid={errors.height ? true : undefined}
+              />
             </div>
             {errors.height && (
               <p id={`${id}-height-error`} className="text-sm font-semibold text-beet-700">
@@ -159,7 +181,14 @@ export function TargetEstimator({ defaultUnits, onApply }: TargetEstimatorProps)
               </option>
             ))}
           </SelectField>
-          <TextField label="Meals a day" inputMode="numeric" autoComplete="off" value={values.mealsPerDay} onChange={set('mealsPerDay')} error={errors.mealsPerDay} />
+          <TextField
+            label="Meals a day"
+            inputMode="numeric"
+            autoComplete="off"
+            value={values.mealsPerDay}
+            onChange={set('mealsPerDay')}
+            error={errors.mealsPerDay}
+          />
         </div>
         {serverFailure && (
           <Alert tone="danger" title="No estimate" assertive>

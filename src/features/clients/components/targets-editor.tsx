@@ -73,7 +73,10 @@ export function TargetsEditor({ client, defaultUnits }: { client: Client; defaul
 
   return (
     <div className="grid items-start gap-6 lg:grid-cols-2">
-      <Card title="Estimate from body stats" description="Mifflin–St Jeor resting energy, an activity factor and the goal give the daily energy; protein comes from body weight.">
+      <Card
+        title="Estimate from body stats"
+        description="Mifflin–St Jeor resting energy, an activity factor and the goal give the daily energy; protein comes from body weight."
+      >
         <TargetEstimator
           defaultUnits={defaultUnits}
           onApply={(estimate, meals) => {
@@ -88,7 +91,9 @@ export function TargetsEditor({ client, defaultUnits }: { client: Client; defaul
 
       <Card
         title={`Targets for ${client.displayName}`}
-        description={client.targets ? 'What their rewrites aim for by default. Change and save them at any time.' : 'None set yet. Estimate them, or type your own.'}
+        description={
+          client.targets ? 'What their rewrites aim for by default. Change and save them at any time.' : 'None set yet. Estimate them, or type your own.'
+        }
       >
         <form ref={formRef} onSubmit={submit} noValidate className="flex scroll-mt-4 flex-col gap-5">
           {fromEstimate && (
@@ -105,9 +110,22 @@ export function TargetsEditor({ client, defaultUnits }: { client: Client; defaul
             <legend className="mb-1 font-bold text-ink">Per meal</legend>
             <div className="grid gap-4 sm:grid-cols-2">
               <TextField label="Energy, at most (kcal)" {...numeric} value={values.perMealKcal} onChange={set('perMealKcal')} error={errors.perMealKcal} />
-              <TextField label="Protein, at least (g)" {...numeric} value={values.perMealProteinG} onChange={set('perMealProteinG')} error={errors.perMealProteinG} />
+              <TextField
+                label="Protein, at least (g)"
+                {...numeric}
+                value={values.perMealProteinG}
+                onChange={set('perMealProteinG')}
+                error={errors.perMealProteinG}
+              />
               <TextField label="Fiber, at least (g)" optional {...numeric} value={values.fiberMinG} onChange={set('fiberMinG')} error={errors.fiberMinG} />
-              <TextField label="Sodium, at most (mg)" optional {...numeric} value={values.sodiumMaxMg} onChange={set('sodiumMaxMg')} error={errors.sodiumMaxMg} />
+              <TextField
+                label="Sodium, at most (mg)"
+                optional
+                {...numeric}
+                value={values.sodiumMaxMg}
+                onChange={set('sodiumMaxMg')}
+                error={errors.sodiumMaxMg}
+              />
             </div>
           </fieldset>
           <fieldset className="flex flex-col gap-3">
@@ -117,7 +135,14 @@ export function TargetsEditor({ client, defaultUnits }: { client: Client; defaul
             <div className="grid grid-cols-3 gap-3 sm:gap-4">
               <TextField label="Energy (kcal)" {...numeric} value={values.kcalPerDay} onChange={set('kcalPerDay')} error={errors.kcalPerDay} />
               <TextField label="Protein (g)" {...numeric} value={values.proteinGPerDay} onChange={set('proteinGPerDay')} error={errors.proteinGPerDay} />
-              <TextField label="Meals" inputMode="numeric" autoComplete="off" value={values.mealsPerDay} onChange={set('mealsPerDay')} error={errors.mealsPerDay} />
+              <TextField
+                label="Meals"
+                inputMode="numeric"
+                autoComplete="off"
+                value={values.mealsPerDay}
+                onChange={set('mealsPerDay')}
+                error={errors.mealsPerDay}
+              />
             </div>
             <DailyCheck values={values} />
           </fieldset>

@@ -42,7 +42,11 @@ export function VersionReview({ version, unitSystem, clientTargets }: { version:
           className={meets && !meets.protein ? 'border-honey-200 bg-honey-50' : undefined}
         />
         <Stat label="Protein density" value={density === null ? '—' : formatNumber(density, 1)} note="g protein / 100 kcal" />
-        <Stat label="Servings" value={formatNumber(servings)} note={`${formatWeight(version.lines.reduce((sum, l) => sum + l.grams, 0) / Math.max(1, servings), unitSystem)} each`} />
+        <Stat
+          label="Servings"
+          value={formatNumber(servings)}
+          note={`${formatWeight(version.lines.reduce((sum, l) => sum + l.grams, 0) / Math.max(1, servings), unitSystem)} each`}
+        />
       </dl>
 
       {version.note && (
@@ -62,17 +66,29 @@ export function VersionReview({ version, unitSystem, clientTargets }: { version:
             <caption className="sr-only">Ingredient lines with weight, energy and protein for the whole dish</caption>
             <thead>
               <tr className="border-b border-line bg-oat-100 text-left">
-                <th scope="col" className="px-4 py-2.5 font-bold">Line</th>
-                <th scope="col" className="px-4 py-2.5 font-bold">Food</th>
-                <th scope="col" className="px-4 py-2.5 text-right font-bold">Weight</th>
-                <th scope="col" className="px-4 py-2.5 text-right font-bold">Energy</th>
-                <th scope="col" className="px-4 py-2.5 text-right font-bold">Protein</th>
+                <th scope="col" className="px-4 py-2.5 font-bold">
+                  Line
+                </th>
+                <th scope="col" className="px-4 py-2.5 font-bold">
+                  Food
+                </th>
+                <th scope="col" className="px-4 py-2.5 text-right font-bold">
+                  Weight
+                </th>
+                <th scope="col" className="px-4 py-2.5 text-right font-bold">
+                  Energy
+                </th>
+                <th scope="col" className="px-4 py-2.5 text-right font-bold">
+                  Protein
+                </th>
               </tr>
             </thead>
             <tbody>
               {version.lines.map((line, index) => (
                 <tr key={index} className="border-b border-line align-top last:border-b-0 even:bg-oat-50">
-                  <th scope="row" className="px-4 py-2.5 text-left font-semibold">{line.input}</th>
+                  <th scope="row" className="px-4 py-2.5 text-left font-semibold">
+                    {line.input}
+                  </th>
                   <td className="px-4 py-2.5 text-ink-soft">{line.foodName ?? 'Not matched'}</td>
                   <td className="px-4 py-2.5 text-right whitespace-nowrap tabular-nums">{formatWeight(line.grams, unitSystem)}</td>
                   <td className="px-4 py-2.5 text-right whitespace-nowrap tabular-nums">{formatKcal(line.nutrients.kcal)}</td>

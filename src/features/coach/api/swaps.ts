@@ -58,9 +58,7 @@ function useSwapCache() {
       void queryClient.invalidateQueries({ queryKey: coachKeys.swaps });
     },
     forget(id: number) {
-      queryClient.setQueryData<{ swaps: Swap[] }>(coachKeys.swaps, (previous) =>
-        previous ? { swaps: previous.swaps.filter((s) => s.id !== id) } : previous,
-      );
+      queryClient.setQueryData<{ swaps: Swap[] }>(coachKeys.swaps, (previous) => (previous ? { swaps: previous.swaps.filter((s) => s.id !== id) } : previous));
       void queryClient.invalidateQueries({ queryKey: coachKeys.swaps });
     },
   };
@@ -85,8 +83,7 @@ export function useUpdateSwap() {
 export function useSetSwapPublished() {
   const cache = useSwapCache();
   return useMutation({
-    mutationFn: ({ id, published }: { id: number; published: boolean }) =>
-      api.post<Swap>(`/api/swaps/${id}/${published ? 'publish' : 'unpublish'}`),
+    mutationFn: ({ id, published }: { id: number; published: boolean }) => api.post<Swap>(`/api/swaps/${id}/${published ? 'publish' : 'unpublish'}`),
     onSuccess: (swap) => cache.store(swap),
   });
 }

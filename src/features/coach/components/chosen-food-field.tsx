@@ -82,7 +82,10 @@ export function ChosenFoodField({ label, hint, food, onChange, renderFoodSearch,
         ref={chosenRef}
         aria-labelledby={`${id}-label`}
         role="group"
-        className={cx('flex flex-wrap items-center justify-between gap-3 rounded-field border bg-oat-50 px-3.5 py-2.5', error ? 'border-beet-600' : 'border-line-strong')}
+        className={cx(
+          'flex flex-wrap items-center justify-between gap-3 rounded-field border bg-oat-50 px-3.5 py-2.5',
+          error ? 'border-beet-600' : 'border-line-strong',
+        )}
       >
         <div className="flex min-w-0 flex-col">
           <span className="font-semibold text-ink">{food.name}</span>

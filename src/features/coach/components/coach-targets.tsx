@@ -35,8 +35,8 @@ export function CoachTargets({ targets, coachName }: { targets: ClientTargets; c
         </figure>
       )}
       <p className="text-sm text-ink-soft">
-        A rewrite aims for these per serving unless you set other targets for it. They are estimates, not medical advice:
-        if you have a medical condition, are pregnant or breastfeeding, follow your physician or a registered dietitian.
+        A rewrite aims for these per serving unless you set other targets for it. They are estimates, not medical advice: if you have a medical condition, are
+        pregnant or breastfeeding, follow your physician or a registered dietitian.
       </p>
     </div>
   );

@@ -39,7 +39,9 @@ export function InvitationPanel({ token, user, signInHref, signUpHref, onAccepte
         <Card title={CLOSED_TITLES[error.code] ?? 'This invitation link does not work'}>
           <div className="flex flex-col gap-4">
             <p className="text-ink-soft">
-              {error.status === 410 ? errorMessage(error) : 'The link may be incomplete; check that it was copied whole, or ask your coach to send a new invitation.'}
+              {error.status === 410
+                ? errorMessage(error)
+                : 'The link may be incomplete; check that it was copied whole, or ask your coach to send a new invitation.'}
             </p>
             <div className="flex flex-wrap gap-2">
               <Link to={user?.role === 'cook' ? '/coach' : '/'} className={buttonClasses({ variant: 'secondary' })}>
@@ -70,9 +72,9 @@ export function InvitationPanel({ token, user, signInHref, signUpHref, onAccepte
           </div>
         </div>
         <p className="text-ink-soft">
-          {coachName} invites <strong className="break-all text-ink">{email}</strong> to link on Hearthswap. Once linked, their
-          approved swaps are tried first in your rewrites, the targets they set become your defaults, and they can read and
-          comment on the recipe versions you save. The invitation works until {expires}.
+          {coachName} invites <strong className="break-all text-ink">{email}</strong> to link on Hearthswap. Once linked, their approved swaps are tried first
+          in your rewrites, the targets they set become your defaults, and they can read and comment on the recipe versions you save. The invitation works until{' '}
+          {expires}.
         </p>
 
         {accept.isError && (
@@ -96,8 +98,7 @@ export function InvitationPanel({ token, user, signInHref, signUpHref, onAccepte
           </div>
         ) : user.role !== 'cook' ? (
           <Alert tone="caution" title="Only a cook account can join a coach" announce={false}>
-            You're signed in as {user.email}, which is a {user.role} account. Sign out and sign in with the cook account the
-            invitation is for.
+            You're signed in as {user.email}, which is a {user.role} account. Sign out and sign in with the cook account the invitation is for.
           </Alert>
         ) : (
           <div className="flex flex-col gap-3">
@@ -108,8 +109,7 @@ export function InvitationPanel({ token, user, signInHref, signUpHref, onAccepte
             )}
             {user.coachId !== null && (
               <Alert tone="info" announce={false}>
-                You're already linked to a coach. To switch to {coachName}, leave your current coach first on My coach, then
-                come back to this link.
+                You're already linked to a coach. To switch to {coachName}, leave your current coach first on My coach, then come back to this link.
               </Alert>
             )}
             <div className="flex flex-wrap gap-2">

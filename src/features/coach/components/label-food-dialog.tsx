@@ -92,8 +92,8 @@ export function LabelFoodDialog({ open, onClose, onCreated, roleLabel }: LabelFo
     >
       <form id={formId} onSubmit={submit} noValidate className="flex flex-col gap-5 text-ink">
         <p className="text-ink-soft">
-          Copy the numbers for one serving exactly as the package prints them. Hearthswap keeps them per 100 g; you and your
-          clients can then use the food in swaps and recipes.
+          Copy the numbers for one serving exactly as the package prints them. Hearthswap keeps them per 100 g; you and your clients can then use the food in
+          swaps and recipes.
         </p>
         {create.isError && !shownFieldErrors && (
           <Alert tone="danger" title="The food wasn't added" assertive>
@@ -103,12 +103,25 @@ export function LabelFoodDialog({ open, onClose, onCreated, roleLabel }: LabelFo
         <TextField id={`${formId}-name`} label="Name" autoComplete="off" value={values.name} onChange={set('name')} error={errors.name} />
         <fieldset className="flex flex-col gap-3">
           <legend className="mb-1 font-bold text-ink">Serving size</legend>
-          <p className="-mt-1 text-sm text-ink-soft">
-            Labels often give both, e.g. “1/4 cup (28 g)”. With both, Hearthswap knows how much a cup of it weighs.
-          </p>
+          <p className="-mt-1 text-sm text-ink-soft">Labels often give both, e.g. “1/4 cup (28 g)”. With both, Hearthswap knows how much a cup of it weighs.</p>
           <div className="grid gap-3 sm:grid-cols-2">
-            <TextField id={`${formId}-servingSizeG`} label="Grams" {...numberProps} value={values.servingSizeG} onChange={set('servingSizeG')} error={errors.servingSizeG} />
-            <TextField id={`${formId}-servingSizeMl`} label="Millilitres" optional {...numberProps} value={values.servingSizeMl} onChange={set('servingSizeMl')} error={errors.servingSizeMl} />
+            <TextField
+              id={`${formId}-servingSizeG`}
+              label="Grams"
+              {...numberProps}
+              value={values.servingSizeG}
+              onChange={set('servingSizeG')}
+              error={errors.servingSizeG}
+            />
+            <TextField
+              id={`${formId}-servingSizeMl`}
+              label="Millilitres"
+              optional
+              {...numberProps}
+              value={values.servingSizeMl}
+              onChange={set('servingSizeMl')}
+              error={errors.servingSizeMl}
+            />
           </div>
         </fieldset>
         <TextField

@@ -21,7 +21,8 @@ export function MyCoachView({ email, roleLabel }: { email: string; roleLabel: Ro
   const [confirming, setConfirming] = useState(false);
 
   if (mine.isPending) return <LoadingState label="Looking up your coach…" />;
-  if (mine.isError) return <ErrorState title="Your coach's page didn't load" error={mine.error} onRetry={() => void mine.refetch()} retrying={mine.isFetching} />;
+  if (mine.isError)
+    return <ErrorState title="Your coach's page didn't load" error={mine.error} onRetry={() => void mine.refetch()} retrying={mine.isFetching} />;
 
   const { coach, targets, swaps } = mine.data;
   if (!coach) return <NoCoachExplainer email={email} />;
@@ -44,8 +45,8 @@ export function MyCoachView({ email, roleLabel }: { email: string; roleLabel: Ro
           </Button>
         </div>
         <p className="mt-4 text-ink-soft">
-          Their published swaps are tried first in every rewrite you ask for, and their targets are your defaults. Comments
-          they leave on your saved versions show on each recipe's page.
+          Their published swaps are tried first in every rewrite you ask for, and their targets are your defaults. Comments they leave on your saved versions
+          show on each recipe's page.
         </p>
       </Card>
 
@@ -53,9 +54,7 @@ export function MyCoachView({ email, roleLabel }: { email: string; roleLabel: Ro
         {targets ? (
           <CoachTargets targets={targets} coachName={coach.displayName} />
         ) : (
-          <EmptyState title="No targets set yet">
-            {coach.displayName} hasn't set your targets. Until then a rewrite uses the targets you give it.
-          </EmptyState>
+          <EmptyState title="No targets set yet">{coach.displayName} hasn't set your targets. Until then a rewrite uses the targets you give it.</EmptyState>
         )}
       </Card>
 
@@ -65,17 +64,13 @@ export function MyCoachView({ email, roleLabel }: { email: string; roleLabel: Ro
             Approved swaps
           </h2>
           <p className="text-ink-soft">
-            {swaps.length > 0
-              ? `${swaps.length} swap${swaps.length === 1 ? '' : 's'} ${coach.displayName} recommends, with how to cook them.`
-              : null}
+            {swaps.length > 0 ? `${swaps.length} swap${swaps.length === 1 ? '' : 's'} ${coach.displayName} recommends, with how to cook them.` : null}
           </p>
         </div>
         {swaps.length > 0 ? (
           <PublishedSwapList swaps={swaps} roleLabel={roleLabel} label={`Swaps approved by ${coach.displayName}`} />
         ) : (
-          <EmptyState title="Nothing published yet">
-            When {coach.displayName} publishes a swap it shows here, and your rewrites start trying it.
-          </EmptyState>
+          <EmptyState title="Nothing published yet">When {coach.displayName} publishes a swap it shows here, and your rewrites start trying it.</EmptyState>
         )}
       </section>
 
@@ -97,8 +92,8 @@ export function MyCoachView({ email, roleLabel }: { email: string; roleLabel: Ro
         }
       >
         <p>
-          Their swaps stop being tried in your rewrites, the targets they set are removed, and they can no longer see the
-          versions you save. Your recipes stay yours. To link again you need a new invitation.
+          Their swaps stop being tried in your rewrites, the targets they set are removed, and they can no longer see the versions you save. Your recipes stay
+          yours. To link again you need a new invitation.
         </p>
       </ConfirmDialog>
     </div>

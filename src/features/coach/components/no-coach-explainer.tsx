@@ -7,7 +7,10 @@ export function NoCoachExplainer({ email }: { email: string }) {
       <Card title="What a coach does here">
         <ul className="flex list-none flex-col gap-3">
           {[
-            ['Approved swaps', 'They keep a library of swaps they stand behind, each with a cooking note such as “bake 5 minutes longer for melt”. Every rewrite you ask for tries their swaps first.'],
+            [
+              'Approved swaps',
+              'They keep a library of swaps they stand behind, each with a cooking note such as “bake 5 minutes longer for melt”. Every rewrite you ask for tries their swaps first.',
+            ],
             ['Your targets', 'They set your calories and protein per meal — and per day — from your body stats and goal. Rewrites aim for them by default.'],
             ['A second look', 'They can read the recipe versions you save and leave a comment on any of them.'],
           ].map(([title, text]) => (
@@ -29,9 +32,7 @@ export function NoCoachExplainer({ email }: { email: string }) {
           <li>Open the link in the invitation. It works for 7 days.</li>
           <li>Accept, and their swaps and targets appear on this page.</li>
         </ol>
-        <p className="mt-4 text-sm text-ink-soft">
-          You can leave a coach at any time. Hearthswap works just as well without one.
-        </p>
+        <p className="mt-4 text-sm text-ink-soft">You can leave a coach at any time. Hearthswap works just as well without one.</p>
       </Card>
     </div>
   );

@@ -25,10 +25,7 @@ export function PublishSwitch({ published, busy, onToggle, swapName }: { publish
         )}
       >
         <span
-          className={cx(
-            'absolute size-4 rounded-pill bg-white shadow-sm transition-transform',
-            published ? 'translate-x-[1.375rem]' : 'translate-x-0.5',
-          )}
+          className={cx('absolute size-4 rounded-pill bg-white shadow-sm transition-transform', published ? 'translate-x-[1.375rem]' : 'translate-x-0.5')}
         />
       </span>
       <span className={published ? 'text-herb-800' : 'text-ink-soft'}>{published ? 'Published' : 'Draft'}</span>

@@ -11,12 +11,8 @@ export function PublishedSwapList({ swaps, roleLabel, label }: { swaps: Swap[]; 
       {swaps.map((swap) => (
         <li key={swap.id} className="flex flex-col gap-2.5 rounded-card border border-line bg-surface p-4 shadow-card">
           <p className="flex flex-col gap-0.5">
-            <span className="text-sm font-bold tracking-wide text-ink-soft uppercase">
-              {swap.fromRole ? 'For any' : 'Instead of'}
-            </span>
-            <span className="font-bold text-ink">
-              {swap.fromRole ? roleLabel(swap.fromRole).toLowerCase() : swapFromWords(swap, roleLabel)}
-            </span>
+            <span className="text-sm font-bold tracking-wide text-ink-soft uppercase">{swap.fromRole ? 'For any' : 'Instead of'}</span>
+            <span className="font-bold text-ink">{swap.fromRole ? roleLabel(swap.fromRole).toLowerCase() : swapFromWords(swap, roleLabel)}</span>
           </p>
           <p className="flex flex-col gap-0.5">
             <span className="text-sm font-bold tracking-wide text-ink-soft uppercase">Use</span>

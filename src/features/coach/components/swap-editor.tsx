@@ -81,9 +81,7 @@ export function SwapEditor({ swap, initialToFood = null, renderFoodSearch, roleL
       <form onSubmit={submit} noValidate className="flex flex-col gap-6" aria-describedby={errorCount ? `${id}-summary` : undefined}>
         {errorCount > 0 && (
           <Alert tone="danger" title="Check the fields marked below" assertive>
-            <span id={`${id}-summary`}>
-              {errorCount === 1 ? 'One thing needs' : `${errorCount} things need`} another look before the swap can be saved.
-            </span>
+            <span id={`${id}-summary`}>{errorCount === 1 ? 'One thing needs' : `${errorCount} things need`} another look before the swap can be saved.</span>
           </Alert>
         )}
         {failure && errorCount === 0 && (

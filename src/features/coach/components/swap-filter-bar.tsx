@@ -13,7 +13,11 @@ export interface SwapFilterBarProps {
 
 export function SwapFilterBar({ filters, onChange, roles, roleLabel }: SwapFilterBarProps) {
   return (
-    <div role="search" aria-label="Filter the swaps" className="grid items-end gap-3 rounded-card border border-line bg-surface-sunk p-4 sm:grid-cols-2 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)_minmax(0,1fr)_auto]">
+    <div
+      role="search"
+      aria-label="Filter the swaps"
+      className="grid items-end gap-3 rounded-card border border-line bg-surface-sunk p-4 sm:grid-cols-2 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)_minmax(0,1fr)_auto]"
+    >
       <TextField
         label="Find a swap"
         type="search"

@@ -82,9 +82,7 @@ export function SwapLibrary({ renderFoodSearch, roleLabel }: SwapLibraryProps) {
       <div className="flex flex-wrap items-center justify-between gap-3">
         <p className="text-ink-soft" aria-live="polite">
           {swaps.isSuccess &&
-            (all.length === 0
-              ? 'Nothing in the library yet.'
-              : `${all.length} swap${all.length === 1 ? '' : 's'}, ${published} published to your clients.`)}
+            (all.length === 0 ? 'Nothing in the library yet.' : `${all.length} swap${all.length === 1 ? '' : 's'}, ${published} published to your clients.`)}
         </p>
         <div className="flex flex-wrap gap-2">
           <Button variant="secondary" onClick={() => setLabelOpen(true)}>
@@ -107,9 +105,7 @@ export function SwapLibrary({ renderFoodSearch, roleLabel }: SwapLibraryProps) {
             onCancel={closeEditor}
             onSaved={(saved, isNew) => {
               toast.show(
-                isNew
-                  ? `Added ${name(saved)}${saved.status === 'published' ? ' and published it' : ' as a draft'}.`
-                  : `Saved ${name(saved)}.`,
+                isNew ? `Added ${name(saved)}${saved.status === 'published' ? ' and published it' : ' as a draft'}.` : `Saved ${name(saved)}.`,
                 'success',
               );
               closeEditor();
@@ -123,16 +119,9 @@ export function SwapLibrary({ renderFoodSearch, roleLabel }: SwapLibraryProps) {
       ) : swaps.isError ? (
         <ErrorState title="Your swap library didn't load" error={swaps.error} onRetry={() => void swaps.refetch()} retrying={swaps.isFetching} />
       ) : all.length === 0 ? (
-        <EmptyState
-          title="No approved swaps yet"
-          action={
-            !editing && (
-              <Button onClick={() => startNew()}>Add your first swap</Button>
-            )
-          }
-        >
-          A swap names the food it replaces — or a whole role such as melting cheese — the lighter food to use instead, and
-          a cooking note such as “bake 5 minutes longer for melt”. Publish it and your clients' rewrites try it first.
+        <EmptyState title="No approved swaps yet" action={!editing && <Button onClick={() => startNew()}>Add your first swap</Button>}>
+          A swap names the food it replaces — or a whole role such as melting cheese — the lighter food to use instead, and a cooking note such as “bake 5
+          minutes longer for melt”. Publish it and your clients' rewrites try it first.
         </EmptyState>
       ) : (
         <section aria-labelledby="swap-list-heading" className="flex flex-col gap-4">
@@ -189,8 +178,8 @@ export function SwapLibrary({ renderFoodSearch, roleLabel }: SwapLibraryProps) {
         {deleting && (
           <p>
             <strong className="text-ink">{name(deleting)}</strong> leaves your library
-            {deleting.status === 'published' ? ' and your clients stop getting it in their rewrites' : ''}. Recipes they
-            already saved keep the foods they chose.
+            {deleting.status === 'published' ? ' and your clients stop getting it in their rewrites' : ''}. Recipes they already saved keep the foods they
+            chose.
           </p>
         )}
       </ConfirmDialog>

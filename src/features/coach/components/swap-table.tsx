@@ -40,16 +40,24 @@ export function SwapTable({ swaps, caption, roleLabel, onEdit, onDelete, onToggl
           <caption className="sr-only">{caption}</caption>
           <thead>
             <tr className="border-b border-line bg-oat-100 text-left">
-              <th scope="col" className="px-4 py-2.5 font-bold">Replaces</th>
-              <th scope="col" className="px-4 py-2.5 font-bold">Use instead</th>
+              <th scope="col" className="px-4 py-2.5 font-bold">
+                Replaces
+              </th>
+              <th scope="col" className="px-4 py-2.5 font-bold">
+                Use instead
+              </th>
               <th scope="col" className="px-4 py-2.5 text-right font-bold whitespace-nowrap">
                 Energy <span className="font-semibold text-ink-soft">/ 100 g</span>
               </th>
               <th scope="col" className="px-4 py-2.5 text-right font-bold whitespace-nowrap">
                 Protein <span className="font-semibold text-ink-soft">/ 100 g</span>
               </th>
-              <th scope="col" className="px-4 py-2.5 font-bold">Cooking note</th>
-              <th scope="col" className="px-4 py-2.5 font-bold">Status</th>
+              <th scope="col" className="px-4 py-2.5 font-bold">
+                Cooking note
+              </th>
+              <th scope="col" className="px-4 py-2.5 font-bold">
+                Status
+              </th>
               <th scope="col" className="px-4 py-2.5 font-bold">
                 <span className="sr-only">Actions</span>
               </th>
@@ -69,9 +77,7 @@ export function SwapTable({ swaps, caption, roleLabel, onEdit, onDelete, onToggl
                     </span>
                   </span>
                 </td>
-                <td className="px-4 py-3 text-right font-bold whitespace-nowrap tabular-nums">
-                  {swap.toFood ? formatKcal(swap.toFood.kcalPer100g) : '—'}
-                </td>
+                <td className="px-4 py-3 text-right font-bold whitespace-nowrap tabular-nums">{swap.toFood ? formatKcal(swap.toFood.kcalPer100g) : '—'}</td>
                 <td className="px-4 py-3 text-right font-bold whitespace-nowrap tabular-nums">
                   {swap.toFood ? formatMacroG(swap.toFood.proteinPer100g) : '—'}
                 </td>
@@ -111,7 +117,9 @@ export function SwapTable({ swaps, caption, roleLabel, onEdit, onDelete, onToggl
             <div className="flex flex-col gap-0.5">
               <Replaces swap={swap} roleLabel={roleLabel} />
               <span className="text-ink">
-                <span aria-hidden="true" className="text-accent">→ </span>
+                <span aria-hidden="true" className="text-accent">
+                  →{' '}
+                </span>
                 <span className="sr-only">replaced with </span>
                 <span className="font-semibold">{swapToWords(swap)}</span>
               </span>

@@ -11,9 +11,7 @@ import type { UnitSystem } from '../../../lib/user';
 import { DIET_WORDS, foodGroupWords, referenceNumber, roleWords, sourceWords } from '../food-words';
 
 function densityExample(gPerMl: number, unitSystem: UnitSystem): string {
-  return unitSystem === 'us'
-    ? `1 cup weighs about ${formatGrams(gPerMl * ML_PER_CUP)}`
-    : `100 mL weighs about ${formatGrams(gPerMl * 100)}`;
+  return unitSystem === 'us' ? `1 cup weighs about ${formatGrams(gPerMl * ML_PER_CUP)}` : `100 mL weighs about ${formatGrams(gPerMl * 100)}`;
 }
 
 function PortionsTable({ food, unitSystem }: { food: FoodDetail; unitSystem: UnitSystem }) {

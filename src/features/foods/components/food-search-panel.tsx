@@ -77,15 +77,12 @@ export function FoodSearchPanel({ initialQuery = '', onQueryChange, foodHref, li
       </div>
 
       <p className="sr-only" aria-live="polite">
-        {query && search.isSuccess && !search.isPlaceholderData
-          ? `${results.length} food${results.length === 1 ? '' : 's'} found for ${query}.`
-          : ''}
+        {query && search.isSuccess && !search.isPlaceholderData ? `${results.length} food${results.length === 1 ? '' : 's'} found for ${query}.` : ''}
       </p>
 
       {!query ? (
         <EmptyState title="No food looked up yet">
-          Search by a name as a recipe would write it, such as “sharp cheddar” or “ground turkey”, to see what 100 g holds and
-          how much a cup or a slice weighs.
+          Search by a name as a recipe would write it, such as “sharp cheddar” or “ground turkey”, to see what 100 g holds and how much a cup or a slice weighs.
         </EmptyState>
       ) : search.isError ? (
         <ErrorState title="The search didn't answer" error={search.error} onRetry={() => void search.refetch()} retrying={search.isFetching} />
@@ -97,13 +94,7 @@ export function FoodSearchPanel({ initialQuery = '', onQueryChange, foodHref, li
         </EmptyState>
       ) : (
         <div className={cx('transition-opacity', showingStale && 'opacity-60')}>
-          <FoodSearchResults
-            results={results}
-            foodHref={foodHref}
-            linkState={linkState}
-            listRef={listRef}
-            onLeaveTop={() => inputRef.current?.focus()}
-          />
+          <FoodSearchResults results={results} foodHref={foodHref} linkState={linkState} listRef={listRef} onLeaveTop={() => inputRef.current?.focus()} />
         </div>
       )}
     </div>

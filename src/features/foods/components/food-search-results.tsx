@@ -28,7 +28,11 @@ function moveFocus(event: KeyboardEvent<HTMLUListElement>, onLeaveTop?: () => vo
 
 export function FoodSearchResults({ results, foodHref, linkState, listRef, onLeaveTop }: FoodSearchResultsProps) {
   return (
-    <ul ref={listRef} onKeyDown={(e) => moveFocus(e, onLeaveTop)} className="flex flex-col divide-y divide-line overflow-hidden rounded-card border border-line bg-surface">
+    <ul
+      ref={listRef}
+      onKeyDown={(e) => moveFocus(e, onLeaveTop)}
+      className="flex flex-col divide-y divide-line overflow-hidden rounded-card border border-line bg-surface"
+    >
       {results.map((hit) => {
         const group = foodGroupWords(hit.foodGroup);
         return (

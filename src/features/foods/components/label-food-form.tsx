@@ -78,10 +78,7 @@ export function LabelFoodForm({ food, onSaved, onCancel }: LabelFoodFormProps) {
       <LabelPhotoButton onRead={filled} />
       {scan && (
         <Alert tone="caution" title="Check every number against the package before you save">
-          <p>
-            The photo filled the form (read with {formatNumber(scan.confidence * 100)} % confidence). Nothing is saved until you press
-            Save.
-          </p>
+          <p>The photo filled the form (read with {formatNumber(scan.confidence * 100)} % confidence). Nothing is saved until you press Save.</p>
           {scan.notes.length > 0 && (
             <ul className="mt-2 list-disc pl-5">
               {scan.notes.map((note) => (
@@ -96,10 +93,22 @@ export function LabelFoodForm({ food, onSaved, onCancel }: LabelFoodFormProps) {
           {errorMessage(save.error)}
         </Alert>
       )}
-      <TextField label="Name" hint="As you will write it in recipes, e.g. “Cloudmeadow carb-smart tortilla”." autoComplete="off" error={errors.name?.message} {...register('name')} />
+      <TextField
+        label="Name"
+        hint="As you will write it in recipes, e.g. “Cloudmeadow carb-smart tortilla”."
+        autoComplete="off"
+        error={errors.name?.message}
+        {...register('name')}
+      />
       <fieldset className="grid gap-3 sm:grid-cols-3">
         <legend className="mb-2 font-bold text-ink">Serving size, as printed</legend>
-        <TextField label="Household measure" hint="“1 tortilla”, “17 slices”, “1/4 cup”" optional error={errors.servingLabel?.message} {...register('servingLabel')} />
+        <TextField
+          label="Household measure"
+          hint="“1 tortilla”, “17 slices”, “1/4 cup”"
+          optional
+          error={errors.servingLabel?.message}
+          {...register('servingLabel')}
+        />
         <TextField label="Grams" {...num} error={errors.servingSizeG?.message} {...register('servingSizeG')} />
         <TextField label="Millilitres" optional {...num} error={errors.servingSizeMl?.message} {...register('servingSizeMl')} />
       </fieldset>
@@ -114,11 +123,24 @@ export function LabelFoodForm({ food, onSaved, onCancel }: LabelFoodFormProps) {
       <fieldset className="grid gap-3 sm:grid-cols-2">
         <legend className="mb-2 font-bold text-ink">Per serving</legend>
         {AMOUNTS.map((a) => (
-          <TextField key={a.field} label={a.label} optional={a.optional} containerClassName={a.indent ? 'sm:pl-4' : undefined} {...num} error={errors[a.field]?.message} {...register(a.field)} />
+          <TextField
+            key={a.field}
+            label={a.label}
+            optional={a.optional}
+            containerClassName={a.indent ? 'sm:pl-4' : undefined}
+            {...num}
+            error={errors[a.field]?.message}
+            {...register(a.field)}
+          />
         ))}
       </fieldset>
       <div className="grid gap-3 sm:grid-cols-2">
-        <SelectField label="Part it plays in a dish" hint="Rewrites offer it as a swap for foods playing this part." error={errors.role?.message} {...register('role')}>
+        <SelectField
+          label="Part it plays in a dish"
+          hint="Rewrites offer it as a swap for foods playing this part."
+          error={errors.role?.message}
+          {...register('role')}
+        >
           <option value="">Judge from the name</option>
           {ROLES.map((role) => (
             <option key={role} value={role}>

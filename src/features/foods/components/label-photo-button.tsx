@@ -18,7 +18,10 @@ export function LabelPhotoButton({ onRead }: { onRead: (scan: LabelScanResponse)
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-center gap-3">
-        <label htmlFor={id} className={buttonClasses({ variant: 'secondary', className: scan.isPending ? 'pointer-events-none gap-2 opacity-70' : 'cursor-pointer gap-2' })}>
+        <label
+          htmlFor={id}
+          className={buttonClasses({ variant: 'secondary', className: scan.isPending ? 'pointer-events-none gap-2 opacity-70' : 'cursor-pointer gap-2' })}
+        >
           {scan.isPending && <Spinner className="size-4" />}
           {scan.isPending ? 'Reading the label…' : 'Read a label photo'}
         </label>

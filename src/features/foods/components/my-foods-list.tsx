@@ -36,8 +36,9 @@ export function MyFoodsList({ foods, onEdit, onDelete, deletingId }: MyFoodsList
                 ))}
             </span>
             <span className="text-sm text-ink-soft tabular-nums">
-              {servingWords(food)}: {formatKcal(food.label.kcal ?? (food.per100g.kcal * (food.servingSizeG ?? 100)) / 100)} · {formatMacroG(food.label.proteinG)} protein ·{' '}
-              {formatMacroG(food.label.carbsG)} carbs · {formatMacroG(food.label.fatG)} fat · {formatMg(food.label.sodiumMg ?? 0)} sodium
+              {servingWords(food)}: {formatKcal(food.label.kcal ?? (food.per100g.kcal * (food.servingSizeG ?? 100)) / 100)} ·{' '}
+              {formatMacroG(food.label.proteinG)} protein · {formatMacroG(food.label.carbsG)} carbs · {formatMacroG(food.label.fatG)} fat ·{' '}
+              {formatMg(food.label.sodiumMg ?? 0)} sodium
             </span>
           </div>
           {food.owner === 'you' && (
@@ -45,7 +46,14 @@ export function MyFoodsList({ foods, onEdit, onDelete, deletingId }: MyFoodsList
               <Button size="sm" variant="secondary" onClick={() => onEdit(food)} aria-label={`Edit ${food.name}`}>
                 Edit
               </Button>
-              <Button size="sm" variant="danger" onClick={() => onDelete(food)} loading={deletingId === food.id} loadingLabel="Deleting…" aria-label={`Delete ${food.name}`}>
+              <Button
+                size="sm"
+                variant="danger"
+                onClick={() => onDelete(food)}
+                loading={deletingId === food.id}
+                loadingLabel="Deleting…"
+                aria-label={`Delete ${food.name}`}
+              >
                 Delete
               </Button>
             </div>

@@ -62,8 +62,7 @@ export function OutboxList() {
     if (isApiError(outbox.error) && outbox.error.status === 404) {
       return (
         <EmptyState title="No outbox on this server">
-          The outbox only runs in development, where Hearthswap keeps mail on this machine instead of sending it. Here mail
-          goes out for real.
+          The outbox only runs in development, where Hearthswap keeps mail on this machine instead of sending it. Here mail goes out for real.
         </EmptyState>
       );
     }
@@ -74,9 +73,14 @@ export function OutboxList() {
     <div className="flex flex-col gap-4">
       <div className="flex flex-wrap items-center justify-between gap-3">
         <p className="text-ink-soft" aria-live="polite">
-          {messages.length === 0 ? '' : `${messages.length} message${messages.length === 1 ? '' : 's'}, newest first; open one to read it. Checks for new mail every 10 seconds.`}
+          {messages.length === 0
+            ? ''
+            : `${messages.length} message${messages.length === 1 ? '' : 's'}, newest first; open one to read it. Checks for new mail every 10 seconds.`}
         </p>
-        <Button variant="secondary" size="sm" onClick={() => {
+        <Button
+          variant="secondary"
+          size="sm"
+          onClick={() => {
             setChecking(true);
             void outbox.refetch().finally(() => setChecking(false));
           }}

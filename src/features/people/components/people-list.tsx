@@ -59,7 +59,8 @@ function PersonRow({ person, isSelf, coachName }: { person: PublicUser; isSelf: 
 export function PeopleList({ selfId }: { selfId: number | null }) {
   const users = useUsers();
   if (users.isPending) return <LoadingState label="Listing accounts…" />;
-  if (users.isError) return <ErrorState title="The accounts didn't load" error={users.error} onRetry={() => void users.refetch()} retrying={users.isFetching} />;
+  if (users.isError)
+    return <ErrorState title="The accounts didn't load" error={users.error} onRetry={() => void users.refetch()} retrying={users.isFetching} />;
   if (users.data.length === 0) return <EmptyState title="No accounts yet">Accounts appear here as people sign up.</EmptyState>;
   const names = new Map(users.data.map((u) => [u.id, u.displayName]));
   const counts = ROLES_USER.map((role) => {

@@ -36,13 +36,11 @@ export function AllergenNotice({ allergens, unmatchedLines, className }: Allerge
         </ul>
       )}
       <p className={cx('font-bold', found ? 'text-honey-800' : 'text-ink')}>
-        Check every package label: recipes and brands differ, and a lighter swap can bring in an allergen the original
-        did not have.
+        Check every package label: recipes and brands differ, and a lighter swap can bring in an allergen the original did not have.
       </p>
       {unmatchedLines > 0 && (
         <p className="text-sm text-ink-soft">
-          {unmatchedLines === 1 ? 'One line has' : `${unmatchedLines} lines have`} no catalogue match and could not be
-          checked for allergens.
+          {unmatchedLines === 1 ? 'One line has' : `${unmatchedLines} lines have`} no catalogue match and could not be checked for allergens.
         </p>
       )}
     </section>

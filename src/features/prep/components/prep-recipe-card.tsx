@@ -34,9 +34,11 @@ export function PrepRecipeCard({ prep }: { prep: Prep }) {
       </header>
 
       <p className="rounded-field border-2 border-honey-600 bg-honey-50 px-4 py-2.5 font-bold text-honey-800 print:bg-transparent">
-        {prep.allergens.length > 0 ? `Contains ${allergenWords(prep.allergens).toLowerCase()}.` : 'No major allergens found in the matched foods.'}{' '}
-        Check every package label.
-        {unmatched > 0 && <span className="block text-sm font-semibold">{unmatched === 1 ? 'One line was' : `${unmatched} lines were`} not checked: no catalogue match.</span>}
+        {prep.allergens.length > 0 ? `Contains ${allergenWords(prep.allergens).toLowerCase()}.` : 'No major allergens found in the matched foods.'} Check every
+        package label.
+        {unmatched > 0 && (
+          <span className="block text-sm font-semibold">{unmatched === 1 ? 'One line was' : `${unmatched} lines were`} not checked: no catalogue match.</span>
+        )}
       </p>
 
       <div className="grid gap-6 sm:grid-cols-[minmax(0,3fr)_minmax(0,2fr)] print:grid-cols-[minmax(0,3fr)_minmax(0,2fr)] print:gap-4">
@@ -71,8 +73,8 @@ export function PrepRecipeCard({ prep }: { prep: Prep }) {
       <StorageGuide storage={prep.storage} headingLevel={2} className="print:break-inside-avoid" />
 
       <footer className="border-t border-line pt-3 text-xs leading-relaxed text-ink-soft">
-        Hearthswap batch card. Figures are estimates from USDA Standard Reference food values, not medical advice; if
-        you live with a medical condition or food allergy, follow your physician or a registered dietitian.
+        Hearthswap batch card. Figures are estimates from USDA Standard Reference food values, not medical advice; if you live with a medical condition or food
+        allergy, follow your physician or a registered dietitian.
       </footer>
     </article>
   );

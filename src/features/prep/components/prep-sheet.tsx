@@ -42,8 +42,8 @@ export function PrepSheet({ prep, portionsControl, onPrintShopping, shoppingPart
                 Weights, line for line
               </h2>
               <p className="text-sm text-ink-soft">
-                Weigh it raw: put each ingredient on the food scale in grams before it is cooked. Each portion is what
-                one container gets; the batch is what goes in the pot.
+                Weigh it raw: put each ingredient on the food scale in grams before it is cooked. Each portion is what one container gets; the batch is what
+                goes in the pot.
               </p>
             </div>
             <WeightsTable perPortion={prep.perPortion} batch={prep.batch} portions={prep.portions} />

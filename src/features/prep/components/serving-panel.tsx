@@ -40,9 +40,7 @@ export function ServingPanel({ label, perServing, className }: ServingPanelProps
         <h2 id={id} className="text-lg font-black tracking-tight">
           Per serving
         </h2>
-        <p className="text-sm font-bold">
-          Serving size {label.servingSizeG.text}
-        </p>
+        <p className="text-sm font-bold">Serving size {label.servingSizeG.text}</p>
       </div>
       <div className="flex items-end justify-between gap-3 border-b-4 border-ink px-4 pt-3 pb-2">
         <p className="font-extrabold">Calories</p>
@@ -54,23 +52,28 @@ export function ServingPanel({ label, perServing, className }: ServingPanelProps
         {ROWS.map((row) => {
           const value = label[row.key];
           return (
-            <div key={row.key} className={cx('flex justify-between gap-3 border-b border-line py-1.5 last:border-b-0', row.key === 'proteinG' && 'border-t-2 border-t-ink')}>
+            <div
+              key={row.key}
+              className={cx('flex justify-between gap-3 border-b border-line py-1.5 last:border-b-0', row.key === 'proteinG' && 'border-t-2 border-t-ink')}
+            >
               <dt className={row.part ? 'pl-4 text-ink-soft' : 'font-extrabold'}>{row.label}</dt>
-              <dd className={cx('tabular-nums', row.part ? 'text-ink-soft' : 'font-extrabold')} >
-                {value.text}
-              </dd>
+              <dd className={cx('tabular-nums', row.part ? 'text-ink-soft' : 'font-extrabold')}>{value.text}</dd>
             </div>
           );
         })}
       </dl>
       <p className="border-t border-line bg-oat-50 px-4 py-2 text-xs leading-relaxed text-ink-soft print:bg-transparent">
-        Rounded as US food labels round them (FDA, 21 CFR 101.9(c)). Estimates from USDA food values, not a legal
-        label and not medical advice.
+        Rounded as US food labels round them (FDA, 21 CFR 101.9(c)). Estimates from USDA food values, not a legal label and not medical advice.
       </p>
       {perServing && (
         <details className="border-t border-line px-4 py-2 print:hidden">
           <summary className="cursor-pointer rounded-field text-sm font-bold text-accent">Unrounded figures</summary>
-          <NutrientTable caption="Per serving, unrounded" captionHidden columns={[{ key: 'serving', header: 'Per serving', values: perServing }]} className="mt-2 text-sm" />
+          <NutrientTable
+            caption="Per serving, unrounded"
+            captionHidden
+            columns={[{ key: 'serving', header: 'Per serving', values: perServing }]}
+            className="mt-2 text-sm"
+          />
         </details>
       )}
     </section>

@@ -25,8 +25,7 @@ export function ComparePicker({ recipeId, versions, initial, onPick }: ComparePi
   if (versions.length < 2) {
     return (
       <p className="text-sm text-ink-soft">
-        Once the recipe has a second version (a lighter rewrite from the Kitchen, or a restored one), you can compare
-        any two of them here.
+        Once the recipe has a second version (a lighter rewrite from the Kitchen, or a restored one), you can compare any two of them here.
       </p>
     );
   }
@@ -40,34 +39,38 @@ export function ComparePicker({ recipeId, versions, initial, onPick }: ComparePi
 
   return (
     <div className="@container">
-    <form
-      className="grid gap-3 @lg:grid-cols-[1fr_1fr_auto] @lg:items-end"
-      onSubmit={(e) => {
-        e.preventDefault();
-        if (!same) onPick?.(a, b);
-      }}
-    >
-      <SelectField label="Before" value={a} onChange={(e) => setA(Number(e.target.value))}>
-        {options}
-      </SelectField>
-      <SelectField label="After" value={b} onChange={(e) => setB(Number(e.target.value))}>
-        {options}
-      </SelectField>
-      {onPick ? (
-        <button type="submit" disabled={same} className={buttonClasses({ variant: 'secondary' })}>
-          Compare
-        </button>
-      ) : same ? (
-        <span className={buttonClasses({ variant: 'secondary', className: 'cursor-not-allowed text-oat-600' })} aria-disabled="true">
-          Compare
-        </span>
-      ) : (
-        <Link to={comparePath(recipeId, a, b)} className={buttonClasses({ variant: 'secondary' })}>
-          Compare<span className="sr-only"> version {a} with version {b}</span>
-        </Link>
-      )}
-      {same && <p className="text-sm text-ink-soft @lg:col-span-3">Pick two different versions to compare.</p>}
-    </form>
+      <form
+        className="grid gap-3 @lg:grid-cols-[1fr_1fr_auto] @lg:items-end"
+        onSubmit={(e) => {
+          e.preventDefault();
+          if (!same) onPick?.(a, b);
+        }}
+      >
+        <SelectField label="Before" value={a} onChange={(e) => setA(Number(e.target.value))}>
+          {options}
+        </SelectField>
+        <SelectField label="After" value={b} onChange={(e) => setB(Number(e.target.value))}>
+          {options}
+        </SelectField>
+        {onPick ? (
+          <button type="submit" disabled={same} className={buttonClasses({ variant: 'secondary' })}>
+            Compare
+          </button>
+        ) : same ? (
+          <span className={buttonClasses({ variant: 'secondary', className: 'cursor-not-allowed text-oat-600' })} aria-disabled="true">
+            Compare
+          </span>
+        ) : (
+          <Link to={comparePath(recipeId, a, b)} className={buttonClasses({ variant: 'secondary' })}>
+            Compare
+            <span className="sr-only">
+              {' '}
+              version {a} with version {b}
+            </span>
+          </Link>
+        )}
+        {same && <p className="text-sm text-ink-soft @lg:col-span-3">Pick two different versions to compare.</p>}
+      </form>
     </div>
   );
 }

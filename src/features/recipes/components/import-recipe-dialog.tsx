@@ -16,7 +16,6 @@ import { SERVINGS_MAX, recipeServingsField, recipeTitleField } from '../recipe-f
 
 type ImportMode = 'file' | 'paste';
 
-
 const pastedRecipeSchema = z.object({
   title: recipeTitleField,
   servings: recipeServingsField,
@@ -47,14 +46,7 @@ function ModeSwitch({ mode, onChange }: { mode: ImportMode; onChange: (mode: Imp
               mode === option.value ? 'bg-surface text-ink shadow-sm' : 'text-ink-soft hover:text-ink',
             )}
           >
-            <input
-              type="radio"
-              name={name}
-              value={option.value}
-              checked={mode === option.value}
-              onChange={() => onChange(option.value)}
-              className="sr-only"
-            />
+            <input type="radio" name={name} value={option.value} checked={mode === option.value} onChange={() => onChange(option.value)} className="sr-only" />
             {option.label}
           </label>
         ))}
@@ -97,8 +89,7 @@ function FileImportForm({ onImported, onCancel }: { onImported: (recipe: RecipeD
           Recipe file
         </label>
         <p id={`${inputId}-hint`} className="text-sm text-ink-soft">
-          Plain text or Markdown with a title, an ingredient list and the method, or a recipe saved as JSON or
-          JSON-LD (a Hearthswap export works). Up to 1 MB.
+          Plain text or Markdown with a title, an ingredient list and the method, or a recipe saved as JSON or JSON-LD (a Hearthswap export works). Up to 1 MB.
         </p>
         <input
           ref={input}
@@ -217,11 +208,7 @@ export function ImportRecipeDialog({ open, onClose, onImported }: ImportRecipeDi
       {open && (
         <div className="flex max-h-[70dvh] flex-col gap-5 overflow-y-auto px-1 pb-1 text-ink">
           <ModeSwitch mode={mode} onChange={setMode} />
-          {mode === 'file' ? (
-            <FileImportForm onImported={onImported} onCancel={onClose} />
-          ) : (
-            <PasteImportForm onImported={onImported} onCancel={onClose} />
-          )}
+          {mode === 'file' ? <FileImportForm onImported={onImported} onCancel={onClose} /> : <PasteImportForm onImported={onImported} onCancel={onClose} />}
         </div>
       )}
     </Dialog>

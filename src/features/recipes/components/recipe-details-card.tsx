@@ -13,7 +13,6 @@ import { applyServerFieldErrors } from '../../../lib/form-errors';
 import { isRevisionConflict, useUpdateRecipe } from '../api/update-recipe';
 import { SERVINGS_MAX, recipeServingsField, recipeTitleField } from '../recipe-fields';
 
-
 const detailsSchema = z.object({
   title: recipeTitleField,
   servings: recipeServingsField,
@@ -33,11 +32,7 @@ function sameDetails(a: Details, b: Details): boolean {
 }
 
 function Prose({ text, empty }: { text: string; empty: string }) {
-  return text.trim() ? (
-    <p className="leading-relaxed whitespace-pre-line text-ink">{text}</p>
-  ) : (
-    <p className="text-ink-soft italic">{empty}</p>
-  );
+  return text.trim() ? <p className="leading-relaxed whitespace-pre-line text-ink">{text}</p> : <p className="text-ink-soft italic">{empty}</p>;
 }
 
 /** What the saved copy now says, under a field that changed elsewhere. */
@@ -210,15 +205,14 @@ export function RecipeDetailsCard({ recipe, onReload }: RecipeDetailsCardProps) 
               </Button>
             }
           >
-            It was saved from another tab or device after you opened it, so nothing was changed. What you typed is still
-            here: reload to see the saved copy, then save again to keep your words.
+            It was saved from another tab or device after you opened it, so nothing was changed. What you typed is still here: reload to see the saved copy,
+            then save again to keep your words.
           </Alert>
         )}
         {conflict?.stage === 'reloaded' && (
           <Alert tone="info" title={`Loaded the saved copy (revision ${baseRevision})`}>
             {[
-              conflict.taken.length > 0 &&
-                `What changed elsewhere is now in the form (${conflict.taken.map((f) => FIELD_LABELS[f]).join(', ')}).`,
+              conflict.taken.length > 0 && `What changed elsewhere is now in the form (${conflict.taken.map((f) => FIELD_LABELS[f]).join(', ')}).`,
               changedElsewhere.length > 0
                 ? `You and the other save both changed the ${changedElsewhere.map((f) => FIELD_LABELS[f]).join(' and ')}: your text is kept, the saved text is under the field. Save to keep yours, or discard your changes.`
                 : 'Your edits are kept. Save to keep both.',

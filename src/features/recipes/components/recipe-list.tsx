@@ -82,10 +82,7 @@ export function RecipeList({ recipes, caption }: { recipes: RecipeSummary[]; cap
           const figures = perServing(recipe);
           return (
             <li key={recipe.id}>
-              <Link
-                to={recipePath(recipe.id)}
-                className="flex flex-col gap-2 rounded-card border border-line bg-surface p-4 shadow-card active:bg-oat-100"
-              >
+              <Link to={recipePath(recipe.id)} className="flex flex-col gap-2 rounded-card border border-line bg-surface p-4 shadow-card active:bg-oat-100">
                 <span className="text-lg font-extrabold text-accent-strong">{recipe.title}</span>
                 <span className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
                   <span>

@@ -39,11 +39,7 @@ export function RecipePrintCard({ recipe, version, extras }: { recipe: RecipeDet
           </p>
         </div>
         {recipe.photoUrl && (
-          <img
-            src={recipe.photoUrl}
-            alt={`The dish: ${recipe.title}`}
-            className="aspect-[4/3] w-full shrink-0 rounded-field object-cover sm:w-56 print:w-48"
-          />
+          <img src={recipe.photoUrl} alt={`The dish: ${recipe.title}`} className="aspect-[4/3] w-full shrink-0 rounded-field object-cover sm:w-56 print:w-48" />
         )}
       </header>
 
@@ -75,7 +71,11 @@ export function RecipePrintCard({ recipe, version, extras }: { recipe: RecipeDet
           <h2 id="print-nutrients" className="sr-only">
             Nutrients per serving
           </h2>
-          <NutrientTable caption="Per serving" columns={[{ key: 'serving', header: `1 serving of ${version.servings}`, values: version.perServing }]} className="text-sm" />
+          <NutrientTable
+            caption="Per serving"
+            columns={[{ key: 'serving', header: `1 serving of ${version.servings}`, values: version.perServing }]}
+            className="text-sm"
+          />
         </section>
       </div>
 
@@ -106,9 +106,9 @@ export function RecipePrintCard({ recipe, version, extras }: { recipe: RecipeDet
       )}
 
       <footer className="border-t border-line pt-3 text-xs leading-relaxed text-ink-soft">
-        Hearthswap · version saved {formatDateTime(version.createdAt)} · Figures are estimates from USDA Standard
-        Reference food values, not medical advice. Leftovers: refrigerate within 2 hours,{' '}
-        {extras?.fridgeDays ? `eat within ${extras.fridgeDays} days` : 'eat within 3–4 days'}, reheat to 165 °F (74 °C) (USDA FSIS).
+        Hearthswap · version saved {formatDateTime(version.createdAt)} · Figures are estimates from USDA Standard Reference food values, not medical advice.
+        Leftovers: refrigerate within 2 hours, {extras?.fridgeDays ? `eat within ${extras.fridgeDays} days` : 'eat within 3–4 days'}, reheat to 165 °F (74 °C)
+        (USDA FSIS).
       </footer>
     </article>
   );

@@ -36,7 +36,13 @@ const TONE_WORDS: Record<ChangeTone, string> = {
 /** A signed difference in its colour; the sign and the words carry it without the colour. */
 function ChangeChip({ change, className }: { change: NutrientChange; className?: string }) {
   return (
-    <span className={cx('inline-flex items-center rounded-pill border px-2 py-0.5 text-sm font-extrabold whitespace-nowrap tabular-nums', TONE_CLASSES[change.tone], className)}>
+    <span
+      className={cx(
+        'inline-flex items-center rounded-pill border px-2 py-0.5 text-sm font-extrabold whitespace-nowrap tabular-nums',
+        TONE_CLASSES[change.tone],
+        className,
+      )}
+    >
       {change.text}
       {change.tone !== 'neutral' && <span className="sr-only"> ({TONE_WORDS[change.tone]})</span>}
     </span>
@@ -71,7 +77,11 @@ function NutrientDifferences({ a, b }: { a: VersionDetail; b: VersionDetail }) {
   const volumeChip: NutrientChange =
     Math.abs(volumeChange) < 0.5
       ? { text: 'No change', direction: 'same', tone: 'neutral' }
-      : { text: `${volumeChange > 0 ? '+' : MINUS}${formatNumber(Math.abs(volumeChange), 0)}%`, direction: volumeChange > 0 ? 'more' : 'less', tone: 'neutral' };
+      : {
+          text: `${volumeChange > 0 ? '+' : MINUS}${formatNumber(Math.abs(volumeChange), 0)}%`,
+          direction: volumeChange > 0 ? 'more' : 'less',
+          tone: 'neutral',
+        };
   return (
     <div className="@container overflow-x-auto">
       <table className="w-full border-collapse text-sm @md:text-base">
@@ -135,7 +145,6 @@ function NutrientDifferences({ a, b }: { a: VersionDetail; b: VersionDetail }) {
     </div>
   );
 }
-
 
 function gramsText(change: LineChange): string {
   const before = change.before ? formatGrams(change.before.grams) : null;
@@ -281,9 +290,9 @@ export function VersionComparison({ a, b }: { a: VersionDetail; b: VersionDetail
         <Card title="Per serving" description="After minus before.">
           <NutrientDifferences a={a} b={b} />
           <p className="mt-3 text-sm text-ink-soft">
-            <span className="font-bold text-herb-800">Green</span> marks a change toward a lighter, more filling plate
-            (fewer kcal; more protein or fiber; less fat, sugar or sodium), <span className="font-bold text-beet-800">red</span>{' '}
-            a change toward a heavier one. The sign says which way each figure moved: + more, {MINUS} less.
+            <span className="font-bold text-herb-800">Green</span> marks a change toward a lighter, more filling plate (fewer kcal; more protein or fiber; less
+            fat, sugar or sodium), <span className="font-bold text-beet-800">red</span> a change toward a heavier one. The sign says which way each figure
+            moved: + more, {MINUS} less.
           </p>
         </Card>
       </div>

@@ -35,9 +35,7 @@ export function VersionTimeline({ versions, selected, onSelect, onRestore, resto
         const isNewest = version.number === newest;
         return (
           <li key={version.number} className="relative flex gap-3 pb-5 last:pb-0">
-            {index < ordered.length - 1 && (
-              <span aria-hidden="true" className="absolute top-10 bottom-0 left-[1.1875rem] w-0.5 bg-line" />
-            )}
+            {index < ordered.length - 1 && <span aria-hidden="true" className="absolute top-10 bottom-0 left-[1.1875rem] w-0.5 bg-line" />}
             <span
               aria-hidden="true"
               className={cx(
@@ -70,12 +68,7 @@ export function VersionTimeline({ versions, selected, onSelect, onRestore, resto
                 </time>
               </p>
               <div className="mt-1 flex flex-wrap gap-2">
-                <Button
-                  variant={isSelected ? 'primary' : 'secondary'}
-                  size="sm"
-                  aria-pressed={isSelected}
-                  onClick={() => onSelect(version.number)}
-                >
+                <Button variant={isSelected ? 'primary' : 'secondary'} size="sm" aria-pressed={isSelected} onClick={() => onSelect(version.number)}>
                   {isSelected ? 'Showing its lines' : 'Show its lines'}
                   <span className="sr-only"> (version {version.number})</span>
                 </Button>

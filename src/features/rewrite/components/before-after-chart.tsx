@@ -94,7 +94,14 @@ export function BeforeAfterChart({ before, after, afterLabel, kcalMax, proteinMi
             <LabelList dataKey="before" position="top" formatter={(v: unknown) => formatNumber(Number(v), 0)} fill="var(--color-oat-700)" fontSize={12} />
           </Bar>
           <Bar dataKey="after" name={afterLabel} fill={AFTER} isAnimationActive={false} radius={[4, 4, 0, 0]}>
-            <LabelList dataKey="after" position="top" formatter={(v: unknown) => formatNumber(Number(v), 0)} fill="var(--color-herb-800)" fontSize={12} fontWeight={700} />
+            <LabelList
+              dataKey="after"
+              position="top"
+              formatter={(v: unknown) => formatNumber(Number(v), 0)}
+              fill="var(--color-herb-800)"
+              fontSize={12}
+              fontWeight={700}
+            />
           </Bar>
         </BarChart>
       </figure>

@@ -87,8 +87,8 @@ export function BeforeAfterHeadline({
           <>
             {everydayVolume(afterVolumeMl, unitSystem)}
             <span className="block">
-              was {formatNumber(beforeVolumeMl, 0)} mL · <span className="font-bold">{volumeChangeText(beforeVolumeMl, afterVolumeMl)}</span>{' '}
-              (±{formatNumber(volumeTolerancePct, 1)} % allowed)
+              was {formatNumber(beforeVolumeMl, 0)} mL · <span className="font-bold">{volumeChangeText(beforeVolumeMl, afterVolumeMl)}</span> (±
+              {formatNumber(volumeTolerancePct, 1)} % allowed)
             </span>
           </>
         }

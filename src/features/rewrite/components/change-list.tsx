@@ -44,7 +44,13 @@ function SharedLine({ change, unitSystem }: { change: RewriteChange; unitSystem:
   );
 }
 
-function ChangeItem({ change, lineInput, unitSystem, onExclude, excluding }: { change: RewriteChange; lineInput: string | undefined } & Omit<ChangeListProps, 'changes' | 'lineInputs'>) {
+function ChangeItem({
+  change,
+  lineInput,
+  unitSystem,
+  onExclude,
+  excluding,
+}: { change: RewriteChange; lineInput: string | undefined } & Omit<ChangeListProps, 'changes' | 'lineInputs'>) {
   const cautions = change.rule?.cautions ?? [];
   return (
     <li className="flex flex-col gap-2 rounded-field border border-line bg-surface p-4">
@@ -88,7 +94,13 @@ function ChangeItem({ change, lineInput, unitSystem, onExclude, excluding }: { c
         </ul>
       )}
       {change.swapped && onExclude && (
-        <Button variant="quiet" size="sm" className="self-start underline underline-offset-2" disabled={excluding} onClick={() => onExclude({ id: change.to.id, name: change.to.name })}>
+        <Button
+          variant="quiet"
+          size="sm"
+          className="self-start underline underline-offset-2"
+          disabled={excluding}
+          onClick={() => onExclude({ id: change.to.id, name: change.to.name })}
+        >
           Don’t use {change.to.name}; rewrite again
         </Button>
       )}

@@ -55,7 +55,9 @@ export function InfeasibleView({ message, details, targets, onApply, applying }:
                     {binding ? <Badge tone="beet">Out of reach</Badge> : <Badge tone="herb">Met</Badge>}
                   </th>
                   <td className="px-2 py-2 text-right align-top">{targetText(row.target, targets[row.target] as number)}</td>
-                  <td className="py-2 pl-2 text-right align-top font-bold whitespace-nowrap tabular-nums">{formatNutrient(row.key, details.bestReachable[row.key])}</td>
+                  <td className="py-2 pl-2 text-right align-top font-bold whitespace-nowrap tabular-nums">
+                    {formatNutrient(row.key, details.bestReachable[row.key])}
+                  </td>
                 </tr>
               );
             })}

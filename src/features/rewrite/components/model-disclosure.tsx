@@ -19,12 +19,14 @@ export function ModelDisclosure({ request, signature }: { request: RewriteReques
       </summary>
       <div className="flex flex-col gap-3 pt-2 pb-3">
         <p className="text-sm text-ink-soft">
-          Not needed to cook. This is the exact optimisation problem Hearthswap worked out for this answer, as plain text in the standard
-          LP file format: one yes/no choice per candidate food and line, its grams, how far each line and the dish may change, and your
-          targets. Anyone with optimisation software can paste it in and check the answer.
+          Not needed to cook. This is the exact optimisation problem Hearthswap worked out for this answer, as plain text in the standard LP file format: one
+          yes/no choice per candidate food and line, its grams, how far each line and the dish may change, and your targets. Anyone with optimisation software
+          can paste it in and check the answer.
         </p>
         {model.isPending && open && <LoadingState label="Asking for the calculation…" className="py-2" />}
-        {model.isError && <ErrorState title="The calculation didn’t load" error={model.error} onRetry={() => void model.refetch()} retrying={model.isFetching} />}
+        {model.isError && (
+          <ErrorState title="The calculation didn’t load" error={model.error} onRetry={() => void model.refetch()} retrying={model.isFetching} />
+        )}
         {model.data !== undefined &&
           (model.data ? (
             <>

@@ -124,9 +124,7 @@ function RewritePanelBody({ recipe, unitSystem, signedIn, saveAction, renderFood
   const watchedTargets = useWatch({ control: form.control, name: 'targets' });
   const usingDefaults = watchedTargets.proteinMinG === String(defaults.proteinMinG) && watchedTargets.kcalMax === String(defaults.kcalMax);
 
-  const [outcome, setOutcome] = useState<Outcome | null>(() =>
-    stored?.last ? { ...stored.last, signature: requestSignature(stored.last.request) } : null,
-  );
+  const [outcome, setOutcome] = useState<Outcome | null>(() => (stored?.last ? { ...stored.last, signature: requestSignature(stored.last.request) } : null));
   const mutation = useRewriteRecipe();
   const { mutate } = mutation;
   const inFlight = useRef<AbortController | null>(null);
@@ -204,8 +202,8 @@ function RewritePanelBody({ recipe, unitSystem, signedIn, saveAction, renderFood
             Make it lighter
           </h2>
           <p className="max-w-measure text-ink-soft">
-            Set what one serving should give you. Hearthswap looks for lighter foods that play the same part in the dish and works out the
-            amounts, so the pan holds about as much as before.
+            Set what one serving should give you. Hearthswap looks for lighter foods that play the same part in the dish and works out the amounts, so the pan
+            holds about as much as before.
           </p>
         </div>
         <Card>

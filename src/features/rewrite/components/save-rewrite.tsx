@@ -51,8 +51,8 @@ export function SaveRewrite({ action, draftFor, stale }: SaveRewriteProps) {
           </div>
         }
       >
-        Saving puts the recipe as written and this rewrite side by side in your recipe book. The recipe, your targets and this rewrite stay
-        here while you sign in.
+        Saving puts the recipe as written and this rewrite side by side in your recipe book. The recipe, your targets and this rewrite stay here while you sign
+        in.
       </Alert>
     );
   }
@@ -103,21 +103,21 @@ export function SaveRewrite({ action, draftFor, stale }: SaveRewriteProps) {
           </Button>
         </div>
       ) : (
-      <div className="flex flex-wrap items-end gap-3">
-        <TextField
-          label="Recipe title"
-          hint="As written becomes version 1, this rewrite version 2."
-          placeholder="e.g. Sunday lasagna"
-          value={title}
-          maxLength={TITLE_MAX + 20}
-          onChange={(event) => setTitle(event.target.value)}
-          error={titleError ?? undefined}
-          containerClassName="min-w-0 flex-1 basis-64"
-        />
-        <Button type="submit" loading={saving} loadingLabel="Saving…">
-          Save to my recipe book
-        </Button>
-      </div>
+        <div className="flex flex-wrap items-end gap-3">
+          <TextField
+            label="Recipe title"
+            hint="As written becomes version 1, this rewrite version 2."
+            placeholder="e.g. Sunday lasagna"
+            value={title}
+            maxLength={TITLE_MAX + 20}
+            onChange={(event) => setTitle(event.target.value)}
+            error={titleError ?? undefined}
+            containerClassName="min-w-0 flex-1 basis-64"
+          />
+          <Button type="submit" loading={saving} loadingLabel="Saving…">
+            Save to my recipe book
+          </Button>
+        </div>
       )}
       {error != null && <ErrorState title="The rewrite wasn’t saved" error={error} />}
     </form>

@@ -60,7 +60,11 @@ function FieldLabel({ text, unit }: { text: string; unit: string }) {
 }
 
 function Unit({ children }: { children: ReactNode }) {
-  return <span aria-hidden="true" className="pr-2 text-sm font-bold text-ink-soft">{children}</span>;
+  return (
+    <span aria-hidden="true" className="pr-2 text-sm font-bold text-ink-soft">
+      {children}
+    </span>
+  );
 }
 
 function defaultsNote(defaults: DefaultTargets, usingDefaults: boolean, onUseDefaults: () => void) {
@@ -85,17 +89,7 @@ function defaultsNote(defaults: DefaultTargets, usingDefaults: boolean, onUseDef
 }
 
 /** The cook's wishes for the rewrite: targets per serving, how much may change, what to keep or leave out. */
-export function TargetsForm({
-  form,
-  lines,
-  defaults,
-  usingDefaults,
-  onUseDefaults,
-  onSubmit,
-  submitting,
-  waitingFor,
-  renderFoodSearch,
-}: TargetsFormProps) {
+export function TargetsForm({ form, lines, defaults, usingDefaults, onUseDefaults, onSubmit, submitting, waitingFor, renderFoodSearch }: TargetsFormProps) {
   const {
     register,
     control,
@@ -231,7 +225,9 @@ export function TargetsForm({
                       <li key={index}>
                         <CheckboxField
                           label={line.input}
-                          description={usable ? `${line.food?.name} · ${formatGrams(line.grams)}` : 'Not read as a food with an amount, so the rewrite leaves it as it is.'}
+                          description={
+                            usable ? `${line.food?.name} · ${formatGrams(line.grams)}` : 'Not read as a food with an amount, so the rewrite leaves it as it is.'
+                          }
                           disabled={!usable}
                           checked={usable && checked}
                           onBlur={field.onBlur}
@@ -258,7 +254,10 @@ export function TargetsForm({
                   {excluded.length > 0 ? (
                     <ul className="flex flex-wrap gap-2" aria-label="Foods left out">
                       {field.value.map((food) => (
-                        <li key={food.id} className="flex items-center gap-1 rounded-pill border border-line-strong bg-surface py-0.5 pr-1 pl-3 text-sm font-semibold">
+                        <li
+                          key={food.id}
+                          className="flex items-center gap-1 rounded-pill border border-line-strong bg-surface py-0.5 pr-1 pl-3 text-sm font-semibold"
+                        >
                           {food.name}
                           <button
                             type="button"

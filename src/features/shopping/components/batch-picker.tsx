@@ -59,7 +59,15 @@ export function BatchPicker({ recipes, onAdd, full }: BatchPickerProps) {
       </SelectField>
 
       {versions.isError ? (
-        <Alert tone="danger" title="Its versions didn't load" action={<Button variant="secondary" size="sm" onClick={() => void versions.refetch()}>Try again</Button>}>
+        <Alert
+          tone="danger"
+          title="Its versions didn't load"
+          action={
+            <Button variant="secondary" size="sm" onClick={() => void versions.refetch()}>
+              Try again
+            </Button>
+          }
+        >
           {errorMessage(versions.error)}
         </Alert>
       ) : (

@@ -20,13 +20,20 @@ export function PickedBatches({ picks, titles, onPortions, onRemove, errors = {}
       {picks.map((pick, index) => {
         const title = titles === null ? `Recipe ${pick.recipeId}` : (titles.get(pick.recipeId) ?? 'A recipe no longer in your book');
         return (
-          <li key={`${pick.recipeId}.${pick.versionNumber}`} className="flex flex-col gap-3 rounded-field border border-line bg-oat-50 p-3.5 sm:flex-row sm:items-end sm:justify-between">
+          <li
+            key={`${pick.recipeId}.${pick.versionNumber}`}
+            className="flex flex-col gap-3 rounded-field border border-line bg-oat-50 p-3.5 sm:flex-row sm:items-end sm:justify-between"
+          >
             <div className="flex min-w-0 flex-col gap-2">
               <p className="font-extrabold text-ink">
                 {title} <span className="font-semibold text-ink-soft">· version {pick.versionNumber}</span>
               </p>
               <NumberStepper
-                label={<span className="sr-only">Portions of {title}, version {pick.versionNumber}</span>}
+                label={
+                  <span className="sr-only">
+                    Portions of {title}, version {pick.versionNumber}
+                  </span>
+                }
                 value={pick.portions}
                 min={MIN_PORTIONS}
                 max={MAX_PORTIONS}
@@ -35,7 +42,13 @@ export function PickedBatches({ picks, titles, onPortions, onRemove, errors = {}
                 error={portionsProblem(pick.portions) ?? errors[index]}
               />
             </div>
-            <Button variant="quiet" size="sm" onClick={() => onRemove(index)} aria-label={`Remove ${title}, version ${pick.versionNumber}`} className="self-start sm:self-end">
+            <Button
+              variant="quiet"
+              size="sm"
+              onClick={() => onRemove(index)}
+              aria-label={`Remove ${title}, version ${pick.versionNumber}`}
+              className="self-start sm:self-end"
+            >
               Remove
             </Button>
           </li>
