@@ -1,7 +1,7 @@
 import type { CatalogueFood, DietFlag, Role } from '../../shared/food';
 import { allergensOf, allergensOfRecipe, type Allergen } from '../../shared/allergens';
 import { heldReasonFor, readDish } from '../../shared/culinary/infer-dish';
-import { keepScaleOf, rulesForLine } from '../../shared/culinary/match-rules';
+import { bandFor, keepScaleOf, rulesForLine } from '../../shared/culinary/match-rules';
 import type { CulinaryLine, DishContext, DishType, LineFunction } from '../../shared/culinary/types';
 import type { Candidate, RuleRef } from '../../shared/rewrite/types';
 import { resolvedRulesFor, type ResolvedRule } from './substitution-rules';
@@ -92,6 +92,7 @@ function ruleCandidates(
   rule: ResolvedRule,
   filters: Filters,
   canUse: ((f: CatalogueFood) => boolean) | undefined,
+  band: [number, number] | undefined,
 ): Candidate[] {
   const out: Candidate[] = [];
   const ref = (): RuleRef => ({ ...rule.ref, ...(rule.ref.cautions ? { cautions: [...rule.ref.cautions] } : {}) });
@@ -99,6 +100,7 @@ function ruleCandidates(
     massRatio,
     maxShare: rule.rule.maxShare,
     ...(rule.rule.partial ? { partial: true } : {}),
+    ...(band ? { band: [band[0], band[1]] as [number, number] } : {}),
     rule: ref(),
   });
   for (const t of rule.targets) {
@@ -166,6 +168,7 @@ export function recipeCandidates(
     allowed: new Set<Allergen>([...recipeAllergens, ...(options.allowAllergens ?? [])]),
   };
   const rules = resolved.map((r) => r.rule);
+  const recipeKinds = new Set(reading.lines.map((l) => l.kind));
   const byRule = new Map(resolved.map((r) => [r.rule, r]));
 
   const out = lines.map((line, i): LineCandidates => {
@@ -176,7 +179,8 @@ export function recipeCandidates(
     const heldReason = heldReasonFor(role);
     if (heldReason) return { role, context, candidates: [original], heldReason };
 
-    const applicable = rulesForLine(rules, { food, phrase: line.phrase, role, dishType: reading.dishType, context });
+    const situation = { food, phrase: line.phrase, role, dishType: reading.dishType, context, mixedDish: reading.mixedDish, recipeKinds };
+    const applicable = rulesForLine(rules, situation);
     const seen = new Map<number, Candidate>();
     const candidates: Candidate[] = [original];
     seen.set(food.id, original);
@@ -198,7 +202,7 @@ export function recipeCandidates(
     }
     for (const rule of applicable) {
       const r = byRule.get(rule)!;
-      for (const c of ruleCandidates(engine, r, filters, options.canUse)) {
+      for (const c of ruleCandidates(engine, r, filters, options.canUse, bandFor(rule, situation))) {
         if (seen.has(c.foodId)) continue;
         seen.set(c.foodId, c);
         candidates.push(c);

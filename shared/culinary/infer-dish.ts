@@ -5,6 +5,11 @@ export interface DishReading {
   dishType: DishType;
   /** a butter-and-flour (or oil-and-flour) roux thickens milk or cream */
   hasRoux: boolean;
+  /**
+   * the main protein is one part of a mixed dish (a casserole, pie filling, pasta or rice dish, chili,
+   * taco filling), not shaped or breaded into the portion itself (a loaf, meatballs, patties, a cutlet)
+   */
+  mixedDish: boolean;
   lines: { kind: LineKind; role: LineFunction; context: DishContext }[];
 }
 
@@ -12,6 +17,9 @@ const TOPPING_WORDS = /\b(for (the )?(top|topping|serving|garnish|sprinkling)|to
 const GREASE_WORDS = /\b(for (the )?(pan|griddle|skillet|greasing|frying)|to grease|greasing|for the dish)\b/i;
 const COATING_WORDS = /\b(for (dredging|coating|dusting|breading)|dredg|dust(ing)?)\b/i;
 const BAKE_TYPES: readonly DishType[] = ['leavened-bake', 'batter', 'dough'];
+const MIXED_TYPES: readonly DishType[] = ['assembled-bake', 'stovetop-sauce', 'simmered-dish', 'griddle-saute'];
+/** the protein is the portion: a burger in a bun, a patty, a cutlet */
+const PORTION_WORDS = /\b(buns?|rolls?|patt(y|ies)|burgers?|cutlets?)\b/i;
 
 function gramsBy(lines: readonly CulinaryLine[], kinds: readonly LineKind[], of: readonly LineKind[]) {
   return lines.reduce((s, l, i) => (of.includes(kinds[i]) ? s + Math.max(0, l.grams) : s), 0);
@@ -41,7 +49,10 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
   const layered = /\b(layer|lasagna|casserole|baked|gratin)\b/i.test(comments);
   const cheese = has('melting-cheese', 'fresh-cheese', 'hard-cheese');
   const mashedTop = lines.some((l, i) => kinds[i] === 'starch' && /\bpotato/i.test(l.food?.name ?? '')) && has('meat');
+  // eggs set with milk around bread or fillings in the oven: a strata, quiche or breakfast casserole
+  const custard = has('egg') && has('milk', 'cream') && !has('flour') && g('egg', 'milk', 'cream') >= 0.3 * total;
   if (
+    custard ||
     pieCrust ||
     has('condensed-soup') ||
     layered ||
@@ -108,6 +119,8 @@ function roleOf(
       if (bake) return 'structure';
       if (has('meat') && has('crumbs')) return 'binder';
       if (dish === 'assembled-bake' && has('fresh-cheese')) return 'binder';
+      // eggs set with milk in the oven: a strata, quiche or breakfast casserole
+      if (dish === 'assembled-bake' && has('milk', 'cream')) return 'custard';
       if (dish === 'stovetop-sauce' && has('starch') && !has('milk', 'cream')) return 'sauce';
       if (COATING_WORDS.test(note) || has('crumbs')) return 'coating';
       return 'main-protein';
@@ -206,11 +219,15 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
   // sugar is structure where it outweighs the flour (brownies, pound cake) or melts into chocolate
   const sugarIsStructure = kinds.includes('chocolate') || g('sugar') >= flourGrams;
   const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat };
+  // mince bound with crumbs and egg (a loaf, meatballs) or a breaded piece is shaped into the portion
+  const shaped = kinds.includes('meat') && kinds.includes('crumbs') && kinds.includes('egg');
+  const portion = lines.some((l) => PORTION_WORDS.test(`${l.phrase} ${l.comment ?? ''}`));
+  const mixedDish = MIXED_TYPES.includes(dishType) && !shaped && !portion;
   const out = lines.map((line, i) => {
     const role = overrides[i] ?? roleOf(line, kinds[i], dishType, ctx, i);
     return { kind: kinds[i], role, context: contextOf(role, dishType, hasRoux, line.comment) };
   });
-  return { dishType, hasRoux, lines: out };
+  return { dishType, hasRoux, mixedDish, lines: out };
 }
 
 /** Functions that keep a line exactly as written unless the cook unlocks it (PRODUCT.md step 5). */
@@ -238,6 +255,7 @@ export const LINE_FUNCTION_WORDS: Record<LineFunction, string> = {
   structure: 'structure of the bake',
   thickener: 'thickener',
   binder: 'binder',
+  custard: 'custard (eggs set with milk)',
   'main-protein': 'main protein',
   'melting-cheese': 'melting cheese',
   'hard-cheese': 'hard cheese',

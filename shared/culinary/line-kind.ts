@@ -4,43 +4,45 @@ import type { CulinaryLine } from './types';
  * What kind of ingredient a line is, before the dish is known: read from the food's catalogue roles
  * and name, and the words the cook wrote. Dish type and line function are built on these kinds.
  */
-export type LineKind =
-  | 'salt'
-  | 'yeast'
-  | 'leavener'
-  | 'extract'
-  | 'acid'
-  | 'seasoning'
-  | 'aromatic'
-  | 'liquid'
-  | 'flour'
-  | 'starch'
-  | 'crumbs'
-  | 'egg'
-  | 'sugar'
-  | 'syrup'
-  | 'chocolate'
-  | 'mix-in'
-  | 'butter-oil'
-  | 'milk'
-  | 'cream'
-  | 'cultured'
-  | 'melting-cheese'
-  | 'hard-cheese'
-  | 'fresh-cheese'
-  | 'meat'
-  | 'cured-meat'
-  | 'fish'
-  | 'legume'
-  | 'tomato'
-  | 'vegetable'
-  | 'fruit'
-  | 'nut'
-  | 'sauce'
-  | 'condensed-soup'
-  | 'dressing'
-  | 'wrap'
-  | 'other';
+export const LINE_KINDS = [
+  'salt',
+  'yeast',
+  'leavener',
+  'extract',
+  'acid',
+  'seasoning',
+  'aromatic',
+  'liquid',
+  'flour',
+  'starch',
+  'crumbs',
+  'egg',
+  'sugar',
+  'syrup',
+  'chocolate',
+  'mix-in',
+  'butter-oil',
+  'milk',
+  'cream',
+  'cultured',
+  'melting-cheese',
+  'hard-cheese',
+  'fresh-cheese',
+  'meat',
+  'cured-meat',
+  'fish',
+  'legume',
+  'tomato',
+  'vegetable',
+  'fruit',
+  'nut',
+  'sauce',
+  'condensed-soup',
+  'dressing',
+  'wrap',
+  'other',
+] as const;
+export type LineKind = (typeof LINE_KINDS)[number];
 
 const has = (roles: readonly string[], ...r: string[]) => r.some((x) => roles.includes(x));
 

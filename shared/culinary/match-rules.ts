@@ -1,3 +1,4 @@
+import type { LineKind } from './line-kind';
 import type { FoodClass, SubstitutionRule } from './rule-schema';
 import type { CulinaryFood, DishContext, DishType, LineFunction } from './types';
 
@@ -21,12 +22,22 @@ export function inFoodClass(cls: FoodClass, food: CulinaryFood, phrase: string):
   if (cls.notPhrase && re(cls.notPhrase).test(phrase)) return false;
   if (cls.roles && !cls.roles.some((r) => food.roles.includes(r))) return false;
   if (cls.minFatG !== undefined && !(food.per100g.fatG >= cls.minFatG)) return false;
+  if (cls.maxFatG !== undefined && !(food.per100g.fatG <= cls.maxFatG)) return false;
   return true;
 }
 
-/** Whether a rule holds for a line's function in this dish and context. */
-export function ruleHoldsIn(rule: SubstitutionRule, role: LineFunction, dishType: DishType, context: DishContext): boolean {
+/** Whether a rule holds for a line's function in this dish and context (`mixedDish`: see DishReading). */
+export function ruleHoldsIn(
+  rule: SubstitutionRule,
+  role: LineFunction,
+  dishType: DishType,
+  context: DishContext,
+  mixedDish = false,
+  recipeKinds: ReadonlySet<LineKind> = new Set(),
+): boolean {
   if (rule.functions && !rule.functions.includes(role)) return false;
+  if (rule.recipeHas && !rule.recipeHas.every((k) => recipeKinds.has(k))) return false;
+  if (rule.mixedDishOnly && !(mixedDish && role === 'main-protein')) return false;
   if (rule.dishTypes && !rule.dishTypes.includes(dishType)) return false;
   if (rule.contexts.fails?.includes(context)) return false;
   if (rule.contexts.works) return rule.contexts.works.includes(context);
@@ -40,11 +51,28 @@ export interface LineSituation {
   role: LineFunction;
   dishType: DishType;
   context: DishContext;
+  /** the dish's main protein is one part of a mixed dish (DishReading.mixedDish) */
+  mixedDish?: boolean;
+  /** every line kind in the recipe (for rules with recipeHas) */
+  recipeKinds?: ReadonlySet<LineKind>;
 }
 
 /** The rules that apply to a line: its food class, function, dish type and context. */
 export function rulesForLine(rules: readonly SubstitutionRule[], line: LineSituation): SubstitutionRule[] {
-  return rules.filter((r) => inFoodClass(r.from, line.food, line.phrase) && ruleHoldsIn(r, line.role, line.dishType, line.context));
+  return rules.filter(
+    (r) => inFoodClass(r.from, line.food, line.phrase) && ruleHoldsIn(r, line.role, line.dishType, line.context, line.mixedDish, line.recipeKinds),
+  );
+}
+
+/**
+ * The band of a rule's targets on this line: its own band, widened up to `moreInMixedDish` on the main
+ * protein of a mixed dish (without a band of its own the low end is the written amount, ×1).
+ */
+export function bandFor(rule: SubstitutionRule, line: Pick<LineSituation, 'role' | 'mixedDish'>): [number, number] | undefined {
+  const more = rule.moreInMixedDish !== undefined && line.mixedDish === true && line.role === 'main-protein' ? rule.moreInMixedDish : undefined;
+  if (!more) return rule.band;
+  const [lo, hi] = rule.band ?? [1, 1];
+  return [lo, Math.max(hi, more)];
 }
 
 /**

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { LINE_KINDS } from './line-kind';
 import { DISH_CONTEXTS, DISH_TYPES, LINE_FUNCTIONS, type DishContext, type DishType, type LineFunction } from './types';
 
 const ndb = z.string().regex(/^\d{5}$/, { message: 'an NDB number has five digits' });
@@ -37,6 +38,8 @@ export const foodClassSchema = z
     roles: z.array(z.string()).min(1).optional(),
     /** fat per 100 g at least this (full-fat minces) */
     minFatG: z.number().min(0).optional(),
+    /** fat per 100 g at most this (lean proteins) */
+    maxFatG: z.number().min(0).optional(),
   })
   .refine((c) => c.ndb || c.groups || c.name || c.roles || c.phrase, { message: 'a food class needs ndb, groups, name, phrase or roles' });
 export type FoodClass = z.infer<typeof foodClassSchema>;
@@ -82,6 +85,8 @@ export const substitutionRuleSchema = z
     from: foodClassSchema,
     /** line functions the rule applies to; any function when absent */
     functions: z.array(functionEnum).min(1).optional(),
+    /** kinds of line the recipe must have, all of them ("crumbs", "egg", "meat": a breaded cutlet) */
+    recipeHas: z.array(z.enum(LINE_KINDS)).min(1).optional(),
     /** dish types the rule applies to; any when absent */
     dishTypes: z.array(dishEnum).min(1).optional(),
     contexts: z
@@ -100,6 +105,18 @@ export const substitutionRuleSchema = z
     partial: z.boolean().default(false),
     /** factors the ORIGINAL food may take when it is not swapped ("less oil for sautéing") */
     keepScale: z.tuple([z.number().gt(0).max(1), z.number().min(1).max(2)]).optional(),
+    /**
+     * the targets' grams as factors [lo, hi] of ratio × the grams replaced, instead of the request's
+     * line tolerance: a tight [0.9, 1.1] for 1:1 liquids, starches and meats
+     */
+    band: z.tuple([z.number().gt(0).max(1), z.number().min(1).max(2)]).optional(),
+    /** holds only on the main protein of a mixed dish (not one shaped or breaded into the portion) */
+    mixedDishOnly: z.boolean().default(false),
+    /**
+     * on the main protein of a mixed dish (a casserole, pie filling, pasta, stir-fry, chili, taco filling)
+     * the lean targets may go up to this × ratio: a lighter dish carries more lean meat
+     */
+    moreInMixedDish: z.number().gt(1).max(1.5).optional(),
     cautions: z.array(z.string().min(3)).optional(),
     note: z.string().min(3).optional(),
   })

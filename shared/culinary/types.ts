@@ -14,6 +14,7 @@ export type LineFunction =
   | 'structure'
   | 'thickener'
   | 'binder'
+  | 'custard'
   | 'main-protein'
   | 'melting-cheese'
   | 'hard-cheese'
@@ -48,6 +49,7 @@ export const LINE_FUNCTIONS: readonly LineFunction[] = [
   'topping',
   'coating',
   'binder',
+  'custard',
   'structure',
   'thickener',
   'sweetener',

@@ -118,7 +118,8 @@ function add(column: Record<string, number>, row: string, value: number): void {
  * The product's model, for free line i with written grams G_i and candidate c of mass ratio r_c:
  * binary y_ics, grams x_ics, at most one substitute and share per line, and
  *  - a swap of share s (1 for the whole line; for a partial candidate each of SHARES up to its
- *    maxShare): (1−a)·r_c·s·G_i·y_ics ≤ x_ics ≤ (1+a)·r_c·s·G_i·y_ics, the written food keeping (1−s)·G_i;
+ *    maxShare): lo_c·r_c·s·G_i·y_ics ≤ x_ics ≤ hi_c·r_c·s·G_i·y_ics, the written food keeping (1−s)·G_i
+ *    ([lo_c, hi_c] the candidate's rule band, else [1−a, 1+a]);
  *  - unswapped, the written food at exactly G_i, or within keepScale_i·G_i where a rule allows;
  * dish volume Σ x/ρ within (1 ± t)·ΣV (a sanity bound), per-serving targets, Σ y ≤ M, and for
  * 'closest' each line's mL away from its centre (r_c·s·G_i, or G_i) plus the mL of written food a
@@ -126,8 +127,8 @@ function add(column: Record<string, number>, row: string, value: number): void {
  *  - y_i,orig = 1 − Σ y_ics, so Σ y_ics ≤ 1 (row pick_i);
  *  - x_i,orig = G_i·(1 − Σ s·y_ics) − b_i + h_i with b_i ≤ (1−lo)·G_i·y_i,orig and
  *    h_i ≤ (hi−1)·G_i·y_i,orig (rows kb_i, ka_i; b_i and h_i exist only with keepScale);
- *  - x_ics = (1−a)·r_c·s·G_i·y_ics + z_ics with z_ics ≤ 2a·r_c·s·G_i·y_ics, one row zb each;
- *  - for 'closest', one deviation per line, dev_i ≥ ±[(h_i − b_i)/ρ_orig + Σ (z_ics − a·r_c·s·G_i·y_ics)/ρ_c]:
+ *  - x_ics = lo_c·r_c·s·G_i·y_ics + z_ics with z_ics ≤ (hi_c − lo_c)·r_c·s·G_i·y_ics, one row zb each;
+ *  - for 'closest', one deviation per line, dev_i ≥ ±[(h_i − b_i)/ρ_orig + Σ (z_ics − (1 − lo_c)·r_c·s·G_i·y_ics)/ρ_c]:
  *    at most one substitute of a line is used, so this is that food's |volume − centre|.
  * Every nutrient, volume and objective row then reads as "change from the written recipe", the
  * written values moving to the right-hand sides. Fixed lines are constants there too.
@@ -234,9 +235,9 @@ export function buildModel(
       const band = `zb_${p}_${s.key}`;
       // the written food gives up its share s, the substitute comes in at the low end of its band
       addFood(y, orig.candidate, rhoOrig, -s.share * orig.centreGrams);
-      addFood(y, s.candidate, rho, s.centreGrams - s.spanGrams);
-      deviation(y, -s.spanGrams / rho);
-      add(y, band, -2 * s.spanGrams);
+      addFood(y, s.candidate, rho, s.lowGrams);
+      deviation(y, (s.lowGrams - s.centreGrams) / rho);
+      add(y, band, -s.widthGrams);
       // 'closest' prices the written food given up, so a partial swap replaces no more than it must
       if (closest) add(y, OBJ, (weights.perMl * s.share * orig.centreGrams) / rhoOrig);
       variables[s.y!] = y;

@@ -45,9 +45,13 @@ function percent(factor: number): string {
 }
 
 /** What rule a swap follows, as the cook reads it: the rule's own label, or the coach's swap and its ratio. */
-function ruleText(swap: CandidateSlot, from: string): string {
-  const { rule, approved, name } = swap.candidate;
-  if (rule && !approved) return rule.label;
+function ruleText(swap: CandidateSlot, from: string, gramsPerGramReplaced: number): string {
+  const { rule, approved, name, band } = swap.candidate;
+  if (rule && !approved) {
+    // a rule band reaching past the line tolerance (more of a lean main protein) says how far it went
+    const off = Math.abs(gramsPerGramReplaced / swap.ratio - 1) > 0.1 + 1e-9;
+    return band && off ? `${rule.label} (here ×${gramsPerGramReplaced.toFixed(2)} by weight; the rule allows ×${band[0]}–${band[1]} of its ratio)` : rule.label;
+  }
   if (approved) return `${name} for ${from}, ${ratioWords(swap.ratio)}, a swap approved by ${approved.by}`;
   return `${name} for ${from}, ${ratioWords(swap.ratio)}`;
 }
@@ -107,9 +111,9 @@ export function explainChanges(
       what = `${added.grams > was.grams ? 'More' : 'Less'} ${from} (${grams(was.grams)} → ${grams(added.grams)}; ${may})`;
     } else if (partial) {
       const kept = now.parts[0].grams;
-      what = `Replace ${shareWords(swap.share)} of the ${from} with ${grams(added.grams)} ${added.food.name} (${grams(kept)} of the ${grams(was.grams)} kept) — ${ruleText(swap, from)}`;
+      what = `Replace ${shareWords(swap.share)} of the ${from} with ${grams(added.grams)} ${added.food.name} (${grams(kept)} of the ${grams(was.grams)} kept) — ${ruleText(swap, from, added.grams / (was.grams - kept))}`;
     } else {
-      what = `Swap ${grams(was.grams)} ${from} for ${grams(added.grams)} ${added.food.name} — ${ruleText(swap, from)}`;
+      what = `Swap ${grams(was.grams)} ${from} for ${grams(added.grams)} ${added.food.name} — ${ruleText(swap, from, added.grams / was.grams)}`;
     }
     const per = effects.length ? `: ${listed(effects)} per serving` : '';
     const volumeNote = `keep the dish's volume (${signed(volumeDelta, 0, 'mL')})`;

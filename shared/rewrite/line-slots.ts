@@ -6,8 +6,8 @@ import type { Candidate, RewriteLine } from './types';
 /**
  * How a candidate takes part in its line (see buildModel for the algebra):
  *  - 'original': the written food, at exactly its written grams G, or within keepScale·G;
- *  - 'swap': a share s of the line (1 for the whole line) replaced by (1 ± a)·r·s·G grams of the
- *    substitute (r its mass ratio), the written food keeping (1 − s)·G.
+ *  - 'swap': a share s of the line (1 for the whole line) replaced by lo·r·s·G … hi·r·s·G grams of
+ *    the substitute (r its mass ratio, [lo, hi] its rule's band or 1 ± a), the written food keeping (1 − s)·G.
  */
 export type SlotKind = 'original' | 'swap';
 
@@ -31,7 +31,7 @@ export interface CandidateSlot {
   y?: string;
   /** original with keepScale: grams less than written */
   below?: string;
-  /** original with keepScale: grams more than written; swap: grams above the low end of its band (absent when a = 0) */
+  /** original with keepScale: grams more than written; swap: grams above the low end of its band (absent when the band has no width) */
   above?: string;
   /** s, the share of the written grams the swap replaces (1: the whole line; 1 for the original too) */
   share: number;
@@ -41,10 +41,10 @@ export interface CandidateSlot {
   ratio: number;
   /** original: G; swap: r·s·G */
   centreGrams: number;
-  /** swap: a·r·s·G, how far grams may go either way; original: 0 */
-  spanGrams: number;
-  /** a, the line tolerance of a substitute's band (0 for the original) */
-  tolerance: number;
+  /** swap: the low end of its band, lo·r·s·G ((1 − a)·r·s·G without a band of its own); original: G */
+  lowGrams: number;
+  /** swap: how far above lowGrams its grams may go, (hi − lo)·r·s·G (2a·r·s·G); original: 0 */
+  widthGrams: number;
   /** original: grams it may go below and above G when not swapped (keepScale) */
   keepBelow: number;
   keepAbove: number;
@@ -107,6 +107,16 @@ function usable(c: Candidate): boolean {
   return c.maxShare === undefined || (positive(c.maxShare) && c.maxShare <= 1);
 }
 
+/** [lo, hi], the factors of r·s·G a substitute's grams may take: its rule's band, else 1 ± a. */
+export function bandOf(c: Candidate, lineTolerance: number): [number, number] {
+  const band = c.approved ? undefined : c.band;
+  if (!band) return [1 - lineTolerance, 1 + lineTolerance];
+  const [lo, hi] = band;
+  if (!(Number.isFinite(lo) && Number.isFinite(hi) && lo > 0 && lo <= 1 && hi >= 1))
+    throw new RangeError(`${c.name}: band must be [lo, hi] with 0 < lo ≤ 1 ≤ hi`);
+  return [lo, hi];
+}
+
 function keepScaleOf(line: RewriteLine): [number, number] {
   if (!line.keepScale) return [1, 1];
   const [lo, hi] = line.keepScale;
@@ -124,8 +134,10 @@ export function maxDeviationMl(slot: CandidateSlot, originalDensity: number): nu
   switch (slot.kind) {
     case 'original':
       return Math.max(slot.keepBelow, slot.keepAbove) / slot.densityGPerMl;
-    case 'swap':
-      return slot.spanGrams / slot.densityGPerMl + slot.centreGrams / slot.ratio / originalDensity;
+    case 'swap': {
+      const fromCentre = Math.max(slot.centreGrams - slot.lowGrams, slot.lowGrams + slot.widthGrams - slot.centreGrams);
+      return fromCentre / slot.densityGPerMl + slot.centreGrams / slot.ratio / originalDensity;
+    }
   }
 }
 
@@ -153,7 +165,7 @@ export function closestWeights(lines: LineSlot[], maxSwaps: number | null): Clos
 
 /** Slots that allow exactly the same grams, volumes and amount costs; only these can stand in for each other. */
 function shapeOf(s: CandidateSlot): string {
-  return [s.kind, s.densityGPerMl, s.ratio, s.share, s.centreGrams, s.spanGrams, s.keepBelow, s.keepAbove].join('|');
+  return [s.kind, s.densityGPerMl, s.ratio, s.share, s.centreGrams, s.lowGrams, s.widthGrams, s.keepBelow, s.keepAbove].join('|');
 }
 
 export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: readonly TargetRow[]): LineSlot[] {
@@ -166,7 +178,7 @@ export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: 
     const [lo, hi] = keepScaleOf(line);
     const all = line.candidates.flatMap((candidate, j): CandidateSlot[] => {
       if (!usable(candidate)) return [];
-      const base = { candidate, position: j, key: String(j), share: 1, spanGrams: 0, tolerance: 0, keepBelow: 0, keepAbove: 0 };
+      const base = { candidate, position: j, key: String(j), share: 1, lowGrams: G, widthGrams: 0, keepBelow: 0, keepAbove: 0 };
       if (candidate.original) {
         return [
           {
@@ -184,6 +196,7 @@ export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: 
         ];
       }
       const ratio = massRatioOf(candidate, rho);
+      const [bandLo, bandHi] = bandOf(candidate, a);
       const maxShare = candidate.maxShare ?? 1;
       const partial = candidate.partial === true || maxShare < 1;
       const allowed = SHARES.filter((share) => share <= maxShare + 1e-9);
@@ -196,12 +209,12 @@ export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: 
           key,
           share,
           y: `y_${position}_${key}`,
-          above: a > 0 ? `z_${position}_${key}` : undefined,
+          above: bandHi > bandLo ? `z_${position}_${key}` : undefined,
           densityGPerMl: candidate.densityGPerMl,
           ratio,
-          tolerance: a,
           centreGrams: ratio * share * G,
-          spanGrams: a * ratio * share * G,
+          lowGrams: bandLo * ratio * share * G,
+          widthGrams: (bandHi - bandLo) * ratio * share * G,
           rank: candidate.approved ? 1 : 2,
         };
       });

@@ -48,7 +48,7 @@ export function solvedChoices(meta: RewriteModelMeta, values: Record<string, num
     if (!swap) {
       return { line, parts: [part(orig.candidate, G - value(orig.below) + value(orig.above), orig.densityGPerMl)], swap: null };
     }
-    const substitute = part(swap.candidate, swap.centreGrams - swap.spanGrams + value(swap.above), swap.densityGPerMl);
+    const substitute = part(swap.candidate, swap.lowGrams + value(swap.above), swap.densityGPerMl);
     const parts = swap.share < 1 ? [part(orig.candidate, (1 - swap.share) * G, orig.densityGPerMl), substitute] : [substitute];
     return { line, parts, swap };
   });

@@ -45,6 +45,12 @@ export interface Candidate {
   maxShare?: number;
   /** the candidate may share the line with the original food (implied by maxShare < 1) */
   partial?: boolean;
+  /**
+   * the rule's own band [lo, hi] on grams, as factors of massRatio·s·G (lo ≤ 1 ≤ hi): a tight
+   * [0.9, 1.1] for 1:1 liquids and starches, up to ×1.5 for more of a lean main protein. It replaces
+   * the request's line tolerance for this candidate; a coach's approved swap keeps the line tolerance.
+   */
+  band?: [number, number];
   rule?: RuleRef;
 }
 

@@ -26,6 +26,9 @@ interface Outcome {
   status: number;
   verdicts: LineVerdict[] | null;
   message?: string;
+  targets: { proteinMinG: number; kcalMax: number };
+  /** the plan's changes in the cook's words, for PANEL_PLANS=1 */
+  changes?: string[];
 }
 
 const toJudged = (lines: { index: number; food: { id: number; name: string }; grams: number }[]): JudgedPlanLine[] =>
@@ -40,9 +43,13 @@ async function rewriteAll(): Promise<Outcome[]> {
     for (const objective of OBJECTIVES) {
       const res = await request(t.app).post('/api/rewrite').send({ text, servings: recipe.servings, targets, objective });
       if (res.status === 200) {
-        outcomes.push({ recipe, objective, status: 200, verdicts: judgePlan(recipe, toJudged(res.body.before.lines), toJudged(res.body.after.lines)) });
+        const verdicts = judgePlan(recipe, toJudged(res.body.before.lines), toJudged(res.body.after.lines));
+        const changes = (res.body.changes as { line: number; reason: string; note?: string }[]).map(
+          (c) => `    line ${c.line} "${recipe.lines[c.line].text}": ${c.reason}${c.note ? ` (${c.note})` : ''}`,
+        );
+        outcomes.push({ recipe, objective, status: 200, verdicts, targets, changes });
       } else {
-        outcomes.push({ recipe, objective, status: res.status, verdicts: null, message: res.body?.error?.message });
+        outcomes.push({ recipe, objective, status: res.status, verdicts: null, message: res.body?.error?.message, targets });
       }
     }
   }
@@ -51,10 +58,12 @@ async function rewriteAll(): Promise<Outcome[]> {
 
 describe('comfort-food panel: would a cook cook these plans?', () => {
   // Issue 10 asks for ≥ 90 % of changed lines and ≥ 80 % of plans acceptable with ≥ 2/3 of rewrites
-  // answered by a plan. Measured when the rules landed: 90.5 % of lines, 73 % of plans, 45 % plans
-  // (many recipes cannot reach +30 % protein with the rules a cook accepts). Until the issue's bar is
-  // met, this test holds the floors reached so far, so a change can only keep or raise them.
-  it('holds the floors reached so far: ≥ 90 % of changed lines and ≥ 70 % of plans acceptable, ≥ 40 % of rewrites answered by a plan', async () => {
+  // answered by a plan. The first two hold (98.9 % and 96.3 % when measured); the third does not:
+  // 27/66 rewrites (40.9 %) are plans, because +30 % protein and −20 % kcal are out of reach of the
+  // swaps a cook accepts for the bakes (pancakes, cookies, brownies, pizza dough), a pot pie under its
+  // crust, and carbonara, mac and cheese and quesadillas by a few kcal a serving (tests/panel/README.md).
+  // The plan share is held at the floor reached, so a change can only keep or raise it.
+  it("meets the issue's bar for acceptable lines (≥ 90 %) and plans (≥ 80 %); ≥ 40 % of rewrites answered by a plan (floor reached; the issue asks 2/3)", async () => {
     const outcomes = await rewriteAll();
     const scores: Record<string, PanelScore> = { tune: emptyScore(), 'held-out': emptyScore(), all: emptyScore() };
     const report: string[] = [];
@@ -62,9 +71,12 @@ describe('comfort-food panel: would a cook cook these plans?', () => {
       addToScore(scores[o.recipe.half], o.verdicts);
       addToScore(scores.all, o.verdicts);
       if (!o.verdicts) {
-        report.push(`  ${o.recipe.id} [${o.objective}] no plan (${o.status}): ${o.message}`);
+        const t = `targets ≥ ${o.targets.proteinMinG.toFixed(1)} g protein, ≤ ${o.targets.kcalMax.toFixed(0)} kcal`;
+        report.push(`  ${o.recipe.id} [${o.objective}] no plan (${o.status}; ${t}): ${o.message}`);
         continue;
       }
+      // PANEL_PLANS=1 prints the tune half's plans to read as a cook (the held-out half is only measured)
+      if (process.env.PANEL_PLANS === '1' && o.recipe.half === 'tune') report.push(`  plan ${o.recipe.id} [${o.objective}]:`, ...(o.changes ?? []));
       for (const v of o.verdicts.filter((x) => !x.ok)) report.push(`  ✗ ${o.recipe.id} [${o.objective}] line ${v.line} "${v.text}": ${v.detail}`);
     }
     console.log(
@@ -81,7 +93,7 @@ describe('comfort-food panel: would a cook cook these plans?', () => {
     expect(outcomes.filter((o) => o.status !== 200 && o.status !== 422).map((o) => `${o.recipe.id} ${o.objective}: ${o.status} ${o.message}`)).toEqual([]);
     const all = scores.all;
     expect(all.plans / all.rewrites).toBeGreaterThanOrEqual(0.4);
-    expect(all.acceptablePlans / all.plans).toBeGreaterThanOrEqual(0.7);
+    expect(all.acceptablePlans / all.plans).toBeGreaterThanOrEqual(0.8);
     expect(all.acceptableChangedLines / Math.max(1, all.changedLines)).toBeGreaterThanOrEqual(0.9);
   }, 300_000);
 });

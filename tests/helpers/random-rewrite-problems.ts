@@ -77,11 +77,18 @@ export interface RandomRecipeShape {
   partialShare?: number;
   /** share of lines a rule lets move (less oil, more vegetables) */
   keepScaleShare?: number;
+  /** share of substitutes whose rule gives its own band (a tight 1:1 liquid, up to ×1.5 of a lean protein) */
+  bandShare?: number;
   /** share of lines held as written */
   heldShare?: number;
 }
 
 const RATIOS = [0.5, 0.75, 1, 1, 1.32, 1.5] as const;
+const BANDS: [number, number][] = [
+  [0.9, 1.1],
+  [0.9, 1.5],
+  [1, 1],
+];
 const KEEP_SCALES: [number, number][] = [
   [0.5, 1],
   [1, 1.5],
@@ -114,6 +121,8 @@ export function randomRecipe(rng: Rng, shape: RandomRecipeShape): RewriteLine[] 
         c.partial = true;
         if (rng() < 0.5) c.maxShare = pick(rng, [0.5, 0.75]);
       }
+      // drawn only when asked for, so that shapes without bands keep their problems
+      if (shape.bandShare && rng() < shape.bandShare) c.band = pick(rng, BANDS);
       c.rule = { id: `rule-${i}-${k + 1}`, label: `${c.name} for ${original.name}, ${ratio ?? 1}:1 by weight`, why: 'invented test rule' };
       if (rng() < (shape.approvedShare ?? 0)) {
         c.approved = { by: 'Coach Wren', note: 'invented test note' };
@@ -205,6 +214,7 @@ export function randomProblem(seed: number, shape?: Partial<RandomRecipeShape>):
     massRatioShare: shape?.massRatioShare ?? 0.3,
     partialShare: shape?.partialShare ?? 0.3,
     keepScaleShare: shape?.keepScaleShare ?? 0.2,
+    bandShare: shape?.bandShare ?? 0.2,
     heldShare: shape?.heldShare ?? 0.1,
   });
   const servings = pick(rng, [1, 2, 4, 6, 8]);

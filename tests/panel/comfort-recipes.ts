@@ -80,6 +80,19 @@ const leanHam = swap('^(Ham, (sliced, pre-packaged|smoked, extra lean)|Canadian 
 const LESS = (lo = 0.5): [number, number] => [lo, 1];
 const MORE: [number, number] = [1, 1.5];
 
+/**
+ * The main protein of a mixed dish (a casserole, layered bake, pie filling, pasta or rice dish, chili,
+ * stew, a taco, quesadilla or enchilada filling; not a burger, a meatloaf or a breaded cutlet, where the
+ * protein is the portion, and not a sausage or cured meat, where more is more salt and fat): a cook
+ * making the dish lighter may use up to half again as much of it in its lean form (*common practice*;
+ * label rule in tests/panel/README.md, applied to both halves alike). Its lean swaps accept up to ×1.5
+ * by weight, and a written protein that is already lean (under 10 g fat per 100 g, FDA 21 CFR
+ * 101.62(e)(2): skinless poultry meat, sirloin, canned tuna) may take ×1–1.5 as it is.
+ */
+const MORE_LEAN_MAIN = 1.5;
+const moreOfLean = (swaps: PanelSwap[]): PanelSwap[] => swaps.map((s) => ({ ...s, ratio: [s.ratio[0], Math.max(s.ratio[1], MORE_LEAN_MAIN)] }));
+const MORE_LEAN: [number, number] = [1, MORE_LEAN_MAIN];
+
 const keepSeasoning = 'seasoning: kept as written';
 const keepLeavener = 'leavener: kept as written';
 const keepAromatic = 'aromatic: kept as written';
@@ -110,7 +123,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
     half: 'held-out',
     lines: [
       { text: '12 lasagna noodles', swaps: [wholeGrainPasta] },
-      { text: '1 lb ground beef', swaps: leanerMince },
+      { text: '1 lb ground beef', swaps: moreOfLean(leanerMince) },
       { text: '1 lb sweet Italian sausage', swaps: [turkeySausage, leanPorkSausage], scale: LESS() },
       { text: '1 onion, chopped', keep: keepAromatic, scale: MORE },
       { text: '2 cloves garlic, minced', keep: keepAromatic },
@@ -148,7 +161,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
     half: 'held-out',
     lines: [
       { text: '2 tablespoons vegetable oil', keep: 'sautéing fat', scale: LESS(0.4) },
-      { text: '2 lb ground beef', swaps: leanerMince },
+      { text: '2 lb ground beef', swaps: moreOfLean(leanerMince) },
       { text: '1 large onion, chopped', keep: keepAromatic, scale: MORE },
       { text: '3 cloves garlic, minced', keep: keepAromatic },
       { text: '2 tablespoons chili powder', keep: keepSeasoning },
@@ -185,7 +198,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
     half: 'held-out',
     lines: [
       { text: '1 tablespoon olive oil', keep: 'sautéing fat', scale: LESS() },
-      { text: '1 1/2 lb ground beef', swaps: leanerMince },
+      { text: '1 1/2 lb ground beef', swaps: moreOfLean(leanerMince) },
       { text: '1 onion, diced', keep: keepAromatic },
       { text: '2 carrots, diced', keep: 'vegetable', scale: MORE },
       { text: '1 cup frozen peas', keep: 'vegetable', scale: MORE },
@@ -270,7 +283,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
     half: 'tune',
     lines: [
       { text: '4 large flour tortillas', keep: 'the wrap' },
-      { text: '2 cups shredded cooked chicken', swaps: [chickenBreastCooked] },
+      { text: '2 cups shredded cooked chicken', swaps: moreOfLean([chickenBreastCooked]), scale: MORE_LEAN },
       { text: '2 cups shredded Monterey Jack cheese', swaps: [lowFatMonterey, partSkimMozzarella], scale: LESS(0.6) },
       { text: '1 tablespoon vegetable oil', keep: 'griddle fat', scale: LESS(0.3) },
       { text: '1/2 cup salsa', keep: 'sauce', scale: MORE },
@@ -319,7 +332,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
       { text: '12 oz egg noodles', swaps: betterPasta },
       { text: '1 (10.5 oz) can condensed cream of mushroom soup', swaps: [swap('^Soup, cream of mushroom, canned, condensed, reduced sodium')] },
       { text: '1 cup whole milk', swaps: [lighterMilk] },
-      { text: '2 (5 oz) cans tuna, drained', swaps: [swap('^Fish, tuna, light, canned in water', [0.8, 1.25])] },
+      { text: '2 (5 oz) cans tuna, drained', swaps: moreOfLean([swap('^Fish, tuna, light, canned in water', [0.8, 1.25])]), scale: MORE_LEAN },
       { text: '1 cup frozen peas', keep: 'vegetable', scale: MORE },
       { text: '1 cup shredded cheddar cheese', swaps: [reducedFatCheddar], scale: LESS() },
       { text: '1/2 cup crushed potato chips', keep: 'topping crunch', scale: LESS(0.3), swaps: [swap('^Bread crumbs, dry, grated, plain', [0.5, 1.3])] },
@@ -340,7 +353,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
       { text: '2 carrots, diced', keep: 'vegetable', scale: MORE },
       { text: '2 stalks celery, diced', keep: 'vegetable', scale: MORE },
       { text: '1 cup frozen peas', keep: 'vegetable', scale: MORE },
-      { text: '3 cups shredded cooked chicken', swaps: [chickenBreastCooked] },
+      { text: '3 cups shredded cooked chicken', swaps: moreOfLean([chickenBreastCooked]), scale: MORE_LEAN },
       { text: '1 pie crust', keep: 'the lid' },
       { text: '1/2 teaspoon salt', keep: keepSeasoning },
       { text: '1/4 teaspoon black pepper', keep: keepSeasoning },
@@ -369,7 +382,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
     servings: 4,
     half: 'tune',
     lines: [
-      { text: '1 lb ground beef', swaps: leanerMince },
+      { text: '1 lb ground beef', swaps: moreOfLean(leanerMince) },
       { text: '1 tablespoon vegetable oil', keep: 'sautéing fat', scale: LESS(0.3) },
       { text: '1 tablespoon chili powder', keep: keepSeasoning },
       { text: '1 teaspoon ground cumin', keep: keepSeasoning },
@@ -404,7 +417,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
     servings: 6,
     half: 'tune',
     lines: [
-      { text: '3 cups shredded cooked chicken', swaps: [chickenBreastCooked] },
+      { text: '3 cups shredded cooked chicken', swaps: moreOfLean([chickenBreastCooked]), scale: MORE_LEAN },
       { text: '8 oz cream cheese, softened', swaps: [lighterCreamCheese] },
       { text: '1 cup sour cream', swaps: [plainYogurt, lighterSourCream] },
       { text: '2 cups shredded Monterey Jack cheese', swaps: [lowFatMonterey, partSkimMozzarella], scale: LESS() },
@@ -421,7 +434,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
     servings: 4,
     half: 'held-out',
     lines: [
-      { text: '1 lb beef sirloin, thinly sliced', keep: 'already a lean cut' },
+      { text: '1 lb beef sirloin, thinly sliced', keep: 'already a lean cut', scale: MORE_LEAN },
       { text: '2 tablespoons butter', keep: 'sautéing fat', scale: LESS() },
       { text: '8 oz mushrooms, sliced', keep: 'vegetable', scale: MORE },
       { text: '1 onion, chopped', keep: keepAromatic },
@@ -462,7 +475,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
       },
       { text: '2 tablespoons vegetable oil', keep: 'frying fat', scale: LESS(0.4) },
       { text: '2 large eggs', keep: 'part of the dish', swaps: eggWhites() },
-      { text: '1 lb boneless skinless chicken thighs, diced', swaps: [chickenBreastRaw] },
+      { text: '1 lb boneless skinless chicken thighs, diced', swaps: moreOfLean([chickenBreastRaw]), scale: MORE_LEAN },
       { text: '1 cup frozen peas and carrots', keep: 'vegetable', scale: MORE },
       { text: '3 tablespoons soy sauce', keep: keepSeasoning, swaps: [swap('^Soy sauce.*(low sodium|reduced sodium)', [0.8, 1.25])] },
       { text: '3 green onions, sliced', keep: keepAromatic },

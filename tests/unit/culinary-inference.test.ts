@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { contextOf, heldReasonFor, inferDishType, readDish } from '../../shared/culinary/infer-dish';
-import { inFoodClass, keepScaleOf, ruleHoldsIn, rulesForLine } from '../../shared/culinary/match-rules';
+import { bandFor, inFoodClass, keepScaleOf, ruleHoldsIn, rulesForLine } from '../../shared/culinary/match-rules';
 import { parseRuleFile } from '../../shared/culinary/rule-schema';
 import type { CulinaryLine } from '../../shared/culinary/types';
 import ruleFile from '../../data/substitution-rules.json';
@@ -175,5 +175,57 @@ describe('rule matching by food class and dish context', () => {
     expect(
       keepScaleOf(rulesForLine(rules, { food: butter, phrase: 'butter', role: 'cooking-fat', dishType: 'stovetop-sauce', context: 'griddle-saute' }))?.range,
     ).toEqual([0.5, 1]);
+  });
+});
+
+describe('mixed dishes and baked custards', () => {
+  const rules = parseRuleFile(ruleFile);
+  const CHICKEN: Spec = [
+    'shredded cooked chicken',
+    420,
+    'Chicken, broilers or fryers, breast, meat only, cooked, roasted',
+    '05',
+    ['poultry'],
+    undefined,
+    '05064',
+    3.6,
+  ];
+  const CRUMBS: Spec = ['dry bread crumbs', 108, 'Bread crumbs, dry, grated, plain', '18', ['breadcrumb-coating'], undefined, '18079', 5.3];
+  const BUNS: Spec = ['hamburger buns', 200, 'Rolls, hamburger or hot dog, plain', '18', ['bread'], undefined, '18350', 4.3];
+  const BROTH: Spec = ['chicken broth', 436, 'Soup, chicken broth, ready-to-serve', '06', ['broth-stock'], undefined, '06194'];
+  const TOMATOES: Spec = ['crushed tomatoes', 794, 'Tomatoes, crushed, canned', '11', ['tomato-sauce'], undefined, '11693'];
+  const BREAD: Spec = ['white bread, cubed', 180, 'Bread, white, commercially prepared', '18', ['bread'], undefined, '18069', 3.3];
+
+  it('the protein of a casserole, a chili or a pasta sauce is one part of a mixed dish; a meatloaf, a burger or a cutlet is the portion', () => {
+    expect(readDish(recipe(BUTTER(76), FLOUR, BROTH, MILK(163), CHICKEN, ONION)).mixedDish).toBe(true);
+    expect(readDish(recipe(BEEF, ONION, TOMATOES, SALT)).mixedDish).toBe(true);
+    expect(readDish(recipe(BEEF, CRUMBS, EGGS, MILK(122), ONION, SALT)).mixedDish).toBe(false);
+    expect(readDish(recipe(BEEF, BUNS, CHEDDAR(), SALT)).mixedDish).toBe(false);
+    // a bake is never a mixed dish
+    expect(readDish(recipe(FLOUR, MILK(480), EGGS, SUGAR(25), POWDER, SALT, BUTTER(40))).mixedDish).toBe(false);
+  });
+
+  it('eggs set with milk around bread (a strata, a breakfast casserole) are a custard in an assembled bake', () => {
+    const eggs: Spec = ['large eggs', 400, 'Egg, whole, raw, fresh', '01', ['egg'], undefined, '01123', 9.5];
+    const strata = readDish(recipe(BREAD, eggs, MILK(488), CHEDDAR(), SALT));
+    expect(strata.dishType).toBe('assembled-bake');
+    expect(strata.lines[1].role).toBe('custard');
+    // a meatloaf's egg still binds, pancakes' eggs are still structure
+    expect(readDish(recipe(BEEF, CRUMBS, EGGS, MILK(122))).lines[2].role).toBe('binder');
+    expect(readDish(recipe(FLOUR, MILK(480), EGGS, SUGAR(25), POWDER, SALT, BUTTER(40))).lines[2].role).toBe('structure');
+  });
+
+  it("a lean swap of a mixed dish's main protein reaches ×1.5; elsewhere it keeps the rule's tight band", () => {
+    const rule = rules.find((r) => r.id === 'cooked-chicken-to-breast')!;
+    expect(bandFor(rule, { role: 'main-protein', mixedDish: true })).toEqual([0.9, 1.5]);
+    expect(bandFor(rule, { role: 'main-protein', mixedDish: false })).toEqual([0.9, 1.1]);
+    expect(bandFor(rule, { role: 'binder', mixedDish: true })).toEqual([0.9, 1.1]);
+    const more = rules.find((r) => r.id === 'lean-main-protein-more')!;
+    expect(ruleHoldsIn(more, 'main-protein', 'assembled-bake', 'filling', true)).toBe(true);
+    expect(ruleHoldsIn(more, 'main-protein', 'assembled-bake', 'filling', false)).toBe(false);
+    expect(ruleHoldsIn(more, 'binder', 'assembled-bake', 'filling', true)).toBe(false);
+    const oil = rules.find((r) => r.id === 'frying-oil-oven-fry')!;
+    expect(ruleHoldsIn(oil, 'cooking-fat', 'other', 'griddle-saute', false, new Set(['crumbs', 'egg', 'meat']))).toBe(true);
+    expect(ruleHoldsIn(oil, 'cooking-fat', 'other', 'griddle-saute', false, new Set(['egg', 'meat']))).toBe(false);
   });
 });

@@ -194,3 +194,84 @@ describe('candidates from rules', () => {
     expect(brownies.lines[1].candidates).toHaveLength(1);
   });
 });
+
+describe('more of a lean main protein, baked custards, oven-frying, tight 1:1 bands (invented recipes)', () => {
+  /** An invented creamed chicken and peas: the chicken is one part of a mixed dish. */
+  const creamedChicken = (chickenNdb: string) => [
+    at('01001', 'butter', 45),
+    at('20081', 'all-purpose flour', 30),
+    at('06194', 'chicken broth', 360),
+    at('01077', 'whole milk', 240),
+    at(chickenNdb, 'shredded cooked chicken', 400),
+    at('11312', 'frozen peas', 134),
+  ];
+
+  it('a lean main protein of a mixed dish may take up to ×1.5 as it is (FDA 21 CFR 101.62(e)(2): lean is under 10 g fat per 100 g)', () => {
+    const r = recipeCandidates(engine, creamedChicken('05064'), none());
+    const chicken = r.lines[4];
+    expect(chicken.role).toBe('main-protein');
+    expect(chicken.keepScale).toEqual([1, 1.5]);
+    expect(chicken.candidates[0].rule?.id).toBe('lean-main-protein-more');
+    // fried chicken is not made more of, but its lean swap may go to ×1.5 of the weight replaced
+    const fried = recipeCandidates(engine, creamedChicken('05012'), none()).lines[4];
+    expect(fried.keepScale).toBeUndefined();
+    const breast = fried.candidates.find((c) => c.foodId === byNdb.get('05064')!.id)!;
+    expect(breast.rule?.id).toBe('cooked-chicken-to-breast');
+    expect(breast.band).toEqual([0.9, 1.5]);
+  });
+
+  it('no more meat where it is the portion: a meatloaf or a breaded cutlet keeps the tight ±10 % band', () => {
+    const meatloaf = [at('23572', 'ground beef', 907), at('18079', 'dry bread crumbs', 108), at('01123', 'large eggs', 100), at('01077', 'whole milk', 122)];
+    const r = recipeCandidates(engine, meatloaf, none());
+    const lean = r.lines[0].candidates.slice(1);
+    expect(lean.length).toBeGreaterThan(0);
+    for (const c of lean) expect(c.band, c.name).toEqual([0.9, 1.1]);
+    const cutlet = [
+      at('05064', 'boneless skinless chicken breasts', 680),
+      at('18079', 'seasoned bread crumbs', 108, 'for coating'),
+      at('01123', 'large eggs', 100),
+      at('04044', 'vegetable oil', 109),
+    ];
+    const c = recipeCandidates(engine, cutlet, none());
+    expect(c.lines[0].keepScale).toBeUndefined();
+    // oven-frying a breaded piece: a quarter of the frying oil
+    expect(c.lines[3].keepScale).toEqual([0.25, 1]);
+    expect(c.lines[3].candidates[0].rule?.id).toBe('frying-oil-oven-fry');
+    // oil in a dish with nothing breaded only halves
+    const chili = recipeCandidates(engine, [at('04044', 'vegetable oil', 28), at('23572', 'ground beef', 907), at('11529', 'diced tomatoes', 794)], none());
+    expect(chili.lines[0].keepScale).toEqual([0.5, 1]);
+  });
+
+  it('eggs set with milk in a strata are a custard: whites for at most half of them', () => {
+    const strata = [
+      at('07063', 'pork breakfast sausage', 454),
+      at('18069', 'white bread, cubed', 180),
+      at('01123', 'large eggs', 400),
+      at('01077', 'whole milk', 488),
+      at('01009', 'shredded cheddar cheese', 226),
+      at('02047', 'salt', 6),
+    ];
+    const r = recipeCandidates(engine, strata, none());
+    expect(r.dishType).toBe('assembled-bake');
+    const eggs = r.lines[2];
+    expect(eggs.role).toBe('custard');
+    const swaps = eggs.candidates.slice(1);
+    expect(swaps.map((c) => c.rule?.id)).toEqual(['egg-in-custard-to-whites']);
+    expect(swaps[0].maxShare).toBe(0.5);
+    // 2 large whites (2 × 33 g) per large egg (50 g), USDA SR28 household weights
+    expect(swaps[0].massRatio).toBeCloseTo(1.32, 9);
+  });
+
+  it('1:1 liquids and starches keep a tight ±10 % band; evaporated skim milk stands in for milk only in a roux sauce', () => {
+    const r = recipeCandidates(engine, macAndCheese(), none());
+    for (const i of [0, 3]) for (const c of r.lines[i].candidates.slice(1)) expect(c.band, c.name).toEqual([0.9, 1.1]);
+    expect(r.lines[3].candidates.map((c) => c.name)).toContain('Milk, canned, evaporated, nonfat, with added vitamin A and vitamin D');
+    const casserole = recipeCandidates(
+      engine,
+      [at('20120', 'egg noodles', 340), at('06043', 'condensed cream of mushroom soup', 298), at('01077', 'whole milk', 244)],
+      none(),
+    );
+    expect(casserole.lines[2].candidates.map((c) => c.name)).not.toContain('Milk, canned, evaporated, nonfat, with added vitamin A and vitamin D');
+    expect(casserole.lines[2].candidates.length).toBeGreaterThan(1);
+  });
+});

@@ -213,6 +213,26 @@ describe('quantities (USDA SR28 WEIGHT.txt household weights; ratios *common pra
     expect(rule('sugar-reduce-quarter').keepScale).toEqual([0.75, 1]);
     expect(rule('sharp-cheese-in-sauce-less').keepScale).toEqual([0.67, 1]);
     expect(rule('more-vegetables').keepScale).toEqual([1, 1.5]);
+    // more of a lean main protein (lean: under 10 g fat per 100 g, FDA 21 CFR 101.62(e)(2)), only in a mixed dish
+    expect(rule('lean-main-protein-more').keepScale).toEqual([1, 1.5]);
+    expect(rule('lean-main-protein-more').from.maxFatG).toBe(10);
+    expect(rule('lean-main-protein-more').mixedDishOnly).toBe(true);
+    for (const id of ['ground-beef-to-lean-turkey', 'ground-beef-to-lean-beef', 'ground-pork-to-lean', 'chicken-thigh-to-breast', 'cooked-chicken-to-breast']) {
+      expect(rule(id).band, id).toEqual([0.9, 1.1]);
+      expect(rule(id).moreInMixedDish, id).toBe(1.5);
+    }
+    for (const id of ['whole-milk-to-lower-fat', 'milk-in-sauce-to-evaporated-skim', 'pasta-to-whole-wheat', 'cooked-white-rice-to-brown'])
+      expect(rule(id).band, id).toEqual([0.9, 1.1]);
+    expect(rule('egg-in-custard-to-whites').maxShare).toBe(0.5);
+    expect(rule('egg-in-custard-to-whites').functions).toEqual(['custard']);
+    expect(rule('egg-to-whites').functions).not.toContain('custard');
+    expect(rule('frying-oil-oven-fry').keepScale).toEqual([0.25, 1]);
+    expect(rule('frying-oil-oven-fry').recipeHas).toEqual(['crumbs', 'egg', 'meat']);
+  });
+
+  it('egg whites for half the eggs of a custard: 2 × 33 g whites per 50 g egg, USDA SR28 household weights', () => {
+    expect(ratioOf('egg-in-custard-to-whites', '01124')).toBeCloseTo((2 * sr28Grams('01124', 'large')) / sr28Grams('01123', 'large'), 10);
+    expect(ratioOf('egg-in-custard-to-whites', '01124')).toBeCloseTo(1.32, 10);
   });
 
   it('the same cheese, lighter: cheddar goes to reduced-fat cheddar, never to nonfat mozzarella', () => {

@@ -1,0 +1,67 @@
+/**
+ * A rule's own band on a substitute's grams (shared/rewrite/line-slots.ts `bandOf`): a tight ±10 % for
+ * 1:1 liquids, starches and meats, up to ×1.5 for more of a lean main protein; a coach's approved swap
+ * keeps the request's line tolerance. Values per 100 g are approximate, from memory, close to USDA SR28
+ * (fried mixed chicken meat, roasted chicken breast); not catalogue data.
+ */
+import { describe, expect, it } from 'vitest';
+import { solveRewrite } from '../../shared/rewrite/solve-rewrite';
+import { bandOf, lineSlots } from '../../shared/rewrite/line-slots';
+import { resolveOptions } from '../../shared/rewrite/rewrite-options';
+import type { Candidate, OptimalRewrite, RewriteLine } from '../../shared/rewrite/types';
+import type { Nutrients } from '../../shared/nutrition';
+
+const nutrients = (kcal: number, proteinG: number, fatG: number): Nutrients => ({
+  kcal,
+  proteinG,
+  fatG,
+  satFatG: fatG / 3,
+  carbsG: 0,
+  fiberG: 0,
+  sugarG: 0,
+  sodiumMg: 80,
+});
+const FRIED: Candidate = { foodId: 1, name: 'chicken meat, fried', densityGPerMl: 0.6, per100g: nutrients(219, 30.6, 9.1), original: true };
+const BREAST: Candidate = {
+  foodId: 2,
+  name: 'chicken breast, roasted',
+  densityGPerMl: 0.6,
+  per100g: nutrients(165, 31, 3.6),
+  massRatio: 1,
+  band: [0.9, 1.5],
+  rule: { id: 'cooked-chicken-to-breast', label: 'cooked chicken breast for mixed or dark cooked chicken, 1:1 by weight', why: 'invented for the test' },
+};
+const line = (breast: Candidate): RewriteLine => ({ index: 0, foodId: 1, grams: 400, volumeMl: 400 / 0.6, locked: false, candidates: [FRIED, breast] });
+
+describe('rule bands on a substitute', () => {
+  it('takes the rule band in place of the line tolerance, and the line tolerance for a coach’s swap', () => {
+    expect(bandOf(BREAST, 0.25)).toEqual([0.9, 1.5]);
+    expect(bandOf({ ...BREAST, band: undefined }, 0.25)).toEqual([0.75, 1.25]);
+    expect(bandOf({ ...BREAST, approved: { by: 'Coach Wren' } }, 0.25)).toEqual([0.75, 1.25]);
+    expect(() => bandOf({ ...BREAST, band: [1.1, 1.5] }, 0.25)).toThrow(RangeError);
+    const [slots] = lineSlots([line(BREAST)], resolveOptions({}), []);
+    const swap = slots.slots.find((s) => s.kind === 'swap')!;
+    expect(swap.lowGrams).toBeCloseTo(360, 9);
+    expect(swap.widthGrams).toBeCloseTo(240, 9);
+    expect(swap.centreGrams).toBeCloseTo(400, 9);
+  });
+
+  it('most protein goes to the top of the rule band (×1.5), and the explanation says how far it went', () => {
+    const r = solveRewrite([line(BREAST)], { proteinMinG: 100, kcalMax: 2000 }, 1, { objective: 'max-protein', volumeTolerancePct: 60 }) as OptimalRewrite;
+    expect(r.status).toBe('optimal');
+    expect(r.after.lines[0].grams).toBeCloseTo(600, 6);
+    expect(r.changes[0].reason).toContain('here ×1.50 by weight; the rule allows ×0.9–1.5 of its ratio');
+    const approved = solveRewrite([line({ ...BREAST, approved: { by: 'Coach Wren' } })], { proteinMinG: 100, kcalMax: 2000 }, 1, {
+      objective: 'max-protein',
+      volumeTolerancePct: 60,
+    }) as OptimalRewrite;
+    expect(approved.after.lines[0].grams).toBeCloseTo(500, 6);
+  });
+
+  it('fewest calories stays at the bottom of a tight band, never below it', () => {
+    const tight = { ...BREAST, band: [0.9, 1.1] as [number, number] };
+    const r = solveRewrite([line(tight)], { proteinMinG: 50, kcalMax: 2000 }, 1, { objective: 'min-kcal', volumeTolerancePct: 60 }) as OptimalRewrite;
+    expect(r.after.lines[0].food.foodId).toBe(2);
+    expect(r.after.lines[0].grams).toBeCloseTo(360, 6);
+  });
+});
