@@ -12,8 +12,8 @@ const SERVINGS = 4;
 /** p95 budgets for javascript-lp-solver (ms), for recipes shaped like the rules' candidates */
 const BUDGET: Record<number, number> = { 20: 100, 40: 500 };
 
-/** What the substitution rules bring: ratios other than 1, partial swaps, amount bands (held lines: per shape). */
-const RULES = { massRatioShare: 0.3, partialShare: 0.3, keepScaleShare: 0.2 } as const;
+/** What the substitution rules bring: ratios other than 1, partial swaps, keep-scales, rule bands on substitutes (held lines: per shape). */
+const RULES = { massRatioShare: 0.3, partialShare: 0.3, keepScaleShare: 0.2, bandShare: 0.2 } as const;
 
 interface Shape {
   name: string;
