@@ -47,7 +47,7 @@ const LASAGNA = `9 oz lasagna noodles
 
 const MAC = `8 oz elbow macaroni
 2 cups shredded sharp cheddar
-2 cups whole milk
+1 cup heavy cream
 2 tbsp butter`;
 
 describe('paths that were broken', () => {

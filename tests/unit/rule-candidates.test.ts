@@ -262,7 +262,7 @@ describe('more of a lean main protein, baked custards, oven-frying, tight 1:1 ba
     expect(swaps[0].massRatio).toBeCloseTo(1.32, 9);
   });
 
-  it('1:1 liquids and starches keep a tight ±10 % band; evaporated skim milk stands in for milk only in a roux sauce', () => {
+  it('1:1 liquids and starches keep a tight ±10 % band; evaporated skim milk stands in for milk in a roux or stovetop cheese sauce, not a casserole', () => {
     const r = recipeCandidates(engine, macAndCheese(), none());
     for (const i of [0, 3]) for (const c of r.lines[i].candidates.slice(1)) expect(c.band, c.name).toEqual([0.9, 1.1]);
     expect(r.lines[3].candidates.map((c) => c.name)).toContain('Milk, canned, evaporated, nonfat, with added vitamin A and vitamin D');
@@ -273,5 +273,15 @@ describe('more of a lean main protein, baked custards, oven-frying, tight 1:1 ba
     );
     expect(casserole.lines[2].candidates.map((c) => c.name)).not.toContain('Milk, canned, evaporated, nonfat, with added vitamin A and vitamin D');
     expect(casserole.lines[2].candidates.length).toBeGreaterThan(1);
+    // …and in a stovetop cheese sauce, which it keeps from breaking without a roux
+    const stovetop = recipeCandidates(
+      engine,
+      [at('20120', 'elbow macaroni', 227), at('01009', 'shredded sharp cheddar', 226), at('01077', 'whole milk', 488)],
+      none(),
+    );
+    expect(stovetop.dishType).toBe('stovetop-sauce');
+    const evaporated = stovetop.lines[2].candidates.find((c) => c.name.startsWith('Milk, canned, evaporated, nonfat'));
+    expect(evaporated?.rule?.id).toBe('milk-in-stovetop-cheese-sauce-to-evaporated-skim');
+    expect(evaporated?.band).toEqual([0.9, 1.1]);
   });
 });
