@@ -45,6 +45,8 @@ export interface FoodMatch {
   via: MatchVia;
   /** words of the phrase the catalogue does not know ("xanthan gum" → ["xanthan"]) */
   unknownWords: string[];
+  /** words read as another catalogue word, as "written → read" ("mozarella → mozzarella") */
+  corrected: string[];
 }
 
 export interface MatchOptions {
@@ -65,7 +67,7 @@ export interface FoodMatcher {
   readonly skippedAliases: readonly string[];
 }
 
-const noMatch = (): FoodMatch => ({ food: null, confidence: 0, alternatives: [], via: 'none', unknownWords: [] });
+const noMatch = (): FoodMatch => ({ food: null, confidence: 0, alternatives: [], via: 'none', unknownWords: [], corrected: [] });
 
 export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable | Record<string, string> = DEFAULT_ALIASES): FoodMatcher {
   const table: AliasTable = isAliasTable(aliasTable) ? aliasTable : { aliases: aliasTable };
@@ -89,7 +91,9 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
 
     const exact = resolver.exactAlias(q);
     if (exact !== null) {
-      return { food: index.foods[exact].food, confidence: ALIAS_EXACT_CONFIDENCE, alternatives: alternativesWithout(exact), via: 'alias', unknownWords: [] };
+      // "mascarpone" read as "macaroni" is no exact alias: it is trusted as far as the reading is close.
+      const confidence = q.corrected.length ? Math.min(MAX_PARTIAL_CONFIDENCE, q.closeness) : ALIAS_EXACT_CONFIDENCE;
+      return { food: index.foods[exact].food, confidence, alternatives: alternativesWithout(exact), via: 'alias', unknownWords: [], corrected: q.corrected };
     }
 
     const partial = resolver.bestPartialAlias(q, ranked);
@@ -103,12 +107,20 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
         alternatives: alternativesWithout(partial.position),
         via: 'alias',
         unknownWords,
+        corrected: q.corrected,
       };
     }
     if (best && bestScore >= MATCH_CONFIDENCE_FLOOR) {
-      return { food: index.foods[best.position].food, confidence: bestScore, alternatives: alternativesWithout(best.position), via: 'fuzzy', unknownWords };
+      return {
+        food: index.foods[best.position].food,
+        confidence: bestScore,
+        alternatives: alternativesWithout(best.position),
+        via: 'fuzzy',
+        unknownWords,
+        corrected: q.corrected,
+      };
     }
-    return { food: null, confidence: bestScore, alternatives: alternativesWithout(null), via: 'none', unknownWords };
+    return { food: null, confidence: bestScore, alternatives: alternativesWithout(null), via: 'none', unknownWords, corrected: q.corrected };
   }
 
   function match(phrase: string, opts: MatchOptions = {}): FoodMatch {
@@ -116,7 +128,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
     const text = typeof phrase === 'string' ? phrase : '';
     const key = `${wanted}\u0000${text}`;
     const hit = remembered.get(key);
-    if (hit) return { ...hit, alternatives: [...hit.alternatives], unknownWords: [...hit.unknownWords] };
+    if (hit) return copyOf(hit);
     let result: FoodMatch;
     try {
       result = matchOne(text, wanted);
@@ -138,7 +150,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
     }
     if (remembered.size >= REMEMBERED_MATCHES) remembered.clear();
     remembered.set(key, result);
-    return { ...result, alternatives: [...result.alternatives], unknownWords: [...result.unknownWords] };
+    return copyOf(result);
   }
 
   function search(query: string, limit = 10): FoodSearchHit[] {
@@ -191,6 +203,10 @@ export function choicesIn(text: string, splitAnd = true): string[] {
       .filter(Boolean))
       out.push(p);
   return [...new Set(out)].filter((p) => p !== text);
+}
+
+function copyOf(m: FoodMatch): FoodMatch {
+  return { ...m, alternatives: [...m.alternatives], unknownWords: [...m.unknownWords], corrected: [...m.corrected] };
 }
 
 /** The first part of "A, B and C". */

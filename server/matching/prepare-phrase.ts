@@ -40,6 +40,9 @@ export interface PreparedQuery {
   /** word id → bits of the terms it satisfies */
   termBits: Map<number, number>;
   asks: { canned: boolean; frozen: boolean; dried: boolean; baby: boolean };
+  /** words read as another catalogue word ("mascarpone → macaroni"), with the least closeness among them */
+  corrected: string[];
+  closeness: number;
 }
 
 export function isContentWord(w: string): boolean {
@@ -47,6 +50,9 @@ export function isContentWord(w: string): boolean {
   const c = w.charCodeAt(0);
   return !(c >= 48 && c <= 57 && /^\d+$/.test(w));
 }
+
+/** Words that "whole" names a food with: whole milk, whole wheat, whole grain, whole egg. */
+const WHOLE_FOODS = new Set(['milk', 'wheat', 'grain', 'egg', 'fat', 'milkfat', 'kernel']);
 
 /** Words after which the food has been named: "juice *of* lemon", "capers *in* brine", "tomatoes *with* chilies". */
 const HEAD_BEFORE = new Set(['of', 'in', 'with']);
@@ -93,6 +99,7 @@ export function createPhrasePreparer(index: FoodIndex, speller: SpellingCorrecto
     }
     const all: string[] = [];
     const closeness: number[] = [];
+    const corrected: string[] = [];
     let namedEnd = 0;
     for (const [i, w] of raw.entries()) {
       if (i === namedUpTo) namedEnd = all.length;
@@ -102,12 +109,14 @@ export function createPhrasePreparer(index: FoodIndex, speller: SpellingCorrecto
         continue;
       }
       const fixed = speller.correct(w);
-      if (fixed)
+      if (fixed) {
         for (const c of fixed.words) {
           all.push(c);
           closeness.push(fixed.closeness);
         }
-      else {
+        // Two words run together ("breadcrumb") are the same words, not another food.
+        if (fixed.words.join('') !== w) corrected.push(`${w} → ${fixed.words.join(' ')}`);
+      } else {
         all.push(w);
         closeness.push(1);
       }
@@ -119,6 +128,9 @@ export function createPhrasePreparer(index: FoodIndex, speller: SpellingCorrecto
     const content: string[] = [];
     all.forEach((w, i) => {
       if (!isContentWord(w)) return;
+      // "whole cloves", "1 whole onion": uncut, not another food (an egg, a frozen whole onion);
+      // "whole milk", "whole wheat", "whole grain" are foods of their own.
+      if (w === 'whole' && !WHOLE_FOODS.has(all[i + 1] ?? '')) return;
       content.push(w);
       if (seen.has(w) || terms.length >= MAX_TERMS) return;
       seen.add(w);
@@ -158,6 +170,7 @@ export function createPhrasePreparer(index: FoodIndex, speller: SpellingCorrecto
       dried: wordSet.has('dried') || wordSet.has('dry'),
       baby: wordSet.has('babyfood') || wordSet.has('infant'),
     };
-    return { all, content, terms, totalWeight, headAt, hasState, wordSet, contradictions, termBits, asks };
+    const leastCloseness = closeness.reduce((m, c) => Math.min(m, c), 1);
+    return { all, content, terms, totalWeight, headAt, hasState, wordSet, contradictions, termBits, asks, corrected, closeness: leastCloseness };
   };
 }

@@ -25,6 +25,11 @@ beforeAll(() => {
  */
 const NAMED_OTHERWISE: Record<string, string> = {
   ghee: 'clarified butter is SR28 "butter oil, anhydrous"',
+  kombu: 'dried kelp sold in strips; SR28 has kelp only raw',
+  habanero: 'a small hot chile; SR28 has hot chili peppers by colour only (common practice)',
+  'scotch bonnet': 'as habanero',
+  cassia: 'the bark sold as cinnamon in North America (common practice)',
+  'cassia bark': 'as cassia',
   'celery root': 'the root of celeriac',
   panko: 'Japanese-style dry bread crumbs',
   chevre: 'French for goat cheese',
