@@ -47,6 +47,8 @@ export interface FoodMatch {
   unknownWords: string[];
   /** words read as another catalogue word, as "written → read" ("mozarella → mozzarella") */
   corrected: string[];
+  /** false when a name match's leading words are not in the phrase ("potato starch" → "Bread, …, potato extract") */
+  nameHeadMatched: boolean;
 }
 
 export interface MatchOptions {
@@ -67,7 +69,7 @@ export interface FoodMatcher {
   readonly skippedAliases: readonly string[];
 }
 
-const noMatch = (): FoodMatch => ({ food: null, confidence: 0, alternatives: [], via: 'none', unknownWords: [], corrected: [] });
+const noMatch = (): FoodMatch => ({ food: null, confidence: 0, alternatives: [], via: 'none', unknownWords: [], corrected: [], nameHeadMatched: false });
 
 export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable | Record<string, string> = DEFAULT_ALIASES): FoodMatcher {
   const table: AliasTable = isAliasTable(aliasTable) ? aliasTable : { aliases: aliasTable };
@@ -93,7 +95,15 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
     if (exact !== null) {
       // "mascarpone" read as "macaroni" is no exact alias: it is trusted as far as the reading is close.
       const confidence = q.corrected.length ? Math.min(MAX_PARTIAL_CONFIDENCE, q.closeness) : ALIAS_EXACT_CONFIDENCE;
-      return { food: index.foods[exact].food, confidence, alternatives: alternativesWithout(exact), via: 'alias', unknownWords: [], corrected: q.corrected };
+      return {
+        food: index.foods[exact].food,
+        confidence,
+        alternatives: alternativesWithout(exact),
+        via: 'alias',
+        unknownWords: [],
+        corrected: q.corrected,
+        nameHeadMatched: true,
+      };
     }
 
     const partial = resolver.bestPartialAlias(q, ranked);
@@ -108,19 +118,30 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
         via: 'alias',
         unknownWords,
         corrected: q.corrected,
+        nameHeadMatched: true,
       };
     }
     if (best && bestScore >= MATCH_CONFIDENCE_FLOOR) {
+      const f = index.foods[best.position];
       return {
-        food: index.foods[best.position].food,
+        food: f.food,
         confidence: bestScore,
         alternatives: alternativesWithout(best.position),
         via: 'fuzzy',
         unknownWords,
         corrected: q.corrected,
+        nameHeadMatched: ranker.coverageOf(f, q).headMatched,
       };
     }
-    return { food: null, confidence: bestScore, alternatives: alternativesWithout(null), via: 'none', unknownWords, corrected: q.corrected };
+    return {
+      food: null,
+      confidence: bestScore,
+      alternatives: alternativesWithout(null),
+      via: 'none',
+      unknownWords,
+      corrected: q.corrected,
+      nameHeadMatched: false,
+    };
   }
 
   function match(phrase: string, opts: MatchOptions = {}): FoodMatch {
@@ -176,6 +197,46 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
   return { match, search, skippedAliases: aliases.skipped };
 }
 
+/** Words that describe the food written after them, never a food alone in a choice ("dry or sweet vermouth"). */
+const DESCRIBING_WORDS = new Set([
+  'black',
+  'white',
+  'brown',
+  'red',
+  'green',
+  'yellow',
+  'golden',
+  'purple',
+  'orange',
+  'dry',
+  'dried',
+  'fresh',
+  'frozen',
+  'canned',
+  'sweet',
+  'light',
+  'dark',
+  'hot',
+  'mild',
+  'medium',
+  'large',
+  'small',
+  'smoked',
+  'salted',
+  'unsalted',
+  'sweetened',
+  'unsweetened',
+  'whole',
+  'raw',
+  'cooked',
+  'distilled',
+  'regular',
+  'plain',
+  'low-fat',
+  'lowfat',
+  'nonfat',
+]);
+
 /**
  * The foods a phrase offers as choices: "A or B", "A and B", "A/B". With "or", a head word written
  * once belongs to each: "chicken or vegetable stock" → "chicken stock", "vegetable stock".
@@ -192,8 +253,10 @@ export function choicesIn(text: string, splitAnd = true): string[] {
     const head = last[last.length - 1];
     for (let i = 0; i < orParts.length; i++) {
       const n = orParts[i].split(/\s+/).length;
-      if (i < orParts.length - 1 && last.length >= 2 && n <= 2 && !orParts[i].endsWith(head)) out.push(`${orParts[i]} ${head}`);
-      out.push(orParts[i]);
+      const shared = i < orParts.length - 1 && last.length >= 2 && n <= 2 && !orParts[i].endsWith(head);
+      if (shared) out.push(`${orParts[i]} ${head}`);
+      // "green or Puy lentils", "distilled or spring water": a describing word alone is no food.
+      if (!(shared && n === 1 && DESCRIBING_WORDS.has(orParts[i].toLowerCase()))) out.push(orParts[i]);
     }
   }
   if (splitAnd)

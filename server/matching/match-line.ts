@@ -209,6 +209,11 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
       confidence = Math.min(confidence, MISSING_MODIFIER_CONFIDENCE);
       warnings.push(`The catalogue has no leaves of this plant: matched ${food.name}. Check this match or add the food from its label.`);
     }
+    // "potato starch" → "Bread, gluten-free, potato extract, …": the food's own name starts elsewhere.
+    if (match.via === 'fuzzy' && !match.nameHeadMatched && food === match.food) {
+      check = true;
+      warnings.push(`“${phrase}” matched words further along the name of ${food.name}: check this match.`);
+    }
     if (match.corrected.length > 0) {
       check = true;
       warnings.push(`Read ${match.corrected.map((c) => `“${c.replace(' → ', '” as “')}”`).join(', ')}: check this match.`);

@@ -252,6 +252,18 @@ describe('pieces, spices and words a cook writes (classes found in the unlabelle
     expect(line('1 bunch mint leaves').checkMatch).toBe(false);
   });
 
+  it('a food found by words further along its name is flagged: "potato starch" is no gluten-free bread', () => {
+    const starch = line('1 c potato starch');
+    expect(starch.checkMatch).toBe(true);
+    expect(starch.warnings.join(' ')).toMatch(/further along the name/);
+    expect(line('2 c all-purpose flour').checkMatch).toBe(false);
+  });
+
+  it('a colour or state word alone is no choice: "green or Puy lentils" are lentils, never a green kiwifruit', () => {
+    expect(line('1 c green or Puy lentils').food?.name).toMatch(/^Lentils/);
+    expect(line('1 c fresh or frozen peas').food?.name).toMatch(/^Peas, green/);
+  });
+
   it('a word read as another catalogue word is flagged: "mascarpone" is not macaroni', () => {
     const l = line('¾ c mascarpone');
     expect(l.checkMatch).toBe(true);
