@@ -79,6 +79,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
   const ranker = createFoodRanker(index);
   const resolver = createAliasResolver(aliases, index, ranker);
   const remembered = new Map<string, FoodMatch>();
+  const rememberedParts = new Map<string, FoodMatch>();
 
   function matchOne(phrase: string, wanted: number): FoodMatch {
     const q = prepare(phrase);
@@ -144,6 +145,18 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
     };
   }
 
+  /** One choice of a phrase ("salt" of "salt and pepper"): the same choices come back line after line. */
+  function matchPart(part: string, wanted: number): FoodMatch {
+    const key = `${wanted}\u0000${part}`;
+    let found = rememberedParts.get(key);
+    if (!found) {
+      found = matchOne(part, wanted);
+      if (rememberedParts.size >= REMEMBERED_MATCHES) rememberedParts.clear();
+      rememberedParts.set(key, found);
+    }
+    return copyOf(found);
+  }
+
   function match(phrase: string, opts: MatchOptions = {}): FoodMatch {
     const wanted = Math.max(0, Math.min(50, Math.floor(opts.alternatives ?? DEFAULT_ALTERNATIVES)));
     const text = typeof phrase === 'string' ? phrase : '';
@@ -159,7 +172,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
         const splitAnd = result.confidence < WEAK_MATCH;
         const first = splitAnd ? firstPart(text) : null;
         for (const part of choicesIn(text, splitAnd)) {
-          const alt = matchOne(part, wanted);
+          const alt = matchPart(part, wanted);
           // "canned plum tomatoes, juices reserved, and tomatoes": a later part is a note, not the food.
           if (first !== null && part !== first && !orChoice(text, part)) alt.confidence *= LATER_PART_FACTOR;
           if (alt.food && alt.confidence >= MATCH_CONFIDENCE_FLOOR && alt.confidence > result.confidence) result = alt;
