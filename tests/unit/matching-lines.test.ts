@@ -288,8 +288,8 @@ describe('the hand-labelled lines (tests/reference/labelled-lines)', () => {
       answer,
     );
     expect(tune.lines + heldOut.lines).toBeGreaterThanOrEqual(300);
-    // measured 98.2 % and 82.9 % (npm run bench prints both); a line is 0.6 % of a half
-    expect(share(tune.both, tune.lines)).toBeGreaterThanOrEqual(0.965);
+    // measured 98.8 % and 82.9 % (npm run bench prints both); a line is 0.6 % of a half
+    expect(share(tune.both, tune.lines)).toBeGreaterThanOrEqual(0.97);
     expect(share(heldOut.both, heldOut.lines)).toBeGreaterThanOrEqual(0.81);
   });
 
