@@ -22,6 +22,11 @@ export const queryKeys = {
     all: ['swaps'] as const,
     list: () => ['swaps', 'list'] as const,
   },
+  coach: {
+    /** the signed-in cook's coach, targets and published swaps */
+    mine: () => ['coach', 'mine'] as const,
+    invitation: (token: string) => ['coach', 'invitation', token] as const,
+  },
   clients: {
     all: ['clients'] as const,
     list: () => ['clients', 'list'] as const,

@@ -1,4 +1,4 @@
-import { formatKcal, formatMacroG, formatProteinDensity } from '../../../lib/format';
+import { formatKcal, formatMacroG, formatProteinDensity } from '../../lib/format';
 
 /** Energy and protein per 100 g, with the protein density that judges a lean swap. */
 export function FoodFigures({ kcalPer100g, proteinPer100g, showDensity = false }: { kcalPer100g: number; proteinPer100g: number; showDensity?: boolean }) {

@@ -8,7 +8,7 @@ import { LoadingState } from '../../../components/ui/spinner';
 import { useToast } from '../../../components/ui/toast';
 import { errorMessage } from '../../../lib/api-client';
 import { useLeaveCoach, useMyCoach } from '../api/my-coach';
-import type { RoleLabel } from '../food-search-slot';
+import type { RoleLabel } from '../../../lib/swap-words';
 import { CoachTargets } from './coach-targets';
 import { NoCoachExplainer } from './no-coach-explainer';
 import { PublishedSwapList } from './published-swap-list';

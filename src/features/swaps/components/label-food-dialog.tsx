@@ -8,7 +8,7 @@ import { TextField } from '../../../components/ui/field';
 import { SelectField } from '../../../components/ui/select-field';
 import { errorMessage, isApiError } from '../../../lib/api-client';
 import { useCreateCustomFood } from '../api/custom-food';
-import type { RoleLabel } from '../food-search-slot';
+import type { RoleLabel } from '../../../lib/swap-words';
 import { emptyLabelFood, labelFoodErrorsFrom, labelFoodInput, type LabelFoodErrors, type LabelFoodField, type LabelFoodValues } from '../label-food-form';
 
 export interface LabelFoodDialogProps {

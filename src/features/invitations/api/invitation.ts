@@ -1,7 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { queryKeys } from '../../../lib/query-keys';
-import { coachKeys } from '../coach-keys';
 
 export interface InvitationSummary {
   coachName: string;
@@ -12,7 +11,7 @@ export interface InvitationSummary {
 /** Public: anyone holding the link may read who sent it. Used, expired and withdrawn links answer 410. */
 export function useInvitation(token: string) {
   return useQuery({
-    queryKey: coachKeys.invitation(token),
+    queryKey: queryKeys.coach.invitation(token),
     queryFn: ({ signal }) => api.get<InvitationSummary>(`/api/invitations/${encodeURIComponent(token)}`, { signal }),
     enabled: token.length > 0,
   });
@@ -24,8 +23,8 @@ export function useAcceptInvitation(token: string) {
     mutationFn: () => api.post<{ coachId: number; coachName: string }>(`/api/invitations/${encodeURIComponent(token)}/accept`),
     onSuccess: () => {
       void queryClient.invalidateQueries({ queryKey: queryKeys.auth.me });
-      void queryClient.invalidateQueries({ queryKey: coachKeys.myCoach });
-      void queryClient.invalidateQueries({ queryKey: coachKeys.swaps });
+      void queryClient.invalidateQueries({ queryKey: queryKeys.coach.mine() });
+      void queryClient.invalidateQueries({ queryKey: queryKeys.swaps.list() });
     },
   });
 }

@@ -1,8 +1,7 @@
-import type { Swap } from '../api/swaps';
-import type { RoleLabel } from '../food-search-slot';
-import { swapFromWords, swapToWords, volumeRatioWords } from '../swap-words';
-import { FoodFigures } from './food-figures';
-import { SwapTags } from './swap-badges';
+import type { Swap } from '../../../../shared/schemas/swaps';
+import { type RoleLabel, swapFromWords, swapToWords, volumeRatioWords } from '../../../lib/swap-words';
+import { FoodFigures } from '../../../components/ui/food-figures';
+import { TagBadges } from '../../../components/ui/tag-badges';
 
 /** A coach's published swaps as their client reads them: what changes, its figures, how to cook it. */
 export function PublishedSwapList({ swaps, roleLabel, label }: { swaps: Swap[]; roleLabel: RoleLabel; label: string }) {
@@ -30,7 +29,7 @@ export function PublishedSwapList({ swaps, roleLabel, label }: { swaps: Swap[]; 
               {swap.note}
             </p>
           )}
-          <SwapTags tags={swap.tags} />
+          <TagBadges tags={swap.tags} />
         </li>
       ))}
     </ul>

@@ -1,8 +1,11 @@
-import { formatNumber } from '../../lib/format';
-import type { Swap } from './api/swaps';
+import type { Swap } from '../../shared/schemas/swaps';
+import { formatNumber } from './format';
+
+/** Role codes in words ("melting-cheese" → "Melting cheese"); the page passes the foods feature's own. */
+export type RoleLabel = (role: string) => string;
 
 /** What a swap replaces: the food's name, or every food in a role. */
-export function swapFromWords(swap: Pick<Swap, 'fromFood' | 'fromRole'>, roleLabel: (role: string) => string): string {
+export function swapFromWords(swap: Pick<Swap, 'fromFood' | 'fromRole'>, roleLabel: RoleLabel): string {
   if (swap.fromFood) return swap.fromFood.name;
   if (swap.fromRole) return `Any ${roleLabel(swap.fromRole).toLowerCase()}`;
   return 'A food no longer in the catalogue';

@@ -3,7 +3,7 @@ import { Button } from '../../../components/ui/button';
 import { cx } from '../../../lib/cx';
 import type { RenderFoodSearch } from '../food-search-slot';
 import type { PickedFood } from '../swap-draft';
-import { FoodFigures } from './food-figures';
+import { FoodFigures } from '../../../components/ui/food-figures';
 
 export interface ChosenFoodFieldProps {
   label: string;

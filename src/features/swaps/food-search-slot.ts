@@ -15,6 +15,3 @@ export interface FoodSearchSlotProps {
 }
 
 export type RenderFoodSearch = (props: FoodSearchSlotProps) => ReactNode;
-
-/** Role codes in words ("melting-cheese" → "Melting cheese"), also from the page. */
-export type RoleLabel = (role: string) => string;

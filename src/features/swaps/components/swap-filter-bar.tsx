@@ -1,7 +1,7 @@
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { SelectField } from '../../../components/ui/select-field';
-import type { RoleLabel } from '../food-search-slot';
+import type { RoleLabel } from '../../../lib/swap-words';
 import { hasSwapFilters, NO_SWAP_FILTERS, type SwapFilters } from '../swap-filters';
 
 export interface SwapFilterBarProps {

@@ -7,7 +7,8 @@ import { TextAreaField, TextField } from '../../../components/ui/field';
 import { SelectField } from '../../../components/ui/select-field';
 import { errorMessage, isApiError } from '../../../lib/api-client';
 import { useCreateSwap, useUpdateSwap, type Swap } from '../api/swaps';
-import type { RenderFoodSearch, RoleLabel } from '../food-search-slot';
+import type { RenderFoodSearch } from '../food-search-slot';
+import { type RoleLabel, volumeRatioWords } from '../../../lib/swap-words';
 import {
   draftFromSwap,
   emptySwapDraft,
@@ -18,7 +19,6 @@ import {
   type SwapDraft,
   type SwapDraftErrors,
 } from '../swap-draft';
-import { volumeRatioWords } from '../swap-words';
 import { ChosenFoodField } from './chosen-food-field';
 import { LabelFoodDialog } from './label-food-dialog';
 

@@ -1,6 +1,7 @@
-import { Badge } from '../../../components/ui/badge';
+import { Badge } from './badge';
 
-export function SwapTags({ tags }: { tags: string[] }) {
+/** A short list of tags as badges (none: nothing). */
+export function TagBadges({ tags }: { tags: string[] }) {
   if (tags.length === 0) return null;
   return (
     <ul aria-label="Tags" className="flex flex-wrap gap-1.5">

@@ -1,7 +1,7 @@
 import { ROLES } from '../../../shared/food';
 import type { FieldErrors } from '../../lib/api-client';
 import type { Swap, SwapRequest } from './api/swaps';
-import { parseTags } from './swap-words';
+import { parseTags } from '../../lib/swap-words';
 
 /** A food chosen in a picker; catalogue search hits and swap foods both fit. */
 export interface PickedFood {

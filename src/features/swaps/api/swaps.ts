@@ -1,48 +1,16 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { SWAP_STATUSES } from '../../../../shared/schemas/coaching';
-import type { FoodSummary } from '../../../../shared/schemas/analyze';
+import type { Swap, SwapRequest } from '../../../../shared/schemas/swaps';
 import { api } from '../../../lib/api-client';
-import { coachKeys } from '../coach-keys';
+import { queryKeys } from '../../../lib/query-keys';
 
-export type SwapStatus = (typeof SWAP_STATUSES)[number];
-
-/** The food a swap puts on the plate, with its figures per 100 g. */
-export interface SwapTargetFood extends FoodSummary {
-  kcalPer100g: number;
-  proteinPer100g: number;
-}
-
-/** One approved swap as GET /api/swaps returns it. */
-export interface Swap {
-  id: number;
-  coachId: number;
-  fromFood: FoodSummary | null;
-  fromRole: string | null;
-  toFood: SwapTargetFood | null;
-  volumeRatio: number;
-  note: string;
-  tags: string[];
-  status: SwapStatus;
-  updatedAt: string;
-}
-
-/** What POST /api/swaps and PATCH /api/swaps/:id take. */
-export interface SwapRequest {
-  fromFoodId: number | null;
-  fromRole: string | null;
-  toFoodId: number;
-  volumeRatio: number;
-  note: string;
-  tags: string[];
-  status?: SwapStatus;
-}
+export type { Swap, SwapRequest, SwapStatus, SwapTargetFood } from '../../../../shared/schemas/swaps';
 
 export function listSwaps(signal?: AbortSignal): Promise<{ swaps: Swap[] }> {
   return api.get<{ swaps: Swap[] }>('/api/swaps', { signal });
 }
 
 export function useSwaps() {
-  return useQuery({ queryKey: coachKeys.swaps, queryFn: ({ signal }) => listSwaps(signal), select: (data) => data.swaps });
+  return useQuery({ queryKey: queryKeys.swaps.list(), queryFn: ({ signal }) => listSwaps(signal), select: (data) => data.swaps });
 }
 
 function useSwapCache() {
@@ -50,16 +18,18 @@ function useSwapCache() {
   return {
     /** put the server's copy of one swap in the list: in its place when known, first when new */
     store(swap: Swap) {
-      queryClient.setQueryData<{ swaps: Swap[] }>(coachKeys.swaps, (previous) => {
+      queryClient.setQueryData<{ swaps: Swap[] }>(queryKeys.swaps.list(), (previous) => {
         if (!previous) return previous;
         const known = previous.swaps.some((s) => s.id === swap.id);
         return { swaps: known ? previous.swaps.map((s) => (s.id === swap.id ? swap : s)) : [swap, ...previous.swaps] };
       });
-      void queryClient.invalidateQueries({ queryKey: coachKeys.swaps });
+      void queryClient.invalidateQueries({ queryKey: queryKeys.swaps.list() });
     },
     forget(id: number) {
-      queryClient.setQueryData<{ swaps: Swap[] }>(coachKeys.swaps, (previous) => (previous ? { swaps: previous.swaps.filter((s) => s.id !== id) } : previous));
-      void queryClient.invalidateQueries({ queryKey: coachKeys.swaps });
+      queryClient.setQueryData<{ swaps: Swap[] }>(queryKeys.swaps.list(), (previous) =>
+        previous ? { swaps: previous.swaps.filter((s) => s.id !== id) } : previous,
+      );
+      void queryClient.invalidateQueries({ queryKey: queryKeys.swaps.list() });
     },
   };
 }

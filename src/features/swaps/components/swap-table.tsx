@@ -1,10 +1,9 @@
 import { Button } from '../../../components/ui/button';
 import type { Swap } from '../api/swaps';
-import type { RoleLabel } from '../food-search-slot';
-import { swapFromWords, swapToWords, volumeRatioFigure, volumeRatioWords } from '../swap-words';
-import { FoodFigures } from './food-figures';
+import { type RoleLabel, swapFromWords, swapToWords, volumeRatioFigure, volumeRatioWords } from '../../../lib/swap-words';
+import { FoodFigures } from '../../../components/ui/food-figures';
 import { PublishSwitch } from './publish-switch';
-import { SwapTags } from './swap-badges';
+import { TagBadges } from '../../../components/ui/tag-badges';
 import { formatKcal, formatMacroG } from '../../../lib/format';
 
 export interface SwapTableProps {
@@ -84,7 +83,7 @@ export function SwapTable({ swaps, caption, roleLabel, onEdit, onDelete, onToggl
                 <td className="max-w-xs px-4 py-3">
                   <span className="flex flex-col gap-1.5">
                     {swap.note ? <span className="text-ink">{swap.note}</span> : <span className="text-ink-soft">No note</span>}
-                    <SwapTags tags={swap.tags} />
+                    <TagBadges tags={swap.tags} />
                   </span>
                 </td>
                 <td className="px-4 py-2">
@@ -131,7 +130,7 @@ export function SwapTable({ swaps, caption, roleLabel, onEdit, onDelete, onToggl
               <span className="text-sm text-ink-soft">{volumeRatioWords(swap.volumeRatio)}</span>
             </div>
             {swap.note && <p className="rounded-field bg-oat-100 px-3 py-2 text-ink">{swap.note}</p>}
-            <SwapTags tags={swap.tags} />
+            <TagBadges tags={swap.tags} />
             <div className="flex flex-wrap items-center justify-between gap-2 border-t border-line pt-2">
               <PublishSwitch
                 published={swap.status === 'published'}

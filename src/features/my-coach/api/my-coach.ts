@@ -1,9 +1,8 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ClientTargets } from '../../../../shared/schemas/coaching';
+import type { Swap } from '../../../../shared/schemas/swaps';
 import { api } from '../../../lib/api-client';
 import { queryKeys } from '../../../lib/query-keys';
-import { coachKeys } from '../coach-keys';
-import type { Swap } from './swaps';
 
 export interface MyCoach {
   coach: { id: number; displayName: string } | null;
@@ -13,7 +12,7 @@ export interface MyCoach {
 
 export function useMyCoach() {
   return useQuery({
-    queryKey: coachKeys.myCoach,
+    queryKey: queryKeys.coach.mine(),
     queryFn: ({ signal }) => api.get<MyCoach>('/api/coach', { signal }),
   });
 }
@@ -24,9 +23,9 @@ export function useLeaveCoach() {
   return useMutation({
     mutationFn: () => api.delete<void>('/api/coach'),
     onSuccess: () => {
-      queryClient.setQueryData<MyCoach>(coachKeys.myCoach, { coach: null, targets: null, swaps: [] });
+      queryClient.setQueryData<MyCoach>(queryKeys.coach.mine(), { coach: null, targets: null, swaps: [] });
       void queryClient.invalidateQueries({ queryKey: queryKeys.auth.me });
-      void queryClient.invalidateQueries({ queryKey: coachKeys.swaps });
+      void queryClient.invalidateQueries({ queryKey: queryKeys.swaps.list() });
     },
   });
 }
