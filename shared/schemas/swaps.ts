@@ -23,6 +23,11 @@ export interface Swap {
   updatedAt: string;
 }
 
+/** GET /api/swaps: a coach's whole library, or a client's coach's published swaps. */
+export interface SwapsResponse {
+  swaps: Swap[];
+}
+
 /** What POST /api/swaps and PATCH /api/swaps/:id take. */
 export interface SwapRequest {
   fromFoodId: number | null;
