@@ -1,6 +1,6 @@
 import { ROLES } from '../../../shared/food';
 import type { FieldErrors } from '../../lib/api-client';
-import type { Swap, SwapRequest } from './api/swaps';
+import type { Swap, SwapRequest } from '../../../shared/schemas/swaps';
 import { parseTags } from '../../lib/swap-words';
 
 /** A food chosen in a picker; catalogue search hits and swap foods both fit. */

@@ -1,4 +1,4 @@
-import type { Swap, SwapStatus } from './api/swaps';
+import type { Swap, SwapStatus } from '../../../shared/schemas/swaps';
 
 export interface SwapFilters {
   status: SwapStatus | 'all';

@@ -1,7 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { FoodDetail } from '../../../../shared/schemas/analyze';
 import type { CustomFoodInput } from '../../../../shared/schemas/coaching';
-import { api } from '../../../lib/api-client';
+import { createLabelFood } from '../../../lib/api/foods';
 import { queryKeys } from '../../../lib/query-keys';
 
 export type { CustomFoodInput };
@@ -10,7 +9,7 @@ export type { CustomFoodInput };
 export function useCreateCustomFood() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: CustomFoodInput) => api.post<FoodDetail>('/api/foods', input),
+    mutationFn: createLabelFood,
     // Searches cached before it existed would leave it out.
     onSuccess: () => void queryClient.invalidateQueries({ queryKey: queryKeys.foods.all }),
   });

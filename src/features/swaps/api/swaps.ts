@@ -1,16 +1,10 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Swap, SwapRequest } from '../../../../shared/schemas/swaps';
-import { api } from '../../../lib/api-client';
+import type { Swap, SwapRequest, SwapsResponse } from '../../../../shared/schemas/swaps';
+import { createSwap, deleteSwap, setSwapPublished, swapsQuery, updateSwap } from '../../../lib/api/swaps';
 import { queryKeys } from '../../../lib/query-keys';
 
-export type { Swap, SwapRequest, SwapStatus, SwapTargetFood } from '../../../../shared/schemas/swaps';
-
-export function listSwaps(signal?: AbortSignal): Promise<{ swaps: Swap[] }> {
-  return api.get<{ swaps: Swap[] }>('/api/swaps', { signal });
-}
-
 export function useSwaps() {
-  return useQuery({ queryKey: queryKeys.swaps.list(), queryFn: ({ signal }) => listSwaps(signal), select: (data) => data.swaps });
+  return useQuery({ ...swapsQuery(), select: (data) => data.swaps });
 }
 
 function useSwapCache() {
@@ -18,7 +12,7 @@ function useSwapCache() {
   return {
     /** put the server's copy of one swap in the list: in its place when known, first when new */
     store(swap: Swap) {
-      queryClient.setQueryData<{ swaps: Swap[] }>(queryKeys.swaps.list(), (previous) => {
+      queryClient.setQueryData<SwapsResponse>(queryKeys.swaps.list(), (previous) => {
         if (!previous) return previous;
         const known = previous.swaps.some((s) => s.id === swap.id);
         return { swaps: known ? previous.swaps.map((s) => (s.id === swap.id ? swap : s)) : [swap, ...previous.swaps] };
@@ -26,7 +20,7 @@ function useSwapCache() {
       void queryClient.invalidateQueries({ queryKey: queryKeys.swaps.list() });
     },
     forget(id: number) {
-      queryClient.setQueryData<{ swaps: Swap[] }>(queryKeys.swaps.list(), (previous) =>
+      queryClient.setQueryData<SwapsResponse>(queryKeys.swaps.list(), (previous) =>
         previous ? { swaps: previous.swaps.filter((s) => s.id !== id) } : previous,
       );
       void queryClient.invalidateQueries({ queryKey: queryKeys.swaps.list() });
@@ -37,7 +31,7 @@ function useSwapCache() {
 export function useCreateSwap() {
   const cache = useSwapCache();
   return useMutation({
-    mutationFn: (input: SwapRequest) => api.post<Swap>('/api/swaps', input),
+    mutationFn: createSwap,
     onSuccess: (swap) => cache.store(swap),
   });
 }
@@ -45,7 +39,7 @@ export function useCreateSwap() {
 export function useUpdateSwap() {
   const cache = useSwapCache();
   return useMutation({
-    mutationFn: ({ id, input }: { id: number; input: Partial<SwapRequest> }) => api.patch<Swap>(`/api/swaps/${id}`, input),
+    mutationFn: ({ id, input }: { id: number; input: Partial<SwapRequest> }) => updateSwap(id, input),
     onSuccess: (swap) => cache.store(swap),
   });
 }
@@ -53,7 +47,7 @@ export function useUpdateSwap() {
 export function useSetSwapPublished() {
   const cache = useSwapCache();
   return useMutation({
-    mutationFn: ({ id, published }: { id: number; published: boolean }) => api.post<Swap>(`/api/swaps/${id}/${published ? 'publish' : 'unpublish'}`),
+    mutationFn: ({ id, published }: { id: number; published: boolean }) => setSwapPublished(id, published),
     onSuccess: (swap) => cache.store(swap),
   });
 }
@@ -61,7 +55,7 @@ export function useSetSwapPublished() {
 export function useDeleteSwap() {
   const cache = useSwapCache();
   return useMutation({
-    mutationFn: (id: number) => api.delete<void>(`/api/swaps/${id}`),
+    mutationFn: deleteSwap,
     onSuccess: (_nothing, id) => cache.forget(id),
   });
 }

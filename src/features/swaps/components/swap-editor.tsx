@@ -6,7 +6,8 @@ import { Card } from '../../../components/ui/card';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 import { SelectField } from '../../../components/ui/select-field';
 import { errorMessage, isApiError } from '../../../lib/api-client';
-import { useCreateSwap, useUpdateSwap, type Swap } from '../api/swaps';
+import type { Swap } from '../../../../shared/schemas/swaps';
+import { useCreateSwap, useUpdateSwap } from '../api/swaps';
 import type { RenderFoodSearch } from '../food-search-slot';
 import { type RoleLabel, volumeRatioWords } from '../../../lib/swap-words';
 import {

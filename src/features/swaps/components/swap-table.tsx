@@ -1,5 +1,5 @@
 import { Button } from '../../../components/ui/button';
-import type { Swap } from '../api/swaps';
+import type { Swap } from '../../../../shared/schemas/swaps';
 import { type RoleLabel, swapFromWords, swapToWords, volumeRatioFigure, volumeRatioWords } from '../../../lib/swap-words';
 import { FoodFigures } from '../../../components/ui/food-figures';
 import { PublishSwitch } from './publish-switch';
