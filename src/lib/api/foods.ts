@@ -1,27 +1,9 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { FoodDetail, FoodSummary } from '../../../shared/schemas/analyze';
-import type { LabelFoodInput, LabelScanResponse, MyFood, SavedFoodResponse } from '../../../shared/schemas/foods';
+import type { FoodDetail } from '../../../shared/schemas/analyze';
+import type { FoodSearchResponse, LabelFoodInput, LabelScanResponse, MyFood, SavedFoodResponse } from '../../../shared/schemas/foods';
 import { api } from '../api-client';
 import { queryKeys } from '../query-keys';
 import { uploadFile } from '../upload-file';
-
-/** One hit of GET /api/foods/search. */
-export interface FoodSearchHit extends FoodSummary {
-  foodGroup: string;
-  roles: string[];
-  branded: boolean;
-  kcalPer100g: number;
-  proteinPer100g: number;
-  /** 0..1, how well the name answers the query */
-  score: number;
-  /** a food entered from a label: 'you' entered it, or your 'coach' did; null for catalogue foods */
-  owner: 'you' | 'coach' | null;
-}
-
-export interface FoodSearchResponse {
-  query: string;
-  results: FoodSearchHit[];
-}
 
 export const DEFAULT_SEARCH_LIMIT = 10;
 
