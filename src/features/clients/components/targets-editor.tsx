@@ -8,7 +8,7 @@ import { errorMessage, isApiError } from '../../../lib/api-client';
 import { formatKcal, formatMacroG } from '../../../lib/format';
 import { useSaveClientTargets, type Client } from '../api/clients';
 import type { BodyUnits } from '../body-units';
-import { readNumber } from '../read-number';
+import { readNumber } from '../../../lib/read-number';
 import {
   applyEstimate,
   MAX_TARGET_NOTE_CHARS,
