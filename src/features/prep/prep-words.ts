@@ -1,6 +1,7 @@
 import { ALLERGEN_LABELS, type Allergen } from '../../../shared/allergens';
 import type { VersionKind } from '../../../shared/schemas/recipes';
 import type { PrepFood } from '../../../shared/schemas/prep';
+import { countOf } from '../../lib/words';
 
 export const MIN_PORTIONS = 1;
 export const MAX_PORTIONS = 100;
@@ -13,12 +14,12 @@ const KIND_WORDS: Record<VersionKind, string> = {
 
 /** "Version 3, an edit · written for 6 servings" */
 export function versionLine(version: { number: number; kind: VersionKind; servings: number }): string {
-  const servings = `${version.servings} serving${version.servings === 1 ? '' : 's'}`;
+  const servings = `${countOf(version.servings, 'serving')}`;
   return `Version ${version.number}, ${KIND_WORDS[version.kind]} · written for ${servings}`;
 }
 
 export function portionsWord(portions: number): string {
-  return `${portions} portion${portions === 1 ? '' : 's'}`;
+  return `${countOf(portions, 'portion')}`;
 }
 
 /** "Milk, Egg and Wheat" in the order the server gives (the fixed order of the nine). */

@@ -6,6 +6,7 @@ import { formatGrams } from '../../../lib/format';
 import type { PrepFood as ShoppingFood, ShoppingListResponse as ShoppingListResult } from '../../../../shared/schemas/prep';
 import { shoppingChecksKey } from '../shopping-picks';
 import { portionsWord } from '../shopping-words';
+import { countOf } from '../../../lib/words';
 
 function foodKey(food: ShoppingFood): string {
   return food.id === null ? `name:${food.name.trim().toLowerCase()}` : `food:${food.id}`;
@@ -43,8 +44,7 @@ export function MergedShoppingList({ list, onPrint }: MergedShoppingListProps) {
             What to buy
           </h2>
           <p className="text-sm text-ink-soft">
-            {list.items.length} item{list.items.length === 1 ? '' : 's'} for {list.sources.length} batch{list.sources.length === 1 ? '' : 'es'},{' '}
-            {portionsWord(totalPortions)} in all.
+            {countOf(list.items.length, 'item')} for {countOf(list.sources.length, 'batch')}, {portionsWord(totalPortions)} in all.
           </p>
         </div>
         <div className="flex flex-wrap gap-2 print:hidden">
