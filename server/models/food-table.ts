@@ -100,18 +100,15 @@ export interface CustomFoodValues {
   energyFromAtwater: boolean;
 }
 
+/** The nutrient columns kcal … sodium_mg, in table order. */
+function nutrientColumns(n: CustomFoodValues['per100g']): number[] {
+  return [n.kcal, n.proteinG, n.fatG, n.satFatG, n.carbsG, n.fiberG, n.sugarG, n.sodiumMg];
+}
+
 function customBind(v: CustomFoodValues): unknown[] {
-  const n = v.per100g;
   return [
     v.name,
-    n.kcal,
-    n.proteinG,
-    n.fatG,
-    n.satFatG,
-    n.carbsG,
-    n.fiberG,
-    n.sugarG,
-    n.sodiumMg,
+    ...nutrientColumns(v.per100g),
     v.densityGPerMl,
     v.densitySource,
     v.roles,
@@ -196,22 +193,14 @@ const CATALOGUE_COLUMNS = [
 ];
 
 function catalogueRow(f: CatalogueFood) {
-  const n = f.per100g;
   return [
     f.source,
     f.sourceId,
     f.name,
     f.sourceName,
     f.foodGroup,
-    n.kcal,
-    n.proteinG,
-    n.fatG,
-    n.satFatG,
-    n.carbsG,
-    n.fiberG,
-    n.sugarG,
-    n.sodiumMg,
-    n.waterG,
+    ...nutrientColumns(f.per100g),
+    f.per100g.waterG,
     f.densityGPerMl,
     f.densitySource,
     f.roles,

@@ -11,7 +11,7 @@ export function versionOption(version: Pick<VersionSummary, 'number' | 'kind' | 
 }
 
 export function portionsWord(portions: number): string {
-  return `${countOf(portions, 'portion')}`;
+  return countOf(portions, 'portion');
 }
 
 /** A whole number from 1 to 100 for a batch, or the reason it is not one. */
