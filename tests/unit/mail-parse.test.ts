@@ -18,7 +18,7 @@ describe('parseMessage (mailparser)', () => {
       ' here.',
     ]);
     const parsed = await parseMessage(raw);
-    expect(parsed.from).toBe('"Hearthswap" <no-reply@hearthswap.test>');
+    expect(parsed.from).toBe('Hearthswap <no-reply@hearthswap.test>');
     expect(parsed.subject).toBe('Your batch plan is ready');
     expect(parsed.messageId).toBe('<abc@hearthswap.test>');
     expect(parsed.text).toBe('Grüße: 1 tbsp = 14.8 mL, and this line is so long that it wraps here.');
