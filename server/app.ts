@@ -106,7 +106,7 @@ export function createApp(context: AppContext) {
   const limits = createRateLimits(sessionPool, config.limits, config.secureCookies);
   const api = express.Router();
   api.use(csrf.protect);
-  api.use('/auth', authRouter({ sequelize, limits, csrf, mail }));
+  api.use('/auth', authRouter({ sequelize, limits, csrf, mail, s3: config.s3 }));
   api.use('/admin', adminRouter());
   api.use('/analyze', analyzeRouter(sequelize, limits.compute));
   api.use('/foods', foodsRouter(sequelize));
