@@ -122,8 +122,9 @@ describe('export and import', () => {
     const { agent, recipe } = await cookWithRecipe();
     const res = await agent.get(`/api/recipes/${recipe.id}/export.jsonld`).expect(200);
     expect(res.headers['content-type']).toMatch(/application\/ld\+json/);
-    const doc = JSON.parse(res.text) as SchemaRecipe & { '@context': string };
-    expect(doc['@context']).toBe('https://schema.org');
+    const doc = JSON.parse(res.text) as SchemaRecipe & { '@context': unknown[] };
+    // schema.org first; Hearthswap's own terms (every version) under a prefix of their own
+    expect(doc['@context']).toEqual(['https://schema.org', { hearthswap: 'urn:hearthswap:terms#' }]);
     expect(doc['@type']).toBe('Recipe');
     // Property names from schema.org (typed by schema-dts): Recipe and NutritionInformation.
     const keys: (keyof SchemaRecipe & string)[] = ['name', 'recipeYield', 'recipeIngredient', 'nutrition'];
