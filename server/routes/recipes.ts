@@ -10,6 +10,7 @@ import {
   recipeListQuerySchema,
   updateRecipeSchema,
   photoUploadFieldsSchema,
+  photoQuerySchema,
   versionParam,
 } from '../../shared/schemas/recipes';
 import { MAX_LINES } from '../../shared/schemas/analyze';
@@ -39,8 +40,8 @@ import { importedTitle, parseRecipeFile, type ImportedRecipe } from '../services
 import { assertSafeText } from '../middleware/text-safety';
 import type { RateLimits } from '../middleware/rate-limits';
 import { recipesToJsonLd, toJsonLd } from '../services/recipe-export';
-import { MAX_PHOTO_BYTES, readPhoto } from '../services/photo-storage';
-import { replaceRecipePhoto } from '../services/recipe-photo';
+import { MAX_PHOTO_BYTES } from '../services/photo-storage';
+import { readRecipePhoto, removeRecipePhoto, replaceRecipePhoto } from '../services/recipe-photo';
 import { HttpError, badRequest } from '../lib/http-error';
 import { singleFile } from '../middleware/upload';
 
@@ -180,14 +181,19 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
     res.status(201).json(await recipeDetail(recipe));
   });
 
+  router.delete('/:id/photo', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    const { revision } = parse(photoUploadFieldsSchema, { ...req.query, ...(req.body ?? {}) });
+    res.json(await recipeDetail(await removeRecipePhoto(sequelize, config.s3, req.user!, id, revision)));
+  });
+
   router.get('/:id/photo', async (req, res) => {
     const { id } = parse(idParam, req.params);
-    const recipe = await findReadableRecipe(req.user!, id);
-    if (!recipe.photoKey) throw new HttpError(404, 'not_found', 'This recipe has no photo.');
-    const image = await readPhoto(config.s3, recipe.photoKey);
-    res.type(recipe.photoType ?? 'image/webp');
+    const { size } = parse(photoQuerySchema, req.query);
+    const photo = await readRecipePhoto(config.s3, req.user!, id, size);
+    res.type(photo.type);
     res.setHeader('Cache-Control', 'private, max-age=86400');
-    res.send(image);
+    res.send(photo.image);
   });
 
   return router;

@@ -106,6 +106,7 @@ function recipeSummary(r: Recipe, info: { count: number; latest: RecipeVersion |
     versionCount: info?.count ?? 0,
     latest: info?.latest ? versionSummary(info.latest) : null,
     hasPhoto: r.photoKey !== null,
+    thumbnailUrl: r.photoKey ? `/api/recipes/${r.id}/photo?size=thumb&v=${encodeURIComponent(r.photoKey)}` : null,
     updatedAt: r.updatedAt.toISOString(),
     createdAt: r.createdAt.toISOString(),
   };
@@ -245,7 +246,7 @@ export async function updateRecipe(
 }
 
 /**
- * Points the recipe at a newly stored photo. The row is locked and the revision bumped in one
+ * Points the recipe at a newly stored photo (or at none). The row is locked and the revision bumped in one
  * transaction, so a concurrent edit and a photo can never be acknowledged as the same revision;
  * a stale `revision` (when the client sends one) is a 409. Returns the photo key it replaced.
  */
@@ -254,14 +255,14 @@ export async function setRecipePhoto(
   viewer: User,
   id: number,
   revision: number | undefined,
-  photo: { key: string; type: string },
+  photo: { key: string; type: string } | null,
 ): Promise<{ recipe: Recipe; previousKey: string | null }> {
   return sequelize.transaction(async (transaction) => {
     const recipe = await findOwnRecipe(viewer, id, transaction);
     if (revision !== undefined) checkRevision(recipe, revision);
     const previousKey = recipe.photoKey;
-    recipe.photoKey = photo.key;
-    recipe.photoType = photo.type;
+    recipe.photoKey = photo?.key ?? null;
+    recipe.photoType = photo?.type ?? null;
     recipe.revision += 1;
     await recipe.save({ transaction });
     return { recipe, previousKey };

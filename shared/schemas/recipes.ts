@@ -68,6 +68,9 @@ export const photoUploadFieldsSchema = z.object({
   revision: z.coerce.number({ message: 'revision must be the revision you read.' }).int().min(1).optional(),
 });
 
+/** `GET /api/recipes/:id/photo?size=thumb` for the list's small square; the full photo without it. */
+export const photoQuerySchema = z.object({ size: z.enum(['full', 'thumb'], { message: 'size is full or thumb.' }).default('full') });
+
 export const deleteRecipeSchema = z.object({ revision: z.coerce.number({ message: 'revision is required: send the revision you read.' }).int().min(1) });
 
 export const createVersionSchema = z.object({
@@ -125,6 +128,8 @@ export interface RecipeSummary {
   versionCount: number;
   latest: VersionSummary | null;
   hasPhoto: boolean;
+  /** a small square of the photo for lists (`GET /api/recipes/:id/photo?size=thumb`) */
+  thumbnailUrl: string | null;
   updatedAt: string;
   createdAt: string;
 }
