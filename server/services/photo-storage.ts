@@ -51,10 +51,15 @@ export async function processPhoto(buffer: Buffer): Promise<{ image: Buffer; thu
   } catch {
     throw notAPhoto('');
   }
-  if (!format || !ACCEPTED.has(format)) throw notAPhoto(format === 'heif' ? ' Hearthswap can read (HEIC)' : format ? ` Hearthswap can read (${format.toUpperCase()})` : '');
+  if (!format || !ACCEPTED.has(format))
+    throw notAPhoto(format === 'heif' ? ' Hearthswap can read (HEIC)' : format ? ` Hearthswap can read (${format.toUpperCase()})` : '');
   try {
     const upright = sharp(buffer).rotate();
-    const image = await upright.clone().resize({ width: MAX_EDGE_PX, height: MAX_EDGE_PX, fit: 'inside', withoutEnlargement: true }).webp({ quality: 82 }).toBuffer();
+    const image = await upright
+      .clone()
+      .resize({ width: MAX_EDGE_PX, height: MAX_EDGE_PX, fit: 'inside', withoutEnlargement: true })
+      .webp({ quality: 82 })
+      .toBuffer();
     const thumbnail = await sharp(image).resize({ width: THUMB_EDGE_PX, height: THUMB_EDGE_PX, fit: 'cover' }).webp({ quality: 70 }).toBuffer();
     return { image, thumbnail };
   } catch {
@@ -74,7 +79,11 @@ export async function thumbnailFrom(image: Buffer) {
   return sharp(image).resize({ width: THUMB_EDGE_PX, height: THUMB_EDGE_PX, fit: 'cover' }).webp({ quality: 70 }).toBuffer();
 }
 
-export async function storePhoto(config: S3Config | null, recipeId: number, photo: { image: Buffer; thumbnail: Buffer }): Promise<{ key: string; type: string }> {
+export async function storePhoto(
+  config: S3Config | null,
+  recipeId: number,
+  photo: { image: Buffer; thumbnail: Buffer },
+): Promise<{ key: string; type: string }> {
   const s3 = requireConfig(config);
   const key = `recipes/${recipeId}/${randomUUID()}.webp`;
   await client(s3).send(new PutObjectCommand({ Bucket: s3.bucket, Key: key, Body: photo.image, ContentType: 'image/webp' }));

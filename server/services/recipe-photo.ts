@@ -34,7 +34,13 @@ export async function replaceRecipePhoto(
 }
 
 /** Takes the photo off the owner's recipe (revision checked when sent, bumped either way) and removes the stored files. */
-export async function removeRecipePhoto(sequelize: Sequelize, s3: S3Config | null, owner: User, recipeId: number, revision: number | undefined): Promise<Recipe> {
+export async function removeRecipePhoto(
+  sequelize: Sequelize,
+  s3: S3Config | null,
+  owner: User,
+  recipeId: number,
+  revision: number | undefined,
+): Promise<Recipe> {
   const saved = await setRecipePhoto(sequelize, owner, recipeId, revision, null);
   if (saved.previousKey) await removePhoto(s3, saved.previousKey);
   return saved.recipe;
