@@ -90,6 +90,12 @@ export function authRouter({
     res.json({ ok: true });
   });
 
+  // The client's question "who is signed in?": answered 200 either way, so a signed-out visit
+  // has no failed request in it. GET /me keeps the contract's 401.
+  router.get('/session', (req, res) => {
+    res.json({ user: req.user ? req.user.toPublic() : null });
+  });
+
   router.get('/me', requireAuth, (req, res) => {
     res.json(req.user!.toPublic());
   });

@@ -22,7 +22,10 @@ export interface TestApp {
 }
 
 /** The real app on the test database; each call is a fresh process-like instance. */
-export async function createTestApp(limits: Partial<RateLimitConfig> = {}, options: { mailer?: Mailer; config?: Partial<AppConfig> } = {}): Promise<TestApp> {
+export async function createTestApp(
+  limits: Partial<RateLimitConfig> = {},
+  options: { mailer?: Mailer; config?: Partial<AppConfig>; logError?: (error: unknown) => void } = {},
+): Promise<TestApp> {
   const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), ...inject('s3Env') }, options.config);
   config.limits = {
     ...config.limits,
@@ -37,7 +40,12 @@ export async function createTestApp(limits: Partial<RateLimitConfig> = {}, optio
   };
   const services = await openServices(config);
   const mail = await createMailContext(config, { APP_URL: 'http://hearthswap.test' }, services.sessionPool);
-  const app = createApp({ config, ...services, mail: options.mailer && mail.mail ? { ...mail.mail, mailer: options.mailer } : mail.mail });
+  const app = createApp({
+    config,
+    ...services,
+    logError: options.logError,
+    mail: options.mailer && mail.mail ? { ...mail.mail, mailer: options.mailer } : mail.mail,
+  });
   return {
     app,
     config,

@@ -1,16 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api, isApiError } from '../../../lib/api-client';
+import { api } from '../../../lib/api-client';
 import { queryKeys } from '../../../lib/query-keys';
 import type { User } from '../../../lib/user';
 
-/** The signed-in person, or null when signed out (the server answers 401, which is not an error here). */
+/** The signed-in person, or null when signed out (`GET /api/auth/session` answers 200 either way). */
 export async function fetchMe(signal?: AbortSignal): Promise<User | null> {
-  try {
-    return await api.get<User>('/api/auth/me', { signal });
-  } catch (error) {
-    if (isApiError(error) && error.status === 401) return null;
-    throw error;
-  }
+  const { user } = await api.get<{ user: User | null }>('/api/auth/session', { signal });
+  return user;
 }
 
 export const meQueryOptions = queryOptions({
