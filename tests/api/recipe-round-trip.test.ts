@@ -40,7 +40,8 @@ async function searchFood(q: string) {
 async function allVersions(cook: Cook, recipeId: number): Promise<Version[]> {
   const list = await cook.agent.get(`/api/recipes/${recipeId}/versions`).expect(200);
   const out: Version[] = [];
-  for (const v of list.body.versions as { number: number }[]) out.push((await cook.agent.get(`/api/recipes/${recipeId}/versions/${v.number}`).expect(200)).body);
+  for (const v of list.body.versions as { number: number }[])
+    out.push((await cook.agent.get(`/api/recipes/${recipeId}/versions/${v.number}`).expect(200)).body);
   return out;
 }
 
@@ -49,7 +50,17 @@ async function correctedRecipe(cook: Cook) {
   const own = await cook.agent
     .post('/api/foods')
     .set('X-CSRF-Token', cook.csrf)
-    .send({ name: 'Hollowbrook protein elbows', servingSizeG: 56, servingLabel: '2 oz', kcal: 190, fatG: 1.5, carbsG: 32, fiberG: 6, proteinG: 13, roles: ['pasta'] })
+    .send({
+      name: 'Hollowbrook protein elbows',
+      servingSizeG: 56,
+      servingLabel: '2 oz',
+      kcal: 190,
+      fatG: 1.5,
+      carbsG: 32,
+      fiberG: 6,
+      proteinG: 13,
+      roles: ['pasta'],
+    })
     .expect(201);
   const created = await cook.agent.post('/api/recipes').set('X-CSRF-Token', cook.csrf).send({ title: 'Stovetop mac', servings: 4, text: TEXT }).expect(201);
   const id = created.body.id as number;
@@ -109,7 +120,11 @@ describe('export then import (JSON-LD with hearthswap:versions)', () => {
     expect(doc['hearthswap:versions'][1]['hearthswap:lines'][1]['hearthswap:food']['hearthswap:source']).toBe('usda-sr28');
     expect(doc['hearthswap:versions'][1]['hearthswap:lines'][1]['hearthswap:food']['hearthswap:sourceId']).toMatch(/^\d{5}$/);
 
-    const imported = await cook.agent.post('/api/recipes/import').set('X-CSRF-Token', cook.csrf).attach('file', Buffer.from(exported.text), 'mac.jsonld').expect(201);
+    const imported = await cook.agent
+      .post('/api/recipes/import')
+      .set('X-CSRF-Token', cook.csrf)
+      .attach('file', Buffer.from(exported.text), 'mac.jsonld')
+      .expect(201);
     expect(imported.body.title).toBe('Stovetop mac (imported)');
     const after = await allVersions(cook, imported.body.id);
     expect(after).toHaveLength(before.length);
@@ -133,7 +148,11 @@ describe('export then import (JSON-LD with hearthswap:versions)', () => {
   it("the whole book exports as one @graph; another cook's import keeps the SR28 foods and grams and rematches a label food they lack, saying so", async () => {
     const cook = await signUp(t.app);
     const { id } = await correctedRecipe(cook);
-    await cook.agent.post('/api/recipes').set('X-CSRF-Token', cook.csrf).send({ title: 'Oat bake', servings: 2, text: '1 cup rolled oats\n2 large eggs' }).expect(201);
+    await cook.agent
+      .post('/api/recipes')
+      .set('X-CSRF-Token', cook.csrf)
+      .send({ title: 'Oat bake', servings: 2, text: '1 cup rolled oats\n2 large eggs' })
+      .expect(201);
     const book = await cook.agent.get('/api/recipes/export.jsonld').expect(200);
     expect(book.headers['content-disposition']).toMatch(/hearthswap-recipes\.jsonld/);
     const graph = JSON.parse(book.text)['@graph'] as { name: string; 'hearthswap:versions': unknown[] }[];
@@ -144,7 +163,11 @@ describe('export then import (JSON-LD with hearthswap:versions)', () => {
 
     const single = await cook.agent.get(`/api/recipes/${id}/export.jsonld`).expect(200);
     const other = await signUp(t.app);
-    const imported = await other.agent.post('/api/recipes/import').set('X-CSRF-Token', other.csrf).attach('file', Buffer.from(single.text), 'mac.jsonld').expect(201);
+    const imported = await other.agent
+      .post('/api/recipes/import')
+      .set('X-CSRF-Token', other.csrf)
+      .attach('file', Buffer.from(single.text), 'mac.jsonld')
+      .expect(201);
     const [before, after] = [await allVersions(cook, id), await allVersions(other, imported.body.id)];
     const edit = [before[1].lines, after[1].lines];
     // the SR28 cheese and its grams come across exactly
@@ -161,8 +184,31 @@ describe('export then import (JSON-LD with hearthswap:versions)', () => {
     const doc = JSON.parse((await cook.agent.get(`/api/recipes/${id}/export.jsonld`).expect(200)).text);
     doc['hearthswap:versions'][2]['hearthswap:lines'][1]['hearthswap:grams'] = -5;
     const before = (await cook.agent.get('/api/recipes').expect(200)).body.recipes.length;
-    const res = await cook.agent.post('/api/recipes/import').set('X-CSRF-Token', cook.csrf).attach('file', Buffer.from(JSON.stringify(doc)), 'bad.jsonld').expect(400);
+    const res = await cook.agent
+      .post('/api/recipes/import')
+      .set('X-CSRF-Token', cook.csrf)
+      .attach('file', Buffer.from(JSON.stringify(doc)), 'bad.jsonld')
+      .expect(400);
     expect(res.body.error.message).toContain('hearthswap:versions.2.hearthswap:lines.1.hearthswap:grams');
     expect((await cook.agent.get('/api/recipes').expect(200)).body.recipes.length).toBe(before);
+  });
+});
+
+describe('a rewrite line saved with its readable text', () => {
+  it("keeps the rewrite's food and grams; the text is not matched again", async () => {
+    const cook = await signUp(t.app);
+    const created = await cook.agent
+      .post('/api/recipes')
+      .set('X-CSRF-Token', cook.csrf)
+      .send({ title: 'Mac', servings: 4, text: '2 cups shredded sharp cheddar' })
+      .expect(201);
+    const lowfat = await searchFood('cheddar cheese low fat');
+    const saved = await cook.agent
+      .post(`/api/recipes/${created.body.id}/versions`)
+      .set('X-CSRF-Token', cook.csrf)
+      // a partial swap's kept part reads like the original line; its food must still be the one sent
+      .send({ kind: 'rewrite', lines: [{ food: { id: lowfat.id }, grams: 113, input: '1 cup shredded sharp cheddar' }] })
+      .expect(201);
+    expect(saved.body.lines[0]).toMatchObject({ input: '1 cup shredded sharp cheddar', foodId: lowfat.id, grams: 113 });
   });
 });
