@@ -90,7 +90,13 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
     const input = importedRecipeInput({ ...imported, title });
     if (imported.versions) assertSafeText(imported.versions, 'file');
     const recipe = imported.versions
-      ? await importRecipeWithVersions(sequelize, await engine(), req.user!, { title, servings: input.servings, notes: input.notes ?? '', method: input.method ?? '' }, imported.versions)
+      ? await importRecipeWithVersions(
+          sequelize,
+          await engine(),
+          req.user!,
+          { title, servings: input.servings, notes: input.notes ?? '', method: input.method ?? '' },
+          imported.versions,
+        )
       : await createRecipe(sequelize, await engine(), req.user!, input);
     res.status(201).json({ ...(await recipeDetail(recipe)), importedFrom: imported.format });
   });
@@ -171,7 +177,13 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
         .replace(/^-|-$/g, '') || 'recipe';
     res.type('application/ld+json');
     res.setHeader('Content-Disposition', `attachment; filename="${slug}-v${version.number}.jsonld"`);
-    res.send(JSON.stringify(toJsonLd(recipe, version, versions, (foodId) => foods.byId.get(foodId)), null, 2));
+    res.send(
+      JSON.stringify(
+        toJsonLd(recipe, version, versions, (foodId) => foods.byId.get(foodId)),
+        null,
+        2,
+      ),
+    );
   });
 
   router.post('/:id/photo', singleFile(MAX_PHOTO_BYTES, 'photo'), async (req, res) => {

@@ -109,7 +109,10 @@ export function toJsonLd(
 }
 
 /** Every recipe of an account, each with all its versions, as one JSON-LD `@graph`. */
-export function recipesToJsonLd(recipes: { recipe: { title: string; notes: string; method: string; createdAt: Date }; versions: VersionRow[] }[], foodOf: FoodLookup) {
+export function recipesToJsonLd(
+  recipes: { recipe: { title: string; notes: string; method: string; createdAt: Date }; versions: VersionRow[] }[],
+  foodOf: FoodLookup,
+) {
   return {
     '@context': JSONLD_CONTEXT,
     '@graph': recipes.filter((r) => r.versions.length > 0).map((r) => recipeNode(r.recipe, r.versions.at(-1)!, r.versions, foodOf)),

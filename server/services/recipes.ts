@@ -399,8 +399,16 @@ function importedLines(engine: FoodEngine, viewer: User, version: ExportedVersio
     const food = importedFood(engine, viewer, line, sr28);
     const ref = line['hearthswap:food'];
     if (ref && !food) {
-      const [matched] = normaliseLines(engine, [{ input: line['hearthswap:text'], grams: line['hearthswap:grams'] }], (f) => canSeeFood(f as StoredFood, viewer), ownFoodsFor(engine, viewer));
-      return { ...matched, warnings: [...(matched.warnings ?? []), `The file's food “${ref.name}” is not one you can use here; matched the line's text instead.`] };
+      const [matched] = normaliseLines(
+        engine,
+        [{ input: line['hearthswap:text'], grams: line['hearthswap:grams'] }],
+        (f) => canSeeFood(f as StoredFood, viewer),
+        ownFoodsFor(engine, viewer),
+      );
+      return {
+        ...matched,
+        warnings: [...(matched.warnings ?? []), `The file's food “${ref.name}” is not one you can use here; matched the line's text instead.`],
+      };
     }
     const stored: StoredLine = { input: line['hearthswap:text'], foodId: food?.id ?? null, foodName: food?.name ?? null, grams: line['hearthswap:grams'] };
     if (line['hearthswap:warnings']?.length) stored.warnings = line['hearthswap:warnings'];
@@ -422,7 +430,10 @@ export async function importRecipeWithVersions(
   const ordered = [...versions].sort((a, b) => a['hearthswap:number'] - b['hearthswap:number']);
   const prepared = ordered.map((v) => ({ version: v, lines: importedLines(engine, viewer, v, sr28) }));
   return sequelize.transaction(async (transaction) => {
-    const recipe = await Recipe.create({ ownerId: viewer.id, title: input.title, servings: input.servings, notes: input.notes, method: input.method }, { transaction });
+    const recipe = await Recipe.create(
+      { ownerId: viewer.id, title: input.title, servings: input.servings, notes: input.notes, method: input.method },
+      { transaction },
+    );
     const numbers = new Map<number, number>();
     for (const { version, lines } of prepared) {
       const parent = version['hearthswap:parentNumber'];

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import sharp from 'sharp';
-import { createTestApp, signUp, type TestApp } from '../helpers/test-app';
+import { binaryBody, createTestApp, signUp, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -77,7 +77,11 @@ describe('photo uploads and the recipe revision', () => {
 describe('photo words, removal and thumbnails', () => {
   it('says "This file is not a photo" under the file field, naming a format it cannot use', async () => {
     const { agent, csrf, recipe } = await cookWithRecipe();
-    const text = await agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).attach('file', Buffer.from('just some words'), 'a.jpg').expect(400);
+    const text = await agent
+      .post(`/api/recipes/${recipe.id}/photo`)
+      .set('X-CSRF-Token', csrf)
+      .attach('file', Buffer.from('just some words'), 'a.jpg')
+      .expect(400);
     expect(text.body.error.message).toBe('file: This file is not a photo. Upload a JPEG, PNG or WebP picture.');
     expect(text.body.error.details.fieldErrors.file).toEqual(['This file is not a photo. Upload a JPEG, PNG or WebP picture.']);
     const gif = await sharp({ create: { width: 20, height: 20, channels: 3, background: '#ffffff' } })
@@ -92,19 +96,16 @@ describe('photo words, removal and thumbnails', () => {
     const jpeg = await sharp({ create: { width: 1800, height: 1200, channels: 3, background: '#7a9e3f' } })
       .jpeg()
       .toBuffer();
-    const up = await agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).field('revision', '1').attach('file', jpeg, 'ziti.jpg').expect(201);
+    const up = await agent
+      .post(`/api/recipes/${recipe.id}/photo`)
+      .set('X-CSRF-Token', csrf)
+      .field('revision', '1')
+      .attach('file', jpeg, 'ziti.jpg')
+      .expect(201);
     expect(up.body.revision).toBe(2);
     const listed = (await agent.get('/api/recipes').expect(200)).body.recipes.find((r: { id: number }) => r.id === recipe.id);
     expect(listed.thumbnailUrl).toMatch(new RegExp(`^/api/recipes/${recipe.id}/photo\\?size=thumb&v=`));
-    const thumb = await agent
-      .get(listed.thumbnailUrl)
-      .buffer(true)
-      .parse((res, cb) => {
-        const chunks: Buffer[] = [];
-        res.on('data', (c: Buffer) => chunks.push(c));
-        res.on('end', () => cb(null, Buffer.concat(chunks)));
-      })
-      .expect(200);
+    const thumb = await agent.get(listed.thumbnailUrl).buffer(true).parse(binaryBody).expect(200);
     const meta = await sharp(thumb.body as Buffer).metadata();
     expect([meta.format, meta.width, meta.height]).toEqual(['webp', 240, 240]);
     await agent.get(`/api/recipes/${recipe.id}/photo?size=huge`).expect(400);

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import sharp from 'sharp';
 import type { Recipe as SchemaRecipe, NutritionInformation } from 'schema-dts';
-import { createTestApp, signUp, type TestApp } from '../helpers/test-app';
+import { binaryBody, createTestApp, signUp, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -204,15 +204,7 @@ describe('photos', () => {
       .toBuffer();
     const up = await agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).attach('file', jpeg, 'photo.png').expect(201);
     expect(up.body.photoUrl).toMatch(/\/photo/);
-    const got = await agent
-      .get(`/api/recipes/${recipe.id}/photo`)
-      .buffer(true)
-      .parse((res, cb) => {
-        const chunks: Buffer[] = [];
-        res.on('data', (c: Buffer) => chunks.push(c));
-        res.on('end', () => cb(null, Buffer.concat(chunks)));
-      })
-      .expect(200);
+    const got = await agent.get(`/api/recipes/${recipe.id}/photo`).buffer(true).parse(binaryBody).expect(200);
     const meta = await sharp(got.body as Buffer).metadata();
     expect(meta.format).toBe('webp');
     expect(Math.max(meta.width!, meta.height!)).toBe(1600);

@@ -82,3 +82,10 @@ export async function signUp(app: Express, role: 'cook' | 'coach' = 'cook') {
     .expect(201);
   return { agent, csrf, email, password, user: res.body };
 }
+
+/** A supertest parser that keeps a binary answer (an image) as one Buffer in `res.body`. */
+export function binaryBody(res: { on(event: string, listener: (chunk: Buffer) => void): unknown }, cb: (error: Error | null, body: Buffer) => void) {
+  const chunks: Buffer[] = [];
+  res.on('data', (c: Buffer) => chunks.push(c));
+  res.on('end', () => cb(null, Buffer.concat(chunks)));
+}
