@@ -2,10 +2,10 @@
  * The text a rewritten line is saved with: the cook's own measure and words, with the new food's
  * common name where a swap changed the food ("2 cups shredded sharp cheddar" → "2 cups shredded
  * reduced-fat cheddar") and the amount rescaled where the grams changed. The catalogue food stays
- * on the line as its matched food, shown beside this text.
+ * on the line as its matched food, shown beside this text. It reads the line's amount and unit itself
+ * (not through parse-line, whose parser package would weigh on the Kitchen's first visit).
  */
-import { parseLine } from './parse-line';
-import { unitKind } from './units';
+import { normaliseUnit, unitKind } from './units';
 
 /** Parts of an SR28 name that say how the food is sold or kept, not what it is. */
 const STATE_PARTS =
@@ -78,6 +78,30 @@ function wholeGrams(g: number): string {
 const LEADING_AMOUNT =
   /^\s*(?:\d+\s+\d+\/\d+|\d+\/\d+|\d+(?:\.\d+)?(?:\s*[½¼¾⅓⅔⅛])?|[½¼¾⅓⅔⅛])(?:\s*(?:-|–|to)\s*(?:\d+\s+\d+\/\d+|\d+\/\d+|\d+(?:\.\d+)?|[½¼¾⅓⅔⅛]))?/;
 
+const VULGAR: Record<string, number> = { '½': 0.5, '¼': 0.25, '¾': 0.75, '⅓': 1 / 3, '⅔': 2 / 3, '⅛': 0.125 };
+const PREPARED = /^(?:(?:shredded|grated|chopped|diced|sliced|minced|melted|softened|cubed|crumbled|cooked)\s+)+/i;
+
+/** "1 1/2" → 1.5, "½" → 0.5, "2-3" → 2 (a range by its low end, as the cook's first number). */
+function amountOf(text: string): number {
+  const first = text.trim().split(/\s*(?:-|–|to)\s*/)[0];
+  return first.split(/\s+/).reduce((sum, part) => {
+    if (VULGAR[part.slice(-1)] !== undefined) return sum + (Number(part.slice(0, -1)) || 0) + VULGAR[part.slice(-1)];
+    const [n, d] = part.split('/');
+    return sum + (d ? Number(n) / Number(d) : Number(n));
+  }, 0);
+}
+
+/** The amount, unit and food phrase of a line, enough to restate it. */
+function readLine(text: string) {
+  const amount = LEADING_AMOUNT.exec(text);
+  if (!amount) return { quantity: null, unit: null, unitText: null, name: text.split(',')[0].replace(PREPARED, '').trim() };
+  let rest = text.slice(amount[0].length).trim();
+  const word = rest.split(/\s+/)[0] ?? '';
+  const unit = normaliseUnit(word.replace(/\.$/, ''));
+  if (unit) rest = rest.slice(word.length).trim();
+  return { quantity: amountOf(amount[0]), unit, unitText: unit ? word : null, name: rest.split(',')[0].replace(PREPARED, '').trim() };
+}
+
 function withUnitNumber(unitText: string, amount: number): string {
   const singular = unitText.replace(/(?<=[a-z])s$/i, '');
   if (unitText.length < 3 || /^(oz|lb|g|kg|ml|l|tsp|tbsp)$/i.test(singular)) return unitText;
@@ -90,7 +114,7 @@ function withUnitNumber(unitText: string, amount: number): string {
  * swapped count gives the grams and the line it stands in for.
  */
 export function rewrittenLineText(original: string, writtenGrams: number, grams: number, newName: string | null): string {
-  const parsed = parseLine(original);
+  const parsed = readLine(original.trim());
   const ratio = writtenGrams > 0 ? grams / writtenGrams : 1;
   const sameAmount = Math.abs(ratio - 1) < 0.02;
   if (newName === null && sameAmount) return original;
