@@ -22,7 +22,10 @@ export interface TestApp {
 }
 
 /** The real app on the test database; each call is a fresh process-like instance. */
-export async function createTestApp(limits: Partial<RateLimitConfig> = {}, options: { mailer?: Mailer; config?: Partial<AppConfig> } = {}): Promise<TestApp> {
+export async function createTestApp(
+  limits: Partial<RateLimitConfig> = {},
+  options: { mailer?: Mailer; config?: Partial<AppConfig>; logError?: (error: unknown) => void } = {},
+): Promise<TestApp> {
   const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), ...inject('s3Env') }, options.config);
   config.limits = {
     ...config.limits,
@@ -37,7 +40,12 @@ export async function createTestApp(limits: Partial<RateLimitConfig> = {}, optio
   };
   const services = await openServices(config);
   const mail = await createMailContext(config, { APP_URL: 'http://hearthswap.test' }, services.sessionPool);
-  const app = createApp({ config, ...services, mail: options.mailer && mail.mail ? { ...mail.mail, mailer: options.mailer } : mail.mail });
+  const app = createApp({
+    config,
+    ...services,
+    logError: options.logError,
+    mail: options.mailer && mail.mail ? { ...mail.mail, mailer: options.mailer } : mail.mail,
+  });
   return {
     app,
     config,
@@ -94,4 +102,11 @@ export async function linkedCoachAndClient(t: TestApp) {
   const token = invitationTokenFrom(mail.text);
   await client.agent.post(`/api/invitations/${token}/accept`).set('X-CSRF-Token', client.csrf).expect(200);
   return { coach, client, token };
+}
+
+/** A supertest parser that keeps a binary answer (an image) as one Buffer in `res.body`. */
+export function binaryBody(res: { on(event: string, listener: (chunk: Buffer) => void): unknown }, cb: (error: Error | null, body: Buffer) => void) {
+  const chunks: Buffer[] = [];
+  res.on('data', (c: Buffer) => chunks.push(c));
+  res.on('end', () => cb(null, Buffer.concat(chunks)));
 }

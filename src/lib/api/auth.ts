@@ -1,17 +1,13 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { LoginInput, RegisterInput, UpdateMeInput } from '../../../shared/schemas/auth';
-import { api, isApiError } from '../api-client';
+import type { ChangePasswordInput, LoginInput, RegisterInput, UpdateMeInput } from '../../../shared/schemas/auth';
+import { api } from '../api-client';
 import { queryKeys } from '../query-keys';
 import type { User } from '../user';
 
-/** The signed-in person, or null when signed out (the server answers 401, which is not an error here). */
+/** The signed-in person, or null when signed out (`GET /api/auth/session` answers 200 either way, so a signed-out visit has no failed request). */
 export async function fetchMe(signal?: AbortSignal): Promise<User | null> {
-  try {
-    return await api.get<User>('/api/auth/me', { signal });
-  } catch (error) {
-    if (isApiError(error) && error.status === 401) return null;
-    throw error;
-  }
+  const { user } = await api.get<{ user: User | null }>('/api/auth/session', { signal });
+  return user;
 }
 
 export const meQuery = queryOptions({
@@ -45,4 +41,13 @@ export function requestPasswordReset(email: string): Promise<{ ok: true; message
 /** 404 for a link that was never valid; 410 for one used or expired. */
 export function confirmPasswordReset(input: { token: string; password: string }): Promise<{ ok: true }> {
   return api.post<{ ok: true }>('/api/auth/password-reset/confirm', input);
+}
+
+/** The session stays signed in; every other session of the account ends on the server. */
+export function changePassword(input: ChangePasswordInput): Promise<{ ok: true }> {
+  return api.post<{ ok: true }>('/api/auth/password', input);
+}
+
+export function deleteAccount(password: string): Promise<void> {
+  return api.delete<void>('/api/auth/me', { password });
 }

@@ -132,9 +132,21 @@ export function importRecipe(file: File): Promise<ImportedRecipe> {
   return uploadFile<ImportedRecipe>('/api/recipes/import', file);
 }
 
-export function uploadPhoto(recipeId: number, file: File, onProgress?: (fraction: number) => void, signal?: AbortSignal): Promise<RecipeDetail> {
+/** Sends the revision the page read: the server answers 409 when the recipe changed meanwhile. */
+export function uploadPhoto(
+  recipeId: number,
+  revision: number,
+  file: File,
+  onProgress?: (fraction: number) => void,
+  signal?: AbortSignal,
+): Promise<RecipeDetail> {
   return uploadFile<RecipeDetail>(`/api/recipes/${recipeId}/photo`, file, {
+    fields: { revision: String(revision) },
     onProgress: (p) => onProgress?.(p.fraction),
     signal,
   });
+}
+
+export function removePhoto(recipeId: number, revision: number): Promise<RecipeDetail> {
+  return api.delete<RecipeDetail>(`/api/recipes/${recipeId}/photo`, { revision });
 }
