@@ -9,6 +9,7 @@ import type { Mailer } from '../mail';
 import { parse } from '../middleware/validate';
 import { requireAuth } from '../middleware/auth';
 import { createUser, updateProfile, type User } from '../services/users';
+import { registerFromInvitation } from '../services/invitations';
 import { HttpError } from '../lib/http-error';
 import type { RateLimits } from '../middleware/rate-limits';
 
@@ -43,7 +44,7 @@ export function authRouter({
 
   router.post('/register', limits.signups, async (req, res) => {
     const input = parse(registerSchema, req.body);
-    const user = await createUser(input);
+    const user = input.invitationToken ? (await registerFromInvitation(sequelize, input, input.invitationToken)).user : await createUser(input);
     await logIn(req, res, user);
     res.status(201).json(user.toPublic());
   });
