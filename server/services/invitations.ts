@@ -59,6 +59,8 @@ export async function listInvitations(coach: User) {
     status: invitationStatus(i),
     expiresAt: i.expiresAt.toISOString(),
     createdAt: i.createdAt.toISOString(),
+    // a renewal sends the open invitation again; nothing else changes a row before it closes
+    sentAt: (i.acceptedAt || i.revokedAt ? i.createdAt : i.updatedAt).toISOString(),
   }));
 }
 

@@ -1,6 +1,7 @@
 import { useEffect, useId, useRef } from 'react';
 import { Link } from 'react-router';
 import { buttonClasses } from '../../components/ui/button';
+import { ToastRegion } from '../../components/ui/toast';
 import { ROLE_LABELS } from '../../lib/user';
 import { navItemsFor } from '../access';
 import { useAuth } from '../auth-context';
@@ -113,6 +114,7 @@ export function AppHeader() {
           {menuOpen ? 'Close' : 'Menu'}
         </button>
       </div>
+      <ToastRegion />
       <div id={menuId} hidden={!menuOpen} className="border-t border-line bg-canvas lg:hidden">
         <div className="mx-auto flex max-w-shell flex-col gap-5 px-gutter py-4">
           <nav aria-label="Main">

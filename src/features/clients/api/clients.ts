@@ -1,9 +1,10 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ClientTargets } from '../../../../shared/schemas/coaching';
+import type { InvitationSent } from '../../../../shared/schemas/invitation-sent';
 import { api } from '../../../lib/api-client';
 import { clientsKeys } from '../clients-keys';
 
-export type { ClientTargets };
+export type { ClientTargets, InvitationSent };
 
 export interface Client {
   id: number;
@@ -20,6 +21,8 @@ export interface Invitation {
   status: InvitationStatus;
   expiresAt: string;
   createdAt: string;
+  /** when the link was last mailed: sending again renews an open invitation */
+  sentAt: string;
 }
 
 export interface ClientsResponse {
@@ -41,7 +44,7 @@ export function useClient(clientId: number | null) {
 export function useInviteClient() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (email: string) => api.post<Omit<Invitation, 'createdAt'>>('/api/clients/invitations', { email }),
+    mutationFn: (email: string) => api.post<InvitationSent>('/api/clients/invitations', { email }),
     onSuccess: () => void queryClient.invalidateQueries({ queryKey: clientsKeys.list }),
   });
 }

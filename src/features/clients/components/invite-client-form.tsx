@@ -3,13 +3,13 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { errorMessage, isApiError } from '../../../lib/api-client';
-import { useInviteClient } from '../api/clients';
+import { useInviteClient, type InvitationSent } from '../api/clients';
 
 // The shape the server accepts is checked there; this catches the obvious slips before sending.
 const LOOKS_LIKE_EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 
 /** Sends an invitation e-mail with a link the client opens to link with the coach. */
-export function InviteClientForm({ onInvited }: { onInvited: (email: string) => void }) {
+export function InviteClientForm({ onInvited }: { onInvited: (sent: InvitationSent) => void }) {
   const invite = useInviteClient();
   const [email, setEmail] = useState('');
   const [error, setError] = useState<string | undefined>();
@@ -23,9 +23,9 @@ export function InviteClientForm({ onInvited }: { onInvited: (email: string) => 
     }
     setError(undefined);
     invite.mutate(address, {
-      onSuccess: () => {
+      onSuccess: (sent) => {
         setEmail('');
-        onInvited(address);
+        onInvited(sent);
       },
       onError: (e) => setError(isApiError(e) ? (e.fieldErrors.email ?? undefined) : undefined),
     });
@@ -42,7 +42,7 @@ export function InviteClientForm({ onInvited }: { onInvited: (email: string) => 
       )}
       <TextField
         label="Client's e-mail"
-        hint="They get a link that works for 7 days. They sign in with a cook account — or create one — and accept."
+        hint="They get a link that works for 7 days. They sign in with a cook account — or create one — and accept. Inviting the same address again sends a fresh link in place of the first."
         type="email"
         inputMode="email"
         autoComplete="off"
