@@ -8,7 +8,7 @@ import { clientVersions, listClients, removeClient } from '../services/clients';
 import { setClientTargets } from '../services/client-targets';
 import { inviteClient, listInvitations, revokeInvitation } from '../services/invitations';
 import type { Mailer } from '../mail';
-import type { InvitationSent } from '../../shared/schemas/invitation-sent';
+import type { ClientsResponse, ClientVersionsResponse, SavedClientTargets, SentInvitation } from '../../shared/schemas/clients';
 import { bodyStatsSchema } from '../../shared/schemas/body-stats';
 import { getBodyStats, saveBodyStats } from '../services/body-stats';
 
@@ -21,12 +21,12 @@ export function clientsRouter(sequelize: Sequelize, mail: MailContext) {
   const router = Router();
   router.use(requireRole('coach'));
   router.get('/', async (req, res) => {
-    res.json({ clients: await listClients(req.user!), invitations: await listInvitations(req.user!) });
+    res.json({ clients: await listClients(req.user!), invitations: await listInvitations(req.user!) } satisfies ClientsResponse);
   });
   router.post('/invitations', async (req, res) => {
     const { email } = parse(invitationSchema, req.body);
     const { invitation, renewed } = await inviteClient(sequelize, req.user!, email, mail);
-    const sent: InvitationSent = { id: invitation.id, email: invitation.email, status: 'pending', expiresAt: invitation.expiresAt.toISOString(), renewed };
+    const sent: SentInvitation = { id: invitation.id, email: invitation.email, status: 'pending', expiresAt: invitation.expiresAt.toISOString(), renewed };
     res.status(renewed ? 200 : 201).json(sent);
   });
   router.delete('/invitations/:id', async (req, res) => {
@@ -42,7 +42,7 @@ export function clientsRouter(sequelize: Sequelize, mail: MailContext) {
   router.put('/:id/targets', async (req, res) => {
     const { id } = parse(idParam, req.params);
     const targets = parse(clientTargetsSchema, req.body);
-    res.json({ clientId: id, targets: await setClientTargets(req.user!, id, targets) });
+    res.json({ clientId: id, targets: await setClientTargets(req.user!, id, targets) } satisfies SavedClientTargets);
   });
   router.get('/:id/body-stats', async (req, res) => {
     const { id } = parse(idParam, req.params);
@@ -55,7 +55,7 @@ export function clientsRouter(sequelize: Sequelize, mail: MailContext) {
   });
   router.get('/:id/versions', async (req, res) => {
     const { id } = parse(idParam, req.params);
-    res.json({ versions: await clientVersions(req.user!, id) });
+    res.json({ versions: await clientVersions(req.user!, id) } satisfies ClientVersionsResponse);
   });
   return router;
 }

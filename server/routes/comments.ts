@@ -5,6 +5,7 @@ import { parse } from '../middleware/validate';
 import { requireAuth } from '../middleware/auth';
 import { addComment, listComments, markCommentsRead, unreadComments, type CommentMailContext } from '../services/comments';
 import { findReadableRecipe, getVersion } from '../services/recipes';
+import type { CommentsResponse } from '../../shared/schemas/comments';
 
 /** Comments live on a version: the owner and the owner's coach read and write them. */
 export function commentsRouter(mail: CommentMailContext) {
@@ -14,7 +15,7 @@ export function commentsRouter(mail: CommentMailContext) {
   router.get('/', async (req, res) => {
     const { id, number } = parse(params, req.params);
     const version = await getVersion(await findReadableRecipe(req.user!, id), number);
-    res.json({ comments: await listComments(version.id) });
+    res.json({ comments: await listComments(version.id) } satisfies CommentsResponse);
   });
   router.post('/', async (req, res) => {
     const { id, number } = parse(params, req.params);
@@ -22,7 +23,7 @@ export function commentsRouter(mail: CommentMailContext) {
     const recipe = await findReadableRecipe(req.user!, id);
     const version = await getVersion(recipe, number);
     await addComment(recipe, version, req.user!, body, mail);
-    res.status(201).json({ comments: await listComments(version.id) });
+    res.status(201).json({ comments: await listComments(version.id) } satisfies CommentsResponse);
   });
   // Explicit, not a side effect of GET: a prefetch or the coach reading must not clear the owner's badge.
   router.post('/read', async (req, res) => {

@@ -1,9 +1,9 @@
 import { Op, QueryTypes } from 'sequelize';
 import { User, VersionComment, type Recipe, type RecipeVersion } from '../models';
 import { mailTemplates, type Mailer } from '../mail';
-import type { UnreadComments } from '../../shared/schemas/unread-comments';
+import type { UnreadComments, VersionComment as VersionCommentView } from '../../shared/schemas/comments';
 
-export async function listComments(versionId: number) {
+export async function listComments(versionId: number): Promise<VersionCommentView[]> {
   const comments = await VersionComment.findAll({ where: { recipeVersionId: versionId }, order: [['createdAt', 'ASC']] });
   const authors = await User.findAll({ where: { id: [...new Set(comments.map((c) => c.authorId))] } });
   const names = new Map(authors.map((a) => [a.id, { name: a.displayName, role: a.role }]));

@@ -82,9 +82,12 @@ export const createVersionSchema = z.object({
   parentNumber: z.number().int().min(1).optional(),
 });
 
+export const RECIPE_SORTS = ['updated', 'title', 'kcal', 'protein'] as const;
+export type RecipeSort = (typeof RECIPE_SORTS)[number];
+
 export const recipeListQuerySchema = z.object({
   q: z.string().max(200).optional(),
-  sort: z.enum(['updated', 'title', 'kcal', 'protein'], { message: 'sort is one of updated, title, kcal, protein.' }).default('updated'),
+  sort: z.enum(RECIPE_SORTS, { message: 'sort is one of updated, title, kcal, protein.' }).default('updated'),
 });
 
 export const idParam = z.object({ id: z.coerce.number({ message: 'id must be a number.' }).int().positive({ message: 'id must be positive.' }) });

@@ -1,6 +1,6 @@
 import { ALLERGEN_LABELS, type Allergen } from '../../../shared/allergens';
 import type { VersionKind } from '../../../shared/schemas/recipes';
-import type { PrepFood } from './api/get-prep';
+import type { PrepFood } from '../../../shared/schemas/prep';
 
 export const MIN_PORTIONS = 1;
 export const MAX_PORTIONS = 100;

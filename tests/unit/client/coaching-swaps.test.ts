@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { ROLES } from '../../../shared/food';
-import type { Swap } from '../../../src/features/coach/api/swaps';
-import { emptyLabelFood, labelFoodInput, readNumber } from '../../../src/features/coach/label-food-form';
-import { draftFromSwap, emptySwapDraft, swapDraftErrorsFrom, swapRequestFromDraft } from '../../../src/features/coach/swap-draft';
-import { filterSwaps, hasSwapFilters, NO_SWAP_FILTERS, rolesInUse } from '../../../src/features/coach/swap-filters';
-import { parseTags, swapFromWords, volumeRatioWords } from '../../../src/features/coach/swap-words';
+import type { Swap } from '../../../shared/schemas/swaps';
+import { emptyLabelFood, labelFoodInput, readNumber } from '../../../src/features/swaps/label-food-form';
+import { draftFromSwap, emptySwapDraft, swapDraftErrorsFrom, swapRequestFromDraft } from '../../../src/features/swaps/swap-draft';
+import { filterSwaps, hasSwapFilters, NO_SWAP_FILTERS, rolesInUse } from '../../../src/features/swaps/swap-filters';
+import { parseTags, swapFromWords, volumeRatioWords } from '../../../src/lib/swap-words';
 
 const label = (role: string) => (role === 'melting-cheese' ? 'Melting cheese' : role);
 

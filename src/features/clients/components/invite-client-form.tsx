@@ -3,13 +3,13 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { errorMessage, isApiError } from '../../../lib/api-client';
-import { useInviteClient, type InvitationSent } from '../api/clients';
+import { useInviteClient, type SentInvitation } from '../api/clients';
 
 // The shape the server accepts is checked there; this catches the obvious slips before sending.
 const LOOKS_LIKE_EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 
 /** Sends an invitation e-mail with a link the client opens to link with the coach. */
-export function InviteClientForm({ onInvited }: { onInvited: (sent: InvitationSent) => void }) {
+export function InviteClientForm({ onInvited }: { onInvited: (sent: SentInvitation) => void }) {
   const invite = useInviteClient();
   const [email, setEmail] = useState('');
   const [error, setError] = useState<string | undefined>();

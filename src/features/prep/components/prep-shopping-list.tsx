@@ -3,7 +3,7 @@ import { Button } from '../../../components/ui/button';
 import { CheckList, type CheckListItem } from '../../../components/ui/check-list';
 import { CopyTextButton } from '../../../components/ui/copy-text-button';
 import { formatGrams } from '../../../lib/format';
-import type { PrepShoppingItem } from '../api/get-prep';
+import type { PrepShoppingItem } from '../../../../shared/schemas/prep';
 import { foodKey, portionsWord } from '../prep-words';
 
 export interface PrepShoppingListProps {

@@ -1,7 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRef, useState } from 'react';
-import type { RecipeDetail } from '../../../../shared/schemas/recipes';
-import { uploadFile } from '../../../lib/upload-file';
+import { uploadPhoto } from '../../../lib/api/recipes';
 import { storeRecipe } from './recipe-cache';
 
 export const PHOTO_MAX_BYTES = 5 * 1024 * 1024;
@@ -12,13 +11,6 @@ export function photoFileProblem(file: File): string | null {
   if (!(PHOTO_TYPES as readonly string[]).includes(file.type)) return 'Choose a JPEG, PNG or WebP photo.';
   if (file.size > PHOTO_MAX_BYTES) return 'That photo is larger than 5 MB.';
   return null;
-}
-
-export function uploadPhoto(recipeId: number, file: File, onProgress?: (fraction: number) => void, signal?: AbortSignal) {
-  return uploadFile<RecipeDetail>(`/api/recipes/${recipeId}/photo`, file, {
-    onProgress: (p) => onProgress?.(p.fraction),
-    signal,
-  });
 }
 
 /** Uploads a recipe's photo; `progress` runs 0..1 while it goes out, null when nothing is uploading. */

@@ -3,7 +3,7 @@ import { Button } from '../../../components/ui/button';
 import { CheckList, type CheckListItem } from '../../../components/ui/check-list';
 import { CopyTextButton } from '../../../components/ui/copy-text-button';
 import { formatGrams } from '../../../lib/format';
-import type { ShoppingFood, ShoppingListResult } from '../api/build-shopping-list';
+import type { PrepFood as ShoppingFood, ShoppingListResponse as ShoppingListResult } from '../../../../shared/schemas/prep';
 import { shoppingChecksKey } from '../shopping-picks';
 import { portionsWord } from '../shopping-words';
 
