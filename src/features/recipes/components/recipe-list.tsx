@@ -3,6 +3,7 @@ import type { RecipeSummary } from '../../../../shared/schemas/recipes';
 import { formatKcal, formatMacroG } from '../../../lib/format';
 import { formatDateTime, formatWhen } from '../format-when';
 import { recipePath } from '../recipe-links';
+import { CountBadge, unreadCommentsLabel } from '../../../components/ui/count-badge';
 
 function perServing(recipe: RecipeSummary) {
   const figures = recipe.latest?.perServing;
@@ -25,7 +26,12 @@ function Updated({ iso }: { iso: string }) {
 }
 
 /** Every recipe in the book: a table from tablets up, a list of cards on a phone. */
-export function RecipeList({ recipes, caption }: { recipes: RecipeSummary[]; caption: string }) {
+function UnreadBadge({ count }: { count: number }) {
+  return <CountBadge count={count} label={unreadCommentsLabel(count)} className="ml-2 align-middle" />;
+}
+
+/** `unread`: unread comments from the coach by recipe id, shown beside the title. */
+export function RecipeList({ recipes, caption, unread }: { recipes: RecipeSummary[]; caption: string; unread?: ReadonlyMap<number, number> }) {
   return (
     <>
       <div className="hidden overflow-x-auto rounded-card border border-line bg-surface sm:block">
@@ -62,6 +68,7 @@ export function RecipeList({ recipes, caption }: { recipes: RecipeSummary[]; cap
                     <Link to={recipePath(recipe.id)} className="rounded-field text-accent-strong underline-offset-2 hover:underline">
                       {recipe.title}
                     </Link>
+                    <UnreadBadge count={unread?.get(recipe.id) ?? 0} />
                   </th>
                   <td className="px-4 py-3 text-right tabular-nums">{recipe.servings}</td>
                   <td className="px-4 py-3 text-right font-bold tabular-nums">{figures.kcal}</td>
@@ -83,7 +90,10 @@ export function RecipeList({ recipes, caption }: { recipes: RecipeSummary[]; cap
           return (
             <li key={recipe.id}>
               <Link to={recipePath(recipe.id)} className="flex flex-col gap-2 rounded-card border border-line bg-surface p-4 shadow-card active:bg-oat-100">
-                <span className="text-lg font-extrabold text-accent-strong">{recipe.title}</span>
+                <span className="text-lg font-extrabold text-accent-strong">
+                  {recipe.title}
+                  <UnreadBadge count={unread?.get(recipe.id) ?? 0} />
+                </span>
                 <span className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
                   <span>
                     <strong className="tabular-nums">{figures.kcal}</strong> · <strong className="tabular-nums">{figures.protein}</strong> protein
