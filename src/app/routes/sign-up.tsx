@@ -30,7 +30,11 @@ export function SignUpPage() {
   const invitation = useInvitation(token);
   const bound = token && invitation.isSuccess ? { token, email: invitation.data.email, coachName: invitation.data.coachName } : undefined;
 
-  if (auth.status === 'signed-in' && auth.user) return <Navigate to={safeNextPath(requested, homeFor(auth.user))} replace />;
+  if (auth.status === 'signed-in' && auth.user) {
+    // signed up from an invitation: the account is linked already, so the coach's page, not the link again
+    const to = token && auth.user.coachId !== null ? '/coach' : safeNextPath(requested, homeFor(auth.user));
+    return <Navigate to={to} replace />;
+  }
 
   const signInLink = requested ? `/sign-in?next=${encodeURIComponent(safeNextPath(requested))}` : '/sign-in';
   return (
@@ -55,10 +59,10 @@ export function SignUpPage() {
               if (bound && user.coachId !== null) {
                 toast.show(`Welcome to Hearthswap, ${user.displayName}. You're linked with ${bound.coachName}.`, 'success');
                 navigate('/coach', { replace: true });
-                return;
+              } else {
+                toast.show(`Welcome to Hearthswap, ${user.displayName}.`, 'success');
+                navigate(safeNextPath(requested, homeFor(user)), { replace: true });
               }
-              toast.show(`Welcome to Hearthswap, ${user.displayName}.`, 'success');
-              navigate(safeNextPath(requested, homeFor(user)), { replace: true });
             }}
           />
         )}
