@@ -74,3 +74,24 @@ export async function signUp(app: Express, role: 'cook' | 'coach' = 'cook') {
     .expect(201);
   return { agent, csrf, email, password, user: res.body };
 }
+
+/** The invitation token in a mail's text (the link /invitations/<token>). */
+export function invitationTokenFrom(text: string): string {
+  const m = text.match(/\/invitations\/([A-Za-z0-9_-]+)/);
+  if (!m) throw new Error(`no invitation link in: ${text}`);
+  return m[1];
+}
+
+/** A coach and a cook linked to them through an invitation the cook accepted from its e-mail. */
+export async function linkedCoachAndClient(t: TestApp) {
+  const coach = await signUp(t.app, 'coach');
+  const client = await signUp(t.app, 'cook');
+  await coach.agent.post('/api/clients/invitations').set('X-CSRF-Token', coach.csrf).send({ email: client.email }).expect(201);
+  const mail = t
+    .outbox()
+    .filter((m) => m.to.includes(client.email))
+    .at(-1)!;
+  const token = invitationTokenFrom(mail.text);
+  await client.agent.post(`/api/invitations/${token}/accept`).set('X-CSRF-Token', client.csrf).expect(200);
+  return { coach, client, token };
+}

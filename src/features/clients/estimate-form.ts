@@ -1,7 +1,8 @@
 import { ACTIVITY_LEVELS, GOALS, SEXES, TARGET_LIMITS, type EstimateTargetsInput } from '../../../shared/schemas/targets';
 import type { BodyStats } from '../../../shared/schemas/body-stats';
-import { CM_PER_INCH, cmFromFeetInches, feetInchesFromCm, INCHES_PER_FOOT, kgFromPounds, KG_PER_POUND, poundsFromKg, type BodyUnits } from './body-units';
-import { numberText, readNumber } from './read-number';
+import { CM_PER_INCH, INCHES_PER_FOOT, KG_PER_POUND } from '../../../shared/units';
+import { cmFromFeetInches, feetInchesFromCm, kgFromPounds, poundsFromKg, type BodyUnits } from './body-units';
+import { numberText, readNumber } from '../../lib/read-number';
 
 /** The estimator as typed. Height and weight are read in the units chosen. */
 export interface EstimateValues {

@@ -3,6 +3,7 @@ import type { LineInput } from '../../../shared/schemas/analyze';
 import type { RewriteRequest, TargetsInput } from '../../../shared/schemas/rewrite';
 import { orderedChanges } from './rewrite-words';
 import type { RewriteAnswer } from './rewrite-types';
+import { countOf } from '../../lib/words';
 
 export type WrittenLine = { input: string; foodId?: number; grams?: number };
 export type RewrittenLine = { food: { id: number; name: string }; grams: number; input?: string } | { input: string };
@@ -61,7 +62,7 @@ export function rewriteNote(answer: RewriteAnswer): string {
   const changes = orderedChanges(answer.changes);
   const swaps = changes.filter((c) => c.swapped).map((c) => `${c.from.name} → ${c.partial ? 'part ' : ''}${c.to.name}`);
   const amounts = changes.filter((c) => !c.swapped).length;
-  const parts = [swaps.length > 0 ? swaps.join('; ') : 'No swaps', amounts > 0 ? `${amounts} amount${amounts === 1 ? '' : 's'} adjusted` : ''].filter(Boolean);
+  const parts = [swaps.length > 0 ? swaps.join('; ') : 'No swaps', amounts > 0 ? `${countOf(amounts, 'amount')} adjusted` : ''].filter(Boolean);
   const note = `Lighter rewrite: ${parts.join('. ')}.`;
   return note.length > NOTE_MAX ? `${note.slice(0, NOTE_MAX - 1)}…` : note;
 }

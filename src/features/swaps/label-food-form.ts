@@ -2,8 +2,6 @@ import { ROLES, type Role } from '../../../shared/food';
 import type { CustomFoodInput } from '../../../shared/schemas/coaching';
 import { readNumber } from '../../lib/read-number';
 
-export { readNumber };
-
 /** The label form as typed: every number is text until it is checked. */
 export interface LabelFoodValues {
   name: string;

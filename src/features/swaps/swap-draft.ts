@@ -1,6 +1,7 @@
 import { ROLES } from '../../../shared/food';
 import type { FieldErrors } from '../../lib/api-client';
 import type { Swap, SwapRequest } from '../../../shared/schemas/swaps';
+import { readNumber } from '../../lib/read-number';
 import { parseTags } from '../../lib/swap-words';
 
 /** A food chosen in a picker; catalogue search hits and swap foods both fit. */
@@ -64,8 +65,7 @@ export function swapRequestFromDraft(draft: SwapDraft, options: { isNew: boolean
     errors.toFood = 'Choose a different food from the one it replaces.';
   }
 
-  const ratioText = draft.volumeRatio.trim().replace(',', '.');
-  const ratio = ratioText === '' ? 1 : Number(ratioText);
+  const ratio = readNumber(draft.volumeRatio) ?? 1;
   if (!Number.isFinite(ratio) || ratio <= 0) errors.volumeRatio = 'Enter a number above 0, such as 1 or 1.25.';
   else if (ratio > MAX_VOLUME_RATIO) errors.volumeRatio = `Use at most ${MAX_VOLUME_RATIO} times the volume.`;
 

@@ -1,5 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { PublicUser, UserRole } from '../../../shared/schemas/auth';
+import type { OutboxResponse } from '../../../shared/schemas/outbox';
 import { api } from '../api-client';
 import { queryKeys } from '../query-keys';
 
@@ -16,18 +17,8 @@ export function setRole(id: number, role: UserRole): Promise<PublicUser> {
   return api.patch<PublicUser>(`/api/admin/users/${id}`, { role });
 }
 
-export interface OutboxMessage {
-  id: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html?: string;
-  receivedAt: string;
-}
-
-export function fetchOutbox(signal?: AbortSignal): Promise<{ messages: OutboxMessage[] }> {
-  return api.get<{ messages: OutboxMessage[] }>('/api/dev/outbox', { signal });
+export function fetchOutbox(signal?: AbortSignal): Promise<OutboxResponse> {
+  return api.get<OutboxResponse>('/api/dev/outbox', { signal });
 }
 
 /** The development outbox. It only exists outside production; there the server answers 404. */

@@ -2,6 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Button } from '../../../components/ui/button';
+import { EmailField } from '../../../components/ui/email-field';
 import { ChoiceCards, TextField } from '../../../components/ui/field';
 import { PasswordField } from '../../../components/ui/password-field';
 import { applyServerFieldErrors } from '../../../lib/form-errors';
@@ -76,9 +77,8 @@ export function SignUpForm({ onSignedUp, invitation }: { onSignedUp: (user: User
         error={errors.displayName?.message}
         {...register('displayName')}
       />
-      <TextField
+      <EmailField
         label="E-mail"
-        type="email"
         readOnly={invitation !== undefined}
         className={invitation ? 'bg-oat-100' : undefined}
         hint={
@@ -86,10 +86,6 @@ export function SignUpForm({ onSignedUp, invitation }: { onSignedUp: (user: User
             ? `The invitation was sent to this address, so your account uses it. To use another address, ask ${invitation.coachName} to invite that one.`
             : undefined
         }
-        autoComplete="email"
-        inputMode="email"
-        autoCapitalize="none"
-        spellCheck={false}
         error={errors.email?.message}
         {...register('email')}
       />

@@ -6,7 +6,7 @@ import { useToast } from '../../../components/ui/toast';
 import { errorMessage } from '../../../lib/api-client';
 import { useInviteClient, useWithdrawInvitation, type Invitation, type InvitationStatus } from '../api/clients';
 import { invitationSentWords } from '../invitation-words';
-import { formatDay } from '../when';
+import { formatDay } from '../../../lib/dates';
 
 const STATUS: Record<InvitationStatus, { label: string; tone: BadgeTone }> = {
   pending: { label: 'Waiting', tone: 'honey' },

@@ -9,7 +9,7 @@ import { errorMessage, isApiError } from '../../../lib/api-client';
 import { useBodyStats, useSaveBodyStats } from '../api/body-stats';
 import { useEstimateTargets, type TargetEstimate } from '../api/estimate-targets';
 import { LoadingState } from '../../../components/ui/spinner';
-import { formatDay } from '../when';
+import { formatDay } from '../../../lib/dates';
 import type { BodyUnits } from '../body-units';
 import { emptyEstimate, estimateErrorsFrom, estimateInput, estimateValuesFrom, type EstimateErrors, type EstimateValues } from '../estimate-form';
 import { EstimateSummary } from './estimate-summary';

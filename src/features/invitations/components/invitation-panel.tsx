@@ -1,3 +1,4 @@
+import { formatLongDay } from '../../../lib/dates';
 import { Link } from 'react-router';
 import { Alert } from '../../../components/ui/alert';
 import { Button, buttonClasses } from '../../../components/ui/button';
@@ -7,8 +8,6 @@ import { LoadingState } from '../../../components/ui/spinner';
 import { errorMessage, isApiError } from '../../../lib/api-client';
 import type { User } from '../../../lib/user';
 import { useAcceptInvitation, useInvitation } from '../api/invitation';
-
-const dateFormat = new Intl.DateTimeFormat('en-US', { month: 'long', day: 'numeric', year: 'numeric' });
 
 const CLOSED_TITLES: Record<string, string> = {
   invitation_used: 'This invitation has been used',
@@ -56,7 +55,7 @@ export function InvitationPanel({ token, user, signInHref, signUpHref, onAccepte
   }
 
   const { coachName, email, expiresAt } = invitation.data;
-  const expires = dateFormat.format(new Date(expiresAt));
+  const expires = formatLongDay(expiresAt);
   const otherAddress = user && user.email.toLowerCase() !== email.toLowerCase();
 
   return (

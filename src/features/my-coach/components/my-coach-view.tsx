@@ -12,6 +12,7 @@ import type { RoleLabel } from '../../../lib/swap-words';
 import { CoachTargets } from './coach-targets';
 import { NoCoachExplainer } from './no-coach-explainer';
 import { PublishedSwapList } from './published-swap-list';
+import { countOf } from '../../../lib/words';
 
 /** The signed-in cook's side of coaching: who, what they set, what they publish, and the way out. */
 export function MyCoachView({ email, roleLabel }: { email: string; roleLabel: RoleLabel }) {
@@ -64,7 +65,7 @@ export function MyCoachView({ email, roleLabel }: { email: string; roleLabel: Ro
             Approved swaps
           </h2>
           <p className="text-ink-soft">
-            {swaps.length > 0 ? `${swaps.length} swap${swaps.length === 1 ? '' : 's'} ${coach.displayName} recommends, with how to cook them.` : null}
+            {swaps.length > 0 ? `${countOf(swaps.length, 'swap')} ${coach.displayName} recommends, with how to cook them.` : null}
           </p>
         </div>
         {swaps.length > 0 ? (

@@ -1,5 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
-import { outboxQuery, type OutboxMessage } from '../../../lib/api/admin';
+import type { OutboxMessage } from '../../../../shared/schemas/outbox';
+import { outboxQuery } from '../../../lib/api/admin';
 
 export type { OutboxMessage };
 

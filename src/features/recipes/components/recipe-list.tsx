@@ -1,9 +1,10 @@
 import { Link } from 'react-router';
 import type { RecipeSummary } from '../../../../shared/schemas/recipes';
 import { formatKcal, formatMacroG } from '../../../lib/format';
-import { formatDateTime, formatWhen } from '../format-when';
+import { formatDateTime, formatWhen } from '../../../lib/dates';
 import { recipePath } from '../recipe-links';
 import { CountBadge, unreadCommentsLabel } from '../../../components/ui/count-badge';
+import { countOf } from '../../../lib/words';
 
 function perServing(recipe: RecipeSummary) {
   const figures = recipe.latest?.perServing;
@@ -14,7 +15,7 @@ function perServing(recipe: RecipeSummary) {
 }
 
 function versionsText(count: number): string {
-  return `${count} version${count === 1 ? '' : 's'}`;
+  return `${countOf(count, 'version')}`;
 }
 
 function Updated({ iso }: { iso: string }) {

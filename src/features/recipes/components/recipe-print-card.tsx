@@ -3,7 +3,7 @@ import { incompleteLineNumbers } from '../../../../shared/line-status';
 import { IncompleteTotalsAlert } from '../../../components/ui/incomplete-totals-alert';
 import { NutrientTable } from '../../../components/ui/nutrient-table';
 import { formatGrams } from '../../../lib/format';
-import { formatDateTime } from '../format-when';
+import { formatDateTime } from '../../../lib/dates';
 import { versionKindLabel, versionNote, writtenLine } from '../version-words';
 
 /** Method text as steps: one step a line, any "1." or "Step 1:" the cook typed left off. */

@@ -6,7 +6,7 @@ import { NUTRIENT_ROWS } from '../../../components/ui/nutrient-table';
 import { cx } from '../../../lib/cx';
 import { formatGrams, formatKcal, formatMacroG, formatNumber } from '../../../lib/format';
 import { compareLines, rewrittenInPlace, type LineChange, type LineChangeKind } from '../compare-lines';
-import { formatWhen } from '../format-when';
+import { formatWhen } from '../../../lib/dates';
 import { nutrientChange, type DifferenceTone as ChangeTone, type Difference as NutrientChange } from '../../../lib/nutrient-difference';
 import { servingVolumeMl } from '../../../../shared/shown-figures';
 import { versionKindLabel, versionNote } from '../version-words';

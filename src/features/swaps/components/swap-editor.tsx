@@ -6,6 +6,7 @@ import { Card } from '../../../components/ui/card';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 import { SelectField } from '../../../components/ui/select-field';
 import { errorMessage, isApiError } from '../../../lib/api-client';
+import { readRequiredNumber } from '../../../lib/read-number';
 import type { Swap } from '../../../../shared/schemas/swaps';
 import { useCreateSwap, useUpdateSwap } from '../api/swaps';
 import type { RenderFoodSearch } from '../food-search-slot';
@@ -71,7 +72,7 @@ export function SwapEditor({ swap, initialToFood = null, renderFoodSearch, roleL
     else update.mutate({ id: swap.id, input: result.request }, handlers);
   }
 
-  const ratio = Number(draft.volumeRatio.replace(',', '.'));
+  const ratio = readRequiredNumber(draft.volumeRatio);
   const errorCount = Object.values(errors).filter(Boolean).length;
 
   return (

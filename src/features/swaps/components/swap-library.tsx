@@ -17,6 +17,7 @@ import { LabelFoodDialog } from './label-food-dialog';
 import { SwapEditor } from './swap-editor';
 import { SwapFilterBar } from './swap-filter-bar';
 import { SwapTable } from './swap-table';
+import { countOf } from '../../../lib/words';
 
 type Editing = { mode: 'new'; toFood: PickedFood | null; round: number } | { mode: 'edit'; swap: Swap };
 
@@ -82,8 +83,7 @@ export function SwapLibrary({ renderFoodSearch, roleLabel }: SwapLibraryProps) {
     <div className="flex flex-col gap-6">
       <div className="flex flex-wrap items-center justify-between gap-3">
         <p className="text-ink-soft" aria-live="polite">
-          {swaps.isSuccess &&
-            (all.length === 0 ? 'Nothing in the library yet.' : `${all.length} swap${all.length === 1 ? '' : 's'}, ${published} published to your clients.`)}
+          {swaps.isSuccess && (all.length === 0 ? 'Nothing in the library yet.' : `${countOf(all.length, 'swap')}, ${published} published to your clients.`)}
         </p>
         <div className="flex flex-wrap gap-2">
           <Button variant="secondary" onClick={() => setLabelOpen(true)}>
