@@ -72,31 +72,11 @@ describe('estimateInput', () => {
 
 describe('saved body stats back in the estimator', () => {
   it('gives back what the coach typed in US measures, and the same stats once read again', () => {
-    const typed = {
-      ...emptyEstimate('us'),
-      sex: 'male',
-      ageYears: '52',
-      heightFeet: '5',
-      heightInches: '10.5',
-      weightLb: '187.5',
-      activity: 'light',
-      goal: 'lose',
-      mealsPerDay: '4',
-    };
-    const first = estimateInput(typed);
+    const us = { sex: 'male', ageYears: '52', heightFeet: '5', heightInches: '10.5', weightLb: '187.5', activity: 'light', goal: 'lose', mealsPerDay: '4' };
+    const first = estimateInput({ ...emptyEstimate('us'), ...us });
     if (!first.ok) throw new Error('the typed stats should be valid');
     const shown = estimateValuesFrom({ ...first.input, units: 'us' });
-    expect(shown).toMatchObject({
-      units: 'us',
-      sex: 'male',
-      ageYears: '52',
-      heightFeet: '5',
-      heightInches: '10.5',
-      weightLb: '187.5',
-      activity: 'light',
-      goal: 'lose',
-      mealsPerDay: '4',
-    });
+    expect(shown).toMatchObject({ units: 'us', ...us });
     // metric fields filled too, so switching units keeps the stats (1 in = 2.54 cm, NIST Handbook 44)
     expect(shown.heightCm).toBe('179.1');
     const again = estimateInput(shown);
