@@ -169,6 +169,8 @@ export function RecipeBookPage() {
         onClose={() => setImporting(false)}
         onImported={(recipe) => {
           setImporting(false);
+          const count = recipe.importedCount ?? 1;
+          if (count > 1) return toast.show(`${count} recipes are in the book, each with every version the file kept.`, 'success');
           toast.show(`“${recipe.title}” is in the book, with its ingredients as version 1.`, 'success');
           navigate(recipePath(recipe.id));
         }}
