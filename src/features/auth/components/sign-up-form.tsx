@@ -80,7 +80,6 @@ export function SignUpForm({ onSignedUp, invitation }: { onSignedUp: (user: User
       <EmailField
         label="E-mail"
         readOnly={invitation !== undefined}
-        className={invitation ? 'bg-oat-100' : undefined}
         hint={
           invitation
             ? `The invitation was sent to this address, so your account uses it. To use another address, ask ${invitation.coachName} to invite that one.`
