@@ -13,7 +13,6 @@ import {
   photoQuerySchema,
   versionParam,
 } from '../../shared/schemas/recipes';
-import { MAX_LINES } from '../../shared/schemas/analyze';
 import { parse } from '../middleware/validate';
 import { requireAuth } from '../middleware/auth';
 import { getFoodEngine } from '../services/food-engine';
@@ -25,9 +24,7 @@ import {
   findReadableRecipe,
   getVersion,
   listRecipes,
-  importRecipeWithVersions,
   listVersions,
-  ownRecipeTitles,
   ownRecipesWithVersions,
   recipeDetail,
   restoreVersion,
@@ -36,36 +33,15 @@ import {
   versionDetail,
   versionRows,
 } from '../services/recipes';
-import { importedTitle, parseRecipeFile, type ImportedRecipe } from '../services/recipe-import';
-import { assertSafeText } from '../middleware/text-safety';
+import { importRecipeFile } from '../services/recipe-file-import';
 import type { RateLimits } from '../middleware/rate-limits';
 import { recipesToJsonLd, toJsonLd } from '../services/recipe-export';
 import { MAX_PHOTO_BYTES } from '../services/photo-storage';
 import { readRecipePhoto, removeRecipePhoto, replaceRecipePhoto } from '../services/recipe-photo';
-import { HttpError, badRequest } from '../lib/http-error';
+import { badRequest } from '../lib/http-error';
 import { singleFile } from '../middleware/upload';
 
 const MAX_IMPORT_BYTES = 1024 * 1024;
-
-/** An imported file passes the same schema and limits as a typed recipe; failures name the field in the file. */
-function importedRecipeInput(imported: ImportedRecipe) {
-  const input = {
-    title: imported.title,
-    servings: imported.servings,
-    notes: imported.notes,
-    method: imported.method,
-    // One line past the limit is enough for the schema to refuse; no need to build 100,000 objects.
-    lines: imported.ingredients.slice(0, MAX_LINES + 1).map((line) => ({ input: line })),
-  };
-  try {
-    assertSafeText(input);
-    return parse(createRecipeSchema, input);
-  } catch (error) {
-    if (error instanceof HttpError)
-      throw new HttpError(400, error.code, `file: the recipe in this file cannot be saved as it is — ${error.message}`, error.details);
-    throw error;
-  }
-}
 
 export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: RateLimits) {
   const router = Router();
@@ -85,32 +61,10 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
 
   router.post('/import', limits.recipeImports, singleFile(MAX_IMPORT_BYTES, 'recipe file'), async (req, res) => {
     if (!req.file) throw badRequest('file: attach the recipe in the form field "file".', { fieldErrors: { file: ['Required.'] } });
-    const files = parseRecipeFile(req.file.buffer);
-    // Every recipe is checked before any is saved, so a bad one in a book saves nothing.
-    const prepared = files.map((imported) => {
-      if (imported.versions) assertSafeText(imported.versions, 'file');
-      return { imported, input: importedRecipeInput(imported) };
-    });
-    const taken = new Set(await ownRecipeTitles(req.user!));
-    const saved = [];
-    for (const { imported, input } of prepared) {
-      const title = importedTitle(imported.title, taken);
-      taken.add(title.trim().toLowerCase());
-      saved.push(
-        imported.versions
-          ? await importRecipeWithVersions(
-              sequelize,
-              await engine(),
-              req.user!,
-              { title, servings: input.servings, notes: input.notes ?? '', method: input.method ?? '' },
-              imported.versions,
-            )
-          : await createRecipe(sequelize, await engine(), req.user!, { ...input, title }),
-      );
-    }
+    const { saved, format } = await importRecipeFile(sequelize, await engine(), req.user!, req.file.buffer);
     res.status(201).json({
       ...(await recipeDetail(saved[0])),
-      importedFrom: files[0].format,
+      importedFrom: format,
       importedCount: saved.length,
       alsoImported: saved.slice(1).map((r) => ({ id: r.id, title: r.title })),
     });
