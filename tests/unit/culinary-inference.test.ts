@@ -204,8 +204,9 @@ describe('rule matching by food class and dish context', () => {
     expect(fatIn('simmered-dish', 'griddle-saute')).toEqual([0.5, 1]);
     const romano = { name: 'Cheese, romano', foodGroup: '01', sourceId: '01038', roles: ['hard-cheese'], per100g: { fatG: 27 } };
     expect(
-      keepScaleOf(rulesForLine(rules, { food: romano, phrase: 'pecorino romano cheese', role: 'hard-cheese', dishType: 'stovetop-sauce', context: 'boiled-sauce' }))
-        ?.range,
+      keepScaleOf(
+        rulesForLine(rules, { food: romano, phrase: 'pecorino romano cheese', role: 'hard-cheese', dishType: 'stovetop-sauce', context: 'boiled-sauce' }),
+      )?.range,
     ).toEqual([0.67, 1]);
     expect(rule('cured-meat-use-less').keepScale).toEqual([0.5, 1]);
     expect(bandFor(rule('all-purpose-flour-to-whole-wheat'), { role: 'structure', mixedDish: false })).toEqual([0.9, 1.1]);
