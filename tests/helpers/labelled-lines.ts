@@ -41,16 +41,37 @@ export function gramsAcceptable(label: HandLabelledLine, answer: ScoredAnswer): 
   return Math.abs(answer.grams - label.grams) <= GRAMS_TOLERANCE * label.grams;
 }
 
+/**
+ * Why a line failed, one kind per line: no food where SR28 has one, a wrong food, 0 g where a
+ * weight was labelled, a confident food where SR28 has none fitting, or grams more than 15 % off (food right or wrong).
+ */
+export type FailureKind = 'no food' | 'food wrong' | 'matched, SR28 has none' | '0 g' | 'grams off';
+export const FAILURE_KINDS: readonly FailureKind[] = ['no food', 'food wrong', 'matched, SR28 has none', '0 g', 'grams off'];
+
 export interface HalfScore {
   lines: number;
   food: number;
   grams: number;
   both: number;
-  failures: { label: HandLabelledLine; answer: ScoredAnswer; food: boolean; grams: boolean }[];
+  failures: { label: HandLabelledLine; answer: ScoredAnswer; food: boolean; grams: boolean; kind: FailureKind }[];
+  /** failing lines per kind */
+  kinds: Record<FailureKind, number>;
+}
+
+export function failureKind(label: HandLabelledLine, answer: ScoredAnswer, food: boolean): FailureKind {
+  if (!food) return answer.food === null ? 'no food' : label.foods.length === 0 ? 'matched, SR28 has none' : 'food wrong';
+  return answer.grams <= 0 ? '0 g' : 'grams off';
 }
 
 export function scoreHalf(labels: HandLabelledLine[], answer: (input: string) => ScoredAnswer): HalfScore {
-  const score: HalfScore = { lines: labels.length, food: 0, grams: 0, both: 0, failures: [] };
+  const score: HalfScore = {
+    lines: labels.length,
+    food: 0,
+    grams: 0,
+    both: 0,
+    failures: [],
+    kinds: { 'no food': 0, 'food wrong': 0, 'matched, SR28 has none': 0, '0 g': 0, 'grams off': 0 },
+  };
   for (const label of labels) {
     const a = answer(label.input);
     const food = foodAcceptable(label, a);
@@ -58,7 +79,11 @@ export function scoreHalf(labels: HandLabelledLine[], answer: (input: string) =>
     if (food) score.food++;
     if (grams) score.grams++;
     if (food && grams) score.both++;
-    else score.failures.push({ label, answer: a, food, grams });
+    else {
+      const kind = failureKind(label, a, food);
+      score.kinds[kind]++;
+      score.failures.push({ label, answer: a, food, grams, kind });
+    }
   }
   return score;
 }

@@ -189,6 +189,89 @@ describe("airy foods weigh by their own or a near food's cup, not a role default
   });
 });
 
+describe('pieces, spices and words a cook writes (classes found in the unlabelled reference lines)', () => {
+  it('ginger by the inch or knob, cinnamon sticks, cardamom pods weigh from sourced curated rows, never 0 g', () => {
+    // *common practice* rows of data/curated-portions.json, each built on a USDA SR28 portion
+    expect(line('1 inch fresh ginger, peeled').food?.sourceId).toBe('11216');
+    expect(line('1 inch fresh ginger, peeled').grams).toBeCloseTo(curatedGrams('11216', 'inch'), 1);
+    expect(line('1 knob ginger').grams).toBeCloseTo(curatedGrams('11216', 'knob'), 1);
+    expect(line('2 cinnamon sticks').food?.sourceId).toBe('02010');
+    expect(line('2 cinnamon sticks').grams).toBeCloseTo(2 * curatedGrams('02010', 'stick'), 1);
+    expect(line('6 green cardamom pods').grams).toBeCloseTo(6 * curatedGrams('02006', 'pod'), 2);
+  });
+
+  it('a bunch of parsley, a can of coconut milk and a box of pasta weigh their package', () => {
+    // parsley: *common practice* on USDA SR28 11297 "1 cup chopped"; the can: 13.5 fl oz (NIST Handbook 44)
+    // × USDA SR28 12118 "1 cup"; the box: 1 lb (NIST Handbook 44)
+    expect(line('1 bunch flat-leaf parsley').grams).toBeCloseTo(sr28('11297', /^cup chopped$/), 1);
+    expect(line('1 can coconut milk').food?.sourceId).toBe('12118');
+    expect(line('1 can coconut milk').grams).toBeCloseTo((13.5 * 29.5735295625 * sr28('12118', /^cup$/)) / 236.5882365, -1);
+    expect(line('1 box lasagna noodles').grams).toBeCloseTo(16 * OZ, 1);
+  });
+
+  it('dried red chiles are sun-dried hot chiles (USDA SR28 11962 "1 pepper"), not freeze-dried sweet peppers', () => {
+    const chiles = line('4 dried red chiles');
+    expect(chiles.food?.sourceId).toBe('11962');
+    expect(chiles.grams).toBeCloseTo(4 * sr28('11962', /^pepper$/), 2);
+  });
+
+  it('granulated garlic is garlic powder (USDA SR28 02020 "1 tbsp"); stilton is a blue cheese', () => {
+    expect(line('1 tbsp granulated garlic').food?.sourceId).toBe('02020');
+    expect(line('1 tbsp granulated garlic').grams).toBeCloseTo(sr28('02020', /^tbsp$/), 1);
+    expect(line('3½ oz stilton').food?.sourceId).toBe('01004');
+    expect(line('3½ oz stilton').grams).toBeCloseTo(3.5 * OZ, 1); // NIST Handbook 44
+  });
+
+  it('"whole" before a food means uncut: "1 whole onion" is a raw onion (USDA SR28 11282 "1 medium"), not a frozen one', () => {
+    const onion = line('1 whole onion');
+    expect(onion.food?.sourceId).toBe('11282');
+    expect(onion.grams).toBeCloseTo(sr28('11282', /^medium/), 0);
+    expect(line('1 c whole milk').food?.sourceId).toBe('01077');
+  });
+
+  it('describing words before a comma do not end the food: "dry, curly lasagna noodles" (curated noodle row)', () => {
+    const noodles = line('15 dry, curly lasagna noodles, cooked and cooled');
+    expect(noodles.food?.sourceId).toBe('20120');
+    expect(noodles.grams).toBeCloseTo(15 * curatedGrams('20120', 'lasagna noodle'), 0);
+    expect(line('6 roasted, peeled poblano chiles').parsed.name).toMatch(/poblano/i);
+  });
+
+  it('sprigs or leaves of an herb SR28 has only dried are flagged, naming "fresh"', () => {
+    const sprigs = line('3 sprigs tarragon');
+    expect(sprigs.checkMatch).toBe(true);
+    expect(sprigs.missingModifier).toBe('fresh');
+    expect(line('2 tbsp dried tarragon').checkMatch).toBe(false);
+  });
+
+  it('leaves of a plant whose fruit SR28 has are flagged, never the fruit silently', () => {
+    for (const input of ['4 makrut lime leaves', '8 fig leaves']) {
+      const l = line(input);
+      expect(l.checkMatch, input).toBe(true);
+      expect(l.warnings.join(' '), input).toMatch(/no leaves of this plant/);
+    }
+    expect(line('1 bunch mint leaves').checkMatch).toBe(false);
+  });
+
+  it('a food found by words further along its name is flagged: "potato starch" is no gluten-free bread', () => {
+    const starch = line('1 c potato starch');
+    expect(starch.checkMatch).toBe(true);
+    expect(starch.warnings.join(' ')).toMatch(/further along the name/);
+    expect(line('2 c all-purpose flour').checkMatch).toBe(false);
+  });
+
+  it('a colour or state word alone is no choice: "green or Puy lentils" are lentils, never a green kiwifruit', () => {
+    expect(line('1 c green or Puy lentils').food?.name).toMatch(/^Lentils/);
+    expect(line('1 c fresh or frozen peas').food?.name).toMatch(/^Peas, green/);
+  });
+
+  it('a word read as another catalogue word is flagged: "mascarpone" is not macaroni', () => {
+    const l = line('¾ c mascarpone');
+    expect(l.checkMatch).toBe(true);
+    expect(l.confidence).toBeLessThan(1);
+    expect(l.warnings.join(' ')).toMatch(/mascarpone/);
+  });
+});
+
 describe('the hand-labelled lines (tests/reference/labelled-lines)', () => {
   it('hold their measured accuracy (acceptable food and grams within 15 %), minus noise', () => {
     const labels = readHandLabelledLines();
@@ -205,9 +288,9 @@ describe('the hand-labelled lines (tests/reference/labelled-lines)', () => {
       answer,
     );
     expect(tune.lines + heldOut.lines).toBeGreaterThanOrEqual(300);
-    // measured 95.3 % and 81.8 % when this test was written (npm run bench prints both)
-    expect(share(tune.both, tune.lines)).toBeGreaterThanOrEqual(0.93);
-    expect(share(heldOut.both, heldOut.lines)).toBeGreaterThanOrEqual(0.8);
+    // measured 98.8 % and 82.9 % (npm run bench prints both); a line is 0.6 % of a half
+    expect(share(tune.both, tune.lines)).toBeGreaterThanOrEqual(0.97);
+    expect(share(heldOut.both, heldOut.lines)).toBeGreaterThanOrEqual(0.81);
   });
 
   it('took no fallback while weighing all of the above', () => {

@@ -37,6 +37,21 @@ describe('parseLine: quantities', () => {
     expect(parseLine('½-¾ cup milk').quantity).toBe(0.625);
   });
 
+  it('reads a weight range before the food as the size of each piece: "1 3-4 ounce tomato", "2 6- to 8-ounce salmon fillets"', () => {
+    const tomato = parseLine('1 3-4 ounce tomato, coarsely grated');
+    expect(tomato.quantity).toBe(1);
+    expect(tomato.size).toEqual({ quantity: 3.5, unit: 'oz' });
+    expect(tomato.name).toBe('tomato');
+    const salmon = parseLine('2 6- to 8-ounce salmon fillets');
+    expect(salmon.quantity).toBe(2);
+    expect(salmon.size).toEqual({ quantity: 7, unit: 'oz' });
+    expect(salmon.name).toBe('salmon fillets');
+    // NIST Handbook 44 Appendix C: 1 lb = 453.59237 g
+    const rabbit = parseLine('1 3- to 4-lb rabbit, cut into 6-8 pieces');
+    expect(massToGrams(rabbit.size!.quantity, rabbit.size!.unit)).toBeCloseTo(3.5 * 453.59237, 3);
+    expect(parseLine('2-3 tbsp oil').size).toBeNull();
+  });
+
   it('reads a range whose unit is written last: "2 to 3 cups"', () => {
     expect(pick(parseLine('2 to 3 cups'))).toMatchObject({ quantity: 2.5, unit: 'cup' });
   });
