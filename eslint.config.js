@@ -49,6 +49,21 @@ export default tseslint.config(
     ...reactHooks.configs.flat.recommended,
   },
   {
+    // One client API layer: every server call has its one fetcher (and its query options) in src/lib/api/.
+    files: ['src/features/**/*.{ts,tsx}', 'src/app/**/*.{ts,tsx}'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            { group: ['**/lib/api-client'], importNames: ['api'], message: 'Call the server through the fetchers and query options of src/lib/api/.' },
+            { group: ['**/lib/upload-file'], message: 'Uploads go through the fetchers of src/lib/api/.' },
+          ],
+        },
+      ],
+    },
+  },
+  {
     files: ['*.js'],
     languageOptions: { globals: globals.node },
   },

@@ -42,6 +42,8 @@ export interface AppContext {
   sessionPool: pg.Pool;
   /** outgoing mail; the development outbox (newest first) is readable when `outbox` is given */
   mail?: { mailer: Mailer; appUrl: string; outbox?: (limit: number) => Promise<StoredMail[]> };
+  /** where unexpected errors (500s) are logged; console.error unless given. 4xx answers are never logged. */
+  logError?: (error: unknown) => void;
 }
 
 /** Without SMTP settings mail is refused with a clear 503 rather than silently dropped. */
@@ -106,7 +108,7 @@ export function createApp(context: AppContext) {
   const limits = createRateLimits(sessionPool, config.limits, config.secureCookies);
   const api = express.Router();
   api.use(csrf.protect);
-  api.use('/auth', authRouter({ sequelize, limits, csrf, mail }));
+  api.use('/auth', authRouter({ sequelize, limits, csrf, mail, s3: config.s3 }));
   api.use('/admin', adminRouter());
   api.use('/analyze', analyzeRouter(sequelize, limits.compute));
   api.use('/foods', foodsRouter(sequelize));
@@ -148,6 +150,6 @@ export function createApp(context: AppContext) {
     });
   }
 
-  app.use(errorHandler());
+  app.use(errorHandler(context.logError));
   return app;
 }

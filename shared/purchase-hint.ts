@@ -8,7 +8,7 @@
  */
 import type { Portion } from './food';
 import { roundHalfUp } from './label-rounding';
-import { GRAMS_PER_OUNCE, ML_PER_CUP, ML_PER_TBSP, ML_PER_TSP, massToGrams, normaliseUnit, unitKind, volumeToMl } from './units';
+import { GRAMS_PER_OUNCE, ML_PER_CUP, OUNCES_PER_POUND, ML_PER_TBSP, ML_PER_TSP, massToGrams, normaliseUnit, unitKind, volumeToMl } from './units';
 
 export type UnitSystem = 'us' | 'metric';
 
@@ -21,7 +21,6 @@ const MAX_COUNT = 24;
 const COUNT_SLACK = 0.1;
 /** Loose foods up to this many cups are bought by the cup; more by weight. */
 const MAX_CUPS = 4;
-const OUNCES_PER_POUND = 16;
 
 const SIZE_WORDS = ['extra large', 'extra small', 'large', 'medium', 'small', 'jumbo'];
 /** Measures that mean "one of the food" without naming it. */

@@ -30,6 +30,10 @@ export interface UnitDef {
 // NIST Handbook 44 Appendix C, exact.
 export const GRAMS_PER_POUND = 453.59237;
 export const GRAMS_PER_OUNCE = 28.349523125;
+export const OUNCES_PER_POUND = 16;
+export const KG_PER_POUND = GRAMS_PER_POUND / 1000;
+export const CM_PER_INCH = 2.54;
+export const INCHES_PER_FOOT = 12;
 export const ML_PER_GALLON = 3785.411784;
 export const ML_PER_QUART = 946.352946;
 export const ML_PER_PINT = 473.176473;

@@ -3,23 +3,11 @@ import { appendFile, mkdir } from 'node:fs/promises';
 import path from 'node:path';
 import type { AddressInfo } from 'node:net';
 import { SMTPServer } from 'smtp-server';
+import type { OutboxMessage } from '../../shared/schemas/outbox';
 import { parseMessage } from './parse-message';
 
 /** One message as the development outbox keeps it. */
-export interface StoredMail {
-  id: string;
-  /** the From header as written (display name and address), or the envelope sender */
-  from: string;
-  /** envelope recipients, so Cc and Bcc show too */
-  to: string[];
-  subject: string;
-  text: string;
-  html?: string;
-  /** the Message-ID header, to match a mail with what the sender got back */
-  messageId?: string;
-  /** ISO 8601 */
-  receivedAt: string;
-}
+export type StoredMail = OutboxMessage;
 
 export type LoopbackHost = '127.0.0.1' | '::1' | 'localhost';
 
@@ -58,7 +46,7 @@ export async function startFakeSmtp(options: FakeSmtpOptions = {}): Promise<Fake
   if (options.outboxFile) await mkdir(path.dirname(options.outboxFile), { recursive: true });
 
   async function store(raw: Buffer, envelopeFrom: string, envelopeTo: string[]): Promise<void> {
-    const parsed = parseMessage(raw);
+    const parsed = await parseMessage(raw);
     const mail: StoredMail = {
       id: randomUUID(),
       from: parsed.from || envelopeFrom,

@@ -2,7 +2,7 @@
  * What a household measure says: "cup, shredded" is a volume with a preparation, "medium (2-1/2" dia)"
  * a size with a diameter, "stalk, large (11"-12" long)" a piece with a size, "3 oz" a mass.
  */
-import { normaliseUnit, unitKind } from '../../shared/units';
+import { CM_PER_INCH, normaliseUnit, unitKind } from '../../shared/units';
 import { singular } from './singular';
 
 export type SizeWord = 'extra-small' | 'small' | 'medium' | 'large' | 'extra-large' | 'jumbo';
@@ -125,7 +125,7 @@ export function inchesOf(text: string | null | undefined): number | null {
   if (!m) return null;
   const n = Number(m[1]);
   if (!Number.isFinite(n) || n <= 0) return null;
-  return /^c/i.test(m[2]) ? n / 2.54 : n;
+  return /^c/i.test(m[2]) ? n / CM_PER_INCH : n;
 }
 
 const parsedMeasures = new Map<string, MeasureInfo>();

@@ -2,13 +2,15 @@ import { Router, type Request, type Response } from 'express';
 import type { Sequelize } from 'sequelize';
 import type { Csrf } from '../middleware/csrf';
 import passport from 'passport';
-import { loginSchema, registerSchema, updateMeSchema } from '../../shared/schemas/auth';
+import { changePasswordSchema, deleteAccountSchema, loginSchema, registerSchema, updateMeSchema } from '../../shared/schemas/auth';
 import { passwordResetConfirmSchema, passwordResetRequestSchema } from '../../shared/schemas/coaching';
 import { confirmPasswordReset, requestPasswordResetInBackground } from '../services/password-reset';
 import type { Mailer } from '../mail';
 import { parse } from '../middleware/validate';
 import { requireAuth } from '../middleware/auth';
 import { createUser, updateProfile, type User } from '../services/users';
+import { changePassword, deleteAccount } from '../services/account';
+import type { S3Config } from '../config';
 import { HttpError } from '../lib/http-error';
 import type { RateLimits } from '../middleware/rate-limits';
 
@@ -17,8 +19,10 @@ export function authRouter({
   limits,
   csrf,
   mail,
+  s3,
 }: {
   sequelize: Sequelize;
+  s3: S3Config | null;
   limits: RateLimits;
   csrf: Csrf;
   mail: { mailer: Mailer; appUrl: string };
@@ -86,6 +90,12 @@ export function authRouter({
     res.json({ ok: true });
   });
 
+  // The client's question "who is signed in?": answered 200 either way, so a signed-out visit
+  // has no failed request in it. GET /me keeps the contract's 401.
+  router.get('/session', (req, res) => {
+    res.json({ user: req.user ? req.user.toPublic() : null });
+  });
+
   router.get('/me', requireAuth, (req, res) => {
     res.json(req.user!.toPublic());
   });
@@ -94,6 +104,22 @@ export function authRouter({
     const input = parse(updateMeSchema, req.body);
     const user = await updateProfile(req.user!.id, input);
     res.json(user.toPublic());
+  });
+
+  router.post('/password', requireAuth, async (req, res) => {
+    const input = parse(changePasswordSchema, req.body);
+    await changePassword(sequelize, req.user!.id, input.currentPassword, input.newPassword, req.sessionID ?? null);
+    res.json({ ok: true });
+  });
+
+  router.delete('/me', requireAuth, async (req, res) => {
+    const { password } = parse(deleteAccountSchema, req.body ?? {});
+    await deleteAccount(sequelize, s3, req.user!.id, password);
+    // the session row is gone already; drop this request's copy so it is not saved again
+    req.session.destroy(() => {
+      res.clearCookie('hearthswap.sid');
+      res.status(204).end();
+    });
   });
 
   return router;

@@ -8,6 +8,7 @@ import { clientVersions, listClients, removeClient } from '../services/clients';
 import { setClientTargets } from '../services/client-targets';
 import { invitationStatus, inviteClient, listInvitations, revokeInvitation } from '../services/invitations';
 import type { Mailer } from '../mail';
+import type { ClientsResponse, ClientVersionsResponse, SavedClientTargets, SentInvitation } from '../../shared/schemas/clients';
 
 export interface MailContext {
   mailer: Mailer;
@@ -18,12 +19,12 @@ export function clientsRouter(sequelize: Sequelize, mail: MailContext) {
   const router = Router();
   router.use(requireRole('coach'));
   router.get('/', async (req, res) => {
-    res.json({ clients: await listClients(req.user!), invitations: await listInvitations(req.user!) });
+    res.json({ clients: await listClients(req.user!), invitations: await listInvitations(req.user!) } satisfies ClientsResponse);
   });
   router.post('/invitations', async (req, res) => {
     const { email } = parse(invitationSchema, req.body);
     const inv = await inviteClient(req.user!, email, mail);
-    res.status(201).json({ id: inv.id, email: inv.email, status: invitationStatus(inv), expiresAt: inv.expiresAt.toISOString() });
+    res.status(201).json({ id: inv.id, email: inv.email, status: invitationStatus(inv), expiresAt: inv.expiresAt.toISOString() } satisfies SentInvitation);
   });
   router.delete('/invitations/:id', async (req, res) => {
     const { id } = parse(idParam, req.params);
@@ -38,11 +39,11 @@ export function clientsRouter(sequelize: Sequelize, mail: MailContext) {
   router.put('/:id/targets', async (req, res) => {
     const { id } = parse(idParam, req.params);
     const targets = parse(clientTargetsSchema, req.body);
-    res.json({ clientId: id, targets: await setClientTargets(req.user!, id, targets) });
+    res.json({ clientId: id, targets: await setClientTargets(req.user!, id, targets) } satisfies SavedClientTargets);
   });
   router.get('/:id/versions', async (req, res) => {
     const { id } = parse(idParam, req.params);
-    res.json({ versions: await clientVersions(req.user!, id) });
+    res.json({ versions: await clientVersions(req.user!, id) } satisfies ClientVersionsResponse);
   });
   return router;
 }

@@ -5,6 +5,7 @@ import { parse } from '../middleware/validate';
 import { requireAuth } from '../middleware/auth';
 import { addComment, listComments } from '../services/comments';
 import { findReadableRecipe, getVersion } from '../services/recipes';
+import type { CommentsResponse } from '../../shared/schemas/comments';
 
 /** Comments live on a version: the owner and the owner's coach read and write them. */
 export function commentsRouter() {
@@ -14,14 +15,14 @@ export function commentsRouter() {
   router.get('/', async (req, res) => {
     const { id, number } = parse(params, req.params);
     const version = await getVersion(await findReadableRecipe(req.user!, id), number);
-    res.json({ comments: await listComments(version.id) });
+    res.json({ comments: await listComments(version.id) } satisfies CommentsResponse);
   });
   router.post('/', async (req, res) => {
     const { id, number } = parse(params, req.params);
     const { body } = parse(commentSchema, req.body);
     const version = await getVersion(await findReadableRecipe(req.user!, id), number);
     await addComment(version.id, req.user!, body);
-    res.status(201).json({ comments: await listComments(version.id) });
+    res.status(201).json({ comments: await listComments(version.id) } satisfies CommentsResponse);
   });
   return router;
 }

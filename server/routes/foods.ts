@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import type { Sequelize } from 'sequelize';
-import { foodIdParamSchema, foodSearchQuerySchema, labelFoodPatchSchema, labelFoodSchema } from '../../shared/schemas/foods';
+import { foodIdParamSchema, foodSearchQuerySchema, labelFoodPatchSchema, labelFoodSchema, type FoodSearchResponse } from '../../shared/schemas/foods';
 import { parse } from '../middleware/validate';
 import { requireAuth, requireRole } from '../middleware/auth';
 import { singleFile } from '../middleware/upload';
@@ -18,7 +18,7 @@ export function foodsRouter(sequelize: Sequelize) {
     const { q, limit } = parse(foodSearchQuerySchema, req.query);
     const engine = await getFoodEngine(sequelize);
     const viewer = req.user ?? null;
-    res.json({ query: q, results: searchFoods(engine, q, limit, customFoodsFor(engine, viewer, q), viewer?.id ?? null) });
+    res.json({ query: q, results: searchFoods(engine, q, limit, customFoodsFor(engine, viewer, q), viewer?.id ?? null) } satisfies FoodSearchResponse);
   });
   router.get('/mine', requireAuth, async (req, res) => {
     res.json({ foods: listMyFoods(await getFoodEngine(sequelize), req.user!) });

@@ -10,6 +10,7 @@ import {
   recipeListQuerySchema,
   updateRecipeSchema,
   photoUploadFieldsSchema,
+  photoQuerySchema,
   versionParam,
 } from '../../shared/schemas/recipes';
 import { MAX_LINES } from '../../shared/schemas/analyze';
@@ -24,20 +25,23 @@ import {
   findReadableRecipe,
   getVersion,
   listRecipes,
+  importRecipeWithVersions,
   listVersions,
   ownRecipeTitles,
+  ownRecipesWithVersions,
   recipeDetail,
   restoreVersion,
   undeleteRecipe,
   updateRecipe,
   versionDetail,
+  versionRows,
 } from '../services/recipes';
 import { importedTitle, parseRecipeFile, type ImportedRecipe } from '../services/recipe-import';
 import { assertSafeText } from '../middleware/text-safety';
 import type { RateLimits } from '../middleware/rate-limits';
-import { toJsonLd } from '../services/recipe-export';
-import { MAX_PHOTO_BYTES, readPhoto } from '../services/photo-storage';
-import { replaceRecipePhoto } from '../services/recipe-photo';
+import { recipesToJsonLd, toJsonLd } from '../services/recipe-export';
+import { MAX_PHOTO_BYTES } from '../services/photo-storage';
+import { readRecipePhoto, removeRecipePhoto, replaceRecipePhoto } from '../services/recipe-photo';
 import { HttpError, badRequest } from '../lib/http-error';
 import { singleFile } from '../middleware/upload';
 
@@ -83,8 +87,27 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
     if (!req.file) throw badRequest('file: attach the recipe in the form field "file".', { fieldErrors: { file: ['Required.'] } });
     const imported = parseRecipeFile(req.file.buffer);
     const title = importedTitle(imported.title, await ownRecipeTitles(req.user!));
-    const recipe = await createRecipe(sequelize, await engine(), req.user!, importedRecipeInput({ ...imported, title }));
+    const input = importedRecipeInput({ ...imported, title });
+    if (imported.versions) assertSafeText(imported.versions, 'file');
+    const recipe = imported.versions
+      ? await importRecipeWithVersions(
+          sequelize,
+          await engine(),
+          req.user!,
+          { title, servings: input.servings, notes: input.notes ?? '', method: input.method ?? '' },
+          imported.versions,
+        )
+      : await createRecipe(sequelize, await engine(), req.user!, input);
     res.status(201).json({ ...(await recipeDetail(recipe)), importedFrom: imported.format });
+  });
+
+  // every recipe with every version, for keeping (and before deleting an account)
+  router.get('/export.jsonld', async (req, res) => {
+    const foods = await engine();
+    const doc = recipesToJsonLd(await ownRecipesWithVersions(req.user!), (id) => foods.byId.get(id));
+    res.type('application/ld+json');
+    res.setHeader('Content-Disposition', 'attachment; filename="hearthswap-recipes.jsonld"');
+    res.send(JSON.stringify(doc, null, 2));
   });
 
   router.get('/:id', async (req, res) => {
@@ -142,10 +165,11 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
   router.get('/:id/export.jsonld', async (req, res) => {
     const { id } = parse(idParam, req.params);
     const recipe = await findReadableRecipe(req.user!, id);
-    const versions = await listVersions(recipe);
+    const versions = await versionRows(recipe);
     const number = parse(exportQuerySchema, req.query).version ?? versions.at(-1)?.number;
     if (!number) throw badRequest('version: this recipe has no version yet.');
     const version = await getVersion(recipe, number);
+    const foods = await engine();
     const slug =
       recipe.title
         .toLowerCase()
@@ -153,7 +177,13 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
         .replace(/^-|-$/g, '') || 'recipe';
     res.type('application/ld+json');
     res.setHeader('Content-Disposition', `attachment; filename="${slug}-v${version.number}.jsonld"`);
-    res.send(JSON.stringify(toJsonLd(recipe, version), null, 2));
+    res.send(
+      JSON.stringify(
+        toJsonLd(recipe, version, versions, (foodId) => foods.byId.get(foodId)),
+        null,
+        2,
+      ),
+    );
   });
 
   router.post('/:id/photo', singleFile(MAX_PHOTO_BYTES, 'photo'), async (req, res) => {
@@ -163,14 +193,19 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
     res.status(201).json(await recipeDetail(recipe));
   });
 
+  router.delete('/:id/photo', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    const { revision } = parse(photoUploadFieldsSchema, { ...req.query, ...(req.body ?? {}) });
+    res.json(await recipeDetail(await removeRecipePhoto(sequelize, config.s3, req.user!, id, revision)));
+  });
+
   router.get('/:id/photo', async (req, res) => {
     const { id } = parse(idParam, req.params);
-    const recipe = await findReadableRecipe(req.user!, id);
-    if (!recipe.photoKey) throw new HttpError(404, 'not_found', 'This recipe has no photo.');
-    const image = await readPhoto(config.s3, recipe.photoKey);
-    res.type(recipe.photoType ?? 'image/webp');
+    const { size } = parse(photoQuerySchema, req.query);
+    const photo = await readRecipePhoto(config.s3, req.user!, id, size);
+    res.type(photo.type);
     res.setHeader('Cache-Control', 'private, max-age=86400');
-    res.send(image);
+    res.send(photo.image);
   });
 
   return router;

@@ -6,6 +6,7 @@ import { parse } from '../middleware/validate';
 import { requireAuth, requireRole } from '../middleware/auth';
 import { getFoodEngine } from '../services/food-engine';
 import * as swaps from '../services/swaps';
+import type { SwapsResponse } from '../../shared/schemas/swaps';
 
 export function swapsRouter(sequelize: Sequelize) {
   const router = Router();
@@ -13,7 +14,7 @@ export function swapsRouter(sequelize: Sequelize) {
   const engine = () => getFoodEngine(sequelize);
   router.get('/', async (req, res) => {
     const e = await engine();
-    res.json({ swaps: (await swaps.listSwapsFor(req.user!)).map((s) => swaps.swapView(e, s)) });
+    res.json({ swaps: (await swaps.listSwapsFor(req.user!)).map((s) => swaps.swapView(e, s)) } satisfies SwapsResponse);
   });
   router.post('/', requireRole('coach'), async (req, res) => {
     const input = parse(createSwapSchema, req.body);

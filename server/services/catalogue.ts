@@ -1,47 +1,7 @@
 import type { Sequelize } from 'sequelize';
-import type { CatalogueFood, DietFlag, Portion, Role } from '../../shared/food';
+import type { CatalogueFood, Portion } from '../../shared/food';
 import type { LabelPanel } from '../../shared/label-food';
-
-interface FoodRow {
-  id: number;
-  source: 'usda-sr28' | 'custom';
-  source_id: string;
-  name: string;
-  source_name: string;
-  food_group: string;
-  kcal: number;
-  protein_g: number;
-  fat_g: number;
-  sat_fat_g: number;
-  carbs_g: number;
-  fiber_g: number;
-  sugar_g: number;
-  sodium_mg: number;
-  water_g: number | null;
-  density_g_per_ml: number;
-  density_source: 'portion' | 'role-default';
-  roles: Role[];
-  diet: DietFlag[];
-  branded: boolean;
-  owner_id: number | null;
-  serving_g: number | null;
-  serving_ml: number | null;
-  serving_label: string | null;
-  barcode: string | null;
-  label: LabelPanel | null;
-  energy_from_atwater: boolean;
-  hidden_at: Date | null;
-  created_at: Date;
-  updated_at: Date;
-}
-
-interface PortionRow {
-  food_id: number;
-  label: string;
-  amount: number;
-  measure: string;
-  grams: number;
-}
+import { selectAllCustomFoodRows, selectAllFoodRows, selectCustomFoodRows, type FoodRow, type FoodRows } from '../models/food-table';
 
 /** What a food entered from a label keeps beside its per-100 g values. */
 export interface LabelRecord {
@@ -123,7 +83,7 @@ function usablePortions(portions: Portion[]) {
   return portions.filter((p) => Number.isFinite(p.grams) && p.grams > 0 && Number.isFinite(p.amount) && p.amount > 0);
 }
 
-function readRows(foods: FoodRow[], portions: PortionRow[]): { foods: StoredFood[]; refused: number[] } {
+function readRows({ foods, portions }: FoodRows): { foods: StoredFood[]; refused: number[] } {
   const byFood = new Map<number, Portion[]>();
   for (const p of portions) {
     const list = byFood.get(p.food_id) ?? [];
@@ -146,35 +106,21 @@ function warnRefused(refused: number[]) {
 
 /** Every usable food with its portions, read once from PostgreSQL. */
 export async function readAllFoods(sequelize: Sequelize): Promise<StoredFood[]> {
-  const [foods] = (await sequelize.query('SELECT * FROM foods ORDER BY id')) as [FoodRow[], unknown];
-  const [portions] = (await sequelize.query('SELECT food_id, label, amount, measure, grams FROM food_portions ORDER BY food_id, seq')) as [
-    PortionRow[],
-    unknown,
-  ];
-  const read = readRows(foods, portions);
+  const read = readRows(await selectAllFoodRows(sequelize));
   warnRefused(read.refused);
   return read.foods;
 }
 
 /** One custom food as it is now in the database: null when it is gone or unusable. */
 export async function readCustomFood(sequelize: Sequelize, id: number): Promise<StoredFood | null> {
-  const [foods] = (await sequelize.query("SELECT * FROM foods WHERE id = $1 AND source = 'custom'", { bind: [id] })) as [FoodRow[], unknown];
-  if (foods.length === 0) return null;
-  const [portions] = (await sequelize.query('SELECT food_id, label, amount, measure, grams FROM food_portions WHERE food_id = $1 ORDER BY seq', {
-    bind: [id],
-  })) as [PortionRow[], unknown];
-  const read = readRows(foods, portions);
+  const read = readRows(await selectCustomFoodRows(sequelize, id));
   warnRefused(read.refused);
   return read.foods[0] ?? null;
 }
 
 /** Every custom food as it is now: what a process re-reads after missing notifications. */
 export async function readCustomFoods(sequelize: Sequelize): Promise<StoredFood[]> {
-  const [foods] = (await sequelize.query("SELECT * FROM foods WHERE source = 'custom' ORDER BY id")) as [FoodRow[], unknown];
-  const [portions] = (await sequelize.query(
-    "SELECT p.food_id, p.label, p.amount, p.measure, p.grams FROM food_portions p JOIN foods f ON f.id = p.food_id WHERE f.source = 'custom' ORDER BY p.food_id, p.seq",
-  )) as [PortionRow[], unknown];
-  const read = readRows(foods, portions);
+  const read = readRows(await selectAllCustomFoodRows(sequelize));
   warnRefused(read.refused);
   return read.foods;
 }

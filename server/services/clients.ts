@@ -1,8 +1,9 @@
 import { Op } from 'sequelize';
 import { ClientTarget, Recipe, RecipeVersion, User, VersionComment } from '../models';
 import { notFound } from '../lib/http-error';
+import type { Client, ClientVersion } from '../../shared/schemas/clients';
 
-export async function listClients(coach: User) {
+export async function listClients(coach: User): Promise<Client[]> {
   const clients = await User.findAll({ where: { coachId: coach.id }, order: [['displayName', 'ASC']] });
   const targets = await ClientTarget.findAll({ where: { clientId: clients.map((c) => c.id) } });
   const byClient = new Map(targets.map((t) => [t.clientId, t.targets]));
@@ -22,7 +23,7 @@ export async function removeClient(coach: User, clientId: number) {
   await ClientTarget.destroy({ where: { clientId } });
 }
 
-export async function clientVersions(coach: User, clientId: number) {
+export async function clientVersions(coach: User, clientId: number): Promise<ClientVersion[]> {
   await ownClient(coach, clientId);
   const recipes = await Recipe.findAll({ where: { ownerId: clientId, deletedAt: null } });
   if (recipes.length === 0) return [];

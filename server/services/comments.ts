@@ -1,6 +1,7 @@
 import { User, VersionComment } from '../models';
+import type { VersionComment as VersionCommentView } from '../../shared/schemas/comments';
 
-export async function listComments(versionId: number) {
+export async function listComments(versionId: number): Promise<VersionCommentView[]> {
   const comments = await VersionComment.findAll({ where: { recipeVersionId: versionId }, order: [['createdAt', 'ASC']] });
   const authors = await User.findAll({ where: { id: [...new Set(comments.map((c) => c.authorId))] } });
   const names = new Map(authors.map((a) => [a.id, { name: a.displayName, role: a.role }]));

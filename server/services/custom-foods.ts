@@ -8,6 +8,7 @@ import { assignRoles } from '../catalogue/assign-roles';
 import { assignDiet } from '../catalogue/assign-diet';
 import { DENSITY_BOUNDS, roleDefaultDensity } from '../catalogue/density';
 import type { User } from '../models';
+import { deleteFood, hideFood, insertCustomFood, replaceFoodPortions, updateCustomFood, type CustomFoodValues } from '../models/food-table';
 import { dropCustomFood, putCustomFood, type FoodEngine } from './food-engine';
 import { readCustomFood, type StoredFood } from './catalogue';
 import { foodDetail } from './foods';
@@ -29,55 +30,24 @@ async function writeFood(sequelize: Sequelize, transaction: Transaction, ownerId
   const diet = assignDiet({ name: input.name, foodGroup: '' });
   const { portions, densityGPerMl } = panelPortions(panel, servingG);
   const density = densityGPerMl === null ? roleDefaultDensity(roles) : Math.min(DENSITY_BOUNDS.max, Math.max(DENSITY_BOUNDS.min, densityGPerMl));
-  const values = [
-    input.name,
-    per100g.kcal,
-    per100g.proteinG,
-    per100g.fatG,
-    per100g.satFatG,
-    per100g.carbsG,
-    per100g.fiberG,
-    per100g.sugarG,
-    per100g.sodiumMg,
-    density,
-    densityGPerMl === null ? 'role-default' : 'portion',
+  const values: CustomFoodValues = {
+    name: input.name,
+    per100g,
+    densityGPerMl: density,
+    densitySource: densityGPerMl === null ? 'role-default' : 'portion',
     roles,
     diet,
     ownerId,
-    input.servingSizeG ?? null,
-    input.servingSizeMl ?? null,
-    input.servingLabel || null,
-    input.barcode ?? null,
-    JSON.stringify(panel),
+    servingG: input.servingSizeG ?? null,
+    servingMl: input.servingSizeMl ?? null,
+    servingLabel: input.servingLabel || null,
+    barcode: input.barcode ?? null,
+    panel,
     energyFromAtwater,
-  ];
-  let foodId: number;
-  if (id === null) {
-    const [rows] = (await sequelize.query(
-      `INSERT INTO foods (source, source_id, name, source_name, food_group, kcal, protein_g, fat_g, sat_fat_g, carbs_g, fiber_g, sugar_g, sodium_mg,
-         water_g, density_g_per_ml, density_source, roles, diet, branded, owner_id, serving_g, serving_ml, serving_label, barcode, label, energy_from_atwater)
-       VALUES ('custom', gen_random_uuid()::text, $1, $1, '', $2, $3, $4, $5, $6, $7, $8, $9, NULL, $10, $11, $12, $13, false, $14, $15, $16, $17, $18, $19::jsonb, $20)
-       RETURNING id`,
-      { bind: values, transaction },
-    )) as [{ id: number }[], unknown];
-    foodId = rows[0].id;
-  } else {
-    await sequelize.query(
-      `UPDATE foods SET name = $1, source_name = $1, kcal = $2, protein_g = $3, fat_g = $4, sat_fat_g = $5, carbs_g = $6, fiber_g = $7, sugar_g = $8,
-         sodium_mg = $9, density_g_per_ml = $10, density_source = $11, roles = $12, diet = $13, owner_id = $14, serving_g = $15, serving_ml = $16,
-         serving_label = $17, barcode = $18, label = $19::jsonb, energy_from_atwater = $20, updated_at = now()
-       WHERE id = $21`,
-      { bind: [...values, id], transaction },
-    );
-    await sequelize.query('DELETE FROM food_portions WHERE food_id = $1', { bind: [id], transaction });
-    foodId = id;
-  }
-  for (const [i, p] of portions.entries()) {
-    await sequelize.query('INSERT INTO food_portions (food_id, seq, label, amount, measure, grams) VALUES ($1, $2, $3, $4, $5, $6)', {
-      bind: [foodId, i + 1, p.label, p.amount, p.measure, p.grams],
-      transaction,
-    });
-  }
+  };
+  const foodId = id === null ? await insertCustomFood(sequelize, transaction, values) : id;
+  if (id !== null) await updateCustomFood(sequelize, transaction, id, values);
+  await replaceFoodPortions(sequelize, transaction, foodId, portions);
   return foodId;
 }
 
@@ -155,7 +125,7 @@ export async function updateLabelFood(sequelize: Sequelize, engine: FoodEngine, 
     const copy = await writeFood(sequelize, t, viewer.id, input, null);
     await sequelize.query('UPDATE swaps SET to_food_id = $2 WHERE to_food_id = $1', { bind: [id, copy], transaction: t });
     await sequelize.query('UPDATE swaps SET from_food_id = $2 WHERE from_food_id = $1', { bind: [id, copy], transaction: t });
-    await sequelize.query("UPDATE foods SET hidden_at = now(), hidden_reason = 'replaced', updated_at = now() WHERE id = $1", { bind: [id], transaction: t });
+    await hideFood(sequelize, t, id, 'replaced');
     return copy;
   });
   if (newId !== id) await refresh(sequelize, engine, id);
@@ -168,11 +138,11 @@ export async function deleteLabelFood(sequelize: Sequelize, engine: FoodEngine, 
   requireOwnFood(engine, viewer, id);
   const hidden = await sequelize.transaction(async (t) => {
     if (!(await usedInVersions(sequelize, id, t))) {
-      await sequelize.query('DELETE FROM foods WHERE id = $1', { bind: [id], transaction: t });
+      await deleteFood(sequelize, t, id);
       return false;
     }
     await sequelize.query('DELETE FROM swaps WHERE to_food_id = $1 OR from_food_id = $1', { bind: [id], transaction: t });
-    await sequelize.query("UPDATE foods SET hidden_at = now(), hidden_reason = 'deleted', updated_at = now() WHERE id = $1", { bind: [id], transaction: t });
+    await hideFood(sequelize, t, id, 'deleted');
     return true;
   });
   if (hidden) await refresh(sequelize, engine, id);

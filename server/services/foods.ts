@@ -1,5 +1,6 @@
 import type { CatalogueFood } from '../../shared/food';
 import type { FoodDetail, FoodSummary } from '../../shared/schemas/analyze';
+import type { FoodSearchHit } from '../../shared/schemas/foods';
 import { notFound } from '../lib/http-error';
 import type { FoodEngine } from './food-engine';
 import type { StoredFood } from './catalogue';
@@ -27,7 +28,7 @@ export function foodDetail(food: CatalogueFood): FoodDetail {
 }
 
 /** Catalogue hits after `extra` (the viewer's own foods, then their coach's), each marked whose it is. */
-export function searchFoods(engine: FoodEngine, q: string, limit: number, extra: StoredFood[] = [], viewerId: number | null = null) {
+export function searchFoods(engine: FoodEngine, q: string, limit: number, extra: StoredFood[] = [], viewerId: number | null = null): FoodSearchHit[] {
   const hits = [...extra.map((food) => ({ food, score: 1 })), ...engine.matcher.search(q, limit)].slice(0, limit);
   return hits.map((hit) => ({
     owner: ownerOf(hit.food, viewerId),

@@ -3,6 +3,8 @@ import { Invitation, User } from '../models';
 import { HttpError, badRequest, forbidden, notFound } from '../lib/http-error';
 import { mailTemplates, type Mailer } from '../mail';
 import { hashToken, newToken } from './tokens';
+import type { Invitation as InvitationView, InvitationStatus } from '../../shared/schemas/clients';
+import type { AcceptedInvitation, InvitationSummary } from '../../shared/schemas/invitations';
 
 export const INVITATION_DAYS = 7;
 
@@ -20,14 +22,14 @@ export async function inviteClient(coach: User, email: string, mail: { mailer: M
   return invitation;
 }
 
-export function invitationStatus(inv: Invitation): 'pending' | 'accepted' | 'expired' | 'revoked' {
+export function invitationStatus(inv: Invitation): InvitationStatus {
   if (inv.revokedAt) return 'revoked';
   if (inv.acceptedAt) return 'accepted';
   if (inv.expiresAt.getTime() < Date.now()) return 'expired';
   return 'pending';
 }
 
-export async function listInvitations(coach: User) {
+export async function listInvitations(coach: User): Promise<InvitationView[]> {
   const list = await Invitation.findAll({ where: { coachId: coach.id }, order: [['createdAt', 'DESC']], limit: 200 });
   return list.map((i) => ({
     id: i.id,
@@ -57,13 +59,13 @@ async function usableInvitation(token: string) {
   return inv;
 }
 
-export async function describeInvitation(token: string) {
+export async function describeInvitation(token: string): Promise<InvitationSummary> {
   const inv = await usableInvitation(token);
   const coach = await User.findByPk(inv.coachId);
   return { coachName: coach?.displayName ?? 'A coach', email: inv.email, expiresAt: inv.expiresAt.toISOString() };
 }
 
-export async function acceptInvitation(sequelize: Sequelize, viewer: User, token: string) {
+export async function acceptInvitation(sequelize: Sequelize, viewer: User, token: string): Promise<AcceptedInvitation> {
   return sequelize.transaction(async (transaction) => {
     const inv = await usableInvitation(token);
     await Invitation.findOne({ where: { id: inv.id }, transaction, lock: transaction.LOCK.UPDATE });

@@ -1,8 +1,9 @@
 import { ClientTarget, Swap, User } from '../models';
 import type { FoodEngine } from './food-engine';
 import { swapView } from './swaps';
+import type { MyCoachResponse } from '../../shared/schemas/my-coach';
 
-export async function myCoach(viewer: User, engine: FoodEngine) {
+export async function myCoach(viewer: User, engine: FoodEngine): Promise<MyCoachResponse> {
   if (!viewer.coachId) return { coach: null, targets: null, swaps: [] };
   const coach = await User.findByPk(viewer.coachId);
   const target = await ClientTarget.findByPk(viewer.id);

@@ -10,7 +10,7 @@ import type { FoodEngine } from './food-engine';
 import { foodSummary } from './foods';
 import { computeVersion, findReadableRecipe, getVersion } from './recipes';
 import { badRequest } from '../lib/http-error';
-import type { ShoppingListInput } from '../../shared/schemas/prep';
+import type { PrepFood, PrepResponse, PrepShoppingItem, ShoppingListInput, ShoppingListResponse } from '../../shared/schemas/prep';
 
 /**
  * A version's lines for prep, each with the measure its text names: the text is weighed again with
@@ -30,7 +30,7 @@ export function prepLines(engine: FoodEngine, version: Pick<RecipeVersion, 'line
   });
 }
 
-function foodOf(engine: FoodEngine, id: PrepLine['foodId'], name: string) {
+function foodOf(engine: FoodEngine, id: PrepLine['foodId'], name: string): PrepFood {
   const food = typeof id === 'number' ? engine.byId.get(id) : undefined;
   return food ? foodSummary(food) : { id: null, source: null, sourceId: null, name };
 }
@@ -40,7 +40,7 @@ function shortName(name: string) {
   return name.split(',')[0].trim().toLowerCase();
 }
 
-export function shoppingList(engine: FoodEngine, batches: PrepLine[][], unitSystem: 'us' | 'metric') {
+export function shoppingList(engine: FoodEngine, batches: PrepLine[][], unitSystem: 'us' | 'metric'): PrepShoppingItem[] {
   return mergeShopping(batches).map((line) => {
     const food = typeof line.foodId === 'number' ? engine.byId.get(line.foodId) : undefined;
     return {
@@ -51,13 +51,13 @@ export function shoppingList(engine: FoodEngine, batches: PrepLine[][], unitSyst
   });
 }
 
-export function shoppingText(items: ReturnType<typeof shoppingList>) {
+export function shoppingText(items: PrepShoppingItem[]) {
   return items.map((i) => `[ ] ${i.food.name} — ${i.grams} g${i.purchase ? ` (${i.purchase})` : ''}`).join('\n');
 }
 
 /** Everything a cook needs to take a saved version to the kitchen for a batch of `portions`. */
 /** One list for several versions, each scaled to its portions, in the viewer's units unless the input names them. */
-export async function buildShoppingList(engine: FoodEngine, viewer: User, input: ShoppingListInput) {
+export async function buildShoppingList(engine: FoodEngine, viewer: User, input: ShoppingListInput): Promise<ShoppingListResponse> {
   const batches = [];
   const sources = [];
   for (const item of input.items) {
@@ -71,7 +71,7 @@ export async function buildShoppingList(engine: FoodEngine, viewer: User, input:
   return { sources, items, text: shoppingText(items) };
 }
 
-export function prepFor(engine: FoodEngine, recipe: Recipe, version: RecipeVersion, portions: number, viewer: User) {
+export function prepFor(engine: FoodEngine, recipe: Recipe, version: RecipeVersion, portions: number, viewer: User): PrepResponse {
   let plan;
   try {
     plan = scaleVersion({ servings: version.servings, lines: prepLines(engine, version) }, portions);

@@ -1,6 +1,9 @@
-import type { Recipe as SchemaRecipe, NutritionInformation, WithContext } from 'schema-dts';
+import type { Recipe as SchemaRecipe, NutritionInformation } from 'schema-dts';
 import type { Nutrients } from '../../shared/nutrition';
-import type { StoredLine } from '../../shared/schemas/recipes';
+import type { StoredLine, VersionKind } from '../../shared/schemas/recipes';
+import type { TargetsInput } from '../../shared/schemas/rewrite';
+import { JSONLD_CONTEXT, type ExportedLine, type ExportedVersion } from '../../shared/schemas/recipe-jsonld';
+import type { CatalogueFood } from '../../shared/food';
 
 function grams(n: number) {
   return `${(Math.round(n * 10) / 10).toString()} g`;
@@ -28,23 +31,90 @@ export function methodSteps(method: string): string[] {
     .filter(Boolean);
 }
 
-/** A saved version as a schema.org Recipe document. */
-export function toJsonLd(
+interface VersionRow {
+  number: number;
+  kind: VersionKind;
+  parentNumber: number | null;
+  servings: number;
+  note: string;
+  targets: TargetsInput | null;
+  lines: StoredLine[];
+  perServing: Nutrients;
+}
+
+type FoodLookup = (id: number) => Pick<CatalogueFood, 'source' | 'sourceId' | 'name'> | undefined;
+
+function exportedLine(line: StoredLine, foodOf: FoodLookup): ExportedLine {
+  const food = line.foodId != null ? foodOf(line.foodId) : undefined;
+  const out: ExportedLine = {
+    'hearthswap:text': line.input,
+    'hearthswap:food':
+      line.foodId == null
+        ? null
+        : food
+          ? { 'hearthswap:source': food.source, 'hearthswap:sourceId': food.sourceId, name: food.name }
+          : { 'hearthswap:source': 'custom', 'hearthswap:sourceId': String(line.foodId), name: line.foodName ?? '' },
+    'hearthswap:grams': line.grams,
+  };
+  if (line.warnings?.length) out['hearthswap:warnings'] = line.warnings;
+  if (line.checkMatch) out['hearthswap:checkMatch'] = true;
+  return out;
+}
+
+function exportedVersion(v: VersionRow, foodOf: FoodLookup): ExportedVersion {
+  return {
+    'hearthswap:number': v.number,
+    'hearthswap:kind': v.kind,
+    'hearthswap:parentNumber': v.parentNumber,
+    'hearthswap:servings': v.servings,
+    'hearthswap:note': v.note,
+    'hearthswap:targets': v.targets,
+    'hearthswap:lines': v.lines.map((l) => exportedLine(l, foodOf)),
+  };
+}
+
+type RecipeNode = SchemaRecipe & { 'hearthswap:versions': ExportedVersion[] };
+
+/** A recipe as a schema.org Recipe: `shown` in the standard fields, every version in `hearthswap:versions`. */
+function recipeNode(
   recipe: { title: string; notes: string; method: string; createdAt: Date },
-  version: { servings: number; lines: StoredLine[]; perServing: Nutrients; number: number },
-): WithContext<SchemaRecipe> {
+  shown: VersionRow,
+  versions: VersionRow[],
+  foodOf: FoodLookup,
+): RecipeNode {
   const steps = methodSteps(recipe.method);
-  const doc: WithContext<SchemaRecipe> = {
-    '@context': 'https://schema.org',
+  const doc: RecipeNode = {
     '@type': 'Recipe',
     name: recipe.title,
-    recipeYield: `${version.servings} servings`,
-    recipeIngredient: version.lines.map((l) => l.input),
-    nutrition: nutritionInformation(version.perServing),
+    recipeYield: `${shown.servings} servings`,
+    recipeIngredient: shown.lines.map((l) => l.input),
+    nutrition: nutritionInformation(shown.perServing),
     dateCreated: recipe.createdAt.toISOString(),
-    version: String(version.number),
+    version: String(shown.number),
+    'hearthswap:versions': versions.map((v) => exportedVersion(v, foodOf)),
   };
   if (recipe.notes) doc.description = recipe.notes;
   if (steps.length) doc.recipeInstructions = steps.map((text) => ({ '@type': 'HowToStep', text }));
   return doc;
+}
+
+/** One recipe as a JSON-LD document. */
+export function toJsonLd(
+  recipe: { title: string; notes: string; method: string; createdAt: Date },
+  shown: VersionRow,
+  versions: VersionRow[],
+  foodOf: FoodLookup,
+): RecipeNode & { '@context': typeof JSONLD_CONTEXT } {
+  return { '@context': JSONLD_CONTEXT, ...recipeNode(recipe, shown, versions, foodOf) };
+}
+
+/** Every recipe of an account, each with all its versions, as one JSON-LD `@graph`. */
+export function recipesToJsonLd(
+  recipes: { recipe: { title: string; notes: string; method: string; createdAt: Date }; versions: VersionRow[] }[],
+  foodOf: FoodLookup,
+) {
+  return {
+    '@context': JSONLD_CONTEXT,
+    '@graph': recipes.filter((r) => r.versions.length > 0).map((r) => recipeNode(r.recipe, r.versions.at(-1)!, r.versions, foodOf)),
+  };
 }

@@ -1,4 +1,5 @@
 import { badRequest } from '../lib/http-error';
+import { exportedVersionsSchema, type ExportedVersion } from '../../shared/schemas/recipe-jsonld';
 
 export interface ImportedRecipe {
   title: string;
@@ -7,6 +8,8 @@ export interface ImportedRecipe {
   method: string;
   notes: string;
   format: 'json-ld' | 'text';
+  /** every version with its foods and grams, from Hearthswap's own export (`hearthswap:versions`) */
+  versions?: ExportedVersion[];
 }
 
 const MAX_SERVINGS = 100;
@@ -99,7 +102,19 @@ function fromJsonLd(doc: unknown): ImportedRecipe {
     method: textOf(node.recipeInstructions).trim(),
     notes: typeof node.description === 'string' ? node.description.trim() : '',
     format: 'json-ld',
+    ...(node['hearthswap:versions'] !== undefined ? { versions: exportedVersions(node['hearthswap:versions']) } : {}),
   };
+}
+
+/** Hearthswap's own version history in a file: checked whole, a failure naming the field in the file. */
+function exportedVersions(value: unknown): ExportedVersion[] {
+  const parsed = exportedVersionsSchema.safeParse(value);
+  if (!parsed.success) {
+    const issue = parsed.error.issues[0];
+    const field = ['hearthswap:versions', ...issue.path].join('.');
+    throw badRequest(`file: ${field}: ${issue.message}`, { fieldErrors: { [field]: [issue.message] } });
+  }
+  return parsed.data;
 }
 
 const HEADING = /^\s*(?:#{1,6}\s*)?([A-Za-z][A-Za-z ]{1,40}?)\s*:?\s*$/;

@@ -11,6 +11,7 @@ import type { CatalogueFood } from '../../shared/food';
 import type { StoredFood } from './catalogue';
 import type { FoodEngine } from './food-engine';
 import { HttpError, badRequest, conflict, notFound } from '../lib/http-error';
+import type { ExportedLine, ExportedVersion } from '../../shared/schemas/recipe-jsonld';
 
 function formatGramsForText(grams: number) {
   return grams >= 10 ? String(Math.round(grams)) : String(Math.round(grams * 10) / 10);
@@ -105,6 +106,7 @@ function recipeSummary(r: Recipe, info: { count: number; latest: RecipeVersion |
     versionCount: info?.count ?? 0,
     latest: info?.latest ? versionSummary(info.latest) : null,
     hasPhoto: r.photoKey !== null,
+    thumbnailUrl: r.photoKey ? `/api/recipes/${r.id}/photo?size=thumb&v=${encodeURIComponent(r.photoKey)}` : null,
     updatedAt: r.updatedAt.toISOString(),
     createdAt: r.createdAt.toISOString(),
   };
@@ -244,7 +246,7 @@ export async function updateRecipe(
 }
 
 /**
- * Points the recipe at a newly stored photo. The row is locked and the revision bumped in one
+ * Points the recipe at a newly stored photo (or at none). The row is locked and the revision bumped in one
  * transaction, so a concurrent edit and a photo can never be acknowledged as the same revision;
  * a stale `revision` (when the client sends one) is a 409. Returns the photo key it replaced.
  */
@@ -253,14 +255,14 @@ export async function setRecipePhoto(
   viewer: User,
   id: number,
   revision: number | undefined,
-  photo: { key: string; type: string },
+  photo: { key: string; type: string } | null,
 ): Promise<{ recipe: Recipe; previousKey: string | null }> {
   return sequelize.transaction(async (transaction) => {
     const recipe = await findOwnRecipe(viewer, id, transaction);
     if (revision !== undefined) checkRevision(recipe, revision);
     const previousKey = recipe.photoKey;
-    recipe.photoKey = photo.key;
-    recipe.photoType = photo.type;
+    recipe.photoKey = photo?.key ?? null;
+    recipe.photoType = photo?.type ?? null;
     recipe.revision += 1;
     await recipe.save({ transaction });
     return { recipe, previousKey };
@@ -362,4 +364,95 @@ export async function duplicateRecipe(sequelize: Sequelize, engine: FoodEngine, 
 export async function ownRecipeTitles(viewer: User): Promise<Set<string>> {
   const own = await Recipe.findAll({ where: { ownerId: viewer.id, deletedAt: null }, attributes: ['title'] });
   return new Set(own.map((r) => r.title.trim().toLowerCase()));
+}
+
+/** Every version of a recipe, oldest first, as stored. */
+export async function versionRows(recipe: Recipe) {
+  return RecipeVersion.findAll({ where: { recipeId: recipe.id }, order: [['number', 'ASC']] });
+}
+
+/** The account's recipes (not deleted), each with every version, for the whole-book export. */
+export async function ownRecipesWithVersions(viewer: User) {
+  const recipes = await Recipe.findAll({ where: { ownerId: viewer.id, deletedAt: null }, order: [['createdAt', 'ASC']] });
+  const versions = recipes.length ? await RecipeVersion.findAll({ where: { recipeId: recipes.map((r) => r.id) }, order: [['number', 'ASC']] }) : [];
+  return recipes.map((recipe) => ({ recipe, versions: versions.filter((v) => v.recipeId === recipe.id) }));
+}
+
+/**
+ * The food a line of an exported version names, as this viewer can use it: an SR28 food by its NDB
+ * number; a label food by its own id when the viewer can use it (hidden ones too), else by name.
+ */
+function importedFood(engine: FoodEngine, viewer: User, line: ExportedLine, sr28: Map<string, CatalogueFood>): CatalogueFood | null {
+  const ref = line['hearthswap:food'];
+  if (!ref) return null;
+  if (ref['hearthswap:source'] === 'usda-sr28') return sr28.get(ref['hearthswap:sourceId']) ?? null;
+  for (const food of engine.custom.values()) {
+    if (food.sourceId === ref['hearthswap:sourceId'] && (food.ownerId === viewer.id || canSeeFood(food, viewer))) return food;
+  }
+  const wanted = ref.name.trim().toLowerCase();
+  return ownFoodsFor(engine, viewer).find((f) => f.name.trim().toLowerCase() === wanted) ?? null;
+}
+
+/** Lines of an exported version as stored lines: the same text, food and grams; an unknown food is matched by the text, keeping the grams. */
+function importedLines(engine: FoodEngine, viewer: User, version: ExportedVersion, sr28: Map<string, CatalogueFood>): StoredLine[] {
+  return version['hearthswap:lines'].map((line) => {
+    const food = importedFood(engine, viewer, line, sr28);
+    const ref = line['hearthswap:food'];
+    if (ref && !food) {
+      const [matched] = normaliseLines(
+        engine,
+        [{ input: line['hearthswap:text'], grams: line['hearthswap:grams'] }],
+        (f) => canSeeFood(f as StoredFood, viewer),
+        ownFoodsFor(engine, viewer),
+      );
+      return {
+        ...matched,
+        warnings: [...(matched.warnings ?? []), `The file's food “${ref.name}” is not one you can use here; matched the line's text instead.`],
+      };
+    }
+    const stored: StoredLine = { input: line['hearthswap:text'], foodId: food?.id ?? null, foodName: food?.name ?? null, grams: line['hearthswap:grams'] };
+    if (line['hearthswap:warnings']?.length) stored.warnings = line['hearthswap:warnings'];
+    if (line['hearthswap:checkMatch']) stored.checkMatch = true;
+    return stored;
+  });
+}
+
+/** A recipe from Hearthswap's own export: every version in order, with its kind, note, targets, foods and grams. */
+export async function importRecipeWithVersions(
+  sequelize: Sequelize,
+  engine: FoodEngine,
+  viewer: User,
+  input: { title: string; servings: number; notes: string; method: string },
+  versions: ExportedVersion[],
+) {
+  const sr28 = new Map<string, CatalogueFood>();
+  for (const food of engine.byId.values()) if (food.source === 'usda-sr28') sr28.set(food.sourceId, food);
+  const ordered = [...versions].sort((a, b) => a['hearthswap:number'] - b['hearthswap:number']);
+  const prepared = ordered.map((v) => ({ version: v, lines: importedLines(engine, viewer, v, sr28) }));
+  return sequelize.transaction(async (transaction) => {
+    const recipe = await Recipe.create(
+      { ownerId: viewer.id, title: input.title, servings: input.servings, notes: input.notes, method: input.method },
+      { transaction },
+    );
+    const numbers = new Map<number, number>();
+    for (const { version, lines } of prepared) {
+      const parent = version['hearthswap:parentNumber'];
+      const saved = await insertVersion(
+        engine,
+        recipe,
+        {
+          kind: version['hearthswap:kind'],
+          lines,
+          servings: version['hearthswap:servings'],
+          targets: version['hearthswap:targets'],
+          note: version['hearthswap:note'],
+          parentNumber: parent != null ? (numbers.get(parent) ?? null) : null,
+        },
+        viewer.id,
+        transaction,
+      );
+      numbers.set(version['hearthswap:number'], saved.number);
+    }
+    return recipe;
+  });
 }

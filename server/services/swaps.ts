@@ -4,8 +4,9 @@ import type { FoodEngine } from './food-engine';
 import type { ApprovedSwap } from './candidates';
 import { foodSummary } from './foods';
 import { badRequest, notFound } from '../lib/http-error';
+import type { Swap as SwapView } from '../../shared/schemas/swaps';
 
-export function swapView(engine: FoodEngine, swap: Swap) {
+export function swapView(engine: FoodEngine, swap: Swap): SwapView {
   const from = swap.fromFoodId ? engine.byId.get(swap.fromFoodId) : undefined;
   const to = engine.byId.get(swap.toFoodId);
   return {

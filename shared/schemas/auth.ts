@@ -44,6 +44,18 @@ export const updateMeSchema = z
   .strict();
 export type UpdateMeInput = z.infer<typeof updateMeSchema>;
 
+/** `POST /api/auth/password`: the current password proves it is the account's owner. */
+export const changePasswordSchema = z.object({
+  currentPassword: z.string({ message: 'Enter your current password.' }).min(1, { message: 'Enter your current password.' }).max(200),
+  newPassword: password,
+});
+export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;
+
+/** `DELETE /api/auth/me`: the password again, so a borrowed signed-in browser cannot delete the account. */
+export const deleteAccountSchema = z.object({
+  password: z.string({ message: 'Enter your password.' }).min(1, { message: 'Enter your password.' }).max(200),
+});
+
 export const updateRoleSchema = z.object({ role: z.enum(ROLES_USER, { message: 'Choose cook, coach or admin.' }) });
 
 export interface PublicUser {

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { ROLES } from '../food';
 import { MIN_SERVING, panelIssues, type LabelPanel } from '../label-food';
-import type { FoodDetail } from './analyze';
+import type { FoodDetail, FoodSummary } from './analyze';
 
 export const foodSearchQuerySchema = z.object({
   q: z
@@ -127,4 +127,22 @@ export interface MyFood extends FoodDetail {
 
 export interface SavedFoodResponse extends MyFood {
   warnings: string[];
+}
+
+/** One hit of GET /api/foods/search. */
+export interface FoodSearchHit extends FoodSummary {
+  foodGroup: string;
+  roles: string[];
+  branded: boolean;
+  kcalPer100g: number;
+  proteinPer100g: number;
+  /** 0..1, how well the name answers the query */
+  score: number;
+  /** a food entered from a label: 'you' entered it, or your 'coach' did; null for catalogue foods */
+  owner: 'you' | 'coach' | null;
+}
+
+export interface FoodSearchResponse {
+  query: string;
+  results: FoodSearchHit[];
 }

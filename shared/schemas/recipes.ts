@@ -26,17 +26,20 @@ const title = z
 const notes = z.string().max(20_000, { message: 'notes are at most 20,000 characters.' });
 const revision = z.number({ message: 'revision is required: send the revision you read.' }).int().min(1);
 
-/** A line to save: as typed ({ input, foodId?, grams? }) or as a rewrite returns it ({ food: { id }, grams }). */
+/**
+ * A line to save: as a rewrite returns it ({ food: { id }, grams, input? }) or as typed ({ input, foodId?, grams? }).
+ * The food form comes first: a rewrite line with its text must keep its food, not be matched again from the text.
+ */
 export const versionLineSchema = z.union([
-  z.object({
-    input: z.string().max(1_000),
-    foodId: z.number().int().positive().nullable().optional(),
-    grams: z.number().min(0).max(100_000).optional(),
-  }),
   z.object({
     food: z.object({ id: z.number().int().positive(), name: z.string().max(500).optional() }),
     grams: z.number({ message: 'grams must be a number.' }).min(0).max(100_000),
     input: z.string().max(1_000).optional(),
+  }),
+  z.object({
+    input: z.string().max(1_000),
+    foodId: z.number().int().positive().nullable().optional(),
+    grams: z.number().min(0).max(100_000).optional(),
   }),
 ]);
 export type VersionLineInput = z.infer<typeof versionLineSchema>;
@@ -68,6 +71,9 @@ export const photoUploadFieldsSchema = z.object({
   revision: z.coerce.number({ message: 'revision must be the revision you read.' }).int().min(1).optional(),
 });
 
+/** `GET /api/recipes/:id/photo?size=thumb` for the list's small square; the full photo without it. */
+export const photoQuerySchema = z.object({ size: z.enum(['full', 'thumb'], { message: 'size is full or thumb.' }).default('full') });
+
 export const deleteRecipeSchema = z.object({ revision: z.coerce.number({ message: 'revision is required: send the revision you read.' }).int().min(1) });
 
 export const createVersionSchema = z.object({
@@ -82,9 +88,12 @@ export const createVersionSchema = z.object({
   parentNumber: z.number().int().min(1).optional(),
 });
 
+export const RECIPE_SORTS = ['updated', 'title', 'kcal', 'protein'] as const;
+export type RecipeSort = (typeof RECIPE_SORTS)[number];
+
 export const recipeListQuerySchema = z.object({
   q: z.string().max(200).optional(),
-  sort: z.enum(['updated', 'title', 'kcal', 'protein'], { message: 'sort is one of updated, title, kcal, protein.' }).default('updated'),
+  sort: z.enum(RECIPE_SORTS, { message: 'sort is one of updated, title, kcal, protein.' }).default('updated'),
 });
 
 export const idParam = z.object({ id: z.coerce.number({ message: 'id must be a number.' }).int().positive({ message: 'id must be positive.' }) });
@@ -125,6 +134,8 @@ export interface RecipeSummary {
   versionCount: number;
   latest: VersionSummary | null;
   hasPhoto: boolean;
+  /** a small square of the photo for lists (`GET /api/recipes/:id/photo?size=thumb`) */
+  thumbnailUrl: string | null;
   updatedAt: string;
   createdAt: string;
 }

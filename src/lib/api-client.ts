@@ -2,6 +2,7 @@
  * The one way the client talks to the server: same-origin fetch with the session cookie,
  * a CSRF token on every state-changing request, and errors turned into ApiError.
  */
+import { countOf } from './words';
 
 export type FieldErrors = Record<string, string>;
 
@@ -99,7 +100,7 @@ export function fieldErrorsFrom(details: unknown): FieldErrors {
 function readableStatusMessage(status: number, retryAfterSeconds: number | null): string {
   if (status === 429) {
     if (retryAfterSeconds && retryAfterSeconds > 0) {
-      const wait = retryAfterSeconds < 90 ? `${retryAfterSeconds} second${retryAfterSeconds === 1 ? '' : 's'}` : `${Math.ceil(retryAfterSeconds / 60)} minutes`;
+      const wait = retryAfterSeconds < 90 ? countOf(retryAfterSeconds, 'second') : `${Math.ceil(retryAfterSeconds / 60)} minutes`;
       return `Too many attempts in a short time. Please wait ${wait} and try again.`;
     }
     return 'Too many attempts in a short time. Please wait a minute and try again.';

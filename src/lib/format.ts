@@ -5,9 +5,7 @@
 import { gramDigits } from '../../shared/shown-figures';
 import type { UnitSystem } from './user';
 
-/** NIST Handbook 44 Appendix C: 1 oz (avoirdupois) = 28.349523125 g; 1 lb = 16 oz = 453.59237 g. */
-export const GRAMS_PER_OUNCE = 28.349523125;
-export const OUNCES_PER_POUND = 16;
+import { GRAMS_PER_OUNCE, OUNCES_PER_POUND } from '../../shared/units';
 
 const formatters = new Map<string, Intl.NumberFormat>();
 

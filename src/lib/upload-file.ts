@@ -14,6 +14,8 @@ export interface UploadProgress {
 export interface UploadOptions {
   /** the multipart field the server reads; "file" unless told */
   fieldName?: string;
+  /** text fields sent beside the file (e.g. the recipe's revision) */
+  fields?: Record<string, string>;
   onProgress?: (progress: UploadProgress) => void;
   signal?: AbortSignal;
 }
@@ -45,6 +47,7 @@ function sendOnce<T>(path: string, file: Blob, token: string, options: UploadOpt
       return;
     }
     const form = new FormData();
+    for (const [name, value] of Object.entries(options.fields ?? {})) form.append(name, value);
     form.append(options.fieldName ?? 'file', file, file instanceof File ? file.name : 'upload');
 
     const xhr = new XMLHttpRequest();

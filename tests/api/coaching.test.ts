@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import request from 'supertest';
-import { agentWithCsrf, createTestApp, signUp, type TestApp } from '../helpers/test-app';
+import { agentWithCsrf, createTestApp, linkedCoachAndClient, invitationTokenFrom as tokenFrom, signUp, type TestApp } from '../helpers/test-app';
 import { DEMO_ACCOUNTS } from '../../server/seeders/demo-accounts';
 import { Invitation } from '../../server/models';
 
@@ -12,29 +12,11 @@ afterAll(async () => {
   await t.close();
 });
 
-function tokenFrom(text: string) {
-  const m = text.match(/\/invitations\/([A-Za-z0-9_-]+)/);
-  if (!m) throw new Error(`no invitation link in: ${text}`);
-  return m[1];
-}
+const coachWithClient = () => linkedCoachAndClient(t);
 
 async function foodId(q: string) {
   const res = await request(t.app).get('/api/foods/search').query({ q, limit: 1 }).expect(200);
   return res.body.results[0].id as number;
-}
-
-/** A coach, a cook linked to them through an accepted invitation. */
-async function coachWithClient() {
-  const coach = await signUp(t.app, 'coach');
-  const client = await signUp(t.app, 'cook');
-  await coach.agent.post('/api/clients/invitations').set('X-CSRF-Token', coach.csrf).send({ email: client.email }).expect(201);
-  const mail = t
-    .outbox()
-    .filter((m) => m.to.includes(client.email))
-    .at(-1)!;
-  const token = tokenFrom(mail.text);
-  await client.agent.post(`/api/invitations/${token}/accept`).set('X-CSRF-Token', client.csrf).expect(200);
-  return { coach, client, token };
 }
 
 describe('invitations by e-mail', () => {

@@ -1,12 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import sharp from 'sharp';
-import { createTestApp, signUp, type TestApp } from '../helpers/test-app';
+import { createTestApp, linkedCoachAndClient, signUp, type TestApp } from '../helpers/test-app';
 import { openServices } from '../../server/boot';
 import { loadConfig } from '../../server/config';
 import { inject } from 'vitest';
 import { HIDE_IMPOSSIBLE_FOODS } from '../../server/migrations/0006-my-foods';
 import { DEMO_ACCOUNTS } from '../../server/seeders/demo-accounts';
+import { TORTILLA_LABEL } from '../helpers/label-panels';
 
 let t: TestApp;
 let services: Awaited<ReturnType<typeof openServices>>;
@@ -19,39 +20,15 @@ afterAll(async () => {
   await t.close();
 });
 
+const coachWithClient = () => linkedCoachAndClient(t);
+
 type Agent = Awaited<ReturnType<typeof signUp>>;
 
 /** An invented low-carb tortilla: 45 g = "1 tortilla". */
-const TORTILLA = {
-  name: 'Cloudmeadow carb-smart tortilla',
-  servingSizeG: 45,
-  servingLabel: '1 tortilla',
-  kcal: 70,
-  fatG: 2.5,
-  satFatG: 0,
-  carbsG: 19,
-  fiberG: 14,
-  sugarG: 0.5,
-  proteinG: 6,
-  sodiumMg: 450,
-  roles: ['flatbread-wrap'],
-};
+const TORTILLA = { name: 'Cloudmeadow carb-smart tortilla', ...TORTILLA_LABEL, roles: ['flatbread-wrap'] };
 
 async function addFood(who: Agent, body: object = TORTILLA, status = 201) {
   return who.agent.post('/api/foods').set('X-CSRF-Token', who.csrf).send(body).expect(status);
-}
-
-async function coachWithClient() {
-  const coach = await signUp(t.app, 'coach');
-  const client = await signUp(t.app, 'cook');
-  await coach.agent.post('/api/clients/invitations').set('X-CSRF-Token', coach.csrf).send({ email: client.email }).expect(201);
-  const mail = t
-    .outbox()
-    .filter((m) => m.to.includes(client.email))
-    .at(-1)!;
-  const token = /\/invitations\/([A-Za-z0-9_-]+)/.exec(mail.text)![1];
-  await client.agent.post(`/api/invitations/${token}/accept`).set('X-CSRF-Token', client.csrf).expect(200);
-  return { coach, client };
 }
 
 describe('adding a food from its label', () => {

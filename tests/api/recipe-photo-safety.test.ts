@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import sharp from 'sharp';
-import { createTestApp, signUp, type TestApp } from '../helpers/test-app';
+import { binaryBody, createTestApp, signUp, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -71,5 +71,53 @@ describe('photo uploads and the recipe revision', () => {
     const res = await agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).attach('file', truncated, 'ziti.png').expect(400);
     expect(res.body.error.message).toContain('This file is not a readable photo');
     expect((await agent.get(`/api/recipes/${recipe.id}`).expect(200)).body).toMatchObject({ revision: 1, photoUrl: null });
+  });
+});
+
+describe('photo words, removal and thumbnails', () => {
+  it('says "This file is not a photo" under the file field, naming a format it cannot use', async () => {
+    const { agent, csrf, recipe } = await cookWithRecipe();
+    const text = await agent
+      .post(`/api/recipes/${recipe.id}/photo`)
+      .set('X-CSRF-Token', csrf)
+      .attach('file', Buffer.from('just some words'), 'a.jpg')
+      .expect(400);
+    expect(text.body.error.message).toBe('file: This file is not a photo. Upload a JPEG, PNG or WebP picture.');
+    expect(text.body.error.details.fieldErrors.file).toEqual(['This file is not a photo. Upload a JPEG, PNG or WebP picture.']);
+    const gif = await sharp({ create: { width: 20, height: 20, channels: 3, background: '#ffffff' } })
+      .gif()
+      .toBuffer();
+    const res = await agent.post(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).attach('file', gif, 'a.gif').expect(400);
+    expect(res.body.error.details.fieldErrors.file[0]).toBe('This file is not a photo Hearthswap can read (GIF). Upload a JPEG, PNG or WebP picture.');
+  });
+
+  it('keeps a square thumbnail for the recipe book list and removes the photo with the current revision', async () => {
+    const { agent, csrf, recipe } = await cookWithRecipe();
+    const jpeg = await sharp({ create: { width: 1800, height: 1200, channels: 3, background: '#7a9e3f' } })
+      .jpeg()
+      .toBuffer();
+    const up = await agent
+      .post(`/api/recipes/${recipe.id}/photo`)
+      .set('X-CSRF-Token', csrf)
+      .field('revision', '1')
+      .attach('file', jpeg, 'ziti.jpg')
+      .expect(201);
+    expect(up.body.revision).toBe(2);
+    const listed = (await agent.get('/api/recipes').expect(200)).body.recipes.find((r: { id: number }) => r.id === recipe.id);
+    expect(listed.thumbnailUrl).toMatch(new RegExp(`^/api/recipes/${recipe.id}/photo\\?size=thumb&v=`));
+    const thumb = await agent.get(listed.thumbnailUrl).buffer(true).parse(binaryBody).expect(200);
+    const meta = await sharp(thumb.body as Buffer).metadata();
+    expect([meta.format, meta.width, meta.height]).toEqual(['webp', 240, 240]);
+    await agent.get(`/api/recipes/${recipe.id}/photo?size=huge`).expect(400);
+
+    // a stale revision changes nothing
+    await agent.delete(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).send({ revision: 1 }).expect(409);
+    expect((await agent.get(`/api/recipes/${recipe.id}`).expect(200)).body.photoUrl).not.toBeNull();
+    const removed = await agent.delete(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', csrf).send({ revision: 2 }).expect(200);
+    expect(removed.body).toMatchObject({ photoUrl: null, hasPhoto: false, thumbnailUrl: null, revision: 3 });
+    await agent.get(`/api/recipes/${recipe.id}/photo`).expect(404);
+    await agent.get(`/api/recipes/${recipe.id}/photo?size=thumb`).expect(404);
+    const other = await signUp(t.app);
+    await other.agent.delete(`/api/recipes/${recipe.id}/photo`).set('X-CSRF-Token', other.csrf).send({ revision: 3 }).expect(404);
   });
 });

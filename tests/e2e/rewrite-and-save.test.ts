@@ -54,6 +54,25 @@ describe('paste, rewrite, save, compare', () => {
     await page.getByRole('textbox', { name: 'Recipe title' }).fill('Lighter lasagna');
     await page.getByRole('button', { name: 'Save to my recipe book' }).click();
     await expect.poll(() => page.url(), { timeout: 15_000 }).toMatch(/\/recipes\/\d+/);
+    // the rewrite is saved in the cook's words: their measures, the new foods' common names
+    const id = Number(/\/recipes\/(\d+)/.exec(page.url())![1]);
+    type SavedLine = { input: string; foodId: number | null; foodName: string | null };
+    const version = async (n: number) =>
+      ((await (await page.request.get(`${live.server.url}/api/recipes/${id}/versions/${n}`)).json()) as { lines: SavedLine[] }).lines;
+    const [written, rewritten] = [await version(1), await version(2)];
+    expect(written.map((l) => l.input)).toEqual(LASAGNA.split('\n'));
+    for (const line of rewritten) {
+      expect(line.input, line.input).not.toMatch(/^\d+(?:\.\d+)? g [A-Z]/);
+      expect(line.input).not.toBe(line.foodName);
+    }
+    const swapped = rewritten.filter((l) => !written.some((w) => w.foodId === l.foodId));
+    expect(swapped.length).toBeGreaterThan(0);
+    for (const line of swapped) expect(line.input).toMatch(/^\d[\d\s/]* (?:cups?|oz|lb|tbsp|g) /);
+    // the recipe page shows the line as written with the matched food beneath
+    await page.goto(`${live.server.url}/recipes/${id}?version=2`);
+    await expect.poll(() => page.getByText(swapped[0].input).first().isVisible(), { timeout: 10_000 }).toBe(true);
+    expect(await page.getByText(`matched: ${swapped[0].foodName}`).first().isVisible()).toBe(true);
+    await screenshot(page, 'rewrite-saved-lines');
 
     await page.goto(`${live.server.url}/recipes`);
     await expect.poll(() => page.getByRole('link', { name: 'Lighter lasagna' }).first().isVisible(), { timeout: 10_000 }).toBe(true);

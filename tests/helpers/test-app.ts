@@ -22,7 +22,10 @@ export interface TestApp {
 }
 
 /** The real app on the test database; each call is a fresh process-like instance. */
-export async function createTestApp(limits: Partial<RateLimitConfig> = {}, options: { mailer?: Mailer; config?: Partial<AppConfig> } = {}): Promise<TestApp> {
+export async function createTestApp(
+  limits: Partial<RateLimitConfig> = {},
+  options: { mailer?: Mailer; config?: Partial<AppConfig>; logError?: (error: unknown) => void } = {},
+): Promise<TestApp> {
   const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), ...inject('s3Env') }, options.config);
   config.limits = {
     ...config.limits,
@@ -37,7 +40,12 @@ export async function createTestApp(limits: Partial<RateLimitConfig> = {}, optio
   };
   const services = await openServices(config);
   const mail = await createMailContext(config, { APP_URL: 'http://hearthswap.test' }, services.sessionPool);
-  const app = createApp({ config, ...services, mail: options.mailer && mail.mail ? { ...mail.mail, mailer: options.mailer } : mail.mail });
+  const app = createApp({
+    config,
+    ...services,
+    logError: options.logError,
+    mail: options.mailer && mail.mail ? { ...mail.mail, mailer: options.mailer } : mail.mail,
+  });
   return {
     app,
     config,
@@ -73,4 +81,32 @@ export async function signUp(app: Express, role: 'cook' | 'coach' = 'cook') {
     .send({ email, password, displayName: `Test ${role}`, role })
     .expect(201);
   return { agent, csrf, email, password, user: res.body };
+}
+
+/** The invitation token in a mail's text (the link /invitations/<token>). */
+export function invitationTokenFrom(text: string): string {
+  const m = text.match(/\/invitations\/([A-Za-z0-9_-]+)/);
+  if (!m) throw new Error(`no invitation link in: ${text}`);
+  return m[1];
+}
+
+/** A coach and a cook linked to them through an invitation the cook accepted from its e-mail. */
+export async function linkedCoachAndClient(t: TestApp) {
+  const coach = await signUp(t.app, 'coach');
+  const client = await signUp(t.app, 'cook');
+  await coach.agent.post('/api/clients/invitations').set('X-CSRF-Token', coach.csrf).send({ email: client.email }).expect(201);
+  const mail = t
+    .outbox()
+    .filter((m) => m.to.includes(client.email))
+    .at(-1)!;
+  const token = invitationTokenFrom(mail.text);
+  await client.agent.post(`/api/invitations/${token}/accept`).set('X-CSRF-Token', client.csrf).expect(200);
+  return { coach, client, token };
+}
+
+/** A supertest parser that keeps a binary answer (an image) as one Buffer in `res.body`. */
+export function binaryBody(res: { on(event: string, listener: (chunk: Buffer) => void): unknown }, cb: (error: Error | null, body: Buffer) => void) {
+  const chunks: Buffer[] = [];
+  res.on('data', (c: Buffer) => chunks.push(c));
+  res.on('end', () => cb(null, Buffer.concat(chunks)));
 }

@@ -2,6 +2,9 @@ import { Button } from '../../components/ui/button';
 import { Card } from '../../components/ui/card';
 import { Page } from '../../components/ui/page';
 import { AccountSettingsForm } from '../../features/auth/components/account-settings-form';
+import { ChangePasswordForm } from '../../features/auth/components/change-password-form';
+import { DeleteAccountForm } from '../../features/auth/components/delete-account-form';
+import { BOOK_EXPORT_HREF } from '../../features/recipes/recipe-links';
 import { ROLE_LABELS } from '../../lib/user';
 import { useAuth } from '../auth-context';
 import { useSignOutAction } from '../shell/use-sign-out-action';
@@ -31,11 +34,17 @@ export function AccountPage() {
       <Card title="Preferences">
         <AccountSettingsForm user={user} />
       </Card>
+      <Card title="Password">
+        <ChangePasswordForm />
+      </Card>
       <div>
         <Button variant="secondary" onClick={signOut} loading={signingOut} loadingLabel="Signing out…">
           Sign out
         </Button>
       </div>
+      <Card title="Delete your account">
+        <DeleteAccountForm exportHref={BOOK_EXPORT_HREF} onDeleted={() => window.location.replace('/?account=deleted')} />
+      </Card>
     </Page>
   );
 }

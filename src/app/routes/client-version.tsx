@@ -9,7 +9,7 @@ import { clientPath, positiveId } from '../../features/clients/client-paths';
 import { CommentThread } from '../../features/clients/components/comment-thread';
 import { VersionReview } from '../../features/clients/components/version-review';
 import { versionKindWords } from '../../features/clients/version-words';
-import { formatDayTime } from '../../features/clients/when';
+import { formatDateTime } from '../../lib/dates';
 import { unitSystemOf } from '../../lib/user';
 import { useAuth } from '../auth-context';
 
@@ -65,7 +65,7 @@ export function ClientVersionPage() {
   return (
     <Page
       title={`${recipe.data.title} · version ${v.number}`}
-      description={`${versionKindWords(v.kind)}, saved ${formatDayTime(v.createdAt)} by ${clientName}. Read-only: only ${clientName} can change it.`}
+      description={`${versionKindWords(v.kind)}, saved ${formatDateTime(v.createdAt)} by ${clientName}. Read-only: only ${clientName} can change it.`}
     >
       {back}
       <VersionReview version={v} unitSystem={unitSystemOf(user)} clientTargets={client?.targets ?? null} />

@@ -2,7 +2,7 @@ import { useNavigate, useParams } from 'react-router';
 import { Page } from '../../components/ui/page';
 import { LoadingState } from '../../components/ui/spinner';
 import { useToast } from '../../components/ui/toast';
-import { InvitationPanel } from '../../features/coach/components/invitation-panel';
+import { InvitationPanel } from '../../features/invitations/components/invitation-panel';
 import { useAuth } from '../auth-context';
 
 /** The link in a coach's invitation e-mail. Open to everyone; accepting needs a signed-in cook. */

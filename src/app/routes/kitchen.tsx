@@ -37,6 +37,7 @@ export function KitchenPage() {
   // A new recipe empties the paste box too.
   const [round, setRound] = useState(0);
   const opening = useOpenFromBook(kitchen, () => setRound((n) => n + 1));
+  const [search] = useSearchParams();
 
   return (
     <Page
@@ -57,6 +58,7 @@ export function KitchenPage() {
         )
       }
     >
+      {search.get('account') === 'deleted' && <Alert tone="success">Your account is deleted, with its recipes, foods and sign-ins.</Alert>}
       {opening}
       {kitchen.source && <EditingSavedRecipe kitchen={kitchen} />}
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">

@@ -1,5 +1,5 @@
 import { Page } from '../../components/ui/page';
-import { MyCoachView } from '../../features/coach/components/my-coach-view';
+import { MyCoachView } from '../../features/my-coach/components/my-coach-view';
 import { roleWords } from '../../features/foods/food-words';
 import { useAuth } from '../auth-context';
 

@@ -13,9 +13,10 @@ import { ImportRecipeDialog } from '../../features/recipes/components/import-rec
 import { RecipeList } from '../../features/recipes/components/recipe-list';
 import { RecipeListControls } from '../../features/recipes/components/recipe-list-controls';
 import { recipePath } from '../../features/recipes/recipe-links';
-import { useDebouncedValue } from '../../features/recipes/use-debounced-value';
+import { useDebounce } from 'use-debounce';
 import { deletedRecipeFrom } from '../../features/recipes/deleted-recipe-state';
 import { errorMessage } from '../../lib/api-client';
+import { countOf } from '../../lib/words';
 
 function UndoDelete() {
   const location = useLocation();
@@ -59,7 +60,7 @@ export function RecipeBookPage() {
   const [typed, setTyped] = useState(params.get('q') ?? '');
   const sortParam = params.get('sort');
   const sort: RecipeSort = isRecipeSort(sortParam) ? sortParam : 'updated';
-  const q = useDebouncedValue(typed.trim(), 250);
+  const [q] = useDebounce(typed.trim(), 250);
   const recipes = useRecipes(q, sort);
 
   // The address can change under the page (the "Recipe book" link, back and forward): follow it.
@@ -129,7 +130,7 @@ export function RecipeBookPage() {
       <div className="flex flex-col gap-4">
         <RecipeListControls query={typed} onQueryChange={setTyped} sort={sort} onSortChange={(next) => updateParams({ sort: next })} />
         <p className="text-sm text-ink-soft" aria-live="polite">
-          {q ? `${count} recipe${count === 1 ? '' : 's'} with “${q}” in the title.` : `${count} recipe${count === 1 ? '' : 's'} in the book.`}
+          {q ? `${countOf(count, 'recipe')} with “${q}” in the title.` : `${countOf(count, 'recipe')} in the book.`}
           {recipes.isFetching && !recipes.isPending && <span className="ml-2">Updating…</span>}
         </p>
         {count === 0 ? (

@@ -22,11 +22,12 @@ import { RecipePhotoCard } from '../../features/recipes/components/recipe-photo-
 import { VersionLinesCard } from '../../features/recipes/components/version-lines-card';
 import { VersionTimeline } from '../../features/recipes/components/version-timeline';
 import type { DeletedRecipeState } from '../../features/recipes/deleted-recipe-state';
-import { formatWhen } from '../../features/recipes/format-when';
+import { formatWhen } from '../../lib/dates';
 import { positiveInt, recipePath } from '../../features/recipes/recipe-links';
 import { errorMessage, isApiError } from '../../lib/api-client';
 import { CommentThread } from '../../features/clients/components/comment-thread';
 import { useAuth } from '../auth-context';
+import { countOf } from '../../lib/words';
 
 const backToBook = (
   <Link to="/recipes" className={buttonClasses({ variant: 'secondary', size: 'sm' })}>
@@ -104,7 +105,7 @@ function RecipeView({ recipe, onReload }: { recipe: RecipeDetail; onReload: () =
       title={recipe.title}
       description={
         <>
-          {versionCount} version{versionCount === 1 ? '' : 's'} saved · changed {formatWhen(recipe.updatedAt).toLowerCase()}
+          {countOf(versionCount, 'version')} saved · changed {formatWhen(recipe.updatedAt).toLowerCase()}
         </>
       }
       actions={

@@ -24,6 +24,7 @@ import {
   type ShoppingPick,
 } from '../../features/shopping/shopping-picks';
 import { isApiError } from '../../lib/api-client';
+import { countOf } from '../../lib/words';
 
 /** Server field messages like "items.2.portions" → { 2: message }. */
 function pickErrors(error: unknown): Record<number, string> {
@@ -109,7 +110,7 @@ export function ShoppingListPage() {
             <Card
               title="On the list"
               headingLevel={2}
-              description={picks.length === 0 ? 'Nothing yet: add a batch above.' : `${picks.length} batch${picks.length === 1 ? '' : 'es'}.`}
+              description={picks.length === 0 ? 'Nothing yet: add a batch above.' : `${countOf(picks.length, 'batch')}.`}
               actions={
                 picks.length > 0 && (
                   <Button variant="quiet" size="sm" onClick={() => change(() => [])}>

@@ -1,6 +1,6 @@
 import { Page } from '../../components/ui/page';
-import { SwapLibrary } from '../../features/coach/components/swap-library';
-import type { RenderFoodSearch } from '../../features/coach/food-search-slot';
+import { SwapLibrary } from '../../features/swaps/components/swap-library';
+import type { RenderFoodSearch } from '../../features/swaps/food-search-slot';
 import { FoodCombobox } from '../../features/foods/components/food-combobox';
 import { roleWords } from '../../features/foods/food-words';
 

@@ -1,7 +1,8 @@
 /** The Kitchen page's recipe and analysis in sessionStorage, so a reload of the tab keeps them. */
 import type { AnalyzeResponse, LineInput } from '../../../shared/schemas/analyze';
 import type { KitchenLine } from './kitchen-lines';
-import { LINE_FUNCTIONS, type LineFunction } from '../../../shared/culinary/types';
+import { z } from 'zod';
+import { LINE_FUNCTIONS } from '../../../shared/culinary/types';
 
 export const KITCHEN_STORAGE_KEY = 'hearthswap:kitchen';
 const VERSION = 1;
@@ -42,48 +43,21 @@ export function emptyKitchen(): KitchenSnapshot {
   return { pastedText: '', source: null, lines: [], servings: DEFAULT_SERVINGS, analysis: null, answered: null };
 }
 
-const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
-const isServings = (v: unknown): v is number => typeof v === 'number' && Number.isInteger(v) && v >= 1 && v <= 100;
-const optionalNumber = (v: unknown, min: number) => v === undefined || (typeof v === 'number' && Number.isFinite(v) && v >= min);
-
-function isLineInput(v: unknown): v is LineInput {
-  return isObject(v) && typeof v.input === 'string' && optionalNumber(v.foodId, 1) && optionalNumber(v.grams, 0);
-}
-
-function isKitchenLine(v: unknown): v is KitchenLine {
-  const role = (v as Record<string, unknown>)?.role;
-  return isLineInput(v) && typeof (v as Record<string, unknown>).key === 'string' && (role === undefined || LINE_FUNCTIONS.includes(role as LineFunction));
-}
-
+const servingsSchema = z.number().int().min(1).max(100);
+// Lines keep whatever else they carry (the line's key, its role); only what a request needs is checked.
+const lineInputSchema = z.looseObject({ input: z.string(), foodId: z.number().min(1).optional(), grams: z.number().min(0).optional() });
+const kitchenLineSchema = lineInputSchema.extend({ key: z.string(), role: z.enum(LINE_FUNCTIONS).optional() });
 // The analysis came from our own server; checking its outline is enough to catch a stale or foreign entry.
-function isAnalysis(v: unknown): v is AnalyzeResponse {
-  return isObject(v) && Array.isArray(v.lines) && isObject(v.totals) && isObject(v.perServing) && typeof v.totalGrams === 'number';
-}
-
-function isAnswered(v: unknown, analysis: AnalyzeResponse): v is AnsweredRequest {
-  return (
-    isObject(v) &&
-    Array.isArray(v.keys) &&
-    v.keys.every((k) => typeof k === 'string') &&
-    v.keys.length === analysis.lines.length &&
-    Array.isArray(v.lines) &&
-    v.lines.every(isLineInput) &&
-    isServings(v.servings)
-  );
-}
-
-function isSource(v: unknown): v is KitchenSource {
-  return (
-    isObject(v) &&
-    typeof v.recipeId === 'number' &&
-    v.recipeId >= 1 &&
-    typeof v.title === 'string' &&
-    typeof v.versionNumber === 'number' &&
-    v.versionNumber >= 1 &&
-    typeof v.latestNumber === 'number' &&
-    typeof v.openedLines === 'string'
-  );
-}
+const analysisSchema = z.looseObject({ lines: z.array(z.unknown()), totals: z.looseObject({}), perServing: z.looseObject({}), totalGrams: z.number() });
+const answeredSchema = z.looseObject({ keys: z.array(z.string()), lines: z.array(lineInputSchema), servings: servingsSchema });
+const sourceSchema = z.looseObject({
+  recipeId: z.number().min(1),
+  title: z.string(),
+  versionNumber: z.number().min(1),
+  latestNumber: z.number(),
+  openedLines: z.string(),
+});
+const snapshotSchema = z.looseObject({ v: z.literal(VERSION), lines: z.array(kitchenLineSchema), servings: servingsSchema });
 
 /** A snapshot read back from storage, or null when there is none or it is not one of ours. */
 export function parseKitchen(raw: string | null): KitchenSnapshot | null {
@@ -94,17 +68,20 @@ export function parseKitchen(raw: string | null): KitchenSnapshot | null {
   } catch {
     return null;
   }
-  if (!isObject(data) || data.v !== VERSION) return null;
-  if (!Array.isArray(data.lines) || !data.lines.every(isKitchenLine) || !isServings(data.servings)) return null;
-  const analysis = isAnalysis(data.analysis) ? data.analysis : null;
-  const answered = analysis && isAnswered(data.answered, analysis) ? data.answered : null;
+  const snapshot = snapshotSchema.safeParse(data);
+  if (!snapshot.success) return null;
+  const { lines, servings, analysis: storedAnalysis, answered: storedAnswered, source, pastedText } = snapshot.data;
+  const analysis = analysisSchema.safeParse(storedAnalysis);
+  const answered = answeredSchema.safeParse(storedAnswered);
+  const matches = analysis.success && answered.success && answered.data.keys.length === analysis.data.lines.length;
+  const parsedSource = sourceSchema.safeParse(source);
   return {
-    pastedText: typeof data.pastedText === 'string' ? data.pastedText : '',
-    source: isSource(data.source) ? data.source : null,
-    lines: data.lines,
-    servings: data.servings,
-    analysis: answered ? analysis : null,
-    answered,
+    pastedText: typeof pastedText === 'string' ? pastedText : '',
+    source: parsedSource.success ? (parsedSource.data as KitchenSource) : null,
+    lines: lines as KitchenLine[],
+    servings,
+    analysis: matches ? (analysis.data as unknown as AnalyzeResponse) : null,
+    answered: matches ? (answered.data as AnsweredRequest) : null,
   };
 }
 

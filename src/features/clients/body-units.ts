@@ -1,10 +1,5 @@
-/**
- * Body stats in US measures, converted to what the estimate takes (cm, kg).
- * NIST Handbook 44 Appendix C: 1 in = 2.54 cm exactly; 1 lb = 0.45359237 kg exactly.
- */
-export const CM_PER_INCH = 2.54;
-export const INCHES_PER_FOOT = 12;
-export const KG_PER_POUND = 0.45359237;
+/** Body stats in US measures, converted to what the estimate takes (cm, kg), by the NIST factors of shared/units.ts. */
+import { CM_PER_INCH, INCHES_PER_FOOT, KG_PER_POUND } from '../../../shared/units';
 
 export type BodyUnits = 'metric' | 'us';
 

@@ -1,6 +1,7 @@
 import { ACTIVITY_LEVELS, GOALS, SEXES, TARGET_LIMITS, type EstimateTargetsInput } from '../../../shared/schemas/targets';
-import { CM_PER_INCH, cmFromFeetInches, INCHES_PER_FOOT, kgFromPounds, KG_PER_POUND, type BodyUnits } from './body-units';
-import { readNumber } from './read-number';
+import { CM_PER_INCH, INCHES_PER_FOOT, KG_PER_POUND } from '../../../shared/units';
+import { cmFromFeetInches, kgFromPounds, type BodyUnits } from './body-units';
+import { readNumber } from '../../lib/read-number';
 
 /** The estimator as typed. Height and weight are read in the units chosen. */
 export interface EstimateValues {

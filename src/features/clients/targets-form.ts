@@ -1,7 +1,7 @@
 import type { ClientTargets } from '../../../shared/schemas/coaching';
 import type { TargetEstimate } from '../../../shared/schemas/targets';
 import { mealTargets, meetsShown } from '../../../shared/shown-figures';
-import { numberText, readNumber } from './read-number';
+import { numberText, readNumber } from '../../lib/read-number';
 
 /** The targets form as typed. */
 export interface TargetsValues {

@@ -1,21 +1,18 @@
 /** Household portions of a food in words, and the ingredient line a chosen amount becomes. */
 import type { FoodDetail } from '../../../shared/schemas/analyze';
+import { nounFor } from '../../lib/words';
 
 export type FoodPortion = FoodDetail['portions'][number];
 
 // Measures written as abbreviations or sizes read the same for one or many.
 const UNCHANGING = /^(?:tbsp|tsp|oz|fl oz|lb|g|kg|ml|l|large|medium|small|extra large|jumbo|cubic inch)$/i;
 
-/** "cup" → "cups" for more than one; "leaf" → "leaves"; "tbsp" and "large" stay as they are; half a cup is a "cup". */
+/** "cup" → "cups" for more than one; "leaf" → "leaves", "patty" → "patties" (pluralize); "tbsp" and "large" stay as they are; half a cup is a "cup". */
 export function pluralMeasure(head: string, quantity: number): string {
   if (quantity <= 1 || UNCHANGING.test(head) || /\d/.test(head)) return head;
   const words = head.split(' ');
   const last = words.pop() ?? '';
-  let plural: string;
-  if (/(?:ch|sh|s|x|z)$/i.test(last)) plural = `${last}es`;
-  else if (/(?:lea|loa|hal)f$/i.test(last)) plural = `${last.slice(0, -1)}ves`;
-  else plural = `${last}s`;
-  return [...words, plural].join(' ');
+  return [...words, nounFor(quantity, last)].join(' ');
 }
 
 /** A measure split into its unit and its note: "cup, shredded" → cup + shredded; "slice (1 oz)" → slice. */

@@ -1,6 +1,6 @@
 import { ALLERGEN_LABELS, type Allergen } from '../../../shared/allergens';
 import type { VersionKind } from '../../../shared/schemas/recipes';
-import type { PrepFood } from './api/get-prep';
+import { countOf } from '../../lib/words';
 
 export const MIN_PORTIONS = 1;
 export const MAX_PORTIONS = 100;
@@ -13,23 +13,18 @@ const KIND_WORDS: Record<VersionKind, string> = {
 
 /** "Version 3, an edit · written for 6 servings" */
 export function versionLine(version: { number: number; kind: VersionKind; servings: number }): string {
-  const servings = `${version.servings} serving${version.servings === 1 ? '' : 's'}`;
+  const servings = countOf(version.servings, 'serving');
   return `Version ${version.number}, ${KIND_WORDS[version.kind]} · written for ${servings}`;
 }
 
 export function portionsWord(portions: number): string {
-  return `${portions} portion${portions === 1 ? '' : 's'}`;
+  return countOf(portions, 'portion');
 }
 
 /** "Milk, Egg and Wheat" in the order the server gives (the fixed order of the nine). */
 export function allergenWords(allergens: readonly Allergen[]): string {
   const names = allergens.map((a) => ALLERGEN_LABELS[a]);
   return names.length <= 1 ? (names[0] ?? '') : `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`;
-}
-
-/** What the checks of one food on a list are remembered by: its catalogue id, or the line's words. */
-export function foodKey(food: PrepFood): string {
-  return food.id === null ? `name:${food.name.trim().toLowerCase()}` : `food:${food.id}`;
 }
 
 /** Each batch size keeps its own ticks: 6 portions and 12 portions are different shopping trips. */

@@ -21,6 +21,9 @@ export function exportHref(id: number, version?: number | null): string {
   return version ? `/api/recipes/${id}/export.jsonld?version=${version}` : `/api/recipes/${id}/export.jsonld`;
 }
 
+/** Every recipe of the signed-in cook with every version, as one JSON-LD file. */
+export const BOOK_EXPORT_HREF = '/api/recipes/export.jsonld';
+
 /** A whole positive number from a path or search parameter, else null. */
 export function positiveInt(value: string | null | undefined): number | null {
   if (!value || !/^\d+$/.test(value)) return null;

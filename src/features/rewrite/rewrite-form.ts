@@ -9,6 +9,7 @@ import type { LineInput } from '../../../shared/schemas/analyze';
 import { OBJECTIVES, targetsSchema, type RewriteRequest, type TargetsInput } from '../../../shared/schemas/rewrite';
 import type { RewriteObjective, Suggestion, TargetName } from '../../../shared/rewrite/types';
 import type { LineFunction } from '../../../shared/culinary/types';
+import { readRequiredNumber } from '../../lib/read-number';
 
 /** More protein and fewer calories than the dish as written: the starting point of a rewrite. */
 export const DEFAULT_PROTEIN_GAIN = 0.3;
@@ -31,7 +32,7 @@ interface AmountRule {
 }
 
 function readAmount(text: string, rule: AmountRule, ctx: z.RefinementCtx): number | typeof z.NEVER {
-  const n = numberFromText(text);
+  const n = readRequiredNumber(text);
   const fail = (message: string) => {
     ctx.addIssue({ code: 'custom', message });
     return z.NEVER;
@@ -42,14 +43,6 @@ function readAmount(text: string, rule: AmountRule, ctx: z.RefinementCtx): numbe
   if (rule.integer && !Number.isInteger(n)) return fail(`Use a whole number for ${rule.name}.`);
   if (n > rule.max) return fail(`${capitalise(rule.name)} is at most ${rule.max.toLocaleString('en-US')}${rule.unit ? ` ${rule.unit}` : ''}.`);
   return n;
-}
-
-/** "1,250" is 1250 (a thousands separator); "7,5" is 7.5 (a decimal comma); anything else not a plain number is NaN. */
-export function numberFromText(text: string): number {
-  let t = text.trim();
-  if (/^\d{1,3}(?:,\d{3})+(?:\.\d+)?$/.test(t)) t = t.replace(/,/g, '');
-  else t = t.replace(',', '.');
-  return /^-?(?:\d+(?:\.\d*)?|\.\d+)$/.test(t) ? Number(t) : Number.NaN;
 }
 
 function capitalise(text: string): string {

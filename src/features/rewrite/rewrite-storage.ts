@@ -2,6 +2,7 @@
  * The panel's targets and last rewrite in sessionStorage, beside the Kitchen's own state, so signing in
  * to save (or a reload) comes back to the same rewrite. Kept only for the recipe it was made for.
  */
+import { z } from 'zod';
 import type { RewriteRequest } from '../../../shared/schemas/rewrite';
 import type { RewriteFormInput } from './rewrite-form';
 import type { RewriteAnswer } from './rewrite-types';
@@ -17,35 +18,31 @@ export interface RewriteSnapshot {
   last: { request: RewriteRequest; answer: RewriteAnswer } | null;
 }
 
-const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
-
-function isFormInput(v: unknown): v is RewriteFormInput {
-  return (
-    isObject(v) &&
-    isObject(v.targets) &&
-    Object.values(v.targets).every((t) => typeof t === 'string') &&
-    typeof v.volumeTolerancePct === 'string' &&
-    typeof v.maxSwaps === 'string' &&
-    Array.isArray(v.lockedLines) &&
-    Array.isArray(v.excludedFoods) &&
-    Array.isArray(v.diet) &&
-    typeof v.objective === 'string'
-  );
-}
-
-function isLast(v: unknown): v is RewriteSnapshot['last'] {
-  if (v === null) return true;
-  return isObject(v) && isObject(v.request) && isObject(v.answer) && isObject(v.answer.before) && isObject(v.answer.after) && Array.isArray(v.answer.changes);
-}
+// The form as typed (every box is text) and the outline of our own server's answer: enough to refuse a stale or foreign entry.
+const formInputSchema = z.looseObject({
+  targets: z.record(z.string(), z.string()),
+  volumeTolerancePct: z.string(),
+  maxSwaps: z.string(),
+  lockedLines: z.array(z.unknown()),
+  excludedFoods: z.array(z.unknown()),
+  diet: z.array(z.unknown()),
+  objective: z.string(),
+});
+const lastSchema = z
+  .looseObject({
+    request: z.looseObject({}),
+    answer: z.looseObject({ before: z.looseObject({}), after: z.looseObject({}), changes: z.array(z.unknown()) }),
+  })
+  .nullable();
+const storedSchema = z.looseObject({ version: z.literal(VERSION), recipe: z.string(), values: formInputSchema, last: lastSchema });
 
 export function loadRewrite(storage: Storage | undefined, recipe: string): RewriteSnapshot | null {
   try {
     const raw = storage?.getItem(REWRITE_STORAGE_KEY);
     if (!raw) return null;
-    const parsed: unknown = JSON.parse(raw);
-    if (!isObject(parsed) || parsed.version !== VERSION || parsed.recipe !== recipe) return null;
-    if (!isFormInput(parsed.values) || !isLast(parsed.last)) return null;
-    return { recipe, values: parsed.values, last: parsed.last };
+    const parsed = storedSchema.safeParse(JSON.parse(raw));
+    if (!parsed.success || parsed.data.recipe !== recipe) return null;
+    return { recipe, values: parsed.data.values as RewriteFormInput, last: parsed.data.last as RewriteSnapshot['last'] };
   } catch {
     return null;
   }

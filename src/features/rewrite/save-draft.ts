@@ -1,8 +1,10 @@
 /** What "Save to my recipe book" sends: the recipe as written (version 1) and the rewrite (version 2). */
 import type { LineInput } from '../../../shared/schemas/analyze';
 import type { RewriteRequest, TargetsInput } from '../../../shared/schemas/rewrite';
+import { commonFoodName, rewrittenLineText } from '../../../shared/rewritten-line-text';
 import { orderedChanges } from './rewrite-words';
 import type { RewriteAnswer } from './rewrite-types';
+import { countOf } from '../../lib/words';
 
 export type WrittenLine = { input: string; foodId?: number; grams?: number };
 export type RewrittenLine = { food: { id: number; name: string }; grams: number; input?: string } | { input: string };
@@ -35,17 +37,26 @@ function wholeGrams(g: number): string {
 }
 
 /**
- * The rewrite in recipe order. A line shared between its food and a substitute is saved as both
- * parts, each with its grams and a text that says which line it shares ("227 g … — shares line 2
- * with …"); a stable sort keeps the original part first.
+ * The rewrite in recipe order, each line in the cook's words when `written` (the lines as the cook
+ * wrote them, by index) is given: their measure, rescaled where the grams changed, with the new
+ * food's common name where a swap changed it ("2 cups shredded reduced-fat cheddar"). A line shared
+ * between its food and a substitute is saved as two readable lines, the original part first.
+ * Without the written text a shared line says which line it shares ("227 g … — shares line 2 with …").
  */
-export function rewrittenLinesOf(answer: RewriteAnswer): RewrittenLine[] {
+export function rewrittenLinesOf(answer: RewriteAnswer, written: readonly string[] = []): RewrittenLine[] {
   const parts = new Map<number, number>();
   for (const l of answer.after.lines) parts.set(l.index, (parts.get(l.index) ?? 0) + 1);
+  const before = new Map(answer.before.lines.map((l) => [l.index, l]));
   const rows: { index: number; line: RewrittenLine }[] = [
     ...answer.after.lines.map((l) => {
       const line: RewrittenLine = { food: { id: l.food.id, name: l.food.name }, grams: l.grams };
-      if ((parts.get(l.index) ?? 0) > 1) {
+      const text = written[l.index];
+      const was = before.get(l.index);
+      if (text && was) {
+        const change = answer.changes.find((c) => c.line === l.index && c.to.id === l.food.id);
+        const sameFood = was.food.id === l.food.id;
+        line.input = rewrittenLineText(text, was.grams, l.grams, sameFood ? null : commonFoodName(l.food, change?.rule?.label));
+      } else if ((parts.get(l.index) ?? 0) > 1) {
         const other = answer.after.lines.find((o) => o.index === l.index && o !== l);
         line.input = `${wholeGrams(l.grams)} g ${l.food.name} — shares line ${l.index + 1} with ${other?.food.name ?? 'a substitute'}`;
       }
@@ -61,7 +72,7 @@ export function rewriteNote(answer: RewriteAnswer): string {
   const changes = orderedChanges(answer.changes);
   const swaps = changes.filter((c) => c.swapped).map((c) => `${c.from.name} → ${c.partial ? 'part ' : ''}${c.to.name}`);
   const amounts = changes.filter((c) => !c.swapped).length;
-  const parts = [swaps.length > 0 ? swaps.join('; ') : 'No swaps', amounts > 0 ? `${amounts} amount${amounts === 1 ? '' : 's'} adjusted` : ''].filter(Boolean);
+  const parts = [swaps.length > 0 ? swaps.join('; ') : 'No swaps', amounts > 0 ? `${countOf(amounts, 'amount')} adjusted` : ''].filter(Boolean);
   const note = `Lighter rewrite: ${parts.join('. ')}.`;
   return note.length > NOTE_MAX ? `${note.slice(0, NOTE_MAX - 1)}…` : note;
 }
@@ -71,7 +82,10 @@ export function rewriteDraft(title: string, request: RewriteRequest, answer: Rew
     title: title.trim(),
     servings: request.servings,
     originalLines: originalLinesOf(request, answer),
-    rewrittenLines: rewrittenLinesOf(answer),
+    rewrittenLines: rewrittenLinesOf(
+      answer,
+      (request.lines ?? []).map((l) => l.input),
+    ),
     targets: request.targets,
     note: rewriteNote(answer),
   };

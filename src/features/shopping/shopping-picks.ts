@@ -1,4 +1,5 @@
 /** The batches a cook has picked to shop for, kept in localStorage between visits. */
+import { z } from 'zod';
 
 export interface ShoppingPick {
   recipeId: number;
@@ -13,26 +14,25 @@ export const MAX_PICKS = 20;
 
 const PICKS_KEY = 'hearthswap:shopping-picks';
 
-function wholeIn(value: unknown, min: number, max: number): value is number {
-  return typeof value === 'number' && Number.isInteger(value) && value >= min && value <= max;
-}
+const portionsSchema = z.number().int().min(MIN_PORTIONS).max(MAX_PORTIONS);
+const pickSchema = z.object({ recipeId: z.number().int().min(1), versionNumber: z.number().int().min(1), portions: portionsSchema });
 
 export function isValidPortions(portions: number): boolean {
-  return wholeIn(portions, MIN_PORTIONS, MAX_PORTIONS);
+  return portionsSchema.safeParse(portions).success;
 }
 
-function isPick(value: unknown): value is ShoppingPick {
-  if (!value || typeof value !== 'object') return false;
-  const p = value as Record<string, unknown>;
-  return (
-    wholeIn(p.recipeId, 1, Number.MAX_SAFE_INTEGER) && wholeIn(p.versionNumber, 1, Number.MAX_SAFE_INTEGER) && wholeIn(p.portions, MIN_PORTIONS, MAX_PORTIONS)
-  );
+/** The picks that are still well formed; a damaged one is dropped, not the whole list. */
+function validPicks(values: unknown): ShoppingPick[] {
+  if (!Array.isArray(values)) return [];
+  return values.flatMap((value) => {
+    const pick = pickSchema.safeParse(value);
+    return pick.success ? [pick.data] : [];
+  });
 }
 
 export function loadPicks(): ShoppingPick[] {
   try {
-    const parsed: unknown = JSON.parse(window.localStorage.getItem(PICKS_KEY) ?? '[]');
-    return Array.isArray(parsed) ? parsed.filter(isPick).slice(0, MAX_PICKS) : [];
+    return validPicks(JSON.parse(window.localStorage.getItem(PICKS_KEY) ?? '[]')).slice(0, MAX_PICKS);
   } catch {
     return [];
   }
@@ -51,8 +51,8 @@ export function savePicks(picks: ShoppingPick[]): void {
 export function parsePickParam(value: string | null): ShoppingPick | null {
   const match = value?.match(/^(\d+)\.(\d+)\.(\d+)$/);
   if (!match) return null;
-  const pick = { recipeId: Number(match[1]), versionNumber: Number(match[2]), portions: Number(match[3]) };
-  return isPick(pick) ? pick : null;
+  const pick = pickSchema.safeParse({ recipeId: Number(match[1]), versionNumber: Number(match[2]), portions: Number(match[3]) });
+  return pick.success ? pick.data : null;
 }
 
 export function samePick(a: Pick<ShoppingPick, 'recipeId' | 'versionNumber'>, b: Pick<ShoppingPick, 'recipeId' | 'versionNumber'>): boolean {

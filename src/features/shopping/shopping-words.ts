@@ -1,4 +1,5 @@
 import type { VersionKind, VersionSummary } from '../../../shared/schemas/recipes';
+import { countOf } from '../../lib/words';
 
 const KIND_WORDS: Record<VersionKind, string> = { original: 'as written', rewrite: 'rewrite', edit: 'edit' };
 
@@ -10,7 +11,7 @@ export function versionOption(version: Pick<VersionSummary, 'number' | 'kind' | 
 }
 
 export function portionsWord(portions: number): string {
-  return `${portions} portion${portions === 1 ? '' : 's'}`;
+  return countOf(portions, 'portion');
 }
 
 /** A whole number from 1 to 100 for a batch, or the reason it is not one. */

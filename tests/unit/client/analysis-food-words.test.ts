@@ -41,6 +41,8 @@ describe('portion words', () => {
     expect(pluralMeasure('leaf', 3)).toBe('leaves');
     expect(pluralMeasure('package', 2)).toBe('packages');
     expect(pluralMeasure('box', 2)).toBe('boxes');
+    expect(pluralMeasure('patty', 2)).toBe('patties');
+    expect(pluralMeasure('small loaf', 2)).toBe('small loaves');
   });
   it('weighs one measure from a portion of several', () => {
     expect(gramsPerMeasure({ label: '1/2 cup', amount: 0.5, measure: 'cup', grams: 56 })).toBe(112);

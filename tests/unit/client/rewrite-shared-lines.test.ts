@@ -53,6 +53,16 @@ describe('a shared line in a saved version', () => {
     ]);
   });
 
+  it("saves every line in the cook's words: the shared line as two readable lines, the others as written", () => {
+    const written = ['1 lb ground beef', '1 large onion, diced', 'a pinch of love'];
+    expect(rewrittenLinesOf(answer, written).map((l) => l.input)).toEqual([
+      '1/2 lb ground beef',
+      '1/2 lb lean ground turkey',
+      '1 large onion, diced',
+      'a pinch of love',
+    ]);
+  });
+
   it('names the part swap in the version note', () => {
     expect(rewriteNote(answer)).toBe(`Lighter rewrite: ${beef.name} → part ${turkey.name}.`);
   });

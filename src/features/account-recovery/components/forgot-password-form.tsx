@@ -1,11 +1,9 @@
 import { useState, type FormEvent } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/field';
+import { EmailField, looksLikeEmail } from '../../../components/ui/email-field';
 import { errorMessage, isApiError } from '../../../lib/api-client';
 import { useRequestPasswordReset } from '../api/password-reset';
-
-const LOOKS_LIKE_EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 
 /** Asks for a reset link by e-mail; says the same thing whether or not the address has an account. */
 export function ForgotPasswordForm() {
@@ -17,7 +15,7 @@ export function ForgotPasswordForm() {
   function submit(event: FormEvent) {
     event.preventDefault();
     const address = email.trim();
-    if (!LOOKS_LIKE_EMAIL.test(address)) {
+    if (!looksLikeEmail(address)) {
       setError('Enter the e-mail address you sign in with, like name@example.com.');
       return;
     }
@@ -61,13 +59,8 @@ export function ForgotPasswordForm() {
           {errorMessage(request.error)}
         </Alert>
       )}
-      <TextField
+      <EmailField
         label="E-mail"
-        type="email"
-        autoComplete="email"
-        inputMode="email"
-        autoCapitalize="none"
-        spellCheck={false}
         value={email}
         onChange={(e) => {
           setEmail(e.target.value);

@@ -1,10 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
-import type { AnalyzeRequest, AnalyzeResponse } from '../../../../shared/schemas/analyze';
-import { api } from '../../../lib/api-client';
-
-export function analyzeRecipe(request: AnalyzeRequest, signal?: AbortSignal): Promise<AnalyzeResponse> {
-  return api.post<AnalyzeResponse>('/api/analyze', request, { signal });
-}
+import type { AnalyzeRequest } from '../../../../shared/schemas/analyze';
+import { analyzeRecipe } from '../../../lib/api/compute';
 
 /** One analysis at a time: the caller aborts the last one through `signal` before asking again. */
 export function useAnalyzeRecipe() {

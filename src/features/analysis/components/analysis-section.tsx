@@ -12,6 +12,7 @@ import { AnalysisLines, type FoodSearchSlotArgs } from './analysis-lines';
 import { DishPanels, ServingHeadline } from './dish-figures';
 import { DISH_TYPE_WORDS } from '../../../../shared/culinary/infer-dish';
 import { ServingsField } from './servings-field';
+import { countOf } from '../../../lib/words';
 
 export interface AnalysisSectionProps {
   kitchen: Kitchen;
@@ -62,9 +63,7 @@ export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHre
       <div className="flex flex-wrap items-end justify-between gap-4">
         <div className="flex flex-col gap-1">
           {heading}
-          <p className="text-ink-soft">
-            {lines.length} line{lines.length === 1 ? '' : 's'}. Change a food or a weight and the numbers follow.
-          </p>
+          <p className="text-ink-soft">{countOf(lines.length, 'line')}. Change a food or a weight and the numbers follow.</p>
         </div>
         <div className="flex flex-wrap items-end gap-4">
           <p aria-live="polite" className="flex min-h-9 items-center gap-2 text-sm font-semibold text-ink-soft">

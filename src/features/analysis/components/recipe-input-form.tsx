@@ -4,6 +4,7 @@ import { z } from 'zod';
 import { Button } from '../../../components/ui/button';
 import { MAX_LINES } from '../../../../shared/schemas/analyze';
 import { TextAreaField, TextField } from '../../../components/ui/field';
+import { countOf } from '../../../lib/words';
 
 export const RECIPE_TEXT_MAX_LENGTH = 10_000;
 export const SERVINGS_MAX = 50;
@@ -92,7 +93,7 @@ export function RecipeInputForm({
       <p className="-mt-3 text-sm text-ink-soft" aria-live="polite">
         {lineCount === 0
           ? 'No ingredient lines yet.'
-          : `${lineCount} ingredient line${lineCount === 1 ? '' : 's'}${lineCount > MAX_LINES ? ` — at most ${MAX_LINES} lines` : ''}.`}
+          : `${countOf(lineCount, 'ingredient line')}${lineCount > MAX_LINES ? ` — at most ${MAX_LINES} lines` : ''}.`}
       </p>
       <div className="flex flex-wrap items-end gap-4">
         <TextField

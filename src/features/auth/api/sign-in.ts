@@ -1,12 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { User } from '../../../lib/user';
-import type { LoginInput } from '../schemas';
+import { signIn } from '../../../lib/api/auth';
 import { replaceSessionUser } from './session-cache';
-
-export function signIn(input: LoginInput): Promise<User> {
-  return api.post<User>('/api/auth/login', input);
-}
 
 export function useSignIn() {
   const queryClient = useQueryClient();

@@ -1,10 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { signOut } from '../../../lib/api/auth';
 import { replaceSessionUser } from './session-cache';
-
-export async function signOut(): Promise<void> {
-  await api.post<unknown>('/api/auth/logout');
-}
 
 export function useSignOut() {
   const queryClient = useQueryClient();

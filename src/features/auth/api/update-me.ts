@@ -1,14 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { UpdateMeInput } from '../../../../shared/schemas/auth';
-import { api } from '../../../lib/api-client';
+import { updateMe } from '../../../lib/api/auth';
 import { queryKeys } from '../../../lib/query-keys';
 import type { User } from '../../../lib/user';
 
 export type { UpdateMeInput };
-
-export function updateMe(input: UpdateMeInput): Promise<User> {
-  return api.patch<User>('/api/auth/me', input);
-}
 
 export function useUpdateMe() {
   const queryClient = useQueryClient();

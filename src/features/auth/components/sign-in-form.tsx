@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router';
 import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/field';
+import { EmailField } from '../../../components/ui/email-field';
 import { PasswordField } from '../../../components/ui/password-field';
 import { applyServerFieldErrors } from '../../../lib/form-errors';
 import type { User } from '../../../lib/user';
@@ -31,16 +31,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (user: User) => void })
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-5">
       <FormErrorAlert error={signIn.error} fieldsShown={fieldsShown} />
-      <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        inputMode="email"
-        autoCapitalize="none"
-        spellCheck={false}
-        error={errors.email?.message}
-        {...register('email')}
-      />
+      <EmailField label="E-mail" error={errors.email?.message} {...register('email')} />
       <PasswordField label="Password" autoComplete="current-password" error={errors.password?.message} {...register('password')} />
       <Link to="/forgot-password" className="-mt-3 self-end text-sm font-bold text-accent-strong underline underline-offset-4">
         Forgot your password?

@@ -2,6 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Button } from '../../../components/ui/button';
+import { EmailField } from '../../../components/ui/email-field';
 import { ChoiceCards, TextField } from '../../../components/ui/field';
 import { PasswordField } from '../../../components/ui/password-field';
 import { applyServerFieldErrors } from '../../../lib/form-errors';
@@ -59,16 +60,7 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: User) => void })
         error={errors.displayName?.message}
         {...register('displayName')}
       />
-      <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        inputMode="email"
-        autoCapitalize="none"
-        spellCheck={false}
-        error={errors.email?.message}
-        {...register('email')}
-      />
+      <EmailField label="E-mail" error={errors.email?.message} {...register('email')} />
       <PasswordField
         label="Password"
         hint={`At least ${PASSWORD_MIN_LENGTH} characters. A short sentence you will remember works well.`}

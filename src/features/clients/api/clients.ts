@@ -1,34 +1,14 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { ClientsResponse } from '../../../../shared/schemas/clients';
 import type { ClientTargets } from '../../../../shared/schemas/coaching';
-import { api } from '../../../lib/api-client';
-import { clientsKeys } from '../clients-keys';
+import { clientsQuery, endClientLink, inviteClient, saveClientTargets, withdrawInvitation } from '../../../lib/api/clients';
+import { queryKeys } from '../../../lib/query-keys';
 
+export type { Client, ClientsResponse, Invitation, InvitationStatus } from '../../../../shared/schemas/clients';
 export type { ClientTargets };
 
-export interface Client {
-  id: number;
-  displayName: string;
-  email: string;
-  targets: ClientTargets | null;
-}
-
-export type InvitationStatus = 'pending' | 'accepted' | 'expired' | 'revoked';
-
-export interface Invitation {
-  id: number;
-  email: string;
-  status: InvitationStatus;
-  expiresAt: string;
-  createdAt: string;
-}
-
-export interface ClientsResponse {
-  clients: Client[];
-  invitations: Invitation[];
-}
-
 export function useClients() {
-  return useQuery({ queryKey: clientsKeys.list, queryFn: ({ signal }) => api.get<ClientsResponse>('/api/clients', { signal }) });
+  return useQuery(clientsQuery());
 }
 
 /** One client out of the coach's list (the server has no single-client read). */
@@ -41,22 +21,22 @@ export function useClient(clientId: number | null) {
 export function useInviteClient() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (email: string) => api.post<Omit<Invitation, 'createdAt'>>('/api/clients/invitations', { email }),
-    onSuccess: () => void queryClient.invalidateQueries({ queryKey: clientsKeys.list }),
+    mutationFn: inviteClient,
+    onSuccess: () => void queryClient.invalidateQueries({ queryKey: queryKeys.clients.list() }),
   });
 }
 
 export function useWithdrawInvitation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api.delete<void>(`/api/clients/invitations/${id}`),
+    mutationFn: withdrawInvitation,
     onSuccess: (_nothing, id) => {
-      queryClient.setQueryData<ClientsResponse>(clientsKeys.list, (previous) =>
+      queryClient.setQueryData<ClientsResponse>(queryKeys.clients.list(), (previous) =>
         previous
           ? { ...previous, invitations: previous.invitations.map((i) => (i.id === id && i.status === 'pending' ? { ...i, status: 'revoked' } : i)) }
           : previous,
       );
-      void queryClient.invalidateQueries({ queryKey: clientsKeys.list });
+      void queryClient.invalidateQueries({ queryKey: queryKeys.clients.list() });
     },
   });
 }
@@ -64,13 +44,13 @@ export function useWithdrawInvitation() {
 export function useEndClientLink() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (clientId: number) => api.delete<void>(`/api/clients/${clientId}`),
+    mutationFn: endClientLink,
     onSuccess: (_nothing, clientId) => {
-      queryClient.setQueryData<ClientsResponse>(clientsKeys.list, (previous) =>
+      queryClient.setQueryData<ClientsResponse>(queryKeys.clients.list(), (previous) =>
         previous ? { ...previous, clients: previous.clients.filter((c) => c.id !== clientId) } : previous,
       );
-      queryClient.removeQueries({ queryKey: clientsKeys.versions(clientId) });
-      void queryClient.invalidateQueries({ queryKey: clientsKeys.list });
+      queryClient.removeQueries({ queryKey: queryKeys.clients.versions(clientId) });
+      void queryClient.invalidateQueries({ queryKey: queryKeys.clients.list() });
     },
   });
 }
@@ -78,9 +58,9 @@ export function useEndClientLink() {
 export function useSaveClientTargets(clientId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (targets: ClientTargets) => api.put<{ clientId: number; targets: ClientTargets }>(`/api/clients/${clientId}/targets`, targets),
+    mutationFn: (targets: ClientTargets) => saveClientTargets(clientId, targets),
     onSuccess: ({ targets }) => {
-      queryClient.setQueryData<ClientsResponse>(clientsKeys.list, (previous) =>
+      queryClient.setQueryData<ClientsResponse>(queryKeys.clients.list(), (previous) =>
         previous ? { ...previous, clients: previous.clients.map((c) => (c.id === clientId ? { ...c, targets } : c)) } : previous,
       );
     },

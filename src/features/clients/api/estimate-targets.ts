@@ -1,12 +1,9 @@
 import { useMutation } from '@tanstack/react-query';
-import type { EstimateTargetsInput, TargetEstimate } from '../../../../shared/schemas/targets';
-import { api } from '../../../lib/api-client';
+import { estimateTargets } from '../../../lib/api/compute';
 
-export type { EstimateTargetsInput, TargetEstimate };
+export type { EstimateTargetsInput, TargetEstimate } from '../../../../shared/schemas/targets';
 
 /** A calculation, not a change: POST only because it takes a body. */
 export function useEstimateTargets() {
-  return useMutation({
-    mutationFn: (input: EstimateTargetsInput) => api.post<TargetEstimate>('/api/targets/estimate', input),
-  });
+  return useMutation({ mutationFn: estimateTargets });
 }

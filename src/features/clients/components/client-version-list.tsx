@@ -8,7 +8,8 @@ import type { ClientTargets } from '../api/clients';
 import { useClientVersions, type ClientVersion } from '../api/client-versions';
 import { meetsPerMeal } from '../targets-form';
 import { versionKindWords } from '../version-words';
-import { formatDay, formatDayTime } from '../when';
+import { formatDay, formatDateTime } from '../../../lib/dates';
+import { countOf } from '../../../lib/words';
 
 function TargetBadges({ version, targets }: { version: ClientVersion; targets: ClientTargets | null }) {
   const meets = meetsPerMeal(version.perServing, targets);
@@ -58,10 +59,10 @@ export function ClientVersionList({ clientId, clientName, targets, reviewHref }:
             </Link>
             <span className="text-sm text-ink-soft">
               {versionKindWords(version.kind)} ·{' '}
-              <time dateTime={version.createdAt} title={formatDayTime(version.createdAt)}>
+              <time dateTime={version.createdAt} title={formatDateTime(version.createdAt)}>
                 {formatDay(version.createdAt)}
               </time>
-              {version.comments > 0 && ` · ${version.comments} comment${version.comments === 1 ? '' : 's'}`}
+              {version.comments > 0 && ` · ${countOf(version.comments, 'comment')}`}
             </span>
             {version.note && <span className="text-ink">{version.note}</span>}
           </div>

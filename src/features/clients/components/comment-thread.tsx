@@ -7,7 +7,7 @@ import { ErrorState } from '../../../components/ui/error-state';
 import { LoadingState } from '../../../components/ui/spinner';
 import { errorMessage, isApiError } from '../../../lib/api-client';
 import { useAddVersionComment, useVersionComments } from '../api/version-comments';
-import { formatDayTime } from '../when';
+import { formatDateTime } from '../../../lib/dates';
 
 const MAX_COMMENT_CHARS = 4_000;
 
@@ -57,7 +57,7 @@ export function CommentThread({ recipeId, number, viewerId, otherName }: { recip
                   <span className="font-bold text-ink">{mine ? 'You' : comment.author.displayName}</span>
                   {comment.author.role === 'coach' && <Badge tone="ember">Coach</Badge>}
                   <time dateTime={comment.createdAt} className="text-ink-soft">
-                    {formatDayTime(comment.createdAt)}
+                    {formatDateTime(comment.createdAt)}
                   </time>
                 </p>
                 <p className="mt-1.5 whitespace-pre-line text-ink">{comment.body}</p>

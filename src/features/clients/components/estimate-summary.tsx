@@ -3,6 +3,7 @@ import { Stat } from '../../../components/ui/stat';
 import { formatKcal, formatMacroG, formatNumber } from '../../../lib/format';
 import { mealTargets } from '../../../../shared/shown-figures';
 import type { TargetEstimate } from '../api/estimate-targets';
+import { countOf } from '../../../lib/words';
 
 /** What the estimate worked out, with its cautions first. */
 export function EstimateSummary({ estimate, mealsPerDay }: { estimate: TargetEstimate; mealsPerDay: number }) {
@@ -21,7 +22,7 @@ export function EstimateSummary({ estimate, mealsPerDay }: { estimate: TargetEst
         <Stat
           label="Per meal, energy"
           value={formatKcal(rounded.perMeal.kcal)}
-          note={`over ${mealsPerDay} meal${mealsPerDay === 1 ? '' : 's'}`}
+          note={`over ${countOf(mealsPerDay, 'meal')}`}
           className="border-ember-200 bg-ember-50"
         />
         <Stat label="Per meal, protein" value={formatMacroG(rounded.perMeal.proteinG)} note="at least" className="border-herb-200 bg-herb-50" />

@@ -5,7 +5,7 @@ import { ConfirmDialog } from '../../../components/ui/dialog';
 import { useToast } from '../../../components/ui/toast';
 import { errorMessage } from '../../../lib/api-client';
 import { useWithdrawInvitation, type Invitation, type InvitationStatus } from '../api/clients';
-import { formatDay } from '../when';
+import { formatDay } from '../../../lib/dates';
 
 const STATUS: Record<InvitationStatus, { label: string; tone: BadgeTone }> = {
   pending: { label: 'Waiting', tone: 'honey' },

@@ -1,12 +1,9 @@
 import { useState, type FormEvent } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/field';
+import { EmailField, looksLikeEmail } from '../../../components/ui/email-field';
 import { errorMessage, isApiError } from '../../../lib/api-client';
 import { useInviteClient } from '../api/clients';
-
-// The shape the server accepts is checked there; this catches the obvious slips before sending.
-const LOOKS_LIKE_EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 
 /** Sends an invitation e-mail with a link the client opens to link with the coach. */
 export function InviteClientForm({ onInvited }: { onInvited: (email: string) => void }) {
@@ -17,7 +14,7 @@ export function InviteClientForm({ onInvited }: { onInvited: (email: string) => 
   function submit(event: FormEvent) {
     event.preventDefault();
     const address = email.trim().toLowerCase();
-    if (!LOOKS_LIKE_EMAIL.test(address)) {
+    if (!looksLikeEmail(address)) {
       setError('Enter the e-mail address your client signs in with, like name@example.com.');
       return;
     }
@@ -40,14 +37,10 @@ export function InviteClientForm({ onInvited }: { onInvited: (email: string) => 
           {formError}
         </Alert>
       )}
-      <TextField
+      <EmailField
         label="Client's e-mail"
         hint="They get a link that works for 7 days. They sign in with a cook account — or create one — and accept."
-        type="email"
-        inputMode="email"
         autoComplete="off"
-        autoCapitalize="none"
-        spellCheck={false}
         value={email}
         onChange={(e) => {
           setEmail(e.target.value);

@@ -8,7 +8,7 @@ import { errorMessage, isApiError } from '../../../lib/api-client';
 import { formatKcal, formatMacroG } from '../../../lib/format';
 import { useSaveClientTargets, type Client } from '../api/clients';
 import type { BodyUnits } from '../body-units';
-import { readNumber } from '../read-number';
+import { readNumber } from '../../../lib/read-number';
 import {
   applyEstimate,
   MAX_TARGET_NOTE_CHARS,
@@ -20,6 +20,7 @@ import {
   type TargetsValues,
 } from '../targets-form';
 import { TargetEstimator } from './target-estimator';
+import { countOf } from '../../../lib/words';
 
 /** Per-meal figures times meals, to set beside the daily targets. */
 function DailyCheck({ values }: { values: TargetsValues }) {
@@ -29,7 +30,7 @@ function DailyCheck({ values }: { values: TargetsValues }) {
   if (!kcal || !protein || !meals || [kcal, protein, meals].some(Number.isNaN)) return null;
   return (
     <p className="text-sm text-ink-soft" aria-live="polite">
-      Over {meals} meal{meals === 1 ? '' : 's'} the per-meal targets come to {formatKcal(kcal * meals)} and {formatMacroG(protein * meals)} protein a day.
+      Over {countOf(meals, 'meal')} the per-meal targets come to {formatKcal(kcal * meals)} and {formatMacroG(protein * meals)} protein a day.
     </p>
   );
 }

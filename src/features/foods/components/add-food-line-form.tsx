@@ -7,6 +7,7 @@ import { TextField } from '../../../components/ui/field';
 import { SelectField } from '../../../components/ui/select-field';
 import { LoadingState } from '../../../components/ui/spinner';
 import { formatKcal, formatMacroG, formatWeight } from '../../../lib/format';
+import { readRequiredNumber } from '../../../lib/read-number';
 import type { UnitSystem } from '../../../lib/user';
 import { useFood } from '../api/get-food';
 import type { FoodSearchHit } from '../api/search-foods';
@@ -44,7 +45,7 @@ export function AddFoodLineForm({ onAdd, unitSystem, disabled }: AddFoodLineForm
   const portions = detail.data?.portions ?? [];
   const portionIndex = measure === GRAMS ? -1 : Number(measure);
   const portion = portionIndex >= 0 ? portions[portionIndex] : undefined;
-  const amount = Number(amountText.replace(',', '.'));
+  const amount = readRequiredNumber(amountText);
   const amountValid = amountText.trim() !== '' && Number.isFinite(amount) && amount > 0;
   const grams = !amountValid ? 0 : portion ? amount * gramsPerMeasure(portion) : amount;
   const preview = detail.data && amountValid ? nutrientsForGrams(detail.data.per100g, grams) : null;

@@ -5,7 +5,8 @@ import { cx } from '../../../lib/cx';
 import { formatKcal, formatMacroG } from '../../../lib/format';
 import { useFoodSearch, type FoodSearchHit } from '../api/search-foods';
 import { foodGroupWords } from '../food-words';
-import { useDebouncedValue } from '../use-debounced-value';
+import { useDebounce } from 'use-debounce';
+import { countOf } from '../../../lib/words';
 
 const SEARCH_DEBOUNCE_MS = 250;
 const OPTIONS_SHOWN = 8;
@@ -33,7 +34,7 @@ export function FoodCombobox({ label, hint, onChoose, placeholder = 'Search the 
   const [text, setText] = useState('');
   const [open, setOpen] = useState(false);
   const [active, setActive] = useState(-1);
-  const query = useDebouncedValue(text.trim(), SEARCH_DEBOUNCE_MS);
+  const [query] = useDebounce(text.trim(), SEARCH_DEBOUNCE_MS);
   const search = useFoodSearch(query, OPTIONS_SHOWN);
   const results = query && text.trim() ? (search.data?.results ?? []) : [];
   const expanded = open && results.length > 0;
@@ -54,7 +55,7 @@ export function FoodCombobox({ label, hint, onChoose, placeholder = 'Search the 
         : search.isSuccess && results.length === 0
           ? `Nothing in the catalogue for “${query}”.`
           : open && results.length > 0
-            ? `${results.length} food${results.length === 1 ? '' : 's'} offered; use the arrow keys to choose.`
+            ? `${countOf(results.length, 'food')} offered; use the arrow keys to choose.`
             : '';
 
   return (

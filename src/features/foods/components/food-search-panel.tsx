@@ -4,8 +4,9 @@ import { ErrorState } from '../../../components/ui/error-state';
 import { Spinner, LoadingState } from '../../../components/ui/spinner';
 import { cx } from '../../../lib/cx';
 import { useFoodSearch } from '../api/search-foods';
-import { useDebouncedValue } from '../use-debounced-value';
+import { useDebounce } from 'use-debounce';
 import { FoodSearchResults } from './food-search-results';
+import { countOf } from '../../../lib/words';
 
 const SEARCH_DEBOUNCE_MS = 300;
 const RESULTS_SHOWN = 20;
@@ -23,7 +24,7 @@ export interface FoodSearchPanelProps {
 export function FoodSearchPanel({ initialQuery = '', onQueryChange, foodHref, linkState }: FoodSearchPanelProps) {
   const inputId = useId();
   const [text, setText] = useState(initialQuery);
-  const query = useDebouncedValue(text.trim(), SEARCH_DEBOUNCE_MS);
+  const [query] = useDebounce(text.trim(), SEARCH_DEBOUNCE_MS);
   const search = useFoodSearch(query, RESULTS_SHOWN);
   const inputRef = useRef<HTMLInputElement>(null);
   const listRef = useRef<HTMLUListElement>(null);
@@ -77,7 +78,7 @@ export function FoodSearchPanel({ initialQuery = '', onQueryChange, foodHref, li
       </div>
 
       <p className="sr-only" aria-live="polite">
-        {query && search.isSuccess && !search.isPlaceholderData ? `${results.length} food${results.length === 1 ? '' : 's'} found for ${query}.` : ''}
+        {query && search.isSuccess && !search.isPlaceholderData ? `${countOf(results.length, 'food')} found for ${query}.` : ''}
       </p>
 
       {!query ? (

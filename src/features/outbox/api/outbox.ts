@@ -1,16 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { queryKeys } from '../../../lib/query-keys';
+import type { OutboxMessage } from '../../../../shared/schemas/outbox';
+import { outboxQuery } from '../../../lib/api/admin';
 
-export interface OutboxMessage {
-  id: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html?: string;
-  receivedAt: string;
-}
+export type { OutboxMessage };
 
 /** Newest first, whatever order the server keeps them in. */
 export function newestFirst(messages: readonly OutboxMessage[]): OutboxMessage[] {
@@ -20,8 +12,7 @@ export function newestFirst(messages: readonly OutboxMessage[]): OutboxMessage[]
 /** The development outbox. It only exists outside production; there the server answers 404. */
 export function useOutbox() {
   return useQuery({
-    queryKey: queryKeys.admin.outbox(),
-    queryFn: ({ signal }) => api.get<{ messages: OutboxMessage[] }>('/api/dev/outbox', { signal }),
+    ...outboxQuery(),
     select: (data) => newestFirst(data.messages),
     // Mail arrives while the page is open (a coach inviting in another tab).
     refetchInterval: 10_000,

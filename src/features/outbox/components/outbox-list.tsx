@@ -1,3 +1,4 @@
+import { formatStamp } from '../../../lib/dates';
 import { Fragment, useState } from 'react';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorState } from '../../../components/ui/error-state';
@@ -6,8 +7,7 @@ import { LoadingState } from '../../../components/ui/spinner';
 import { isApiError } from '../../../lib/api-client';
 import { useOutbox, type OutboxMessage } from '../api/outbox';
 import { splitLinks } from '../text-links';
-
-const timeFormat = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit', second: '2-digit' });
+import { countOf } from '../../../lib/words';
 
 function MailText({ text }: { text: string }) {
   return (
@@ -26,7 +26,7 @@ function MailText({ text }: { text: string }) {
 }
 
 function Message({ message, open }: { message: OutboxMessage; open: boolean }) {
-  const received = timeFormat.format(new Date(message.receivedAt));
+  const received = formatStamp(message.receivedAt);
   return (
     <details open={open} className="group rounded-card border border-line bg-surface shadow-card open:border-line-strong">
       <summary className="flex cursor-pointer list-none items-start justify-between gap-4 rounded-card p-5 hover:bg-oat-50 [&::-webkit-details-marker]:hidden">
@@ -73,9 +73,7 @@ export function OutboxList() {
     <div className="flex flex-col gap-4">
       <div className="flex flex-wrap items-center justify-between gap-3">
         <p className="text-ink-soft" aria-live="polite">
-          {messages.length === 0
-            ? ''
-            : `${messages.length} message${messages.length === 1 ? '' : 's'}, newest first; open one to read it. Checks for new mail every 10 seconds.`}
+          {messages.length === 0 ? '' : `${countOf(messages.length, 'message')}, newest first; open one to read it. Checks for new mail every 10 seconds.`}
         </p>
         <Button
           variant="secondary"

@@ -8,6 +8,7 @@ import { LoadingState } from '../../../components/ui/spinner';
 import { useToast } from '../../../components/ui/toast';
 import { errorMessage } from '../../../lib/api-client';
 import { useSetRole, useUsers } from '../api/users';
+import { countOf } from '../../../lib/words';
 
 const ROLE_WORDS: Record<UserRole, string> = { cook: 'Cook', coach: 'Coach', admin: 'Admin' };
 
@@ -65,12 +66,12 @@ export function PeopleList({ selfId }: { selfId: number | null }) {
   const names = new Map(users.data.map((u) => [u.id, u.displayName]));
   const counts = ROLES_USER.map((role) => {
     const n = users.data.filter((u) => u.role === role).length;
-    return `${n} ${ROLE_WORDS[role].toLowerCase()}${n === 1 ? '' : role === 'coach' ? 'es' : 's'}`;
+    return countOf(n, ROLE_WORDS[role].toLowerCase());
   });
   return (
     <div className="flex flex-col gap-4">
       <Alert tone="info">
-        {users.data.length} account{users.data.length === 1 ? '' : 's'}: {counts.join(', ')}. A new role takes effect on that person's next page load.
+        {countOf(users.data.length, 'account')}: {counts.join(', ')}. A new role takes effect on that person's next page load.
       </Alert>
       <ul aria-label="Accounts" className="flex flex-col gap-3">
         {users.data.map((person) => (

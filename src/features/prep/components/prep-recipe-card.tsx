@@ -1,4 +1,4 @@
-import type { Prep } from '../api/get-prep';
+import type { PrepResponse as Prep } from '../../../../shared/schemas/prep';
 import { allergenWords, methodSteps, portionsWord, versionLine } from '../prep-words';
 import { ServingPanel } from './serving-panel';
 import { StorageGuide } from './storage-guide';

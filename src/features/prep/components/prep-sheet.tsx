@@ -1,5 +1,5 @@
 import { useId, type ReactNode } from 'react';
-import type { Prep } from '../api/get-prep';
+import type { PrepResponse as Prep } from '../../../../shared/schemas/prep';
 import { portionsWord, prepChecksKey } from '../prep-words';
 import { AllergenNotice } from './allergen-notice';
 import { PrepShoppingList } from './prep-shopping-list';

@@ -1,10 +1,10 @@
 import type { ReactNode } from 'react';
 import { Button } from '../../../components/ui/button';
-import { CheckList, type CheckListItem } from '../../../components/ui/check-list';
+import { CheckList } from '../../../components/ui/check-list';
 import { CopyTextButton } from '../../../components/ui/copy-text-button';
-import { formatGrams } from '../../../lib/format';
-import type { PrepShoppingItem } from '../api/get-prep';
-import { foodKey, portionsWord } from '../prep-words';
+import type { PrepShoppingItem } from '../../../../shared/schemas/prep';
+import { shoppingCheckItem } from '../../../lib/shopping-items';
+import { portionsWord } from '../prep-words';
 
 export interface PrepShoppingListProps {
   items: PrepShoppingItem[];
@@ -15,16 +15,6 @@ export interface PrepShoppingListProps {
   onPrint: () => void;
   /** one more action beside copy and print, e.g. a link to a list for several recipes */
   extraAction?: ReactNode;
-}
-
-function checkItem(item: PrepShoppingItem): CheckListItem {
-  const unmatched = item.food.id === null;
-  return {
-    key: foodKey(item.food),
-    label: item.food.name,
-    amount: unmatched && item.grams === 0 ? '—' : formatGrams(item.grams),
-    detail: item.purchase ? `Buy ${item.purchase}` : unmatched ? 'Not in the catalogue: buy what the recipe line says.' : undefined,
-  };
 }
 
 /** What to buy for the batch, to tick off in the shop, copy into a note or print. */
@@ -48,7 +38,7 @@ export function PrepShoppingList({ items, text, portions, storageKey, onPrint, e
           {extraAction}
         </div>
       </div>
-      <CheckList label={`Shopping list for ${portionsWord(portions)}`} items={items.map(checkItem)} storageKey={storageKey} />
+      <CheckList label={`Shopping list for ${portionsWord(portions)}`} items={items.map(shoppingCheckItem)} storageKey={storageKey} />
     </section>
   );
 }

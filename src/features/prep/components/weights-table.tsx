@@ -1,6 +1,6 @@
 import { Badge } from '../../../components/ui/badge';
 import { formatGrams } from '../../../lib/format';
-import type { PrepWeight } from '../api/get-prep';
+import type { PrepWeight } from '../../../../shared/schemas/prep';
 import { portionsWord } from '../prep-words';
 
 export interface WeightsTableProps {

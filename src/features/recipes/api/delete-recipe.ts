@@ -1,15 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { deleteRecipe } from '../../../lib/api/recipes';
 import { queryKeys } from '../../../lib/query-keys';
 
-export interface DeleteRecipeInput {
-  id: number;
-  revision: number;
-}
-
-export function deleteRecipe({ id, revision }: DeleteRecipeInput): Promise<{ id: number; deleted: true; revision: number }> {
-  return api.delete(`/api/recipes/${id}`, { revision });
-}
+export type { DeleteRecipeInput } from '../../../lib/api/recipes';
 
 export function useDeleteRecipe() {
   const queryClient = useQueryClient();

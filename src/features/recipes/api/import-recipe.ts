@@ -1,12 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { RecipeDetail } from '../../../../shared/schemas/recipes';
-import { uploadFile } from '../../../lib/upload-file';
+import { importRecipe } from '../../../lib/api/recipes';
 import { storeRecipe } from './recipe-cache';
 
 export const IMPORT_MAX_BYTES = 1024 * 1024;
 export const IMPORT_EXTENSIONS = ['.txt', '.md', '.json', '.jsonld'] as const;
-
-export type ImportedRecipe = RecipeDetail & { importedFrom?: string };
 
 /** Why a file can't be imported before it is sent, or null when it may go. */
 export function importFileProblem(file: File): string | null {
@@ -17,10 +14,6 @@ export function importFileProblem(file: File): string | null {
   if (file.size > IMPORT_MAX_BYTES) return 'That file is larger than 1 MB.';
   if (file.size === 0) return 'That file is empty.';
   return null;
-}
-
-export function importRecipe(file: File): Promise<ImportedRecipe> {
-  return uploadFile<ImportedRecipe>('/api/recipes/import', file);
 }
 
 export function useImportRecipe() {

@@ -2,11 +2,6 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { RecipeDetail, VersionDetail } from '../../../../shared/schemas/recipes';
 import { queryKeys } from '../../../lib/query-keys';
 
-/** Key of one version's detail; versions never change once saved. */
-export function versionKey(recipeId: number, number: number) {
-  return [...queryKeys.recipes.versions(recipeId), number] as const;
-}
-
 /** A fresh copy of a recipe from the server: show it at once and let every list catch up. */
 export function storeRecipe(queryClient: QueryClient, recipe: RecipeDetail) {
   queryClient.setQueryData(queryKeys.recipes.detail(recipe.id), recipe);
@@ -15,7 +10,7 @@ export function storeRecipe(queryClient: QueryClient, recipe: RecipeDetail) {
 
 /** A new version changes the recipe's timeline, its latest figures and the lists. */
 export function storeVersion(queryClient: QueryClient, recipeId: number, version: VersionDetail) {
-  queryClient.setQueryData(versionKey(recipeId, version.number), version);
+  queryClient.setQueryData(queryKeys.recipes.version(recipeId, version.number), version);
   void queryClient.invalidateQueries({ queryKey: queryKeys.recipes.detail(recipeId), exact: true });
   void queryClient.invalidateQueries({ queryKey: queryKeys.recipes.list() });
 }

@@ -1,15 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { z } from 'zod';
-import type { RecipeDetail, updateRecipeSchema } from '../../../../shared/schemas/recipes';
-import { api, isApiError } from '../../../lib/api-client';
+import { isApiError } from '../../../lib/api-client';
+import { updateRecipe } from '../../../lib/api/recipes';
 import { storeRecipe } from './recipe-cache';
 
-/** `revision` is the one the cook read; a stale one is refused with 409 and nothing changes. */
-export type UpdateRecipeInput = z.input<typeof updateRecipeSchema> & { id: number };
-
-export function updateRecipe({ id, ...body }: UpdateRecipeInput): Promise<RecipeDetail> {
-  return api.patch<RecipeDetail>(`/api/recipes/${id}`, body);
-}
+export type { UpdateRecipeInput } from '../../../lib/api/recipes';
 
 export function useUpdateRecipe() {
   const queryClient = useQueryClient();

@@ -1,7 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRef, useState } from 'react';
-import type { RecipeDetail } from '../../../../shared/schemas/recipes';
-import { uploadFile } from '../../../lib/upload-file';
+import { removePhoto, uploadPhoto } from '../../../lib/api/recipes';
 import { storeRecipe } from './recipe-cache';
 
 export const PHOTO_MAX_BYTES = 5 * 1024 * 1024;
@@ -9,20 +8,13 @@ export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
 
 /** Why a photo can't be sent, or null when it may go. */
 export function photoFileProblem(file: File): string | null {
-  if (!(PHOTO_TYPES as readonly string[]).includes(file.type)) return 'Choose a JPEG, PNG or WebP photo.';
-  if (file.size > PHOTO_MAX_BYTES) return 'That photo is larger than 5 MB.';
+  if (!(PHOTO_TYPES as readonly string[]).includes(file.type)) return 'This file is not a photo Hearthswap can read. Choose a JPEG, PNG or WebP picture.';
+  if (file.size > PHOTO_MAX_BYTES) return 'This photo is too large: the limit is 5 MB. A phone photo at its usual size fits.';
   return null;
 }
 
-export function uploadPhoto(recipeId: number, file: File, onProgress?: (fraction: number) => void, signal?: AbortSignal) {
-  return uploadFile<RecipeDetail>(`/api/recipes/${recipeId}/photo`, file, {
-    onProgress: (p) => onProgress?.(p.fraction),
-    signal,
-  });
-}
-
 /** Uploads a recipe's photo; `progress` runs 0..1 while it goes out, null when nothing is uploading. */
-export function useUploadPhoto(recipeId: number) {
+export function useUploadPhoto(recipeId: number, revision: number) {
   const queryClient = useQueryClient();
   const [progress, setProgress] = useState<number | null>(null);
   const controller = useRef<AbortController | null>(null);
@@ -30,7 +22,7 @@ export function useUploadPhoto(recipeId: number) {
     mutationFn: (file: File) => {
       controller.current = new AbortController();
       setProgress(0);
-      return uploadPhoto(recipeId, file, setProgress, controller.current.signal);
+      return uploadPhoto(recipeId, revision, file, setProgress, controller.current.signal);
     },
     onSuccess: (recipe) => storeRecipe(queryClient, recipe),
     onSettled: () => {
@@ -39,4 +31,12 @@ export function useUploadPhoto(recipeId: number) {
     },
   });
   return { ...mutation, progress, cancel: () => controller.current?.abort() };
+}
+
+export function useRemovePhoto(recipeId: number, revision: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => removePhoto(recipeId, revision),
+    onSuccess: (recipe) => storeRecipe(queryClient, recipe),
+  });
 }

@@ -1,8 +1,9 @@
 import { Link } from 'react-router';
 import type { RecipeSummary } from '../../../../shared/schemas/recipes';
 import { formatKcal, formatMacroG } from '../../../lib/format';
-import { formatDateTime, formatWhen } from '../format-when';
+import { formatDateTime, formatWhen } from '../../../lib/dates';
 import { recipePath } from '../recipe-links';
+import { countOf } from '../../../lib/words';
 
 function perServing(recipe: RecipeSummary) {
   const figures = recipe.latest?.perServing;
@@ -13,7 +14,16 @@ function perServing(recipe: RecipeSummary) {
 }
 
 function versionsText(count: number): string {
-  return `${count} version${count === 1 ? '' : 's'}`;
+  return `${countOf(count, 'version')}`;
+}
+
+/** The dish's photo as a small square, or an empty plate of the same size so rows line up. */
+function Thumbnail({ recipe, size }: { recipe: RecipeSummary; size: 'sm' | 'md' }) {
+  const box = size === 'sm' ? 'size-12' : 'size-16';
+  if (!recipe.thumbnailUrl) return <span aria-hidden="true" className={`${box} shrink-0 rounded-field bg-oat-100`} />;
+  return (
+    <img src={recipe.thumbnailUrl} alt="" width={240} height={240} loading="lazy" decoding="async" className={`${box} shrink-0 rounded-field object-cover`} />
+  );
 }
 
 function Updated({ iso }: { iso: string }) {
@@ -59,9 +69,12 @@ export function RecipeList({ recipes, caption }: { recipes: RecipeSummary[]; cap
               return (
                 <tr key={recipe.id} className="border-b border-line last:border-b-0 even:bg-oat-50 hover:bg-ember-50">
                   <th scope="row" className="px-4 py-3 text-left font-bold">
-                    <Link to={recipePath(recipe.id)} className="rounded-field text-accent-strong underline-offset-2 hover:underline">
-                      {recipe.title}
-                    </Link>
+                    <span className="flex items-center gap-3">
+                      <Thumbnail recipe={recipe} size="sm" />
+                      <Link to={recipePath(recipe.id)} className="rounded-field text-accent-strong underline-offset-2 hover:underline">
+                        {recipe.title}
+                      </Link>
+                    </span>
                   </th>
                   <td className="px-4 py-3 text-right tabular-nums">{recipe.servings}</td>
                   <td className="px-4 py-3 text-right font-bold tabular-nums">{figures.kcal}</td>
@@ -83,7 +96,10 @@ export function RecipeList({ recipes, caption }: { recipes: RecipeSummary[]; cap
           return (
             <li key={recipe.id}>
               <Link to={recipePath(recipe.id)} className="flex flex-col gap-2 rounded-card border border-line bg-surface p-4 shadow-card active:bg-oat-100">
-                <span className="text-lg font-extrabold text-accent-strong">{recipe.title}</span>
+                <span className="flex items-center gap-3">
+                  <Thumbnail recipe={recipe} size="md" />
+                  <span className="min-w-0 text-lg font-extrabold break-words text-accent-strong">{recipe.title}</span>
+                </span>
                 <span className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
                   <span>
                     <strong className="tabular-nums">{figures.kcal}</strong> · <strong className="tabular-nums">{figures.protein}</strong> protein

@@ -4,9 +4,14 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { ProgressBar } from '../../../components/ui/progress-bar';
 import { useToast } from '../../../components/ui/toast';
-import { errorMessage } from '../../../lib/api-client';
+import { errorMessage, isApiError } from '../../../lib/api-client';
 import { cx } from '../../../lib/cx';
-import { PHOTO_TYPES, photoFileProblem, useUploadPhoto } from '../api/upload-photo';
+import { PHOTO_TYPES, photoFileProblem, useRemovePhoto, useUploadPhoto } from '../api/upload-photo';
+
+/** The words under the file field when the server sent them ("This file is not a photo…"), else the whole message. */
+function photoErrorWords(error: unknown) {
+  return (isApiError(error) && error.fieldErrors.file) || errorMessage(error);
+}
 
 function PlateSketch() {
   return (
@@ -22,12 +27,14 @@ function PlateSketch() {
 export function RecipePhotoCard({ recipe }: { recipe: RecipeDetail }) {
   const inputId = useId();
   const toast = useToast();
-  const upload = useUploadPhoto(recipe.id);
+  const upload = useUploadPhoto(recipe.id, recipe.revision);
+  const remove = useRemovePhoto(recipe.id, recipe.revision);
   const [problem, setProblem] = useState<string | null>(null);
 
   function send(file: File | undefined) {
     if (!file) return;
     upload.reset();
+    remove.reset();
     const reason = photoFileProblem(file);
     setProblem(reason);
     if (reason) return;
@@ -87,6 +94,22 @@ export function RecipePhotoCard({ recipe }: { recipe: RecipeDetail }) {
           >
             {recipe.photoUrl ? 'Replace the photo' : 'Add a photo'}
           </label>
+          {recipe.photoUrl && (
+            <Button
+              variant="quiet"
+              size="sm"
+              className="self-start"
+              loading={remove.isPending}
+              loadingLabel="Removing…"
+              onClick={() => {
+                upload.reset();
+                setProblem(null);
+                remove.mutate(undefined, { onSuccess: () => toast.show('Photo removed.', 'success') });
+              }}
+            >
+              Remove the photo
+            </Button>
+          )}
           <p id={`${inputId}-hint`} className="text-sm text-ink-soft">
             JPEG, PNG or WebP, up to 5 MB.
           </p>
@@ -100,7 +123,12 @@ export function RecipePhotoCard({ recipe }: { recipe: RecipeDetail }) {
       )}
       {failed && (
         <Alert tone="danger" title="The photo wasn't saved">
-          {errorMessage(upload.error)}
+          {photoErrorWords(upload.error)}
+        </Alert>
+      )}
+      {remove.isError && (
+        <Alert tone="danger" title="The photo wasn't removed">
+          {errorMessage(remove.error)}
         </Alert>
       )}
     </section>

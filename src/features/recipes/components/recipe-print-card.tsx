@@ -3,7 +3,7 @@ import { incompleteLineNumbers } from '../../../../shared/line-status';
 import { IncompleteTotalsAlert } from '../../../components/ui/incomplete-totals-alert';
 import { NutrientTable } from '../../../components/ui/nutrient-table';
 import { formatGrams } from '../../../lib/format';
-import { formatDateTime } from '../format-when';
+import { formatDateTime } from '../../../lib/dates';
 import { versionKindLabel, versionNote, writtenLine } from '../version-words';
 
 /** Method text as steps: one step a line, any "1." or "Step 1:" the cook typed left off. */
@@ -57,8 +57,8 @@ export function RecipePrintCard({ recipe, version, extras }: { recipe: RecipeDet
                   {extras?.household[i] && <span className="block text-sm text-ink-soft">{extras.household[i]}</span>}
                 </span>
                 <span>
-                  <span className="font-semibold">{line.foodName ?? line.input}</span>
-                  {line.foodName && writtenLine(line) && <span className="block text-sm text-ink-soft">{writtenLine(line)}</span>}
+                  <span className="font-semibold">{writtenLine(line) ?? line.foodName ?? line.input}</span>
+                  {line.foodName && writtenLine(line) && <span className="block text-sm text-ink-soft">matched: {line.foodName}</span>}
                   {line.checkMatch && line.foodName && <span className="block text-sm font-semibold">▲ check this match</span>}
                   {line.incomplete && <span className="block text-sm font-semibold">▲ not counted in the totals</span>}
                 </span>

@@ -6,10 +6,10 @@ import { NUTRIENT_ROWS } from '../../../components/ui/nutrient-table';
 import { cx } from '../../../lib/cx';
 import { formatGrams, formatKcal, formatMacroG, formatNumber } from '../../../lib/format';
 import { compareLines, rewrittenInPlace, type LineChange, type LineChangeKind } from '../compare-lines';
-import { formatWhen } from '../format-when';
+import { formatWhen } from '../../../lib/dates';
 import { nutrientChange, type DifferenceTone as ChangeTone, type Difference as NutrientChange } from '../../../lib/nutrient-difference';
 import { servingVolumeMl } from '../../../../shared/shown-figures';
-import { versionKindLabel, versionNote } from '../version-words';
+import { versionKindLabel, versionNote, writtenLine } from '../version-words';
 
 const MINUS = '\u2212';
 
@@ -155,26 +155,33 @@ function gramsText(change: LineChange): string {
   return `${before} → ${after}`;
 }
 
-function foodName(line: LineChange['before']): string {
-  if (!line) return '';
-  return line.foodName ?? `“${line.input}” (no food matched)`;
+/** The line as the cook wrote it, the matched food beneath. */
+function LineText({ line, className }: { line: LineChange['before']; className?: string }) {
+  if (!line) return null;
+  const written = writtenLine(line);
+  return (
+    <span className={cx('flex flex-col', className)}>
+      <span>{written ?? line.foodName ?? line.input}</span>
+      {written && <span className="text-sm font-normal text-ink-soft no-underline">{line.foodName ? `matched: ${line.foodName}` : 'no food matched'}</span>}
+    </span>
+  );
 }
 
 function FoodText({ change }: { change: LineChange }) {
   if (change.kind === 'swapped') {
     return (
-      <span className="flex flex-col">
-        <span className="text-ink-soft line-through decoration-oat-400">{foodName(change.before)}</span>
-        <span className="font-bold text-ink">
+      <span className="flex flex-col gap-1">
+        <LineText line={change.before} className="text-ink-soft line-through decoration-oat-400" />
+        <span className="flex gap-1 font-bold text-ink">
           <span aria-hidden="true">→ </span>
           <span className="sr-only">replaced by </span>
-          {foodName(change.after)}
+          <LineText line={change.after} />
         </span>
       </span>
     );
   }
-  if (change.kind === 'removed') return <span className="text-ink-soft line-through decoration-oat-400">{foodName(change.before)}</span>;
-  return <span className={cx(change.kind === 'same' ? 'text-ink-soft' : 'font-bold text-ink')}>{foodName(change.after)}</span>;
+  if (change.kind === 'removed') return <LineText line={change.before} className="text-ink-soft line-through decoration-oat-400" />;
+  return <LineText line={change.after} className={change.kind === 'same' ? 'text-ink-soft' : 'font-bold text-ink'} />;
 }
 
 function lineDelta(change: LineChange, a: VersionDetail, b: VersionDetail, key: 'kcal' | 'proteinG') {

@@ -22,8 +22,22 @@ function LineFlags({ line }: { line: VersionDetail['lines'][number] }) {
   );
 }
 
+/** The catalogue food a line was matched to, under the line as the cook wrote it. */
+function MatchedFood({ line }: { line: VersionDetail['lines'][number] }) {
+  if (!line.foodName)
+    return (
+      <span className="block">
+        <Badge tone="honey" title="No catalogue food matched this line, so it counts nothing">
+          No food matched
+        </Badge>
+      </span>
+    );
+  if (!writtenLine(line)) return null;
+  return <span className="block text-sm text-ink-soft">matched: {line.foodName}</span>;
+}
+
 /**
- * A version's ingredients: grams, the food it was matched to, and what the line brings to the whole
+ * A version's ingredients as the cook wrote them: grams, the food each was matched to, and what the line brings to the whole
  * dish, with the dish and one serving at the foot.
  */
 export function VersionLinesTable({ version, caption }: { version: VersionDetail; caption: string }) {
@@ -54,14 +68,8 @@ export function VersionLinesTable({ version, caption }: { version: VersionDetail
             {version.lines.map((line, i) => (
               <tr key={i} className="border-b border-line align-top last:border-b-0 even:bg-oat-50">
                 <th scope="row" className="px-3 py-2 text-left font-normal sm:px-4">
-                  <span className="block font-bold text-ink">
-                    {line.foodName ?? (
-                      <Badge tone="honey" title="No catalogue food matched this line, so it counts nothing">
-                        No food matched
-                      </Badge>
-                    )}
-                  </span>
-                  {writtenLine(line) && <span className="block text-sm text-ink-soft">“{writtenLine(line)}”</span>}
+                  <span className="block font-bold text-ink">{writtenLine(line) ?? line.foodName}</span>
+                  <MatchedFood line={line} />
                   <LineFlags line={line} />
                 </th>
                 <td className="px-3 py-2 text-right whitespace-nowrap tabular-nums sm:px-4">{formatGrams(line.grams)}</td>
@@ -95,8 +103,8 @@ export function VersionLinesTable({ version, caption }: { version: VersionDetail
         <ul aria-label={caption} className="flex flex-col rounded-field border border-line">
           {version.lines.map((line, i) => (
             <li key={i} className="flex flex-col gap-0.5 border-b border-line px-3 py-2.5 last:border-b-0 even:bg-oat-50">
-              <span className="font-bold text-ink">{line.foodName ?? <Badge tone="honey">No food matched</Badge>}</span>
-              {writtenLine(line) && <span className="text-sm text-ink-soft">“{writtenLine(line)}”</span>}
+              <span className="font-bold text-ink">{writtenLine(line) ?? line.foodName}</span>
+              <MatchedFood line={line} />
               <LineFlags line={line} />
               <span className="text-sm tabular-nums">
                 <strong>{formatGrams(line.grams)}</strong> · {formatKcal(line.nutrients.kcal)} · {formatMacroG(line.nutrients.proteinG)} protein

@@ -3,7 +3,7 @@ import { Badge, type BadgeTone } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { cx } from '../../../lib/cx';
 import { formatKcal, formatMacroG } from '../../../lib/format';
-import { formatDateTime, formatWhen } from '../format-when';
+import { formatDateTime, formatWhen } from '../../../lib/dates';
 import { versionKindLabel, versionNote } from '../version-words';
 
 const KIND_TONES: Record<VersionKind, BadgeTone> = { original: 'neutral', rewrite: 'herb', edit: 'ember' };

@@ -1,6 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
-import { api, isApiError } from '../../../lib/api-client';
-import { rewriteKeys } from './rewrite-keys';
+import type { MyCoachResponse } from '../../../../shared/schemas/my-coach';
+import { isApiError } from '../../../lib/api-client';
+import { fetchMyCoach } from '../../../lib/api/my-coach';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** What a client's coach set for one meal, with the coach's name for saying where the defaults come from. */
 export interface CoachMealTargets {
@@ -9,16 +11,11 @@ export interface CoachMealTargets {
   proteinG: number;
 }
 
-interface MyCoachAnswer {
-  coach: { id: number; displayName: string } | null;
-  targets: { perMeal?: { kcal?: unknown; proteinG?: unknown } } | null;
-}
-
 /** GET /api/coach read down to the per-meal targets; null without a coach, without targets, or signed out (401). */
-export async function fetchCoachMealTargets(signal?: AbortSignal): Promise<CoachMealTargets | null> {
-  let answer: MyCoachAnswer;
+export async function readCoachMealTargets(signal?: AbortSignal): Promise<CoachMealTargets | null> {
+  let answer: MyCoachResponse;
   try {
-    answer = await api.get<MyCoachAnswer>('/api/coach', { signal });
+    answer = await fetchMyCoach(signal);
   } catch (error) {
     if (isApiError(error) && (error.status === 401 || error.status === 403 || error.status === 404)) return null;
     throw error;
@@ -33,8 +30,8 @@ export async function fetchCoachMealTargets(signal?: AbortSignal): Promise<Coach
 /** Only asked for a signed-in person; a coach's targets change rarely, so one read a visit is enough. */
 export function useCoachMealTargets(signedIn: boolean) {
   return useQuery({
-    queryKey: rewriteKeys.coachTargets,
-    queryFn: ({ signal }) => fetchCoachMealTargets(signal),
+    queryKey: queryKeys.coach.mealTargets(),
+    queryFn: ({ signal }) => readCoachMealTargets(signal),
     enabled: signedIn,
     staleTime: 5 * 60_000,
     retry: false,

@@ -1,9 +1,9 @@
 import { useQuery } from '@tanstack/react-query';
 import type { RewriteRequest } from '../../../../shared/schemas/rewrite';
 import { isApiError } from '../../../lib/api-client';
+import { rewriteRecipe } from '../../../lib/api/compute';
+import { queryKeys } from '../../../lib/query-keys';
 import { infeasibleDetailsOf } from '../rewrite-types';
-import { rewriteRecipe } from './rewrite-recipe';
-import { rewriteKeys } from './rewrite-keys';
 
 /**
  * The exact model the solver ran for a request, in CPLEX LP text. Targets that cannot be met still
@@ -23,7 +23,7 @@ export async function fetchRewriteModel(request: RewriteRequest, signal?: AbortS
 /** Asked only while the disclosure is open; the same request is solved once. */
 export function useRewriteModel(request: RewriteRequest | null, signature: string, enabled: boolean) {
   return useQuery({
-    queryKey: rewriteKeys.model(signature),
+    queryKey: queryKeys.rewrite.model(signature),
     queryFn: ({ signal }) => fetchRewriteModel(request as RewriteRequest, signal),
     enabled: enabled && request !== null,
     staleTime: Infinity,

@@ -1,25 +1,12 @@
 import { useEffect, useId, useRef } from 'react';
 import { Button } from '../../../components/ui/button';
-import { CheckList, type CheckListItem } from '../../../components/ui/check-list';
+import { CheckList } from '../../../components/ui/check-list';
 import { CopyTextButton } from '../../../components/ui/copy-text-button';
-import { formatGrams } from '../../../lib/format';
-import type { ShoppingFood, ShoppingListResult } from '../api/build-shopping-list';
+import type { ShoppingListResponse as ShoppingListResult } from '../../../../shared/schemas/prep';
+import { shoppingCheckItem } from '../../../lib/shopping-items';
 import { shoppingChecksKey } from '../shopping-picks';
 import { portionsWord } from '../shopping-words';
-
-function foodKey(food: ShoppingFood): string {
-  return food.id === null ? `name:${food.name.trim().toLowerCase()}` : `food:${food.id}`;
-}
-
-function checkItem(item: ShoppingListResult['items'][number]): CheckListItem {
-  const unmatched = item.food.id === null;
-  return {
-    key: foodKey(item.food),
-    label: item.food.name,
-    amount: unmatched && item.grams === 0 ? '—' : formatGrams(item.grams),
-    detail: item.purchase ? `Buy ${item.purchase}` : unmatched ? 'Not in the catalogue: buy what the recipe line says.' : undefined,
-  };
-}
+import { countOf } from '../../../lib/words';
 
 export interface MergedShoppingListProps {
   list: ShoppingListResult;
@@ -43,8 +30,7 @@ export function MergedShoppingList({ list, onPrint }: MergedShoppingListProps) {
             What to buy
           </h2>
           <p className="text-sm text-ink-soft">
-            {list.items.length} item{list.items.length === 1 ? '' : 's'} for {list.sources.length} batch{list.sources.length === 1 ? '' : 'es'},{' '}
-            {portionsWord(totalPortions)} in all.
+            {countOf(list.items.length, 'item')} for {countOf(list.sources.length, 'batch')}, {portionsWord(totalPortions)} in all.
           </p>
         </div>
         <div className="flex flex-wrap gap-2 print:hidden">
@@ -63,7 +49,7 @@ export function MergedShoppingList({ list, onPrint }: MergedShoppingListProps) {
           </li>
         ))}
       </ul>
-      <CheckList label="Shopping list for every batch" items={list.items.map(checkItem)} storageKey={shoppingChecksKey(list.sources)} />
+      <CheckList label="Shopping list for every batch" items={list.items.map(shoppingCheckItem)} storageKey={shoppingChecksKey(list.sources)} />
     </section>
   );
 }
