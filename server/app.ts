@@ -26,7 +26,7 @@ import { clientsRouter } from './routes/clients';
 import { invitationsRouter } from './routes/invitations';
 import { myCoachRouter } from './routes/my-coach';
 import { targetsRouter } from './routes/targets';
-import { commentsRouter } from './routes/comments';
+import { commentsRouter, unreadCommentsRouter } from './routes/comments';
 import { outboxRouter } from './routes/outbox';
 import { prepRouter, shoppingListsRouter } from './routes/prep';
 import { rejectUnsafeText } from './middleware/text-safety';
@@ -113,7 +113,8 @@ export function createApp(context: AppContext) {
   api.use('/analyze', analyzeRouter(sequelize, limits.compute));
   api.use('/foods', foodsRouter(sequelize));
   api.use('/rewrite', rewriteRouter(sequelize, limits.compute));
-  api.use('/recipes/:id/versions/:number/comments', commentsRouter());
+  api.use('/recipes/:id/versions/:number/comments', commentsRouter(mail));
+  api.use('/comments', unreadCommentsRouter());
   api.use('/recipes/:id/versions/:number/prep', prepRouter(sequelize));
   api.use('/shopping-lists', shoppingListsRouter(sequelize));
   api.use('/recipes', recipesRouter(sequelize, config, limits));

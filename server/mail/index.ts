@@ -3,7 +3,7 @@ export type { FakeSmtp, FakeSmtpOptions, LoopbackHost, StoredMail } from './fake
 export { createMailer } from './mailer';
 export type { Mailer, MailerConfig, OutgoingMail } from './mailer';
 export { escapeHtml, formatExpiry, mailTemplates } from './templates';
-export type { InvitationMail, MailContent, PasswordResetMail } from './templates';
+export type { CommentMail, InvitationMail, MailContent, PasswordResetMail } from './templates';
 export { parseMessage } from './parse-message';
 export type { ParsedMessage } from './parse-message';
 export { createOutboxStore } from './outbox-store';

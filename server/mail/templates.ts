@@ -10,6 +10,17 @@ export interface InvitationMail {
   expiresAt: Date | string;
 }
 
+export interface CommentMail {
+  /** the version owner's display name */
+  ownerName: string;
+  authorName: string;
+  recipeTitle: string;
+  versionNumber: number;
+  /** the comment itself; long ones are cut in the mail */
+  body: string;
+  link: string;
+}
+
 export interface PasswordResetMail {
   displayName: string;
   link: string;
@@ -49,12 +60,15 @@ export function formatExpiry(expiresAt: Date | string): string {
   return `${words} UTC`;
 }
 
+const COMMENT_EXCERPT_CHARS = 600;
+
 interface Layout {
   greeting: string;
   paragraphs: string[];
   buttonLabel: string;
   link: string;
-  expiry: string;
+  /** when the link stops working; left out for links that do not expire */
+  expiry?: string;
   ignoreLine: string;
 }
 
@@ -66,8 +80,7 @@ function renderText(layout: Layout): string {
     `${layout.buttonLabel}:`,
     layout.link,
     '',
-    layout.expiry,
-    '',
+    ...(layout.expiry ? [layout.expiry, ''] : []),
     layout.ignoreLine,
     '',
     '— Hearthswap',
@@ -86,7 +99,7 @@ function renderHtml(layout: Layout): string {
     ...layout.paragraphs.map(paragraph),
     `<p style="margin:0 0 16px"><a href="${href}" style="display:inline-block;background:#c4532d;color:#ffffff;text-decoration:none;padding:10px 18px;border-radius:8px;font-weight:700">${escapeHtml(layout.buttonLabel)}</a></p>`,
     `<p style="margin:0 0 16px;font-size:14px">If the button does not work, paste this link into your browser:<br><a href="${href}">${href}</a></p>`,
-    paragraph(layout.expiry),
+    ...(layout.expiry ? [paragraph(layout.expiry)] : []),
     `<p style="margin:0 0 16px;font-size:14px;color:#6b5a52">${escapeHtml(layout.ignoreLine)}</p>`,
     '<p style="margin:0">— Hearthswap</p>',
     '</div></body></html>',
@@ -110,6 +123,21 @@ export const mailTemplates = {
       link: checkedLink(link),
       expiry: `This invitation is open until ${formatExpiry(expiresAt)}. After that, ask ${coach} for a fresh one.`,
       ignoreLine: 'Not expecting this? You can safely ignore this e-mail: nothing happens unless you open the link and accept.',
+    });
+  },
+
+  newComment({ ownerName, authorName, recipeTitle, versionNumber, body, link }: CommentMail): MailContent {
+    const author = singleLine(authorName);
+    const title = singleLine(recipeTitle);
+    const owner = singleLine(ownerName);
+    const text = body.trim();
+    const excerpt = text.length > COMMENT_EXCERPT_CHARS ? `${text.slice(0, COMMENT_EXCERPT_CHARS).trimEnd()}…` : text;
+    return render(`${author} commented on ${title}`, {
+      greeting: owner ? `Hello ${owner},` : 'Hello,',
+      paragraphs: [`${author} left a comment on version ${versionNumber} of “${title}”:`, `“${excerpt}”`],
+      buttonLabel: 'Read the comment',
+      link: checkedLink(link),
+      ignoreLine: 'You get this e-mail because your coach reviews the recipes you save. Leaving your coach on “My coach” stops these e-mails.',
     });
   },
 

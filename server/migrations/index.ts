@@ -6,6 +6,7 @@ import * as m0003 from './0003-recipes';
 import * as m0004 from './0004-coaching';
 import * as m0005 from './0005-shared-process-state';
 import * as m0006 from './0006-my-foods';
+import * as m0007 from './0007-coach-paths';
 
 /** Every migration in order; add new ones at the end and never edit one that has shipped. */
 const MIGRATIONS = [
@@ -15,6 +16,7 @@ const MIGRATIONS = [
   { name: '0004-coaching', ...m0004 },
   { name: '0005-shared-process-state', ...m0005 },
   { name: '0006-my-foods', ...m0006 },
+  { name: '0007-coach-paths', ...m0007 },
 ];
 
 export function createMigrator(sequelize: Sequelize) {

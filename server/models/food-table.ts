@@ -161,6 +161,20 @@ export async function hideFood(sequelize: Sequelize, transaction: Transaction, i
   await sequelize.query('UPDATE foods SET hidden_at = now(), hidden_reason = $2, updated_at = now() WHERE id = $1', { bind: [id, reason], transaction });
 }
 
+/**
+ * A departing owner's label foods that someone else's saved version uses stay, hidden and ownerless,
+ * so those versions keep their numbers; the rest go with the owner (the foreign key cascades).
+ */
+export async function orphanFoodsUsedByOthers(sequelize: Sequelize, transaction: Transaction, ownerId: number): Promise<void> {
+  await sequelize.query(
+    `UPDATE foods f SET owner_id = NULL, hidden_at = COALESCE(f.hidden_at, now()), hidden_reason = COALESCE(f.hidden_reason, 'owner deleted'), updated_at = now()
+     WHERE f.owner_id = :ownerId AND EXISTS (
+       SELECT 1 FROM recipe_versions v JOIN recipes r ON r.id = v.recipe_id
+       WHERE r.owner_id <> :ownerId AND v.lines @> jsonb_build_array(jsonb_build_object('foodId', f.id)))`,
+    { replacements: { ownerId }, transaction },
+  );
+}
+
 /** Gone with its portions (the foreign key cascades). */
 export async function deleteFood(sequelize: Sequelize, transaction: Transaction, id: number): Promise<void> {
   await sequelize.query('DELETE FROM foods WHERE id = $1', { bind: [id], transaction });

@@ -4,10 +4,11 @@ import { Recipe, RecipeVersion, initRecipes } from './recipe';
 import { Swap, initSwap } from './swap';
 import { Invitation, initInvitation } from './invitation';
 import { ClientTarget, initClientTarget } from './client-target';
+import { ClientBodyStats, initClientBodyStats } from './client-body-stats';
 import { VersionComment, initVersionComment } from './version-comment';
 import { PasswordReset, initPasswordReset } from './password-reset';
 
-export { User, Recipe, RecipeVersion, Swap, Invitation, ClientTarget, VersionComment, PasswordReset };
+export { User, Recipe, RecipeVersion, Swap, Invitation, ClientTarget, ClientBodyStats, VersionComment, PasswordReset };
 
 let initialised: Sequelize | null = null;
 
@@ -19,6 +20,7 @@ export function initModels(sequelize: Sequelize) {
   initSwap(sequelize);
   initInvitation(sequelize);
   initClientTarget(sequelize);
+  initClientBodyStats(sequelize);
   initVersionComment(sequelize);
   initPasswordReset(sequelize);
   initialised = sequelize;

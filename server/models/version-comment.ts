@@ -5,6 +5,8 @@ export class VersionComment extends Model<InferAttributes<VersionComment>, Infer
   declare recipeVersionId: number;
   declare authorId: number;
   declare body: string;
+  /** when the version's owner first read it; null while it counts as unread (comments by the owner are never unread) */
+  declare ownerReadAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -16,6 +18,7 @@ export function initVersionComment(sequelize: Sequelize) {
       recipeVersionId: { type: DataTypes.INTEGER, allowNull: false },
       authorId: { type: DataTypes.INTEGER, allowNull: false },
       body: { type: DataTypes.TEXT, allowNull: false },
+      ownerReadAt: { type: DataTypes.DATE, allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

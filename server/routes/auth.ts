@@ -11,6 +11,7 @@ import { requireAuth } from '../middleware/auth';
 import { createUser, updateProfile, type User } from '../services/users';
 import { changePassword, deleteAccount } from '../services/account';
 import type { S3Config } from '../config';
+import { registerFromInvitation } from '../services/invitations';
 import { HttpError } from '../lib/http-error';
 import type { RateLimits } from '../middleware/rate-limits';
 
@@ -47,7 +48,7 @@ export function authRouter({
 
   router.post('/register', limits.signups, async (req, res) => {
     const input = parse(registerSchema, req.body);
-    const user = await createUser(input);
+    const user = input.invitationToken ? (await registerFromInvitation(sequelize, input, input.invitationToken)).user : await createUser(input);
     await logIn(req, res, user);
     res.status(201).json(user.toPublic());
   });

@@ -6,9 +6,11 @@ import { parse } from '../middleware/validate';
 import { requireRole } from '../middleware/auth';
 import { clientVersions, listClients, removeClient } from '../services/clients';
 import { setClientTargets } from '../services/client-targets';
-import { invitationStatus, inviteClient, listInvitations, revokeInvitation } from '../services/invitations';
+import { inviteClient, listInvitations, revokeInvitation } from '../services/invitations';
 import type { Mailer } from '../mail';
 import type { ClientsResponse, ClientVersionsResponse, SavedClientTargets, SentInvitation } from '../../shared/schemas/clients';
+import { bodyStatsSchema } from '../../shared/schemas/body-stats';
+import { getBodyStats, saveBodyStats } from '../services/body-stats';
 
 export interface MailContext {
   mailer: Mailer;
@@ -23,8 +25,9 @@ export function clientsRouter(sequelize: Sequelize, mail: MailContext) {
   });
   router.post('/invitations', async (req, res) => {
     const { email } = parse(invitationSchema, req.body);
-    const inv = await inviteClient(req.user!, email, mail);
-    res.status(201).json({ id: inv.id, email: inv.email, status: invitationStatus(inv), expiresAt: inv.expiresAt.toISOString() } satisfies SentInvitation);
+    const { invitation, renewed } = await inviteClient(sequelize, req.user!, email, mail);
+    const sent: SentInvitation = { id: invitation.id, email: invitation.email, status: 'pending', expiresAt: invitation.expiresAt.toISOString(), renewed };
+    res.status(renewed ? 200 : 201).json(sent);
   });
   router.delete('/invitations/:id', async (req, res) => {
     const { id } = parse(idParam, req.params);
@@ -40,6 +43,15 @@ export function clientsRouter(sequelize: Sequelize, mail: MailContext) {
     const { id } = parse(idParam, req.params);
     const targets = parse(clientTargetsSchema, req.body);
     res.json({ clientId: id, targets: await setClientTargets(req.user!, id, targets) } satisfies SavedClientTargets);
+  });
+  router.get('/:id/body-stats', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    res.json(await getBodyStats(req.user!, id));
+  });
+  router.put('/:id/body-stats', async (req, res) => {
+    const { id } = parse(idParam, req.params);
+    const stats = parse(bodyStatsSchema, req.body);
+    res.json(await saveBodyStats(req.user!, id, stats));
   });
   router.get('/:id/versions', async (req, res) => {
     const { id } = parse(idParam, req.params);

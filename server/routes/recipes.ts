@@ -85,20 +85,35 @@ export function recipesRouter(sequelize: Sequelize, config: AppConfig, limits: R
 
   router.post('/import', limits.recipeImports, singleFile(MAX_IMPORT_BYTES, 'recipe file'), async (req, res) => {
     if (!req.file) throw badRequest('file: attach the recipe in the form field "file".', { fieldErrors: { file: ['Required.'] } });
-    const imported = parseRecipeFile(req.file.buffer);
-    const title = importedTitle(imported.title, await ownRecipeTitles(req.user!));
-    const input = importedRecipeInput({ ...imported, title });
-    if (imported.versions) assertSafeText(imported.versions, 'file');
-    const recipe = imported.versions
-      ? await importRecipeWithVersions(
-          sequelize,
-          await engine(),
-          req.user!,
-          { title, servings: input.servings, notes: input.notes ?? '', method: input.method ?? '' },
-          imported.versions,
-        )
-      : await createRecipe(sequelize, await engine(), req.user!, input);
-    res.status(201).json({ ...(await recipeDetail(recipe)), importedFrom: imported.format });
+    const files = parseRecipeFile(req.file.buffer);
+    // Every recipe is checked before any is saved, so a bad one in a book saves nothing.
+    const prepared = files.map((imported) => {
+      if (imported.versions) assertSafeText(imported.versions, 'file');
+      return { imported, input: importedRecipeInput(imported) };
+    });
+    const taken = new Set(await ownRecipeTitles(req.user!));
+    const saved = [];
+    for (const { imported, input } of prepared) {
+      const title = importedTitle(imported.title, taken);
+      taken.add(title.trim().toLowerCase());
+      saved.push(
+        imported.versions
+          ? await importRecipeWithVersions(
+              sequelize,
+              await engine(),
+              req.user!,
+              { title, servings: input.servings, notes: input.notes ?? '', method: input.method ?? '' },
+              imported.versions,
+            )
+          : await createRecipe(sequelize, await engine(), req.user!, { ...input, title }),
+      );
+    }
+    res.status(201).json({
+      ...(await recipeDetail(saved[0])),
+      importedFrom: files[0].format,
+      importedCount: saved.length,
+      alsoImported: saved.slice(1).map((r) => ({ id: r.id, title: r.title })),
+    });
   });
 
   // every recipe with every version, for keeping (and before deleting an account)

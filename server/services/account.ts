@@ -2,6 +2,7 @@ import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import bcrypt from 'bcryptjs';
 import type { S3Config } from '../config';
 import { Recipe, User } from '../models';
+import { orphanFoodsUsedByOthers } from '../models/food-table';
 import { HttpError, notFound } from '../lib/http-error';
 import { hashPassword } from './users';
 import { removePhoto } from './photo-storage';
@@ -46,13 +47,7 @@ export async function deleteAccount(sequelize: Sequelize, s3: S3Config | null, u
   await checkPassword(userId, password, 'password');
   const photoKeys = await sequelize.transaction(async (transaction) => {
     const recipes = await Recipe.findAll({ where: { ownerId: userId }, attributes: ['photoKey'], transaction });
-    await sequelize.query(
-      `UPDATE foods f SET owner_id = NULL, hidden_at = COALESCE(f.hidden_at, now()), hidden_reason = COALESCE(f.hidden_reason, 'owner deleted'), updated_at = now()
-       WHERE f.owner_id = :userId AND EXISTS (
-         SELECT 1 FROM recipe_versions v JOIN recipes r ON r.id = v.recipe_id
-         WHERE r.owner_id <> :userId AND v.lines @> jsonb_build_array(jsonb_build_object('foodId', f.id)))`,
-      { replacements: { userId }, transaction },
-    );
+    await orphanFoodsUsedByOthers(sequelize, transaction, userId);
     await endSessions(sequelize, userId, null, transaction);
     await User.destroy({ where: { id: userId }, transaction });
     return recipes.map((r) => r.photoKey).filter((k): k is string => k !== null);

@@ -1,5 +1,5 @@
 import { Op } from 'sequelize';
-import { ClientTarget, Recipe, RecipeVersion, User, VersionComment } from '../models';
+import { ClientBodyStats, ClientTarget, Recipe, RecipeVersion, User, VersionComment } from '../models';
 import { notFound } from '../lib/http-error';
 import type { Client, ClientVersion } from '../../shared/schemas/clients';
 
@@ -21,6 +21,7 @@ export async function removeClient(coach: User, clientId: number) {
   client.coachId = null;
   await client.save();
   await ClientTarget.destroy({ where: { clientId } });
+  await ClientBodyStats.destroy({ where: { clientId } });
 }
 
 export async function clientVersions(coach: User, clientId: number): Promise<ClientVersion[]> {

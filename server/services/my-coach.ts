@@ -1,4 +1,4 @@
-import { ClientTarget, Swap, User } from '../models';
+import { ClientBodyStats, ClientTarget, Swap, User } from '../models';
 import type { FoodEngine } from './food-engine';
 import { swapView } from './swaps';
 import type { MyCoachResponse } from '../../shared/schemas/my-coach';
@@ -18,5 +18,6 @@ export async function myCoach(viewer: User, engine: FoodEngine): Promise<MyCoach
 export async function leaveCoach(viewer: User) {
   if (!viewer.coachId) return;
   await ClientTarget.destroy({ where: { clientId: viewer.id } });
+  await ClientBodyStats.destroy({ where: { clientId: viewer.id } });
   await User.update({ coachId: null }, { where: { id: viewer.id } });
 }

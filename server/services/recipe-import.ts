@@ -73,21 +73,30 @@ function isRecipeNode(node: unknown): node is Record<string, unknown> {
   return type === 'Recipe' || (Array.isArray(type) && type.includes('Recipe'));
 }
 
-function findRecipeNode(doc: unknown): Record<string, unknown> | null {
-  if (isRecipeNode(doc)) return doc;
-  if (Array.isArray(doc)) {
-    for (const d of doc) {
-      const found = findRecipeNode(d);
-      if (found) return found;
-    }
+/** Every Recipe of a document, in file order: the document itself, an array of them, or an `@graph`. */
+function collectRecipeNodes(doc: unknown, into: Record<string, unknown>[]): void {
+  if (isRecipeNode(doc)) {
+    into.push(doc);
+    return;
   }
-  if (doc && typeof doc === 'object' && '@graph' in doc) return findRecipeNode((doc as { '@graph': unknown })['@graph']);
-  return null;
+  if (Array.isArray(doc)) for (const d of doc) collectRecipeNodes(d, into);
+  else if (doc && typeof doc === 'object' && '@graph' in doc) collectRecipeNodes((doc as { '@graph': unknown })['@graph'], into);
 }
 
-function fromJsonLd(doc: unknown): ImportedRecipe {
-  const node = findRecipeNode(doc);
-  if (!node) throw badRequest('file: the JSON has no schema.org Recipe in it (no object with "@type": "Recipe").');
+/** At most this many recipes from one file (a whole-book export holds one per recipe). */
+export const MAX_RECIPES_PER_FILE = 200;
+
+function fromJsonLd(doc: unknown): ImportedRecipe[] {
+  const nodes: Record<string, unknown>[] = [];
+  collectRecipeNodes(doc, nodes);
+  if (nodes.length === 0) throw badRequest('file: the JSON has no schema.org Recipe in it (no object with "@type": "Recipe").');
+  if (nodes.length > MAX_RECIPES_PER_FILE) {
+    throw badRequest(`file: the file holds ${nodes.length} recipes; import at most ${MAX_RECIPES_PER_FILE} at a time.`);
+  }
+  return nodes.map(recipeFromNode);
+}
+
+function recipeFromNode(node: Record<string, unknown>): ImportedRecipe {
   const ingredients = (Array.isArray(node.recipeIngredient) ? node.recipeIngredient : Array.isArray(node.ingredients) ? node.ingredients : [])
     .map((s) => String(s).trim())
     .filter(Boolean);
@@ -171,8 +180,11 @@ function fromText(text: string): ImportedRecipe {
   };
 }
 
-/** Decides the type by content, never by the file name: JSON with a schema.org Recipe, or UTF-8 text. */
-export function parseRecipeFile(buffer: Buffer): ImportedRecipe {
+/**
+ * Decides the type by content, never by the file name: JSON with schema.org Recipes (every one of
+ * them, so a whole-book export comes back whole), or one UTF-8 text recipe.
+ */
+export function parseRecipeFile(buffer: Buffer): ImportedRecipe[] {
   if (buffer.length === 0) throw badRequest('file: the file is empty.');
   if (buffer.includes(0)) throw badRequest('file: this is a binary file; upload a .txt or .md recipe or a schema.org Recipe .json/.jsonld file.');
   const text = new TextDecoder('utf-8', { fatal: false }).decode(buffer).replace(/^\uFEFF/, '');
@@ -190,7 +202,7 @@ export function parseRecipeFile(buffer: Buffer): ImportedRecipe {
     }
     return fromJsonLd(doc);
   }
-  return fromText(text);
+  return [fromText(text)];
 }
 
 /**

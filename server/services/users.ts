@@ -1,5 +1,5 @@
 import bcrypt from 'bcryptjs';
-import { UniqueConstraintError } from 'sequelize';
+import { UniqueConstraintError, type Transaction } from 'sequelize';
 import { User } from '../models';
 import { conflict, notFound } from '../lib/http-error';
 import type { RegisterInput, UpdateMeInput, UserRole } from '../../shared/schemas/auth';
@@ -12,14 +12,17 @@ export async function hashPassword(password: string) {
   return bcrypt.hash(password, BCRYPT_COST);
 }
 
-export async function createUser(input: RegisterInput | (Omit<RegisterInput, 'role'> & { role: UserRole })) {
+export async function createUser(input: RegisterInput | (Omit<RegisterInput, 'role'> & { role: UserRole }), transaction?: Transaction) {
   try {
-    return await User.create({
-      email: input.email,
-      passwordHash: await hashPassword(input.password),
-      displayName: input.displayName,
-      role: input.role,
-    });
+    return await User.create(
+      {
+        email: input.email,
+        passwordHash: await hashPassword(input.password),
+        displayName: input.displayName,
+        role: input.role,
+      },
+      { transaction },
+    );
   } catch (error) {
     if (error instanceof UniqueConstraintError) {
       throw conflict('An account with this e-mail already exists.', { fieldErrors: { email: ['Already registered.'] } });

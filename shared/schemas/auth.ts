@@ -27,6 +27,11 @@ export const registerSchema = z.object({
   password,
   displayName,
   role: z.enum(['cook', 'coach'], { message: 'Choose cook or coach.' }),
+  /** sign-up from a coach's invitation link: the account must use the invited address, and is linked at once */
+  invitationToken: z
+    .string()
+    .regex(/^[A-Za-z0-9_-]{20,100}$/, { message: 'This invitation link is not valid.' })
+    .optional(),
 });
 export type RegisterInput = z.infer<typeof registerSchema>;
 

@@ -20,6 +20,8 @@ export interface Invitation {
   status: InvitationStatus;
   expiresAt: string;
   createdAt: string;
+  /** when the link was last mailed: inviting the address again renews an open invitation */
+  sentAt: string;
 }
 
 /** GET /api/clients */
@@ -28,8 +30,18 @@ export interface ClientsResponse {
   invitations: Invitation[];
 }
 
-/** POST /api/clients/invitations (201) */
-export type SentInvitation = Omit<Invitation, 'createdAt'>;
+/**
+ * POST /api/clients/invitations. One open invitation per address and coach: inviting an address
+ * that already has one renews it (a new link, a new week, the mail sent again; the earlier link
+ * stops working) and answers 200 with `renewed: true`; a first invitation answers 201.
+ */
+export interface SentInvitation {
+  id: number;
+  email: string;
+  status: 'pending';
+  expiresAt: string;
+  renewed: boolean;
+}
 
 /** PUT /api/clients/:id/targets */
 export interface SavedClientTargets {

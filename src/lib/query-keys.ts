@@ -43,9 +43,11 @@ export const queryKeys = {
     details: () => ['clients', 'detail'] as const,
     detail: (id: number | string) => ['clients', 'detail', String(id)] as const,
     versions: (clientId: number) => ['clients', 'detail', String(clientId), 'versions'] as const,
+    bodyStats: (clientId: number) => ['clients', 'detail', String(clientId), 'body-stats'] as const,
   },
   comments: {
     thread: (recipeId: number, number: number) => ['comments', String(recipeId), number] as const,
+    unread: () => ['comments', 'unread'] as const,
   },
   rewrite: {
     model: (requestSignature: string) => ['rewrite', 'model', requestSignature] as const,

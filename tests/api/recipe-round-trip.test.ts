@@ -178,6 +178,42 @@ describe('export then import (JSON-LD with hearthswap:versions)', () => {
     expect(edit[1][0].warnings.join(' ')).toMatch(/Hollowbrook protein elbows/);
   });
 
+  it('the whole-book file imports whole: every recipe with every version, titles kept apart from the cook’s own', async () => {
+    const cook = await signUp(t.app);
+    const { id } = await correctedRecipe(cook);
+    await cook.agent
+      .post('/api/recipes')
+      .set('X-CSRF-Token', cook.csrf)
+      .send({ title: 'Oat bake', servings: 2, text: '1 cup rolled oats\n2 large eggs' })
+      .expect(201);
+    const book = await cook.agent.get('/api/recipes/export.jsonld').expect(200);
+    const res = await cook.agent.post('/api/recipes/import').set('X-CSRF-Token', cook.csrf).attach('file', Buffer.from(book.text), 'book.jsonld').expect(201);
+    expect(res.body.importedCount).toBe(2);
+    expect([res.body.title, ...res.body.alsoImported.map((r: { title: string }) => r.title)]).toEqual(['Stovetop mac (imported)', 'Oat bake (imported)']);
+    const [before, after] = [await allVersions(cook, id), await allVersions(cook, res.body.id)];
+    expect(after.map((v) => v.lines.map((l: { grams: number }) => l.grams))).toEqual(before.map((v) => v.lines.map((l: { grams: number }) => l.grams)));
+  });
+
+  it('a whole-book file with one damaged recipe saves none of its recipes', async () => {
+    const cook = await signUp(t.app);
+    await correctedRecipe(cook);
+    await cook.agent
+      .post('/api/recipes')
+      .set('X-CSRF-Token', cook.csrf)
+      .send({ title: 'Oat bake', servings: 2, text: '1 cup rolled oats\n2 large eggs' })
+      .expect(201);
+    const doc = JSON.parse((await cook.agent.get('/api/recipes/export.jsonld').expect(200)).text);
+    doc['@graph'][1].recipeIngredient = [];
+    const before = (await cook.agent.get('/api/recipes').expect(200)).body.recipes.length;
+    const res = await cook.agent
+      .post('/api/recipes/import')
+      .set('X-CSRF-Token', cook.csrf)
+      .attach('file', Buffer.from(JSON.stringify(doc)), 'book.jsonld')
+      .expect(400);
+    expect(res.body.error.message).toMatch(/recipeIngredient/);
+    expect((await cook.agent.get('/api/recipes').expect(200)).body.recipes.length).toBe(before);
+  });
+
   it('refuses a damaged version history naming the field in the file, and saves nothing', async () => {
     const cook = await signUp(t.app);
     const { id } = await correctedRecipe(cook);

@@ -9,6 +9,7 @@ import { clientPath } from '../../features/clients/client-paths';
 import { ClientList } from '../../features/clients/components/client-list';
 import { InvitationList } from '../../features/clients/components/invitation-list';
 import { InviteClientForm } from '../../features/clients/components/invite-client-form';
+import { invitationSentWords } from '../../features/clients/invitation-words';
 
 export function ClientsPage() {
   const clients = useClients();
@@ -21,7 +22,7 @@ export function ClientsPage() {
     >
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <Card title="Invite a client" className="lg:col-start-2">
-          <InviteClientForm onInvited={(email) => toast.show(`Invitation sent to ${email}.`, 'success')} />
+          <InviteClientForm onInvited={(sent) => toast.show(invitationSentWords(sent), 'success')} />
         </Card>
 
         <section aria-labelledby="clients-heading" className="flex flex-col gap-4 lg:col-start-1 lg:row-span-2 lg:row-start-1">

@@ -23,7 +23,7 @@ export function InvitationPage() {
           token={token}
           user={auth.user}
           signInHref={`/sign-in?${next}`}
-          signUpHref={`/sign-up?${next}`}
+          signUpHref={`/sign-up?invitation=${encodeURIComponent(token)}&${next}`}
           onAccepted={(coachName) => {
             toast.show(`You're linked with ${coachName}.`, 'success');
             navigate('/coach', { replace: true });

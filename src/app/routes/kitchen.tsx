@@ -20,7 +20,8 @@ import { useRecipe } from '../../features/recipes/api/get-recipe';
 import { useRecipeVersion } from '../../features/recipes/api/get-version';
 import { useSaveVersion } from '../../features/recipes/api/save-version';
 import { positiveInt, recipePath } from '../../features/recipes/recipe-links';
-import { RewritePanel, type RewriteRecipe } from '../../features/rewrite/components/rewrite-panel';
+import { LazyRewritePanel } from '../../features/rewrite/components/lazy-rewrite-panel';
+import type { RewriteRecipe } from '../../features/rewrite/components/rewrite-panel';
 import type { RewriteSaveAction } from '../../features/rewrite/components/save-rewrite';
 import type { RewriteDraft } from '../../features/rewrite/save-draft';
 import { signInPathFor } from '../../lib/safe-redirect';
@@ -189,7 +190,7 @@ function KitchenRewrite({ recipe, unitSystem, kitchen }: { recipe: RewriteRecipe
   }, [auth.status, auth.user, location, createRecipe, saveVersion, navigate, source, editedSinceOpened, setSource]);
 
   return (
-    <RewritePanel
+    <LazyRewritePanel
       recipe={recipe}
       unitSystem={unitSystem}
       signedIn={auth.status === 'signed-in'}

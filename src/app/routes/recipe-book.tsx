@@ -1,4 +1,4 @@
-import { useEffect, useEffectEvent, useRef, useState } from 'react';
+import { useEffect, useEffectEvent, useMemo, useRef, useState } from 'react';
 import { Link, useLocation, useNavigate, useSearchParams } from 'react-router';
 import { ActionToast } from '../../components/ui/action-toast';
 import { Button, buttonClasses } from '../../components/ui/button';
@@ -16,6 +16,7 @@ import { recipePath } from '../../features/recipes/recipe-links';
 import { useDebounce } from 'use-debounce';
 import { deletedRecipeFrom } from '../../features/recipes/deleted-recipe-state';
 import { errorMessage } from '../../lib/api-client';
+import { useUnreadComments } from '../../features/clients/api/version-comments';
 import { countOf } from '../../lib/words';
 
 function UndoDelete() {
@@ -62,6 +63,8 @@ export function RecipeBookPage() {
   const sort: RecipeSort = isRecipeSort(sortParam) ? sortParam : 'updated';
   const [q] = useDebounce(typed.trim(), 250);
   const recipes = useRecipes(q, sort);
+  const unread = useUnreadComments(true);
+  const unreadByRecipe = useMemo(() => new Map(unread.data?.recipes.map((r) => [r.recipeId, r.unread])), [unread.data]);
 
   // The address can change under the page (the "Recipe book" link, back and forward): follow it.
   const urlQ = params.get('q') ?? '';
@@ -145,7 +148,7 @@ export function RecipeBookPage() {
             Try a shorter word, or check the spelling.
           </EmptyState>
         ) : (
-          <RecipeList recipes={recipes.data} caption="Your recipes, with energy and protein per serving of each one's newest version" />
+          <RecipeList recipes={recipes.data} caption="Your recipes, with energy and protein per serving of each one's newest version" unread={unreadByRecipe} />
         )}
       </div>
     );
@@ -166,6 +169,8 @@ export function RecipeBookPage() {
         onClose={() => setImporting(false)}
         onImported={(recipe) => {
           setImporting(false);
+          const count = recipe.importedCount ?? 1;
+          if (count > 1) return toast.show(`${count} recipes are in the book, each with every version the file kept.`, 'success');
           toast.show(`“${recipe.title}” is in the book, with its ingredients as version 1.`, 'success');
           navigate(recipePath(recipe.id));
         }}

@@ -1,7 +1,9 @@
-import { useRef } from 'react';
-import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
+import { useEffect, useRef } from 'react';
+import { Link, useLocation, useNavigate, useParams, useSearchParams } from 'react-router';
 import type { RecipeDetail } from '../../../shared/schemas/recipes';
-import { buttonClasses } from '../../components/ui/button';
+import { Alert } from '../../components/ui/alert';
+import { Button, buttonClasses } from '../../components/ui/button';
+import { CountBadge, unreadCommentsLabel } from '../../components/ui/count-badge';
 import { Card } from '../../components/ui/card';
 import { EmptyState } from '../../components/ui/empty-state';
 import { ErrorState } from '../../components/ui/error-state';
@@ -25,6 +27,7 @@ import type { DeletedRecipeState } from '../../features/recipes/deleted-recipe-s
 import { formatWhen } from '../../lib/dates';
 import { positiveInt, recipePath } from '../../features/recipes/recipe-links';
 import { errorMessage, isApiError } from '../../lib/api-client';
+import { useUnreadComments } from '../../features/clients/api/version-comments';
 import { CommentThread } from '../../features/clients/components/comment-thread';
 import { useAuth } from '../auth-context';
 import { countOf } from '../../lib/words';
@@ -49,6 +52,19 @@ function RecipeView({ recipe, onReload }: { recipe: RecipeDetail; onReload: () =
   const selected = recipe.versions.find((v) => v.number === asked) ?? newest;
 
   const linesRef = useRef<HTMLDivElement>(null);
+  const commentsRef = useRef<HTMLDivElement>(null);
+  const { hash } = useLocation();
+  // this page is the cook's own book (PAGE_ROLES.recipeBook); a coach reviews on the client pages
+  const ownRecipe = user?.role === 'cook';
+  const unread = useUnreadComments(ownRecipe);
+  const unreadHere = unread.data?.recipes.find((r) => r.recipeId === recipe.id) ?? null;
+  const unreadElsewhere = unreadHere?.versions.find((v) => v.number !== selected?.number) ?? null;
+  const showComments = Boolean(selected && user && (user.coachId != null || (unreadHere?.unread ?? 0) > 0));
+
+  // The comment e-mail links to #comments: the thread mounts after the recipe loads, so go there then.
+  useEffect(() => {
+    if (hash === '#comments' && showComments) commentsRef.current?.scrollIntoView({ block: 'start' });
+  }, [hash, showComments]);
 
   function select(number: number) {
     setParams(number === newest?.number ? {} : { version: String(number) }, { replace: true, preventScrollReset: true });
@@ -119,7 +135,31 @@ function RecipeView({ recipe, onReload }: { recipe: RecipeDetail; onReload: () =
         />
       }
     >
-      <div className="-mt-4">{backToBook}</div>
+      <div className="-mt-4 flex flex-wrap items-center gap-3">
+        {backToBook}
+        {unreadHere && <CountBadge count={unreadHere.unread} label={unreadCommentsLabel(unreadHere.unread)} className="text-sm" />}
+      </div>
+      {unreadElsewhere && (
+        <Alert
+          tone="info"
+          title={`New from your coach on version ${unreadElsewhere.number}`}
+          announce={false}
+          action={
+            <Button
+              variant="secondary"
+              size="sm"
+              onClick={() => {
+                select(unreadElsewhere.number);
+                requestAnimationFrame(() => commentsRef.current?.scrollIntoView({ block: 'start', behavior: 'smooth' }));
+              }}
+            >
+              Read {unreadElsewhere.unread === 1 ? 'it' : 'them'}
+            </Button>
+          }
+        >
+          {unreadElsewhere.unread === 1 ? 'A comment' : `${unreadElsewhere.unread} comments`} you haven't read yet.
+        </Alert>
+      )}
       <RecipeFigures version={newest} servings={recipe.servings} versionCount={versionCount} />
       {/* The timeline comes before the lines it picks, in reading order and in focus order. */}
       <div className="grid grid-cols-[minmax(0,1fr)] items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
@@ -149,13 +189,15 @@ function RecipeView({ recipe, onReload }: { recipe: RecipeDetail; onReload: () =
           ) : (
             <EmptyState title="No versions yet">This recipe has no saved ingredients.</EmptyState>
           )}
-          {selected && user?.coachId != null && (
-            <Card
-              title={`Notes with your coach on version ${selected.number}`}
-              description="Your coach reviews the versions you save and can leave a comment here."
-            >
-              <CommentThread recipeId={recipe.id} number={selected.number} viewerId={user.id} otherName="your coach" />
-            </Card>
+          {selected && user && showComments && (
+            <div ref={commentsRef} id="comments" className="scroll-mt-24">
+              <Card
+                title={`Notes with your coach on version ${selected.number}`}
+                description="Your coach reviews the versions you save and can leave a comment here."
+              >
+                <CommentThread recipeId={recipe.id} number={selected.number} viewerId={user.id} otherName="your coach" ownerView={ownRecipe} />
+              </Card>
+            </div>
           )}
           <RecipeDetailsCard recipe={recipe} onReload={onReload} />
         </div>

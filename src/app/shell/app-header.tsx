@@ -1,6 +1,9 @@
 import { useEffect, useId, useRef } from 'react';
 import { Link } from 'react-router';
 import { buttonClasses } from '../../components/ui/button';
+import { ToastRegion } from '../../components/ui/toast';
+import { CountBadge, unreadCommentsLabel } from '../../components/ui/count-badge';
+import { useUnreadCommentTotal } from './use-unread-comments';
 import { ROLE_LABELS } from '../../lib/user';
 import { navItemsFor } from '../access';
 import { useAuth } from '../auth-context';
@@ -66,6 +69,7 @@ export function AppHeader() {
   const [menuOpen, setMenuOpen] = useMenuOpen();
   const menuId = useId();
   const menuButton = useRef<HTMLButtonElement>(null);
+  const unread = useUnreadCommentTotal();
 
   useEffect(() => {
     if (!menuOpen) return;
@@ -84,7 +88,7 @@ export function AppHeader() {
       <div className="mx-auto flex max-w-shell items-center gap-6 px-gutter py-3">
         <Wordmark />
         <nav aria-label="Main" className="hidden lg:block">
-          <NavLinks items={items} layout="row" />
+          <NavLinks items={items} layout="row" unread={unread} />
         </nav>
         <div className="ml-auto hidden lg:block">
           {auth.status === 'signed-in' && auth.user ? (
@@ -111,12 +115,14 @@ export function AppHeader() {
             )}
           </svg>
           {menuOpen ? 'Close' : 'Menu'}
+          {!menuOpen && <CountBadge count={unread} label={unreadCommentsLabel(unread)} />}
         </button>
       </div>
+      <ToastRegion />
       <div id={menuId} hidden={!menuOpen} className="border-t border-line bg-canvas lg:hidden">
         <div className="mx-auto flex max-w-shell flex-col gap-5 px-gutter py-4">
           <nav aria-label="Main">
-            <NavLinks items={items} layout="column" />
+            <NavLinks items={items} layout="column" unread={unread} />
           </nav>
           <hr className="border-line" />
           {auth.status === 'checking' ? null : <MobileAccount />}

@@ -1,6 +1,8 @@
 import { useEffect, useRef, useState, type ReactNode } from 'react';
+import { createPortal } from 'react-dom';
 import { cx } from '../../lib/cx';
 import { Spinner } from './spinner';
+import { useToastRegion } from './toast';
 
 export interface ActionToastProps {
   /** what happened, e.g. "“Baked ziti” was deleted." */
@@ -17,10 +19,11 @@ export interface ActionToastProps {
 }
 
 /**
- * A toast with one action (undo). Place it early in the page so a keyboard user meets the action
- * first; it still shows at the bottom of the screen.
+ * A toast with one action (undo). It shows in the header's toast strip with the others, so it never
+ * covers a button of the page; without a header it is placed where it is rendered.
  */
 export function ActionToast({ message, actionLabel, onAction, onDismiss, durationMs = 10_000, busy = false, className }: ActionToastProps) {
+  const region = useToastRegion();
   const [paused, setPaused] = useState(false);
   const remaining = useRef(durationMs);
   const dismissRef = useRef(onDismiss);
@@ -38,9 +41,10 @@ export function ActionToast({ message, actionLabel, onAction, onDismiss, duratio
     };
   }, [paused, busy]);
 
-  return (
+  const toast = (
     <div
       role="status"
+      data-toast=""
       onMouseEnter={() => setPaused(true)}
       onMouseLeave={() => setPaused(false)}
       onFocus={() => setPaused(true)}
@@ -48,9 +52,7 @@ export function ActionToast({ message, actionLabel, onAction, onDismiss, duratio
         if (!event.currentTarget.contains(event.relatedTarget as Node | null)) setPaused(false);
       }}
       className={cx(
-        'fixed inset-x-4 top-20 z-50 mx-auto flex max-w-md flex-wrap items-center gap-x-3 gap-y-2 rounded-field bg-oat-900 px-4 py-3 text-oat-50 shadow-pop',
-        // Plain toasts stack at the bottom (centred on a phone, right from sm up): keep clear of them.
-        'sm:inset-x-auto sm:top-auto sm:bottom-4 sm:left-6 sm:mx-0',
+        'flex w-full flex-wrap items-center gap-x-3 gap-y-2 rounded-field bg-oat-900 px-4 py-2.5 text-oat-50 shadow-pop sm:max-w-xl',
         'print:hidden',
         className,
       )}
@@ -78,4 +80,5 @@ export function ActionToast({ message, actionLabel, onAction, onDismiss, duratio
       </span>
     </div>
   );
+  return region ? createPortal(toast, region) : toast;
 }

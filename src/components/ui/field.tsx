@@ -3,7 +3,7 @@ import { cx } from '../../lib/cx';
 
 const CONTROL =
   'block w-full rounded-field border bg-surface px-3.5 py-2.5 text-base text-ink placeholder:text-oat-600 ' +
-  'transition-colors focus-visible:border-focus disabled:bg-oat-100 disabled:text-oat-700';
+  'transition-colors focus-visible:border-focus disabled:bg-oat-100 disabled:text-oat-700 [&[readonly]]:bg-oat-100 [&[readonly]]:text-ink-soft';
 
 function controlClasses(invalid: boolean, className?: string): string {
   return cx(CONTROL, invalid ? 'border-beet-600' : 'border-line-strong', className);

@@ -1,4 +1,5 @@
 import { createContext, useCallback, useContext, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
+import { createPortal } from 'react-dom';
 import { cx } from '../../lib/cx';
 
 export type ToastTone = 'info' | 'success' | 'danger';
@@ -10,11 +11,16 @@ interface Toast {
 }
 
 interface ToastApi {
-  /** shows a short message in the corner for a few seconds */
+  /** shows a short message under the header for a few seconds */
   show: (message: string, tone?: ToastTone) => void;
 }
 
 const ToastContext = createContext<ToastApi | null>(null);
+/** the element toasts render into (set by <ToastRegion />), and its setter */
+const RegionContext = createContext<{ region: HTMLElement | null; setRegion: (el: HTMLElement | null) => void }>({
+  region: null,
+  setRegion: () => {},
+});
 
 const TOAST_MS = 5000;
 
@@ -24,8 +30,14 @@ const TONE_CLASSES: Record<ToastTone, string> = {
   danger: 'bg-beet-800 text-beet-50',
 };
 
+/**
+ * Toasts live in a strip of the sticky header (<ToastRegion />), never floating over the page: a
+ * toast over content sooner or later sits on the button someone is reaching for. The strip grows the
+ * header, so the page moves down rather than under it.
+ */
 export function ToastProvider({ children }: { children: ReactNode }) {
   const [toasts, setToasts] = useState<Toast[]>([]);
+  const [region, setRegion] = useState<HTMLElement | null>(null);
   const nextId = useRef(1);
   const timers = useRef(new Map<number, ReturnType<typeof setTimeout>>());
 
@@ -54,33 +66,59 @@ export function ToastProvider({ children }: { children: ReactNode }) {
   }, []);
 
   const api = useMemo(() => ({ show }), [show]);
+  const regionApi = useMemo(() => ({ region, setRegion }), [region]);
+
+  const list = toasts.map((toast) => (
+    <div
+      key={toast.id}
+      data-toast=""
+      className={cx('flex w-full items-center gap-3 rounded-field px-4 py-2.5 shadow-pop sm:max-w-xl', TONE_CLASSES[toast.tone])}
+    >
+      <span className="min-w-0 flex-1">{toast.message}</span>
+      <button
+        type="button"
+        onClick={() => dismiss(toast.id)}
+        className="min-h-9 rounded-pill px-2 py-0.5 text-sm font-bold underline-offset-2 hover:underline focus-visible:outline-oat-50"
+      >
+        Dismiss
+      </button>
+    </div>
+  ));
 
   return (
     <ToastContext.Provider value={api}>
-      {children}
-      <div
-        aria-live="polite"
-        aria-atomic="false"
-        className="pointer-events-none fixed inset-x-0 bottom-4 z-50 flex flex-col items-center gap-2 px-4 sm:items-end sm:pr-6"
-      >
-        {toasts.map((toast) => (
-          <div
-            key={toast.id}
-            className={cx('pointer-events-auto flex max-w-sm items-center gap-3 rounded-field px-4 py-3 shadow-pop', TONE_CLASSES[toast.tone])}
-          >
-            <span className="flex-1">{toast.message}</span>
-            <button
-              type="button"
-              onClick={() => dismiss(toast.id)}
-              className="rounded-pill px-2 py-0.5 text-sm font-bold underline-offset-2 hover:underline focus-visible:outline-oat-50"
-            >
-              Dismiss
-            </button>
+      <RegionContext.Provider value={regionApi}>
+        {children}
+        {region ? (
+          createPortal(list, region)
+        ) : (
+          // no header on this screen (a crash page): the top edge, where no page content starts
+          <div aria-live="polite" className="fixed inset-x-0 top-0 z-50 flex flex-col items-center gap-2 p-2">
+            {list}
           </div>
-        ))}
-      </div>
+        )}
+      </RegionContext.Provider>
     </ToastContext.Provider>
   );
+}
+
+/** Where toasts show: put it once in the sticky header, below its navigation row. */
+export function ToastRegion({ className }: { className?: string }) {
+  const { setRegion } = useContext(RegionContext);
+  return (
+    <div
+      ref={setRegion}
+      aria-live="polite"
+      aria-atomic="false"
+      data-toast-region=""
+      className={cx('mx-auto flex max-w-shell flex-col items-center gap-2 px-gutter empty:hidden sm:items-end [&:not(:empty)]:pb-3', className)}
+    />
+  );
+}
+
+/** The toast strip's element, for a toast with its own state (ActionToast); null when no header is shown. */
+export function useToastRegion(): HTMLElement | null {
+  return useContext(RegionContext).region;
 }
 
 export function useToast(): ToastApi {

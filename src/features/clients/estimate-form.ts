@@ -1,7 +1,8 @@
 import { ACTIVITY_LEVELS, GOALS, SEXES, TARGET_LIMITS, type EstimateTargetsInput } from '../../../shared/schemas/targets';
+import type { BodyStats } from '../../../shared/schemas/body-stats';
 import { CM_PER_INCH, INCHES_PER_FOOT, KG_PER_POUND } from '../../../shared/units';
-import { cmFromFeetInches, kgFromPounds, type BodyUnits } from './body-units';
-import { readNumber } from '../../lib/read-number';
+import { cmFromFeetInches, feetInchesFromCm, kgFromPounds, poundsFromKg, type BodyUnits } from './body-units';
+import { numberText, readNumber } from '../../lib/read-number';
 
 /** The estimator as typed. Height and weight are read in the units chosen. */
 export interface EstimateValues {
@@ -133,4 +134,22 @@ export function estimateErrorsFrom(fieldErrors: Record<string, string>): Estimat
     if (field) errors[field] ??= message;
   }
   return errors;
+}
+
+/** The estimator filled with the body stats saved for the client, in the units the coach used. */
+export function estimateValuesFrom(stats: BodyStats): EstimateValues {
+  const { feet, inches } = feetInchesFromCm(stats.heightCm);
+  return {
+    units: stats.units,
+    sex: stats.sex,
+    ageYears: String(stats.ageYears),
+    heightCm: numberText(stats.heightCm),
+    heightFeet: String(feet),
+    heightInches: numberText(inches),
+    weightKg: numberText(stats.weightKg),
+    weightLb: numberText(poundsFromKg(stats.weightKg)),
+    activity: stats.activity,
+    goal: stats.goal,
+    mealsPerDay: String(stats.mealsPerDay),
+  };
 }

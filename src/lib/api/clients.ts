@@ -1,6 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { ClientsResponse, ClientVersionsResponse, SavedClientTargets, SentInvitation } from '../../../shared/schemas/clients';
 import type { ClientTargets } from '../../../shared/schemas/coaching';
+import type { BodyStats, BodyStatsResponse } from '../../../shared/schemas/body-stats';
 import { api } from '../api-client';
 import { queryKeys } from '../query-keys';
 
@@ -40,4 +41,17 @@ export function endClientLink(clientId: number): Promise<void> {
 
 export function saveClientTargets(clientId: number, targets: ClientTargets): Promise<SavedClientTargets> {
   return api.put<SavedClientTargets>(`/api/clients/${clientId}/targets`, targets);
+}
+
+export function fetchBodyStats(clientId: number, signal?: AbortSignal): Promise<BodyStatsResponse> {
+  return api.get<BodyStatsResponse>(`/api/clients/${clientId}/body-stats`, { signal });
+}
+
+/** The body stats the coach last estimated this client with (stats null before the first estimate). */
+export function bodyStatsQuery(clientId: number) {
+  return queryOptions({ queryKey: queryKeys.clients.bodyStats(clientId), queryFn: ({ signal }) => fetchBodyStats(clientId, signal) });
+}
+
+export function saveBodyStats(clientId: number, stats: BodyStats): Promise<BodyStatsResponse> {
+  return api.put<BodyStatsResponse>(`/api/clients/${clientId}/body-stats`, stats);
 }

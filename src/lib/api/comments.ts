@@ -1,5 +1,5 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { CommentsResponse } from '../../../shared/schemas/comments';
+import type { CommentsResponse, UnreadComments } from '../../../shared/schemas/comments';
 import { api } from '../api-client';
 import { queryKeys } from '../query-keys';
 
@@ -19,4 +19,18 @@ export function commentsQuery(recipeId: number, number: number) {
 /** Adds a comment; the answer is the whole thread. */
 export function addComment(recipeId: number, number: number, body: string): Promise<CommentsResponse> {
   return api.post<CommentsResponse>(commentsPath(recipeId, number), { body });
+}
+
+export function fetchUnreadComments(signal?: AbortSignal): Promise<UnreadComments> {
+  return api.get<UnreadComments>('/api/comments/unread', { signal });
+}
+
+/** The signed-in cook's unread comments from their coach, for the badges. */
+export function unreadCommentsQuery() {
+  return queryOptions({ queryKey: queryKeys.comments.unread(), queryFn: ({ signal }) => fetchUnreadComments(signal) });
+}
+
+/** The owner opened the thread: its comments are read. The answer is what is left unread. */
+export function markCommentsRead(recipeId: number, number: number): Promise<UnreadComments> {
+  return api.post<UnreadComments>(`${commentsPath(recipeId, number)}/read`);
 }

@@ -126,7 +126,8 @@ export function restoreVersion({ recipeId, number }: RestoreVersionInput): Promi
   return api.post<VersionDetail>(`/api/recipes/${recipeId}/restore/${number}`);
 }
 
-export type ImportedRecipe = RecipeDetail & { importedFrom?: string };
+/** The first recipe of the file; a whole-book file brings the rest too (`alsoImported`). */
+export type ImportedRecipe = RecipeDetail & { importedFrom?: string; importedCount?: number; alsoImported?: { id: number; title: string }[] };
 
 export function importRecipe(file: File): Promise<ImportedRecipe> {
   return uploadFile<ImportedRecipe>('/api/recipes/import', file);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { estimateTargets } from '../../../shared/targets';
 import { cmFromFeetInches, feetInchesFromCm, kgFromPounds, poundsFromKg } from '../../../src/features/clients/body-units';
-import { emptyEstimate, estimateErrorsFrom, estimateInput } from '../../../src/features/clients/estimate-form';
+import { emptyEstimate, estimateErrorsFrom, estimateInput, estimateValuesFrom } from '../../../src/features/clients/estimate-form';
 import { applyEstimate, meetsPerMeal, targetsErrorsFrom, targetsFromValues, targetsValues } from '../../../src/features/clients/targets-form';
 
 describe('body units', () => {
@@ -67,6 +67,31 @@ describe('estimateInput', () => {
   });
   it('places the server message on the field it names', () => {
     expect(estimateErrorsFrom({ heightCm: 'too tall', weightKg: 'too heavy', other: 'x' })).toEqual({ height: 'too tall', weight: 'too heavy' });
+  });
+});
+
+describe('saved body stats back in the estimator', () => {
+  it('gives back what the coach typed in US measures, and the same stats once read again', () => {
+    const us = { sex: 'male', ageYears: '52', heightFeet: '5', heightInches: '10.5', weightLb: '187.5', activity: 'light', goal: 'lose', mealsPerDay: '4' };
+    const first = estimateInput({ ...emptyEstimate('us'), ...us });
+    if (!first.ok) throw new Error('the typed stats should be valid');
+    const shown = estimateValuesFrom({ ...first.input, units: 'us' });
+    expect(shown).toMatchObject({ units: 'us', ...us });
+    // metric fields filled too, so switching units keeps the stats (1 in = 2.54 cm, NIST Handbook 44)
+    expect(shown.heightCm).toBe('179.1');
+    const again = estimateInput(shown);
+    expect(again.ok && again.input).toEqual(first.input);
+  });
+  it('gives back metric stats as typed', () => {
+    const typed = { ...emptyEstimate('metric'), sex: 'female', ageYears: '29', heightCm: '168.5', weightKg: '61.2' };
+    const first = estimateInput(typed);
+    if (!first.ok) throw new Error('the typed stats should be valid');
+    expect(estimateValuesFrom({ ...first.input, units: 'metric' })).toMatchObject({
+      units: 'metric',
+      heightCm: '168.5',
+      weightKg: '61.2',
+      activity: 'moderate',
+    });
   });
 });
 

@@ -28,7 +28,14 @@ const ROLE_CHOICES = [
 
 const FIELDS = ['displayName', 'email', 'password', 'role'] as const;
 
-export function SignUpForm({ onSignedUp }: { onSignedUp: (user: User) => void }) {
+/** Sign-up from a coach's invitation: the account takes the invited address and is a cook's. */
+export interface SignUpInvitation {
+  token: string;
+  email: string;
+  coachName: string;
+}
+
+export function SignUpForm({ onSignedUp, invitation }: { onSignedUp: (user: User) => void; invitation?: SignUpInvitation }) {
   const signUp = useSignUp();
   const [fieldsShown, setFieldsShown] = useState(false);
   const {
@@ -38,11 +45,15 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: User) => void })
     formState: { errors },
   } = useForm({
     resolver: zodResolver(registerSchema),
-    defaultValues: { displayName: '', email: '', password: '', role: undefined },
+    defaultValues: invitation
+      ? { displayName: '', email: invitation.email, password: '', role: 'cook' as const }
+      : { displayName: '', email: '', password: '', role: undefined },
   });
 
   const submit = handleSubmit((values: RegisterInput) => {
-    signUp.mutate(values, {
+    // bound to the invitation: the invited address, a cook account (the server refuses anything else)
+    const input = invitation ? { ...values, email: invitation.email, role: 'cook' as const, invitationToken: invitation.token } : values;
+    signUp.mutate(input, {
       onSuccess: onSignedUp,
       onError: (error) => setFieldsShown(applyServerFieldErrors(error, setError, FIELDS)),
     });
@@ -51,7 +62,13 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: User) => void })
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-6">
       <FormErrorAlert error={signUp.error} fieldsShown={fieldsShown} />
-      <ChoiceCards legend="How will you use Hearthswap?" options={ROLE_CHOICES} columns={2} error={errors.role?.message} inputProps={register('role')} />
+      {invitation ? (
+        <p className="rounded-field border border-ember-200 bg-ember-50 px-4 py-3 text-ink">
+          You're joining <strong>{invitation.coachName}</strong> as a cook: your account is linked with them as soon as it is created.
+        </p>
+      ) : (
+        <ChoiceCards legend="How will you use Hearthswap?" options={ROLE_CHOICES} columns={2} error={errors.role?.message} inputProps={register('role')} />
+      )}
       <TextField
         label="Display name"
         hint="Shown to your coach or clients. A first name is plenty."
@@ -60,7 +77,17 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: User) => void })
         error={errors.displayName?.message}
         {...register('displayName')}
       />
-      <EmailField label="E-mail" error={errors.email?.message} {...register('email')} />
+      <EmailField
+        label="E-mail"
+        readOnly={invitation !== undefined}
+        hint={
+          invitation
+            ? `The invitation was sent to this address, so your account uses it. To use another address, ask ${invitation.coachName} to invite that one.`
+            : undefined
+        }
+        error={errors.email?.message}
+        {...register('email')}
+      />
       <PasswordField
         label="Password"
         hint={`At least ${PASSWORD_MIN_LENGTH} characters. A short sentence you will remember works well.`}
@@ -69,7 +96,7 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (user: User) => void })
         {...register('password')}
       />
       <Button type="submit" size="lg" fullWidth loading={signUp.isPending} loadingLabel="Creating your account…">
-        Create account
+        {invitation ? `Create account and join ${invitation.coachName}` : 'Create account'}
       </Button>
     </form>
   );

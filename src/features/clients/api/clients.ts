@@ -4,7 +4,7 @@ import type { ClientTargets } from '../../../../shared/schemas/coaching';
 import { clientsQuery, endClientLink, inviteClient, saveClientTargets, withdrawInvitation } from '../../../lib/api/clients';
 import { queryKeys } from '../../../lib/query-keys';
 
-export type { Client, ClientsResponse, Invitation, InvitationStatus } from '../../../../shared/schemas/clients';
+export type { Client, ClientsResponse, Invitation, InvitationStatus, SentInvitation } from '../../../../shared/schemas/clients';
 export type { ClientTargets };
 
 export function useClients() {

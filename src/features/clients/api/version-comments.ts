@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { addComment, commentsQuery } from '../../../lib/api/comments';
+import { addComment, commentsQuery, markCommentsRead, unreadCommentsQuery } from '../../../lib/api/comments';
 import { queryKeys } from '../../../lib/query-keys';
 
 export type { VersionComment } from '../../../../shared/schemas/comments';
@@ -17,5 +17,19 @@ export function useAddVersionComment(recipeId: number, number: number) {
       // The versions list counts comments.
       void queryClient.invalidateQueries({ queryKey: queryKeys.clients.details() });
     },
+  });
+}
+
+/** The signed-in cook's unread comments (only asked for on the cook's own recipe page). */
+export function useUnreadComments(enabled: boolean) {
+  return useQuery({ ...unreadCommentsQuery(), enabled });
+}
+
+/** The owner has the thread in view: its comments are read; the answer refreshes every badge. */
+export function useMarkCommentsRead(recipeId: number, number: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => markCommentsRead(recipeId, number),
+    onSuccess: (unread) => queryClient.setQueryData(queryKeys.comments.unread(), unread),
   });
 }

@@ -1,4 +1,4 @@
-import { useId, useState, type FormEvent } from 'react';
+import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
@@ -6,19 +6,50 @@ import { TextAreaField } from '../../../components/ui/field';
 import { ErrorState } from '../../../components/ui/error-state';
 import { LoadingState } from '../../../components/ui/spinner';
 import { errorMessage, isApiError } from '../../../lib/api-client';
-import { useAddVersionComment, useVersionComments } from '../api/version-comments';
+import { useAddVersionComment, useMarkCommentsRead, useUnreadComments, useVersionComments } from '../api/version-comments';
 import { formatDateTime } from '../../../lib/dates';
 
 const MAX_COMMENT_CHARS = 4_000;
+
+export interface CommentThreadProps {
+  recipeId: number;
+  number: number;
+  viewerId: number;
+  otherName: string;
+  /** the version's owner is reading: once the thread is on screen its unread comments count as read */
+  ownerView?: boolean;
+}
 
 /**
  * The comments on one saved version, oldest first, and a box to add one. `otherName` is who reads
  * along: the client's name on the coach's review page, "your coach" on the client's own recipe page.
  */
-export function CommentThread({ recipeId, number, viewerId, otherName }: { recipeId: number; number: number; viewerId: number; otherName: string }) {
+export function CommentThread({ recipeId, number, viewerId, otherName, ownerView = false }: CommentThreadProps) {
   const id = useId();
   const comments = useVersionComments(recipeId, number);
   const add = useAddVersionComment(recipeId, number);
+  const unread = useUnreadComments(ownerView);
+  const unreadHere = unread.data?.recipes.find((r) => r.recipeId === recipeId)?.versions.find((v) => v.number === number)?.unread ?? 0;
+  const { mutate: markRead, isPending: marking } = useMarkCommentsRead(recipeId, number);
+  const listRef = useRef<HTMLOListElement>(null);
+  const loaded = comments.isSuccess;
+
+  // Read means seen: the badge clears when the comments are on screen, not when the page opens.
+  useEffect(() => {
+    const list = listRef.current;
+    if (!ownerView || unreadHere === 0 || !loaded || marking || !list) return;
+    if (typeof IntersectionObserver === 'undefined') {
+      markRead();
+      return;
+    }
+    const observer = new IntersectionObserver((entries) => {
+      if (!entries.some((entry) => entry.isIntersecting)) return;
+      observer.disconnect();
+      markRead();
+    });
+    observer.observe(list);
+    return () => observer.disconnect();
+  }, [ownerView, unreadHere, loaded, marking, markRead]);
   const [body, setBody] = useState('');
   const [error, setError] = useState<string | undefined>();
 
@@ -45,7 +76,7 @@ export function CommentThread({ recipeId, number, viewerId, otherName }: { recip
       ) : comments.data.length === 0 ? (
         <p className="text-ink-soft">No comments yet. What you write here, {otherName} reads beside this version.</p>
       ) : (
-        <ol aria-label="Comments" className="flex flex-col gap-3">
+        <ol ref={listRef} aria-label="Comments" className="flex flex-col gap-3">
           {comments.data.map((comment) => {
             const mine = comment.author.id === viewerId;
             return (

@@ -4,7 +4,8 @@ import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/dialog';
 import { useToast } from '../../../components/ui/toast';
 import { errorMessage } from '../../../lib/api-client';
-import { useWithdrawInvitation, type Invitation, type InvitationStatus } from '../api/clients';
+import { useInviteClient, useWithdrawInvitation, type Invitation, type InvitationStatus } from '../api/clients';
+import { invitationSentWords } from '../invitation-words';
 import { formatDay } from '../../../lib/dates';
 
 const STATUS: Record<InvitationStatus, { label: string; tone: BadgeTone }> = {
@@ -15,14 +16,15 @@ const STATUS: Record<InvitationStatus, { label: string; tone: BadgeTone }> = {
 };
 
 function statusLine(invitation: Invitation): string {
-  if (invitation.status === 'pending') return `Sent ${formatDay(invitation.createdAt)} · works until ${formatDay(invitation.expiresAt)}`;
-  if (invitation.status === 'expired') return `Sent ${formatDay(invitation.createdAt)} · expired ${formatDay(invitation.expiresAt)}`;
+  if (invitation.status === 'pending') return `Sent ${formatDay(invitation.sentAt)} · works until ${formatDay(invitation.expiresAt)}`;
+  if (invitation.status === 'expired') return `Sent ${formatDay(invitation.sentAt)} · expired ${formatDay(invitation.expiresAt)}`;
   return `Sent ${formatDay(invitation.createdAt)}`;
 }
 
 /** Every invitation the coach sent, newest first, with a way to withdraw the ones still waiting. */
 export function InvitationList({ invitations }: { invitations: Invitation[] }) {
   const withdraw = useWithdrawInvitation();
+  const resend = useInviteClient();
   const toast = useToast();
   const [confirming, setConfirming] = useState<Invitation | null>(null);
 
@@ -39,6 +41,22 @@ export function InvitationList({ invitations }: { invitations: Invitation[] }) {
               </div>
               <div className="flex items-center gap-2">
                 <Badge tone={status.tone}>{status.label}</Badge>
+                {(invitation.status === 'pending' || invitation.status === 'expired') && (
+                  <Button
+                    variant="quiet"
+                    size="sm"
+                    loading={resend.isPending && resend.variables === invitation.email}
+                    loadingLabel="Sending…"
+                    onClick={() =>
+                      resend.mutate(invitation.email, {
+                        onSuccess: (sent) => toast.show(invitationSentWords(sent), 'success'),
+                        onError: (error) => toast.show(`Couldn't send it again: ${errorMessage(error)}`, 'danger'),
+                      })
+                    }
+                  >
+                    Send again<span className="sr-only"> to {invitation.email}</span>
+                  </Button>
+                )}
                 {invitation.status === 'pending' && (
                   <Button variant="quiet" size="sm" onClick={() => setConfirming(invitation)}>
                     Withdraw<span className="sr-only"> the invitation to {invitation.email}</span>

@@ -3,10 +3,10 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { EmailField, looksLikeEmail } from '../../../components/ui/email-field';
 import { errorMessage, isApiError } from '../../../lib/api-client';
-import { useInviteClient } from '../api/clients';
+import { useInviteClient, type SentInvitation } from '../api/clients';
 
 /** Sends an invitation e-mail with a link the client opens to link with the coach. */
-export function InviteClientForm({ onInvited }: { onInvited: (email: string) => void }) {
+export function InviteClientForm({ onInvited }: { onInvited: (sent: SentInvitation) => void }) {
   const invite = useInviteClient();
   const [email, setEmail] = useState('');
   const [error, setError] = useState<string | undefined>();
@@ -20,9 +20,9 @@ export function InviteClientForm({ onInvited }: { onInvited: (email: string) => 
     }
     setError(undefined);
     invite.mutate(address, {
-      onSuccess: () => {
+      onSuccess: (sent) => {
         setEmail('');
-        onInvited(address);
+        onInvited(sent);
       },
       onError: (e) => setError(isApiError(e) ? (e.fieldErrors.email ?? undefined) : undefined),
     });
@@ -39,7 +39,7 @@ export function InviteClientForm({ onInvited }: { onInvited: (email: string) => 
       )}
       <EmailField
         label="Client's e-mail"
-        hint="They get a link that works for 7 days. They sign in with a cook account — or create one — and accept."
+        hint="They get a link that works for 7 days. They sign in with a cook account — or create one — and accept. Inviting the same address again sends a fresh link in place of the first."
         autoComplete="off"
         value={email}
         onChange={(e) => {

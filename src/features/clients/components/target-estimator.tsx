@@ -6,9 +6,12 @@ import { TextField } from '../../../components/ui/field';
 import { SelectField } from '../../../components/ui/select-field';
 import { cx } from '../../../lib/cx';
 import { errorMessage, isApiError } from '../../../lib/api-client';
+import { useBodyStats, useSaveBodyStats } from '../api/body-stats';
 import { useEstimateTargets, type TargetEstimate } from '../api/estimate-targets';
+import { LoadingState } from '../../../components/ui/spinner';
+import { formatDay } from '../../../lib/dates';
 import type { BodyUnits } from '../body-units';
-import { emptyEstimate, estimateErrorsFrom, estimateInput, type EstimateErrors, type EstimateValues } from '../estimate-form';
+import { emptyEstimate, estimateErrorsFrom, estimateInput, estimateValuesFrom, type EstimateErrors, type EstimateValues } from '../estimate-form';
 import { EstimateSummary } from './estimate-summary';
 
 const ACTIVITY_WORDS: Record<ActivityLevel, string> = {
@@ -22,16 +25,45 @@ const ACTIVITY_WORDS: Record<ActivityLevel, string> = {
 const GOAL_WORDS: Record<Goal, string> = { lose: 'Lose fat', maintain: 'Keep their weight', gain: 'Gain muscle' };
 
 export interface TargetEstimatorProps {
+  clientId: number;
   defaultUnits: BodyUnits;
   /** fill the targets form with this estimate */
   onApply: (estimate: TargetEstimate, mealsPerDay: number) => void;
 }
 
-/** Body stats and goal in, daily and per-meal energy and protein out. */
-export function TargetEstimator({ defaultUnits, onApply }: TargetEstimatorProps) {
+/**
+ * Body stats and goal in, daily and per-meal energy and protein out. The stats of each estimate are
+ * saved for the client on the server, so the form opens with them on any device.
+ */
+export function TargetEstimator({ clientId, defaultUnits, onApply }: TargetEstimatorProps) {
+  const saved = useBodyStats(clientId);
+  if (saved.isPending) return <LoadingState label="Loading their body stats…" />;
+  const stats = saved.data?.stats ?? null;
+  return (
+    // mounted once the saved stats are known: they are the form's starting values
+    <EstimatorForm
+      clientId={clientId}
+      initial={stats ? estimateValuesFrom(stats) : emptyEstimate(defaultUnits)}
+      savedAt={saved.data?.updatedAt ?? null}
+      loadError={saved.isError ? saved.error : null}
+      onApply={onApply}
+    />
+  );
+}
+
+interface EstimatorFormProps {
+  clientId: number;
+  initial: EstimateValues;
+  savedAt: string | null;
+  loadError: unknown;
+  onApply: TargetEstimatorProps['onApply'];
+}
+
+function EstimatorForm({ clientId, initial, savedAt, loadError, onApply }: EstimatorFormProps) {
   const id = useId();
   const estimate = useEstimateTargets();
-  const [values, setValues] = useState<EstimateValues>(() => emptyEstimate(defaultUnits));
+  const saveStats = useSaveBodyStats(clientId);
+  const [values, setValues] = useState<EstimateValues>(initial);
   const [errors, setErrors] = useState<EstimateErrors>({});
   const [estimatedFor, setEstimatedFor] = useState<number | null>(null);
 
@@ -52,7 +84,10 @@ export function TargetEstimator({ defaultUnits, onApply }: TargetEstimatorProps)
     }
     setErrors({});
     estimate.mutate(result.input, {
-      onSuccess: () => setEstimatedFor(result.input.mealsPerDay),
+      onSuccess: () => {
+        setEstimatedFor(result.input.mealsPerDay);
+        saveStats.mutate({ ...result.input, units: values.units });
+      },
       onError: (error) => {
         if (isApiError(error)) setErrors(estimateErrorsFrom(error.fieldErrors));
       },
@@ -69,6 +104,11 @@ export function TargetEstimator({ defaultUnits, onApply }: TargetEstimatorProps)
         Estimates, not medical advice. For a medical condition, pregnancy, an eating disorder or anyone under 18, targets belong with a physician or registered
         dietitian.
       </Alert>
+      {loadError !== null && (
+        <Alert tone="caution" title="Their saved body stats didn't load" announce={false}>
+          {errorMessage(loadError)} The form starts empty; estimating saves what you enter.
+        </Alert>
+      )}
       <form onSubmit={submit} noValidate className="flex flex-col gap-4">
         <fieldset className="flex flex-col gap-2" aria-describedby={errors.sex ? `${id}-sex-error` : undefined}>
           <legend className="mb-1 font-bold text-ink">Sex for the estimate</legend>
@@ -198,6 +238,15 @@ export function TargetEstimator({ defaultUnits, onApply }: TargetEstimatorProps)
         <Button type="submit" variant="secondary" loading={estimate.isPending} loadingLabel="Estimating…" className="self-start">
           Estimate
         </Button>
+        <p className="-mt-2 text-sm text-ink-soft" aria-live="polite">
+          {saveStats.isError
+            ? `These stats weren't saved: ${errorMessage(saveStats.error)}`
+            : saveStats.isPending
+              ? 'Saving these stats…'
+              : savedAt
+                ? `Stats saved ${formatDay(saveStats.data?.updatedAt ?? savedAt)}; each estimate saves them for this client, on any device.`
+                : 'Each estimate saves these stats for this client, so they are here next time, on any device.'}
+        </p>
       </form>
 
       {result && estimatedFor !== null && (

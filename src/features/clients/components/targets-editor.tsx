@@ -79,6 +79,7 @@ export function TargetsEditor({ client, defaultUnits }: { client: Client; defaul
         description="Mifflin–St Jeor resting energy, an activity factor and the goal give the daily energy; protein comes from body weight."
       >
         <TargetEstimator
+          clientId={client.id}
           defaultUnits={defaultUnits}
           onApply={(estimate, meals) => {
             setValues((v) => applyEstimate(v, estimate, meals));

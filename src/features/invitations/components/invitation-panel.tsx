@@ -93,7 +93,9 @@ export function InvitationPanel({ token, user, signInHref, signUpHref, onAccepte
                 Sign in
               </Link>
             </div>
-            <p className="text-sm text-ink-soft">You come back here afterwards to accept.</p>
+            <p className="text-sm text-ink-soft">
+              A new account takes the invited address and is linked with {coachName} at once; after signing in you come back here to accept.
+            </p>
           </div>
         ) : user.role !== 'cook' ? (
           <Alert tone="caution" title="Only a cook account can join a coach" announce={false}>
@@ -102,8 +104,9 @@ export function InvitationPanel({ token, user, signInHref, signUpHref, onAccepte
         ) : (
           <div className="flex flex-col gap-3">
             {otherAddress && (
-              <Alert tone="caution" announce={false}>
-                This invitation was sent to {email}; you're signed in as {user.email}. Accepting links this account.
+              <Alert tone="caution" title="This invitation is for another address" announce={false}>
+                It was sent to {email}; you're signed in as {user.email}. Sign out and sign in with the account for {email} (or create one), or ask {coachName}{' '}
+                to invite {user.email}.
               </Alert>
             )}
             {user.coachId !== null && (
@@ -112,14 +115,16 @@ export function InvitationPanel({ token, user, signInHref, signUpHref, onAccepte
               </Alert>
             )}
             <div className="flex flex-wrap gap-2">
-              <Button
-                size="lg"
-                loading={accept.isPending}
-                loadingLabel="Linking…"
-                onClick={() => accept.mutate(undefined, { onSuccess: (r) => onAccepted(r.coachName || coachName) })}
-              >
-                Accept and link with {coachName}
-              </Button>
+              {!otherAddress && (
+                <Button
+                  size="lg"
+                  loading={accept.isPending}
+                  loadingLabel="Linking…"
+                  onClick={() => accept.mutate(undefined, { onSuccess: (r) => onAccepted(r.coachName || coachName) })}
+                >
+                  Accept and link with {coachName}
+                </Button>
+              )}
               <Link to="/" className={buttonClasses({ variant: 'quiet', size: 'lg' })}>
                 Not now
               </Link>

@@ -8,6 +8,7 @@ import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 import { errorMessage } from '../../../lib/api-client';
+import type { ImportedRecipe } from '../../../lib/api/recipes';
 import { applyServerFieldErrors } from '../../../lib/form-errors';
 import { cx } from '../../../lib/cx';
 import { useCreateRecipe } from '../api/create-recipe';
@@ -55,7 +56,7 @@ function ModeSwitch({ mode, onChange }: { mode: ImportMode; onChange: (mode: Imp
   );
 }
 
-function FileImportForm({ onImported, onCancel }: { onImported: (recipe: RecipeDetail) => void; onCancel: () => void }) {
+function FileImportForm({ onImported, onCancel }: { onImported: (recipe: ImportedRecipe) => void; onCancel: () => void }) {
   const inputId = useId();
   const input = useRef<HTMLInputElement>(null);
   const [file, setFile] = useState<File | null>(null);
@@ -89,7 +90,8 @@ function FileImportForm({ onImported, onCancel }: { onImported: (recipe: RecipeD
           Recipe file
         </label>
         <p id={`${inputId}-hint`} className="text-sm text-ink-soft">
-          Plain text or Markdown with a title, an ingredient list and the method, or a recipe saved as JSON or JSON-LD (a Hearthswap export works). Up to 1 MB.
+          Plain text or Markdown with a title, an ingredient list and the method, or a recipe saved as JSON or JSON-LD (a Hearthswap export works, a whole-book
+          one brings every recipe). Up to 1 MB.
         </p>
         <input
           ref={input}
@@ -196,7 +198,7 @@ function PasteImportForm({ onImported, onCancel }: { onImported: (recipe: Recipe
 export interface ImportRecipeDialogProps {
   open: boolean;
   onClose: () => void;
-  onImported: (recipe: RecipeDetail) => void;
+  onImported: (recipe: ImportedRecipe) => void;
 }
 
 /** Brings a recipe into the book from a file or from pasted text; the ingredients become version 1. */

@@ -3,6 +3,7 @@ import type { RecipeSummary } from '../../../../shared/schemas/recipes';
 import { formatKcal, formatMacroG } from '../../../lib/format';
 import { formatDateTime, formatWhen } from '../../../lib/dates';
 import { recipePath } from '../recipe-links';
+import { CountBadge, unreadCommentsLabel } from '../../../components/ui/count-badge';
 import { countOf } from '../../../lib/words';
 
 function perServing(recipe: RecipeSummary) {
@@ -35,7 +36,12 @@ function Updated({ iso }: { iso: string }) {
 }
 
 /** Every recipe in the book: a table from tablets up, a list of cards on a phone. */
-export function RecipeList({ recipes, caption }: { recipes: RecipeSummary[]; caption: string }) {
+function UnreadBadge({ count }: { count: number }) {
+  return <CountBadge count={count} label={unreadCommentsLabel(count)} className="ml-2 align-middle" />;
+}
+
+/** `unread`: unread comments from the coach by recipe id, shown beside the title. */
+export function RecipeList({ recipes, caption, unread }: { recipes: RecipeSummary[]; caption: string; unread?: ReadonlyMap<number, number> }) {
   return (
     <>
       <div className="hidden overflow-x-auto rounded-card border border-line bg-surface sm:block">
@@ -74,6 +80,7 @@ export function RecipeList({ recipes, caption }: { recipes: RecipeSummary[]; cap
                       <Link to={recipePath(recipe.id)} className="rounded-field text-accent-strong underline-offset-2 hover:underline">
                         {recipe.title}
                       </Link>
+                      <UnreadBadge count={unread?.get(recipe.id) ?? 0} />
                     </span>
                   </th>
                   <td className="px-4 py-3 text-right tabular-nums">{recipe.servings}</td>
@@ -98,7 +105,10 @@ export function RecipeList({ recipes, caption }: { recipes: RecipeSummary[]; cap
               <Link to={recipePath(recipe.id)} className="flex flex-col gap-2 rounded-card border border-line bg-surface p-4 shadow-card active:bg-oat-100">
                 <span className="flex items-center gap-3">
                   <Thumbnail recipe={recipe} size="md" />
-                  <span className="min-w-0 text-lg font-extrabold break-words text-accent-strong">{recipe.title}</span>
+                  <span className="min-w-0 text-lg font-extrabold break-words text-accent-strong">
+                    {recipe.title}
+                    <UnreadBadge count={unread?.get(recipe.id) ?? 0} />
+                  </span>
                 </span>
                 <span className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
                   <span>
