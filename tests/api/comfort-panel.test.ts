@@ -60,8 +60,9 @@ describe('comfort-food panel: would a cook cook these plans?', () => {
   // Issue 10 asks for ≥ 90 % of changed lines and ≥ 80 % of plans acceptable with ≥ 2/3 of rewrites
   // answered by a plan. The first two hold (98.9 % and 96.3 % when measured); the third does not:
   // 27/66 rewrites (40.9 %) are plans, because +30 % protein and −20 % kcal are out of reach of the
-  // swaps a cook accepts for the bakes (pancakes, cookies, brownies, pizza dough), a pot pie under its
-  // crust, and carbonara, mac and cheese and quesadillas by a few kcal a serving (tests/panel/README.md).
+  // swaps a cook accepts for cookies, brownies and pizza dough, a pot pie under its crust, quesadillas
+  // once their chicken is read as roasted meat, and pancakes, carbonara and mac and cheese by 3–12 kcal
+  // a serving (tests/panel/README.md).
   // The plan share is held at the floor reached, so a change can only keep or raise it.
   it("meets the issue's bar for acceptable lines (≥ 90 %) and plans (≥ 80 %); ≥ 40 % of rewrites answered by a plan (floor reached; the issue asks 2/3)", async () => {
     const outcomes = await rewriteAll();

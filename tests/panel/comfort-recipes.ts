@@ -68,6 +68,8 @@ const halfWholeWheatFlour = swap('^Wheat flour, whole-grain', [0.85, 1.15], 0.5)
 const eggWhites = (maxShare = 1) => [swap('^Egg, white, raw', [1.0, 1.75], maxShare), swap('^Egg substitute, liquid', [0.9, 1.75], maxShare)];
 const halfAsApplesauce = swap('^Applesauce, canned, unsweetened', [0.5, 1.3], 0.5);
 const halfAsYogurt = { ...plainYogurt, maxShare: 0.5 };
+/** label rule (tests/panel/README.md): a batter's milk or buttermilk accepts up to half as plain Greek yogurt or low-fat cottage cheese, blended */
+const halfOfBatterMilk = [swap('^Yogurt, Greek, plain, (nonfat|lowfat)', [0.75, 1.3], 0.5), swap('^Cheese, cottage, (lowfat|nonfat)', [0.75, 1.3], 0.5)];
 const chickenBreastCooked = swap(
   '^(Chicken, broilers or fryers, breast, meat only, cooked, (roasted|stewed)|Turkey, .*breast, meat only, cooked, roasted)',
   [0.8, 1.25],
@@ -223,7 +225,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
       { text: '2 teaspoons baking powder', keep: keepLeavener },
       { text: '1/2 teaspoon baking soda', keep: keepLeavener },
       { text: '1/2 teaspoon salt', keep: keepSeasoning },
-      { text: '2 cups buttermilk', keep: 'the acid for the soda' },
+      { text: '2 cups buttermilk', keep: 'the acid for the soda', swaps: halfOfBatterMilk },
       { text: '2 large eggs', keep: 'structure', swaps: eggWhites() },
       { text: '3 tablespoons butter, melted', keep: 'tenderness', scale: LESS(), swaps: [halfAsApplesauce, halfAsYogurt] },
       { text: '1 teaspoon vanilla extract', keep: 'extract: kept as written' },

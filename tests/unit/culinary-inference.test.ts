@@ -150,7 +150,7 @@ describe('rule matching by food class and dish context', () => {
     expect(applicable).not.toContain('bacon-to-turkey-or-canadian-bacon');
     expect(
       keepScaleOf(rulesForLine(rules, { food: bacon, phrase: 'pancetta', role: 'main-protein', dishType: 'stovetop-sauce', context: 'boiled-sauce' }))?.range,
-    ).toEqual([0.67, 1]);
+    ).toEqual([0.5, 1]);
   });
 
   it('sour cream → Greek yogurt on top, never in a boiled sauce; a bake needs a rule that names bakes', () => {
@@ -162,7 +162,7 @@ describe('rule matching by food class and dish context', () => {
     expect(ruleHoldsIn(rule('all-purpose-flour-to-whole-wheat'), 'thickener', 'assembled-bake', 'roux-white-sauce')).toBe(false);
   });
 
-  it('butter: up to half as applesauce in a quick bread, not in cookies; a quarter less in a roux; half for sautéing', () => {
+  it('butter: up to half as applesauce in a quick bread, not in cookies; down to three fifths in a roux; half for sautéing', () => {
     const apple = rule('quick-bread-fat-to-applesauce');
     expect(ruleHoldsIn(apple, 'baking-fat', 'leavened-bake', 'baked-batter-dough')).toBe(true);
     expect(ruleHoldsIn(apple, 'baking-fat', 'dough', 'baked-batter-dough')).toBe(false);
@@ -171,10 +171,45 @@ describe('rule matching by food class and dish context', () => {
     expect(
       keepScaleOf(rulesForLine(rules, { food: butter, phrase: 'butter', role: 'fat-for-roux', dishType: 'assembled-bake', context: 'roux-white-sauce' }))
         ?.range,
-    ).toEqual([0.75, 1]);
+    ).toEqual([0.6, 1]);
     expect(
       keepScaleOf(rulesForLine(rules, { food: butter, phrase: 'butter', role: 'cooking-fat', dishType: 'stovetop-sauce', context: 'griddle-saute' }))?.range,
     ).toEqual([0.5, 1]);
+  });
+
+  // *common practice*: yogurt and cottage-cheese pancakes; less sugar in a griddle batter; a brushed griddle; an accent of cured meat or hard cheese
+  it('a pancake batter: up to half its milk or buttermilk as Greek yogurt or 1 % cottage cheese, 1:1 (±10 %), and half its sugar; never in brownies or a sauce', () => {
+    const batterMilk = rule('batter-milk-to-greek-yogurt-or-cottage-cheese');
+    expect(batterMilk.quantity).toEqual({ massRatio: 1 });
+    expect(batterMilk.maxShare).toBe(0.5);
+    expect(bandFor(batterMilk, { role: 'dairy-liquid', mixedDish: false })).toEqual([0.9, 1.1]);
+    expect(ruleHoldsIn(batterMilk, 'dairy-liquid', 'batter', 'baked-batter-dough')).toBe(true);
+    expect(ruleHoldsIn(batterMilk, 'dairy-liquid', 'leavened-bake', 'baked-batter-dough')).toBe(false);
+    expect(ruleHoldsIn(batterMilk, 'dairy-liquid', 'assembled-bake', 'roux-white-sauce')).toBe(false);
+    const buttermilk = { name: 'Milk, buttermilk, fluid, cultured, lowfat', foodGroup: '01', sourceId: '01088', roles: ['dairy-milk'], per100g: { fatG: 0.9 } };
+    expect(inFoodClass(batterMilk.from, buttermilk, 'buttermilk')).toBe(true);
+    const sugar = { name: 'Sugars, granulated', foodGroup: '19', sourceId: '19335', roles: ['sweetener'], per100g: { fatG: 0 } };
+    const sugarIn = (dishType: 'batter' | 'leavened-bake') =>
+      keepScaleOf(rulesForLine(rules, { food: sugar, phrase: 'sugar', role: 'sweetener', dishType, context: 'baked-batter-dough' }))?.range;
+    expect(sugarIn('batter')).toEqual([0.5, 1]);
+    expect(sugarIn('leavened-bake')).toEqual([0.75, 1]);
+    expect(ruleHoldsIn(rule('batter-sugar-halve'), 'structure', 'leavened-bake', 'baked-batter-dough')).toBe(false);
+  });
+
+  it('a third of the fat brushes a griddle; half a cured meat or two thirds of a hard cheese still seasons; whole-wheat flour stays within ±10 % of 1:1', () => {
+    const oil = { name: 'Oil, soybean, salad or cooking', foodGroup: '04', sourceId: '04044', roles: ['cooking-fat'], per100g: { fatG: 100 } };
+    const fatIn = (dishType: 'griddle-saute' | 'simmered-dish', context: 'griddle-saute') =>
+      keepScaleOf(rulesForLine(rules, { food: oil, phrase: 'vegetable oil', role: 'cooking-fat', dishType, context }))?.range;
+    expect(fatIn('griddle-saute', 'griddle-saute')).toEqual([0.33, 1]);
+    expect(fatIn('simmered-dish', 'griddle-saute')).toEqual([0.5, 1]);
+    const romano = { name: 'Cheese, romano', foodGroup: '01', sourceId: '01038', roles: ['hard-cheese'], per100g: { fatG: 27 } };
+    expect(
+      keepScaleOf(
+        rulesForLine(rules, { food: romano, phrase: 'pecorino romano cheese', role: 'hard-cheese', dishType: 'stovetop-sauce', context: 'boiled-sauce' }),
+      )?.range,
+    ).toEqual([0.67, 1]);
+    expect(rule('cured-meat-use-less').keepScale).toEqual([0.5, 1]);
+    expect(bandFor(rule('all-purpose-flour-to-whole-wheat'), { role: 'structure', mixedDish: false })).toEqual([0.9, 1.1]);
   });
 });
 

@@ -80,7 +80,7 @@ describe('candidates from rules', () => {
     const cheddar = r.lines[6].candidates[1];
     expect(cheddar).toMatchObject({ massRatio: 1, partial: true, maxShare: 1, rule: { id: 'cheddar-to-reduced-fat-cheddar' } });
     // the roux keeps real fat: no substitute for its butter, only a little less of it
-    expect(r.lines[1]).toMatchObject({ role: 'fat-for-roux', keepScale: [0.75, 1] });
+    expect(r.lines[1]).toMatchObject({ role: 'fat-for-roux', keepScale: [0.6, 1] });
     expect(r.lines[1].candidates).toHaveLength(1);
     // the flour thickens the roux: no rule, kept as written
     expect(r.lines[2].candidates).toHaveLength(1);

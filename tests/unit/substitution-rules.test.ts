@@ -209,7 +209,7 @@ describe('quantities (USDA SR28 WEIGHT.txt household weights; ratios *common pra
     expect(rule('all-purpose-flour-to-whole-wheat').maxShare).toBe(0.5);
     expect(rule('egg-in-bake-to-whites').maxShare).toBe(0.5);
     expect(rule('saute-fat-halve').keepScale).toEqual([0.5, 1]);
-    expect(rule('roux-fat-reduce-a-little').keepScale).toEqual([0.75, 1]);
+    expect(rule('roux-fat-reduce-a-little').keepScale).toEqual([0.6, 1]);
     expect(rule('sugar-reduce-quarter').keepScale).toEqual([0.75, 1]);
     expect(rule('sharp-cheese-in-sauce-less').keepScale).toEqual([0.67, 1]);
     expect(rule('more-vegetables').keepScale).toEqual([1, 1.5]);
