@@ -99,6 +99,18 @@ async function correctedRecipe(cook: Cook) {
   return { id, own: own.body as { id: number; name: string } };
 }
 
+/** A new cook's book of two recipes: the corrected "Stovetop mac" (four versions) and a plain "Oat bake". */
+async function bookOfTwo() {
+  const cook = await signUp(t.app);
+  const { id } = await correctedRecipe(cook);
+  await cook.agent
+    .post('/api/recipes')
+    .set('X-CSRF-Token', cook.csrf)
+    .send({ title: 'Oat bake', servings: 2, text: '1 cup rolled oats\n2 large eggs' })
+    .expect(201);
+  return { cook, id };
+}
+
 function comparable(v: Version) {
   return { number: v.number, kind: v.kind, parentNumber: v.parentNumber, servings: v.servings, note: v.note, targets: v.targets, perServing: v.perServing };
 }
@@ -146,13 +158,7 @@ describe('export then import (JSON-LD with hearthswap:versions)', () => {
   });
 
   it("the whole book exports as one @graph; another cook's import keeps the SR28 foods and grams and rematches a label food they lack, saying so", async () => {
-    const cook = await signUp(t.app);
-    const { id } = await correctedRecipe(cook);
-    await cook.agent
-      .post('/api/recipes')
-      .set('X-CSRF-Token', cook.csrf)
-      .send({ title: 'Oat bake', servings: 2, text: '1 cup rolled oats\n2 large eggs' })
-      .expect(201);
+    const { cook, id } = await bookOfTwo();
     const book = await cook.agent.get('/api/recipes/export.jsonld').expect(200);
     expect(book.headers['content-disposition']).toMatch(/hearthswap-recipes\.jsonld/);
     const graph = JSON.parse(book.text)['@graph'] as { name: string; 'hearthswap:versions': unknown[] }[];
@@ -179,13 +185,7 @@ describe('export then import (JSON-LD with hearthswap:versions)', () => {
   });
 
   it('the whole-book file imports whole: every recipe with every version, titles kept apart from the cook’s own', async () => {
-    const cook = await signUp(t.app);
-    const { id } = await correctedRecipe(cook);
-    await cook.agent
-      .post('/api/recipes')
-      .set('X-CSRF-Token', cook.csrf)
-      .send({ title: 'Oat bake', servings: 2, text: '1 cup rolled oats\n2 large eggs' })
-      .expect(201);
+    const { cook, id } = await bookOfTwo();
     const book = await cook.agent.get('/api/recipes/export.jsonld').expect(200);
     const res = await cook.agent.post('/api/recipes/import').set('X-CSRF-Token', cook.csrf).attach('file', Buffer.from(book.text), 'book.jsonld').expect(201);
     expect(res.body.importedCount).toBe(2);
@@ -195,13 +195,7 @@ describe('export then import (JSON-LD with hearthswap:versions)', () => {
   });
 
   it('a whole-book file with one damaged recipe saves none of its recipes', async () => {
-    const cook = await signUp(t.app);
-    await correctedRecipe(cook);
-    await cook.agent
-      .post('/api/recipes')
-      .set('X-CSRF-Token', cook.csrf)
-      .send({ title: 'Oat bake', servings: 2, text: '1 cup rolled oats\n2 large eggs' })
-      .expect(201);
+    const { cook } = await bookOfTwo();
     const doc = JSON.parse((await cook.agent.get('/api/recipes/export.jsonld').expect(200)).text);
     doc['@graph'][1].recipeIngredient = [];
     const before = (await cook.agent.get('/api/recipes').expect(200)).body.recipes.length;
