@@ -12,7 +12,10 @@ export default defineConfig({
     tailwindcss(),
     // .br and .gz beside each script and style sheet at the strongest settings, served as they are
     // (server/app.ts), so no request pays for compressing them
-    compression({ include: /\.(js|css)$/, threshold: 1024, algorithms: ['gzip', 'brotliCompress'], logLevel: 'silent' }),
+    {
+      ...compression({ include: /\.(js|css)$/, threshold: 1024, algorithms: ['gzip', 'brotliCompress'], logLevel: 'silent' }),
+      applyToEnvironment: (environment) => environment.name === 'client',
+    },
   ],
   resolve: {
     alias: {
@@ -27,6 +30,12 @@ export default defineConfig({
   },
   // the manifest lets the server preload each page's chunks (server/lib/client-shell.ts)
   build: { outDir: 'dist/client', emptyOutDir: true, manifest: true },
+  // `vite build` builds both: the browser's client above and the server-render bundle
+  // (src/entry-server.tsx → dist/render/entry-server.js, loaded by server/render/; npm packages stay external)
+  builder: {},
+  environments: {
+    ssr: { build: { outDir: 'dist/render', emptyOutDir: true, manifest: false, rollupOptions: { input: { 'entry-server': 'src/entry-server.tsx' } } } },
+  },
   test: {
     projects: [
       {

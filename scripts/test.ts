@@ -5,7 +5,7 @@
 import { spawn, execFileSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import pg from 'pg';
-import { build } from 'vite';
+import { createBuilder } from 'vite';
 import { onExit, startPrivatePostgres } from './postgres';
 
 const isRoot = process.getuid?.() === 0;
@@ -50,7 +50,8 @@ async function testDatabaseUrl(): Promise<string> {
 ensureChromium();
 process.env.HEARTHSWAP_TEST_DATABASE_URL = await testDatabaseUrl();
 console.log('Building the client for the browser suite…');
-await build({ logLevel: 'warn' });
+// the browser's client and the server-render bundle (vite.config.ts `builder`)
+await (await createBuilder({ logLevel: 'warn' })).buildApp();
 
 const args = ['vitest', 'run', ...process.argv.slice(2)];
 const child = spawn('npx', args, { stdio: 'inherit', env: { ...process.env, NODE_ENV: 'test' } });

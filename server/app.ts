@@ -34,6 +34,7 @@ import { createCsrf } from './middleware/csrf';
 import { HttpError } from './lib/http-error';
 import type { Mailer, StoredMail } from './mail';
 import { createClientShell } from './lib/client-shell';
+import { createPageRenderer, fillShell } from './render/page-renderer';
 
 export interface AppContext {
   config: AppConfig;
@@ -145,9 +146,21 @@ export function createApp(context: AppContext) {
       res.status(404).type('text/plain').send('Not found');
     });
     app.use(express.static(clientDir, { index: false, setHeaders: (res) => res.setHeader('Cache-Control', 'no-cache') }));
-    app.get(/^(?!\/api\/).*/, (req, res) => {
-      res.setHeader('Cache-Control', 'no-cache');
-      res.type('html').send(shell.html(req.path));
+    const pages = createPageRenderer(config.renderDir);
+    const logError = context.logError ?? ((error: unknown) => console.error(error));
+    app.get(/^(?!\/api\/).*/, async (req, res) => {
+      let html = shell.html(req.path);
+      if (pages.available) {
+        try {
+          html = fillShell(html, await pages.render(req.originalUrl, req.user ?? null));
+        } catch (error) {
+          // the page still works, drawn in the browser; a failed server render is a bug to see in the log
+          logError(error);
+        }
+      }
+      // the page carries who is signed in: no shared cache may keep it
+      res.setHeader('Cache-Control', 'private, no-cache');
+      res.type('html').send(html);
     });
   }
 

@@ -10,6 +10,8 @@ export interface AppConfig {
   secureCookies: boolean | 'auto';
   /** folder with the built client; served when present */
   clientDir: string | null;
+  /** folder with the server-render bundle (Vite's dist/render): the Kitchen and the recipe book are drawn on the server when present */
+  renderDir: string | null;
   /** request-per-window limits; tests raise or lower them */
   limits: RateLimitConfig;
   /** S3-compatible photo storage; null when none is configured */
@@ -98,6 +100,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     trustProxy: parseTrustProxy(env.TRUST_PROXY),
     secureCookies: env.COOKIE_SECURE === 'true' ? true : env.COOKIE_SECURE === 'false' ? false : 'auto',
     clientDir: null,
+    renderDir: null,
     limits: limitsFromEnv(env),
     s3: s3FromEnv(env),
     ...overrides,

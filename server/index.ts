@@ -9,7 +9,7 @@ import { keepServingOnStrayRejections, startServer } from './boot';
 import { DEMO_ACCOUNTS } from './seeders/demo-accounts';
 
 keepServingOnStrayRejections();
-const config = loadConfig(process.env, { clientDir: path.resolve('dist/client') });
+const config = loadConfig(process.env, { clientDir: path.resolve('dist/client'), renderDir: path.resolve('dist/render') });
 const running = await startServer(config);
 for (const warning of deploymentWarnings(config)) console.warn(`Warning: ${warning}`);
 const { port } = running.server.address() as AddressInfo;

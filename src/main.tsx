@@ -5,18 +5,24 @@ import '@fontsource/nunito/800.css';
 import '@fontsource/nunito/900.css';
 import './styles/index.css';
 
-import { StrictMode } from 'react';
-import { createRoot } from 'react-dom/client';
-import { AppProvider } from './app/provider';
-import { AppRouter } from './app/router';
+import { readPageState } from './app/page-state';
 
 const container = document.getElementById('root');
 if (!container) throw new Error('index.html has no #root element');
 
-createRoot(container).render(
-  <StrictMode>
-    <AppProvider>
-      <AppRouter />
-    </AppProvider>
-  </StrictMode>,
-);
+/** After the browser has painted what it has (a frame, then a task), or at once in a hidden tab. */
+function afterNextPaint(): Promise<void> {
+  if (document.visibilityState === 'hidden') return Promise.resolve();
+  return new Promise((resolve) => {
+    requestAnimationFrame(() => setTimeout(resolve, 0));
+    setTimeout(resolve, 100); // a browser that holds frames back still starts the app
+  });
+}
+
+// The state the server sent with its HTML; `npm run dev` serves the bare index.html.
+const state = readPageState(document);
+// The server's HTML is on screen before the app's code runs: the browser would otherwise run the
+// (already fetched) code first and paint only after hydrating. The server preloads that code.
+if (state?.rendered) await afterNextPaint();
+const { startApp } = await import('./app/start-app');
+await startApp(container, state);

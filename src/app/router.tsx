@@ -1,4 +1,4 @@
-import { createBrowserRouter, type RouteObject } from 'react-router';
+import { createBrowserRouter, matchRoutes, type RouteObject } from 'react-router';
 import { RouterProvider } from 'react-router/dom';
 import { LoadingState } from '../components/ui/spinner';
 import { PAGE_ROLES } from './access';
@@ -18,7 +18,7 @@ export const routes: RouteObject[] = [
         // Shown inside the layout on the very first load while that page's code arrives.
         hydrateFallbackElement: <LoadingState label="Opening the page…" className="justify-center py-24" />,
         children: [
-          { index: true, lazy: () => import('./routes/kitchen').then((m) => ({ Component: m.KitchenPage })) },
+          { index: true, id: 'kitchen', lazy: () => import('./routes/kitchen').then((m) => ({ Component: m.KitchenPage })) },
           { path: 'foods', lazy: () => import('./routes/foods').then((m) => ({ Component: m.FoodsPage })) },
           { path: 'foods/:id', lazy: () => import('./routes/food-detail').then((m) => ({ Component: m.FoodDetailPage })) },
           { path: 'sign-in', lazy: () => import('./routes/sign-in').then((m) => ({ Component: m.SignInPage })) },
@@ -39,6 +39,7 @@ export const routes: RouteObject[] = [
             children: [
               {
                 path: 'recipes',
+                id: 'recipe-book',
                 lazy: () => import('./routes/recipe-book').then((m) => ({ Component: m.RecipeBookPage })),
               },
               {
@@ -100,8 +101,25 @@ export const routes: RouteObject[] = [
   },
 ];
 
-const router = createBrowserRouter(routes);
+/**
+ * Loads the code of the routes `pathname` opens and puts it on the route objects, so the first
+ * render has the page itself rather than the loading fallback: needed to hydrate HTML the server
+ * drew, and to replace it without a flash of the fallback.
+ */
+export async function loadRoutesFor(pathname: string): Promise<void> {
+  const lazyMatches = (matchRoutes(routes, pathname) ?? []).filter((m) => typeof m.route.lazy === 'function');
+  await Promise.all(
+    lazyMatches.map(async ({ route }) => {
+      const load = route.lazy as () => Promise<Partial<RouteObject>>;
+      Object.assign(route, { ...(await load()), lazy: undefined });
+    }),
+  );
+}
 
-export function AppRouter() {
+export function createAppRouter() {
+  return createBrowserRouter(routes);
+}
+
+export function AppRouter({ router }: { router: ReturnType<typeof createAppRouter> }) {
   return <RouterProvider router={router} />;
 }

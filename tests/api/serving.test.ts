@@ -72,14 +72,14 @@ describe('serving the client', () => {
     expect((res.body as Buffer).toString()).toBe(BIG_SCRIPT); // supertest inflates it
   });
 
-  it('serves index.html for every page with no-cache, preloading that page’s chunks', async () => {
+  it('serves index.html for every page with private, no-cache, preloading that page’s chunks', async () => {
     const book = await request(t.app).get('/recipes').expect(200);
-    expect(book.headers['cache-control']).toBe('no-cache');
+    expect(book.headers['cache-control']).toBe('private, no-cache');
     expect(book.headers['content-type']).toMatch(/text\/html/);
     expect(book.text).toContain(`<link rel="modulepreload" crossorigin href="/${PAGE}">`);
     expect(book.text).toContain(`<link rel="modulepreload" crossorigin href="/${SHARED}">`);
     const unknown = await request(t.app).get('/no-such-page').expect(200);
-    expect(unknown.headers['cache-control']).toBe('no-cache');
+    expect(unknown.headers['cache-control']).toBe('private, no-cache');
     expect(unknown.text).not.toContain('modulepreload');
   });
 

@@ -12,7 +12,10 @@ export async function startLiveServer() {
   if (!existsSync(path.join(clientDir, 'index.html'))) {
     throw new Error('dist/client is missing: run `npm run build` first (npm test does it for you).');
   }
-  const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), ...inject('s3Env') }, { clientDir, port: 0, host: '127.0.0.1' });
+  const config = loadConfig(
+    { NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), ...inject('s3Env') },
+    { clientDir, renderDir: path.resolve('dist/render'), port: 0, host: '127.0.0.1' },
+  );
   config.limits = { ...config.limits, loginFailuresPer15Min: 1000, signupsPerHour: 1000, scope: `test-${randomUUID()}` };
   const running = await startServer(config);
   const { port } = running.server.address() as AddressInfo;
