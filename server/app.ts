@@ -33,8 +33,8 @@ import { rejectUnsafeText } from './middleware/text-safety';
 import { createCsrf } from './middleware/csrf';
 import { HttpError } from './lib/http-error';
 import type { Mailer, StoredMail } from './mail';
-import { createClientShell } from './lib/client-shell';
-import { createPageRenderer, fillShell } from './render/page-renderer';
+import { createClientShell, fillShell } from './lib/client-shell';
+import { createPageRenderer } from './render/page-renderer';
 
 export interface AppContext {
   config: AppConfig;

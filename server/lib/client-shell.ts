@@ -1,5 +1,6 @@
 import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
+import { PAGE_STATE_ID, type RenderedPage } from '../../shared/page-render';
 
 /**
  * Which client route module each page path loads (src/app/router.tsx). index.html gets
@@ -79,7 +80,7 @@ export function stylesFirst(html: string): string {
   if (!sheets) return html;
   let rest = html;
   for (const sheet of sheets) rest = rest.replace(sheet, '');
-  return rest.replace(/(<meta charset="[^"]*"\s*\/?>\s*)/i, `$1${sheets.map((s) => s.trim()).join('\n    ')}\n    `);
+  return rest.replace(/(<meta charset="[^"]*"\s*\/?>\s*)/i, (meta) => `${meta}${sheets.map((s) => s.trim()).join('\n    ')}\n    `);
 }
 
 /** The app's start (src/main.tsx imports it once the server's HTML is painted): every page needs it and its imports. */
@@ -127,4 +128,21 @@ export function createClientShell(clientDir: string) {
       return pageFor(routeModuleFor(pathname)).preloads;
     },
   };
+}
+
+/**
+ * index.html with the page in #root, its title in the head and the state script after #root
+ * (a JSON script: nothing runs, so the Content-Security-Policy's script-src stays 'self').
+ */
+export function fillShell(shell: string, page: RenderedPage): string {
+  let html = page.html ?? '';
+  let head = shell;
+  // React writes a page's <title> first; it belongs in the head
+  const title = /^<title>[^<]*<\/title>/.exec(html)?.[0];
+  if (title) {
+    html = html.slice(title.length);
+    head = head.replace(/<title>[^<]*<\/title>/, () => title);
+  }
+  // a function, so a "$&" in a recipe's title is not a replacement pattern
+  return head.replace('<div id="root"></div>', () => `<div id="root">${html}</div><script type="application/json" id="${PAGE_STATE_ID}">${page.state}</script>`);
 }

@@ -6,7 +6,7 @@
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { PAGE_STATE_ID, type PageReads, type RenderedPage, type RenderPage } from '../../shared/page-render';
+import type { PageReads, RenderedPage, RenderPage } from '../../shared/page-render';
 import { listRecipes } from '../services/recipes';
 import type { User } from '../services/users';
 
@@ -24,22 +24,6 @@ function readsFor(user: User | null): PageReads {
       return asJson({ recipes: await listRecipes(user, { q, sort }) });
     },
   };
-}
-
-/**
- * index.html with the page in #root, its title in the head and the state script after #root
- * (a JSON script: nothing runs, so the Content-Security-Policy's script-src stays 'self').
- */
-export function fillShell(shell: string, page: RenderedPage): string {
-  let html = page.html ?? '';
-  let head = shell;
-  // React writes a page's <title> first; it belongs in the head
-  const title = /^<title>[^<]*<\/title>/.exec(html)?.[0];
-  if (title) {
-    html = html.slice(title.length);
-    head = head.replace(/<title>[^<]*<\/title>/, title);
-  }
-  return head.replace('<div id="root"></div>', `<div id="root">${html}</div><script type="application/json" id="${PAGE_STATE_ID}">${page.state}</script>`);
 }
 
 export function createPageRenderer(renderDir: string | null) {

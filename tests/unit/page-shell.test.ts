@@ -1,0 +1,52 @@
+import { describe, expect, it } from 'vitest';
+import { fillShell, stylesFirst } from '../../server/lib/client-shell';
+import { PAGE_STATE_ID } from '../../shared/page-render';
+
+const BUILT = `<!doctype html>
+<html lang="en">
+  <head>
+    <meta charset="UTF-8" />
+    <meta name="viewport" content="width=device-width, initial-scale=1" />
+    <title>Hearthswap</title>
+    <script type="module" crossorigin src="/assets/index-A1.js"></script>
+    <link rel="modulepreload" crossorigin href="/assets/page-state-B2.js">
+    <link rel="stylesheet" crossorigin href="/assets/index-C3.css">
+  </head>
+  <body>
+    <div id="root"></div>
+  </body>
+</html>`;
+
+describe('the page shell', () => {
+  it('puts the style sheets ahead of every script in the head', () => {
+    const html = stylesFirst(BUILT);
+    const sheet = html.indexOf('<link rel="stylesheet" crossorigin href="/assets/index-C3.css">');
+    expect(sheet).toBeGreaterThan(html.indexOf('<meta charset="UTF-8" />'));
+    expect(sheet).toBeLessThan(html.indexOf('<script type="module"'));
+    expect(sheet).toBeLessThan(html.indexOf('modulepreload'));
+    expect(html.match(/rel="stylesheet"/g)).toHaveLength(1);
+  });
+
+  it('puts a drawn page in #root, its title in the head and its state in a JSON script', () => {
+    const page = { html: '<title>Recipe book · Hearthswap</title><main><h1>Recipe book</h1></main>', state: '{"rendered":"recipe-book"}' };
+    const html = fillShell(BUILT, page);
+    expect(html).toContain('<title>Recipe book · Hearthswap</title>');
+    expect(html).not.toContain('<title>Hearthswap</title>');
+    expect(html.match(/<title>/g)).toHaveLength(1);
+    expect(html).toContain(
+      `<div id="root"><main><h1>Recipe book</h1></main></div><script type="application/json" id="${PAGE_STATE_ID}">{"rendered":"recipe-book"}</script>`,
+    );
+  });
+
+  it('takes the page’s text as it is, "$&" and all (not a replacement pattern)', () => {
+    const html = fillShell(BUILT, { html: '<h1>Cheap $&amp; cheerful $& $1</h1>', state: '{"title":"$\'"}' });
+    expect(html).toContain('<div id="root"><h1>Cheap $&amp; cheerful $& $1</h1></div>');
+    expect(html).toContain(`>{"title":"$'"}</script>`);
+  });
+
+  it('a page left to the browser still carries the state (the session), with #root empty', () => {
+    const html = fillShell(BUILT, { html: null, state: '{"rendered":null}' });
+    expect(html).toContain(`<div id="root"></div><script type="application/json" id="${PAGE_STATE_ID}">{"rendered":null}</script>`);
+    expect(html).toContain('<title>Hearthswap</title>');
+  });
+});
