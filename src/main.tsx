@@ -6,6 +6,7 @@ import '@fontsource/nunito/900.css';
 import './styles/index.css';
 
 import { readPageState } from './app/page-state';
+import { startApp } from './app/start-app';
 
 const container = document.getElementById('root');
 if (!container) throw new Error('index.html has no #root element');
@@ -21,8 +22,7 @@ function afterNextPaint(): Promise<void> {
 
 // The state the server sent with its HTML; `npm run dev` serves the bare index.html.
 const state = readPageState(document);
-// The server's HTML is on screen before the app's code runs: the browser would otherwise run the
-// (already fetched) code first and paint only after hydrating. The server preloads that code.
-if (state?.rendered) await afterNextPaint();
-const { startApp } = await import('./app/start-app');
-await startApp(container, state);
+// The server's HTML goes on screen before the app renders: the browser would otherwise run the
+// (already fetched) code on and paint only after hydrating.
+// No top-level await here: it would make the bundler split every module the pages share out of the entry.
+void (state?.rendered ? afterNextPaint() : Promise.resolve()).then(() => startApp(container, state));

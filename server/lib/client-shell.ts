@@ -83,13 +83,9 @@ export function stylesFirst(html: string): string {
   return rest.replace(/(<meta charset="[^"]*"\s*\/?>\s*)/i, (meta) => `${meta}${sheets.map((s) => s.trim()).join('\n    ')}\n    `);
 }
 
-/** The app's start (src/main.tsx imports it once the server's HTML is painted): every page needs it and its imports. */
-export const APP_START = 'src/app/start-app.tsx';
-
 /**
- * The built index.html with per-page preloads: the app's start and the page's route module, each
- * with its imports, less what the entry already loads. Without Vite's manifest (an older build)
- * every page gets the plain index.html.
+ * The built index.html with per-page preloads: the page's route module with its imports, less what
+ * the entry already loads. Without Vite's manifest (an older build) every page gets the plain index.html.
  */
 export function createClientShell(clientDir: string) {
   const indexHtml = stylesFirst(readFileSync(path.join(clientDir, 'index.html'), 'utf8'));
@@ -102,16 +98,11 @@ export function createClientShell(clientDir: string) {
   function pageFor(module: string | null) {
     const cached = pages.get(module);
     if (cached) return cached;
-    const files = { js: [] as string[], css: [] as string[] };
-    for (const key of [APP_START, ...(module ? [`src/app/routes/${module}.tsx`] : [])]) {
-      if (!manifest?.[key]) continue;
-      const { js, css } = chunkFiles(manifest, key);
-      files.js.push(...js);
-      files.css.push(...css);
-    }
-    const preloads = [...new Set(files.js)].filter((f) => !inEntry.has(f));
+    const key = `src/app/routes/${module}.tsx`;
+    const { js, css } = module && manifest?.[key] ? chunkFiles(manifest, key) : { js: [], css: [] };
+    const preloads = [...new Set(js)].filter((f) => !inEntry.has(f));
     const links = [
-      ...[...new Set(files.css)].map((f) => `<link rel="stylesheet" crossorigin href="/${f}">`),
+      ...[...new Set(css)].map((f) => `<link rel="stylesheet" crossorigin href="/${f}">`),
       ...preloads.map((f) => `<link rel="modulepreload" crossorigin href="/${f}">`),
     ];
     const page = { html: links.length ? indexHtml.replace('</head>', `    ${links.join('\n    ')}\n  </head>`) : indexHtml, preloads };
@@ -120,7 +111,7 @@ export function createClientShell(clientDir: string) {
   }
 
   return {
-    /** index.html for a page path, preloading the app's start and that page's code */
+    /** index.html for a page path, preloading that page's code */
     html(pathname: string): string {
       return pageFor(routeModuleFor(pathname)).html;
     },
@@ -144,5 +135,8 @@ export function fillShell(shell: string, page: RenderedPage): string {
     head = head.replace(/<title>[^<]*<\/title>/, () => title);
   }
   // a function, so a "$&" in a recipe's title is not a replacement pattern
-  return head.replace('<div id="root"></div>', () => `<div id="root">${html}</div><script type="application/json" id="${PAGE_STATE_ID}">${page.state}</script>`);
+  return head.replace(
+    '<div id="root"></div>',
+    () => `<div id="root">${html}</div><script type="application/json" id="${PAGE_STATE_ID}">${page.state}</script>`,
+  );
 }
