@@ -46,11 +46,13 @@ function watch(page: Page) {
 async function openAndHydrate(page: Page, path: string, selector: string) {
   let release!: () => void;
   const held = new Promise<void>((resolve) => (release = resolve));
-  await page.route(/\/assets\/start-app-[^/]+\.js$/, async (route) => {
+  // the entry (Vite's index-<hash>.js): nothing of the app runs before it
+  await page.route(/\/assets\/index-[^/]+\.js$/, async (route) => {
     await held;
     await route.continue();
   });
-  await page.goto(`${live.server.url}${path}`, { waitUntil: 'domcontentloaded' });
+  // not 'domcontentloaded': that waits for the held entry
+  await page.goto(`${live.server.url}${path}`, { waitUntil: 'commit' });
   await page.locator(selector).first().waitFor();
   await page
     .locator(selector)
