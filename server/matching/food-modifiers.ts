@@ -74,6 +74,13 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   { label: 'spicy', asks: ['spicy'], honouredBy: HOT, neutralFor: TEMPERATURE_FOODS },
   { label: 'lean', asks: ['lean'] },
   { label: 'Italian', asks: ['italian'], neutralFor: ['parsley'] },
+  // "oat milk" is no cow's milk, "almond flour" no wheat flour: the plant a food is made from.
+  { label: 'oat', asks: ['oat'], honouredBy: [['oats']] },
+  { label: 'almond', asks: ['almond'], honouredBy: [['almonds']] },
+  { label: 'soy', asks: ['soy'], honouredBy: [['soymilk'], ['soybean'], ['soybeans'], ['tofu']] },
+  { label: 'rice', asks: ['rice'] },
+  { label: 'coconut', asks: ['coconut'] },
+  { label: 'cashew', asks: ['cashew'], honouredBy: [['cashews']] },
   // A colour names another food only against another colour: "black rice" is not white rice, but
   // "black olives" are SR28's ripe olives and "red onion" its onions.
   ...colour('black'),

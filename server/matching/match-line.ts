@@ -11,6 +11,7 @@ import type { ParsedLine } from '../../shared/parse-line';
 import { MATCH_CONFIDENCE_FLOOR, type FoodMatch, type FoodMatcher } from './food-matcher';
 import { FOOD_MODIFIERS, modifiersAskedBy, positivelyHonours, unmetModifiers, type FoodModifier } from './food-modifiers';
 import { PREPARATION_WORDS, STOP_WORDS, words } from './normalise-phrase';
+import { orChoices } from './or-choices';
 
 /** Under this confidence a match is shown as "check this match". */
 export const CHECK_MATCH_BELOW = 0.6;
@@ -126,8 +127,24 @@ function honouringFood(candidates: readonly CatalogueFood[], asked: readonly Foo
   return null;
 }
 
+/** How garlic is cut, never the spice: "2 cloves, minced". */
+const GARLIC_CUTS = /\b(?:minced|crushed|smashed|peeled|grated|sliced|chopped|pressed)\b/i;
+
+/** "4 whole cloves", "6 cloves": counted cloves with no food named are the spice, unless cut as garlic is. */
+function unnamedCloves(parsed: ParsedLine): string | null {
+  if (parsed.unit !== 'clove') return null;
+  if (!words(parsed.name).every((w) => w === 'whole' || w === 'dried' || PREPARATION_WORDS.has(w) || STOP_WORDS.has(w))) return null;
+  return GARLIC_CUTS.test(`${parsed.name} ${parsed.preparation ?? ''} ${parsed.comment ?? ''}`) ? 'garlic' : 'cloves';
+}
+
 export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string): LineMatch {
-  const phrase = parsed.name || input;
+  const phrase = unnamedCloves(parsed) ?? (parsed.name || input);
+  // "oat or almond milk": the cook's first choice the catalogue has, else the phrase as a whole.
+  for (const ways of orChoices(phrase))
+    for (const way of ways) {
+      const chosen = matchLine(matcher, { ...parsed, name: way }, input);
+      if (chosen.food && !chosen.checkMatch) return chosen;
+    }
   const warnings: string[] = [];
   const asked = modifiersAskedBy(phrase);
   if (FRESH && !asked.includes(FRESH) && asksFresh(parsed, phrase)) asked.push(FRESH);

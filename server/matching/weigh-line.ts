@@ -44,7 +44,7 @@ interface ReadPortion {
 }
 
 /** Qualifiers that describe the usual state of a measured food, not a preparation. */
-const NEUTRAL_QUALIFIERS = new Set(['fluid', 'whole', 'ground', 'unsift', 'raw', 'not', 'purchased', 'as', 'yield']);
+const NEUTRAL_QUALIFIERS = new Set(['fluid', 'whole', 'ground', 'unsift', 'raw', 'not', 'purchased', 'as', 'yield', 'leaf', 'leaves']);
 /** Qualifiers whose cut sizes pack alike in a cup. */
 const CUT_SMALL = new Set(['chop', 'dice', 'mince', 'cube']);
 /** Pieces of a food, never what a bare count ("2 onions") means. */
@@ -115,8 +115,16 @@ function portionMl(r: ReadPortion): number | null {
   return ml !== null && ml > 0 ? ml : null;
 }
 
+/** "1 cup sugar, sifted": measured, then sifted (*common practice*); "1 cup sifted sugar" is sifted, then measured. */
+const SIFTED_AFTER_MEASURING = /^[^,]*,.*\bsifted\b/i;
+const SIFTED_BEFORE_MEASURING = /^[^,]*\bsifted\b/i;
+
 function lineStems(parsed: ParsedLine): { prep: Set<string>; name: Set<string> } {
   const prep = new Set(words(`${parsed.preparation ?? ''} ${parsed.comment ?? ''}`).map(stem));
+  if (prep.has('sift') && SIFTED_AFTER_MEASURING.test(parsed.input) && !SIFTED_BEFORE_MEASURING.test(parsed.input)) {
+    prep.delete('sift');
+    prep.add('unsift');
+  }
   const name = new Set(words(parsed.name ?? '').map(stem));
   return { prep, name };
 }

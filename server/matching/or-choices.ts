@@ -1,0 +1,101 @@
+/**
+ * The foods a line offers as choices, in the cook's order: "oat or almond milk" → "oat milk",
+ * "almond milk"; "red or white wine vinegar" → "red wine vinegar", "white wine vinegar";
+ * "vegetable or chicken bouillon paste" → "vegetable bouillon paste", "chicken bouillon paste";
+ * "shortening or lard" → "shortening", "lard". The cook's first choice is the food of the line when
+ * the catalogue has it; a later choice stands in only when an earlier one has no confident food.
+ */
+import { words } from './normalise-phrase';
+
+/** Single words that describe or source the food named after them: never a food alone in a choice. */
+const SHARES_THE_FOOD = new Set([
+  'black',
+  'white',
+  'brown',
+  'red',
+  'green',
+  'yellow',
+  'golden',
+  'purple',
+  'orange',
+  'dry',
+  'dried',
+  'fresh',
+  'frozen',
+  'canned',
+  'sweet',
+  'light',
+  'dark',
+  'hot',
+  'mild',
+  'smoked',
+  'salted',
+  'unsalted',
+  'sweetened',
+  'unsweetened',
+  'raw',
+  'cooked',
+  'creamy',
+  'chunky',
+  'smooth',
+  'crunchy',
+  'coarse',
+  'fine',
+  'flaky',
+  'kosher',
+  'sea',
+  'oat',
+  'soy',
+  'almond',
+  'rice',
+  'cashew',
+  'coconut',
+  'chicken',
+  'beef',
+  'vegetable',
+  'veggie',
+  'fish',
+  'turkey',
+  'pork',
+  'canola',
+  'olive',
+  'sunflower',
+  'peanut',
+  'sesame',
+  'corn',
+  'grapeseed',
+  'avocado',
+  'lemon',
+  'lime',
+  'cake',
+  'bread',
+]);
+
+/**
+ * The choices of a food phrase joined by "or" (commas listing more choices: "canola, sunflower, or
+ * vegetable oil"), first choice first; each choice may be written two ways (its words plus the last
+ * choice's food words, then plus its head word only), tried in that order. Empty without "or".
+ */
+export function orChoices(phrase: string): string[][] {
+  if (!/\bor\b/i.test(phrase)) return [];
+  const parts = phrase
+    .split(/\s*,?\s+or\s+|\s*,\s*/i)
+    .map((p) => p.trim())
+    .filter((p) => p.length > 0 && !/^(?:other|your|any|similar|another)\b/i.test(p));
+  if (parts.length < 2) return [];
+  const last = words(parts[parts.length - 1]);
+  const head = last[last.length - 1];
+  const out: string[][] = [];
+  for (const [i, part] of parts.entries()) {
+    const ws = words(part);
+    if (i === parts.length - 1 || last.length < 2 || ws.length !== 1 || ws[0] === head) {
+      out.push([part]);
+      continue;
+    }
+    const tail = last.slice(1).join(' ');
+    const ways = [`${ws[0]} ${tail}`, `${ws[0]} ${head}`];
+    // "butter or olive oil": a food word alone is a choice of its own, tried before "butter oil".
+    out.push(SHARES_THE_FOOD.has(ws[0]) ? [...new Set(ways)] : [part, ...new Set(ways)]);
+  }
+  return out;
+}
