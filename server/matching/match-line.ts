@@ -137,8 +137,30 @@ function unnamedCloves(parsed: ParsedLine): string | null {
   return GARLIC_CUTS.test(`${parsed.name} ${parsed.preparation ?? ''} ${parsed.comment ?? ''}`) ? 'garlic' : 'cloves';
 }
 
+/**
+ * The nearest food of a phrase that matched none: without the words the catalogue does not know,
+ * else its last two food words ("firm but ripe plums" → "ripe plums"), else its head word.
+ */
+function nearestWithout(matcher: FoodMatcher, phrase: string, unknown: readonly string[]): { match: FoodMatch; leftOut: string[] } | null {
+  const all = words(phrase);
+  const food = foodWordsOf(phrase);
+  const tries: string[][] = [];
+  if (unknown.length > 0) tries.push(all.filter((w) => !unknown.includes(w)));
+  if (food.length > 2) tries.push(food.slice(-2));
+  if (food.length > 1) tries.push(food.slice(-1));
+  for (const kept of tries) {
+    const found = kept.some((w) => !STOP_WORDS.has(w)) ? matcher.match(kept.join(' ')) : null;
+    // "pomegranate seeds" → "Anise seed" is no near food: the food's name must start with the kept words.
+    if (found?.food && (found.via === 'alias' || found.nameHeadMatched))
+      return { match: found, leftOut: all.filter((w) => !kept.includes(w) && !STOP_WORDS.has(w) && !PREPARATION_WORDS.has(w)) };
+  }
+  return null;
+}
+
 export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string): LineMatch {
-  const phrase = unnamedCloves(parsed) ?? (parsed.name || input);
+  // "28 oz can whole peeled tomatoes": the package word read as the start of the food's name.
+  const packageFirst = /^(?:cans?|tins?)\s+(?:of\s+)?(?=\S)/i.exec(parsed.name);
+  const phrase = unnamedCloves(parsed) ?? (packageFirst ? parsed.name.slice(packageFirst[0].length) : parsed.name || input);
   // "oat or almond milk": the cook's first choice the catalogue has, else the phrase as a whole.
   for (const ways of orChoices(phrase))
     for (const way of ways) {
@@ -167,8 +189,22 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
     }
   }
 
+  // "cage-free egg", "raw fine bread crumbs": words no food has hide the food; the food without
+  // them is offered, to be checked, with the words it left out named.
+  let leftOut: string[] = [];
+  if (!match.food) {
+    const nearest = nearestWithout(matcher, phrase, match.unknownWords);
+    if (nearest) {
+      leftOut = nearest.leftOut;
+      match = { ...nearest.match, confidence: Math.min(nearest.match.confidence, MISSING_MODIFIER_CONFIDENCE) };
+    }
+  }
+
   // "1 (28 oz) can crushed tomatoes": the cook means the canned food, in the form it is sold.
-  const byCan = (parsed.unit !== null && CANNED_UNITS.has(parsed.unit)) || /\bcan(?:ned|s)?\b|\btins?\b/i.test(`${parsed.sizeText ?? ''} ${phrase}`);
+  const byCan =
+    packageFirst !== null ||
+    (parsed.unit !== null && CANNED_UNITS.has(parsed.unit)) ||
+    /\bcan(?:ned|s)?\b|\btins?\b/i.test(`${parsed.sizeText ?? ''} ${phrase}`);
   const saysCanned = /\bcanned\b/i.test(phrase);
   if (byCan && !isCanned(match.food)) {
     const forms = words(parsed.preparation ?? '')
@@ -244,6 +280,10 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
     if (unknown.length > 0 && !missingModifier) {
       check = true;
       warnings.push(`“${unknown.join(' ')}” is not in the catalogue: check this match.`);
+    }
+    if (leftOut.length > 0) {
+      check = true;
+      warnings.push(`No food has “${leftOut.join(' ')}”: weighed as its nearest food, ${food.name}. Check this match.`);
     }
     if (confidence < CHECK_MATCH_BELOW) check = true;
   }

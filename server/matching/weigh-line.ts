@@ -92,6 +92,11 @@ const SUB_PIECES = new Set([
   'patty',
   'clove',
 ]);
+/**
+ * A can of beans or vegetables whose size the line leaves out: the 15 oz can (NIST Handbook 44: 425 g),
+ * *common practice*; SR28 weighs the No. 303 can of canned vegetables at 423–482 g.
+ */
+const USUAL_CAN_GRAMS = 425;
 const SIZE_UNITS = new Set(['large', 'medium', 'small', 'extra-large', 'jumbo']);
 
 function finite(n: number): number {
@@ -385,6 +390,12 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
 
   const ask = countAsk(parsed);
   const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, new Set(words(parsed.name ?? '').map(singular)));
+  if (!chosen && ask.piece === 'can' && /\bcanned\b/i.test(food.name)) {
+    const grams = drainedGrams(quantity * USUAL_CAN_GRAMS, opts, warnings);
+    warnings.push(`No can size given: weighed as the usual 15 oz (${USUAL_CAN_GRAMS} g) can.`);
+    const d = density();
+    return result(grams, d ? grams / d : null, null, warnings);
+  }
   if (!chosen) {
     const what = ask.piece ? `"${parsed.unitText ?? ask.piece}"` : 'one piece';
     return result(0, null, null, [`No household weight for ${what} of this food: give the amount in grams, ounces or cups.`]);
