@@ -71,15 +71,39 @@ const SHARES_THE_FOOD = new Set([
   'bread',
 ]);
 
+/** Heads that name a product made of the words before them: "wine *vinegar*", "sesame *oil*". */
+const PRODUCT_HEADS = new Set(['vinegar', 'oil', 'sauce', 'flour', 'sugar', 'milk', 'broth', 'stock', 'juice', 'paste', 'powder', 'syrup', 'extract']);
+
+/** What such a product is made of, as a choice's last word: "red *wine*", "apple *cider*". */
+const PRODUCT_SOURCES = new Set([
+  'wine',
+  'cider',
+  'sherry',
+  'champagne',
+  'malt',
+  'balsamic',
+  'tomato',
+  'garlic',
+  'onion',
+  'maple',
+  'vanilla',
+  'apple',
+  'oyster',
+  'hoisin',
+  'chili',
+  'chile',
+]);
+
 /**
  * The choices of a food phrase joined by "or" (commas listing more choices: "canola, sunflower, or
  * vegetable oil"), first choice first; each choice may be written two ways (its words plus the last
  * choice's food words, then plus its head word only), tried in that order. Empty without "or".
  */
 export function orChoices(phrase: string): string[][] {
-  if (!/\bor\b/i.test(phrase)) return [];
+  if (!/\bor\b|[a-z]\/[a-z]/i.test(phrase)) return [];
   const parts = phrase
-    .split(/\s*,?\s+or\s+|\s*,\s*/i)
+    .replace(/\band\/or\b/gi, 'or')
+    .split(/\s*,?\s+or\s+|\s*,\s*|(?<=[a-z])\/(?=[a-z])/i)
     .map((p) => p.trim())
     .filter((p) => p.length > 0 && !/^(?:other|your|any|similar|another)\b/i.test(p));
   if (parts.length < 2) return [];
@@ -88,8 +112,14 @@ export function orChoices(phrase: string): string[][] {
   const out: string[][] = [];
   for (const [i, part] of parts.entries()) {
     const ws = words(part);
-    if (i === parts.length - 1 || last.length < 2 || ws.length !== 1 || ws[0] === head) {
+    if (i === parts.length - 1 || last.length < 2 || ws.includes(head)) {
       out.push([part]);
+      continue;
+    }
+    // "red wine or apple cider vinegar": a product the head names is the choice, before "red wine".
+    if (ws.length > 1) {
+      const madeOf = PRODUCT_HEADS.has(head) && (SHARES_THE_FOOD.has(ws[ws.length - 1]) || PRODUCT_SOURCES.has(ws[ws.length - 1]));
+      out.push(madeOf ? [`${part} ${head}`, part] : [part]);
       continue;
     }
     const tail = last.slice(1).join(' ');
