@@ -157,22 +157,26 @@ function nearestWithout(matcher: FoodMatcher, phrase: string, unknown: readonly 
   return null;
 }
 
-export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string): LineMatch {
+export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string, byChoices = true): LineMatch {
   // "28 oz can whole peeled tomatoes": the package word read as the start of the food's name.
   const packageFirst = /^(?:cans?|tins?)\s+(?:of\s+)?(?=\S)/i.exec(parsed.name);
   const phrase = unnamedCloves(parsed) ?? (packageFirst ? parsed.name.slice(packageFirst[0].length) : parsed.name || input);
-  // "oat or almond milk": the cook's first choice the catalogue has; else the first choice with a
-  // food to check; else the phrase as a whole.
-  let firstToCheck: LineMatch | null = null;
-  for (const ways of orChoices(phrase))
-    for (const way of ways) {
-      const chosen = matchLine(matcher, { ...parsed, name: way }, input);
-      if (!chosen.food) continue;
-      if (!chosen.checkMatch) return chosen;
-      firstToCheck ??= chosen;
-      break;
-    }
-  if (firstToCheck) return firstToCheck;
+  // "oat or almond milk": the cook's first choice the catalogue has; else the phrase as a whole
+  // when it has a food; else the first choice with a food to check.
+  const choices = byChoices ? orChoices(phrase) : [];
+  if (choices.length > 0) {
+    let firstToCheck: LineMatch | null = null;
+    for (const ways of choices)
+      for (const way of ways) {
+        const chosen = matchLine(matcher, { ...parsed, name: way }, input, false);
+        if (!chosen.food) continue;
+        if (!chosen.checkMatch) return chosen;
+        firstToCheck ??= chosen;
+        break;
+      }
+    const whole = matchLine(matcher, parsed, input, false);
+    return whole.food ? whole : (firstToCheck ?? whole);
+  }
   const warnings: string[] = [];
   const asked = modifiersAskedBy(phrase);
   if (FRESH && !asked.includes(FRESH) && asksFresh(parsed, phrase)) asked.push(FRESH);

@@ -69,6 +69,12 @@ const SHARES_THE_FOOD = new Set([
   'lime',
   'cake',
   'bread',
+  'french',
+  'italian',
+  'greek',
+  'mexican',
+  'spanish',
+  'english',
 ]);
 
 /** Heads that name a product made of the words before them: "wine *vinegar*", "sesame *oil*". */
@@ -107,12 +113,14 @@ export function orChoices(phrase: string): string[][] {
     .map((p) => p.trim())
     .filter((p) => p.length > 0 && !/^(?:other|your|any|similar|another)\b/i.test(p));
   if (parts.length < 2) return [];
+  // "dry white wine, or chicken broth": two foods apart, no word shared.
+  const apart = parts.length === 2 && /,\s*or\s/i.test(phrase);
   const last = words(parts[parts.length - 1]);
   const head = last[last.length - 1];
   const out: string[][] = [];
   for (const [i, part] of parts.entries()) {
     const ws = words(part);
-    if (i === parts.length - 1 || last.length < 2 || ws.includes(head)) {
+    if (i === parts.length - 1 || apart || last.length < 2 || ws.includes(head)) {
       out.push([part]);
       continue;
     }
