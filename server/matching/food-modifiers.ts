@@ -81,6 +81,9 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   { label: 'rice', asks: ['rice'] },
   { label: 'coconut', asks: ['coconut'] },
   { label: 'cashew', asks: ['cashew'], honouredBy: [['cashews']] },
+  // "vanilla bean" is no snap bean, "nutritional yeast" no baker's yeast.
+  { label: 'vanilla', asks: ['vanilla'] },
+  { label: 'nutritional', asks: ['nutritional'] },
   // A colour names another food only against another colour: "black rice" is not white rice, but
   // "black olives" are SR28's ripe olives and "red onion" its onions.
   ...colour('black'),

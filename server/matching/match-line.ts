@@ -127,6 +127,9 @@ function honouringFood(candidates: readonly CatalogueFood[], asked: readonly Foo
   return null;
 }
 
+const JUICED = /^\s*juiced\b|^[^,]*\band juiced\b/i;
+const CITRUS = /^(?:lemons?|limes?|oranges?|grapefruits?)$/i;
+
 /** How garlic is cut, never the spice: "2 cloves, minced". */
 const GARLIC_CUTS = /\b(?:minced|crushed|smashed|peeled|grated|sliced|chopped|pressed)\b/i;
 
@@ -160,7 +163,9 @@ function nearestWithout(matcher: FoodMatcher, phrase: string, unknown: readonly 
 export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string, byChoices = true): LineMatch {
   // "28 oz can whole peeled tomatoes": the package word read as the start of the food's name.
   const packageFirst = /^(?:cans?|tins?)\s+(?:of\s+)?(?=\S)/i.exec(parsed.name);
-  const phrase = unnamedCloves(parsed) ?? (packageFirst ? parsed.name.slice(packageFirst[0].length) : parsed.name || input);
+  const named = unnamedCloves(parsed) ?? (packageFirst ? parsed.name.slice(packageFirst[0].length) : parsed.name || input);
+  // "2 lemons, juiced": the juice is the food, weighed by what one fruit yields.
+  const phrase = JUICED.test(`${parsed.preparation ?? ''}`) && CITRUS.test(named) && !/\bjuice\b/i.test(named) ? `${named} juice` : named;
   // "oat or almond milk": the cook's first choice the catalogue has; else the phrase as a whole
   // when it has a food; else the first choice with a food to check.
   const choices = byChoices ? orChoices(phrase) : [];
