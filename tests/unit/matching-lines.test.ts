@@ -184,8 +184,8 @@ describe("airy foods weigh by their own or a near food's cup, not a role default
   });
 
   it("shredded part-skim mozzarella (no cup of its own) takes a near mozzarella's shredded cup", () => {
-    // USDA SR28 WEIGHT.txt 01026 "cup, shredded" (112 g)
-    expect(line('2 cups shredded reduced-fat mozzarella').grams).toBeCloseTo(2 * sr28('01026', /^cup, shredded$/), 6);
+    // USDA SR28 WEIGHT.txt 01029 "cup, shredded" (113 g): the part-skim mozzarella nearest by name
+    expect(line('2 cups shredded reduced-fat mozzarella').grams).toBeCloseTo(2 * sr28('01029', /^cup, shredded$/), 6);
   });
 });
 
