@@ -536,11 +536,11 @@ function weightInNote(s: LineState): void {
 
 /** "3½ to 4½ pounds", "2-3 lb": the middle of a range of weights, or null. */
 function massRangeMidpoint(note: string): Amount | null {
-  const m = /^(?:about\s+|around\s+|roughly\s+)?([\d½¼¾⅓⅔⅛.\/ ]+?)\s*(?:to|-|–)\s*([\d½¼¾⅓⅔⅛.\/ ]+[^\d\s].*)$/i.exec(note.trim());
+  const m = /^(?:about\s+|around\s+|roughly\s+)?([\d½¼¾⅓⅔⅛./ ]+?)\s*(?:to|-|–)\s*([\d½¼¾⅓⅔⅛./ ]+[^\d\s].*)$/i.exec(note.trim());
   if (!m) return null;
   const hi = readAmounts(m[2]).find((a) => unitKind(a.unit) === 'mass');
   if (!hi) return null;
-  const unitText = m[2].replace(/^[\d½¼¾⅓⅔⅛.\/ ]+/, '');
+  const unitText = m[2].replace(/^[\d½¼¾⅓⅔⅛./ ]+/, '');
   const lo = readAmounts(`${m[1].trim()} ${unitText}`).find((a) => unitKind(a.unit) === 'mass' && a.unit === hi.unit);
   return lo && lo.quantity < hi.quantity ? { quantity: (lo.quantity + hi.quantity) / 2, unit: hi.unit } : null;
 }
