@@ -78,7 +78,27 @@ const SHARES_THE_FOOD = new Set([
 ]);
 
 /** Heads that name a product made of the words before them: "wine *vinegar*", "sesame *oil*". */
-const PRODUCT_HEADS = new Set(['vinegar', 'oil', 'sauce', 'flour', 'sugar', 'milk', 'broth', 'stock', 'juice', 'paste', 'powder', 'syrup', 'extract']);
+const PRODUCT_HEADS = new Set([
+  'vinegar',
+  'oil',
+  'sauce',
+  'flour',
+  'sugar',
+  'milk',
+  'broth',
+  'stock',
+  'juice',
+  'paste',
+  'powder',
+  'syrup',
+  'extract',
+  'jam',
+  'jelly',
+  'preserves',
+  'butter',
+]);
+/** Foods cooks offer whole against another's product: "butter or olive oil", "honey or maple syrup". */
+const STANDS_ALONE = new Set(['butter', 'ghee', 'lard', 'shortening', 'margarine', 'sugar', 'honey', 'water', 'salt', 'mayonnaise', 'yogurt', 'tamari']);
 
 /** What such a product is made of, as a choice's last word: "red *wine*", "apple *cider*". */
 const PRODUCT_SOURCES = new Set([
@@ -132,8 +152,10 @@ export function orChoices(phrase: string): string[][] {
     }
     const tail = last.slice(1).join(' ');
     const ways = [`${ws[0]} ${tail}`, `${ws[0]} ${head}`];
-    // "butter or olive oil": a food word alone is a choice of its own, tried before "butter oil".
-    out.push(SHARES_THE_FOOD.has(ws[0]) ? [...new Set(ways)] : [part, ...new Set(ways)]);
+    // "walnut or hazelnut oil": the product of each; but "butter or olive oil": a food word alone is
+    // a choice of its own, tried before "butter oil".
+    const shares = SHARES_THE_FOOD.has(ws[0]) || (PRODUCT_HEADS.has(head) && !STANDS_ALONE.has(ws[0]));
+    out.push(shares ? [...new Set(ways)] : [part, ...new Set(ways)]);
   }
   return out;
 }
