@@ -93,7 +93,7 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   ...colour('green'),
   ...colour('yellow'),
   // "fresh tarragon" matched to dried tarragon: a tenth of the water, ten times the nutrients per gram.
-  { label: 'fresh', asks: ['fresh'], brokenBy: [['dried'], ['dehydrated'], ['dry'], ['canned']] },
+  { label: 'fresh', asks: ['fresh'], brokenBy: [['dried'], ['dehydrated'], ['dry'], ['canned'], ['ground']] },
 ];
 
 function hasSequence(ws: readonly string[], seq: readonly string[]): boolean {
