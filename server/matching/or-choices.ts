@@ -5,36 +5,12 @@
  * "shortening or lard" → "shortening", "lard". The cook's first choice is the food of the line when
  * the catalogue has it; a later choice stands in only when an earlier one has no confident food.
  */
+import { DESCRIBING_WORDS } from './food-matcher';
 import { words } from './normalise-phrase';
 
 /** Single words that describe or source the food named after them: never a food alone in a choice. */
 const SHARES_THE_FOOD = new Set([
-  'black',
-  'white',
-  'brown',
-  'red',
-  'green',
-  'yellow',
-  'golden',
-  'purple',
-  'orange',
-  'dry',
-  'dried',
-  'fresh',
-  'frozen',
-  'canned',
-  'sweet',
-  'light',
-  'dark',
-  'hot',
-  'mild',
-  'smoked',
-  'salted',
-  'unsalted',
-  'sweetened',
-  'unsweetened',
-  'raw',
-  'cooked',
+  ...DESCRIBING_WORDS,
   'creamy',
   'chunky',
   'smooth',

@@ -63,7 +63,6 @@ const NAMED_OTHERWISE: Record<string, string> = {
   challah: 'a braided egg bread, SR28 "bread, egg"',
   'brioche buns': 'an enriched burger bun, nearest SR28 food is the hamburger roll',
   'brioche bun': 'as brioche buns',
-  prawns: 'large shrimp (common practice), SR28 "crustaceans, shrimp"',
   'italian seasoning': 'a blend of dried herbs led by oregano (common practice); weighed as dried oregano and flagged for checking',
 };
 

