@@ -127,6 +127,10 @@ function honouringFood(candidates: readonly CatalogueFood[], asked: readonly Foo
   return null;
 }
 
+/** Longer phrases are notes, not choices: they are matched whole, once (a 64 KB line stays cheap). */
+const LONGEST_CHOICE_PHRASE = 200;
+const MAX_CHOICES = 4;
+
 const JUICED = /^\s*juiced\b|^[^,]*\band juiced\b/i;
 const CITRUS = /^(?:lemons?|limes?|oranges?|grapefruits?)$/i;
 
@@ -168,7 +172,7 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
   const phrase = JUICED.test(`${parsed.preparation ?? ''}`) && CITRUS.test(named) && !/\bjuice\b/i.test(named) ? `${named} juice` : named;
   // "oat or almond milk": the cook's first choice the catalogue has; else the phrase as a whole
   // when it has a food; else the first choice with a food to check.
-  const choices = byChoices ? orChoices(phrase) : [];
+  const choices = byChoices && phrase.length <= LONGEST_CHOICE_PHRASE ? orChoices(phrase).slice(0, MAX_CHOICES) : [];
   if (choices.length > 0) {
     let firstToCheck: LineMatch | null = null;
     for (const ways of choices)
@@ -207,7 +211,7 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
   // "cage-free egg", "raw fine bread crumbs": words no food has hide the food; the food without
   // them is offered, to be checked, with the words it left out named.
   let leftOut: string[] = [];
-  if (!match.food) {
+  if (!match.food && phrase.length <= LONGEST_CHOICE_PHRASE) {
     const nearest = nearestWithout(matcher, phrase, match.unknownWords);
     if (nearest) {
       leftOut = nearest.leftOut;
