@@ -82,6 +82,9 @@ const leanHam = swap('^(Ham, (sliced, pre-packaged|smoked, extra lean)|Canadian 
 /** label rule (tests/panel/README.md): a pastry lid may be phyllo sheets misted with oil, about half the pastry's weight */
 const phylloLid = swap('^Phyllo dough', [0.35, 0.7]);
 
+/** label rule (tests/panel/README.md): a flour tortilla on the griddle accepts corn tortillas by weight */
+const cornOnGriddle = swap('^Tortillas, ready-to-bake or -fry, corn', [0.85, 1.2]);
+
 const LESS = (lo = 0.5): [number, number] => [lo, 1];
 const MORE: [number, number] = [1, 1.5];
 
@@ -287,7 +290,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
     servings: 4,
     half: 'tune',
     lines: [
-      { text: '4 large flour tortillas', keep: 'the wrap' },
+      { text: '4 large flour tortillas', keep: 'the wrap', swaps: [cornOnGriddle] },
       { text: '2 cups shredded cooked chicken', swaps: moreOfLean([chickenBreastCooked]), scale: MORE_LEAN },
       { text: '2 cups shredded Monterey Jack cheese', swaps: [lowFatMonterey, partSkimMozzarella], scale: LESS(0.6) },
       { text: '1 tablespoon vegetable oil', keep: 'griddle fat', scale: LESS(0.3) },
