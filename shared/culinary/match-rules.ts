@@ -64,7 +64,8 @@ export interface LineSituation {
 /** The rules that apply to a line: its food class, function, dish type and context. */
 export function rulesForLine(rules: readonly SubstitutionRule[], line: LineSituation): SubstitutionRule[] {
   return rules.filter(
-    (r) => inFoodClass(r.from, line.food, line.phrase) && ruleHoldsIn(r, line.role, line.dishType, line.context, line.mixedDish, line.recipeKinds, line.browsMeat),
+    (r) =>
+      inFoodClass(r.from, line.food, line.phrase) && ruleHoldsIn(r, line.role, line.dishType, line.context, line.mixedDish, line.recipeKinds, line.browsMeat),
   );
 }
 

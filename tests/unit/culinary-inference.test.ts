@@ -278,16 +278,7 @@ describe('mixed dishes and baked custards', () => {
 
 describe('issue 10 round 3: browning, batter fat, a phyllo lid, corn tortillas on the griddle', () => {
   const rules = parseRuleFile(ruleFile);
-  const TORTILLAS: Spec = [
-    'large flour tortillas',
-    192,
-    'Tortillas, ready-to-bake or -fry, flour, refrigerated',
-    '18',
-    ['flatbread-wrap'],
-    undefined,
-    '18364',
-    7.9,
-  ];
+  const TORTILLAS: Spec = ['flour tortillas', 192, 'Tortillas, ready-to-bake or -fry, flour, refrigerated', '18', ['flatbread-wrap'], undefined, '18364', 7.9];
   const JACK: Spec = ['shredded Monterey Jack cheese', 226, 'Cheese, monterey', '01', ['melting-cheese'], undefined, '01025', 30];
   const OIL: Spec = ['vegetable oil', 14, 'Oil, soybean, salad or cooking', '04', ['cooking-fat'], undefined, '04044', 100];
   const COOKED_CHICKEN: Spec = ['shredded cooked chicken', 278, 'Chicken, broilers or fryers, meat only, roasted', '05', ['poultry'], undefined, '05013', 7.4];
