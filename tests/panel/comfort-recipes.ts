@@ -227,7 +227,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
     half: 'tune',
     lines: [
       { text: '2 cups all-purpose flour', keep: 'structure of the batter', swaps: [halfWholeWheatFlour] },
-      { text: '2 tablespoons sugar', keep: 'browning', scale: LESS() },
+      { text: '2 tablespoons sugar', keep: 'browning', scale: LESS(0.25) },
       { text: '2 teaspoons baking powder', keep: keepLeavener },
       { text: '1/2 teaspoon baking soda', keep: keepLeavener },
       { text: '1/2 teaspoon salt', keep: keepSeasoning },

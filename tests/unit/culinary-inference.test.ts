@@ -191,9 +191,9 @@ describe('rule matching by food class and dish context', () => {
     const sugar = { name: 'Sugars, granulated', foodGroup: '19', sourceId: '19335', roles: ['sweetener'], per100g: { fatG: 0 } };
     const sugarIn = (dishType: 'batter' | 'leavened-bake') =>
       keepScaleOf(rulesForLine(rules, { food: sugar, phrase: 'sugar', role: 'sweetener', dishType, context: 'baked-batter-dough' }))?.range;
-    expect(sugarIn('batter')).toEqual([0.5, 1]);
+    expect(sugarIn('batter')).toEqual([0.25, 1]);
     expect(sugarIn('leavened-bake')).toEqual([0.75, 1]);
-    expect(ruleHoldsIn(rule('batter-sugar-halve'), 'structure', 'leavened-bake', 'baked-batter-dough')).toBe(false);
+    expect(ruleHoldsIn(rule('batter-sugar-quarter'), 'structure', 'leavened-bake', 'baked-batter-dough')).toBe(false);
   });
 
   it('a third of the fat brushes a griddle; half a cured meat or two thirds of a hard cheese still seasons; whole-wheat flour stays within ±10 % of 1:1', () => {
