@@ -87,6 +87,11 @@ function readLine(text: string) {
   return { quantity: amountOf(amount[0]), unit, unitText: unit ? word : null, name: rest.split(',')[0].replace(PREPARED, '').trim() };
 }
 
+/** The food a line names, in the cook's words: "2 cups shredded sharp cheddar, divided" → "sharp cheddar"; null when it names none. */
+export function writtenFoodName(text: string): string | null {
+  return readLine(text.trim()).name || null;
+}
+
 function withUnitNumber(unitText: string, amount: number): string {
   if (unitText.length < 3 || /^(oz|lb|g|kg|ml|l|tsp|tbsp)s?$/i.test(unitText)) return unitText;
   return measureWord(unitText, amount);
