@@ -47,6 +47,8 @@ export interface DataTableProps<Row> {
   density?: 'roomy' | 'snug' | 'tight';
   /** below this width each row turns into a card built from the same columns (labels from their headers) */
   cardsBelow?: 'sm' | 'md';
+  /** how many values sit side by side on a phone card */
+  cardColumns?: 2 | 3;
   /** a table wider than a phone scrolls inside a focusable region with this name */
   scrollLabel?: string;
   className?: string;
@@ -59,11 +61,12 @@ const CARDS = {
     table: 'max-sm:block',
     head: 'max-sm:hidden',
     body: 'max-sm:flex max-sm:flex-col max-sm:gap-3',
-    row: 'max-sm:grid max-sm:grid-cols-2 max-sm:gap-x-4 max-sm:gap-y-2 max-sm:rounded-card max-sm:border max-sm:border-line max-sm:bg-surface max-sm:p-4 max-sm:shadow-card',
+    row: 'max-sm:grid max-sm:gap-x-4 max-sm:gap-y-2 max-sm:rounded-card max-sm:border max-sm:border-line max-sm:bg-surface max-sm:p-4 max-sm:shadow-card',
     foot: 'max-sm:mt-3 max-sm:block max-sm:rounded-card max-sm:border-2 max-sm:border-line-strong max-sm:bg-oat-100',
     footRow: 'max-sm:grid max-sm:grid-cols-3 max-sm:gap-x-4 max-sm:gap-y-1 max-sm:p-4 max-sm:not-last:pb-0',
     cell: 'max-sm:block max-sm:p-0 max-sm:text-left',
-    wide: 'max-sm:col-span-2',
+    wide: 'max-sm:col-span-full',
+    columns: { 2: 'max-sm:grid-cols-2', 3: 'max-sm:grid-cols-3' },
     footWide: 'max-sm:col-span-3',
     empty: 'max-sm:hidden',
     label: 'mb-0.5 block text-xs font-bold tracking-wide text-ink-soft uppercase sm:hidden',
@@ -74,11 +77,12 @@ const CARDS = {
     table: 'max-md:block',
     head: 'max-md:hidden',
     body: 'max-md:flex max-md:flex-col max-md:gap-3',
-    row: 'max-md:grid max-md:grid-cols-2 max-md:gap-x-4 max-md:gap-y-2 max-md:rounded-card max-md:border max-md:border-line max-md:bg-surface max-md:p-4 max-md:shadow-card',
+    row: 'max-md:grid max-md:gap-x-4 max-md:gap-y-2 max-md:rounded-card max-md:border max-md:border-line max-md:bg-surface max-md:p-4 max-md:shadow-card',
     foot: 'max-md:mt-3 max-md:block max-md:rounded-card max-md:border-2 max-md:border-line-strong max-md:bg-oat-100',
     footRow: 'max-md:grid max-md:grid-cols-3 max-md:gap-x-4 max-md:gap-y-1 max-md:p-4 max-md:not-last:pb-0',
     cell: 'max-md:block max-md:p-0 max-md:text-left',
-    wide: 'max-md:col-span-2',
+    wide: 'max-md:col-span-full',
+    columns: { 2: 'max-md:grid-cols-2', 3: 'max-md:grid-cols-3' },
     footWide: 'max-md:col-span-3',
     empty: 'max-md:hidden',
     label: 'mb-0.5 block text-xs font-bold tracking-wide text-ink-soft uppercase md:hidden',
@@ -116,6 +120,7 @@ export function DataTable<Row>({
   striped = look === 'boxed',
   density = 'roomy',
   cardsBelow,
+  cardColumns = 2,
   scrollLabel,
   className,
   tableClassName,
@@ -161,6 +166,7 @@ export function DataTable<Row>({
                 look === 'boxed' && 'last:border-b-0',
                 striped && (cards?.stripe ?? 'even:bg-oat-50'),
                 cards?.row,
+                cards?.columns[cardColumns],
                 rowClassName?.(row, index),
               )}
             >

@@ -66,6 +66,7 @@ export function VersionReview({ version, unitSystem, clientTargets }: { version:
           caption="Ingredient lines with weight, energy and protein for the whole dish"
           captionHidden
           cardsBelow="sm"
+          cardColumns={3}
           rows={version.lines}
           rowKey={(_, i) => i}
           columns={[

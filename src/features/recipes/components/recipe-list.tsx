@@ -42,6 +42,7 @@ export function RecipeList({ recipes, caption, unread }: { recipes: RecipeSummar
       caption={caption}
       captionHidden
       cardsBelow="sm"
+      cardColumns={3}
       rows={recipes}
       rowKey={(recipe) => recipe.id}
       rowClassName={() => 'hover:bg-ember-50'}

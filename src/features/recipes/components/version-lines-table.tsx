@@ -51,6 +51,7 @@ export function VersionLinesTable({ version, caption }: { version: VersionDetail
         captionHidden
         density="snug"
         cardsBelow="sm"
+        cardColumns={3}
         className="sm:rounded-field"
         rows={version.lines}
         rowKey={(_, i) => i}
