@@ -64,7 +64,7 @@ const CARDS = {
     row: 'max-sm:grid max-sm:gap-x-4 max-sm:gap-y-2 max-sm:rounded-card max-sm:border max-sm:border-line max-sm:bg-surface max-sm:p-4 max-sm:shadow-card',
     foot: 'max-sm:mt-3 max-sm:block max-sm:rounded-card max-sm:border-2 max-sm:border-line-strong max-sm:bg-oat-100',
     footRow: 'max-sm:grid max-sm:grid-cols-3 max-sm:gap-x-4 max-sm:gap-y-1 max-sm:p-4 max-sm:not-last:pb-0',
-    cell: 'max-sm:block max-sm:p-0 max-sm:text-left',
+    cell: 'max-sm:block max-sm:p-0 max-sm:text-left max-sm:whitespace-normal',
     wide: 'max-sm:col-span-full',
     columns: { 2: 'max-sm:grid-cols-2', 3: 'max-sm:grid-cols-3' },
     footWide: 'max-sm:col-span-3',
@@ -80,7 +80,7 @@ const CARDS = {
     row: 'max-md:grid max-md:gap-x-4 max-md:gap-y-2 max-md:rounded-card max-md:border max-md:border-line max-md:bg-surface max-md:p-4 max-md:shadow-card',
     foot: 'max-md:mt-3 max-md:block max-md:rounded-card max-md:border-2 max-md:border-line-strong max-md:bg-oat-100',
     footRow: 'max-md:grid max-md:grid-cols-3 max-md:gap-x-4 max-md:gap-y-1 max-md:p-4 max-md:not-last:pb-0',
-    cell: 'max-md:block max-md:p-0 max-md:text-left',
+    cell: 'max-md:block max-md:p-0 max-md:text-left max-md:whitespace-normal',
     wide: 'max-md:col-span-full',
     columns: { 2: 'max-md:grid-cols-2', 3: 'max-md:grid-cols-3' },
     footWide: 'max-md:col-span-3',
@@ -224,7 +224,7 @@ export function DataTable<Row>({
 export function headerWithUnit(name: string, unit: string): ReactNode {
   return (
     <>
-      {name} <span className="font-semibold text-ink-soft">{unit}</span>
+      {name} <span className="font-semibold text-ink-soft normal-case">{unit}</span>
     </>
   );
 }

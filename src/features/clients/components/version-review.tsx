@@ -4,6 +4,7 @@ import { DataTable } from '../../../components/ui/table';
 import { Stat } from '../../../components/ui/stat';
 import { formatKcal, formatMacroG, formatMg, formatNumber, formatProteinDensity, formatWeight } from '../../../lib/format';
 import type { UnitSystem } from '../../../lib/user';
+import { versionNote } from '../../../lib/version-kinds';
 import type { ClientTargets } from '../api/clients';
 import { meetsPerMeal } from '../targets-form';
 
@@ -26,6 +27,7 @@ export function VersionReview({ version, unitSystem, clientTargets }: { version:
   const density = per.kcal > 0 ? (per.proteinG * 100) / per.kcal : null;
   const servings = version.servings;
   const meets = meetsPerMeal(per, clientTargets);
+  const note = versionNote(version);
 
   return (
     <div className="flex flex-col gap-6">
@@ -50,10 +52,10 @@ export function VersionReview({ version, unitSystem, clientTargets }: { version:
         />
       </dl>
 
-      {version.note && (
+      {note && (
         <p className="rounded-field border-l-4 border-accent bg-oat-100 px-4 py-3 text-ink">
           <span className="font-bold">Their note: </span>
-          {version.note}
+          {note}
         </p>
       )}
       {version.targets && <TargetsUsed targets={version.targets} />}

@@ -1,7 +1,7 @@
 import { Button } from '../../../components/ui/button';
 import type { Swap } from '../../../../shared/schemas/swaps';
 import { type RoleLabel, swapFromWords, swapToWords, volumeRatioFigure, volumeRatioWords } from '../../../lib/swap-words';
-import { DataTable, headerWithUnit } from '../../../components/ui/table';
+import { DataTable, headerWithUnit, type TableColumn } from '../../../components/ui/table';
 import { PublishSwitch } from './publish-switch';
 import { TagBadges } from '../../../components/ui/tag-badges';
 import { formatKcal, formatMacroG } from '../../../lib/format';
@@ -43,6 +43,18 @@ function Actions({ swap, roleLabel, onEdit, onDelete }: { swap: Swap; roleLabel:
   );
 }
 
+/** A figure of the food swapped in, per 100 g. */
+function per100Column(key: string, name: string, figure: (food: NonNullable<Swap['toFood']>) => string): TableColumn<Swap> {
+  return {
+    key,
+    header: headerWithUnit(name, '/ 100 g'),
+    align: 'right',
+    headerClassName: 'whitespace-nowrap',
+    className: 'py-3 font-bold whitespace-nowrap',
+    cell: (swap) => (swap.toFood ? figure(swap.toFood) : '—'),
+  };
+}
+
 /** The coach's library: a table from tablets up, a card per swap on a phone. */
 export function SwapTable({ swaps, caption, roleLabel, onEdit, onDelete, onTogglePublished, publishingId }: SwapTableProps) {
   return (
@@ -68,22 +80,8 @@ export function SwapTable({ swaps, caption, roleLabel, onEdit, onDelete, onToggl
             </span>
           ),
         },
-        {
-          key: 'kcal',
-          header: headerWithUnit('Energy', '/ 100 g'),
-          align: 'right',
-          headerClassName: 'whitespace-nowrap',
-          className: 'py-3 font-bold whitespace-nowrap',
-          cell: (swap) => (swap.toFood ? formatKcal(swap.toFood.kcalPer100g) : '—'),
-        },
-        {
-          key: 'protein',
-          header: headerWithUnit('Protein', '/ 100 g'),
-          align: 'right',
-          headerClassName: 'whitespace-nowrap',
-          className: 'py-3 font-bold whitespace-nowrap',
-          cell: (swap) => (swap.toFood ? formatMacroG(swap.toFood.proteinPer100g) : '—'),
-        },
+        per100Column('kcal', 'Energy', (food) => formatKcal(food.kcalPer100g)),
+        per100Column('protein', 'Protein', (food) => formatMacroG(food.proteinPer100g)),
         {
           key: 'note',
           header: 'Cooking note',
