@@ -3,6 +3,7 @@ import { Badge } from '../../../components/ui/badge';
 import { formatGrams } from '../../../lib/format';
 import type { PrepWeight } from '../../../../shared/schemas/prep';
 import { portionsWord } from '../prep-words';
+import { foodWords } from '../../../lib/shopping-items';
 
 export interface WeightsTableProps {
   perPortion: PrepWeight[];
@@ -39,7 +40,9 @@ export function WeightsTable({ perPortion, batch, portions, compact = false }: W
           className: 'font-semibold sm:px-4',
           cell: (line) => (
             <>
-              <span className="mr-1.5">{line.food.name}</span>
+              <span className="mr-1.5" title={line.food.id === null ? undefined : line.food.name}>
+                {foodWords(line.food)}
+              </span>
               {line.food.id === null && (
                 <Badge tone="honey" title="No catalogue food matched this line; it is not in the nutrition figures.">
                   no match
