@@ -205,7 +205,10 @@ export function DataTable<Row>({
                     );
                   const value = foot.cells[col.key];
                   return (
-                    <td key={col.key} className={cx(pad, alignClass(col.align), cards?.cell, value === undefined && cards?.empty)}>
+                    <td
+                      key={col.key}
+                      className={cx(pad, alignClass(col.align), col.align === 'right' && 'whitespace-nowrap', cards?.cell, value === undefined && cards?.empty)}
+                    >
                       {value !== undefined && label(col)}
                       {value}
                     </td>
