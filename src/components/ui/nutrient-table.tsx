@@ -55,7 +55,6 @@ export function NutrientTable({ caption, captionHidden, columns, extraRows = [],
       className={className}
       rows={rows}
       rowKey={(r) => r.key}
-      rowClassName={(r) => (extra.has(r.key) ? 'last:border-b-0' : undefined)}
       columns={[
         {
           key: 'nutrient',

@@ -163,7 +163,7 @@ export function DataTable<Row>({
               key={rowKey(row, index)}
               className={cx(
                 'border-b border-line align-top',
-                look === 'boxed' && 'last:border-b-0',
+                'last:border-b-0',
                 striped && (cards?.stripe ?? 'even:bg-oat-50'),
                 cards?.row,
                 cards?.columns[cardColumns],

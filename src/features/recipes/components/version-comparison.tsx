@@ -103,7 +103,6 @@ function NutrientDifferences({ a, b }: { a: VersionDetail; b: VersionDetail }) {
       tableClassName="@md:text-base"
       rows={rows}
       rowKey={(r) => r.key}
-      rowClassName={(r) => (r.key === 'volume' ? 'border-b-0' : undefined)}
       columns={[
         {
           key: 'label',

@@ -112,7 +112,6 @@ export function BeforeAfterNumbers({
       look="plain"
       rows={rows}
       rowKey={(r) => r.key}
-      rowClassName={(r) => (r.key === 'density' ? 'border-b-0' : undefined)}
       columns={[
         {
           key: 'label',
