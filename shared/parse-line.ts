@@ -526,12 +526,23 @@ function weightInNote(s: LineState): void {
   if (s.quantity !== null && s.equivalents.length === 0 && s.size === null) {
     for (const note of takeParentheticals(s.description).notes) {
       if (/\b(?:from|per|makes|yields?)\b/i.test(note)) continue;
-      const mass = readAmounts(note).find((a) => unitKind(a.unit) === 'mass');
+      const mass = massRangeMidpoint(note) ?? readAmounts(note).find((a) => unitKind(a.unit) === 'mass');
       if (!mass) continue;
       s.equivalents.push(/\beach\b|\bapiece\b/i.test(note) ? { quantity: mass.quantity * s.quantity, unit: mass.unit } : mass);
       break;
     }
   }
+}
+
+/** "3½ to 4½ pounds", "2-3 lb": the middle of a range of weights, or null. */
+function massRangeMidpoint(note: string): Amount | null {
+  const m = /^(?:about\s+|around\s+|roughly\s+)?([\d½¼¾⅓⅔⅛./ ]+?)\s*(?:to|-|–)\s*([\d½¼¾⅓⅔⅛./ ]+[^\d\s].*)$/i.exec(note.trim());
+  if (!m) return null;
+  const hi = readAmounts(m[2]).find((a) => unitKind(a.unit) === 'mass');
+  if (!hi) return null;
+  const unitText = m[2].replace(/^[\d½¼¾⅓⅔⅛./ ]+/, '');
+  const lo = readAmounts(`${m[1].trim()} ${unitText}`).find((a) => unitKind(a.unit) === 'mass' && a.unit === hi.unit);
+  return lo && lo.quantity < hi.quantity ? { quantity: (lo.quantity + hi.quantity) / 2, unit: hi.unit } : null;
 }
 
 /** "2 dozen eggs": twenty-four of them. */

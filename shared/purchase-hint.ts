@@ -8,6 +8,7 @@
  */
 import type { Portion } from './food';
 import { roundHalfUp } from './label-rounding';
+import { kitchenQuantity, measureWord } from './kitchen-amounts';
 import { GRAMS_PER_OUNCE, ML_PER_CUP, OUNCES_PER_POUND, ML_PER_TBSP, ML_PER_TSP, massToGrams, normaliseUnit, unitKind, volumeToMl } from './units';
 
 export type UnitSystem = 'us' | 'metric';
@@ -155,12 +156,9 @@ function gramsPerMl(portions: readonly Portion[]): number | null {
 }
 
 /** 1.75 → "1 3/4"; 0.5 → "1/2"; 2 → "2". Only the quarters, halves and wholes the hints round to. */
+/** 1.75 → "1 3/4": the nearest quarter (callers round to halves or quarters first). */
 function fraction(x: number): string {
-  const whole = Math.floor(x + 1e-9);
-  const part = roundHalfUp(x - whole, 0.25);
-  const frac = { 0: '', 0.25: '1/4', 0.5: '1/2', 0.75: '3/4' }[part as 0 | 0.25 | 0.5 | 0.75] ?? '';
-  if (whole === 0) return frac || '0';
-  return frac ? `${whole} ${frac}` : String(whole);
+  return kitchenQuantity(roundHalfUp(x, 0.25));
 }
 
 function volumeHint(grams: number, portions: readonly Portion[], unitSystem: UnitSystem): string | null {
@@ -178,7 +176,7 @@ function volumeHint(grams: number, portions: readonly Portion[], unitSystem: Uni
   if (unitSystem === 'metric') return null;
   const cups = roundHalfUp(ml / ML_PER_CUP, 0.25);
   if (cups > MAX_CUPS) return null;
-  return `about ${fraction(cups)} ${cups > 1 ? 'cups' : 'cup'}`;
+  return `about ${fraction(cups)} ${measureWord('cup', cups)}`;
 }
 
 function ceilToStep(x: number, step: number): number {
@@ -324,7 +322,7 @@ function usVolume(ml: number): string {
     return `${fraction(tbsp)} tbsp`;
   }
   const cups = ceilToStep(ml / ML_PER_CUP, 0.25);
-  return `${fraction(cups)} ${cups > 1 ? 'cups' : 'cup'}`;
+  return `${fraction(cups)} ${measureWord('cup', cups)}`;
 }
 
 /** Metric volumes: to 5 mL under 100 mL, 10 mL under 1 L, then 0.1 L; rounded up. */

@@ -5,6 +5,7 @@
  * on the line as its matched food, shown beside this text. It reads the line's amount and unit itself
  * (not through parse-line, whose parser package would weigh on the Kitchen's first visit).
  */
+import { kitchenQuantity, measureWord, nearestKitchenFraction } from './kitchen-amounts';
 import { normaliseUnit, unitKind } from './units';
 
 /** Parts of an SR28 name that say how the food is sold or kept, not what it is. */
@@ -49,26 +50,10 @@ export function commonFoodName(food: { name: string; source: 'usda-sr28' | 'cust
   return name.replace(/\s+/g, ' ').trim();
 }
 
-const FRACTIONS: [number, string][] = [
-  [0, ''],
-  [0.25, '1/4'],
-  [1 / 3, '1/3'],
-  [0.5, '1/2'],
-  [2 / 3, '2/3'],
-  [0.75, '3/4'],
-  [1, ''],
-];
-
-/** 1.5 → "1 1/2", 0.33 → "1/3": the nearest quarter or third a cook measures. */
+/** 1.5 → "1 1/2", 0.33 → "1/3": the nearest quarter or third a cook measures, never less than 1/4. */
 export function kitchenNumber(x: number): string {
-  let whole = Math.floor(x);
-  const rest = x - whole;
-  let best = FRACTIONS[0];
-  for (const f of FRACTIONS) if (Math.abs(rest - f[0]) < Math.abs(rest - best[0])) best = f;
-  if (best[0] === 1) whole += 1;
-  const frac = best[0] === 1 ? '' : best[1];
-  if (whole === 0 && !frac) return '1/4';
-  return [whole > 0 ? String(whole) : '', frac].filter(Boolean).join(' ');
+  const nearest = nearestKitchenFraction(x, [4, 3]);
+  return kitchenQuantity(nearest > 0 ? nearest : 0.25);
 }
 
 function wholeGrams(g: number): string {
@@ -102,10 +87,14 @@ function readLine(text: string) {
   return { quantity: amountOf(amount[0]), unit, unitText: unit ? word : null, name: rest.split(',')[0].replace(PREPARED, '').trim() };
 }
 
+/** The food a line names, in the cook's words: "2 cups shredded sharp cheddar, divided" → "sharp cheddar"; null when it names none. */
+export function writtenFoodName(text: string): string | null {
+  return readLine(text.trim()).name || null;
+}
+
 function withUnitNumber(unitText: string, amount: number): string {
-  const singular = unitText.replace(/(?<=[a-z])s$/i, '');
-  if (unitText.length < 3 || /^(oz|lb|g|kg|ml|l|tsp|tbsp)$/i.test(singular)) return unitText;
-  return amount > 1 ? `${singular}s` : singular;
+  if (unitText.length < 3 || /^(oz|lb|g|kg|ml|l|tsp|tbsp)s?$/i.test(unitText)) return unitText;
+  return measureWord(unitText, amount);
 }
 
 /**

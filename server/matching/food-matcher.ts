@@ -211,7 +211,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
 }
 
 /** Words that describe the food written after them, never a food alone in a choice ("dry or sweet vermouth"). */
-const DESCRIBING_WORDS = new Set([
+export const DESCRIBING_WORDS = new Set([
   'black',
   'white',
   'brown',

@@ -74,6 +74,16 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   { label: 'spicy', asks: ['spicy'], honouredBy: HOT, neutralFor: TEMPERATURE_FOODS },
   { label: 'lean', asks: ['lean'] },
   { label: 'Italian', asks: ['italian'], neutralFor: ['parsley'] },
+  // "oat milk" is no cow's milk, "almond flour" no wheat flour: the plant a food is made from.
+  { label: 'oat', asks: ['oat'], honouredBy: [['oats']] },
+  { label: 'almond', asks: ['almond'], honouredBy: [['almonds']] },
+  { label: 'soy', asks: ['soy'], honouredBy: [['soymilk'], ['soybean'], ['soybeans'], ['tofu']] },
+  { label: 'rice', asks: ['rice'] },
+  { label: 'coconut', asks: ['coconut'] },
+  { label: 'cashew', asks: ['cashew'], honouredBy: [['cashews']] },
+  // "vanilla bean" is no snap bean, "nutritional yeast" no baker's yeast.
+  { label: 'vanilla', asks: ['vanilla'] },
+  { label: 'nutritional', asks: ['nutritional'] },
   // A colour names another food only against another colour: "black rice" is not white rice, but
   // "black olives" are SR28's ripe olives and "red onion" its onions.
   ...colour('black'),
@@ -83,7 +93,7 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   ...colour('green'),
   ...colour('yellow'),
   // "fresh tarragon" matched to dried tarragon: a tenth of the water, ten times the nutrients per gram.
-  { label: 'fresh', asks: ['fresh'], brokenBy: [['dried'], ['dehydrated'], ['dry']] },
+  { label: 'fresh', asks: ['fresh'], brokenBy: [['dried'], ['dehydrated'], ['dry'], ['canned'], ['ground']] },
 ];
 
 function hasSequence(ws: readonly string[], seq: readonly string[]): boolean {

@@ -11,6 +11,7 @@ import type { ParsedLine } from '../../shared/parse-line';
 import { MATCH_CONFIDENCE_FLOOR, type FoodMatch, type FoodMatcher } from './food-matcher';
 import { FOOD_MODIFIERS, modifiersAskedBy, positivelyHonours, unmetModifiers, type FoodModifier } from './food-modifiers';
 import { PREPARATION_WORDS, STOP_WORDS, words } from './normalise-phrase';
+import { orChoices } from './or-choices';
 
 /** Under this confidence a match is shown as "check this match". */
 export const CHECK_MATCH_BELOW = 0.6;
@@ -126,8 +127,65 @@ function honouringFood(candidates: readonly CatalogueFood[], asked: readonly Foo
   return null;
 }
 
-export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string): LineMatch {
-  const phrase = parsed.name || input;
+/** Longer phrases are notes, not choices: they are matched whole, once (a 64 KB line stays cheap). */
+const LONGEST_CHOICE_PHRASE = 200;
+const MAX_CHOICES = 4;
+
+const JUICED = /^\s*juiced\b|^[^,]*\band juiced\b/i;
+const CITRUS = /^(?:lemons?|limes?|oranges?|grapefruits?)$/i;
+
+/** How garlic is cut, never the spice: "2 cloves, minced". */
+const GARLIC_CUTS = /\b(?:minced|crushed|smashed|peeled|grated|sliced|chopped|pressed)\b/i;
+
+/** "4 whole cloves", "6 cloves": counted cloves with no food named are the spice, unless cut as garlic is. */
+function unnamedCloves(parsed: ParsedLine): string | null {
+  if (parsed.unit !== 'clove') return null;
+  if (!words(parsed.name).every((w) => w === 'whole' || w === 'dried' || PREPARATION_WORDS.has(w) || STOP_WORDS.has(w))) return null;
+  return GARLIC_CUTS.test(`${parsed.name} ${parsed.preparation ?? ''} ${parsed.comment ?? ''}`) ? 'garlic' : 'cloves';
+}
+
+/**
+ * The nearest food of a phrase that matched none: without the words the catalogue does not know,
+ * else its last two food words ("firm but ripe plums" → "ripe plums"), else its head word.
+ */
+function nearestWithout(matcher: FoodMatcher, phrase: string, unknown: readonly string[]): { match: FoodMatch; leftOut: string[] } | null {
+  const all = words(phrase);
+  const food = foodWordsOf(phrase);
+  const tries: string[][] = [];
+  if (unknown.length > 0) tries.push(all.filter((w) => !unknown.includes(w)));
+  if (food.length > 2) tries.push(food.slice(-2));
+  if (food.length > 1) tries.push(food.slice(-1));
+  for (const kept of tries) {
+    const found = kept.some((w) => !STOP_WORDS.has(w)) ? matcher.match(kept.join(' ')) : null;
+    // "pomegranate seeds" → "Anise seed" is no near food: the food's name must start with the kept words.
+    if (found?.food && (found.via === 'alias' || found.nameHeadMatched))
+      return { match: found, leftOut: all.filter((w) => !kept.includes(w) && !STOP_WORDS.has(w) && !PREPARATION_WORDS.has(w)) };
+  }
+  return null;
+}
+
+export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string, byChoices = true): LineMatch {
+  // "28 oz can whole peeled tomatoes": the package word read as the start of the food's name.
+  const packageFirst = /^(?:cans?|tins?)\s+(?:of\s+)?(?=\S)/i.exec(parsed.name);
+  const named = unnamedCloves(parsed) ?? (packageFirst ? parsed.name.slice(packageFirst[0].length) : parsed.name || input);
+  // "2 lemons, juiced": the juice is the food, weighed by what one fruit yields.
+  const phrase = JUICED.test(`${parsed.preparation ?? ''}`) && CITRUS.test(named) && !/\bjuice\b/i.test(named) ? `${named} juice` : named;
+  // "oat or almond milk": the cook's first choice the catalogue has; else the phrase as a whole
+  // when it has a food; else the first choice with a food to check.
+  const choices = byChoices && phrase.length <= LONGEST_CHOICE_PHRASE ? orChoices(phrase).slice(0, MAX_CHOICES) : [];
+  if (choices.length > 0) {
+    let firstToCheck: LineMatch | null = null;
+    for (const ways of choices)
+      for (const way of ways) {
+        const chosen = matchLine(matcher, { ...parsed, name: way }, input, false);
+        if (!chosen.food) continue;
+        if (!chosen.checkMatch) return chosen;
+        firstToCheck ??= chosen;
+        break;
+      }
+    const whole = matchLine(matcher, parsed, input, false);
+    return whole.food ? whole : (firstToCheck ?? whole);
+  }
   const warnings: string[] = [];
   const asked = modifiersAskedBy(phrase);
   if (FRESH && !asked.includes(FRESH) && asksFresh(parsed, phrase)) asked.push(FRESH);
@@ -150,8 +208,22 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
     }
   }
 
+  // "cage-free egg", "raw fine bread crumbs": words no food has hide the food; the food without
+  // them is offered, to be checked, with the words it left out named.
+  let leftOut: string[] = [];
+  if (!match.food && phrase.length <= LONGEST_CHOICE_PHRASE) {
+    const nearest = nearestWithout(matcher, phrase, match.unknownWords);
+    if (nearest) {
+      leftOut = nearest.leftOut;
+      match = { ...nearest.match, confidence: Math.min(nearest.match.confidence, MISSING_MODIFIER_CONFIDENCE) };
+    }
+  }
+
   // "1 (28 oz) can crushed tomatoes": the cook means the canned food, in the form it is sold.
-  const byCan = (parsed.unit !== null && CANNED_UNITS.has(parsed.unit)) || /\bcan(?:ned|s)?\b|\btins?\b/i.test(`${parsed.sizeText ?? ''} ${phrase}`);
+  const byCan =
+    packageFirst !== null ||
+    (parsed.unit !== null && CANNED_UNITS.has(parsed.unit)) ||
+    /\bcan(?:ned|s)?\b|\btins?\b/i.test(`${parsed.sizeText ?? ''} ${phrase}`);
   const saysCanned = /\bcanned\b/i.test(phrase);
   if (byCan && !isCanned(match.food)) {
     const forms = words(parsed.preparation ?? '')
@@ -227,6 +299,10 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
     if (unknown.length > 0 && !missingModifier) {
       check = true;
       warnings.push(`“${unknown.join(' ')}” is not in the catalogue: check this match.`);
+    }
+    if (leftOut.length > 0) {
+      check = true;
+      warnings.push(`No food has “${leftOut.join(' ')}”: weighed as its nearest food, ${food.name}. Check this match.`);
     }
     if (confidence < CHECK_MATCH_BELOW) check = true;
   }

@@ -23,6 +23,13 @@ function nameKey(food: CatalogueFood, parts: number): string {
   return segments.slice(0, parts).join(', ');
 }
 
+function nameWords(food: CatalogueFood): string[] {
+  return food.sourceName
+    .toLowerCase()
+    .split(/[^a-z]+/)
+    .filter((w) => w.length > 2);
+}
+
 /** Per food without a volume portion: the volume portions of its near foods, labelled with their food. */
 export function nearVolumePortions(foods: readonly CatalogueFood[]): Map<number, Portion[]> {
   const withVolume = foods.filter((f) => f.source === 'usda-sr28' && hasVolume(f.portions));
@@ -40,7 +47,10 @@ export function nearVolumePortions(foods: readonly CatalogueFood[]): Map<number,
     if (food.source !== 'usda-sr28' || hasVolume(food.portions)) continue;
     const near = groups[0].get(nameKey(food, 2)) ?? groups[1].get(nameKey(food, 1));
     if (!near) continue;
-    const ranked = [...near].sort((a, b) => Number(a.branded) - Number(b.branded)).slice(0, MAX_NEAR_FOODS);
+    // "Nuts, cashew nuts, raw" borrows from other cashews before "Nuts, coconut cream".
+    const own = new Set(nameWords(food));
+    const shared = (f: CatalogueFood) => nameWords(f).filter((w) => own.has(w)).length;
+    const ranked = [...near].sort((a, b) => Number(a.branded) - Number(b.branded) || shared(b) - shared(a)).slice(0, MAX_NEAR_FOODS);
     const portions = ranked.flatMap((f) =>
       f.portions.filter((p) => mlPerMeasure(p.measure) !== null && p.grams > 0 && p.amount > 0).map((p) => ({ ...p, label: `${p.label} (${f.name})` })),
     );

@@ -44,7 +44,10 @@ interface ReadPortion {
 }
 
 /** Qualifiers that describe the usual state of a measured food, not a preparation. */
-const NEUTRAL_QUALIFIERS = new Set(['fluid', 'whole', 'ground', 'unsift', 'raw', 'not', 'purchased', 'as', 'yield']);
+const NEUTRAL_QUALIFIERS = new Set(['fluid', 'whole', 'ground', 'unsift', 'raw', 'not', 'purchased', 'as', 'yield', 'leaf', 'leaves']);
+const NEUTRAL_UNLESS_SPICE = new Set([...NEUTRAL_QUALIFIERS].filter((q) => q !== 'ground'));
+/** SR28's "Spices and Herbs" group. */
+const SPICE_GROUP = '02';
 /** Qualifiers whose cut sizes pack alike in a cup. */
 const CUT_SMALL = new Set(['chop', 'dice', 'mince', 'cube']);
 /** Pieces of a food, never what a bare count ("2 onions") means. */
@@ -92,6 +95,11 @@ const SUB_PIECES = new Set([
   'patty',
   'clove',
 ]);
+/**
+ * A can of beans or vegetables whose size the line leaves out: the 15 oz can (NIST Handbook 44: 425 g),
+ * *common practice*; SR28 weighs the No. 303 can of canned vegetables at 423–482 g.
+ */
+const USUAL_CAN_GRAMS = 425;
 const SIZE_UNITS = new Set(['large', 'medium', 'small', 'extra-large', 'jumbo']);
 
 function finite(n: number): number {
@@ -115,9 +123,19 @@ function portionMl(r: ReadPortion): number | null {
   return ml !== null && ml > 0 ? ml : null;
 }
 
+/** "1 cup sugar, sifted": measured, then sifted (*common practice*); "1 cup sifted sugar" is sifted, then measured. */
+const SIFTED_AFTER_MEASURING = /^[^,]*,.*\bsifted\b/i;
+const SIFTED_BEFORE_MEASURING = /^[^,]*\bsifted\b/i;
+
 function lineStems(parsed: ParsedLine): { prep: Set<string>; name: Set<string> } {
   const prep = new Set(words(`${parsed.preparation ?? ''} ${parsed.comment ?? ''}`).map(stem));
+  if (prep.has('sift') && SIFTED_AFTER_MEASURING.test(parsed.input) && !SIFTED_BEFORE_MEASURING.test(parsed.input)) {
+    prep.delete('sift');
+    prep.add('unsift');
+  }
   const name = new Set(words(parsed.name ?? '').map(stem));
+  // "almond flour", "flax meal": the food ground.
+  if (name.has('flour') || name.has('meal')) name.add('ground');
   return { prep, name };
 }
 
@@ -125,8 +143,10 @@ function lineStems(parsed: ParsedLine): { prep: Set<string>; name: Set<string> }
  * The volume portion that fits the line best: one whose measure names the line's preparation
  * ("cup, shredded" for shredded cheese), else a plain one, in the line's own unit when there is one.
  */
-function bestVolumePortion(all: ReadPortion[], parsed: ParsedLine, unit: string | null): { r: ReadPortion; gPerMl: number } | null {
+function bestVolumePortion(all: ReadPortion[], parsed: ParsedLine, unit: string | null, food: CatalogueFood | null): { r: ReadPortion; gPerMl: number } | null {
   const { prep, name } = lineStems(parsed);
+  // A spice is measured ground ("1 tsp, ground"); nuts ground are a preparation the line must ask for.
+  const neutral = !food || food.foodGroup === SPICE_GROUP ? NEUTRAL_QUALIFIERS : NEUTRAL_UNLESS_SPICE;
   const prepCut = [...prep].some((s) => CUT_SMALL.has(s));
   let best: { r: ReadPortion; gPerMl: number; score: number } | null = null;
   for (const r of all) {
@@ -139,7 +159,7 @@ function bestVolumePortion(all: ReadPortion[], parsed: ParsedLine, unit: string 
       if (prep.has(q)) fit = Math.max(fit, 2);
       else if (prepCut && CUT_SMALL.has(q)) fit = Math.max(fit, 1.5);
       else if (name.has(q)) fit = Math.max(fit, 1);
-      else if (NEUTRAL_QUALIFIERS.has(q)) continue;
+      else if (neutral.has(q)) continue;
       else misfit += q === 'pack' ? 0.2 : 0.5;
     }
     let score = fit - misfit;
@@ -274,7 +294,7 @@ function named(piece: string, nameWords: Set<string>): boolean {
 
 /** Grams per mL for a food's volume, preparation considered; null when nothing gives one. */
 function densityFor(all: ReadPortion[], parsed: ParsedLine, food: CatalogueFood | null, near: Portion[]): number | null {
-  const v = bestVolumePortion(all, parsed, null) ?? bestVolumePortion(read(near), parsed, null);
+  const v = bestVolumePortion(all, parsed, null, food) ?? bestVolumePortion(read(near), parsed, null, food);
   if (v && v.gPerMl > 0 && Number.isFinite(v.gPerMl)) return v.gPerMl;
   if (food && food.densityGPerMl > 0 && Number.isFinite(food.densityGPerMl)) return food.densityGPerMl;
   return null;
@@ -335,9 +355,9 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
     const ml = volumeToMl(quantity, unit) ?? 0;
     if (statedMass) return result(massToGrams(statedMass.quantity, statedMass.unit) ?? 0, ml, null, warnings);
     if (!food) return result(0, ml, null, [WARNING_NO_FOOD]);
-    const v = bestVolumePortion(all, parsed, unit);
+    const v = bestVolumePortion(all, parsed, unit, food);
     if (v) return result(ml * v.gPerMl, ml, v.r.portion.label, warnings);
-    const near = bestVolumePortion(read(opts.nearPortions ?? []), parsed, unit);
+    const near = bestVolumePortion(read(opts.nearPortions ?? []), parsed, unit, food);
     if (near) {
       warnings.push(`No household volume weight for this food: weighed as ${near.r.portion.label}, a near food.`);
       return result(ml * near.gPerMl, ml, near.r.portion.label, warnings);
@@ -362,7 +382,7 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
     if (sizeKind === 'volume') {
       const ml = quantity * (volumeToMl(size.quantity, size.unit) ?? 0);
       if (!food) return result(0, ml, null, [WARNING_NO_FOOD]);
-      const v = bestVolumePortion(all, parsed, size.unit);
+      const v = bestVolumePortion(all, parsed, size.unit, food);
       if (v) return result(ml * v.gPerMl, ml, v.r.portion.label, warnings);
       roleDensityNote();
       return result(ml * food.densityGPerMl, ml, null, warnings);
@@ -377,6 +397,12 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
 
   const ask = countAsk(parsed);
   const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, new Set(words(parsed.name ?? '').map(singular)));
+  if (!chosen && ask.piece === 'can' && /\bcanned\b/i.test(food.name)) {
+    const grams = drainedGrams(quantity * USUAL_CAN_GRAMS, opts, warnings);
+    warnings.push(`No can size given: weighed as the usual 15 oz (${USUAL_CAN_GRAMS} g) can.`);
+    const d = density();
+    return result(grams, d ? grams / d : null, null, warnings);
+  }
   if (!chosen) {
     const what = ask.piece ? `"${parsed.unitText ?? ask.piece}"` : 'one piece';
     return result(0, null, null, [`No household weight for ${what} of this food: give the amount in grams, ounces or cups.`]);

@@ -76,6 +76,24 @@ function readKnownDevice(req: Request): KnownDevice | null {
   return /^[a-f0-9]{32}$/.test(id) ? { id, accounts: accounts.filter((a) => /^[a-f0-9]{16}$/.test(a)) } : null;
 }
 
+/** Marks this browser as one the account signed in from (a sign-in or a sign-up): past the account-wide and address-wide limits it may still try. */
+function rememberBrowser(secureCookies: boolean | 'auto') {
+  return function remember(req: Request, res: Response, email: string) {
+    const tag = accountTag(email);
+    const device = readKnownDevice(req);
+    const id = device?.id ?? randomBytes(16).toString('hex');
+    const accounts = [tag, ...(device?.accounts ?? []).filter((t) => t !== tag)].slice(0, KNOWN_DEVICE_MAX_ACCOUNTS);
+    res.cookie(KNOWN_DEVICE_COOKIE, [id, ...accounts].join('~'), {
+      signed: true,
+      httpOnly: true,
+      sameSite: 'lax',
+      secure: secureCookies === 'auto' ? req.secure : secureCookies,
+      maxAge: 365 * DAY * 1000,
+      path: '/api/auth',
+    });
+  };
+}
+
 function exhausted(limiter: RateLimiterAbstract, r: RateLimiterRes | null) {
   return r !== null && r.consumedPoints >= limiter.points;
 }
@@ -91,7 +109,7 @@ function exhausted(limiter: RateLimiterAbstract, r: RateLimiterRes | null) {
  *   one who has signed in there before.
  * The decision is made before the password is checked, so a refusal says nothing about it.
  */
-function signInGuard(pool: pg.Pool, limits: RateLimitConfig, scope: string, secureCookies: boolean | 'auto') {
+function signInGuard(pool: pg.Pool, limits: RateLimitConfig, scope: string, remember: ReturnType<typeof rememberBrowser>) {
   const pair = counter(pool, `${scope}:login-pair`, limits.loginFailuresPer15Min, FIFTEEN_MINUTES);
   const account = counter(pool, `${scope}:login-account`, limits.loginFailuresPerAccountPerDay, DAY);
   const from = counter(pool, `${scope}:login-address`, limits.loginFailuresPerAddressPerHour, HOUR);
@@ -116,16 +134,7 @@ function signInGuard(pool: pg.Pool, limits: RateLimitConfig, scope: string, secu
       },
       async succeeded() {
         await pair.delete(pairKey);
-        const id = device?.id ?? randomBytes(16).toString('hex');
-        const accounts = [tag, ...(device?.accounts ?? []).filter((t) => t !== tag)].slice(0, KNOWN_DEVICE_MAX_ACCOUNTS);
-        res.cookie(KNOWN_DEVICE_COOKIE, [id, ...accounts].join('~'), {
-          signed: true,
-          httpOnly: true,
-          sameSite: 'lax',
-          secure: secureCookies === 'auto' ? req.secure : secureCookies,
-          maxAge: 365 * DAY * 1000,
-          path: '/api/auth',
-        });
+        remember(req, res, email);
       },
     };
   };
@@ -151,7 +160,8 @@ export function createRateLimits(pool: pg.Pool, limits: RateLimitConfig, secureC
     (req) => (req.user ? `user:${req.user.id}` : address(req)),
     'Too many recipe imports in an hour. Try again later, or paste the recipe instead.',
   );
-  return { signIn: signInGuard(pool, limits, scope, secureCookies), signups, compute, recipeImports };
+  const knownBrowser = rememberBrowser(secureCookies);
+  return { signIn: signInGuard(pool, limits, scope, knownBrowser), knownBrowser, signups, compute, recipeImports };
 }
 
 export type RateLimits = ReturnType<typeof createRateLimits>;

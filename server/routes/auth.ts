@@ -49,6 +49,7 @@ export function authRouter({
   router.post('/register', limits.signups, async (req, res) => {
     const input = parse(registerSchema, req.body);
     const user = input.invitationToken ? (await registerFromInvitation(sequelize, input, input.invitationToken)).user : await createUser(input);
+    limits.knownBrowser(req, res, user.email);
     await logIn(req, res, user);
     res.status(201).json(user.toPublic());
   });

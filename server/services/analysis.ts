@@ -6,12 +6,13 @@ import type { AnalyzeRequest, AnalyzeResponse, AnalyzedLine, LineInput } from '.
 import type { CatalogueFood } from '../../shared/food';
 import { MAX_LINES } from '../../shared/schemas/analyze';
 import { weighLine } from '../matching/weigh-line';
-import { CHECK_MATCH_BELOW, matchLine } from '../matching/match-line';
+import { CHECK_MATCH_BELOW } from '../matching/match-line';
 import { drainedShareFor } from '../matching/drained-share';
 import type { FoodEngine } from './food-engine';
 import { foodSummary } from './foods';
 import { badRequest } from '../lib/http-error';
 import { matchOwnFood } from './own-food-match';
+import { readLine } from './line-readings';
 
 /** Splits pasted text into ingredient lines: blank lines and bullet marks dropped. */
 export function textToLines(text: string): LineInput[] {
@@ -53,9 +54,8 @@ export function analyzeLine(
   canUse: FoodVisibility = catalogueOnly,
   ownFoods: readonly CatalogueFood[] = [],
 ): AnalyzedLineWithFood {
-  const parsed: ParsedLine = parseLine(line.input);
+  const { parsed, match } = readLine(engine, line.input);
   const warnings: string[] = [];
-  const match = matchLine(engine.matcher, parsed, line.input);
   const own = ownFoods.length > 0 ? matchOwnFood(parsed.name || line.input, ownFoods) : null;
   if (!own) warnings.push(...match.warnings);
   let food: CatalogueFood | null = match.food;

@@ -179,7 +179,16 @@ export function recipeCandidates(
     const heldReason = heldReasonFor(role);
     if (heldReason) return { role, context, candidates: [original], heldReason };
 
-    const situation = { food, phrase: line.phrase, role, dishType: reading.dishType, context, mixedDish: reading.mixedDish, recipeKinds };
+    const situation = {
+      food,
+      phrase: line.phrase,
+      role,
+      dishType: reading.dishType,
+      context,
+      mixedDish: reading.mixedDish,
+      recipeKinds,
+      browsMeat: reading.browsMeat,
+    };
     const applicable = rulesForLine(rules, situation);
     const seen = new Map<number, Candidate>();
     const candidates: Candidate[] = [original];

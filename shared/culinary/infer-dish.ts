@@ -10,6 +10,8 @@ export interface DishReading {
    * taco filling), not shaped or breaded into the portion itself (a loaf, meatballs, patties, a cutlet)
    */
   mixedDish: boolean;
+  /** raw meat or fish is browned in the dish's pan (ground beef for tacos), outside a bake */
+  browsMeat: boolean;
   lines: { kind: LineKind; role: LineFunction; context: DishContext }[];
 }
 
@@ -223,11 +225,12 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
   const shaped = kinds.includes('meat') && kinds.includes('crumbs') && kinds.includes('egg');
   const portion = lines.some((l) => PORTION_WORDS.test(`${l.phrase} ${l.comment ?? ''}`));
   const mixedDish = MIXED_TYPES.includes(dishType) && !shaped && !portion;
+  const browsMeat = !BAKE_TYPES.includes(dishType) && lines.some((l, i) => (kinds[i] === 'meat' || kinds[i] === 'fish') && /\braw\b/i.test(l.food?.name ?? ''));
   const out = lines.map((line, i) => {
     const role = overrides[i] ?? roleOf(line, kinds[i], dishType, ctx, i);
     return { kind: kinds[i], role, context: contextOf(role, dishType, hasRoux, line.comment) };
   });
-  return { dishType, hasRoux, mixedDish, lines: out };
+  return { dishType, hasRoux, mixedDish, browsMeat, lines: out };
 }
 
 /** Functions that keep a line exactly as written unless the cook unlocks it (PRODUCT.md step 5). */

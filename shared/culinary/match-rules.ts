@@ -34,8 +34,10 @@ export function ruleHoldsIn(
   context: DishContext,
   mixedDish = false,
   recipeKinds: ReadonlySet<LineKind> = new Set(),
+  browsMeat = false,
 ): boolean {
   if (rule.functions && !rule.functions.includes(role)) return false;
+  if (rule.browning !== undefined && rule.browning !== browsMeat) return false;
   if (rule.recipeHas && !rule.recipeHas.every((k) => recipeKinds.has(k))) return false;
   if (rule.mixedDishOnly && !(mixedDish && role === 'main-protein')) return false;
   if (rule.dishTypes && !rule.dishTypes.includes(dishType)) return false;
@@ -55,12 +57,15 @@ export interface LineSituation {
   mixedDish?: boolean;
   /** every line kind in the recipe (for rules with recipeHas) */
   recipeKinds?: ReadonlySet<LineKind>;
+  /** raw meat or fish is browned in the dish's pan (DishReading.browsMeat) */
+  browsMeat?: boolean;
 }
 
 /** The rules that apply to a line: its food class, function, dish type and context. */
 export function rulesForLine(rules: readonly SubstitutionRule[], line: LineSituation): SubstitutionRule[] {
   return rules.filter(
-    (r) => inFoodClass(r.from, line.food, line.phrase) && ruleHoldsIn(r, line.role, line.dishType, line.context, line.mixedDish, line.recipeKinds),
+    (r) =>
+      inFoodClass(r.from, line.food, line.phrase) && ruleHoldsIn(r, line.role, line.dishType, line.context, line.mixedDish, line.recipeKinds, line.browsMeat),
   );
 }
 

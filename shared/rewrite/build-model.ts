@@ -43,6 +43,8 @@ export interface RewriteModelMeta {
   lines: LineSlot[];
   /** ΣV over all lines */
   originalVolumeMl: number;
+  /** mL the keepScale rules let lines give up at most; the volume floor leaves it out */
+  permittedCutMl: number;
   volumeRangeMl: [number, number];
   weights: ClosestWeights;
   /** slack per elastic target */
@@ -121,7 +123,8 @@ function add(column: Record<string, number>, row: string, value: number): void {
  *    maxShare): lo_c·r_c·s·G_i·y_ics ≤ x_ics ≤ hi_c·r_c·s·G_i·y_ics, the written food keeping (1−s)·G_i
  *    ([lo_c, hi_c] the candidate's rule band, else [1−a, 1+a]);
  *  - unswapped, the written food at exactly G_i, or within keepScale_i·G_i where a rule allows;
- * dish volume Σ x/ρ within (1 ± t)·ΣV (a sanity bound), per-serving targets, Σ y ≤ M, and for
+ * dish volume Σ x/ρ within (1 − t)·ΣV − Σ (1−lo_i)·V_i … (1 + t)·ΣV (a sanity bound whose floor leaves
+ * out what keepScale rules let lines give up), per-serving targets, Σ y ≤ M, and for
  * 'closest' each line's mL away from its centre (r_c·s·G_i, or G_i) plus the mL of written food a
  * swap gives up (s·G_i/ρ_orig). Here it is the same model after exact substitutions:
  *  - y_i,orig = 1 − Σ y_ics, so Σ y_ics ≤ 1 (row pick_i);
@@ -164,7 +167,10 @@ export function buildModel(
   for (const k of Object.keys(writtenTotals) as NutrientKey[]) writtenPerServing[k] = writtenTotals[k] / servings;
   const originalVolumeMl = slots.reduce((s, l) => s + Math.max(0, l.line.volumeMl), 0);
   const t = options.volumeTolerance;
-  const volumeRangeMl: [number, number] = [(1 - t) * originalVolumeMl, (1 + t) * originalVolumeMl];
+  // What a rule itself lets a line give up (keepScale: half the oil, a third less cheese on top) is
+  // taken out by design, so the floor does not make other lines put it back as filler.
+  const permittedCutMl = slots.reduce((s, l) => (l.fixed ? s : s + l.slots[0].keepBelow / l.slots[0].densityGPerMl), 0);
+  const volumeRangeMl: [number, number] = [(1 - t) * originalVolumeMl - permittedCutMl, (1 + t) * originalVolumeMl];
 
   const constraints: LpModel['constraints'] = {};
   const variables: LpModel['variables'] = {};
@@ -256,7 +262,8 @@ export function buildModel(
     // Dish volume as a change from the written ΣV.
     if (objective.kind === 'dish-volume') {
       constraints.vol_over = { max: 0 };
-      constraints.vol_under = { min: 0 };
+      // a change within the cuts the rules permit is no deviation (the floor leaves them out)
+      constraints.vol_under = { min: -permittedCutMl };
       variables.dish_dev = { vol_over: -1, vol_under: 1, [OBJ]: 1 };
     } else {
       constraints.volume = { min: volumeRangeMl[0] - originalVolumeMl, max: volumeRangeMl[1] - originalVolumeMl };
@@ -306,7 +313,7 @@ export function buildModel(
   const model: LpModel = { optimize: OBJ, opType: maximise ? 'max' : 'min', constraints, variables, ints };
   return {
     model,
-    variables: { lines: slots, originalVolumeMl, volumeRangeMl, weights, slack, objectiveConstant },
+    variables: { lines: slots, originalVolumeMl, permittedCutMl, volumeRangeMl, weights, slack, objectiveConstant },
   };
 }
 

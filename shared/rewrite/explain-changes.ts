@@ -107,7 +107,8 @@ export function explainChanges(
     if (!swap) {
       const [lo, hi] = choice.line.line.keepScale ?? [1, 1];
       const role = choice.line.line.role;
-      const may = `${role ? `as ${LINE_FUNCTION_WORDS[role] ?? role} it` : 'it'} may use ${percent(lo)}–${percent(hi)} % of the written amount`;
+      const keepRule = choice.line.original.rule;
+      const may = `${keepRule ? `${keepRule.label}: ` : ''}${role ? `as ${LINE_FUNCTION_WORDS[role] ?? role} it` : 'it'} may use ${percent(lo)}–${percent(hi)} % of the written amount`;
       what = `${added.grams > was.grams ? 'More' : 'Less'} ${from} (${grams(was.grams)} → ${grams(added.grams)}; ${may})`;
     } else if (partial) {
       const kept = now.parts[0].grams;
@@ -124,7 +125,8 @@ export function explainChanges(
           ? `to ${volumeNote}`
           : `for ${listed(servedLabels)}${serves.includes('volume') ? ` and to ${volumeNote}` : ''}`;
     const approval = swap?.candidate.approved;
-    const rule = swap?.candidate.rule;
+    // a line only scaled follows the rule that let its written food move (keepScale), and shows its note
+    const rule = swap ? swap.candidate.rule : choice.line.original.rule;
     const change: Change = {
       line: choice.line.line.index,
       from: { foodId: was.food.foodId, name: was.food.name },

@@ -105,7 +105,9 @@ export function analyseInfeasible(
   const written = elastic.built.variables.originalVolumeMl;
   if (volume && written > 0) {
     const changed = planOf(solvedChoices(volume.built.variables, volume.solution.values), servings).volumeMl;
-    const pct = Math.ceil(snap((100 * Math.abs(changed - written)) / written));
+    // beyond the floor's permitted cuts below, beyond the written volume above
+    const outside = Math.max(0, changed - written, written - volume.built.variables.permittedCutMl - changed);
+    const pct = Math.ceil(snap((100 * outside) / written));
     if (pct > options.volumeTolerance * 100 + 1e-9) {
       suggestions.push({ kind: 'volume-tolerance', value: pct, message: `let the dish's volume change by up to ${pct} %` });
     }

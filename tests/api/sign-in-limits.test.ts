@@ -55,6 +55,13 @@ describe('sign-in limits', () => {
     expect((await attempt('198.51.100.99', owner.email, PASSWORD, device)).status).toBe(200);
   });
 
+  it('counts the browser an account was created in as one it signed in from', async () => {
+    const owner = await signUp(t.app);
+    for (let i = 0; i < 12; i++) expect((await attempt(`203.0.113.${120 + i}`, owner.email, `spray-${i}-wrong`)).status).toBe(401);
+    expect((await attempt('198.51.100.40', owner.email, PASSWORD)).status).toBe(429);
+    expect((await attempt('198.51.100.41', owner.email, PASSWORD, owner.agent)).status).toBe(200);
+  });
+
   it('a known-browser cookie cannot be forged', async () => {
     const owner = await signUp(t.app);
     for (let i = 0; i < 12; i++) await attempt(`203.0.113.${150 + i}`, owner.email, `spray-${i}-wrong`);

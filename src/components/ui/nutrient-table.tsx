@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import type { Nutrients } from '../../../shared/nutrition';
 import { cx } from '../../lib/cx';
+import { DataTable } from './table';
 import { formatKcal, formatMacroG, formatMg } from '../../lib/format';
 
 interface NutrientRow {
@@ -37,49 +38,40 @@ export interface NutrientTableProps {
   className?: string;
 }
 
+type Row = { key: string; label: ReactNode; part?: boolean; cells: ReactNode[] };
+
 /** Nutrients down the side, one column per amount (per serving, whole dish, per 100 g). */
 export function NutrientTable({ caption, captionHidden, columns, extraRows = [], className }: NutrientTableProps) {
+  const rows: Row[] = [
+    ...NUTRIENT_ROWS.map((n) => ({ key: n.key, label: n.label, part: n.part, cells: columns.map((c) => n.format(c.values[n.key])) })),
+    ...extraRows.map((r) => ({ ...r, part: true })),
+  ];
+  const extra = new Set(extraRows.map((r) => r.key));
   return (
-    <table className={cx('w-full border-collapse text-sm sm:text-base', className)}>
-      <caption className={cx('pb-2 text-left font-bold text-ink', captionHidden && 'sr-only')}>{caption}</caption>
-      <thead>
-        <tr className="border-b-2 border-ink">
-          <th scope="col" className="py-1.5 pr-3 text-left text-sm font-bold text-ink-soft">
-            <span className="sr-only">Nutrient</span>
-          </th>
-          {columns.map((c) => (
-            <th key={c.key} scope="col" className="py-1.5 pl-3 text-right text-sm font-bold whitespace-nowrap text-ink-soft">
-              {c.header}
-            </th>
-          ))}
-        </tr>
-      </thead>
-      <tbody>
-        {NUTRIENT_ROWS.map((row) => (
-          <tr key={row.key} className="border-b border-line">
-            <th scope="row" className={cx('py-1.5 pr-3 text-left', row.part ? 'pl-4 font-semibold text-ink-soft' : 'font-bold text-ink')}>
-              {row.label}
-            </th>
-            {columns.map((c) => (
-              <td key={c.key} className={cx('py-1.5 pl-3 text-right whitespace-nowrap tabular-nums', !row.part && 'font-bold')}>
-                {row.format(c.values[row.key])}
-              </td>
-            ))}
-          </tr>
-        ))}
-        {extraRows.map((row) => (
-          <tr key={row.key} className="border-b border-line last:border-b-0">
-            <th scope="row" className="py-1.5 pr-3 text-left font-semibold text-ink-soft">
-              {row.label}
-            </th>
-            {row.cells.map((cell, i) => (
-              <td key={i} className="py-1.5 pl-3 text-right whitespace-nowrap tabular-nums">
-                {cell}
-              </td>
-            ))}
-          </tr>
-        ))}
-      </tbody>
-    </table>
+    <DataTable<Row>
+      caption={caption}
+      captionHidden={captionHidden}
+      look="plain"
+      className={className}
+      rows={rows}
+      rowKey={(r) => r.key}
+      columns={[
+        {
+          key: 'nutrient',
+          header: <span className="sr-only">Nutrient</span>,
+          rowHeader: true,
+          cell: (r) => r.label,
+          className: (r) => (r.part ? (extra.has(r.key) ? 'font-semibold text-ink-soft' : 'pl-4 font-semibold text-ink-soft') : 'font-bold text-ink'),
+        },
+        ...columns.map((c, i) => ({
+          key: c.key,
+          header: c.header,
+          align: 'right' as const,
+          headerClassName: 'whitespace-nowrap',
+          cell: (r: Row) => r.cells[i],
+          className: (r: Row) => cx('whitespace-nowrap', !r.part && 'font-bold'),
+        })),
+      ]}
+    />
   );
 }

@@ -1,31 +1,17 @@
 /** Amounts of a recipe line and of a dish in words: "2 1/2 cups", "1,850 mL (7.8 cups)". */
+import { kitchenQuantity, measureWord, nearestKitchenFraction } from '../../../shared/kitchen-amounts';
 import { ML_PER_CUP, ML_PER_TBSP, ML_PER_TSP } from '../../../shared/units';
 import { formatNumber } from '../../lib/format';
 import type { UnitSystem } from '../../lib/user';
 
-// Fractions a recipe writes, in eighths and thirds.
-const FRACTIONS: [number, string][] = [
-  [1 / 8, '1/8'],
-  [1 / 4, '1/4'],
-  [1 / 3, '1/3'],
-  [3 / 8, '3/8'],
-  [1 / 2, '1/2'],
-  [5 / 8, '5/8'],
-  [2 / 3, '2/3'],
-  [3 / 4, '3/4'],
-  [7 / 8, '7/8'],
-];
 const FRACTION_TOLERANCE = 0.01;
 
-/** A quantity as a recipe writes it: 2.5 → "2 1/2", 0.333 → "1/3", 1.2 → "1.2". */
+/** A quantity as a recipe writes it, in eighths and thirds: 2.5 → "2 1/2", 0.333 → "1/3"; else a decimal, 1.2 → "1.2". */
 export function formatQuantity(quantity: number): string {
   if (!Number.isFinite(quantity)) return '';
-  const whole = Math.floor(quantity + FRACTION_TOLERANCE);
-  const rest = quantity - whole;
-  if (Math.abs(rest) < FRACTION_TOLERANCE) return formatNumber(whole, 0);
-  const fraction = FRACTIONS.find(([value]) => Math.abs(rest - value) < FRACTION_TOLERANCE);
-  if (fraction) return whole > 0 ? `${formatNumber(whole, 0)} ${fraction[1]}` : fraction[1];
-  return formatNumber(quantity, 2);
+  const nearest = nearestKitchenFraction(quantity, [8, 3]);
+  if (Math.abs(quantity - nearest) >= FRACTION_TOLERANCE) return formatNumber(quantity, 2);
+  return Number.isInteger(nearest) ? formatNumber(nearest, 0) : kitchenQuantity(nearest);
 }
 
 // Unit ids (shared/units.ts) whose written form is not the id itself.
@@ -52,23 +38,11 @@ const INVARIANT = new Set([
   'cm',
   'dozen',
 ]);
-const IRREGULAR: Record<string, string> = {
-  leaf: 'leaves',
-  loaf: 'loaves',
-  inch: 'inches',
-  box: 'boxes',
-  bunch: 'bunches',
-  pinch: 'pinches',
-  dash: 'dashes',
-  batch: 'batches',
-  glass: 'glasses',
-};
-
 /** A unit id in words for a quantity: ("cup", 2) → "cups", ("tbsp", 3) → "tbsp", ("fl-oz", 1) → "fl oz". */
 export function unitWords(unit: string, quantity: number | null): string {
   const text = UNIT_TEXT[unit] ?? unit;
-  if (quantity === null || Math.abs(quantity - 1) < 1e-9 || (quantity > 0 && quantity < 1) || INVARIANT.has(unit)) return text;
-  return IRREGULAR[unit] ?? `${text}s`;
+  if (quantity === null || INVARIANT.has(unit)) return text;
+  return measureWord(text, quantity);
 }
 
 /** The amount a line was read as: "2 1/2 cups", "3 tbsp", "2" (a bare count), or null when it gives none. */

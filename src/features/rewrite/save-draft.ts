@@ -1,7 +1,7 @@
 /** What "Save to my recipe book" sends: the recipe as written (version 1) and the rewrite (version 2). */
 import type { LineInput } from '../../../shared/schemas/analyze';
 import type { RewriteRequest, TargetsInput } from '../../../shared/schemas/rewrite';
-import { commonFoodName, rewrittenLineText } from '../../../shared/rewritten-line-text';
+import { commonFoodName, rewrittenLineText, writtenFoodName } from '../../../shared/rewritten-line-text';
 import { orderedChanges } from './rewrite-words';
 import type { RewriteAnswer } from './rewrite-types';
 import { countOf } from '../../lib/words';
@@ -67,10 +67,14 @@ export function rewrittenLinesOf(answer: RewriteAnswer, written: readonly string
   return rows.sort((a, b) => a.index - b.index).map((r) => r.line);
 }
 
-/** "Lighter rewrite: Beef, ground … → Ground turkey …; less pasta." */
-export function rewriteNote(answer: RewriteAnswer): string {
+/**
+ * "Lighter rewrite: ground beef → part lean ground turkey. 1 amount adjusted.": each swap in the cook's words, the food as their
+ * line names it (`written`, by line index) and the new food's common name, as the rewritten lines say them.
+ */
+export function rewriteNote(answer: RewriteAnswer, written: readonly string[] = []): string {
   const changes = orderedChanges(answer.changes);
-  const swaps = changes.filter((c) => c.swapped).map((c) => `${c.from.name} → ${c.partial ? 'part ' : ''}${c.to.name}`);
+  const fromName = (c: RewriteAnswer['changes'][number]) => (written[c.line] && writtenFoodName(written[c.line])) || commonFoodName(c.from);
+  const swaps = changes.filter((c) => c.swapped).map((c) => `${fromName(c)} → ${c.partial ? 'part ' : ''}${commonFoodName(c.to, c.rule?.label)}`);
   const amounts = changes.filter((c) => !c.swapped).length;
   const parts = [swaps.length > 0 ? swaps.join('; ') : 'No swaps', amounts > 0 ? `${countOf(amounts, 'amount')} adjusted` : ''].filter(Boolean);
   const note = `Lighter rewrite: ${parts.join('. ')}.`;
@@ -78,15 +82,13 @@ export function rewriteNote(answer: RewriteAnswer): string {
 }
 
 export function rewriteDraft(title: string, request: RewriteRequest, answer: RewriteAnswer): RewriteDraft {
+  const written = (request.lines ?? []).map((l) => l.input);
   return {
     title: title.trim(),
     servings: request.servings,
     originalLines: originalLinesOf(request, answer),
-    rewrittenLines: rewrittenLinesOf(
-      answer,
-      (request.lines ?? []).map((l) => l.input),
-    ),
+    rewrittenLines: rewrittenLinesOf(answer, written),
     targets: request.targets,
-    note: rewriteNote(answer),
+    note: rewriteNote(answer, written),
   };
 }

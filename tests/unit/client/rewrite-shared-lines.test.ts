@@ -63,8 +63,12 @@ describe('a shared line in a saved version', () => {
     ]);
   });
 
-  it('names the part swap in the version note', () => {
-    expect(rewriteNote(answer)).toBe(`Lighter rewrite: ${beef.name} → part ${turkey.name}.`);
+  it("names the part swap in the version note in the cook's words, not the catalogue's", () => {
+    expect(rewriteNote(answer, ['1 lb ground beef', '1 large onion, diced', 'a pinch of love'])).toBe(
+      'Lighter rewrite: ground beef → part lean ground turkey.',
+    );
+    // without the written lines, both foods by their common names
+    expect(rewriteNote(answer)).toBe('Lighter rewrite: 80% lean ground beef → part lean ground turkey.');
   });
 });
 

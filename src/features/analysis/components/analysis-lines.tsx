@@ -2,6 +2,7 @@ import { useEffect, useRef, useState, type ReactNode } from 'react';
 import type { AnalyzedLine, FoodSummary } from '../../../../shared/schemas/analyze';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
+import { DataTable } from '../../../components/ui/table';
 import { Spinner } from '../../../components/ui/spinner';
 import { cx } from '../../../lib/cx';
 import { formatGrams, formatKcal, formatMacroG, formatNumber, everydayWeight } from '../../../lib/format';
@@ -41,10 +42,6 @@ export interface AnalysisLinesProps {
   addFoodHref?: string;
 }
 
-// On phones each row is a card: the ingredient and its food across the top, figures in two columns.
-const CELL = 'px-3 py-3 align-top max-md:block max-md:p-0';
-const PHONE_LABEL = 'mb-0.5 block text-xs font-bold tracking-wide text-ink-soft uppercase md:sr-only';
-
 function sourceNote(food: FoodSummary): string {
   return food.source === 'usda-sr28' ? 'About this food' : 'From a label';
 }
@@ -57,19 +54,65 @@ function measureWords(portion: string): string {
     .trim();
 }
 
-function LineRow({
-  line,
-  index,
-  analysed,
-  unitSystem,
+type LineActions = Omit<AnalysisLinesProps, 'lines' | 'analysedLine' | 'stale' | 'totals' | 'unitSystem'>;
+interface Row {
+  line: KitchenLine;
+  index: number;
+  analysed: AnalyzedLine | null;
+}
+
+// A line with no food needs a food first, unless it also gave no amount ("salt to taste").
+function needsAmount({ line, analysed }: Row): boolean {
+  return Boolean(analysed && analysed.grams === 0 && line.grams === undefined && (analysed.food !== null || analysed.parsed.quantity === null));
+}
+
+function IngredientCell({ line, index, analysed }: Row) {
+  return (
+    <span className="flex items-start gap-2">
+      <span aria-hidden="true" className="mt-0.5 font-bold text-oat-500 tabular-nums">
+        {index + 1}.
+      </span>
+      <span className="flex min-w-0 flex-col gap-1">
+        <span className="font-bold break-words text-ink">{line.input}</span>
+        {analysed && analysed.parsed.name && !(analysed.pinned.food && analysed.pinned.grams) && (
+          <span className="text-sm text-ink-soft">
+            Read as “{analysed.parsed.name}”{analysed.parsed.comment ? `, ${analysed.parsed.comment}` : ''}
+          </span>
+        )}
+        {analysed && analysed.warnings.length > 0 && (
+          <ul className="flex flex-col gap-0.5 text-sm font-semibold text-honey-800">
+            {analysed.warnings.map((w) => (
+              <li key={w} className="flex gap-1.5">
+                <span aria-hidden="true">▲</span>
+                <span>{w}</span>
+              </li>
+            ))}
+          </ul>
+        )}
+      </span>
+    </span>
+  );
+}
+
+function AmountCell({ analysed }: Row) {
+  if (!analysed) return <span className="text-ink-soft">…</span>;
+  const amount = formatParsedAmount(analysed.parsed);
+  return (
+    <span className="flex flex-col">
+      <span className="font-semibold tabular-nums">{amount ?? <span className="text-ink-soft">none given</span>}</span>
+      {analysed.portionUsed && <span className="text-sm text-ink-soft">by USDA’s weight for {measureWords(analysed.portionUsed)}</span>}
+    </span>
+  );
+}
+
+function FoodCell({
+  row: { line, index, analysed },
   onChooseFood,
-  onSetGrams,
   onSetRole,
-  onRemove,
   renderFoodSearch,
   foodHref,
   addFoodHref,
-}: Omit<AnalysisLinesProps, 'lines' | 'analysedLine' | 'stale' | 'totals'> & { line: KitchenLine; index: number; analysed: AnalyzedLine | null }) {
+}: Pick<LineActions, 'onChooseFood' | 'onSetRole' | 'renderFoodSearch' | 'foodHref' | 'addFoodHref'> & { row: Row }) {
   const [searching, setSearching] = useState(false);
   const pickerRef = useRef<HTMLSelectElement>(null);
   // Back from a catalogue search, the keyboard lands on the line's food again: searches ended are
@@ -90,226 +133,186 @@ function LineRow({
   const number = index + 1;
   const food = analysed?.food ?? null;
   const shownFood = line.foodId !== undefined ? (picked.find((p) => p.id === line.foodId) ?? food) : food;
-  const amount = analysed ? formatParsedAmount(analysed.parsed) : null;
-  // A line with no food needs a food first, unless it also gave no amount ("salt to taste").
-  const needsAmount = Boolean(analysed && analysed.grams === 0 && line.grams === undefined && (analysed.food !== null || analysed.parsed.quantity === null));
   const checkMatch = Boolean(food && analysed && !analysed.pinned.food && (analysed.checkMatch || analysed.confidence < CHECK_MATCH_BELOW));
   const missingModifier = analysed && !analysed.pinned.food ? analysed.missingModifier : null;
-  const grams = line.grams ?? analysed?.grams ?? null;
 
   function choose(next: FoodSummary | null) {
     if (next) setPicked((list) => [next, ...list.filter((p) => p.id !== next.id)].slice(0, 5));
     onChooseFood(line.key, next);
   }
 
+  if (!analysed && line.foodId === undefined)
+    return (
+      <span className="inline-flex items-center gap-2 text-ink-soft">
+        <Spinner className="size-4" /> Matching…
+      </span>
+    );
   return (
-    <tr className="border-b border-line last:border-b-0 max-md:grid max-md:grid-cols-2 max-md:gap-x-4 max-md:gap-y-3 max-md:rounded-card max-md:border max-md:bg-surface max-md:p-4 max-md:shadow-card md:even:bg-oat-50/60">
-      <th scope="row" className={cx(CELL, 'text-left font-normal max-md:col-span-2 md:w-[24%]')}>
-        <span className="flex items-start gap-2">
-          <span aria-hidden="true" className="mt-0.5 font-bold text-oat-500 tabular-nums">
-            {number}.
-          </span>
-          <span className="flex min-w-0 flex-col gap-1">
-            <span className="font-bold break-words text-ink">{line.input}</span>
-            {analysed && analysed.parsed.name && !(analysed.pinned.food && analysed.pinned.grams) && (
-              <span className="text-sm text-ink-soft">
-                Read as “{analysed.parsed.name}”{analysed.parsed.comment ? `, ${analysed.parsed.comment}` : ''}
-              </span>
-            )}
-            {analysed && analysed.warnings.length > 0 && (
-              <ul className="flex flex-col gap-0.5 text-sm font-semibold text-honey-800">
-                {analysed.warnings.map((w) => (
-                  <li key={w} className="flex gap-1.5">
-                    <span aria-hidden="true">▲</span>
-                    <span>{w}</span>
-                  </li>
-                ))}
-              </ul>
-            )}
-          </span>
-        </span>
-      </th>
-
-      <td className={cx(CELL, 'max-md:order-3 md:w-[9%]')}>
-        <span className={PHONE_LABEL}>Amount</span>
-        {analysed ? (
-          <span className="flex flex-col">
-            <span className="font-semibold tabular-nums">{amount ?? <span className="text-ink-soft">none given</span>}</span>
-            {analysed.portionUsed && <span className="text-sm text-ink-soft">by USDA’s weight for {measureWords(analysed.portionUsed)}</span>}
-          </span>
-        ) : (
-          <span className="text-ink-soft">…</span>
-        )}
-      </td>
-
-      <td className={cx(CELL, 'max-md:order-2 max-md:col-span-2 md:w-[31%]')}>
-        <span className={PHONE_LABEL}>Food</span>
-        {analysed || line.foodId !== undefined ? (
-          <div className="flex flex-col gap-1.5">
-            {searching && renderFoodSearch ? (
-              renderFoodSearch({
-                label: `Find the food for line ${number}`,
-                onChoose: (f) => {
-                  endSearch();
-                  choose(f);
-                },
-                onClose: endSearch,
-              })
-            ) : (
-              <LineFoodPicker
-                ref={pickerRef}
-                label={`Food for line ${number}`}
-                food={shownFood}
-                options={[...picked, ...(analysed?.alternatives ?? [])]}
-                pinned={line.foodId !== undefined}
-                onChoose={choose}
-                onSearch={renderFoodSearch ? () => setSearching(true) : undefined}
-              />
-            )}
-            <span className="flex flex-wrap items-center gap-x-2 gap-y-1 text-sm text-ink-soft">
-              {shownFood && (
-                <span>
-                  {foodHref ? (
-                    <a href={foodHref(shownFood.id)} target="_blank" rel="noreferrer" className="underline-offset-2 hover:underline">
-                      {sourceNote(shownFood)}
-                      <span className="sr-only"> (food details, opens in a new tab)</span>
-                    </a>
-                  ) : (
-                    sourceNote(shownFood)
-                  )}
-                </span>
-              )}
-              {line.foodId !== undefined && <Badge>Your choice</Badge>}
-              {checkMatch && analysed && (
-                <Badge tone="honey" title={`Hearthswap is ${Math.round(analysed.confidence * 100)}% sure of this match`}>
-                  Check this match
-                  <span className="sr-only">: Hearthswap is {Math.round(analysed.confidence * 100)}% sure</span>
-                </Badge>
-              )}
-              {analysed && !food && <Badge tone="beet">Not counted until a food is chosen</Badge>}
-              {missingModifier && addFoodHref && (
-                <a href={addFoodHref} className="font-semibold text-accent-strong underline-offset-2 hover:underline">
-                  Add the {missingModifier} one from its label
-                </a>
-              )}
-            </span>
-            {analysed?.role && food && onSetRole && (
-              <LineRolePicker
-                label={`What line ${number} does in the dish`}
-                inferred={analysed.role}
-                chosen={line.role}
-                onChoose={(role) => onSetRole(line.key, role)}
-              />
-            )}
-          </div>
-        ) : (
-          <span className="inline-flex items-center gap-2 text-ink-soft">
-            <Spinner className="size-4" /> Matching…
-          </span>
-        )}
-      </td>
-
-      <td className={cx(CELL, 'max-md:order-4 md:w-[17%]')}>
-        <span className={PHONE_LABEL}>Weight</span>
-        {needsAmount && <span className="mb-1 block text-sm font-bold text-honey-800">Set an amount</span>}
-        <LineGramsField
-          grams={grams}
-          label={`Grams of line ${number}`}
-          unitSystem={unitSystem}
-          needsAmount={needsAmount}
-          onCommit={(g) => onSetGrams(line.key, g)}
+    <div className="flex flex-col gap-1.5">
+      {searching && renderFoodSearch ? (
+        renderFoodSearch({
+          label: `Find the food for line ${number}`,
+          onChoose: (f) => {
+            endSearch();
+            choose(f);
+          },
+          onClose: endSearch,
+        })
+      ) : (
+        <LineFoodPicker
+          ref={pickerRef}
+          label={`Food for line ${number}`}
+          food={shownFood}
+          options={[...picked, ...(analysed?.alternatives ?? [])]}
+          pinned={line.foodId !== undefined}
+          onChoose={choose}
+          onSearch={renderFoodSearch ? () => setSearching(true) : undefined}
         />
-        {line.grams !== undefined && (
-          <button
-            type="button"
-            onClick={() => onSetGrams(line.key, null)}
-            className="mt-1 text-sm font-semibold text-accent-strong underline-offset-2 hover:underline"
-          >
-            Use the recipe’s amount
-          </button>
-        )}
-      </td>
-
-      <td className={cx(CELL, 'text-right tabular-nums max-md:order-5 max-md:text-left md:w-[8%]')}>
-        <span className={PHONE_LABEL}>Energy</span>
-        <span className="font-bold whitespace-nowrap">{analysed ? formatKcal(analysed.nutrients.kcal) : '…'}</span>
-      </td>
-      <td className={cx(CELL, 'text-right tabular-nums max-md:order-6 max-md:text-left md:w-[8%]')}>
-        <span className={PHONE_LABEL}>Protein</span>
-        <span className="font-bold whitespace-nowrap">{analysed ? formatMacroG(analysed.nutrients.proteinG) : '…'}</span>
-      </td>
-      <td className={cx(CELL, 'text-right max-md:order-7 max-md:col-span-2 md:w-[2%]')}>
-        <Button variant="quiet" size="sm" onClick={() => onRemove(line.key)} className="text-beet-700 max-md:px-0">
-          <span aria-hidden="true" className="text-lg leading-none md:block">
-            ×
+      )}
+      <span className="flex flex-wrap items-center gap-x-2 gap-y-1 text-sm text-ink-soft">
+        {shownFood && (
+          <span>
+            {foodHref ? (
+              <a href={foodHref(shownFood.id)} target="_blank" rel="noreferrer" className="underline-offset-2 hover:underline">
+                {sourceNote(shownFood)}
+                <span className="sr-only"> (food details, opens in a new tab)</span>
+              </a>
+            ) : (
+              sourceNote(shownFood)
+            )}
           </span>
-          <span className="md:sr-only">Remove line {number}</span>
-        </Button>
-      </td>
-    </tr>
+        )}
+        {line.foodId !== undefined && <Badge>Your choice</Badge>}
+        {checkMatch && analysed && (
+          <Badge tone="honey" title={`Hearthswap is ${Math.round(analysed.confidence * 100)}% sure of this match`}>
+            Check this match
+            <span className="sr-only">: Hearthswap is {Math.round(analysed.confidence * 100)}% sure</span>
+          </Badge>
+        )}
+        {analysed && !food && <Badge tone="beet">Not counted until a food is chosen</Badge>}
+        {missingModifier && addFoodHref && (
+          <a href={addFoodHref} className="font-semibold text-accent-strong underline-offset-2 hover:underline">
+            Add the {missingModifier} one from its label
+          </a>
+        )}
+      </span>
+      {analysed?.role && food && onSetRole && (
+        <LineRolePicker
+          label={`What line ${number} does in the dish`}
+          inferred={analysed.role}
+          chosen={line.role}
+          onChoose={(role) => onSetRole(line.key, role)}
+        />
+      )}
+    </div>
   );
 }
 
-/** Every line of the recipe as the server read, matched and weighed it, with what the cook can change. */
-export function AnalysisLines({ lines, analysedLine, unitSystem, stale, totals, ...actions }: AnalysisLinesProps) {
+/** Every line of the recipe as the server read, matched and weighed it, with what the cook can change; a card per line on a phone. */
+export function AnalysisLines({ lines, analysedLine, unitSystem, stale, totals, onSetGrams, onRemove, ...foodActions }: AnalysisLinesProps) {
+  const rows: Row[] = lines.map((line, index) => ({ line, index, analysed: analysedLine(line.key) }));
+  const figure = (value: (a: AnalyzedLine) => string) => (row: Row) => (
+    <span className="font-bold whitespace-nowrap">{row.analysed ? value(row.analysed) : '…'}</span>
+  );
   return (
     <div className={cx('transition-opacity', stale && 'opacity-80')}>
-      <table className="w-full border-collapse text-base max-md:block md:overflow-hidden md:rounded-card md:border md:border-line md:bg-surface">
-        <caption className="sr-only">Ingredient lines: amount read, food matched, weight, energy and protein</caption>
-        <thead className="max-md:hidden">
-          <tr className="border-b border-line bg-oat-100 text-sm">
-            <th scope="col" className="px-3 py-2.5 text-left font-bold">
-              Ingredient
-            </th>
-            <th scope="col" className="px-3 py-2.5 text-left font-bold">
-              Amount
-            </th>
-            <th scope="col" className="px-3 py-2.5 text-left font-bold">
-              Food
-            </th>
-            <th scope="col" className="px-3 py-2.5 text-left font-bold">
-              Weight
-            </th>
-            <th scope="col" className="px-3 py-2.5 text-right font-bold">
-              Energy
-            </th>
-            <th scope="col" className="px-3 py-2.5 text-right font-bold">
-              Protein
-            </th>
-            <th scope="col" className="px-3 py-2.5">
-              <span className="sr-only">Remove</span>
-            </th>
-          </tr>
-        </thead>
-        <tbody className="max-md:flex max-md:flex-col max-md:gap-3">
-          {lines.map((line, index) => (
-            <LineRow key={line.key} line={line} index={index} analysed={analysedLine(line.key)} unitSystem={unitSystem} {...actions} />
-          ))}
-        </tbody>
-        {totals && (
-          <tfoot className="border-t-2 border-line-strong bg-oat-100 max-md:mt-3 max-md:block max-md:rounded-card max-md:border-2 max-md:p-4">
-            <tr className="max-md:grid max-md:grid-cols-3 max-md:gap-3">
-              <th scope="row" colSpan={3} className="px-3 py-3 text-left font-extrabold max-md:col-span-3 max-md:block max-md:p-0">
-                Whole dish
-              </th>
-              <td className="px-3 py-3 tabular-nums max-md:block max-md:p-0">
-                <span className={PHONE_LABEL}>Weight</span>
-                <span className="block font-bold">{formatGrams(totals.grams)}</span>
-                {everydayWeight(totals.grams, unitSystem) && <span className="block text-sm text-ink-soft">{everydayWeight(totals.grams, unitSystem)}</span>}
-              </td>
-              <td className="px-3 py-3 text-right font-bold whitespace-nowrap tabular-nums max-md:block max-md:p-0 max-md:text-left">
-                <span className={PHONE_LABEL}>Energy</span>
-                {formatKcal(totals.kcal)}
-              </td>
-              <td className="px-3 py-3 text-right font-bold whitespace-nowrap tabular-nums max-md:block max-md:p-0 max-md:text-left">
-                <span className={PHONE_LABEL}>Protein</span>
-                {formatNumber(totals.proteinG, 0)} g
-              </td>
-              <td className="max-md:hidden" />
-            </tr>
-          </tfoot>
-        )}
-      </table>
+      <DataTable<Row>
+        caption="Ingredient lines: amount read, food matched, weight, energy and protein"
+        captionHidden
+        density="snug"
+        cardsBelow="md"
+        tableClassName="text-base"
+        rows={rows}
+        rowKey={(row) => row.line.key}
+        columns={[
+          { key: 'ingredient', header: 'Ingredient', rowHeader: true, className: 'py-3 font-normal md:w-[24%]', cell: (row) => <IngredientCell {...row} /> },
+          { key: 'amount', header: 'Amount', cardOrder: 3, className: 'py-3 md:w-[9%]', cell: (row) => <AmountCell {...row} /> },
+          {
+            key: 'food',
+            header: 'Food',
+            cardOrder: 2,
+            cardWide: true,
+            className: 'py-3 md:w-[31%]',
+            cell: (row) => <FoodCell key={row.line.key} row={row} {...foodActions} />,
+          },
+          {
+            key: 'weight',
+            header: 'Weight',
+            cardOrder: 4,
+            className: 'py-3 md:w-[17%]',
+            cell: (row) => (
+              <>
+                {needsAmount(row) && <span className="mb-1 block text-sm font-bold text-honey-800">Set an amount</span>}
+                <LineGramsField
+                  grams={row.line.grams ?? row.analysed?.grams ?? null}
+                  label={`Grams of line ${row.index + 1}`}
+                  unitSystem={unitSystem}
+                  needsAmount={needsAmount(row)}
+                  onCommit={(g) => onSetGrams(row.line.key, g)}
+                />
+                {row.line.grams !== undefined && (
+                  <button
+                    type="button"
+                    onClick={() => onSetGrams(row.line.key, null)}
+                    className="mt-1 text-sm font-semibold text-accent-strong underline-offset-2 hover:underline"
+                  >
+                    Use the recipe’s amount
+                  </button>
+                )}
+              </>
+            ),
+          },
+          { key: 'kcal', header: 'Energy', align: 'right', cardOrder: 5, className: 'py-3 md:w-[8%]', cell: figure((a) => formatKcal(a.nutrients.kcal)) },
+          {
+            key: 'protein',
+            header: 'Protein',
+            align: 'right',
+            cardOrder: 6,
+            className: 'py-3 md:w-[8%]',
+            cell: figure((a) => formatMacroG(a.nutrients.proteinG)),
+          },
+          {
+            key: 'remove',
+            header: <span className="sr-only">Remove</span>,
+            align: 'right',
+            cardOrder: 7,
+            cardWide: true,
+            cardLabel: false,
+            className: 'py-3 md:w-[2%]',
+            cell: (row) => (
+              <Button variant="quiet" size="sm" onClick={() => onRemove(row.line.key)} className="text-beet-700 max-md:px-0">
+                <span aria-hidden="true" className="text-lg leading-none md:block">
+                  ×
+                </span>
+                <span className="md:sr-only">Remove line {row.index + 1}</span>
+              </Button>
+            ),
+          },
+        ]}
+        footer={
+          totals
+            ? [
+                {
+                  key: 'dish',
+                  label: <span className="font-extrabold">Whole dish</span>,
+                  className: 'bg-oat-100',
+                  cells: {
+                    weight: (
+                      <>
+                        <span className="block font-bold">{formatGrams(totals.grams)}</span>
+                        {everydayWeight(totals.grams, unitSystem) && (
+                          <span className="block text-sm text-ink-soft">{everydayWeight(totals.grams, unitSystem)}</span>
+                        )}
+                      </>
+                    ),
+                    kcal: <span className="font-bold whitespace-nowrap">{formatKcal(totals.kcal)}</span>,
+                    protein: <span className="font-bold whitespace-nowrap">{formatNumber(totals.proteinG, 0)} g</span>,
+                  },
+                },
+              ]
+            : undefined
+        }
+      />
     </div>
   );
 }

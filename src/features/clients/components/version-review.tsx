@@ -1,8 +1,10 @@
 import type { VersionDetail } from '../../../../shared/schemas/recipes';
 import { NutrientTable } from '../../../components/ui/nutrient-table';
+import { DataTable } from '../../../components/ui/table';
 import { Stat } from '../../../components/ui/stat';
 import { formatKcal, formatMacroG, formatMg, formatNumber, formatProteinDensity, formatWeight } from '../../../lib/format';
 import type { UnitSystem } from '../../../lib/user';
+import { versionNote } from '../../../lib/version-kinds';
 import type { ClientTargets } from '../api/clients';
 import { meetsPerMeal } from '../targets-form';
 
@@ -25,6 +27,7 @@ export function VersionReview({ version, unitSystem, clientTargets }: { version:
   const density = per.kcal > 0 ? (per.proteinG * 100) / per.kcal : null;
   const servings = version.servings;
   const meets = meetsPerMeal(per, clientTargets);
+  const note = versionNote(version);
 
   return (
     <div className="flex flex-col gap-6">
@@ -49,10 +52,10 @@ export function VersionReview({ version, unitSystem, clientTargets }: { version:
         />
       </dl>
 
-      {version.note && (
+      {note && (
         <p className="rounded-field border-l-4 border-accent bg-oat-100 px-4 py-3 text-ink">
           <span className="font-bold">Their note: </span>
-          {version.note}
+          {note}
         </p>
       )}
       {version.targets && <TargetsUsed targets={version.targets} />}
@@ -61,54 +64,21 @@ export function VersionReview({ version, unitSystem, clientTargets }: { version:
         <h2 id="review-lines" className="text-xl font-extrabold text-ink">
           Ingredients
         </h2>
-        <div className="hidden overflow-x-auto rounded-card border border-line bg-surface sm:block">
-          <table className="w-full border-collapse text-base">
-            <caption className="sr-only">Ingredient lines with weight, energy and protein for the whole dish</caption>
-            <thead>
-              <tr className="border-b border-line bg-oat-100 text-left">
-                <th scope="col" className="px-4 py-2.5 font-bold">
-                  Line
-                </th>
-                <th scope="col" className="px-4 py-2.5 font-bold">
-                  Food
-                </th>
-                <th scope="col" className="px-4 py-2.5 text-right font-bold">
-                  Weight
-                </th>
-                <th scope="col" className="px-4 py-2.5 text-right font-bold">
-                  Energy
-                </th>
-                <th scope="col" className="px-4 py-2.5 text-right font-bold">
-                  Protein
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {version.lines.map((line, index) => (
-                <tr key={index} className="border-b border-line align-top last:border-b-0 even:bg-oat-50">
-                  <th scope="row" className="px-4 py-2.5 text-left font-semibold">
-                    {line.input}
-                  </th>
-                  <td className="px-4 py-2.5 text-ink-soft">{line.foodName ?? 'Not matched'}</td>
-                  <td className="px-4 py-2.5 text-right whitespace-nowrap tabular-nums">{formatWeight(line.grams, unitSystem)}</td>
-                  <td className="px-4 py-2.5 text-right whitespace-nowrap tabular-nums">{formatKcal(line.nutrients.kcal)}</td>
-                  <td className="px-4 py-2.5 text-right whitespace-nowrap tabular-nums">{formatMacroG(line.nutrients.proteinG)}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
-        <ul aria-label="Ingredient lines" className="flex flex-col gap-2 sm:hidden">
-          {version.lines.map((line, index) => (
-            <li key={index} className="flex flex-col gap-0.5 rounded-field border border-line bg-surface px-3.5 py-2.5">
-              <span className="font-semibold text-ink">{line.input}</span>
-              {line.foodName && line.foodName !== line.input && <span className="text-sm text-ink-soft">{line.foodName}</span>}
-              <span className="text-sm tabular-nums">
-                {formatWeight(line.grams, unitSystem)} · {formatKcal(line.nutrients.kcal)} · {formatMacroG(line.nutrients.proteinG)} protein
-              </span>
-            </li>
-          ))}
-        </ul>
+        <DataTable
+          caption="Ingredient lines with weight, energy and protein for the whole dish"
+          captionHidden
+          cardsBelow="sm"
+          cardColumns={3}
+          rows={version.lines}
+          rowKey={(_, i) => i}
+          columns={[
+            { key: 'line', header: 'Line', rowHeader: true, className: 'font-semibold', cell: (line) => line.input },
+            { key: 'food', header: 'Food', cardWide: true, className: 'text-ink-soft', cell: (line) => line.foodName ?? 'Not matched' },
+            { key: 'weight', header: 'Weight', align: 'right', className: 'whitespace-nowrap', cell: (line) => formatWeight(line.grams, unitSystem) },
+            { key: 'kcal', header: 'Energy', align: 'right', className: 'whitespace-nowrap', cell: (line) => formatKcal(line.nutrients.kcal) },
+            { key: 'protein', header: 'Protein', align: 'right', className: 'whitespace-nowrap', cell: (line) => formatMacroG(line.nutrients.proteinG) },
+          ]}
+        />
         <p className="text-sm text-ink-soft">Weights and figures are for the whole dish.</p>
       </section>
 

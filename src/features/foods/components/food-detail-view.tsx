@@ -1,12 +1,14 @@
 import type { FoodDetail } from '../../../../shared/schemas/analyze';
 import { DIET_FLAGS, type DietFlag } from '../../../../shared/food';
-import { kcalPerGram, nutrientsForGrams, proteinPer100Kcal } from '../../../../shared/nutrition';
+import { kcalPerGram, nutrientsForGrams, proteinPer100Kcal, type Nutrients } from '../../../../shared/nutrition';
 import { ML_PER_CUP } from '../../../../shared/units';
 import { Badge } from '../../../components/ui/badge';
 import { Card } from '../../../components/ui/card';
 import { NutrientTable } from '../../../components/ui/nutrient-table';
+import { DataTable } from '../../../components/ui/table';
 import { Stat } from '../../../components/ui/stat';
 import { formatEnergyDensity, formatGrams, formatKcal, formatMacroG, formatMg, formatNumber, formatWeight } from '../../../lib/format';
+import { cx } from '../../../lib/cx';
 import type { UnitSystem } from '../../../lib/user';
 import { DIET_WORDS, foodGroupWords, referenceNumber, roleWords, sourceWords } from '../food-words';
 
@@ -14,47 +16,59 @@ function densityExample(gPerMl: number, unitSystem: UnitSystem): string {
   return unitSystem === 'us' ? `1 cup weighs about ${formatGrams(gPerMl * ML_PER_CUP)}` : `100 mL weighs about ${formatGrams(gPerMl * 100)}`;
 }
 
+type Portion = FoodDetail['portions'][number];
+
+const PORTION_FIGURES: { key: keyof Nutrients; header: string; format: (value: number) => string; bold?: boolean }[] = [
+  { key: 'kcal', header: 'Energy', format: formatKcal, bold: true },
+  { key: 'proteinG', header: 'Protein', format: formatMacroG, bold: true },
+  { key: 'carbsG', header: 'Carbs', format: formatMacroG },
+  { key: 'fiberG', header: 'Fiber', format: formatMacroG },
+  { key: 'sugarG', header: 'Sugars', format: formatMacroG },
+  { key: 'fatG', header: 'Fat', format: formatMacroG },
+  { key: 'satFatG', header: 'Sat. fat', format: formatMacroG },
+  { key: 'sodiumMg', header: 'Sodium', format: formatMg },
+];
+
 function PortionsTable({ food, unitSystem }: { food: FoodDetail; unitSystem: UnitSystem }) {
-  const headers = ['Weight', 'Energy', 'Protein', 'Carbs', 'Fiber', 'Sugars', 'Fat', 'Sat. fat', 'Sodium'];
+  const figures = (p: Portion) => nutrientsForGrams(food.per100g, p.grams);
   return (
-    <div className="overflow-x-auto rounded-field border border-line bg-surface" tabIndex={0} role="region" aria-label="Household measures, scrolls sideways">
-      <table className="w-full min-w-[48rem] border-collapse text-sm sm:text-base">
-        <caption className="sr-only">Each household measure of {food.name}: its weight and nutrients</caption>
-        <thead>
-          <tr className="border-b border-line bg-oat-100">
-            <th scope="col" className="sticky left-0 z-10 bg-oat-100 px-3 py-2 text-left font-bold">
-              Measure
-            </th>
-            {headers.map((h) => (
-              <th key={h} scope="col" className="px-3 py-2 text-right font-bold whitespace-nowrap">
-                {h}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {food.portions.map((p, i) => {
-            const n = nutrientsForGrams(food.per100g, p.grams);
-            return (
-              <tr key={`${p.label}-${i}`} className="border-b border-line last:border-b-0">
-                <th scope="row" className="sticky left-0 z-10 max-w-48 bg-surface px-3 py-2 text-left font-semibold">
-                  {p.label}
-                </th>
-                <td className="px-3 py-2 text-right tabular-nums whitespace-nowrap">{formatWeight(p.grams, unitSystem)}</td>
-                <td className="px-3 py-2 text-right font-bold tabular-nums whitespace-nowrap">{formatKcal(n.kcal)}</td>
-                <td className="px-3 py-2 text-right font-bold tabular-nums">{formatMacroG(n.proteinG)}</td>
-                <td className="px-3 py-2 text-right tabular-nums">{formatMacroG(n.carbsG)}</td>
-                <td className="px-3 py-2 text-right tabular-nums">{formatMacroG(n.fiberG)}</td>
-                <td className="px-3 py-2 text-right tabular-nums">{formatMacroG(n.sugarG)}</td>
-                <td className="px-3 py-2 text-right tabular-nums">{formatMacroG(n.fatG)}</td>
-                <td className="px-3 py-2 text-right tabular-nums">{formatMacroG(n.satFatG)}</td>
-                <td className="px-3 py-2 text-right tabular-nums">{formatMg(n.sodiumMg)}</td>
-              </tr>
-            );
-          })}
-        </tbody>
-      </table>
-    </div>
+    <DataTable<Portion>
+      caption={`Each household measure of ${food.name}: its weight and nutrients`}
+      captionHidden
+      density="snug"
+      striped={false}
+      scrollLabel="Household measures, scrolls sideways"
+      className="rounded-field"
+      tableClassName="min-w-[48rem]"
+      rows={food.portions}
+      rowKey={(p, i) => `${p.label}-${i}`}
+      columns={[
+        {
+          key: 'measure',
+          header: 'Measure',
+          rowHeader: true,
+          headerClassName: 'sticky left-0 z-10 bg-oat-100',
+          className: 'sticky left-0 z-10 max-w-48 bg-surface font-semibold',
+          cell: (p) => p.label,
+        },
+        {
+          key: 'weight',
+          header: 'Weight',
+          align: 'right',
+          headerClassName: 'whitespace-nowrap',
+          className: 'whitespace-nowrap',
+          cell: (p) => formatWeight(p.grams, unitSystem),
+        },
+        ...PORTION_FIGURES.map((f) => ({
+          key: f.key,
+          header: f.header,
+          align: 'right' as const,
+          headerClassName: 'whitespace-nowrap',
+          className: cx('whitespace-nowrap', f.bold && 'font-bold'),
+          cell: (p: Portion) => f.format(figures(p)[f.key]),
+        })),
+      ]}
+    />
   );
 }
 

@@ -1,7 +1,9 @@
+import { DataTable } from '../../../components/ui/table';
 import { Badge } from '../../../components/ui/badge';
 import { formatGrams } from '../../../lib/format';
 import type { PrepWeight } from '../../../../shared/schemas/prep';
 import { portionsWord } from '../prep-words';
+import { foodWords } from '../../../lib/shopping-items';
 
 export interface WeightsTableProps {
   perPortion: PrepWeight[];
@@ -21,51 +23,55 @@ function gramsCell(weight: PrepWeight | undefined) {
 export function WeightsTable({ perPortion, batch, portions, compact = false }: WeightsTableProps) {
   const totalPortion = perPortion.reduce((sum, w) => sum + w.grams, 0);
   const totalBatch = batch.reduce((sum, w) => sum + w.grams, 0);
-  const cell = compact ? 'px-2 py-1' : 'px-3 py-2.5 sm:px-4';
   return (
-    <div className="overflow-x-auto rounded-card border border-line bg-surface print:overflow-visible print:rounded-none print:border-0">
-      <table className="w-full border-collapse text-sm sm:text-base">
-        <caption className="sr-only">Weights in grams, line for line: one portion and the whole batch of {portionsWord(portions)}</caption>
-        <thead>
-          <tr className="border-b border-line bg-oat-100 print:bg-transparent">
-            <th scope="col" className={`${cell} text-left font-bold`}>
-              Ingredient
-            </th>
-            <th scope="col" className={`${cell} text-right font-bold`}>
-              Each portion
-            </th>
-            <th scope="col" className={`${cell} text-right font-bold`}>
+    <DataTable
+      caption={`Weights in grams, line for line: one portion and the whole batch of ${portionsWord(portions)}`}
+      captionHidden
+      density={compact ? 'tight' : 'snug'}
+      className="print:overflow-visible print:rounded-none print:border-0"
+      rowClassName={() => 'print:even:bg-transparent'}
+      rows={perPortion}
+      rowKey={(_, i) => i}
+      columns={[
+        {
+          key: 'food',
+          header: 'Ingredient',
+          rowHeader: true,
+          className: 'font-semibold sm:px-4',
+          cell: (line) => (
+            <>
+              <span className="mr-1.5" title={line.food.id === null ? undefined : line.food.name}>
+                {foodWords(line.food)}
+              </span>
+              {line.food.id === null && (
+                <Badge tone="honey" title="No catalogue food matched this line; it is not in the nutrition figures.">
+                  no match
+                </Badge>
+              )}
+            </>
+          ),
+        },
+        { key: 'portion', header: 'Each portion', align: 'right', className: 'font-extrabold whitespace-nowrap sm:px-4', cell: (line) => gramsCell(line) },
+        {
+          key: 'batch',
+          header: (
+            <>
               Whole batch
               <span className="block text-xs font-semibold text-ink-soft">{portionsWord(portions)}</span>
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {perPortion.map((line, i) => (
-            <tr key={i} className="border-b border-line last:border-b-0 even:bg-oat-50 print:even:bg-transparent">
-              <th scope="row" className={`${cell} text-left font-semibold`}>
-                <span className="mr-1.5">{line.food.name}</span>
-                {line.food.id === null && (
-                  <Badge tone="honey" title="No catalogue food matched this line; it is not in the nutrition figures.">
-                    no match
-                  </Badge>
-                )}
-              </th>
-              <td className={`${cell} text-right font-extrabold whitespace-nowrap tabular-nums`}>{gramsCell(line)}</td>
-              <td className={`${cell} text-right whitespace-nowrap tabular-nums`}>{gramsCell(batch[i])}</td>
-            </tr>
-          ))}
-        </tbody>
-        <tfoot className="border-t-2 border-line-strong">
-          <tr>
-            <th scope="row" className={`${cell} text-left font-bold`}>
-              All lines
-            </th>
-            <td className={`${cell} text-right font-extrabold whitespace-nowrap tabular-nums`}>{formatGrams(totalPortion)}</td>
-            <td className={`${cell} text-right font-bold whitespace-nowrap tabular-nums`}>{formatGrams(totalBatch)}</td>
-          </tr>
-        </tfoot>
-      </table>
-    </div>
+            </>
+          ),
+          align: 'right',
+          className: 'whitespace-nowrap sm:px-4',
+          cell: (_, i) => gramsCell(batch[i]),
+        },
+      ]}
+      footer={[
+        {
+          key: 'all',
+          label: 'All lines',
+          cells: { portion: <span className="font-extrabold">{formatGrams(totalPortion)}</span>, batch: formatGrams(totalBatch) },
+        },
+      ]}
+    />
   );
 }

@@ -1,6 +1,6 @@
-import type { Nutrients } from '../../../../shared/nutrition';
 import type { VersionDetail } from '../../../../shared/schemas/recipes';
 import { Badge, type BadgeTone } from '../../../components/ui/badge';
+import { DataTable, headerWithUnit } from '../../../components/ui/table';
 import { Card } from '../../../components/ui/card';
 import { NUTRIENT_ROWS } from '../../../components/ui/nutrient-table';
 import { cx } from '../../../lib/cx';
@@ -82,67 +82,65 @@ function NutrientDifferences({ a, b }: { a: VersionDetail; b: VersionDetail }) {
           direction: volumeChange > 0 ? 'more' : 'less',
           tone: 'neutral',
         };
+  type Row = { key: string; label: string; part?: boolean; before: string; after: string; change: NutrientChange };
+  const rows: Row[] = [
+    ...NUTRIENT_ROWS.map((row) => ({
+      key: row.key,
+      label: row.label,
+      part: row.part,
+      before: row.format(a.perServing[row.key]),
+      after: row.format(b.perServing[row.key]),
+      change: nutrientChange(row.key, a.perServing[row.key], b.perServing[row.key], row.format),
+    })),
+    { key: 'volume', label: 'Volume', part: true, before: `${formatNumber(volumeA, 0)} mL`, after: `${formatNumber(volumeB, 0)} mL`, change: volumeChip },
+  ];
   return (
-    <div className="@container overflow-x-auto">
-      <table className="w-full border-collapse text-sm @md:text-base">
-        <caption className="sr-only">Nutrients per serving, before and after, with the difference</caption>
-        <thead>
-          <tr className="border-b-2 border-ink text-sm text-ink-soft">
-            <th scope="col" className="py-1.5 pr-2 text-left @md:pr-3 font-bold">
-              Per serving
-            </th>
-            <th scope="col" className="px-2 py-1.5 @md:px-3 text-right font-bold">
-              v{a.number}
-            </th>
-            <th scope="col" className="px-2 py-1.5 text-right font-bold @md:px-3">
+    <DataTable<Row>
+      caption="Nutrients per serving, before and after, with the difference"
+      captionHidden
+      look="plain"
+      className="@container"
+      tableClassName="@md:text-base"
+      rows={rows}
+      rowKey={(r) => r.key}
+      columns={[
+        {
+          key: 'label',
+          header: 'Per serving',
+          rowHeader: true,
+          cell: (r) => r.label,
+          className: (r) => (r.key === 'volume' ? 'font-semibold text-ink-soft' : r.part ? 'pl-4 font-semibold text-ink-soft' : 'font-bold text-ink'),
+        },
+        { key: 'a', header: `v${a.number}`, align: 'right', className: 'whitespace-nowrap', cell: (r) => r.before },
+        {
+          key: 'b',
+          header: (
+            <>
               v{b.number}
               <span className="@md:hidden"> and change</span>
-            </th>
-            <th scope="col" className="hidden py-1.5 pl-3 text-right font-bold @md:table-cell">
-              Difference
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {NUTRIENT_ROWS.map((row) => {
-            const key = row.key as keyof Nutrients;
-            const change = nutrientChange(key, a.perServing[key], b.perServing[key], row.format);
-            return (
-              <tr key={row.key} className="border-b border-line">
-                <th scope="row" className={cx('py-1.5 pr-2 text-left @md:pr-3', row.part ? 'pl-4 font-semibold text-ink-soft' : 'font-bold text-ink')}>
-                  {row.label}
-                </th>
-                <td className="px-2 py-1.5 @md:px-3 text-right whitespace-nowrap tabular-nums">{row.format(a.perServing[key])}</td>
-                <td className="px-2 py-1.5 text-right font-bold whitespace-nowrap tabular-nums @md:px-3">
-                  {row.format(b.perServing[key])}
-                  <span className="mt-0.5 block @md:hidden">
-                    <ChangeChip change={change} />
-                  </span>
-                </td>
-                <td className="hidden py-1.5 pl-3 text-right @md:table-cell">
-                  <ChangeChip change={change} />
-                </td>
-              </tr>
-            );
-          })}
-          <tr>
-            <th scope="row" className="py-1.5 pr-2 text-left @md:pr-3 font-semibold text-ink-soft">
-              Volume
-            </th>
-            <td className="px-2 py-1.5 @md:px-3 text-right whitespace-nowrap tabular-nums">{formatNumber(volumeA, 0)} mL</td>
-            <td className="px-2 py-1.5 text-right whitespace-nowrap tabular-nums @md:px-3">
-              {formatNumber(volumeB, 0)} mL
+            </>
+          ),
+          align: 'right',
+          className: (r) => cx('whitespace-nowrap', r.key !== 'volume' && 'font-bold'),
+          cell: (r) => (
+            <>
+              {r.after}
               <span className="mt-0.5 block @md:hidden">
-                <ChangeChip change={volumeChip} />
+                <ChangeChip change={r.change} />
               </span>
-            </td>
-            <td className="hidden py-1.5 pl-3 text-right @md:table-cell">
-              <ChangeChip change={volumeChip} />
-            </td>
-          </tr>
-        </tbody>
-      </table>
-    </div>
+            </>
+          ),
+        },
+        {
+          key: 'difference',
+          header: 'Difference',
+          align: 'right',
+          headerClassName: 'hidden @md:table-cell',
+          className: 'hidden @md:table-cell',
+          cell: (r) => <ChangeChip change={r.change} />,
+        },
+      ]}
+    />
   );
 }
 
@@ -190,11 +188,6 @@ function lineDelta(change: LineChange, a: VersionDetail, b: VersionDetail, key: 
   return nutrientChange(key, before, after, key === 'kcal' ? formatKcal : formatMacroG);
 }
 
-/** "+4 g protein", or "protein same" when it did not move. */
-function labelled(change: NutrientChange, what: string): NutrientChange {
-  return { ...change, text: change.direction === 'same' ? `${what} same` : `${change.text} ${what}` };
-}
-
 function summary(changes: LineChange[]): string {
   const counts = new Map<LineChangeKind, number>();
   for (const c of changes) counts.set(c.kind, (counts.get(c.kind) ?? 0) + 1);
@@ -214,70 +207,45 @@ function LineChanges({ a, b }: { a: VersionDetail; b: VersionDetail }) {
         {summary(changes)}
       </p>
 
-      <div className="hidden overflow-x-auto rounded-field border border-line md:block">
-        <table className="w-full border-collapse">
-          <caption className="sr-only">
-            Lines of version {a.number} against version {b.number}
-          </caption>
-          <thead>
-            <tr className="border-b border-line bg-oat-100 text-left text-sm">
-              <th scope="col" className="px-3 py-2 font-bold">
-                Change
-              </th>
-              <th scope="col" className="px-3 py-2 font-bold">
-                Food
-              </th>
-              <th scope="col" className="px-3 py-2 text-right font-bold">
-                Grams
-              </th>
-              <th scope="col" className="px-3 py-2 text-right font-bold">
-                Energy <span className="font-semibold text-ink-soft">/ serving</span>
-              </th>
-              <th scope="col" className="px-3 py-2 text-right font-bold">
-                Protein <span className="font-semibold text-ink-soft">/ serving</span>
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {changes.map((change, i) => (
-              <tr key={i} className={cx('border-b border-line align-top last:border-b-0', change.kind === 'same' ? 'bg-surface' : 'bg-oat-50')}>
-                <td className="px-3 py-2.5">
-                  <Badge tone={KIND_WORDS[change.kind].tone}>{KIND_WORDS[change.kind].label}</Badge>
-                </td>
-                <th scope="row" className="px-3 py-2.5 text-left font-normal">
-                  <FoodText change={change} />
-                </th>
-                <td className="px-3 py-2.5 text-right whitespace-nowrap tabular-nums">{gramsText(change)}</td>
-                <td className="px-3 py-2.5 text-right">
-                  {change.kind === 'same' ? <span className="text-ink-soft">—</span> : <ChangeChip change={lineDelta(change, a, b, 'kcal')} />}
-                </td>
-                <td className="px-3 py-2.5 text-right">
-                  {change.kind === 'same' ? <span className="text-ink-soft">—</span> : <ChangeChip change={lineDelta(change, a, b, 'proteinG')} />}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
-
-      <ul aria-label={`Lines of version ${a.number} against version ${b.number}`} className="flex flex-col gap-2 md:hidden">
-        {changes.map((change, i) => (
-          <li key={i} className={cx('flex flex-col gap-1.5 rounded-field border border-line p-3', change.kind === 'same' ? 'bg-surface' : 'bg-oat-50')}>
-            <div className="flex items-start justify-between gap-2">
-              <FoodText change={change} />
-              <Badge tone={KIND_WORDS[change.kind].tone}>{KIND_WORDS[change.kind].label}</Badge>
-            </div>
-            <p className="text-sm font-bold tabular-nums">{gramsText(change)}</p>
-            {change.kind !== 'same' && (
-              <p className="flex flex-wrap items-center gap-1.5 text-sm">
-                <span className="text-ink-soft">Per serving:</span>
-                <ChangeChip change={lineDelta(change, a, b, 'kcal')} />
-                <ChangeChip change={labelled(lineDelta(change, a, b, 'proteinG'), 'protein')} />
-              </p>
-            )}
-          </li>
-        ))}
-      </ul>
+      <DataTable
+        caption={`Lines of version ${a.number} against version ${b.number}`}
+        captionHidden
+        density="snug"
+        cardsBelow="md"
+        striped={false}
+        className="md:rounded-field"
+        rows={changes}
+        rowKey={(_, i) => i}
+        rowClassName={(change) => (change.kind === 'same' ? 'bg-surface' : 'bg-oat-50 max-md:bg-oat-50')}
+        columns={[
+          {
+            key: 'change',
+            header: 'Change',
+            cardLabel: false,
+            cardOrder: 1,
+            className: 'md:py-2.5',
+            cell: (change) => <Badge tone={KIND_WORDS[change.kind].tone}>{KIND_WORDS[change.kind].label}</Badge>,
+          },
+          { key: 'food', header: 'Food', rowHeader: true, className: 'font-normal md:py-2.5', cell: (change) => <FoodText change={change} /> },
+          { key: 'grams', header: 'Grams', align: 'right', cardOrder: 2, className: 'whitespace-nowrap md:py-2.5', cell: (change) => gramsText(change) },
+          {
+            key: 'kcal',
+            header: headerWithUnit('Energy', '/ serving'),
+            align: 'right',
+            cardOrder: 3,
+            className: 'md:py-2.5',
+            cell: (change) => (change.kind === 'same' ? <span className="text-ink-soft">—</span> : <ChangeChip change={lineDelta(change, a, b, 'kcal')} />),
+          },
+          {
+            key: 'protein',
+            header: headerWithUnit('Protein', '/ serving'),
+            align: 'right',
+            cardOrder: 4,
+            className: 'md:py-2.5',
+            cell: (change) => (change.kind === 'same' ? <span className="text-ink-soft">—</span> : <ChangeChip change={lineDelta(change, a, b, 'proteinG')} />),
+          },
+        ]}
+      />
     </div>
   );
 }

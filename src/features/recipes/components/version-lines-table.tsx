@@ -1,5 +1,6 @@
 import type { VersionDetail } from '../../../../shared/schemas/recipes';
 import { incompleteLineNumbers } from '../../../../shared/line-status';
+import { DataTable } from '../../../components/ui/table';
 import { Badge } from '../../../components/ui/badge';
 import { IncompleteTotalsAlert } from '../../../components/ui/incomplete-totals-alert';
 import { formatGrams, formatKcal, formatMacroG } from '../../../lib/format';
@@ -45,84 +46,54 @@ export function VersionLinesTable({ version, caption }: { version: VersionDetail
   return (
     <>
       <IncompleteTotalsAlert lineNumbers={incompleteLineNumbers(version.lines)} className="mb-3" />
-      <div className="hidden overflow-x-auto rounded-field border border-line sm:block">
-        <table className="w-full border-collapse text-base">
-          <caption className="sr-only">{caption}</caption>
-          <thead>
-            <tr className="border-b border-line bg-oat-100 text-left">
-              <th scope="col" className="px-3 py-2 font-bold sm:px-4">
-                Ingredient
-              </th>
-              <th scope="col" className="px-3 py-2 text-right font-bold sm:px-4">
-                Grams
-              </th>
-              <th scope="col" className="px-3 py-2 text-right font-bold sm:px-4">
-                Energy
-              </th>
-              <th scope="col" className="px-3 py-2 text-right font-bold sm:px-4">
-                Protein
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {version.lines.map((line, i) => (
-              <tr key={i} className="border-b border-line align-top last:border-b-0 even:bg-oat-50">
-                <th scope="row" className="px-3 py-2 text-left font-normal sm:px-4">
-                  <span className="block font-bold text-ink">{writtenLine(line) ?? line.foodName}</span>
-                  <MatchedFood line={line} />
-                  <LineFlags line={line} />
-                </th>
-                <td className="px-3 py-2 text-right whitespace-nowrap tabular-nums sm:px-4">{formatGrams(line.grams)}</td>
-                <td className="px-3 py-2 text-right whitespace-nowrap tabular-nums sm:px-4">{formatKcal(line.nutrients.kcal)}</td>
-                <td className="px-3 py-2 text-right whitespace-nowrap tabular-nums sm:px-4">{formatMacroG(line.nutrients.proteinG)}</td>
-              </tr>
-            ))}
-          </tbody>
-          <tfoot className="border-t-2 border-line-strong">
-            <tr>
-              <th scope="row" className="px-3 pt-2 text-left font-bold sm:px-4">
-                Whole dish
-              </th>
-              <td className="px-3 pt-2 text-right whitespace-nowrap tabular-nums sm:px-4">{formatGrams(dishGrams)}</td>
-              <td className="px-3 pt-2 text-right whitespace-nowrap tabular-nums sm:px-4">{formatKcal(version.totals.kcal)}</td>
-              <td className="px-3 pt-2 text-right whitespace-nowrap tabular-nums sm:px-4">{formatMacroG(version.totals.proteinG)}</td>
-            </tr>
-            <tr>
-              <th scope="row" className="px-3 pt-1 pb-2 text-left font-extrabold sm:px-4">
+      <DataTable
+        caption={caption}
+        captionHidden
+        density="snug"
+        cardsBelow="sm"
+        cardColumns={3}
+        className="sm:rounded-field"
+        rows={version.lines}
+        rowKey={(_, i) => i}
+        columns={[
+          {
+            key: 'line',
+            header: 'Ingredient',
+            rowHeader: true,
+            className: 'font-normal sm:px-4',
+            cell: (line) => (
+              <>
+                <span className="block font-bold text-ink">{writtenLine(line) ?? line.foodName}</span>
+                <MatchedFood line={line} />
+                <LineFlags line={line} />
+              </>
+            ),
+          },
+          { key: 'grams', header: 'Grams', align: 'right', className: 'whitespace-nowrap sm:px-4', cell: (line) => formatGrams(line.grams) },
+          { key: 'kcal', header: 'Energy', align: 'right', className: 'whitespace-nowrap sm:px-4', cell: (line) => formatKcal(line.nutrients.kcal) },
+          { key: 'protein', header: 'Protein', align: 'right', className: 'whitespace-nowrap sm:px-4', cell: (line) => formatMacroG(line.nutrients.proteinG) },
+        ]}
+        footer={[
+          {
+            key: 'dish',
+            label: 'Whole dish',
+            cells: { grams: formatGrams(dishGrams), kcal: formatKcal(version.totals.kcal), protein: formatMacroG(version.totals.proteinG) },
+          },
+          {
+            key: 'serving',
+            label: (
+              <span className="font-extrabold">
                 Per serving <span className="font-semibold text-ink-soft">(of {version.servings})</span>
-              </th>
-              <td className="px-3 pt-1 pb-2 text-right whitespace-nowrap tabular-nums sm:px-4">{formatGrams(dishGrams / version.servings)}</td>
-              <td className="px-3 pt-1 pb-2 text-right font-extrabold whitespace-nowrap tabular-nums sm:px-4">{formatKcal(version.perServing.kcal)}</td>
-              <td className="px-3 pt-1 pb-2 text-right font-extrabold whitespace-nowrap tabular-nums sm:px-4">{formatMacroG(version.perServing.proteinG)}</td>
-            </tr>
-          </tfoot>
-        </table>
-      </div>
-
-      <div className="flex flex-col sm:hidden">
-        <ul aria-label={caption} className="flex flex-col rounded-field border border-line">
-          {version.lines.map((line, i) => (
-            <li key={i} className="flex flex-col gap-0.5 border-b border-line px-3 py-2.5 last:border-b-0 even:bg-oat-50">
-              <span className="font-bold text-ink">{writtenLine(line) ?? line.foodName}</span>
-              <MatchedFood line={line} />
-              <LineFlags line={line} />
-              <span className="text-sm tabular-nums">
-                <strong>{formatGrams(line.grams)}</strong> · {formatKcal(line.nutrients.kcal)} · {formatMacroG(line.nutrients.proteinG)} protein
               </span>
-            </li>
-          ))}
-        </ul>
-        <dl className="mt-3 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
-          <dt className="font-bold">Whole dish</dt>
-          <dd className="text-right tabular-nums">
-            {formatGrams(dishGrams)} · {formatKcal(version.totals.kcal)} · {formatMacroG(version.totals.proteinG)} protein
-          </dd>
-          <dt className="font-extrabold">Per serving (of {version.servings})</dt>
-          <dd className="text-right font-extrabold tabular-nums">
-            {formatKcal(version.perServing.kcal)} · {formatMacroG(version.perServing.proteinG)} protein
-          </dd>
-        </dl>
-      </div>
+            ),
+            cells: {
+              grams: formatGrams(dishGrams / version.servings),
+              kcal: <strong className="font-extrabold">{formatKcal(version.perServing.kcal)}</strong>,
+              protein: <strong className="font-extrabold">{formatMacroG(version.perServing.proteinG)}</strong>,
+            },
+          },
+        ]}
+      />
     </>
   );
 }

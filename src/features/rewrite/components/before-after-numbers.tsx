@@ -1,6 +1,8 @@
 import { proteinPer100Kcal, type Nutrients } from '../../../../shared/nutrition';
 import type { TargetsInput } from '../../../../shared/schemas/rewrite';
 import type { TargetName } from '../../../../shared/rewrite/types';
+import { NUTRIENT_ROWS } from '../../../components/ui/nutrient-table';
+import { DataTable } from '../../../components/ui/table';
 import { Stat } from '../../../components/ui/stat';
 import { cx } from '../../../lib/cx';
 import { formatNumber } from '../../../lib/format';
@@ -16,17 +18,6 @@ import {
   volumeChangeText,
 } from '../rewrite-words';
 import { DifferenceText } from './difference-text';
-
-const ROWS: { key: keyof Nutrients; label: string; part?: boolean }[] = [
-  { key: 'kcal', label: 'Energy' },
-  { key: 'proteinG', label: 'Protein' },
-  { key: 'carbsG', label: 'Carbohydrate' },
-  { key: 'fiberG', label: 'Fiber', part: true },
-  { key: 'sugarG', label: 'Sugars', part: true },
-  { key: 'fatG', label: 'Fat' },
-  { key: 'satFatG', label: 'Saturated fat', part: true },
-  { key: 'sodiumMg', label: 'Sodium' },
-];
 
 function targetFor(key: keyof Nutrients, targets: TargetsInput): { target: TargetName; value: number } | null {
   const row = TARGET_ROWS.find((r) => r.key === key && targets[r.target] !== undefined);
@@ -111,61 +102,48 @@ export function BeforeAfterNumbers({
   targets: TargetsInput;
   caption: string;
 }) {
+  type Row = { key: keyof Nutrients | 'density'; label: string; part?: boolean };
+  const rows: Row[] = [...NUTRIENT_ROWS, { key: 'density', label: 'Protein per 100 kcal' }];
+  const shown = (key: Row['key'], n: Nutrients) => (key === 'density' ? density(n) : formatNutrient(key, n[key]));
   return (
-    <div className="overflow-x-auto">
-      <table className="w-full border-collapse text-sm sm:text-base">
-        <caption className="sr-only">{caption}</caption>
-        <thead>
-          <tr className="border-b-2 border-ink text-ink-soft">
-            <th scope="col" className="py-1.5 pr-2 text-left text-sm font-bold">
-              Per serving
-            </th>
-            <th scope="col" className="px-1 py-1.5 text-right text-sm font-bold sm:px-2">
-              As written
-            </th>
-            <th scope="col" className="px-1 py-1.5 text-right text-sm font-bold sm:px-2">
-              {afterLabel}
-            </th>
-            <th scope="col" className="py-1.5 pl-2 text-right text-sm font-bold">
-              Change
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {ROWS.map((row) => {
-            const target = targetFor(row.key, targets);
+    <DataTable<Row>
+      caption={caption}
+      captionHidden
+      look="plain"
+      rows={rows}
+      rowKey={(r) => r.key}
+      columns={[
+        {
+          key: 'label',
+          header: 'Per serving',
+          rowHeader: true,
+          className: (r) => cx('py-2', r.part ? 'pl-3 font-semibold text-ink-soft' : 'font-bold'),
+          cell: (r) => {
+            const target = r.key === 'density' ? null : targetFor(r.key, targets);
             const met = target ? meetsTarget(target.target, target.value, after) : null;
             return (
-              <tr key={row.key} className="border-b border-line align-top">
-                <th scope="row" className={cx('py-2 pr-2 text-left', row.part ? 'pl-3 font-semibold text-ink-soft' : 'font-bold')}>
-                  {row.label}
-                  {target && (
-                    <span className={cx('block text-xs font-semibold', met ? 'text-herb-700' : 'text-beet-700')}>
-                      <span aria-hidden="true">{met ? '✓ ' : '✗ '}</span>
-                      target {targetText(target.target, target.value)}: {met ? 'met' : 'not met'}
-                    </span>
-                  )}
-                </th>
-                <td className="px-1 py-2 text-right whitespace-nowrap tabular-nums sm:px-2">{formatNutrient(row.key, before[row.key])}</td>
-                <td className="px-1 py-2 text-right font-bold whitespace-nowrap tabular-nums sm:px-2">{formatNutrient(row.key, after[row.key])}</td>
-                <td className="py-2 pl-2 text-right">
-                  <DifferenceText difference={nutrientDifference(row.key, before, after)} />
-                </td>
-              </tr>
+              <>
+                {r.label}
+                {target && (
+                  <span className={cx('block text-xs font-semibold', met ? 'text-herb-700' : 'text-beet-700')}>
+                    <span aria-hidden="true">{met ? '✓ ' : '✗ '}</span>
+                    target {targetText(target.target, target.value)}: {met ? 'met' : 'not met'}
+                  </span>
+                )}
+              </>
             );
-          })}
-          <tr className="align-top">
-            <th scope="row" className="py-2 pr-2 text-left font-bold">
-              Protein per 100 kcal
-            </th>
-            <td className="px-1 py-2 text-right whitespace-nowrap tabular-nums sm:px-2">{density(before)}</td>
-            <td className="px-1 py-2 text-right font-bold whitespace-nowrap tabular-nums sm:px-2">{density(after)}</td>
-            <td className="py-2 pl-2 text-right">
-              <DifferenceText difference={densityDifference(before, after)} />
-            </td>
-          </tr>
-        </tbody>
-      </table>
-    </div>
+          },
+        },
+        { key: 'before', header: 'As written', align: 'right', className: 'py-2 whitespace-nowrap max-sm:px-1', cell: (r) => shown(r.key, before) },
+        { key: 'after', header: afterLabel, align: 'right', className: 'py-2 font-bold whitespace-nowrap max-sm:px-1', cell: (r) => shown(r.key, after) },
+        {
+          key: 'change',
+          header: 'Change',
+          align: 'right',
+          className: 'py-2',
+          cell: (r) => <DifferenceText difference={r.key === 'density' ? densityDifference(before, after) : nutrientDifference(r.key, before, after)} />,
+        },
+      ]}
+    />
   );
 }

@@ -2,6 +2,7 @@ import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { formatWeight } from '../../../lib/format';
 import type { UnitSystem } from '../../../lib/user';
+import { commonFoodName, writtenFoodName } from '../../../../shared/rewritten-line-text';
 import type { RewriteChange } from '../rewrite-types';
 import { MINUS, orderedChanges } from '../rewrite-words';
 
@@ -30,15 +31,23 @@ function gramsChange(change: RewriteChange, unitSystem: UnitSystem) {
   );
 }
 
-function SharedLine({ change, unitSystem }: { change: RewriteChange; unitSystem: UnitSystem }) {
+/** The two foods of a change in the cook's words: the food as their line names it, the new food by its common name. */
+function cookNames(change: RewriteChange, lineInput: string | undefined) {
+  return {
+    from: (lineInput && writtenFoodName(lineInput)) || commonFoodName(change.from),
+    to: commonFoodName(change.to, change.rule?.label),
+  };
+}
+
+function SharedLine({ change, unitSystem, names }: { change: RewriteChange; unitSystem: UnitSystem; names: { from: string; to: string } }) {
   return (
     <ul className="flex flex-col gap-1 tabular-nums" aria-label="The line, shared between two foods">
       <li>
-        Keep <strong>{formatWeight(change.keptGrams ?? 0, unitSystem)}</strong> {change.from.name}{' '}
+        Keep <strong>{formatWeight(change.keptGrams ?? 0, unitSystem)}</strong> {names.from}{' '}
         <span className="text-ink-soft">(of {formatWeight(change.gramsBefore, unitSystem)} as written)</span>
       </li>
       <li>
-        Add <strong className="text-herb-800">{formatWeight(change.gramsAfter, unitSystem)}</strong> {change.to.name}
+        Add <strong className="text-herb-800">{formatWeight(change.gramsAfter, unitSystem)}</strong> {names.to}
       </li>
     </ul>
   );
@@ -52,6 +61,7 @@ function ChangeItem({
   excluding,
 }: { change: RewriteChange; lineInput: string | undefined } & Omit<ChangeListProps, 'changes' | 'lineInputs'>) {
   const cautions = change.rule?.cautions ?? [];
+  const names = cookNames(change, lineInput);
   return (
     <li className="flex flex-col gap-2 rounded-field border border-line bg-surface p-4">
       <div className="flex flex-wrap items-center gap-2">
@@ -62,14 +72,22 @@ function ChangeItem({
         </span>
       </div>
       {change.swapped ? (
-        <p className="font-bold">
-          {change.from.name} <span aria-hidden="true">→</span>
-          <span className="sr-only">{change.partial ? 'shared with' : 'becomes'}</span> <span className="text-herb-800">{change.to.name}</span>
+        <p className="flex flex-col">
+          <span className="font-bold">
+            {names.from} <span aria-hidden="true">→</span>
+            <span className="sr-only">{change.partial ? 'shared with' : 'becomes'}</span> <span className="text-herb-800">{names.to}</span>
+          </span>
+          <span className="text-sm text-ink-soft">
+            matched: {change.from.name} → {change.to.name}
+          </span>
         </p>
       ) : (
-        <p className="font-bold">{change.to.name}</p>
+        <p className="flex flex-col">
+          <span className="font-bold">{names.from}</span>
+          <span className="text-sm text-ink-soft">matched: {change.to.name}</span>
+        </p>
       )}
-      {change.partial ? <SharedLine change={change} unitSystem={unitSystem} /> : <p>{gramsChange(change, unitSystem)}</p>}
+      {change.partial ? <SharedLine change={change} unitSystem={unitSystem} names={names} /> : <p>{gramsChange(change, unitSystem)}</p>}
       {change.rule && (
         <p className="text-sm">
           <span className="font-bold">Rule:</span> {change.rule.label}
@@ -101,7 +119,7 @@ function ChangeItem({
           disabled={excluding}
           onClick={() => onExclude({ id: change.to.id, name: change.to.name })}
         >
-          Don’t use {change.to.name}; rewrite again
+          Don’t use {names.to}; rewrite again
         </Button>
       )}
     </li>

@@ -3,6 +3,7 @@ import type { Suggestion } from '../../../../shared/rewrite/types';
 import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
+import { DataTable } from '../../../components/ui/table';
 import { formatNumber } from '../../../lib/format';
 import type { InfeasibleDetails } from '../rewrite-types';
 import { formatNutrient, TARGET_ROWS, targetText } from '../rewrite-words';
@@ -29,41 +30,34 @@ export function InfeasibleView({ message, details, targets, onApply, applying }:
         {message}
       </Alert>
 
-      <div className="overflow-x-auto">
-        <table className="w-full border-collapse text-sm sm:text-base">
-          <caption className="pb-2 text-left font-bold">The closest the dish gets, per serving</caption>
-          <thead>
-            <tr className="border-b-2 border-ink text-ink-soft">
-              <th scope="col" className="py-1.5 pr-2 text-left text-sm font-bold">
-                Target
-              </th>
-              <th scope="col" className="px-2 py-1.5 text-right text-sm font-bold">
-                You asked
-              </th>
-              <th scope="col" className="py-1.5 pl-2 text-right text-sm font-bold">
-                Best reachable
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {rows.map((row) => {
-              const binding = details.binding.includes(row.target);
-              return (
-                <tr key={row.target} className="border-b border-line">
-                  <th scope="row" className="py-2 pr-2 text-left align-top font-bold">
-                    <span className="block">{row.label.charAt(0).toUpperCase() + row.label.slice(1)}</span>
-                    {binding ? <Badge tone="beet">Out of reach</Badge> : <Badge tone="herb">Met</Badge>}
-                  </th>
-                  <td className="px-2 py-2 text-right align-top">{targetText(row.target, targets[row.target] as number)}</td>
-                  <td className="py-2 pl-2 text-right align-top font-bold whitespace-nowrap tabular-nums">
-                    {formatNutrient(row.key, details.bestReachable[row.key])}
-                  </td>
-                </tr>
-              );
-            })}
-          </tbody>
-        </table>
-      </div>
+      <DataTable
+        caption="The closest the dish gets, per serving"
+        look="plain"
+        rows={rows}
+        rowKey={(row) => row.target}
+        columns={[
+          {
+            key: 'target',
+            header: 'Target',
+            rowHeader: true,
+            className: 'py-2 font-bold',
+            cell: (row) => (
+              <>
+                <span className="block">{row.label.charAt(0).toUpperCase() + row.label.slice(1)}</span>
+                {details.binding.includes(row.target) ? <Badge tone="beet">Out of reach</Badge> : <Badge tone="herb">Met</Badge>}
+              </>
+            ),
+          },
+          { key: 'asked', header: 'You asked', align: 'right', className: 'py-2', cell: (row) => targetText(row.target, targets[row.target] as number) },
+          {
+            key: 'reachable',
+            header: 'Best reachable',
+            align: 'right',
+            className: 'py-2 font-bold whitespace-nowrap',
+            cell: (row) => formatNutrient(row.key, details.bestReachable[row.key]),
+          },
+        ]}
+      />
 
       {details.suggestions.length > 0 && (
         <section className="flex flex-col gap-3" aria-labelledby="rewrite-suggestions">
