@@ -58,7 +58,7 @@ export interface RecipeCandidates {
 
 export function toCandidate(food: CatalogueFood, extra: Partial<Candidate> = {}): Candidate {
   const { waterG: _water, ...per100g } = food.per100g;
-  return { foodId: food.id, name: food.name, densityGPerMl: food.densityGPerMl, per100g, ...extra };
+  return { foodId: food.id, name: food.name, source: food.source, densityGPerMl: food.densityGPerMl, per100g, ...extra };
 }
 
 function toCulinaryLine(line: CandidateLine): CulinaryLine {

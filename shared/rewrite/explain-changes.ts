@@ -1,9 +1,10 @@
 import { LINE_FUNCTION_WORDS } from '../culinary/infer-dish';
 import { nutrientsForGrams, sumNutrients } from '../nutrition';
+import { commonFoodName } from '../rewritten-line-text';
 import type { CandidateSlot } from './line-slots';
 import type { LineChoice } from './read-plan';
 import { activeTargets } from './targets';
-import type { Change, ChangePurpose, RewriteObjective, Targets } from './types';
+import type { Candidate, Change, ChangePurpose, RewriteObjective, Targets } from './types';
 
 const SAME_GRAMS = 1e-6;
 
@@ -44,9 +45,18 @@ function percent(factor: number): string {
   return `${Math.round(factor * 100)}`;
 }
 
+/**
+ * A food as the cook says it, as the rest of the rewrite names it: a catalogue food by its common name
+ * (a rule's target by the rule's own words), a cook's own food and a food of unknown origin by their names.
+ */
+function cookName(food: Candidate, ruleLabel?: string): string {
+  return food.source === 'usda-sr28' ? commonFoodName({ name: food.name, source: food.source }, ruleLabel) : food.name;
+}
+
 /** What rule a swap follows, as the cook reads it: the rule's own label, or the coach's swap and its ratio. */
 function ruleText(swap: CandidateSlot, from: string, gramsPerGramReplaced: number): string {
-  const { rule, approved, name, band } = swap.candidate;
+  const { rule, approved, band } = swap.candidate;
+  const name = cookName(swap.candidate);
   if (rule && !approved) {
     // a rule band reaching past the line tolerance (more of a lean main protein) says how far it went
     const off = Math.abs(gramsPerGramReplaced / swap.ratio - 1) > 0.1 + 1e-9;
@@ -102,7 +112,8 @@ export function explainChanges(
     const keepsVolume = (atCeiling && volumeDelta <= -0.5) || (atFloor && volumeDelta >= 0.5);
     if (keepsVolume || (serves.length === 0 && Math.abs(volumeDelta) >= 0.5)) serves.push('volume');
     if (serves.length === 0) serves.push('objective');
-    const from = was.food.name;
+    const from = cookName(was.food);
+    const to = cookName(added.food, swap?.candidate.rule?.label);
     let what: string;
     if (!swap) {
       const [lo, hi] = choice.line.line.keepScale ?? [1, 1];
@@ -112,9 +123,9 @@ export function explainChanges(
       what = `${added.grams > was.grams ? 'More' : 'Less'} ${from} (${grams(was.grams)} → ${grams(added.grams)}; ${may})`;
     } else if (partial) {
       const kept = now.parts[0].grams;
-      what = `Replace ${shareWords(swap.share)} of the ${from} with ${grams(added.grams)} ${added.food.name} (${grams(kept)} of the ${grams(was.grams)} kept) — ${ruleText(swap, from, added.grams / (was.grams - kept))}`;
+      what = `Replace ${shareWords(swap.share)} of the ${from} with ${grams(added.grams)} ${to} (${grams(kept)} of the ${grams(was.grams)} kept) — ${ruleText(swap, from, added.grams / (was.grams - kept))}`;
     } else {
-      what = `Swap ${grams(was.grams)} ${from} for ${grams(added.grams)} ${added.food.name} — ${ruleText(swap, from, added.grams / was.grams)}`;
+      what = `Swap ${grams(was.grams)} ${from} for ${grams(added.grams)} ${to} — ${ruleText(swap, from, added.grams / was.grams)}`;
     }
     const per = effects.length ? `: ${listed(effects)} per serving` : '';
     const volumeNote = `keep the dish's volume (${signed(volumeDelta, 0, 'mL')})`;

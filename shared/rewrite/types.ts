@@ -29,6 +29,8 @@ export interface SwapApproval {
 export interface Candidate {
   foodId: number;
   name: string;
+  /** where the food comes from: a catalogue name is turned into the cook's words, a cook's own food keeps its name; absent, the name is used as it is */
+  source?: 'usda-sr28' | 'custom';
   /** ρ, grams per mL (for the whole-dish volume check) */
   densityGPerMl: number;
   per100g: Nutrients;
