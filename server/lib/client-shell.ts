@@ -92,7 +92,8 @@ export function createClientShell(clientDir: string) {
   const manifestFile = path.join(clientDir, '.vite', 'manifest.json');
   const manifest: Manifest | null = existsSync(manifestFile) ? (JSON.parse(readFileSync(manifestFile, 'utf8')) as Manifest) : null;
   const entryKey = manifest ? Object.keys(manifest).find((k) => manifest[k].isEntry) : undefined;
-  const inEntry = new Set(manifest && entryKey ? chunkFiles(manifest, entryKey).js : []);
+  const entryFiles = manifest && entryKey ? chunkFiles(manifest, entryKey) : { js: [], css: [] };
+  const inEntry = new Set([...entryFiles.js, ...entryFiles.css]);
   const pages = new Map<string | null, { html: string; preloads: string[] }>();
 
   function pageFor(module: string | null) {
@@ -102,7 +103,7 @@ export function createClientShell(clientDir: string) {
     const { js, css } = module && manifest?.[key] ? chunkFiles(manifest, key) : { js: [], css: [] };
     const preloads = [...new Set(js)].filter((f) => !inEntry.has(f));
     const links = [
-      ...[...new Set(css)].map((f) => `<link rel="stylesheet" crossorigin href="/${f}">`),
+      ...[...new Set(css)].filter((f) => !inEntry.has(f)).map((f) => `<link rel="stylesheet" crossorigin href="/${f}">`),
       ...preloads.map((f) => `<link rel="modulepreload" crossorigin href="/${f}">`),
     ];
     const page = { html: links.length ? indexHtml.replace('</head>', `    ${links.join('\n    ')}\n  </head>`) : indexHtml, preloads };

@@ -1,9 +1,9 @@
 import { z } from 'zod';
 import type { Nutrients } from '../nutrition';
 import type { DishType, LineFunction } from '../culinary/types';
+import { MAX_LINES, MAX_TEXT_CHARS } from '../recipe-limits';
 
-export const MAX_LINES = 100;
-export const MAX_TEXT_CHARS = 20_000;
+export { MAX_LINES, MAX_TEXT_CHARS };
 
 /** One ingredient line as the cook wrote it, optionally pinned to a food or a weight. */
 export const lineInputSchema = z.object({

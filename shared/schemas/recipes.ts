@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { MAX_LINES, MAX_TEXT_CHARS, servingsSchema } from './analyze';
 import { targetsSchema } from './rewrite';
 import type { Nutrients } from '../nutrition';
+import { RECIPE_SORTS, type RecipeSort } from '../recipe-sorts';
 
 export const VERSION_KINDS = ['original', 'rewrite', 'edit'] as const;
 export type VersionKind = (typeof VERSION_KINDS)[number];
@@ -88,8 +89,7 @@ export const createVersionSchema = z.object({
   parentNumber: z.number().int().min(1).optional(),
 });
 
-export const RECIPE_SORTS = ['updated', 'title', 'kcal', 'protein'] as const;
-export type RecipeSort = (typeof RECIPE_SORTS)[number];
+export { RECIPE_SORTS, type RecipeSort };
 
 export const recipeListQuerySchema = z.object({
   q: z.string().max(200).optional(),

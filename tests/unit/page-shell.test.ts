@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { fillShell, stylesFirst } from '../../server/lib/client-shell';
+import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { createClientShell, fillShell, stylesFirst } from '../../server/lib/client-shell';
 import { PAGE_STATE_ID } from '../../shared/page-render';
 
 const BUILT = `<!doctype html>
@@ -25,6 +28,25 @@ describe('the page shell', () => {
     expect(sheet).toBeLessThan(html.indexOf('<script type="module"'));
     expect(sheet).toBeLessThan(html.indexOf('modulepreload'));
     expect(html.match(/rel="stylesheet"/g)).toHaveLength(1);
+  });
+
+  it('preloads a page’s own chunks once and never repeats the entry’s style sheet or scripts', () => {
+    const dir = mkdtempSync(path.join(tmpdir(), 'client-shell-'));
+    mkdirSync(path.join(dir, '.vite'));
+    writeFileSync(path.join(dir, 'index.html'), BUILT);
+    // as Vite writes it: a route chunk imports the entry (index.html), whose style sheet it then lists again
+    const manifest = {
+      'index.html': { file: 'assets/index-A1.js', isEntry: true, imports: ['_page-state.js'], css: ['assets/index-C3.css'] },
+      '_page-state.js': { file: 'assets/page-state-B2.js' },
+      'src/app/routes/kitchen.tsx': { file: 'assets/kitchen-D4.js', imports: ['index.html', '_page-state.js', '_card.js'] },
+      '_card.js': { file: 'assets/card-E5.js', imports: ['index.html'] },
+    };
+    writeFileSync(path.join(dir, '.vite', 'manifest.json'), JSON.stringify(manifest));
+    const shell = createClientShell(dir);
+    const html = shell.html('/');
+    expect(html.match(/rel="stylesheet"/g)).toHaveLength(1);
+    expect(shell.preloads('/')).toEqual(['assets/kitchen-D4.js', 'assets/card-E5.js']);
+    expect(html.match(/page-state-B2\.js/g)).toHaveLength(1);
   });
 
   it('puts a drawn page in #root, its title in the head and its state in a JSON script', () => {

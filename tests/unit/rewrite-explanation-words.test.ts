@@ -21,7 +21,14 @@ const nutrients = (kcal: number, proteinG: number, carbsG: number, fiberG: numbe
   sodiumMg: 6,
 });
 
-const PASTA: Candidate = { foodId: 1, name: 'Pasta, dry, enriched', source: 'usda-sr28', densityGPerMl: 0.45, per100g: nutrients(371, 13, 75, 3.2), original: true };
+const PASTA: Candidate = {
+  foodId: 1,
+  name: 'Pasta, dry, enriched',
+  source: 'usda-sr28',
+  densityGPerMl: 0.45,
+  per100g: nutrients(371, 13, 75, 3.2),
+  original: true,
+};
 const RULE: RuleRef = { id: 'pasta-to-whole-wheat', label: 'whole-wheat pasta for white pasta, 1:1 by weight', why: 'invented for the test' };
 const WHOLE_WHEAT: Candidate = {
   foodId: 2,

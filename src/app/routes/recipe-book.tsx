@@ -9,7 +9,7 @@ import { LoadingState } from '../../components/ui/spinner';
 import { useToast } from '../../components/ui/toast';
 import { isRecipeSort, useRecipes, type RecipeSort } from '../../features/recipes/api/list-recipes';
 import { useUndeleteRecipe } from '../../features/recipes/api/undelete-recipe';
-import { ImportRecipeDialog } from '../../features/recipes/components/import-recipe-dialog';
+import { LazyImportRecipeDialog } from '../../features/recipes/components/lazy-import-recipe-dialog';
 import { RecipeList } from '../../features/recipes/components/recipe-list';
 import { RecipeListControls } from '../../features/recipes/components/recipe-list-controls';
 import { recipePath } from '../../features/recipes/recipe-links';
@@ -58,6 +58,12 @@ export function RecipeBookPage() {
   const navigate = useNavigate();
   const toast = useToast();
   const [importing, setImporting] = useState(false);
+  // the dialog's code loads at the first opening and stays, so closing it is the dialog's own
+  const [importOpened, setImportOpened] = useState(false);
+  const openImport = () => {
+    setImportOpened(true);
+    setImporting(true);
+  };
   const [typed, setTyped] = useState(params.get('q') ?? '');
   const sortParam = params.get('sort');
   const sort: RecipeSort = isRecipeSort(sortParam) ? sortParam : 'updated';
@@ -97,7 +103,7 @@ export function RecipeBookPage() {
   }, [q]);
 
   const importButton = (
-    <Button onClick={() => setImporting(true)} aria-haspopup="dialog">
+    <Button onClick={openImport} aria-haspopup="dialog">
       Import a recipe
     </Button>
   );
@@ -114,7 +120,7 @@ export function RecipeBookPage() {
         title="No recipes in the book yet"
         action={
           <div className="flex flex-wrap justify-center gap-2">
-            <Button onClick={() => setImporting(true)} aria-haspopup="dialog">
+            <Button onClick={openImport} aria-haspopup="dialog">
               Import a recipe
             </Button>
             <Link to="/" className={buttonClasses({ variant: 'secondary' })}>
@@ -164,17 +170,19 @@ export function RecipeBookPage() {
       >
         {body}
       </Page>
-      <ImportRecipeDialog
-        open={importing}
-        onClose={() => setImporting(false)}
-        onImported={(recipe) => {
-          setImporting(false);
-          const count = recipe.importedCount ?? 1;
-          if (count > 1) return toast.show(`${count} recipes are in the book, each with every version the file kept.`, 'success');
-          toast.show(`“${recipe.title}” is in the book, with its ingredients as version 1.`, 'success');
-          navigate(recipePath(recipe.id));
-        }}
-      />
+      {importOpened && (
+        <LazyImportRecipeDialog
+          open={importing}
+          onClose={() => setImporting(false)}
+          onImported={(recipe) => {
+            setImporting(false);
+            const count = recipe.importedCount ?? 1;
+            if (count > 1) return toast.show(`${count} recipes are in the book, each with every version the file kept.`, 'success');
+            toast.show(`“${recipe.title}” is in the book, with its ingredients as version 1.`, 'success');
+            navigate(recipePath(recipe.id));
+          }}
+        />
+      )}
     </>
   );
 }

@@ -1,7 +1,6 @@
 /** The Kitchen page's recipe and analysis in sessionStorage, so a reload of the tab keeps them. */
 import type { AnalyzeResponse, LineInput } from '../../../shared/schemas/analyze';
 import type { KitchenLine } from './kitchen-lines';
-import { z } from 'zod';
 import { LINE_FUNCTIONS } from '../../../shared/culinary/types';
 
 export const KITCHEN_STORAGE_KEY = 'hearthswap:kitchen';
@@ -43,21 +42,31 @@ export function emptyKitchen(): KitchenSnapshot {
   return { pastedText: '', source: null, lines: [], servings: DEFAULT_SERVINGS, analysis: null, answered: null };
 }
 
-const servingsSchema = z.number().int().min(1).max(100);
+// Plain checks rather than zod: this module is part of the Kitchen's first visit, and zod is not.
+type Loose = Record<string, unknown>;
+const isObject = (x: unknown): x is Loose => typeof x === 'object' && x !== null && !Array.isArray(x);
+const isNumber = (x: unknown, min = -Infinity): x is number => typeof x === 'number' && Number.isFinite(x) && x >= min;
+const optional = (x: unknown, check: (x: unknown) => boolean) => x === undefined || check(x);
+const isServings = (x: unknown): x is number => Number.isInteger(x) && (x as number) >= 1 && (x as number) <= 100;
+const ROLES: readonly unknown[] = LINE_FUNCTIONS;
+
 // Lines keep whatever else they carry (the line's key, its role); only what a request needs is checked.
-const lineInputSchema = z.looseObject({ input: z.string(), foodId: z.number().min(1).optional(), grams: z.number().min(0).optional() });
-const kitchenLineSchema = lineInputSchema.extend({ key: z.string(), role: z.enum(LINE_FUNCTIONS).optional() });
+const isLineInput = (x: unknown): x is Loose =>
+  isObject(x) && typeof x.input === 'string' && optional(x.foodId, (v) => isNumber(v, 1)) && optional(x.grams, (v) => isNumber(v, 0));
+const isKitchenLine = (x: unknown) => isLineInput(x) && typeof x.key === 'string' && optional(x.role, (v) => ROLES.includes(v));
+const isArrayOf = (x: unknown, check: (item: unknown) => boolean): x is unknown[] => Array.isArray(x) && x.every(check);
 // The analysis came from our own server; checking its outline is enough to catch a stale or foreign entry.
-const analysisSchema = z.looseObject({ lines: z.array(z.unknown()), totals: z.looseObject({}), perServing: z.looseObject({}), totalGrams: z.number() });
-const answeredSchema = z.looseObject({ keys: z.array(z.string()), lines: z.array(lineInputSchema), servings: servingsSchema });
-const sourceSchema = z.looseObject({
-  recipeId: z.number().min(1),
-  title: z.string(),
-  versionNumber: z.number().min(1),
-  latestNumber: z.number(),
-  openedLines: z.string(),
-});
-const snapshotSchema = z.looseObject({ v: z.literal(VERSION), lines: z.array(kitchenLineSchema), servings: servingsSchema });
+const isAnalysis = (x: unknown): x is Loose & { lines: unknown[] } =>
+  isObject(x) && Array.isArray(x.lines) && isObject(x.totals) && isObject(x.perServing) && isNumber(x.totalGrams);
+const isAnswered = (x: unknown): x is Loose & { keys: string[] } =>
+  isObject(x) && isArrayOf(x.keys, (k) => typeof k === 'string') && isArrayOf(x.lines, isLineInput) && isServings(x.servings);
+const isSource = (x: unknown) =>
+  isObject(x) &&
+  isNumber(x.recipeId, 1) &&
+  typeof x.title === 'string' &&
+  isNumber(x.versionNumber, 1) &&
+  isNumber(x.latestNumber) &&
+  typeof x.openedLines === 'string';
 
 /** A snapshot read back from storage, or null when there is none or it is not one of ours. */
 export function parseKitchen(raw: string | null): KitchenSnapshot | null {
@@ -68,20 +77,16 @@ export function parseKitchen(raw: string | null): KitchenSnapshot | null {
   } catch {
     return null;
   }
-  const snapshot = snapshotSchema.safeParse(data);
-  if (!snapshot.success) return null;
-  const { lines, servings, analysis: storedAnalysis, answered: storedAnswered, source, pastedText } = snapshot.data;
-  const analysis = analysisSchema.safeParse(storedAnalysis);
-  const answered = answeredSchema.safeParse(storedAnswered);
-  const matches = analysis.success && answered.success && answered.data.keys.length === analysis.data.lines.length;
-  const parsedSource = sourceSchema.safeParse(source);
+  if (!isObject(data) || data.v !== VERSION || !isArrayOf(data.lines, isKitchenLine) || !isServings(data.servings)) return null;
+  const { lines, servings, analysis, answered, source, pastedText } = data;
+  const matches = isAnalysis(analysis) && isAnswered(answered) && answered.keys.length === analysis.lines.length;
   return {
     pastedText: typeof pastedText === 'string' ? pastedText : '',
-    source: parsedSource.success ? (parsedSource.data as KitchenSource) : null,
+    source: isSource(source) ? (source as unknown as KitchenSource) : null,
     lines: lines as KitchenLine[],
     servings,
-    analysis: matches ? (analysis.data as unknown as AnalyzeResponse) : null,
-    answered: matches ? (answered.data as AnsweredRequest) : null,
+    analysis: matches ? (analysis as unknown as AnalyzeResponse) : null,
+    answered: matches ? (answered as unknown as AnsweredRequest) : null,
   };
 }
 

@@ -111,6 +111,21 @@ describe('kitchen storage', () => {
     expect(parseKitchen(JSON.stringify({ v: 1, lines: [{ input: 3 }], servings: 4 }))).toBeNull();
     expect(parseKitchen(JSON.stringify({ v: 1, lines, servings: 0 }))).toBeNull();
     expect(parseKitchen(JSON.stringify({ v: 1, lines: [{ key: 'a', input: 'x', grams: -1 }], servings: 2 }))).toBeNull();
+    expect(parseKitchen(JSON.stringify({ v: 1, lines: [{ key: 'a', input: 'x', foodId: 0 }], servings: 2 }))).toBeNull();
+    expect(parseKitchen(JSON.stringify({ v: 1, lines: [{ key: 'a', input: 'x', role: 'not-a-role' }], servings: 2 }))).toBeNull();
+    expect(parseKitchen(JSON.stringify({ v: 1, lines: [{ input: 'x' }], servings: 2 }))).toBeNull();
+    expect(parseKitchen(JSON.stringify({ v: 1, lines: {}, servings: 2 }))).toBeNull();
+    expect(parseKitchen(JSON.stringify({ v: 1, lines, servings: 2.5 }))).toBeNull();
+    expect(parseKitchen('[1]')).toBeNull();
+  });
+  it('drops a stored source or analysis of the wrong shape and keeps the lines', () => {
+    const raw = JSON.parse(serializeKitchen(snapshot));
+    const back = parseKitchen(JSON.stringify({ ...raw, source: { ...raw.source, recipeId: 0 }, analysis: { ...raw.analysis, totalGrams: 'many' } }));
+    expect(back?.lines).toEqual(lines);
+    expect(back?.source).toBeNull();
+    expect(back?.analysis).toBeNull();
+    expect(back?.answered).toBeNull();
+    expect(parseKitchen(JSON.stringify({ ...raw, pastedText: 7 }))?.pastedText).toBe('');
   });
   it('keeps the lines but drops an analysis that does not line up with its keys', () => {
     const raw = JSON.parse(serializeKitchen(snapshot));

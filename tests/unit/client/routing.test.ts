@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { navItemsFor } from '../../../src/app/access';
-import { ingredientLines, recipeInputSchema } from '../../../src/features/analysis/components/recipe-input-form';
+import { ingredientLines } from '../../../src/features/analysis/recipe-input';
+import { recipeInputErrors, recipeInputSchema } from '../../../src/features/analysis/recipe-input-schema';
 import { safeNextPath, signInPathFor } from '../../../src/lib/safe-redirect';
 import type { User } from '../../../src/lib/user';
 
@@ -41,5 +42,16 @@ describe('recipe input', () => {
     expect(recipeInputSchema.safeParse({ text: '1 egg', servings: Number.NaN }).success).toBe(false);
     expect(recipeInputSchema.safeParse({ text: '1 egg', servings: 2.5 }).success).toBe(false);
     expect(recipeInputSchema.safeParse({ text: '1 egg', servings: 0 }).success).toBe(false);
+  });
+  it('gives the form one message per field, the first that applies', () => {
+    expect(recipeInputErrors({ text: '1 egg', servings: 2 })).toBeNull();
+    expect(recipeInputErrors({ text: ' \n ', servings: Number.NaN })).toEqual({
+      text: 'Paste at least one ingredient line.',
+      servings: 'Enter how many servings the recipe makes.',
+    });
+    expect(recipeInputErrors({ text: '1 egg', servings: 51 })).toEqual({ servings: 'Up to 50 servings at a time.' });
+    expect(recipeInputErrors({ text: Array.from({ length: 101 }, (_, i) => `${i + 1} g salt`).join('\n'), servings: 4 })?.text).toMatch(
+      /^A recipe has at most 100 ingredient lines; this has 101\./,
+    );
   });
 });

@@ -1,38 +1,21 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { useForm, useWatch } from 'react-hook-form';
-import { z } from 'zod';
+import { useRef, useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
-import { MAX_LINES } from '../../../../shared/schemas/analyze';
+import { MAX_LINES } from '../../../../shared/recipe-limits';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 import { countOf } from '../../../lib/words';
+import { ingredientLines, SERVINGS_MAX } from '../recipe-input';
+import type { RecipeInputErrors } from '../recipe-input-schema';
 
-export const RECIPE_TEXT_MAX_LENGTH = 10_000;
-export const SERVINGS_MAX = 50;
+type CheckRecipeInput = (values: { text: string; servings: number }) => RecipeInputErrors | null;
 
-export const recipeInputSchema = z.object({
-  text: z
-    .string()
-    .max(RECIPE_TEXT_MAX_LENGTH, { error: `Keep the recipe under ${RECIPE_TEXT_MAX_LENGTH.toLocaleString('en-US')} characters.` })
-    .refine((text) => ingredientLines(text).length > 0, { error: 'Paste at least one ingredient line.' })
-    .refine((text) => ingredientLines(text).length <= MAX_LINES, {
-      error: (issue) =>
-        `A recipe has at most ${MAX_LINES} ingredient lines; this has ${ingredientLines(String(issue.input)).length}. Split it or leave out the lines that aren’t ingredients.`,
-    }),
-  servings: z
-    .number({ error: 'Enter how many servings the recipe makes.' })
-    .int({ error: 'Use a whole number of servings.' })
-    .min(1, { error: 'A recipe makes at least 1 serving.' })
-    .max(SERVINGS_MAX, { error: `Up to ${SERVINGS_MAX} servings at a time.` }),
-});
+/** The form's checks (and zod with them), fetched at the first submit rather than with the Kitchen. */
+function loadChecks(): Promise<CheckRecipeInput> {
+  return import('../recipe-input-schema').then((m) => m.recipeInputErrors);
+}
 
-export type RecipeInput = z.infer<typeof recipeInputSchema>;
-
-/** The non-blank lines of pasted text, trimmed: what the server will read one by one. */
-export function ingredientLines(text: string): string[] {
-  return text
-    .split(/\r?\n/)
-    .map((line) => line.trim())
-    .filter((line) => line.length > 0);
+/** What an `<input type="number">` holds, as a number: NaN when empty. */
+function servingsNumber(raw: string): number {
+  return raw.trim() === '' ? Number.NaN : Number(raw);
 }
 
 const PLACEHOLDER = [
@@ -63,32 +46,54 @@ export function RecipeInputForm({
   submitLabel = 'Analyse recipe',
   submittingLabel = 'Analysing…',
 }: RecipeInputFormProps) {
-  const {
-    register,
-    handleSubmit,
-    control,
-    formState: { errors, isSubmitting },
-  } = useForm({
-    resolver: zodResolver(recipeInputSchema),
-    defaultValues: { text: defaultText, servings: defaultServings },
-  });
-  const text = useWatch({ control, name: 'text' }) ?? '';
+  const [text, setText] = useState(defaultText);
+  const [servings, setServings] = useState(String(defaultServings));
+  const [errors, setErrors] = useState<RecipeInputErrors>({});
+  const [checking, setChecking] = useState(false);
+  // after the first submit, every change is checked again (and its message cleared once it is right)
+  const check = useRef<CheckRecipeInput | null>(null);
+  const textRef = useRef<HTMLTextAreaElement>(null);
+  const servingsRef = useRef<HTMLInputElement>(null);
   const lineCount = ingredientLines(text).length;
 
-  const submit = handleSubmit(async (values: RecipeInput) => {
-    await onSubmit(values.text, values.servings);
-  });
+  const recheck = (values: { text: string; servings: string }) => {
+    if (check.current) setErrors(check.current({ text: values.text, servings: servingsNumber(values.servings) }) ?? {});
+  };
+
+  const submit = async (event: FormEvent<HTMLFormElement>) => {
+    event.preventDefault();
+    setChecking(true);
+    try {
+      check.current ??= await loadChecks();
+      const values = { text, servings: servingsNumber(servings) };
+      const found = check.current(values);
+      setErrors(found ?? {});
+      if (found) {
+        (found.text ? textRef : servingsRef).current?.focus();
+        return;
+      }
+      await onSubmit(values.text, values.servings);
+    } finally {
+      setChecking(false);
+    }
+  };
 
   return (
-    <form onSubmit={submit} noValidate className="flex flex-col gap-5">
+    <form onSubmit={(event) => void submit(event)} noValidate className="flex flex-col gap-5">
       <TextAreaField
         label="Ingredients"
         hint="Paste the ingredient list, one ingredient per line, as the recipe writes it: cups, spoons, ounces, grams or counts all work."
         placeholder={PLACEHOLDER}
         rows={10}
         spellCheck={false}
-        error={errors.text?.message}
-        {...register('text')}
+        error={errors.text}
+        name="text"
+        ref={textRef}
+        value={text}
+        onChange={(event) => {
+          setText(event.target.value);
+          recheck({ text: event.target.value, servings });
+        }}
       />
       <p className="-mt-3 text-sm text-ink-soft" aria-live="polite">
         {lineCount === 0
@@ -105,10 +110,16 @@ export function RecipeInputForm({
           max={SERVINGS_MAX}
           step={1}
           containerClassName="w-48"
-          error={errors.servings?.message}
-          {...register('servings', { valueAsNumber: true })}
+          error={errors.servings}
+          name="servings"
+          ref={servingsRef}
+          value={servings}
+          onChange={(event) => {
+            setServings(event.target.value);
+            recheck({ text, servings: event.target.value });
+          }}
         />
-        <Button type="submit" size="lg" loading={submitting || isSubmitting} loadingLabel={submittingLabel}>
+        <Button type="submit" size="lg" loading={submitting || checking} loadingLabel={submittingLabel}>
           {submitLabel}
         </Button>
       </div>

@@ -1,6 +1,6 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import { Button } from '../../../components/ui/button';
-import { SERVINGS_MAX } from './recipe-input-form';
+import { SERVINGS_MAX } from '../recipe-input';
 
 const COMMIT_DELAY_MS = 500;
 

@@ -1,5 +1,5 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
-import { RECIPE_SORTS, type RecipeSort } from '../../../../shared/schemas/recipes';
+import { RECIPE_SORTS, type RecipeSort } from '../../../../shared/recipe-sorts';
 import { recipeListQuery } from '../../../lib/api/recipes';
 
 export { RECIPE_SORTS, type RecipeSort };
