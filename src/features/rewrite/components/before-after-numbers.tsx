@@ -116,8 +116,9 @@ export function BeforeAfterNumbers({
         {
           key: 'label',
           header: 'Per serving',
+          headerClassName: 'max-sm:pr-0.5',
           rowHeader: true,
-          className: (r) => cx('py-2', r.part ? 'pl-3 font-semibold text-ink-soft' : 'font-bold'),
+          className: (r) => cx('py-2 max-sm:pr-0.5', r.part ? 'pl-3 font-semibold text-ink-soft' : 'font-bold'),
           cell: (r) => {
             const target = r.key === 'density' ? null : targetFor(r.key, targets);
             const met = target ? meetsTarget(target.target, target.value, after) : null;
@@ -134,14 +135,35 @@ export function BeforeAfterNumbers({
             );
           },
         },
-        { key: 'before', header: 'As written', align: 'right', className: 'py-2 whitespace-nowrap max-sm:px-1', cell: (r) => shown(r.key, before) },
-        { key: 'after', header: afterLabel, align: 'right', className: 'py-2 font-bold whitespace-nowrap max-sm:px-1', cell: (r) => shown(r.key, after) },
+        {
+          key: 'before',
+          header: 'As written',
+          headerClassName: 'max-sm:px-0.5',
+          align: 'right',
+          className: 'py-2 whitespace-nowrap max-sm:px-0.5',
+          cell: (r) => shown(r.key, before),
+        },
+        {
+          key: 'after',
+          header: afterLabel,
+          headerClassName: 'max-sm:px-0.5',
+          align: 'right',
+          className: 'py-2 font-bold whitespace-nowrap max-sm:px-0.5',
+          cell: (r) => shown(r.key, after),
+        },
         {
           key: 'change',
           header: 'Change',
+          headerClassName: 'max-sm:pl-0.5',
           align: 'right',
-          className: 'py-2',
-          cell: (r) => <DifferenceText difference={r.key === 'density' ? densityDifference(before, after) : nutrientDifference(r.key, before, after)} />,
+          className: 'py-2 max-sm:pl-0.5',
+          // on a phone "−154 kcal" may break after its number, so the four columns fit a 360 px screen
+          cell: (r) => (
+            <DifferenceText
+              className="max-sm:flex-wrap max-sm:justify-end max-sm:gap-x-1 max-sm:whitespace-normal"
+              difference={r.key === 'density' ? densityDifference(before, after) : nutrientDifference(r.key, before, after)}
+            />
+          ),
         },
       ]}
     />
