@@ -1,11 +1,10 @@
 /** The Kitchen's paste form without its checks (recipe-input-schema.ts, loaded on submit): limits and the lines it reads. */
+import { readRecipeText } from '../../../shared/recipe-text';
+
 export const RECIPE_TEXT_MAX_LENGTH = 10_000;
 export const SERVINGS_MAX = 50;
 
-/** The non-blank lines of pasted text, trimmed: what the server will read one by one. */
+/** The ingredient lines of pasted text, as the server will read them (title, headings and method set aside). */
 export function ingredientLines(text: string): string[] {
-  return text
-    .split(/\r?\n/)
-    .map((line) => line.trim())
-    .filter((line) => line.length > 0);
+  return readRecipeText(text).ingredients;
 }

@@ -82,7 +82,7 @@ export function RecipeInputForm({
     <form onSubmit={(event) => void submit(event)} noValidate className="flex flex-col gap-5">
       <TextAreaField
         label="Ingredients"
-        hint="Paste the ingredient list, one ingredient per line, as the recipe writes it: cups, spoons, ounces, grams or counts all work."
+        hint="Paste the ingredient list as the recipe writes it, one per line: cups, spoons, ounces, grams or counts all work. A whole recipe page works too; its title, headings and method are set aside."
         placeholder={PLACEHOLDER}
         rows={10}
         spellCheck={false}
