@@ -215,6 +215,21 @@ describe('paths that were broken', () => {
         .map((el) => `${el.tagName.toLowerCase()} ${el.textContent?.slice(0, 40)}`),
     );
     expect(await horizontalOverflow(page), wide.join(' | ')).toBeLessThanOrEqual(0);
+    // nor does anything scroll sideways inside the page (the numbers table once did, inside its card)
+    const scrolling = await page.evaluate(() =>
+      Array.from(document.querySelectorAll('main *'))
+        .filter((el) => el.scrollWidth > el.clientWidth + 1 && ['auto', 'scroll'].includes(getComputedStyle(el).overflowX))
+        .map((el) => `${el.tagName.toLowerCase()} ${el.scrollWidth} > ${el.clientWidth}: ${el.textContent?.slice(0, 40)}`),
+    );
+    expect(scrolling).toEqual([]);
+    // the explanation names the foods as the cook says them, not by their catalogue names ("Pasta, dry, enriched")
+    const reasons = await page.evaluate(() =>
+      Array.from(document.querySelectorAll('main p'))
+        .map((p) => p.textContent?.trim() ?? '')
+        .filter((text) => /^(Swap|Replace) .* — /.test(text)),
+    );
+    expect(reasons.length).toBeGreaterThan(0);
+    for (const reason of reasons) expect(reason.split(' — ')[0]).not.toMatch(/[A-Z][a-z]+, [a-z]/);
     await screenshot(page, 'paths-rewrite-result-360');
     await page.close();
   });
