@@ -15,7 +15,8 @@ import type { CatalogueFood } from '../../shared/food';
 import { recordFallback } from '../../shared/fallbacks';
 import { aliasVocabulary, buildAliasIndex, DEFAULT_ALIASES, type AliasIndex, type AliasTable } from './alias-index';
 import { createAliasResolver, MAX_PARTIAL_CONFIDENCE } from './alias-resolution';
-import { buildFoodIndex, type FoodIndex } from './food-index';
+import { buildFoodIndex, STATE_WORDS, type FoodIndex } from './food-index';
+import { words } from './normalise-phrase';
 import { createPhrasePreparer } from './prepare-phrase';
 import { createFoodRanker } from './rank-foods';
 import { createSpellingCorrector } from './spelling';
@@ -257,19 +258,22 @@ export const DESCRIBING_WORDS = new Set([
  */
 export function choicesIn(text: string, splitAnd = true): string[] {
   const out: string[] = [];
-  const orParts = text
-    .split(/\s+or\s+|\s*\/\s*/i)
-    .map((p) => p.trim())
-    .filter(Boolean);
+  const state = leadingState(
+    text
+      .split(/\s+or\s+|\s*\/\s*/i)
+      .map((p) => p.trim())
+      .filter(Boolean),
+  );
+  const orParts = state.parts;
   if (orParts.length > 1) {
     const last = orParts[orParts.length - 1].split(/\s+/);
     const head = last[last.length - 1];
     for (let i = 0; i < orParts.length; i++) {
       const n = orParts[i].split(/\s+/).length;
       const shared = i < orParts.length - 1 && last.length >= 2 && n <= 2 && !orParts[i].endsWith(head);
-      if (shared) out.push(`${orParts[i]} ${head}`);
+      if (shared) out.push(state.withState(`${orParts[i]} ${head}`));
       // "green or Puy lentils", "distilled or spring water": a describing word alone is no food.
-      if (!(shared && n === 1 && DESCRIBING_WORDS.has(orParts[i].toLowerCase()))) out.push(orParts[i]);
+      if (!(shared && n === 1 && DESCRIBING_WORDS.has(orParts[i].toLowerCase()))) out.push(state.withState(orParts[i]));
     }
   }
   if (splitAnd)
@@ -279,6 +283,20 @@ export function choicesIn(text: string, splitAnd = true): string[] {
       .filter(Boolean))
       out.push(p);
   return [...new Set(out)].filter((p) => p !== text);
+}
+
+/**
+ * "cooked jasmine or other white rice": a state written once, before the first choice, is every
+ * choice's. Returns the choices without it and a function that gives it back to each way of a choice.
+ */
+export function leadingState(parts: string[]): { parts: string[]; withState: (way: string) => string } {
+  const state = parts.length > 1 ? words(parts[0])[0] : undefined;
+  if (state === undefined || !STATE_WORDS.has(state)) return { parts, withState: (way) => way };
+  const first = parts[0].replace(/^\W*\S+\s*/, '');
+  return {
+    parts: first ? [first, ...parts.slice(1)] : parts.slice(1),
+    withState: (way) => (words(way).includes(state) ? way : `${state} ${way}`),
+  };
 }
 
 function copyOf(m: FoodMatch): FoodMatch {
