@@ -5,7 +5,7 @@
  * when the phrase adds a modifier the alias food lacks ("*whole* buttermilk"), a version of the alias
  * food that has it is chosen, or the alias loses confidence.
  */
-import { containedAliases, type AliasIndex } from './alias-index';
+import { containedAliases, type AliasEntry, type AliasIndex } from './alias-index';
 import { FLAG_BABY, FLAG_CANNED, FLAG_FROZEN, FLAG_MIXED_DISH, FLAG_SNACK, FLAG_STATE, STATE_WORDS, VARIANT_WORDS, type FoodIndex, type IndexedFood } from './food-index';
 import { PIECE_WORDS, PREPARATION_WORDS } from './normalise-phrase';
 import type { PreparedQuery, Term } from './prepare-phrase';
@@ -52,32 +52,37 @@ const MODIFIER_WORDS = new Set([
 /** Words that join a food to what it is packed or served in. */
 const MEDIUM_WORDS = new Set(['with', 'in']);
 
+/** A partial alias's food, scored; `standIn` names the phrase when the food only stands in for it. */
+export interface AliasMatch extends Ranked {
+  standIn: string | null;
+}
+
 export interface AliasResolver {
   /** The food of an alias that is the whole phrase (all words, without preparation words, or food words only). */
-  exactAlias(q: PreparedQuery): number | null;
+  exactAlias(q: PreparedQuery): AliasEntry | null;
   /** The alias inside the phrase that covers most of it, scored; `ranked` offers the versions of its food. */
-  bestPartialAlias(q: PreparedQuery, ranked: Ranked[]): Ranked | null;
+  bestPartialAlias(q: PreparedQuery, ranked: Ranked[]): AliasMatch | null;
   /** Re-rank toward foods whose names share most words with the alias food. */
   boostSiblings(ranked: Ranked[], aliasPosition: number): void;
 }
 
 export function createAliasResolver(aliases: AliasIndex, index: FoodIndex, ranker: FoodRanker): AliasResolver {
-  function exactAlias(q: PreparedQuery): number | null {
+  function exactAlias(q: PreparedQuery): AliasEntry | null {
     const keys = [q.all.join(' '), q.all.filter((w) => !PREPARATION_WORDS.has(w)).join(' ')];
     // "crushed pineapple with juice" is pineapple in its juice, not "pineapple juice": filler words
     // are left out only when none of them joins a food to what it is packed in.
     if (!q.all.some((w) => MEDIUM_WORDS.has(w))) keys.push(q.content.join(' '));
     for (const k of keys) {
       const hit = aliases.exact.get(k);
-      if (hit) return hit.position;
+      if (hit) return hit;
     }
     return null;
   }
 
-  function bestPartialAlias(q: PreparedQuery, ranked: Ranked[]): Ranked | null {
+  function bestPartialAlias(q: PreparedQuery, ranked: Ranked[]): AliasMatch | null {
     const withoutPrep = q.all.filter((w) => !PREPARATION_WORDS.has(w));
     const hits = [...containedAliases(aliases, q.all), ...containedAliases(aliases, withoutPrep)];
-    let best: Ranked | null = null;
+    let best: AliasMatch | null = null;
     for (const hit of hits) {
       const aliasWords = new Set(hit.entry.words);
       const f = index.foods[hit.entry.position];
@@ -132,7 +137,7 @@ export function createAliasResolver(aliases: AliasIndex, index: FoodIndex, ranke
           score *= SIBLING_SWAP_FACTOR;
         } else if (unmet.length) score *= UNMET_MODIFIER_FACTOR;
       }
-      if (!best || score > best.score) best = { position, score };
+      if (!best || score > best.score) best = { position, score, standIn: hit.entry.standIn };
     }
     return best;
   }

@@ -50,6 +50,8 @@ export interface FoodMatch {
   corrected: string[];
   /** false when a name match's leading words are not in the phrase ("potato starch" → "Bread, …, potato extract") */
   nameHeadMatched: boolean;
+  /** the alias phrase whose food SR28 lacks, when the food only stands in for it ("pancetta" → bacon) */
+  standIn: string | null;
 }
 
 export interface MatchOptions {
@@ -70,7 +72,16 @@ export interface FoodMatcher {
   readonly skippedAliases: readonly string[];
 }
 
-const noMatch = (): FoodMatch => ({ food: null, confidence: 0, alternatives: [], via: 'none', unknownWords: [], corrected: [], nameHeadMatched: false });
+const noMatch = (): FoodMatch => ({
+  food: null,
+  confidence: 0,
+  alternatives: [],
+  via: 'none',
+  unknownWords: [],
+  corrected: [],
+  nameHeadMatched: false,
+  standIn: null,
+});
 
 export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable | Record<string, string> = DEFAULT_ALIASES): FoodMatcher {
   const table: AliasTable = isAliasTable(aliasTable) ? aliasTable : { aliases: aliasTable };
@@ -98,13 +109,14 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
       // "mascarpone" read as "macaroni" is no exact alias: it is trusted as far as the reading is close.
       const confidence = q.corrected.length ? Math.min(MAX_PARTIAL_CONFIDENCE, q.closeness) : ALIAS_EXACT_CONFIDENCE;
       return {
-        food: index.foods[exact].food,
+        food: index.foods[exact.position].food,
         confidence,
-        alternatives: alternativesWithout(exact),
+        alternatives: alternativesWithout(exact.position),
         via: 'alias',
         unknownWords: [],
         corrected: q.corrected,
         nameHeadMatched: true,
+        standIn: exact.standIn,
       };
     }
 
@@ -121,6 +133,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
         unknownWords,
         corrected: q.corrected,
         nameHeadMatched: true,
+        standIn: partial.standIn,
       };
     }
     if (best && bestScore >= MATCH_CONFIDENCE_FLOOR) {
@@ -133,6 +146,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
         unknownWords,
         corrected: q.corrected,
         nameHeadMatched: ranker.coverageOf(f, q).headMatched,
+        standIn: null,
       };
     }
     return {
@@ -143,6 +157,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
       unknownWords,
       corrected: q.corrected,
       nameHeadMatched: false,
+      standIn: null,
     };
   }
 
@@ -195,7 +210,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
       const q = prepare(query);
       const namesBrand = q.terms.some((t) => t.alternatives.some((a) => index.brandedOnly[a.id] === 1));
       const out: FoodSearchHit[] = [];
-      const exact = resolver.exactAlias(q);
+      const exact = resolver.exactAlias(q)?.position ?? null;
       if (exact !== null) out.push({ food: index.foods[exact].food, score: 1 });
       for (const r of ranker.rank(q, namesBrand, n + 1)) {
         if (r.position === exact) continue;

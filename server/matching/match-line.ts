@@ -276,6 +276,12 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
         );
       }
     }
+    // "pancetta" is weighed as bacon, the nearest SR28 food, and the cook is told so.
+    if (match.standIn && food === match.food) {
+      check = true;
+      confidence = Math.min(confidence, MISSING_MODIFIER_CONFIDENCE);
+      warnings.push(`The catalogue has no “${match.standIn}”: weighed as its nearest food, ${food.name}. Check this match or add it from its label.`);
+    }
     if (leavesOfAnotherPart(food, phrase)) {
       check = true;
       confidence = Math.min(confidence, MISSING_MODIFIER_CONFIDENCE);
