@@ -6,7 +6,18 @@
  * food that has it is chosen, or the alias loses confidence.
  */
 import { containedAliases, type AliasEntry, type AliasIndex } from './alias-index';
-import { FLAG_BABY, FLAG_CANNED, FLAG_FROZEN, FLAG_MIXED_DISH, FLAG_SNACK, FLAG_STATE, STATE_WORDS, VARIANT_WORDS, type FoodIndex, type IndexedFood } from './food-index';
+import {
+  FLAG_BABY,
+  FLAG_CANNED,
+  FLAG_FROZEN,
+  FLAG_MIXED_DISH,
+  FLAG_SNACK,
+  FLAG_STATE,
+  STATE_WORDS,
+  VARIANT_WORDS,
+  type FoodIndex,
+  type IndexedFood,
+} from './food-index';
 import { PIECE_WORDS, PREPARATION_WORDS } from './normalise-phrase';
 import type { PreparedQuery, Term } from './prepare-phrase';
 import type { FoodRanker, Ranked } from './rank-foods';

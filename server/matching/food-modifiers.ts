@@ -92,6 +92,8 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   { label: 'macadamia', asks: ['macadamia'] },
   { label: 'peanut', asks: ['peanut'], honouredBy: [['peanuts']] },
   { label: 'sunflower', asks: ['sunflower'] },
+  // "candied ginger" is no raw ginger root.
+  { label: 'candied', asks: ['candied'], honouredBy: [['candies'], ['candy'], ['candied'], ['glazed']] },
   // "sherry vinegar" is no distilled vinegar: SR28 has none made from sherry.
   { label: 'sherry', asks: ['sherry'] },
   // "vanilla bean" is no snap bean, "nutritional yeast" no baker's yeast.
