@@ -62,6 +62,9 @@ describe('foods recipes name otherwise (data/aliases.json)', () => {
     ['1 cup salted peanuts', '16090', /^Peanuts, all types, dry-roasted, with salt$/],
     // whole mustard seed is SR28's one mustard seed food, whatever its colour; never prepared yellow mustard
     ['2 tbsp yellow mustard seeds', '02024', /^Spices, mustard seed, ground$/],
+    // the chocolate a chip is made of: "white chocolate chips" are no semisweet chips
+    ['1 cup white chocolate chips', '19087', /^Candies, white chocolate$/],
+    ['1 cup milk chocolate chips', '19120', /^Candies, milk chocolate$/],
     ['1 lb goat meat, cubed', '17168', /^Goat, raw$/],
     ['2 Vidalia onions', '11294', /^Onions, sweet, raw$/],
     ['2 cups shredded roast chicken', '05013', /^Chicken, broilers or fryers, meat only, roasted$/],
