@@ -75,6 +75,11 @@ const NAMED_OTHERWISE: Record<string, string> = {
   pimientos: 'as pimiento',
   sherry: 'a fortified wine; cooks mean dry sherry (common practice), SR28 "wine, dessert, dry"',
   'cooking sherry': 'as sherry',
+  chicharrones: 'fried pork skin (common practice), SR28 "pork skins"',
+  'urad dal': 'split black gram (common practice), SR28 "mungo beans"',
+  'moong dal': 'split mung beans (common practice)',
+  'chana dal': 'split chickpeas (common practice)',
+  passata: 'sieved tomato purée (common practice)',
 };
 
 function keyWords(text: string): Set<string> {

@@ -65,6 +65,16 @@ describe('foods recipes name otherwise (data/aliases.json)', () => {
     // the chocolate a chip is made of: "white chocolate chips" are no semisweet chips
     ['1 cup white chocolate chips', '19087', /^Candies, white chocolate$/],
     ['1 cup milk chocolate chips', '19120', /^Candies, milk chocolate$/],
+    ['¼ cup chocolate hazelnut spread', '19125', /^Chocolate-flavored hazelnut spread$/],
+    ['36 wonton wrappers', '18368', /^Wonton wrappers \(includes egg roll wrappers\)$/],
+    ['2 cups chicharrones', '19041', /^Snacks, pork skins, plain$/],
+    // dal are dried split pulses: urad is SR28's mungo bean, moong its mung bean, chana a chickpea
+    ['1 cup urad dal', '16083', /^Mungo beans, mature seeds, raw$/],
+    ['1 cup moong dal', '16080', /^Mung beans, mature seeds, raw$/],
+    ['1 cup chana dal', '16056', /^Chickpeas \(garbanzo beans, bengal gram\), mature seeds, raw$/],
+    // passata is sieved tomato purée
+    ['2 cups tomato passata', '11547', /^Tomato products, canned, puree, without salt added$/],
+    ['1 tbsp cacao powder', '19165', /^Cocoa, dry powder, unsweetened$/],
     ['1 lb goat meat, cubed', '17168', /^Goat, raw$/],
     ['2 Vidalia onions', '11294', /^Onions, sweet, raw$/],
     ['2 cups shredded roast chicken', '05013', /^Chicken, broilers or fryers, meat only, roasted$/],
