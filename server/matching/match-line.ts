@@ -238,7 +238,9 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
       const canned = matcher.match(variant.replace(/\s+/g, ' '));
       // A phrase that says "canned" itself takes any confident canned food over a fresh one.
       const enough = saysCanned ? MATCH_CONFIDENCE_FLOOR : VARIANT_SHARE * match.confidence;
-      if (isCanned(canned.food) && canned.confidence >= enough) {
+      // "1 can coconut cream" is not the sweetened cream of coconut: a can adds no sugar the line did not ask for.
+      const addsSugar = /\bsweetened\b/i.test(canned.food?.name ?? '') && !/\bsweet/i.test(phrase);
+      if (isCanned(canned.food) && canned.confidence >= enough && !addsSugar) {
         match = canned;
         break;
       }

@@ -162,6 +162,14 @@ describe('a packing medium is not a food', () => {
   });
 });
 
+describe('a can adds no sugar the line did not ask for', () => {
+  it('"1 can coconut cream" is coconut cream, not SR28\'s sweetened cream of coconut', () => {
+    expect(longDesc.get('12116')).toBe('Nuts, coconut cream, canned, sweetened');
+    expectFood('1 (14 oz) can coconut cream', '12115', /^Nuts, coconut cream, raw \(liquid expressed from grated meat\)$/);
+    expect(line('7.5 oz sweetened cream of coconut').food?.sourceId).toBe('12116');
+  });
+});
+
 describe('foods SR28 lacks, weighed as their nearest food and flagged', () => {
   it.each([
     ['4 oz pancetta, diced', 'pancetta', '10123', /^Pork, cured, bacon, unprepared$/],
