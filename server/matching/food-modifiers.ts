@@ -108,7 +108,8 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   ...colour('green'),
   ...colour('yellow'),
   // "fresh tarragon" matched to dried tarragon: a tenth of the water, ten times the nutrients per gram.
-  { label: 'fresh', asks: ['fresh'], brokenBy: [['dried'], ['dehydrated'], ['dry'], ['canned'], ['ground']] },
+  // A raw food is a fresh one when the line's match was not ("fresh green chiles" → raw, not canned, chiles).
+  { label: 'fresh', asks: ['fresh'], honouredBy: [['raw']], brokenBy: [['dried'], ['dehydrated'], ['dry'], ['canned'], ['ground']] },
 ];
 
 function hasSequence(ws: readonly string[], seq: readonly string[]): boolean {

@@ -119,8 +119,11 @@ export function isGenericPhrase(phrase: string): string | null {
 function honouringFood(candidates: readonly CatalogueFood[], asked: readonly FoodModifier[], matched: CatalogueFood, phrase: string): CatalogueFood | null {
   const phraseWords = new Set(foodWordsOf(phrase));
   const kept = words(matched.name).filter((w) => phraseWords.has(w));
+  // A fresh food is the same food raw: "Peppers, hot chili, green, raw" for "…, canned", never "Oat bran, raw" for "Cereals, oats".
+  const sameHead = FRESH !== undefined && asked.includes(FRESH) ? words(matched.name)[0] : null;
   for (const f of candidates) {
     if (f.id === matched.id || f.branded || !asked.every((m) => positivelyHonours(f, m))) continue;
+    if (sameHead !== null && words(f.name)[0] !== sameHead) continue;
     const fw = new Set(words(f.name));
     if (kept.every((w) => fw.has(w) || asked.some((m) => m.asks.includes(w)))) return f;
   }

@@ -127,6 +127,13 @@ describe('modifiers that name another food are honoured, or the line says which 
     expect(line('1 tbsp walnut oil').food?.name).toMatch(/^Oil, walnut/);
   });
 
+  it('"fresh" is honoured by the same food raw: fresh green chiles are not the canned ones', () => {
+    expectFood('2 fresh green chiles, sliced', '11670', /^Peppers, hot chili, green, raw$/);
+    expectFood('1 cup grated fresh coconut', '12104', /^Nuts, coconut meat, raw$/);
+    // …but only the same food: a handful of oats is not "Oat bran, raw"
+    expect(line('2 handfuls of oats').food?.name).toMatch(/oats/i);
+  });
+
   it('"candied ginger" is no raw ginger root: flagged, the word named', () => {
     const l = line('2 tbsp candied ginger, cut into strips');
     expect(l.checkMatch).toBe(true);
