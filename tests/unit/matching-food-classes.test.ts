@@ -75,6 +75,9 @@ describe('foods recipes name otherwise (data/aliases.json)', () => {
     // passata is sieved tomato purée
     ['2 cups tomato passata', '11547', /^Tomato products, canned, puree, without salt added$/],
     ['1 tbsp cacao powder', '19165', /^Cocoa, dry powder, unsweetened$/],
+    // a ground herb is the dried one
+    ['1 tsp ground thyme', '02042', /^Spices, thyme, dried$/],
+    ['1 tsp ground rosemary', '02036', /^Spices, rosemary, dried$/],
     ['1 lb goat meat, cubed', '17168', /^Goat, raw$/],
     ['2 Vidalia onions', '11294', /^Onions, sweet, raw$/],
     ['2 cups shredded roast chicken', '05013', /^Chicken, broilers or fryers, meat only, roasted$/],
