@@ -203,6 +203,8 @@ describe('quantities (USDA SR28 WEIGHT.txt household weights; ratios *common pra
     expect(ratioOf('baked-cheese-sauce-milk-to-cottage-cheese-or-greek-yogurt', '01016')).toBe(1);
     expect(ratioOf('baked-cheese-sauce-milk-to-cottage-cheese-or-greek-yogurt', '01256')).toBe(1);
     expect(ratioOf('fried-rice-half-cauliflower', '11135')).toBe(1);
+    expect(ratioOf('milk-to-protein-fortified-skim', '01087')).toBe(1);
+    expect(ratioOf('milk-to-protein-fortified-skim', '01084')).toBe(1);
   });
 
   it('shares and scales: half the butter in a quick bread, half the flour, half the oil for sautéing, a quarter off the sugar', () => {
@@ -224,7 +226,13 @@ describe('quantities (USDA SR28 WEIGHT.txt household weights; ratios *common pra
       expect(rule(id).band, id).toEqual([0.9, 1.1]);
       expect(rule(id).moreInMixedDish, id).toBe(1.5);
     }
-    for (const id of ['whole-milk-to-lower-fat', 'milk-in-sauce-to-evaporated-skim', 'pasta-to-whole-wheat', 'cooked-white-rice-to-brown'])
+    for (const id of [
+      'whole-milk-to-lower-fat',
+      'milk-to-protein-fortified-skim',
+      'milk-in-sauce-to-evaporated-skim',
+      'pasta-to-whole-wheat',
+      'cooked-white-rice-to-brown',
+    ])
       expect(rule(id).band, id).toEqual([0.9, 1.1]);
     expect(rule('egg-in-custard-to-whites').maxShare).toBe(0.5);
     expect(rule('egg-in-custard-to-whites').functions).toEqual(['custard']);
