@@ -51,7 +51,9 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
   const pieCrust = lines.some((l) => /\b(pie crust|pastry|biscuit dough|puff pastry)\b/i.test(`${l.phrase} ${l.food?.name ?? ''}`));
   const layered = /\b(layer|lasagna|casserole|baked|gratin)\b/i.test(comments);
   const cheese = has('melting-cheese', 'fresh-cheese', 'hard-cheese');
-  const mashedTop = lines.some((l, i) => kinds[i] === 'starch' && /\bpotato/i.test(l.food?.name ?? '')) && has('meat');
+  const wet = g('liquid', 'tomato', 'sauce');
+  // potatoes over a meat filling (a cottage or shepherd's pie); potatoes in a quarter or more of liquid are a stew's
+  const mashedTop = lines.some((l, i) => kinds[i] === 'starch' && /\bpotato/i.test(l.food?.name ?? '')) && has('meat') && wet < 0.25 * total;
   // eggs set with milk around bread or fillings in the oven: a strata, quiche or breakfast casserole
   const custard = has('egg') && has('milk', 'cream') && !has('flour') && g('egg', 'milk', 'cream') >= 0.3 * total;
   if (
@@ -73,7 +75,6 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
   if (has('wrap') && cheese) return bakedSauce >= 0.1 * total || has('fresh-cheese') ? 'assembled-bake' : 'griddle-saute';
   // a loaf or meatballs: mince held together by crumbs and egg
   if (has('meat') && has('crumbs') && has('egg') && !has('starch', 'wrap')) return 'assembled-bake';
-  const wet = g('liquid', 'tomato', 'sauce');
   if (has('starch') && has('cream', 'milk', 'melting-cheese', 'hard-cheese', 'egg') && wet < 0.25 * total) return 'stovetop-sauce';
   if (wet >= 0.25 * total || (has('legume') && has('tomato'))) return 'simmered-dish';
   if (has('meat', 'fish', 'wrap')) return 'griddle-saute';
