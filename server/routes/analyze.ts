@@ -17,8 +17,8 @@ export function analyzeRouter(sequelize: Sequelize, limit: RequestHandler) {
     const canUse = (food: StoredFood) => canSeeFood(food, viewer);
     const response = toAnalyzeResponse(analyzeLines(engine, requestLines(input), input.servings, (f) => canUse(f as StoredFood), ownFoodsFor(engine, viewer)));
     if (input.lines === undefined && input.text !== undefined) {
-      const { title, servings, setAside } = readRecipeText(input.text);
-      response.fromText = { title, servings, setAside };
+      const { title, servings, method, setAside } = readRecipeText(input.text);
+      response.fromText = { title, servings, method, setAside };
     }
     res.json(response);
   });

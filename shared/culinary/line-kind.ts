@@ -1,5 +1,7 @@
 import type { CulinaryLine } from './types';
 
+const FRESH_HERB = /^(parsley, fresh|coriander \(cilantro\) leaves|chives, raw)/i;
+
 /**
  * What kind of ingredient a line is, before the dish is known: read from the food's catalogue roles
  * and name, and the words the cook wrote. Dish type and line function are built on these kinds.
@@ -75,7 +77,8 @@ export function lineKind(line: CulinaryLine): LineKind {
     (LIQUID.test(line.phrase) && !has(roles, 'dairy-milk', 'cream'))
   )
     return 'liquid';
-  if (has(roles, 'herb-spice')) return 'seasoning';
+  // SR28 files parsley, cilantro and chives with the vegetables; in a dish they are herbs that season it
+  if (has(roles, 'herb-spice') || FRESH_HERB.test(name)) return 'seasoning';
   if (AROMATIC.test(line.phrase) && has(roles, 'vegetable', 'herb-spice', 'other')) return 'aromatic';
   if (/^soup,.*condensed/i.test(name)) return 'condensed-soup';
   if (/\b(catsup|ketchup|mustard, prepared|worcestershire|salsa|barbecue sauce)\b/i.test(name)) return 'sauce';

@@ -90,5 +90,5 @@ export interface AnalyzeResponse {
   totalGrams: number;
   volumeMl: number;
   /** for pasted text: what was read around the ingredient lines and left out of them */
-  fromText?: { title: string | null; servings: number | null; setAside: SetAsideLine[] };
+  fromText?: { title: string | null; servings: number | null; method: string[]; setAside: SetAsideLine[] };
 }

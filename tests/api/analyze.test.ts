@@ -95,6 +95,7 @@ describe('POST /api/analyze', () => {
     expect(res.body.fromText.title).toBe('Weeknight mac and cheese');
     expect(res.body.fromText.servings).toBe(6);
     expect(res.body.fromText.setAside.filter((l: { why: string }) => l.why === 'method')).toHaveLength(2);
+    expect(res.body.fromText.method).toEqual(['Boil the macaroni.', 'Make the sauce.']);
     const onlyHeadings = await request(t.app).post('/api/analyze').send({ text: 'Ingredients\nMethod\nStir.', servings: 2 }).expect(400);
     expect(onlyHeadings.body.error.details.fieldErrors.text).toBeDefined();
   });

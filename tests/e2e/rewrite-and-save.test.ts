@@ -95,4 +95,42 @@ describe('paste, rewrite, save, compare', () => {
     await screenshot(page, 'compare-versions');
     await page.close();
   });
+
+  it('reads a whole pasted recipe page: only its ingredients are weighed, its servings offered, its title and method kept', async () => {
+    const page = await live.browser.newPage({ viewport: { width: 390, height: 844 } });
+    await page.goto(`${live.server.url}/sign-up`);
+    await page.getByRole('textbox', { name: 'Display name' }).fill('Odile Fenn');
+    await page.getByRole('textbox', { name: 'E-mail' }).fill(uniqueEmail('e2e-page-paste'));
+    await page.getByLabel('Password', { exact: true }).fill('a sturdy kitchen password');
+    await page.getByText('I cook for myself or my household').click();
+    await page.getByRole('button', { name: /create/i }).click();
+    // at phone width the account menu sits behind "Menu": ask the server whether the cook is signed in
+    const signedIn = async () => Boolean(((await (await page.request.get(`${live.server.url}/api/auth/session`)).json()) as { user?: unknown }).user);
+    await expect.poll(signedIn, { timeout: 15_000 }).toBe(true);
+
+    const recipePage = ['Sunday lasagna', 'Serves 8', '', 'Ingredients', LASAGNA, '', 'Method', '1. Brown the beef.', '2. Layer and bake 45 minutes.'].join(
+      '\n',
+    );
+    await page.goto(`${live.server.url}/`);
+    await page.getByRole('textbox', { name: /ingredients/i }).fill(recipePage);
+    expect(await page.getByText('8 ingredient lines.').isVisible()).toBe(true);
+    await page.getByRole('button', { name: /analyse/i }).click();
+    await expect.poll(() => page.getByText('Only the ingredients were weighed').isVisible(), { timeout: 15_000 }).toBe(true);
+    expect(await page.getByText(/the title “Sunday lasagna”, “serves 8”, 2 headings, 2 method steps/).isVisible()).toBe(true);
+    expect(await page.getByRole('row').filter({ hasText: 'Brown the beef' }).count()).toBe(0);
+    await page.getByRole('button', { name: 'Use 8 servings' }).click();
+    await expect.poll(() => page.getByRole('button', { name: 'Use 8 servings' }).count(), { timeout: 10_000 }).toBe(0);
+
+    await page.getByRole('button', { name: 'Rewrite', exact: true }).click();
+    await expect.poll(() => page.getByText('What changes, and why').isVisible(), { timeout: 20_000 }).toBe(true);
+    expect(await page.getByRole('textbox', { name: 'Recipe title' }).inputValue()).toBe('Sunday lasagna');
+    await page.getByRole('button', { name: 'Save to my recipe book' }).click();
+    await expect.poll(() => page.url(), { timeout: 15_000 }).toMatch(/\/recipes\/\d+/);
+    const id = Number(/\/recipes\/(\d+)/.exec(page.url())![1]);
+    const saved = (await (await page.request.get(`${live.server.url}/api/recipes/${id}`)).json()) as { title: string; servings: number; method: string };
+    expect(saved.title).toBe('Sunday lasagna');
+    expect(saved.servings).toBe(8);
+    expect(saved.method).toBe('Brown the beef.\nLayer and bake 45 minutes.');
+    await page.close();
+  });
 });

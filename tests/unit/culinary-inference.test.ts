@@ -58,6 +58,14 @@ describe('dish type from the whole recipe', () => {
     expect(inferDishType(recipe(PASTA, BUTTER(57), ['all-purpose flour', 31, FLOUR[2], '20', ['flour']], MILK(732), CHEDDAR(), crumbs))).toBe('assembled-bake');
   });
 
+  it("reads potatoes over a meat filling as a shepherd's pie (a bake) but potatoes in a pot of broth as a stew", () => {
+    const potatoes = (g: number): Spec => ['russet potatoes', g, 'Potatoes, russet, flesh and skin, raw', '11', ['potato']];
+    const lamb: Spec = ['ground lamb', 680, 'Lamb, ground, raw', '17', ['ground-meat', 'red-meat'], undefined, '17224', 23];
+    const broth = (g: number): Spec => ['beef broth', g, 'Soup, beef broth or bouillon canned, ready-to-serve', '06', ['broth-stock']];
+    expect(inferDishType(recipe(potatoes(907), BUTTER(57), MILK(122), lamb, ONION, broth(240), SALT))).toBe('assembled-bake');
+    expect(inferDishType(recipe(lamb, potatoes(680), ONION, broth(960), SALT))).toBe('simmered-dish');
+  });
+
   it('reads chili as a simmered dish, a quesadilla as a griddle dish, a tuna salad as a cold dish', () => {
     const tomatoes: Spec = ['crushed tomatoes', 794, 'Tomatoes, crushed, canned', '11', ['tomato-sauce']];
     const beans: Spec = ['kidney beans, drained', 440, 'Beans, kidney, red, mature seeds, canned', '16', ['legume']];
@@ -73,6 +81,14 @@ describe('dish type from the whole recipe', () => {
 });
 
 describe('line function', () => {
+  it('reads fresh parsley, cilantro and chives as herbs that season the dish, though SR28 files them with the vegetables', () => {
+    const parsley: Spec = ['chopped fresh parsley', 15, 'Parsley, fresh', '11', ['vegetable'], undefined, '11297'];
+    const cilantro: Spec = ['cilantro', 8, 'Coriander (cilantro) leaves, raw', '11', ['vegetable'], undefined, '11165'];
+    const dish = readDish(recipe(PASTA, BUTTER(57), CHEDDAR(), parsley, cilantro, ONION));
+    expect(dish.lines.slice(3, 5).map((l) => l.role)).toEqual(['seasoning', 'seasoning']);
+    expect(dish.lines[5].role).not.toBe('seasoning');
+  });
+
   it('holds salt, leaveners, extracts and aromatics, and says why', () => {
     const read = readDish(recipe(FLOUR, MILK(480), EGGS, SUGAR(25), POWDER, SALT, BUTTER(40), VANILLA, ONION));
     const roles = read.lines.map((l) => l.role);

@@ -128,6 +128,8 @@ function KitchenRewrite({ recipe, unitSystem, kitchen }: { recipe: RewriteRecipe
   // A recipe created for a draft whose version then failed: a retry adds the version to it, not a second recipe.
   const created = useRef<{ draft: string; id: number } | null>(null);
   const { source, setSource } = kitchen;
+  const suggestedTitle = kitchen.textReading?.title ?? undefined;
+  const pastedMethod = kitchen.textReading?.method.join('\n') || undefined;
   const editedSinceOpened = source !== null && JSON.stringify(lineInputs(kitchen.lines)) !== source.openedLines;
 
   const saveAction = useMemo((): RewriteSaveAction => {
@@ -174,11 +176,12 @@ function KitchenRewrite({ recipe, unitSystem, kitchen }: { recipe: RewriteRecipe
     }
     return {
       kind: 'save',
+      suggestedTitle,
       save: async (draft: RewriteDraft) => {
         const key = JSON.stringify([draft.title, draft.servings, draft.originalLines]);
         let id = created.current?.draft === key ? created.current.id : null;
         if (id === null) {
-          const recipe = await createRecipe({ title: draft.title, servings: draft.servings, lines: draft.originalLines });
+          const recipe = await createRecipe({ title: draft.title, servings: draft.servings, lines: draft.originalLines, method: pastedMethod });
           id = recipe.id;
           created.current = { draft: key, id };
         }
@@ -187,7 +190,7 @@ function KitchenRewrite({ recipe, unitSystem, kitchen }: { recipe: RewriteRecipe
         navigate(`/recipes/${id}`);
       },
     };
-  }, [auth.status, auth.user, location, createRecipe, saveVersion, navigate, source, editedSinceOpened, setSource]);
+  }, [auth.status, auth.user, location, createRecipe, saveVersion, navigate, source, editedSinceOpened, setSource, suggestedTitle, pastedMethod]);
 
   return (
     <LazyRewritePanel

@@ -36,6 +36,8 @@ export interface Kitchen {
   analysingText: boolean;
   /** how many pasted recipes have been answered on this page: the results take focus when it grows */
   pastesAnswered: number;
+  /** what the last paste held besides ingredient lines (title, servings, headings, method), until the next paste */
+  textReading: NonNullable<AnalyzeResponse['fromText']> | null;
   /** the analysis on screen no longer answers the lines (a request is on its way or failed) */
   stale: boolean;
   error: unknown;
@@ -71,6 +73,7 @@ export function useKitchen(): Kitchen {
   const inFlight = useRef<AbortController | null>(null);
   const lastRequest = useRef<{ request: AnalyzeRequest; onAnswer: (response: AnalyzeResponse) => void } | null>(null);
   const [pastesAnswered, setPastesAnswered] = useState(0);
+  const [textReading, setTextReading] = useState<NonNullable<AnalyzeResponse['fromText']> | null>(null);
   const [removed, setRemoved] = useState<{ line: KitchenLine; index: number } | null>(null);
 
   const update = useCallback((change: (s: KitchenSnapshot) => KitchenSnapshot) => {
@@ -138,6 +141,7 @@ export function useKitchen(): Kitchen {
           answered: { keys: lines.map((l) => l.key), lines: lineInputs(lines), servings },
         }));
         setPastesAnswered((n) => n + 1);
+        setTextReading(analysis.fromText ?? null);
       });
     },
     [send, update],
@@ -177,6 +181,7 @@ export function useKitchen(): Kitchen {
     analysing,
     analysingText: analysing && mutation.variables !== undefined && 'text' in mutation.variables.request && mutation.variables.request.text !== undefined,
     pastesAnswered,
+    textReading,
     stale: stale || (analysing && Boolean(analysis)),
     error: mutation.isError ? mutation.error : null,
     analyseText,
@@ -203,6 +208,7 @@ export function useKitchen(): Kitchen {
     },
     openVersion: (lines, servings, source) => {
       setRemoved(null);
+      setTextReading(null);
       editAndAsk(() => ({
         ...emptyKitchen(),
         pastedText: lines.map((l) => l.input).join('\n'),
@@ -220,6 +226,7 @@ export function useKitchen(): Kitchen {
       inFlight.current?.abort();
       reset();
       setRemoved(null);
+      setTextReading(null);
       update(() => emptyKitchen());
     },
   };

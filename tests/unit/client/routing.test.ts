@@ -34,6 +34,8 @@ describe('navItemsFor', () => {
 describe('recipe input', () => {
   it('reads non-blank trimmed lines', () => {
     expect(ingredientLines('  2 cups milk \r\n\n 1 egg\n   ')).toEqual(['2 cups milk', '1 egg']);
+    // the counter and the 100-line check count what the server will weigh, not the method under it
+    expect(ingredientLines('Ingredients\n2 cups milk\nMethod\n1. Warm the milk.\n2. Serve.')).toEqual(['2 cups milk']);
   });
   it('validates text and servings', () => {
     expect(recipeInputSchema.safeParse({ text: '1 egg', servings: 2 }).success).toBe(true);

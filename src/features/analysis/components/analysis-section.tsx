@@ -12,6 +12,7 @@ import { AnalysisLines, type FoodSearchSlotArgs } from './analysis-lines';
 import { DishPanels, ServingHeadline } from './dish-figures';
 import { DISH_TYPE_WORDS } from '../../../../shared/culinary/infer-dish';
 import { ServingsField } from './servings-field';
+import { SetAsideNote } from './set-aside-note';
 import { countOf } from '../../../lib/words';
 
 export interface AnalysisSectionProps {
@@ -86,6 +87,7 @@ export function AnalysisSection({ kitchen, unitSystem, renderFoodSearch, foodHre
       {analysis && !kitchen.stale && (
         <IncompleteTotalsAlert lineNumbers={incompleteLineNumbers(analysis.lines.map((l) => ({ food: l.food, grams: l.grams })))} />
       )}
+      {kitchen.textReading && <SetAsideNote reading={kitchen.textReading} servings={kitchen.servings} onUseServings={kitchen.setServings} />}
       {kitchen.removed && (
         <Alert
           tone="info"

@@ -5,6 +5,7 @@ import { Button } from '../../../components/ui/button';
 import { MAX_LINES } from '../../../../shared/schemas/analyze';
 import { TextAreaField, TextField } from '../../../components/ui/field';
 import { countOf } from '../../../lib/words';
+import { readRecipeText } from '../../../../shared/recipe-text';
 
 export const RECIPE_TEXT_MAX_LENGTH = 10_000;
 export const SERVINGS_MAX = 50;
@@ -27,12 +28,9 @@ export const recipeInputSchema = z.object({
 
 export type RecipeInput = z.infer<typeof recipeInputSchema>;
 
-/** The non-blank lines of pasted text, trimmed: what the server will read one by one. */
+/** The ingredient lines of pasted text, as the server will read them (title, headings and method set aside). */
 export function ingredientLines(text: string): string[] {
-  return text
-    .split(/\r?\n/)
-    .map((line) => line.trim())
-    .filter((line) => line.length > 0);
+  return readRecipeText(text).ingredients;
 }
 
 const PLACEHOLDER = [
@@ -83,7 +81,7 @@ export function RecipeInputForm({
     <form onSubmit={submit} noValidate className="flex flex-col gap-5">
       <TextAreaField
         label="Ingredients"
-        hint="Paste the ingredient list, one ingredient per line, as the recipe writes it: cups, spoons, ounces, grams or counts all work."
+        hint="Paste the ingredient list as the recipe writes it, one per line: cups, spoons, ounces, grams or counts all work. A whole recipe page works too; its title, headings and method are set aside."
         placeholder={PLACEHOLDER}
         rows={10}
         spellCheck={false}

@@ -13,6 +13,8 @@ export type RewriteSaveAction =
       save: (draft: RewriteDraft) => Promise<void>;
       /** the Kitchen holds a saved recipe: the rewrite becomes its next version, under its title */
       into?: { title: string; nextNumber: number };
+      /** a title read from the pasted recipe, offered in the empty title field */
+      suggestedTitle?: string;
     }
   | { kind: 'sign-in'; signInHref: string; signUpHref: string }
   | { kind: 'unavailable'; reason: string };
@@ -29,7 +31,7 @@ const TITLE_MAX = 200;
 
 /** Keep the rewrite: as written becomes version 1 in the recipe book, the rewrite version 2. */
 export function SaveRewrite({ action, draftFor, stale }: SaveRewriteProps) {
-  const [title, setTitle] = useState('');
+  const [title, setTitle] = useState(action.kind === 'save' ? (action.suggestedTitle ?? '').slice(0, TITLE_MAX) : '');
   const [titleError, setTitleError] = useState<string | null>(null);
   const [saving, setSaving] = useState(false);
   const [error, setError] = useState<unknown>(null);
