@@ -17,6 +17,7 @@ import { massToGrams, normaliseUnit, unitKind, volumeToMl } from '../../shared/u
 import { inchesOf, parseMeasure, sizeWordOf, stem, type MeasureInfo, type SizeWord } from './measure-text';
 import { words } from './normalise-phrase';
 import { singular } from './singular';
+import { isDrainedSolids } from './drained-share';
 
 export interface WeighedLine {
   grams: number;
@@ -397,7 +398,8 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
 
   const ask = countAsk(parsed);
   const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, new Set(words(parsed.name ?? '').map(singular)));
-  if (!chosen && ask.piece === 'can' && /\bcanned\b/i.test(food.name)) {
+  // A canned food, or one standing for a can's drained contents ("1 can lentils" → cooked lentils).
+  if (!chosen && ask.piece === 'can' && (/\bcanned\b/i.test(food.name) || opts.drained)) {
     const grams = drainedGrams(quantity * USUAL_CAN_GRAMS, opts, warnings);
     warnings.push(`No can size given: weighed as the usual 15 oz (${USUAL_CAN_GRAMS} g) can.`);
     const d = density();
@@ -408,7 +410,7 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
     return result(0, null, null, [`No household weight for ${what} of this food: give the amount in grams, ounces or cups.`]);
   }
   const each = chosen.r.portion.grams / chosen.r.portion.amount;
-  const wholeCan = chosen.r.info.pieces.includes('can') && !/drain/i.test(chosen.r.portion.measure);
+  const wholeCan = chosen.r.info.pieces.includes('can') && !/drain/i.test(chosen.r.portion.measure) && !isDrainedSolids(food);
   const grams = wholeCan ? drainedGrams(quantity * each, opts, warnings) : quantity * each;
   if (chosen.guessed) {
     const asked = ask.size ? `No "${ask.size}" weight` : ask.diameter !== null ? `No ${ask.diameter}-inch weight` : 'No size given';

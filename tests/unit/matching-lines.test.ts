@@ -85,13 +85,65 @@ describe('cans and jars', () => {
         sr28('16146', /^can drained solids$/) / sr28('16347', /total can contents/)) /
       3;
     expect(line('1 (15 oz) can black beans, drained').grams).toBeCloseTo(15 * OZ * beanShare, 0);
-    const undrained = line('1 (15 oz) can black beans');
+    const undrained = line('1 (15 oz) can black beans, undrained');
     expect(undrained.grams).toBeCloseTo(15 * OZ, 6);
+    expect(line('1 (15 oz) can black beans').grams).toBeCloseTo(15 * OZ * beanShare, 0);
     // USDA SR28 WEIGHT.txt 15121 "can (12.5 oz), drained" (315 g) of a 12.5 oz can (NIST)
     const tunaShare = sr28('15121', /12\.5 oz/) / (12.5 * OZ);
     const tuna = line('2 (5 oz) cans tuna, drained');
     expect(tuna.food?.name).toMatch(/tuna/i);
     expect(tuna.grams).toBeCloseTo(10 * OZ * tunaShare, 0);
+  });
+});
+
+describe('canned beans are drained unless the line keeps their liquid (*common practice*)', () => {
+  it('"2 cans chickpeas" is two SR28 drained cans of the drained-solids food, and says so', () => {
+    const l = line('2 cans chickpeas (or 3 cups freshly cooked chickpeas)');
+    expect(l.food?.sourceId).toBe('16358');
+    // USDA SR28 WEIGHT.txt 16358 "can drained" (253 g)
+    expect(l.grams).toBeCloseTo(2 * sr28('16358', /^can drained$/), 6);
+    expect(l.warnings.join(' ')).toMatch(/Weighed drained/);
+  });
+
+  it('the whole can, liquid and all, is the "solids and liquids" food at its SR28 can weight', () => {
+    for (const input of ['2 cans chickpeas, undrained', '2 cans chickpeas with their liquid']) {
+      const l = line(input);
+      expect(l.food?.sourceId, input).toBe('16058');
+      // USDA SR28 WEIGHT.txt 16058 "can (total can contents)" (448 g)
+      expect(l.grams, input).toBeCloseTo(2 * sr28('16058', /total can contents/), 6);
+      expect(l.warnings.join(' '), input).not.toMatch(/Weighed drained/);
+    }
+  });
+
+  it('a drained-solids food weighed by its can size keeps the drained share, never the whole can', () => {
+    // USDA SR28 WEIGHT.txt 16358 "can drained" ÷ 16058 "can (total can contents)"; 15 oz by NIST Handbook 44
+    const share = sr28('16358', /^can drained$/) / sr28('16058', /total can contents/);
+    for (const input of ['1 15-ounce can unsalted chickpeas', '1 (15 oz) can chickpeas']) {
+      const l = line(input);
+      expect(l.food?.sourceId, input).toBe('16358');
+      expect(l.grams, input).toBeCloseTo(15 * OZ * share, 0);
+    }
+  });
+
+  it('pinto and kidney beans by the can are their SR28 drained-solids foods and "1 can drained solids" portions', () => {
+    // USDA SR28 WEIGHT.txt 16146 and 16145 "can drained solids" (277 g, 266 g)
+    expect(line('1 can pinto beans').food?.sourceId).toBe('16146');
+    expect(line('1 can pinto beans').grams).toBeCloseTo(sr28('16146', /^can drained solids$/), 6);
+    expect(line('1 can kidney beans').food?.sourceId).toBe('16145');
+    expect(line('1 can kidney beans').grams).toBeCloseTo(sr28('16145', /^can drained solids$/), 6);
+  });
+
+  it("canned lentils, which SR28 lacks, are cooked lentils at the can's drained share", () => {
+    // data/drained-shares.json "lentil" (the mean of three USDA SR28 bean pairs); 5 oz by NIST Handbook 44
+    const l = line('2 5-ounce cans green or Puy lentils, drained (or 9 ounces home-cooked)');
+    expect(l.food?.sourceId).toBe('16070');
+    expect(l.grams).toBeCloseTo(10 * OZ * 0.6005, 0);
+    expect(line('1 lb lentils').food?.sourceId).toBe('16069');
+  });
+
+  it('baked and refried beans are eaten with their sauce: the whole can', () => {
+    expect(line('1 (15 oz) can refried beans').grams).toBeCloseTo(15 * OZ, 6); // NIST Handbook 44
+    expect(line('1 (15 oz) can refried beans').warnings.join(' ')).not.toMatch(/Weighed drained/);
   });
 });
 
