@@ -526,6 +526,9 @@ function weightInNote(s: LineState): void {
   if (s.quantity !== null && s.equivalents.length === 0 && s.size === null) {
     for (const note of takeParentheticals(s.description).notes) {
       if (/\b(?:from|per|makes|yields?)\b/i.test(note)) continue;
+      // "4 ½ c cooked beans, or 3 (15-ounce) cans": the size of another count's package, not this line's weight.
+      const before = s.description.slice(0, Math.max(0, s.description.indexOf(note))).replace(/[([]\s*$/, '');
+      if (/[\d½¼¾⅓⅔⅛]\s*$/.test(before)) continue;
       const mass = massRangeMidpoint(note) ?? readAmounts(note).find((a) => unitKind(a.unit) === 'mass');
       if (!mass) continue;
       s.equivalents.push(/\beach\b|\bapiece\b/i.test(note) ? { quantity: mass.quantity * s.quantity, unit: mass.unit } : mass);

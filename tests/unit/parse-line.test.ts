@@ -174,6 +174,13 @@ describe('parseLine: sizes and compound amounts', () => {
     const compound = parseLine('600 g (1 lb 5 oz) potatoes');
     expect(compound.equivalents).toEqual([{ quantity: 21, unit: 'oz' }]);
   });
+
+  it("takes a weight in a note as the line's own, but not the package size of an alternative count", () => {
+    expect(parseLine('9 lasagna noodles (about 8 oz)').equivalents).toEqual([{ quantity: 8, unit: 'oz' }]);
+    const alternative = parseLine('4 ½ c cooked cannellini beans, or 3 (15-ounce) cans, rinsed and drained');
+    expect(pick(alternative)).toEqual({ quantity: 4.5, unit: 'cup', name: 'cooked cannellini beans' });
+    expect(alternative.equivalents).toEqual([]);
+  });
 });
 
 describe('parseLine: lines without an amount', () => {
