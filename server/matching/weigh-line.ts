@@ -13,7 +13,7 @@
 import type { CatalogueFood, Portion } from '../../shared/food';
 import { recordFallback } from '../../shared/fallbacks';
 import type { ParsedLine } from '../../shared/parse-line';
-import { massToGrams, normaliseUnit, unitKind, volumeToMl } from '../../shared/units';
+import { ML_PER_CUP, ML_PER_FL_OZ, massToGrams, normaliseUnit, unitKind, volumeToMl } from '../../shared/units';
 import { inchesOf, parseMeasure, sizeWordOf, stem, type MeasureInfo, type SizeWord } from './measure-text';
 import { words } from './normalise-phrase';
 import { singular } from './singular';
@@ -311,6 +311,32 @@ function drainedGrams(grams: number, opts: WeighOptions, warnings: string[]): nu
   return grams * opts.drained.share;
 }
 
+/** Leafy foods and herbs pack under this many grams per mL: a handful of them is a loose cup. */
+const LEAFY_G_PER_ML = 0.3;
+
+/**
+ * Household measures a recipe counts that have no legal size and no SR28 portion for the food, as
+ * volumes (*common practice*, from memory): a handful is a loose cup of leaves or herbs and ¼ cup of
+ * anything denser (a handful of nuts is about 1 oz); a scoop is ½ cup (the #8 disher); a shot of
+ * espresso 1 fl oz, of anything else a 1½ fl oz jigger.
+ */
+function householdVolume(piece: string, food: CatalogueFood, density: () => number | null): { ml: number; as: string; why: string } | null {
+  if (piece === 'handful') {
+    const d = density();
+    if (d === null) return null;
+    return d < LEAFY_G_PER_ML
+      ? { ml: ML_PER_CUP, as: '1 loose cup', why: 'a handful of leaves, common practice' }
+      : { ml: ML_PER_CUP / 4, as: '¼ cup', why: 'a handful, common practice' };
+  }
+  if (piece === 'scoop') return { ml: ML_PER_CUP / 2, as: '½ cup', why: 'a #8 scoop, common practice' };
+  if (piece === 'shot') {
+    return /\b(?:espresso|coffee)\b/i.test(food.name)
+      ? { ml: ML_PER_FL_OZ, as: '1 fl oz', why: 'a shot of espresso, common practice' }
+      : { ml: 1.5 * ML_PER_FL_OZ, as: '1½ fl oz', why: 'a jigger, common practice' };
+  }
+  return null;
+}
+
 function result(grams: number, volumeMl: number | null, portionUsed: string | null, warnings: string[]): WeighedLine {
   const g = finite(grams);
   const v = volumeMl === null || !Number.isFinite(volumeMl) || volumeMl < 0 ? null : volumeMl;
@@ -404,6 +430,15 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
     warnings.push(`No can size given: weighed as the usual 15 oz (${USUAL_CAN_GRAMS} g) can.`);
     const d = density();
     return result(grams, d ? grams / d : null, null, warnings);
+  }
+  const household = !chosen && ask.piece ? householdVolume(ask.piece, food, density) : null;
+  if (household) {
+    const ml = quantity * household.ml;
+    const d = density();
+    if (d) {
+      warnings.push(`No household weight for "${parsed.unitText ?? ask.piece}" of this food: weighed as ${household.as} (${household.why}).`);
+      return result(ml * d, ml, null, warnings);
+    }
   }
   if (!chosen) {
     const what = ask.piece ? `"${parsed.unitText ?? ask.piece}"` : 'one piece';

@@ -147,6 +147,63 @@ describe('canned beans are drained unless the line keeps their liquid (*common p
   });
 });
 
+describe('bunches, sprigs and other pieces SR28 does not weigh get an honest weight, never 0 g', () => {
+  it('"1 bunch cilantro", "1 bunch green onions", "2 sprigs thyme" weigh their sourced curated rows', () => {
+    // data/curated-portions.json: *common practice* rows built on USDA SR28 11165 "9 sprigs",
+    // 11291 "1 medium", 02049 "0.5 tsp" (each row names its source)
+    expect(line('1 bunch cilantro').grams).toBeCloseTo(curatedGrams('11165', 'bunch'), 6);
+    expect(line('1 bunch green onions').food?.sourceId).toBe('11291');
+    expect(line('1 bunch green onions').grams).toBeCloseTo(curatedGrams('11291', 'bunch'), 6);
+    expect(curatedGrams('11291', 'bunch')).toBeCloseTo(7 * sr28('11291', /^medium/), 6);
+    expect(line('2 sprigs thyme').grams).toBeCloseTo(2 * curatedGrams('02049', 'sprig'), 6);
+    expect(curatedGrams('02049', 'sprig')).toBeCloseTo(sr28('02049', /^tsp$/) / 2, 6);
+    expect(line('3 sprigs rosemary, chopped').grams).toBeCloseTo(3 * sr28('02063', /^tsp$/), 6);
+  });
+
+  it('SR28\'s own sprigs are used where it has them: parsley "10 sprigs", cilantro "9 sprigs"', () => {
+    // USDA SR28 WEIGHT.txt 11297 "10 sprigs" 10 g; 11165 "9 sprigs" 20 g
+    expect(line('5 sprigs parsley').grams).toBeCloseTo(5 * sr28('11297', /^sprigs$/), 6);
+    expect(line('3 sprigs cilantro').grams).toBeCloseTo(3 * sr28('11165', /^sprigs$/), 6);
+  });
+
+  it('the zest of a lemon weighs its curated row, about 1 tbsp of peel', () => {
+    // data/curated-portions.json 09156: *common practice* on USDA SR28 09156 "1 tbsp" 6 g
+    expect(line('zest of 1 lemon').grams).toBeCloseTo(curatedGrams('09156', 'lemon, zest of'), 6);
+    expect(curatedGrams('09156', 'lemon, zest of')).toBeCloseTo(sr28('09156', /^tbsp$/), 6);
+  });
+
+  it('a count of pieces SR28 gives per ounce: "12 pecan halves" are 12 of the 19 halves in an ounce', () => {
+    // USDA SR28 WEIGHT.txt 12142 "oz (19 halves)" 28.35 g
+    const l = line('12 pecan halves');
+    expect(l.food?.sourceId).toBe('12142');
+    expect(l.grams).toBeCloseTo((12 * sr28('12142', /19 halves/)) / 19, 6);
+  });
+
+  it('a label serving that states its volume is a volume portion: ice cream by the cup and the scoop', () => {
+    // USDA SR28 WEIGHT.txt 19095 "serving 1/2 cup" 66 g; a scoop is ½ cup (*common practice*, from memory)
+    const half = sr28('19095', /^serving 1\/2 cup$/);
+    expect(line('1 cup vanilla ice cream').grams).toBeCloseTo(2 * half, 6);
+    const scoops = line('2 scoops vanilla ice cream');
+    expect(scoops.grams).toBeCloseTo(2 * half, 6);
+    expect(scoops.warnings.join(' ')).toMatch(/½ cup/);
+  });
+
+  it('a handful is a loose cup of leaves and ¼ cup of anything denser, and says so (*common practice*)', () => {
+    // USDA SR28 WEIGHT.txt 11959 arugula "1 cup" 20 g (the leaf row aside); 12151 pistachios "1 cup" 123 g
+    const arugula = line('2 large handfuls of arugula');
+    expect(arugula.grams).toBeCloseTo(2 * sr28('11959', /^cup$/), 6);
+    expect(arugula.warnings.join(' ')).toMatch(/handful/);
+    expect(line('a handful of pistachios').grams).toBeCloseTo(sr28('12151', /^cup$/) / 4, 6);
+  });
+
+  it('every line that still weighs 0 g says why', () => {
+    for (const input of ['1 bunch dandelion greens', '1 loaf French bread', 'a splash of milk', '2 heads radicchio', 'salt']) {
+      const l = line(input);
+      if (l.grams === 0) expect(l.warnings.length, input).toBeGreaterThan(0);
+    }
+  });
+});
+
 describe('modifiers that name another food are honoured or reported', () => {
   it('"turkey pepperoni": no such food, so the nearest one, a warning naming "turkey", low confidence', () => {
     const l = line('4 oz turkey pepperoni');
