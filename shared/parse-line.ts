@@ -319,7 +319,7 @@ const PASSES: readonly ((s: LineState) => void)[] = [
 ];
 
 /** "3-4 ounce", "6- to 8-ounce", "2-to 3-pound": a range of weights written before the food. */
-const SIZE_RANGE = new RegExp(`^(${QUANTITY_SOURCE})\\s*-?\\s*(?:-|to)\\s*(${QUANTITY_SOURCE})[-\\s]*([a-z]+)\\.?(?=[\\s-])[-\\s]*`, 'i');
+const SIZE_RANGE = new RegExp(`^(${QUANTITY_SOURCE})\\s*-?\\s*(?:-|–|—|to)\\s*(${QUANTITY_SOURCE})[-\\s]*([a-z]+)\\.?(?=[\\s-])[-\\s]*`, 'i');
 
 /** "1 3-4 ounce tomato", "2 6- to 8-ounce salmon fillets": each piece weighs the middle of the range. */
 function sizeRangeAfterCount(s: LineState): void {
@@ -368,11 +368,15 @@ function sizeGluedToQuantity(s: LineState): void {
   }
 }
 
+/** Volume units a size word may come before. */
+const SIZED_SPOONFULS = new Set(['pinch', 'dash']);
+
 /** "1 lg bunch basil", "2 sm sprigs rosemary": a size word before the counted unit. */
 function sizeWordBeforeCountedUnit(s: LineState): void {
   if (s.unit && SIZE_UNITS.has(s.unit)) {
     const lead = takeLeadingUnit(s.description);
-    if (lead && unitKind(lead.unit) === 'count' && !SIZE_UNITS.has(lead.unit)) {
+    // "1 lg pinch paprika": a pinch, dash or handful sized by the word before it.
+    if (lead && (unitKind(lead.unit) === 'count' || SIZED_SPOONFULS.has(lead.unit)) && !SIZE_UNITS.has(lead.unit)) {
       s.sizeText = s.unitText;
       s.unit = lead.unit;
       s.unitText = lead.unitText;
@@ -521,6 +525,28 @@ function amountInNote(s: LineState): void {
   }
 }
 
+/** ", about 8 ounces each", ", 150 grams each", ", about 1/4-1/2 pound": a weight right after a comma. */
+const WEIGHT_AFTER_COMMA = /^(?:about|around|roughly|approximately|approx\.?|~)?\s*(.+)$/i;
+
+/** The line's weight written after a comma, outside parentheses, or null. */
+function weightAfterComma(description: string, count: number): Amount | null {
+  for (const segment of takeParentheticals(description).rest.split(',').slice(1)) {
+    const text = WEIGHT_AFTER_COMMA.exec(segment.trim())?.[1] ?? '';
+    let amount = massRangeMidpoint(text);
+    let after = '';
+    if (!amount) {
+      const read = readAmount(text);
+      amount = read?.amount ?? null;
+      after = read ? text.slice(read.text.length).trim() : '';
+    }
+    if (!amount || unitKind(amount.unit) !== 'mass') continue;
+    // The weight alone, or with "each" / "total" after it: not "1 lb ground beef, 80/20", ", 2 oz of it for garnish".
+    if (after !== '' && !/^(?:each|apiece|total|in all|in total)\b/i.test(after)) continue;
+    return /^(?:each|apiece)\b/i.test(after) ? { quantity: amount.quantity * count, unit: amount.unit } : amount;
+  }
+  return null;
+}
+
 /** "9 lasagna noodles (about 8 oz)", "6 tbsp lard (about 2 ounces)": the line's weight in a note. */
 function weightInNote(s: LineState): void {
   if (s.quantity !== null && s.equivalents.length === 0 && s.size === null) {
@@ -528,12 +554,14 @@ function weightInNote(s: LineState): void {
       if (/\b(?:from|per|makes|yields?)\b/i.test(note)) continue;
       // "4 ½ c cooked beans, or 3 (15-ounce) cans": the size of another count's package, not this line's weight.
       const before = s.description.slice(0, Math.max(0, s.description.indexOf(note))).replace(/[([]\s*$/, '');
-      if (/[\d½¼¾⅓⅔⅛]\s*$/.test(before)) continue;
+      if (/[\d½¼¾⅓⅔⅛]\s*$/.test(before) && !/^(?:about|approx|approximately|around|roughly|~)/i.test(note)) continue;
       const mass = massRangeMidpoint(note) ?? readAmounts(note).find((a) => unitKind(a.unit) === 'mass');
       if (!mass) continue;
       s.equivalents.push(/\beach\b|\bapiece\b/i.test(note) ? { quantity: mass.quantity * s.quantity, unit: mass.unit } : mass);
-      break;
+      return;
     }
+    const afterComma = weightAfterComma(s.description, s.quantity);
+    if (afterComma) s.equivalents.push(afterComma);
   }
 }
 

@@ -196,6 +196,22 @@ describe('bunches, sprigs and other pieces SR28 does not weigh get an honest wei
     expect(line('a handful of pistachios').grams).toBeCloseTo(sr28('12151', /^cup$/) / 4, 6);
   });
 
+  it('a whole squash, a head of savoy or radicchio and a loaf of French bread weigh their sourced rows', () => {
+    // USDA SR28 11641 summer squash "1 medium" 196 g, borrowed for crookneck; the rest data/curated-portions.json
+    expect(line('1 md yellow squash, thinly sliced').grams).toBeCloseTo(sr28('11641', /^medium$/), 6);
+    expect(line('1 small butternut squash').grams).toBeCloseTo(curatedGrams('11485', 'small'), 6);
+    expect(line('1 head Savoy cabbage, shredded').grams).toBeCloseTo(sr28('11109', /^head, medium/), 6);
+    expect(line('1 head of radicchio').grams).toBeCloseTo(curatedGrams('11952', 'head'), 6);
+    expect(line('1 loaf French bread').grams).toBeCloseTo(16 * OZ, 1); // NIST Handbook 44: 1 lb
+  });
+
+  it('a weight the line writes after a comma beats every portion (NIST Handbook 44)', () => {
+    expect(line('4 pieces rutabaga, 150 grams each').grams).toBeCloseTo(600, 6);
+    expect(line('4 chicken breast halves, with skin and bone, about 8 ounces each').grams).toBeCloseTo(32 * OZ, 6);
+    expect(line('2 heads Treviso radicchio, about 7 ounces').grams).toBeCloseTo(7 * OZ, 6);
+    expect(line('1 4–5 lb chicken').grams).toBeCloseTo(4.5 * 16 * OZ, 6);
+  });
+
   it('every line that still weighs 0 g says why', () => {
     for (const input of ['1 bunch dandelion greens', '1 loaf French bread', 'a splash of milk', '2 heads radicchio', 'salt']) {
       const l = line(input);

@@ -181,6 +181,24 @@ describe('parseLine: sizes and compound amounts', () => {
     expect(pick(alternative)).toEqual({ quantity: 4.5, unit: 'cup', name: 'cooked cannellini beans' });
     expect(alternative.equivalents).toEqual([]);
   });
+
+  it('takes a weight written after a comma, each or in all, but no other number', () => {
+    expect(parseLine('4 pieces rutabaga, 150 grams each').equivalents).toEqual([{ quantity: 600, unit: 'g' }]);
+    expect(parseLine('2 heads Treviso radicchio, about 7 ounces').equivalents).toEqual([{ quantity: 7, unit: 'oz' }]);
+    expect(parseLine('¼ head of Napa cabbage, about 1/4-1/2 pound, cut into squares').equivalents).toEqual([{ quantity: 0.375, unit: 'lb' }]);
+    expect(parseLine('1 lb ground beef, 80/20').equivalents).toEqual([]);
+    expect(parseLine('3 eggs, 2 oz of them for glazing').equivalents).toEqual([]);
+  });
+
+  it('reads a size range written with an en dash: "1 4–5 lb chicken" is one chicken of 4½ lb', () => {
+    const chicken = parseLine('1 4–5 lb chicken');
+    expect(chicken.quantity).toBe(1);
+    expect(chicken.size).toEqual({ quantity: 4.5, unit: 'lb' });
+  });
+
+  it('reads a size word before a pinch: "1 lg pinch paprika"', () => {
+    expect(pick(parseLine('1 lg pinch Spanish paprika'))).toEqual({ quantity: 1, unit: 'pinch', name: 'Spanish paprika' });
+  });
 });
 
 describe('parseLine: lines without an amount', () => {
