@@ -296,6 +296,14 @@ describe("airy foods weigh by their own or a near food's cup, not a role default
     // USDA SR28 WEIGHT.txt 01029 "cup, shredded" (113 g): the part-skim mozzarella nearest by name
     expect(line('2 cups shredded reduced-fat mozzarella').grams).toBeCloseTo(2 * sr28('01029', /^cup, shredded$/), 6);
   });
+
+  it("raw cashews (weighed by SR28 only by the ounce) take other cashews' cups, never a spoon of coconut cream", () => {
+    // USDA SR28 WEIGHT.txt 12086 oil-roasted cashews "cup, whole" (129 g); 12085 dry-roasted "tbsp" (8.6 g)
+    expect(line('1 cup raw cashews').grams).toBeCloseTo(sr28('12086', /^cup, whole$/), 6);
+    const spoons = line('2 tbsp cashews, broken into large pieces');
+    expect(spoons.portionUsed).toMatch(/Cashew/);
+    expect(Math.abs(spoons.grams - 2 * sr28('12085', /^tbsp$/))).toBeLessThan(0.15 * 2 * sr28('12085', /^tbsp$/));
+  });
 });
 
 describe('pieces, spices and words a cook writes (classes found in the unlabelled reference lines)', () => {
