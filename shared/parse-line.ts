@@ -435,6 +435,9 @@ function parenthesisAfterAmount(s: LineState): void {
   }
 }
 
+/** Tablespoons in a stick of butter (*common practice*: the quarter-pound stick is marked in 8 tbsp). */
+const TBSP_PER_STICK = 8;
+
 /** "2 15-ounce cans chickpeas", "1 lb 4 oz ground beef", "1 cup plus 2 tbsp flour", "2 8-inch tortillas". */
 function secondAmount(s: LineState): void {
   const next = readAmount(s.description.replace(/^(?:plus|\+|and)\s+/i, ''));
@@ -442,7 +445,18 @@ function secondAmount(s: LineState): void {
     const kind = unitKind(s.unit);
     const nextKind = next.kind;
     const consumedLength = s.description.length - s.description.replace(/^(?:plus|\+|and)\s+/i, '').length + next.text.length;
-    if ((kind === 'mass' || kind === 'volume') && nextKind === kind && s.unit && s.quantity2 === null) {
+    const plus = /^(?:plus|\+|and)\s+/i.test(s.description);
+    if (s.unit === 'stick' && plus && nextKind === 'volume' && s.quantity2 === null) {
+      // "1 stick plus 2 tablespoons butter": a stick of butter is 8 tbsp (½ cup, *common practice*).
+      const sum = addAmounts({ quantity: s.quantity * TBSP_PER_STICK, unit: 'tbsp' }, next.amount);
+      if (sum) {
+        s.quantity = sum.quantity;
+        s.unit = sum.unit;
+        s.unitText = `${s.unitText} ${s.description.slice(0, consumedLength).trim()}`;
+        s.description = s.description.slice(consumedLength).trim();
+        s.flags.push('compound');
+      }
+    } else if ((kind === 'mass' || kind === 'volume') && nextKind === kind && s.unit && s.quantity2 === null) {
       const sum = addAmounts({ quantity: s.quantity, unit: s.unit }, next.amount);
       if (sum) {
         s.quantity = sum.quantity;

@@ -301,6 +301,24 @@ function densityFor(all: ReadPortion[], parsed: ParsedLine, food: CatalogueFood 
   return null;
 }
 
+/** Packages whose stated size is each one's ("2 cans (15 oz)"), whatever SR28 weighs one at. */
+const PACKAGE_PIECES = new Set(['can', 'jar', 'package', 'box', 'bag', 'bottle', 'container', 'envelope']);
+
+/**
+ * "2 sticks (16 tablespoons) butter", "2 sticks (8 oz)": a size after a counted piece that is the
+ * whole amount, because it is nearer the pieces' SR28 weight all together than one piece's.
+ */
+function sizeIsTotal(parsed: ParsedLine, food: CatalogueFood | null, all: ReadPortion[], opts: WeighOptions, sizeGrams: number): boolean {
+  const quantity = parsed.quantity ?? 0;
+  if (!food || quantity <= 1 || !(sizeGrams > 0)) return false;
+  const ask = countAsk(parsed);
+  if (!ask.piece || PACKAGE_PIECES.has(ask.piece)) return false;
+  const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, new Set(words(parsed.name ?? '').map(singular)));
+  if (!chosen || chosen.guessed) return false;
+  const each = chosen.r.portion.grams / chosen.r.portion.amount;
+  return Math.abs(sizeGrams - quantity * each) < Math.abs(sizeGrams - each);
+}
+
 /** A can's contents after draining, when the line says drained. */
 function drainedGrams(grams: number, opts: WeighOptions, warnings: string[]): number {
   if (!opts.drained) return grams;
@@ -401,15 +419,19 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
   if (size && Number.isFinite(size.quantity) && size.quantity > 0) {
     const sizeKind = unitKind(size.unit);
     if (sizeKind === 'mass') {
-      const grams = drainedGrams(quantity * (massToGrams(size.quantity, size.unit) ?? 0), opts, warnings);
+      const sizeGrams = massToGrams(size.quantity, size.unit) ?? 0;
+      const count = sizeIsTotal(parsed, food, all, opts, sizeGrams) ? 1 : quantity;
+      const grams = drainedGrams(count * sizeGrams, opts, warnings);
       if (!food) return result(grams, null, null, [WARNING_NO_FOOD]);
       const d = density();
       return result(grams, d ? grams / d : null, null, warnings);
     }
     if (sizeKind === 'volume') {
-      const ml = quantity * (volumeToMl(size.quantity, size.unit) ?? 0);
-      if (!food) return result(0, ml, null, [WARNING_NO_FOOD]);
+      const sizeMl = volumeToMl(size.quantity, size.unit) ?? 0;
+      if (!food) return result(0, quantity * sizeMl, null, [WARNING_NO_FOOD]);
       const v = bestVolumePortion(all, parsed, size.unit, food);
+      const gPerMl = v ? v.gPerMl : food.densityGPerMl;
+      const ml = (sizeIsTotal(parsed, food, all, opts, sizeMl * gPerMl) ? 1 : quantity) * sizeMl;
       if (v) return result(ml * v.gPerMl, ml, v.r.portion.label, warnings);
       roleDensityNote();
       return result(ml * food.densityGPerMl, ml, null, warnings);

@@ -212,6 +212,17 @@ describe('bunches, sprigs and other pieces SR28 does not weigh get an honest wei
     expect(line('1 4–5 lb chicken').grams).toBeCloseTo(4.5 * 16 * OZ, 6);
   });
 
+  it('butter by the stick: "plus 2 tablespoons" adds to the stick, a parenthetical after two sticks is their total', () => {
+    // USDA SR28 WEIGHT.txt 01145 "tbsp" (14.2 g) and "stick" (113 g); a stick is 8 tbsp (*common practice*)
+    expect(line('1 stick plus 2 tablespoons butter').grams).toBeCloseTo(10 * sr28('01001', /^tbsp$/), 6);
+    expect(line('1 stick plus 2 tablespoons unsalted butter (5 oz / 142g), chilled').grams).toBeCloseTo(5 * OZ, 6); // NIST Handbook 44
+    expect(line('2 sticks (16 tablespoons) cold unsalted butter').grams).toBeCloseTo(16 * sr28('01145', /^tbsp$/), 6);
+    expect(line('2 sticks (8oz or 228g) unsalted butter').grams).toBeCloseTo(8 * OZ, 6); // NIST Handbook 44
+    // a can's size stays each can's: 2 × 15 oz (NIST Handbook 44) × the chickpea drained share (USDA SR28 16358 ÷ 16058)
+    const share = sr28('16358', /^can drained$/) / sr28('16058', /total can contents/);
+    expect(line('2 cans (15 oz) chickpeas').grams).toBeCloseTo(30 * OZ * share, 0);
+  });
+
   it('every line that still weighs 0 g says why', () => {
     for (const input of ['1 bunch dandelion greens', '1 loaf French bread', 'a splash of milk', '2 heads radicchio', 'salt']) {
       const l = line(input);
