@@ -313,10 +313,31 @@ const PASSES: readonly ((s: LineState) => void)[] = [
   unitThePackageMissed,
   sizeAfterCountedUnit,
   equivalentAfterUnit,
+  partOfCountedFruit,
   amountInNote,
   weightInNote,
   dozens,
 ];
+
+/** "Zest of 2 lemons", "grated zest of ½ orange", "juice of two limes": the count is the fruit's. */
+const PART_OF_FRUIT = new RegExp(
+  `^((?:[a-z]+\\s+){0,3}?)(zest|juice|peel|rind|zest\\s+and\\s+juice|juice\\s+and\\s+zest)\\s+(?:of|from)\\s+(${QUANTITY_SOURCE}|an?|one|two|three|four|half(?:\\s+an?)?)\\s+(?:(large|medium|small|lg|md|sm)\\s+)?(\\S.*)$`,
+  'i',
+);
+const FRUIT_COUNT_WORDS: Record<string, number> = { a: 1, an: 1, one: 1, two: 2, three: 3, four: 4, half: 0.5, 'half a': 0.5, 'half an': 0.5 };
+
+function partOfCountedFruit(s: LineState): void {
+  if (s.quantity !== null) return;
+  const m = PART_OF_FRUIT.exec(s.description);
+  if (!m) return;
+  const written = m[3].toLowerCase().replace(/\s+/g, ' ');
+  const quantity = FRUIT_COUNT_WORDS[written] ?? quantityValue(written);
+  if (quantity === null || !(quantity > 0)) return;
+  s.quantity = quantity;
+  if (m[4]) s.sizeText = m[4];
+  s.description = `${m[1]}${m[2]} of ${m[5]}`;
+  s.flags = s.flags.filter((f) => f !== 'needs-amount');
+}
 
 /** "3-4 ounce", "6- to 8-ounce", "2-to 3-pound": a range of weights written before the food. */
 const SIZE_RANGE = new RegExp(`^(${QUANTITY_SOURCE})\\s*-?\\s*(?:-|–|—|to)\\s*(${QUANTITY_SOURCE})[-\\s]*([a-z]+)\\.?(?=[\\s-])[-\\s]*`, 'i');

@@ -166,10 +166,24 @@ describe('bunches, sprigs and other pieces SR28 does not weigh get an honest wei
     expect(line('3 sprigs cilantro').grams).toBeCloseTo(3 * sr28('11165', /^sprigs$/), 6);
   });
 
-  it('the zest of a lemon weighs its curated row, about 1 tbsp of peel', () => {
+  it('the zest of a lemon weighs its curated row, about 1 tbsp of peel, however the count is written', () => {
     // data/curated-portions.json 09156: *common practice* on USDA SR28 09156 "1 tbsp" 6 g
     expect(line('zest of 1 lemon').grams).toBeCloseTo(curatedGrams('09156', 'lemon, zest of'), 6);
     expect(curatedGrams('09156', 'lemon, zest of')).toBeCloseTo(sr28('09156', /^tbsp$/), 6);
+    expect(line('Zest of 2 lemons, finely chopped').grams).toBeCloseTo(2 * curatedGrams('09156', 'lemon, zest of'), 6);
+    expect(line('Zest of two lemons').grams).toBeCloseTo(2 * curatedGrams('09156', 'lemon, zest of'), 6);
+    expect(line('grated zest of ½ orange').grams).toBeCloseTo(curatedGrams('09216', 'orange, zest of') / 2, 6);
+    // USDA SR28 09152 "1 lemon yields" 48 g of juice
+    expect(line('juice of ½ lemon').grams).toBeCloseTo(sr28('09152', /^lemon yields$/) / 2, 6);
+  });
+
+  it('the zest of a lime (SR28 has no lime peel) is a teaspoon, flagged, never the whole fruit', () => {
+    // data/curated-portions.json 09159 "lime, zest of" (*common practice*, on USDA SR28 09156 "1 tsp" 2 g)
+    const zest = line('zest of 1 lime');
+    expect(zest.grams).toBeCloseTo(curatedGrams('09159', 'lime, zest of'), 6);
+    expect(zest.checkMatch).toBe(true);
+    // USDA SR28 09159 "1 fruit (2" dia)" 67 g
+    expect(line('2 limes').grams).toBeCloseTo(2 * sr28('09159', /^fruit/), 6);
   });
 
   it('a count of pieces SR28 gives per ounce: "12 pecan halves" are 12 of the 19 halves in an ounce', () => {

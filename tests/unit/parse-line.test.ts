@@ -196,6 +196,17 @@ describe('parseLine: sizes and compound amounts', () => {
     expect(chicken.size).toEqual({ quantity: 4.5, unit: 'lb' });
   });
 
+  it('reads the count of the fruit a zest or juice comes from, in digits or words', () => {
+    expect(pick(parseLine('Zest of 2 lemons, finely chopped'))).toEqual({ quantity: 2, unit: null, name: 'Zest of lemons' });
+    expect(parseLine('grated zest of ½ orange').quantity).toBe(0.5);
+    expect(parseLine('Zest of two lemons').quantity).toBe(2);
+    expect(parseLine('zest from half a lemon').quantity).toBe(0.5);
+    expect(parseLine('juice of ½ lemon').needsAmount).toBe(false);
+    const large = parseLine('Finely grated zest of 1 large lemon');
+    expect(large.quantity).toBe(1);
+    expect(large.sizeText).toBe('large');
+  });
+
   it('reads a size word before a pinch: "1 lg pinch paprika"', () => {
     expect(pick(parseLine('1 lg pinch Spanish paprika'))).toEqual({ quantity: 1, unit: 'pinch', name: 'Spanish paprika' });
   });
