@@ -319,9 +319,12 @@ const PASSES: readonly ((s: LineState) => void)[] = [
   dozens,
 ];
 
-/** "Zest of 2 lemons", "grated zest of ½ orange", "juice of two limes": the count is the fruit's. */
+/**
+ * "Zest of 2 lemons", "grated zest of ½ orange", "juice of two limes": the count is the fruit's;
+ * "leaves from 2 sprigs mint", "kernels from 1 large ear of corn": the sprigs' or ears'.
+ */
 const PART_OF_FRUIT = new RegExp(
-  `^((?:[a-z]+\\s+){0,3}?)(zest|juice|peel|rind|zest\\s+and\\s+juice|juice\\s+and\\s+zest)\\s+(?:of|from)\\s+(${QUANTITY_SOURCE}|an?|one|two|three|four|half(?:\\s+an?)?)\\s+(?:(large|medium|small|lg|md|sm)\\s+)?(\\S.*)$`,
+  `^((?:[a-z]+\\s+){0,3}?)(zest|juice|peel|rind|zest\\s+and\\s+juice|juice\\s+and\\s+zest|leaves|kernels)\\s+(?:(?:cut|picked|stripped)\\s+)?(?:of|from)\\s+(${QUANTITY_SOURCE}|an?|one|two|three|four|half(?:\\s+an?)?)\\s+(?:(large|medium|small|lg|md|sm)\\s+)?(\\S.*)$`,
   'i',
 );
 const FRUIT_COUNT_WORDS: Record<string, number> = { a: 1, an: 1, one: 1, two: 2, three: 3, four: 4, half: 0.5, 'half a': 0.5, 'half an': 0.5 };
@@ -335,7 +338,15 @@ function partOfCountedFruit(s: LineState): void {
   if (quantity === null || !(quantity > 0)) return;
   s.quantity = quantity;
   if (m[4]) s.sizeText = m[4];
-  s.description = `${m[1]}${m[2]} of ${m[5]}`;
+  const part = m[2].toLowerCase();
+  if (part === 'leaves' || part === 'kernels') {
+    // "leaves from 2 sprigs mint", "kernels cut from 2 ears of corn": that many sprigs or ears of the food.
+    const lead = takeLeadingUnit(m[5]);
+    if (!lead || unitKind(lead.unit) !== 'count') return;
+    s.unit = lead.unit;
+    s.unitText = lead.unitText;
+    s.description = `${m[1]}${lead.rest.replace(/^of\s+/i, '')}`;
+  } else s.description = `${m[1]}${m[2]} of ${m[5]}`;
   s.flags = s.flags.filter((f) => f !== 'needs-amount');
 }
 

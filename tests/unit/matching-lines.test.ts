@@ -160,6 +160,12 @@ describe('bunches, sprigs and other pieces SR28 does not weigh get an honest wei
     expect(line('3 sprigs rosemary, chopped').grams).toBeCloseTo(3 * sr28('02063', /^tsp$/), 6);
   });
 
+  it('leaves from sprigs and kernels from ears weigh the sprigs and ears', () => {
+    // data/curated-portions.json 02065 "sprig" (*common practice*); USDA SR28 11167 "ear, medium … yields" 102 g
+    expect(line('leaves from 2 sprigs spearmint').grams).toBeCloseTo(2 * curatedGrams('02065', 'sprig'), 6);
+    expect(line('Kernels cut from 2 ears of corn').grams).toBeCloseTo(2 * sr28('11167', /^ear, medium/), 6);
+  });
+
   it('SR28\'s own sprigs are used where it has them: parsley "10 sprigs", cilantro "9 sprigs"', () => {
     // USDA SR28 WEIGHT.txt 11297 "10 sprigs" 10 g; 11165 "9 sprigs" 20 g
     expect(line('5 sprigs parsley').grams).toBeCloseTo(5 * sr28('11297', /^sprigs$/), 6);

@@ -207,6 +207,12 @@ describe('parseLine: sizes and compound amounts', () => {
     expect(large.sizeText).toBe('large');
   });
 
+  it('reads the sprigs or ears that leaves or kernels come from', () => {
+    expect(pick(parseLine('leaves from 2 sprigs spearmint'))).toEqual({ quantity: 2, unit: 'sprig', name: 'spearmint' });
+    expect(pick(parseLine('Kernels cut from 2 ears of corn'))).toEqual({ quantity: 2, unit: 'ear', name: 'corn' });
+    expect(parseLine('Leaves from one sprig of thyme').quantity).toBe(1);
+  });
+
   it('reads a size word before a pinch: "1 lg pinch paprika"', () => {
     expect(pick(parseLine('1 lg pinch Spanish paprika'))).toEqual({ quantity: 1, unit: 'pinch', name: 'Spanish paprika' });
   });
