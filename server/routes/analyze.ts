@@ -4,6 +4,7 @@ import { analyzeRequestSchema } from '../../shared/schemas/analyze';
 import { parse } from '../middleware/validate';
 import { getFoodEngine } from '../services/food-engine';
 import { analyzeLines, requestLines, toAnalyzeResponse } from '../services/analysis';
+import { readRecipeText } from '../../shared/recipe-text';
 import { canSeeFood, ownFoodsFor } from '../services/custom-foods';
 import type { StoredFood } from '../services/catalogue';
 
@@ -14,7 +15,12 @@ export function analyzeRouter(sequelize: Sequelize, limit: RequestHandler) {
     const engine = await getFoodEngine(sequelize);
     const viewer = req.user ?? null;
     const canUse = (food: StoredFood) => canSeeFood(food, viewer);
-    res.json(toAnalyzeResponse(analyzeLines(engine, requestLines(input), input.servings, (f) => canUse(f as StoredFood), ownFoodsFor(engine, viewer))));
+    const response = toAnalyzeResponse(analyzeLines(engine, requestLines(input), input.servings, (f) => canUse(f as StoredFood), ownFoodsFor(engine, viewer)));
+    if (input.lines === undefined && input.text !== undefined) {
+      const { title, servings, setAside } = readRecipeText(input.text);
+      response.fromText = { title, servings, setAside };
+    }
+    res.json(response);
   });
   return router;
 }

@@ -1,4 +1,5 @@
 import { parseLine, type ParsedLine } from '../../shared/parse-line';
+import { readRecipeText } from '../../shared/recipe-text';
 import { readDish } from '../../shared/culinary/infer-dish';
 import type { CulinaryLine } from '../../shared/culinary/types';
 import { divideNutrients, nutrientsForGrams, sumNutrients, zeroNutrients, type Nutrients } from '../../shared/nutrition';
@@ -14,17 +15,18 @@ import { badRequest } from '../lib/http-error';
 import { matchOwnFood } from './own-food-match';
 import { readLine } from './line-readings';
 
-/** Splits pasted text into ingredient lines: blank lines and bullet marks dropped. */
+/** The ingredient lines of pasted text: headings, a title, "Serves 4" and method steps set aside. */
 export function textToLines(text: string): LineInput[] {
-  return text
-    .split(/\r\n|\r|\n/)
-    .map((line) => line.replace(/^\s*(?:[-*•·▢□☐]|\d+[.)](?=\s))\s*/u, '').trim())
-    .filter((line) => line.length > 0)
-    .map((input) => ({ input }));
+  return readRecipeText(text).ingredients.map((input) => ({ input }));
 }
 
 export function requestLines(request: Pick<AnalyzeRequest, 'text' | 'lines'>): LineInput[] {
   const lines = request.lines ?? textToLines(request.text ?? '');
+  if (request.lines === undefined && lines.length === 0) {
+    throw badRequest('The text has no ingredient lines: paste them one per line, under an "Ingredients" heading if the recipe has one.', {
+      fieldErrors: { text: ['No ingredient lines found.'] },
+    });
+  }
   if (lines.length > MAX_LINES) {
     throw badRequest(`A recipe has at most ${MAX_LINES} ingredient lines.`, { fieldErrors: { text: [`At most ${MAX_LINES} lines.`] } });
   }

@@ -1,4 +1,5 @@
 import { badRequest } from '../lib/http-error';
+import { readRecipeText } from '../../shared/recipe-text';
 import { exportedVersionsSchema, type ExportedVersion } from '../../shared/schemas/recipe-jsonld';
 
 export interface ImportedRecipe {
@@ -126,56 +127,18 @@ function exportedVersions(value: unknown): ExportedVersion[] {
   return parsed.data;
 }
 
-const HEADING = /^\s*(?:#{1,6}\s*)?([A-Za-z][A-Za-z ]{1,40}?)\s*:?\s*$/;
-const INGREDIENT_HEADINGS = /^(ingredients?|you(?:'|’)ll need|what you need|shopping)$/i;
-const METHOD_HEADINGS = /^(method|instructions?|directions?|steps?|preparation)$/i;
-const SERVINGS_LINE = /\b(?:serves|servings?|makes|yield|portions?)\b\s*:?\s*(\d+)/i;
-
 /** A plain-text or Markdown recipe: a title, an Ingredients section, an optional Method section. */
 function fromText(text: string): ImportedRecipe {
-  const lines = text.split(/\r\n|\r|\n/);
-  let title = '';
-  let servings: number | null = null;
-  let section: 'head' | 'ingredients' | 'method' | 'notes' = 'head';
-  const ingredients: string[] = [];
-  const method: string[] = [];
-  const notes: string[] = [];
-  for (const raw of lines) {
-    const line = raw.trim();
-    if (!line) continue;
-    const servingsMatch = line.match(SERVINGS_LINE);
-    if (servingsMatch && servings === null && line.length < 60) {
-      servings = Number(servingsMatch[1]);
-      continue;
-    }
-    const heading = line.match(HEADING);
-    if (heading && INGREDIENT_HEADINGS.test(heading[1].trim())) {
-      section = 'ingredients';
-      continue;
-    }
-    if (heading && METHOD_HEADINGS.test(heading[1].trim())) {
-      section = 'method';
-      continue;
-    }
-    if (!title && section === 'head') {
-      title = line.replace(/^#+\s*/, '').trim();
-      continue;
-    }
-    const item = line.replace(/^\s*(?:[-*•]|\[[ x]\])\s*/i, '').trim();
-    if (section === 'ingredients') ingredients.push(item);
-    else if (section === 'method') method.push(line.replace(/^\s*(?:\d+[.)]|[-*•])\s*/, '').trim());
-    else if (/^\s*[-*•]\s+/.test(line) || /^\s*[\d½¼¾⅓⅔]/.test(line)) ingredients.push(item);
-    else notes.push(line);
-  }
-  if (ingredients.length === 0) {
+  const read = readRecipeText(text, 'title-and-notes');
+  if (read.ingredients.length === 0) {
     throw badRequest('file: no ingredient lines found. Put them under an "Ingredients" heading, or one per line starting with "-" or an amount.');
   }
   return {
-    title: (title || 'Imported recipe').slice(0, 200),
-    servings: clampServings(servings),
-    ingredients,
-    method: method.join('\n'),
-    notes: notes.join('\n'),
+    title: (read.title || 'Imported recipe').slice(0, 200),
+    servings: clampServings(read.servings),
+    ingredients: read.ingredients,
+    method: read.method.join('\n'),
+    notes: read.notes.join('\n'),
     format: 'text',
   };
 }

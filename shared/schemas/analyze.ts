@@ -1,3 +1,4 @@
+import type { SetAsideLine } from '../recipe-text';
 import { z } from 'zod';
 import type { Nutrients } from '../nutrition';
 import type { DishType, LineFunction } from '../culinary/types';
@@ -88,4 +89,6 @@ export interface AnalyzeResponse {
   perServing: Nutrients;
   totalGrams: number;
   volumeMl: number;
+  /** for pasted text: what was read around the ingredient lines and left out of them */
+  fromText?: { title: string | null; servings: number | null; setAside: SetAsideLine[] };
 }

@@ -79,6 +79,26 @@ describe('POST /api/analyze', () => {
     expect(res.body.lines[0].pinned).toEqual({ food: true, grams: true });
   });
 
+  it('reads a whole pasted recipe page: only the ingredient lines are weighed, the rest is named and set aside', async () => {
+    const text = [
+      'Weeknight mac and cheese',
+      'Serves 6',
+      'Ingredients',
+      MAC_AND_CHEESE,
+      'For the topping:',
+      'Method',
+      '1. Boil the macaroni.',
+      '2. Make the sauce.',
+    ].join('\n');
+    const res = await request(t.app).post('/api/analyze').send({ text, servings: 6 }).expect(200);
+    expect(res.body.lines.map((l: { input: string }) => l.input)).toEqual(MAC_AND_CHEESE.split('\n'));
+    expect(res.body.fromText.title).toBe('Weeknight mac and cheese');
+    expect(res.body.fromText.servings).toBe(6);
+    expect(res.body.fromText.setAside.filter((l: { why: string }) => l.why === 'method')).toHaveLength(2);
+    const onlyHeadings = await request(t.app).post('/api/analyze').send({ text: 'Ingredients\nMethod\nStir.', servings: 2 }).expect(400);
+    expect(onlyHeadings.body.error.details.fieldErrors.text).toBeDefined();
+  });
+
   it('answers bad input with 400 naming the field', async () => {
     const noServings = await request(t.app).post('/api/analyze').send({ text: '1 egg' }).expect(400);
     expect(noServings.body.error.details.fieldErrors.servings).toBeDefined();
