@@ -477,19 +477,11 @@ function secondAmount(s: LineState): void {
     const kind = unitKind(s.unit);
     const nextKind = next.kind;
     const consumedLength = s.description.length - s.description.replace(/^(?:plus|\+|and)\s+/i, '').length + next.text.length;
-    const plus = /^(?:plus|\+|and)\s+/i.test(s.description);
-    if (s.unit === 'stick' && plus && nextKind === 'volume' && s.quantity2 === null) {
-      // "1 stick plus 2 tablespoons butter": a stick of butter is 8 tbsp (½ cup, *common practice*).
-      const sum = addAmounts({ quantity: s.quantity * TBSP_PER_STICK, unit: 'tbsp' }, next.amount);
-      if (sum) {
-        s.quantity = sum.quantity;
-        s.unit = sum.unit;
-        s.unitText = `${s.unitText} ${s.description.slice(0, consumedLength).trim()}`;
-        s.description = s.description.slice(consumedLength).trim();
-        s.flags.push('compound');
-      }
-    } else if ((kind === 'mass' || kind === 'volume') && nextKind === kind && s.unit && s.quantity2 === null) {
-      const sum = addAmounts({ quantity: s.quantity, unit: s.unit }, next.amount);
+    // "1 stick plus 2 tablespoons butter": a stick of butter is 8 tbsp (½ cup, *common practice*).
+    const stickPlus = s.unit === 'stick' && /^(?:plus|\+|and)\s+/i.test(s.description) && nextKind === 'volume';
+    if ((((kind === 'mass' || kind === 'volume') && nextKind === kind && s.unit) || stickPlus) && s.quantity2 === null) {
+      const first = stickPlus ? { quantity: s.quantity * TBSP_PER_STICK, unit: 'tbsp' } : { quantity: s.quantity, unit: s.unit! };
+      const sum = addAmounts(first, next.amount);
       if (sum) {
         s.quantity = sum.quantity;
         s.unit = sum.unit;
