@@ -8,7 +8,7 @@ import type { CatalogueFood } from '../../shared/food';
 import { MAX_LINES } from '../../shared/schemas/analyze';
 import { weighLine } from '../matching/weigh-line';
 import { CHECK_MATCH_BELOW } from '../matching/match-line';
-import { drainedShareFor } from '../matching/drained-share';
+import { drainedShareFor, isDrainedSolids } from '../matching/drained-share';
 import type { FoodEngine } from './food-engine';
 import { foodSummary } from './foods';
 import { badRequest } from '../lib/http-error';
@@ -90,11 +90,13 @@ export function analyzeLine(
     grams = line.grams;
     volumeMl = lineVolumeMl(engine, line.input, food, grams, parsed);
   } else {
+    // A drained-solids food weighed from its can's net size keeps only the drained share, whatever the line says.
+    const drained = (match.drained || isDrainedSolids(food)) && food ? { share: drainedShareFor(food.name)?.share ?? null } : null;
     const weighed = weighReading(reading, food, () =>
       weighLine(parsed, food, food?.portions ?? [], {
         countDefault: food ? engine.countDefaults.get(food.id) : null,
         nearPortions: food ? engine.nearPortions.get(food.id) : undefined,
-        drained: match.drained && food ? { share: drainedShareFor(food.name)?.share ?? null } : null,
+        drained,
       }),
     );
     grams = weighed.grams;
