@@ -8,6 +8,10 @@ import { machineLoad, printLoad, runLoad, scenarios, signInCookie } from '../tes
 const db = await resolveDatabaseUrl('postgres', Number(process.env.PG_PORT ?? 54329), 'hearthswap');
 console.log('== Server: analysis, search, start-up, memory, isolation of the solver ==');
 await runServerBench(db.url);
+if (process.argv.includes('--server-only')) {
+  db.stop();
+  process.exit(0);
+}
 const benches: [string, string, string][] = [
   ['Matching', '../tests/bench/matching-bench', 'runMatchingBench'],
   ['Hand-labelled lines: acceptable food and grams, tuning and held-out halves', '../tests/bench/labelled-lines-bench', 'runLabelledLinesBench'],

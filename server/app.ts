@@ -31,6 +31,7 @@ import { outboxRouter } from './routes/outbox';
 import { prepRouter, shoppingListsRouter } from './routes/prep';
 import { rejectUnsafeText } from './middleware/text-safety';
 import { createCsrf } from './middleware/csrf';
+import { compressJsonAnswers } from './middleware/compress-json';
 import { HttpError } from './lib/http-error';
 import type { Mailer, StoredMail } from './mail';
 import { createClientShell, fillShell } from './lib/client-shell';
@@ -75,6 +76,7 @@ export function createApp(context: AppContext) {
   );
   // gzip, or brotli when the browser offers it; small answers (< 1 KB) go as they are
   app.use(compression({ threshold: 1024 }));
+  app.use(compressJsonAnswers());
   app.use(express.json({ limit: '1mb' }));
   app.use(rejectUnsafeText);
   // Before the session: a probe never needs one, and must answer { db: 'down' } even when the

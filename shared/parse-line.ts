@@ -313,13 +313,45 @@ const PASSES: readonly ((s: LineState) => void)[] = [
   unitThePackageMissed,
   sizeAfterCountedUnit,
   equivalentAfterUnit,
+  partOfCountedFruit,
   amountInNote,
   weightInNote,
   dozens,
 ];
 
+/**
+ * "Zest of 2 lemons", "grated zest of ½ orange", "juice of two limes": the count is the fruit's;
+ * "leaves from 2 sprigs mint", "kernels from 1 large ear of corn": the sprigs' or ears'.
+ */
+const PART_OF_FRUIT = new RegExp(
+  `^((?:[a-z]+\\s+){0,3}?)(zest|juice|peel|rind|zest\\s+and\\s+juice|juice\\s+and\\s+zest|leaves|kernels)\\s+(?:(?:cut|picked|stripped)\\s+)?(?:of|from)\\s+(${QUANTITY_SOURCE}|an?|one|two|three|four|half(?:\\s+an?)?)\\s+(?:(large|medium|small|lg|md|sm)\\s+)?(\\S.*)$`,
+  'i',
+);
+const FRUIT_COUNT_WORDS: Record<string, number> = { a: 1, an: 1, one: 1, two: 2, three: 3, four: 4, half: 0.5, 'half a': 0.5, 'half an': 0.5 };
+
+function partOfCountedFruit(s: LineState): void {
+  if (s.quantity !== null) return;
+  const m = PART_OF_FRUIT.exec(s.description);
+  if (!m) return;
+  const written = m[3].toLowerCase().replace(/\s+/g, ' ');
+  const quantity = FRUIT_COUNT_WORDS[written] ?? quantityValue(written);
+  if (quantity === null || !(quantity > 0)) return;
+  s.quantity = quantity;
+  if (m[4]) s.sizeText = m[4];
+  const part = m[2].toLowerCase();
+  if (part === 'leaves' || part === 'kernels') {
+    // "leaves from 2 sprigs mint", "kernels cut from 2 ears of corn": that many sprigs or ears of the food.
+    const lead = takeLeadingUnit(m[5]);
+    if (!lead || unitKind(lead.unit) !== 'count') return;
+    s.unit = lead.unit;
+    s.unitText = lead.unitText;
+    s.description = `${m[1]}${lead.rest.replace(/^of\s+/i, '')}`;
+  } else s.description = `${m[1]}${m[2]} of ${m[5]}`;
+  s.flags = s.flags.filter((f) => f !== 'needs-amount');
+}
+
 /** "3-4 ounce", "6- to 8-ounce", "2-to 3-pound": a range of weights written before the food. */
-const SIZE_RANGE = new RegExp(`^(${QUANTITY_SOURCE})\\s*-?\\s*(?:-|to)\\s*(${QUANTITY_SOURCE})[-\\s]*([a-z]+)\\.?(?=[\\s-])[-\\s]*`, 'i');
+const SIZE_RANGE = new RegExp(`^(${QUANTITY_SOURCE})\\s*-?\\s*(?:-|–|—|to)\\s*(${QUANTITY_SOURCE})[-\\s]*([a-z]+)\\.?(?=[\\s-])[-\\s]*`, 'i');
 
 /** "1 3-4 ounce tomato", "2 6- to 8-ounce salmon fillets": each piece weighs the middle of the range. */
 function sizeRangeAfterCount(s: LineState): void {
@@ -368,11 +400,15 @@ function sizeGluedToQuantity(s: LineState): void {
   }
 }
 
+/** Volume units a size word may come before. */
+const SIZED_SPOONFULS = new Set(['pinch', 'dash']);
+
 /** "1 lg bunch basil", "2 sm sprigs rosemary": a size word before the counted unit. */
 function sizeWordBeforeCountedUnit(s: LineState): void {
   if (s.unit && SIZE_UNITS.has(s.unit)) {
     const lead = takeLeadingUnit(s.description);
-    if (lead && unitKind(lead.unit) === 'count' && !SIZE_UNITS.has(lead.unit)) {
+    // "1 lg pinch paprika": a pinch, dash or handful sized by the word before it.
+    if (lead && (unitKind(lead.unit) === 'count' || SIZED_SPOONFULS.has(lead.unit)) && !SIZE_UNITS.has(lead.unit)) {
       s.sizeText = s.unitText;
       s.unit = lead.unit;
       s.unitText = lead.unitText;
@@ -431,6 +467,9 @@ function parenthesisAfterAmount(s: LineState): void {
   }
 }
 
+/** Tablespoons in a stick of butter (*common practice*: the quarter-pound stick is marked in 8 tbsp). */
+const TBSP_PER_STICK = 8;
+
 /** "2 15-ounce cans chickpeas", "1 lb 4 oz ground beef", "1 cup plus 2 tbsp flour", "2 8-inch tortillas". */
 function secondAmount(s: LineState): void {
   const next = readAmount(s.description.replace(/^(?:plus|\+|and)\s+/i, ''));
@@ -438,8 +477,11 @@ function secondAmount(s: LineState): void {
     const kind = unitKind(s.unit);
     const nextKind = next.kind;
     const consumedLength = s.description.length - s.description.replace(/^(?:plus|\+|and)\s+/i, '').length + next.text.length;
-    if ((kind === 'mass' || kind === 'volume') && nextKind === kind && s.unit && s.quantity2 === null) {
-      const sum = addAmounts({ quantity: s.quantity, unit: s.unit }, next.amount);
+    // "1 stick plus 2 tablespoons butter": a stick of butter is 8 tbsp (½ cup, *common practice*).
+    const stickPlus = s.unit === 'stick' && /^(?:plus|\+|and)\s+/i.test(s.description) && nextKind === 'volume';
+    if ((((kind === 'mass' || kind === 'volume') && nextKind === kind && s.unit) || stickPlus) && s.quantity2 === null) {
+      const first = stickPlus ? { quantity: s.quantity * TBSP_PER_STICK, unit: 'tbsp' } : { quantity: s.quantity, unit: s.unit! };
+      const sum = addAmounts(first, next.amount);
       if (sum) {
         s.quantity = sum.quantity;
         s.unit = sum.unit;
@@ -521,16 +563,43 @@ function amountInNote(s: LineState): void {
   }
 }
 
+/** ", about 8 ounces each", ", 150 grams each", ", about 1/4-1/2 pound": a weight right after a comma. */
+const WEIGHT_AFTER_COMMA = /^(?:about|around|roughly|approximately|approx\.?|~)?\s*(.+)$/i;
+
+/** The line's weight written after a comma, outside parentheses, or null. */
+function weightAfterComma(description: string, count: number): Amount | null {
+  for (const segment of takeParentheticals(description).rest.split(',').slice(1)) {
+    const text = WEIGHT_AFTER_COMMA.exec(segment.trim())?.[1] ?? '';
+    let amount = massRangeMidpoint(text);
+    let after = '';
+    if (!amount) {
+      const read = readAmount(text);
+      amount = read?.amount ?? null;
+      after = read ? text.slice(read.text.length).trim() : '';
+    }
+    if (!amount || unitKind(amount.unit) !== 'mass') continue;
+    // The weight alone, or with "each" / "total" after it: not "1 lb ground beef, 80/20", ", 2 oz of it for garnish".
+    if (after !== '' && !/^(?:each|apiece|total|in all|in total)\b/i.test(after)) continue;
+    return /^(?:each|apiece)\b/i.test(after) ? { quantity: amount.quantity * count, unit: amount.unit } : amount;
+  }
+  return null;
+}
+
 /** "9 lasagna noodles (about 8 oz)", "6 tbsp lard (about 2 ounces)": the line's weight in a note. */
 function weightInNote(s: LineState): void {
   if (s.quantity !== null && s.equivalents.length === 0 && s.size === null) {
     for (const note of takeParentheticals(s.description).notes) {
       if (/\b(?:from|per|makes|yields?)\b/i.test(note)) continue;
+      // "4 ½ c cooked beans, or 3 (15-ounce) cans": the size of another count's package, not this line's weight.
+      const before = s.description.slice(0, Math.max(0, s.description.indexOf(note))).replace(/[([]\s*$/, '');
+      if (/[\d½¼¾⅓⅔⅛]\s*$/.test(before) && !/^(?:about|approx|approximately|around|roughly|~)/i.test(note)) continue;
       const mass = massRangeMidpoint(note) ?? readAmounts(note).find((a) => unitKind(a.unit) === 'mass');
       if (!mass) continue;
       s.equivalents.push(/\beach\b|\bapiece\b/i.test(note) ? { quantity: mass.quantity * s.quantity, unit: mass.unit } : mass);
-      break;
+      return;
     }
+    const afterComma = weightAfterComma(s.description, s.quantity);
+    if (afterComma) s.equivalents.push(afterComma);
   }
 }
 

@@ -11,6 +11,8 @@ export interface AliasTable {
   aliases: Record<string, string>;
   /** phrases that stand for their food only as the whole phrase, never inside a longer one */
   exactOnly?: string[];
+  /** phrases SR28 has no food for, mapped to the nearest one: matched, and flagged for checking */
+  standIns?: string[];
 }
 
 export const DEFAULT_ALIASES: AliasTable = aliasFile as AliasTable;
@@ -19,6 +21,8 @@ export interface AliasEntry {
   words: string[];
   /** position of the food in the index */
   position: number;
+  /** the phrase's food is not in SR28: this is the nearest one (the phrase, for the warning) */
+  standIn: string | null;
 }
 
 export interface AliasIndex {
@@ -52,6 +56,7 @@ export function buildAliasIndex(table: AliasTable, index: FoodIndex): AliasIndex
   const byFirstWord = new Map<string, AliasEntry[]>();
   const skipped: string[] = [];
   const exactOnly = new Set((table.exactOnly ?? []).map(aliasKey));
+  const standIns = new Set((table.standIns ?? []).map(aliasKey));
   for (const [phrase, ndb] of Object.entries(table.aliases)) {
     const position = index.positionBySourceId.get(ndb);
     const ws = words(phrase);
@@ -59,8 +64,8 @@ export function buildAliasIndex(table: AliasTable, index: FoodIndex): AliasIndex
       skipped.push(phrase);
       continue;
     }
-    const entry: AliasEntry = { words: ws, position };
     const key = ws.join(' ');
+    const entry: AliasEntry = { words: ws, position, standIn: standIns.has(key) ? phrase : null };
     if (!exact.has(key)) exact.set(key, entry);
     if (exactOnly.has(key)) continue;
     const list = byFirstWord.get(ws[0]) ?? [];

@@ -5,8 +5,19 @@
  * when the phrase adds a modifier the alias food lacks ("*whole* buttermilk"), a version of the alias
  * food that has it is chosen, or the alias loses confidence.
  */
-import { containedAliases, type AliasIndex } from './alias-index';
-import { FLAG_BABY, FLAG_MIXED_DISH, FLAG_SNACK, STATE_WORDS, VARIANT_WORDS, type FoodIndex, type IndexedFood } from './food-index';
+import { containedAliases, type AliasEntry, type AliasIndex } from './alias-index';
+import {
+  FLAG_BABY,
+  FLAG_CANNED,
+  FLAG_FROZEN,
+  FLAG_MIXED_DISH,
+  FLAG_SNACK,
+  FLAG_STATE,
+  STATE_WORDS,
+  VARIANT_WORDS,
+  type FoodIndex,
+  type IndexedFood,
+} from './food-index';
 import { PIECE_WORDS, PREPARATION_WORDS } from './normalise-phrase';
 import type { PreparedQuery, Term } from './prepare-phrase';
 import type { FoodRanker, Ranked } from './rank-foods';
@@ -22,6 +33,11 @@ const UNMET_MODIFIER_FACTOR = 0.5;
 const SIBLING_BOOST = 0.25;
 /** How alike two names must be (shared words over all words) to be versions of one food. */
 const MIN_SIBLING_SIMILARITY = 0.15;
+/**
+ * States that are not raw. SR28 often names the raw food without the word ("Almonds", "Pumpkin and
+ * squash seed kernels, dried"): "raw" asks only that the alias food be none of these.
+ */
+const UNPROCESSED = FLAG_STATE | FLAG_CANNED | FLAG_FROZEN;
 /** A sibling chosen for an alias that lacked a modifier is trusted a little less than the alias. */
 const SIBLING_SWAP_FACTOR = 0.9;
 
@@ -44,29 +60,40 @@ const MODIFIER_WORDS = new Set([
   'instant',
 ]);
 
+/** Words that join a food to what it is packed or served in. */
+const MEDIUM_WORDS = new Set(['with', 'in']);
+
+/** A partial alias's food, scored; `standIn` names the phrase when the food only stands in for it. */
+export interface AliasMatch extends Ranked {
+  standIn: string | null;
+}
+
 export interface AliasResolver {
   /** The food of an alias that is the whole phrase (all words, without preparation words, or food words only). */
-  exactAlias(q: PreparedQuery): number | null;
+  exactAlias(q: PreparedQuery): AliasEntry | null;
   /** The alias inside the phrase that covers most of it, scored; `ranked` offers the versions of its food. */
-  bestPartialAlias(q: PreparedQuery, ranked: Ranked[]): Ranked | null;
+  bestPartialAlias(q: PreparedQuery, ranked: Ranked[]): AliasMatch | null;
   /** Re-rank toward foods whose names share most words with the alias food. */
   boostSiblings(ranked: Ranked[], aliasPosition: number): void;
 }
 
 export function createAliasResolver(aliases: AliasIndex, index: FoodIndex, ranker: FoodRanker): AliasResolver {
-  function exactAlias(q: PreparedQuery): number | null {
-    const keys = [q.all.join(' '), q.all.filter((w) => !PREPARATION_WORDS.has(w)).join(' '), q.content.join(' ')];
+  function exactAlias(q: PreparedQuery): AliasEntry | null {
+    const keys = [q.all.join(' '), q.all.filter((w) => !PREPARATION_WORDS.has(w)).join(' ')];
+    // "crushed pineapple with juice" is pineapple in its juice, not "pineapple juice": filler words
+    // are left out only when none of them joins a food to what it is packed in.
+    if (!q.all.some((w) => MEDIUM_WORDS.has(w))) keys.push(q.content.join(' '));
     for (const k of keys) {
       const hit = aliases.exact.get(k);
-      if (hit) return hit.position;
+      if (hit) return hit;
     }
     return null;
   }
 
-  function bestPartialAlias(q: PreparedQuery, ranked: Ranked[]): Ranked | null {
+  function bestPartialAlias(q: PreparedQuery, ranked: Ranked[]): AliasMatch | null {
     const withoutPrep = q.all.filter((w) => !PREPARATION_WORDS.has(w));
     const hits = [...containedAliases(aliases, q.all), ...containedAliases(aliases, withoutPrep)];
-    let best: Ranked | null = null;
+    let best: AliasMatch | null = null;
     for (const hit of hits) {
       const aliasWords = new Set(hit.entry.words);
       const f = index.foods[hit.entry.position];
@@ -79,6 +106,7 @@ export function createAliasResolver(aliases: AliasIndex, index: FoodIndex, ranke
       for (const t of q.terms) {
         const inFood = t.alternatives.some((a) => f.tokens.has(a.id));
         if (aliasWords.has(t.word)) covered += t.weight;
+        else if (t.word === 'raw' && !inFood && (f.flags & UNPROCESSED) === 0) continue;
         else if (MODIFIER_WORDS.has(t.word) && !inFood) unmet.push(t);
         else if (t.alternatives.length && contradicted.has(t.alternatives[0].id)) unmet.push(t);
         else if (!inFood && t.alternatives.length && !PIECE_WORDS.has(t.word) && index.extraWeight[t.alternatives[0].id] > 0) residual.push(t);
@@ -96,10 +124,16 @@ export function createAliasResolver(aliases: AliasIndex, index: FoodIndex, ranke
         // least one other added word when no modifier is missing.
         const kept = q.terms.filter((t) => t.alternatives.some((a) => f.tokens.has(a.id)));
         const needed = [...kept, ...unmet];
+        const keptIds = kept.flatMap((t) => t.alternatives.filter((a) => f.tokens.has(a.id)).map((a) => a.id));
         let sibling: { position: number; extra: number; similarity: number } | null = null;
         for (const r of ranked) {
           const g = index.foods[r.position];
           if (r.position === position || !needed.every((t) => t.alternatives.some((a) => g.tokens.has(a.id)))) continue;
+          // A version keeps every word of the food the phrase matched: "pepitas" matched "pumpkin" and
+          // "seed" of "Pumpkin and squash seed kernels, dried", so "Pumpkin, raw" is no version of it.
+          if (!keptIds.every((id) => g.tokens.has(id))) continue;
+          // …nor cooks it: "raw unsalted pecans" are not "Pecans, dry roasted, without salt".
+          if (g.flags & FLAG_STATE && !(f.flags & FLAG_STATE) && !q.hasState) continue;
           if (!sameForm(f, g, q)) continue;
           const extra = residual.filter((t) => t.alternatives.some((a) => g.tokens.has(a.id))).length;
           if (unmet.length === 0 && extra === 0) continue;
@@ -114,7 +148,7 @@ export function createAliasResolver(aliases: AliasIndex, index: FoodIndex, ranke
           score *= SIBLING_SWAP_FACTOR;
         } else if (unmet.length) score *= UNMET_MODIFIER_FACTOR;
       }
-      if (!best || score > best.score) best = { position, score };
+      if (!best || score > best.score) best = { position, score, standIn: hit.entry.standIn };
     }
     return best;
   }

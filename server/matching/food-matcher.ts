@@ -15,7 +15,8 @@ import type { CatalogueFood } from '../../shared/food';
 import { recordFallback } from '../../shared/fallbacks';
 import { aliasVocabulary, buildAliasIndex, DEFAULT_ALIASES, type AliasIndex, type AliasTable } from './alias-index';
 import { createAliasResolver, MAX_PARTIAL_CONFIDENCE } from './alias-resolution';
-import { buildFoodIndex, type FoodIndex } from './food-index';
+import { buildFoodIndex, STATE_WORDS, type FoodIndex } from './food-index';
+import { words } from './normalise-phrase';
 import { createPhrasePreparer } from './prepare-phrase';
 import { createFoodRanker } from './rank-foods';
 import { createSpellingCorrector } from './spelling';
@@ -49,6 +50,8 @@ export interface FoodMatch {
   corrected: string[];
   /** false when a name match's leading words are not in the phrase ("potato starch" → "Bread, …, potato extract") */
   nameHeadMatched: boolean;
+  /** the alias phrase whose food SR28 lacks, when the food only stands in for it ("pancetta" → bacon) */
+  standIn: string | null;
 }
 
 export interface MatchOptions {
@@ -69,7 +72,16 @@ export interface FoodMatcher {
   readonly skippedAliases: readonly string[];
 }
 
-const noMatch = (): FoodMatch => ({ food: null, confidence: 0, alternatives: [], via: 'none', unknownWords: [], corrected: [], nameHeadMatched: false });
+const noMatch = (): FoodMatch => ({
+  food: null,
+  confidence: 0,
+  alternatives: [],
+  via: 'none',
+  unknownWords: [],
+  corrected: [],
+  nameHeadMatched: false,
+  standIn: null,
+});
 
 export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable | Record<string, string> = DEFAULT_ALIASES): FoodMatcher {
   const table: AliasTable = isAliasTable(aliasTable) ? aliasTable : { aliases: aliasTable };
@@ -97,13 +109,14 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
       // "mascarpone" read as "macaroni" is no exact alias: it is trusted as far as the reading is close.
       const confidence = q.corrected.length ? Math.min(MAX_PARTIAL_CONFIDENCE, q.closeness) : ALIAS_EXACT_CONFIDENCE;
       return {
-        food: index.foods[exact].food,
+        food: index.foods[exact.position].food,
         confidence,
-        alternatives: alternativesWithout(exact),
+        alternatives: alternativesWithout(exact.position),
         via: 'alias',
         unknownWords: [],
         corrected: q.corrected,
         nameHeadMatched: true,
+        standIn: exact.standIn,
       };
     }
 
@@ -120,6 +133,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
         unknownWords,
         corrected: q.corrected,
         nameHeadMatched: true,
+        standIn: partial.standIn,
       };
     }
     if (best && bestScore >= MATCH_CONFIDENCE_FLOOR) {
@@ -132,6 +146,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
         unknownWords,
         corrected: q.corrected,
         nameHeadMatched: ranker.coverageOf(f, q).headMatched,
+        standIn: null,
       };
     }
     return {
@@ -142,6 +157,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
       unknownWords,
       corrected: q.corrected,
       nameHeadMatched: false,
+      standIn: null,
     };
   }
 
@@ -194,7 +210,7 @@ export function createFoodMatcher(foods: CatalogueFood[], aliasTable: AliasTable
       const q = prepare(query);
       const namesBrand = q.terms.some((t) => t.alternatives.some((a) => index.brandedOnly[a.id] === 1));
       const out: FoodSearchHit[] = [];
-      const exact = resolver.exactAlias(q);
+      const exact = resolver.exactAlias(q)?.position ?? null;
       if (exact !== null) out.push({ food: index.foods[exact].food, score: 1 });
       for (const r of ranker.rank(q, namesBrand, n + 1)) {
         if (r.position === exact) continue;
@@ -257,19 +273,22 @@ export const DESCRIBING_WORDS = new Set([
  */
 export function choicesIn(text: string, splitAnd = true): string[] {
   const out: string[] = [];
-  const orParts = text
-    .split(/\s+or\s+|\s*\/\s*/i)
-    .map((p) => p.trim())
-    .filter(Boolean);
+  const state = leadingState(
+    text
+      .split(/\s+or\s+|\s*\/\s*/i)
+      .map((p) => p.trim())
+      .filter(Boolean),
+  );
+  const orParts = state.parts;
   if (orParts.length > 1) {
     const last = orParts[orParts.length - 1].split(/\s+/);
     const head = last[last.length - 1];
     for (let i = 0; i < orParts.length; i++) {
       const n = orParts[i].split(/\s+/).length;
       const shared = i < orParts.length - 1 && last.length >= 2 && n <= 2 && !orParts[i].endsWith(head);
-      if (shared) out.push(`${orParts[i]} ${head}`);
+      if (shared) out.push(state.withState(`${orParts[i]} ${head}`));
       // "green or Puy lentils", "distilled or spring water": a describing word alone is no food.
-      if (!(shared && n === 1 && DESCRIBING_WORDS.has(orParts[i].toLowerCase()))) out.push(orParts[i]);
+      if (!(shared && n === 1 && DESCRIBING_WORDS.has(orParts[i].toLowerCase()))) out.push(state.withState(orParts[i]));
     }
   }
   if (splitAnd)
@@ -279,6 +298,20 @@ export function choicesIn(text: string, splitAnd = true): string[] {
       .filter(Boolean))
       out.push(p);
   return [...new Set(out)].filter((p) => p !== text);
+}
+
+/**
+ * "cooked jasmine or other white rice": a state written once, before the first choice, is every
+ * choice's. Returns the choices without it and a function that gives it back to each way of a choice.
+ */
+export function leadingState(parts: string[]): { parts: string[]; withState: (way: string) => string } {
+  const state = parts.length > 1 ? words(parts[0])[0] : undefined;
+  if (state === undefined || !STATE_WORDS.has(state)) return { parts, withState: (way) => way };
+  const first = parts[0].replace(/^\W*\S+\s*/, '');
+  return {
+    parts: first ? [first, ...parts.slice(1)] : parts.slice(1),
+    withState: (way) => (words(way).includes(state) ? way : `${state} ${way}`),
+  };
 }
 
 function copyOf(m: FoodMatch): FoodMatch {

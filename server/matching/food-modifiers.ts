@@ -52,6 +52,9 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
     neutralFor: ['brown', 'sugar', 'soy', 'olive', 'rum', 'molasses', 'green', 'corn', 'cream', 'red', 'kidney', 'meat'],
   },
   { label: 'fat-free', asks: ['nonfat'], honouredBy: [['skim']] },
+  // "full-fat Greek yogurt" (read as "whole", normalise-phrase.ts) is not the nonfat one, "whole
+  // buttermilk" not the lowfat one; only a name that says a lower fat level breaks it.
+  { label: 'full-fat', asks: ['whole'], honouredBy: [['whole', 'milk'], ['whole']], brokenBy: LOWER_FAT },
   { label: 'skim', asks: ['skim'], honouredBy: [['nonfat']] },
   { label: 'part-skim', asks: ['part', 'skim'], honouredBy: [['lowfat'], ['reduced', 'fat'], ['light']] },
   { label: 'low-sodium', asks: ['low', 'sodium'], honouredBy: LESS_SODIUM },
@@ -81,6 +84,18 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   { label: 'rice', asks: ['rice'] },
   { label: 'coconut', asks: ['coconut'] },
   { label: 'cashew', asks: ['cashew'], honouredBy: [['cashews']] },
+  // "hazelnut butter" is no dairy butter, "walnut oil" no soybean oil: the nut or seed a food is made from.
+  { label: 'hazelnut', asks: ['hazelnut'], honouredBy: [['hazelnuts'], ['filberts']] },
+  { label: 'walnut', asks: ['walnut'], honouredBy: [['walnuts']] },
+  { label: 'pecan', asks: ['pecan'], honouredBy: [['pecans']] },
+  { label: 'pistachio', asks: ['pistachio'], honouredBy: [['pistachios']] },
+  { label: 'macadamia', asks: ['macadamia'] },
+  { label: 'peanut', asks: ['peanut'], honouredBy: [['peanuts']] },
+  { label: 'sunflower', asks: ['sunflower'] },
+  // "candied ginger" is no raw ginger root.
+  { label: 'candied', asks: ['candied'], honouredBy: [['candies'], ['candy'], ['candied'], ['glazed']] },
+  // "sherry vinegar" is no distilled vinegar: SR28 has none made from sherry.
+  { label: 'sherry', asks: ['sherry'] },
   // "vanilla bean" is no snap bean, "nutritional yeast" no baker's yeast.
   { label: 'vanilla', asks: ['vanilla'] },
   { label: 'nutritional', asks: ['nutritional'] },
@@ -93,7 +108,8 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   ...colour('green'),
   ...colour('yellow'),
   // "fresh tarragon" matched to dried tarragon: a tenth of the water, ten times the nutrients per gram.
-  { label: 'fresh', asks: ['fresh'], brokenBy: [['dried'], ['dehydrated'], ['dry'], ['canned'], ['ground']] },
+  // A raw food is a fresh one when the line's match was not ("fresh green chiles" → raw, not canned, chiles).
+  { label: 'fresh', asks: ['fresh'], honouredBy: [['raw']], brokenBy: [['dried'], ['dehydrated'], ['dry'], ['canned'], ['ground']] },
 ];
 
 function hasSequence(ws: readonly string[], seq: readonly string[]): boolean {

@@ -12,6 +12,7 @@ import { MATCH_CONFIDENCE_FLOOR, type FoodMatch, type FoodMatcher } from './food
 import { FOOD_MODIFIERS, modifiersAskedBy, positivelyHonours, unmetModifiers, type FoodModifier } from './food-modifiers';
 import { PREPARATION_WORDS, STOP_WORDS, words } from './normalise-phrase';
 import { orChoices } from './or-choices';
+import { isDrainedSolids } from './drained-share';
 
 /** Under this confidence a match is shown as "check this match". */
 export const CHECK_MATCH_BELOW = 0.6;
@@ -100,8 +101,36 @@ function isCanned(food: CatalogueFood | null): boolean {
   return Boolean(food && /\bcanned\b|\bcnd\b/i.test(food.name));
 }
 
-function isDrainedSolids(food: CatalogueFood | null): boolean {
-  return Boolean(food && /\bdrained\b|\bdrnd\b/i.test(food.name));
+/** "undrained", "with their liquid": the can is used whole. */
+const SAYS_UNDRAINED =
+  /\bundrained\b|\bnot drained\b|\bdo(?:n['’]t| not) drain\b|\bwith (?:its|their|the) (?:liquid|juices?|brine)\b|\band (?:its|their) liquid\b/i;
+/** SR28's "Legumes and Legume Products". */
+const LEGUME_GROUP = '16';
+/** Canned legumes eaten in their sauce, never drained. */
+const EATEN_WITH_SAUCE = /\b(?:baked|refried|chili|sweetened|with pork|with beef|with franks|sauce|soup)\b/i;
+export const DRAINED_BY_HABIT = 'Weighed drained, as most recipes use canned beans: write “undrained” to count the liquid.';
+
+/** Two foods of one kind: the first `parts` parts of their SR28 names agree, asides in parentheses left out. */
+function sameKind(a: CatalogueFood, b: CatalogueFood, parts: number): boolean {
+  const head = (f: CatalogueFood) =>
+    f.name
+      .toLowerCase()
+      .replace(/\([^)]*\)/g, '')
+      .split(',')
+      .slice(0, parts)
+      .map((p) => p.trim())
+      .join(',');
+  return head(a) === head(b);
+}
+
+/** Counted by the can: "2 cans", "1 (15 oz) can", "1 15-ounce can". */
+function byCountedCan(parsed: ParsedLine): boolean {
+  return parsed.unit === 'can' || (parsed.size !== null && /\bcans?\b/i.test(`${parsed.unitText ?? ''} ${parsed.sizeText ?? ''} ${parsed.name}`));
+}
+
+/** Canned beans, chickpeas or lentils that recipes drain (not baked beans, refried beans or chili). */
+function beansDrainedByHabit(food: CatalogueFood | null): boolean {
+  return Boolean(food && isCanned(food) && food.foodGroup === LEGUME_GROUP && !EATEN_WITH_SAUCE.test(food.name) && !/\bsoy|tofu\b/i.test(food.name));
 }
 
 /** The food words of a phrase, preparation and filler left out. */
@@ -119,8 +148,11 @@ export function isGenericPhrase(phrase: string): string | null {
 function honouringFood(candidates: readonly CatalogueFood[], asked: readonly FoodModifier[], matched: CatalogueFood, phrase: string): CatalogueFood | null {
   const phraseWords = new Set(foodWordsOf(phrase));
   const kept = words(matched.name).filter((w) => phraseWords.has(w));
+  // A fresh food is the same food raw: "Peppers, hot chili, green, raw" for "…, canned", never "Oat bran, raw" for "Cereals, oats".
+  const sameHead = FRESH !== undefined && asked.includes(FRESH) ? words(matched.name)[0] : null;
   for (const f of candidates) {
     if (f.id === matched.id || f.branded || !asked.every((m) => positivelyHonours(f, m))) continue;
+    if (sameHead !== null && words(f.name)[0] !== sameHead) continue;
     const fw = new Set(words(f.name));
     if (kept.every((w) => fw.has(w) || asked.some((m) => m.asks.includes(w)))) return f;
   }
@@ -238,18 +270,39 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
       const canned = matcher.match(variant.replace(/\s+/g, ' '));
       // A phrase that says "canned" itself takes any confident canned food over a fresh one.
       const enough = saysCanned ? MATCH_CONFIDENCE_FLOOR : VARIANT_SHARE * match.confidence;
-      if (isCanned(canned.food) && canned.confidence >= enough) {
+      // "1 can coconut cream" is not the sweetened cream of coconut: a can adds no sugar the line did not ask for.
+      const addsSugar = /\bsweetened\b/i.test(canned.food?.name ?? '') && !/\bsweet/i.test(phrase);
+      if (isCanned(canned.food) && canned.confidence >= enough && !addsSugar) {
         match = canned;
         break;
       }
     }
   }
 
-  // "1 can chickpeas, drained and rinsed": SR28's drained solids, when it has them.
-  const saysDrained = says(parsed, /\bdrain(?:ed)?\b/i);
-  if (saysDrained && isCanned(match.food) && !isDrainedSolids(match.food)) {
+  // "1 can lentils", "2 (5 oz) cans lentils": SR28 has no canned lentils; their drained seeds are the
+  // cooked ones (*common practice*), weighed by the can's drained share.
+  let cookedForCanned = false;
+  if (byCan && !isCanned(match.food) && match.food?.foodGroup === LEGUME_GROUP && /\braw\b/i.test(match.food.name)) {
+    const cooked = matcher.match(`cooked ${phrase.replace(/\bcanned\b/i, ' ')}`.replace(/\s+/g, ' '));
+    if (cooked.food && /\bcooked\b/i.test(cooked.food.name) && sameKind(cooked.food, match.food, 1) && cooked.confidence >= MATCH_CONFIDENCE_FLOOR) {
+      match = cooked;
+      cookedForCanned = true;
+    }
+  }
+
+  // "1 can chickpeas, drained and rinsed": SR28's drained solids, when it has them. Beans counted by
+  // the can are drained unless the line keeps their liquid (*common practice*).
+  const saysUndrained = says(parsed, SAYS_UNDRAINED);
+  const saysDrained = !saysUndrained && says(parsed, /\bdrain(?:ed)?\b/i);
+  const drainedByHabit = !saysDrained && !saysUndrained && byCountedCan(parsed) && (cookedForCanned || beansDrainedByHabit(match.food));
+  if (drainedByHabit) warnings.push(DRAINED_BY_HABIT);
+  if ((saysDrained || drainedByHabit) && isCanned(match.food) && !isDrainedSolids(match.food)) {
     const solids = matcher.match(`${phrase} canned drained solids`);
-    if (isDrainedSolids(solids.food) && solids.confidence >= VARIANT_SHARE * match.confidence) match = solids;
+    const kept = match.food;
+    // The drained version of the same beans, even when an alias ranks the whole can first.
+    const found = solids.food && [solids.food, ...solids.alternatives].find((f) => isDrainedSolids(f) && isCanned(f) && kept !== null && sameKind(f, kept, 2));
+    if (found && solids.confidence >= VARIANT_SHARE * match.confidence)
+      match = { ...solids, food: found, alternatives: [kept!, ...solids.alternatives.filter((f) => f.id !== found.id && f.id !== kept!.id)] };
   }
 
   let confidence = match.confidence;
@@ -275,6 +328,12 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
           `The catalogue has no ${names} version of this food: weighed as its nearest food, ${food.name}. Add it from its label for exact figures.`,
         );
       }
+    }
+    // "pancetta" is weighed as bacon, the nearest SR28 food, and the cook is told so.
+    if (match.standIn && food === match.food) {
+      check = true;
+      confidence = Math.min(confidence, MISSING_MODIFIER_CONFIDENCE);
+      warnings.push(`The catalogue has no “${match.standIn}”: weighed as its nearest food, ${food.name}. Check this match or add it from its label.`);
     }
     if (leavesOfAnotherPart(food, phrase)) {
       check = true;
@@ -314,7 +373,7 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
     alternatives,
     missingModifier,
     checkMatch: check,
-    drained: saysDrained,
+    drained: saysDrained || drainedByHabit || (cookedForCanned && !saysUndrained),
     warnings,
   };
 }

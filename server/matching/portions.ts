@@ -79,11 +79,39 @@ export function portionsFor(food: CatalogueFood | null, curated: CuratedPortions
   return [...portions];
 }
 
+/** "oz (19 halves)", "oz (23 whole kernels)": SR28's count of pieces in a weighed portion. */
+const PIECES_IN_PORTION = /^(?:oz|cup)\b[^(]*\((?:about |approx\.? |approximately )?(\d+) ([a-z][a-z ]*)\)$/i;
+const NOT_PIECES = /^(?:nlea|serving|fl|oz|tbsp|tsp|cup|pcs|pieces per)/i;
+
+/** One piece of such a portion as a counted portion of its own: "12 pecan halves" weighs 12 of the 19 in an ounce. */
+function piecesOf(p: Portion): Portion | null {
+  const m = PIECES_IN_PORTION.exec(p.measure);
+  if (!m || NOT_PIECES.test(m[2])) return null;
+  const amount = Number(m[1]) * p.amount;
+  if (!(amount > 0)) return null;
+  return { label: `${amount} ${m[2]}`, amount, measure: m[2], grams: p.grams };
+}
+
+/** "serving 1/2 cup", "serving (8 fl oz)": a label serving that states its volume. */
+const SERVING_VOLUME = /^serving\s*\(?\s*(\d+(?:\.\d+)?|\d+\s*\/\s*\d+)\s*(cup|tbsp|tsp|fl oz)\s*\)?$/i;
+
+/** Such a serving as the volume portion it is: "2 scoops vanilla ice cream" weigh by SR28's "serving 1/2 cup". */
+function volumeOfServing(p: Portion): Portion | null {
+  const m = SERVING_VOLUME.exec(p.measure.trim());
+  if (!m) return null;
+  const [num, den] = m[1].split('/').map((n) => Number(n.trim()));
+  const amount = p.amount * (den === undefined ? num : num / den);
+  if (!(amount > 0) || !Number.isFinite(amount)) return null;
+  const unit = m[2].toLowerCase();
+  return { label: `${Number(amount.toPrecision(6))} ${unit}`, amount, measure: unit, grams: p.grams };
+}
+
 function mergePortions(food: CatalogueFood, curated: CuratedPortions): Portion[] {
   const out: Portion[] = [];
   const seen = new Set<string>();
   const extra = food.source === 'usda-sr28' ? (curated.byNdb.get(food.sourceId) ?? []) : [];
-  for (const p of [...food.portions, ...extra]) {
+  const counted = [...food.portions, ...extra].flatMap((p) => [piecesOf(p), volumeOfServing(p)]).filter((p): p is Portion => p !== null);
+  for (const p of [...food.portions, ...extra, ...counted]) {
     if (!(p.grams > 0) || !(p.amount > 0) || !Number.isFinite(p.grams)) continue;
     const key = portionKey(p.label);
     if (seen.has(key)) continue;

@@ -13,10 +13,11 @@
 import type { CatalogueFood, Portion } from '../../shared/food';
 import { recordFallback } from '../../shared/fallbacks';
 import type { ParsedLine } from '../../shared/parse-line';
-import { massToGrams, normaliseUnit, unitKind, volumeToMl } from '../../shared/units';
+import { ML_PER_CUP, ML_PER_FL_OZ, massToGrams, normaliseUnit, unitKind, volumeToMl } from '../../shared/units';
 import { inchesOf, parseMeasure, sizeWordOf, stem, type MeasureInfo, type SizeWord } from './measure-text';
 import { words } from './normalise-phrase';
 import { singular } from './singular';
+import { isDrainedSolids } from './drained-share';
 
 export interface WeighedLine {
   grams: number;
@@ -300,6 +301,24 @@ function densityFor(all: ReadPortion[], parsed: ParsedLine, food: CatalogueFood 
   return null;
 }
 
+/** Packages whose stated size is each one's ("2 cans (15 oz)"), whatever SR28 weighs one at. */
+const PACKAGE_PIECES = new Set(['can', 'jar', 'package', 'box', 'bag', 'bottle', 'container', 'envelope']);
+
+/**
+ * "2 sticks (16 tablespoons) butter", "2 sticks (8 oz)": a size after a counted piece that is the
+ * whole amount, because it is nearer the pieces' SR28 weight all together than one piece's.
+ */
+function sizeIsTotal(parsed: ParsedLine, food: CatalogueFood | null, all: ReadPortion[], opts: WeighOptions, sizeGrams: number): boolean {
+  const quantity = parsed.quantity ?? 0;
+  if (!food || quantity <= 1 || !(sizeGrams > 0)) return false;
+  const ask = countAsk(parsed);
+  if (!ask.piece || PACKAGE_PIECES.has(ask.piece)) return false;
+  const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, new Set(words(parsed.name ?? '').map(singular)));
+  if (!chosen || chosen.guessed) return false;
+  const each = chosen.r.portion.grams / chosen.r.portion.amount;
+  return Math.abs(sizeGrams - quantity * each) < Math.abs(sizeGrams - each);
+}
+
 /** A can's contents after draining, when the line says drained. */
 function drainedGrams(grams: number, opts: WeighOptions, warnings: string[]): number {
   if (!opts.drained) return grams;
@@ -308,6 +327,32 @@ function drainedGrams(grams: number, opts: WeighOptions, warnings: string[]): nu
     return grams;
   }
   return grams * opts.drained.share;
+}
+
+/** Leafy foods and herbs pack under this many grams per mL: a handful of them is a loose cup. */
+const LEAFY_G_PER_ML = 0.3;
+
+/**
+ * Household measures a recipe counts that have no legal size and no SR28 portion for the food, as
+ * volumes (*common practice*, from memory): a handful is a loose cup of leaves or herbs and ¼ cup of
+ * anything denser (a handful of nuts is about 1 oz); a scoop is ½ cup (the #8 disher); a shot of
+ * espresso 1 fl oz, of anything else a 1½ fl oz jigger.
+ */
+function householdVolume(piece: string, food: CatalogueFood, density: () => number | null): { ml: number; as: string; why: string } | null {
+  if (piece === 'handful') {
+    const d = density();
+    if (d === null) return null;
+    return d < LEAFY_G_PER_ML
+      ? { ml: ML_PER_CUP, as: '1 loose cup', why: 'a handful of leaves, common practice' }
+      : { ml: ML_PER_CUP / 4, as: '¼ cup', why: 'a handful, common practice' };
+  }
+  if (piece === 'scoop') return { ml: ML_PER_CUP / 2, as: '½ cup', why: 'a #8 scoop, common practice' };
+  if (piece === 'shot') {
+    return /\b(?:espresso|coffee)\b/i.test(food.name)
+      ? { ml: ML_PER_FL_OZ, as: '1 fl oz', why: 'a shot of espresso, common practice' }
+      : { ml: 1.5 * ML_PER_FL_OZ, as: '1½ fl oz', why: 'a jigger, common practice' };
+  }
+  return null;
 }
 
 function result(grams: number, volumeMl: number | null, portionUsed: string | null, warnings: string[]): WeighedLine {
@@ -374,15 +419,19 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
   if (size && Number.isFinite(size.quantity) && size.quantity > 0) {
     const sizeKind = unitKind(size.unit);
     if (sizeKind === 'mass') {
-      const grams = drainedGrams(quantity * (massToGrams(size.quantity, size.unit) ?? 0), opts, warnings);
+      const sizeGrams = massToGrams(size.quantity, size.unit) ?? 0;
+      const count = sizeIsTotal(parsed, food, all, opts, sizeGrams) ? 1 : quantity;
+      const grams = drainedGrams(count * sizeGrams, opts, warnings);
       if (!food) return result(grams, null, null, [WARNING_NO_FOOD]);
       const d = density();
       return result(grams, d ? grams / d : null, null, warnings);
     }
     if (sizeKind === 'volume') {
-      const ml = quantity * (volumeToMl(size.quantity, size.unit) ?? 0);
-      if (!food) return result(0, ml, null, [WARNING_NO_FOOD]);
+      const sizeMl = volumeToMl(size.quantity, size.unit) ?? 0;
+      if (!food) return result(0, quantity * sizeMl, null, [WARNING_NO_FOOD]);
       const v = bestVolumePortion(all, parsed, size.unit, food);
+      const gPerMl = v ? v.gPerMl : food.densityGPerMl;
+      const ml = (sizeIsTotal(parsed, food, all, opts, sizeMl * gPerMl) ? 1 : quantity) * sizeMl;
       if (v) return result(ml * v.gPerMl, ml, v.r.portion.label, warnings);
       roleDensityNote();
       return result(ml * food.densityGPerMl, ml, null, warnings);
@@ -397,18 +446,28 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
 
   const ask = countAsk(parsed);
   const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, new Set(words(parsed.name ?? '').map(singular)));
-  if (!chosen && ask.piece === 'can' && /\bcanned\b/i.test(food.name)) {
+  // A canned food, or one standing for a can's drained contents ("1 can lentils" → cooked lentils).
+  if (!chosen && ask.piece === 'can' && (/\bcanned\b/i.test(food.name) || opts.drained)) {
     const grams = drainedGrams(quantity * USUAL_CAN_GRAMS, opts, warnings);
     warnings.push(`No can size given: weighed as the usual 15 oz (${USUAL_CAN_GRAMS} g) can.`);
     const d = density();
     return result(grams, d ? grams / d : null, null, warnings);
+  }
+  const household = !chosen && ask.piece ? householdVolume(ask.piece, food, density) : null;
+  if (household) {
+    const ml = quantity * household.ml;
+    const d = density();
+    if (d) {
+      warnings.push(`No household weight for "${parsed.unitText ?? ask.piece}" of this food: weighed as ${household.as} (${household.why}).`);
+      return result(ml * d, ml, null, warnings);
+    }
   }
   if (!chosen) {
     const what = ask.piece ? `"${parsed.unitText ?? ask.piece}"` : 'one piece';
     return result(0, null, null, [`No household weight for ${what} of this food: give the amount in grams, ounces or cups.`]);
   }
   const each = chosen.r.portion.grams / chosen.r.portion.amount;
-  const wholeCan = chosen.r.info.pieces.includes('can') && !/drain/i.test(chosen.r.portion.measure);
+  const wholeCan = chosen.r.info.pieces.includes('can') && !/drain/i.test(chosen.r.portion.measure) && !isDrainedSolids(food);
   const grams = wholeCan ? drainedGrams(quantity * each, opts, warnings) : quantity * each;
   if (chosen.guessed) {
     const asked = ask.size ? `No "${ask.size}" weight` : ask.diameter !== null ? `No ${ask.diameter}-inch weight` : 'No size given';

@@ -8,12 +8,12 @@ import type { CatalogueFood } from '../../shared/food';
 import { MAX_LINES } from '../../shared/schemas/analyze';
 import { weighLine } from '../matching/weigh-line';
 import { CHECK_MATCH_BELOW } from '../matching/match-line';
-import { drainedShareFor } from '../matching/drained-share';
+import { drainedShareFor, isDrainedSolids } from '../matching/drained-share';
 import type { FoodEngine } from './food-engine';
 import { foodSummary } from './foods';
 import { badRequest } from '../lib/http-error';
 import { matchOwnFood } from './own-food-match';
-import { readLine } from './line-readings';
+import { readLine, weighReading } from './line-readings';
 
 /** The ingredient lines of pasted text: headings, a title, "Serves 4" and method steps set aside. */
 export function textToLines(text: string): LineInput[] {
@@ -56,7 +56,8 @@ export function analyzeLine(
   canUse: FoodVisibility = catalogueOnly,
   ownFoods: readonly CatalogueFood[] = [],
 ): AnalyzedLineWithFood {
-  const { parsed, match } = readLine(engine, line.input);
+  const reading = readLine(engine, line.input);
+  const { parsed, match } = reading;
   const warnings: string[] = [];
   const own = ownFoods.length > 0 ? matchOwnFood(parsed.name || line.input, ownFoods) : null;
   if (!own) warnings.push(...match.warnings);
@@ -89,12 +90,15 @@ export function analyzeLine(
     grams = line.grams;
     volumeMl = lineVolumeMl(engine, line.input, food, grams, parsed);
   } else {
-    const drained = match.drained && food ? { share: drainedShareFor(food.name)?.share ?? null } : null;
-    const weighed = weighLine(parsed, food, food?.portions ?? [], {
-      countDefault: food ? engine.countDefaults.get(food.id) : null,
-      nearPortions: food ? engine.nearPortions.get(food.id) : undefined,
-      drained,
-    });
+    // A drained-solids food weighed from its can's net size keeps only the drained share, whatever the line says.
+    const drained = (match.drained || isDrainedSolids(food)) && food ? { share: drainedShareFor(food.name)?.share ?? null } : null;
+    const weighed = weighReading(reading, food, () =>
+      weighLine(parsed, food, food?.portions ?? [], {
+        countDefault: food ? engine.countDefaults.get(food.id) : null,
+        nearPortions: food ? engine.nearPortions.get(food.id) : undefined,
+        drained,
+      }),
+    );
     grams = weighed.grams;
     volumeMl = weighed.volumeMl ?? (food && grams > 0 ? grams / food.densityGPerMl : 0);
     portionUsed = weighed.portionUsed;

@@ -8,6 +8,7 @@
 import { LRUCache } from 'lru-cache';
 import { parseLine, type ParsedLine } from '../../shared/parse-line';
 import { matchLine, type LineMatch } from '../matching/match-line';
+import type { WeighedLine } from '../matching/weigh-line';
 import type { CatalogueFood } from '../../shared/food';
 import type { FoodEngine } from './food-engine';
 
@@ -22,6 +23,7 @@ export const REMEMBERED_LINES = 5_000;
 const MAX_REMEMBERED_CHARS = 500;
 
 const readings = new WeakMap<object, LRUCache<string, LineReading>>();
+const weighings = new WeakMap<LineReading, WeighedLine>();
 
 /** The engine's parse and catalogue match of `input`, from memory when this engine read it before. */
 export function readLine(engine: Pick<FoodEngine<CatalogueFood>, 'matcher'>, input: string): LineReading {
@@ -37,6 +39,22 @@ export function readLine(engine: Pick<FoodEngine<CatalogueFood>, 'matcher'>, inp
     cache.set(input, reading);
   }
   return reading;
+}
+
+/**
+ * The weighing of a reading's own catalogue food, remembered with the reading: it depends only on the
+ * parse, that food and its engine's portions, and an SR28 food never changes while its engine lives.
+ * Another food (pinned by the cook, their own from a label) is weighed by `weigh` every time.
+ */
+export function weighReading(reading: LineReading, food: CatalogueFood | null, weigh: () => WeighedLine): WeighedLine {
+  if (!food || food !== reading.match.food || food.source !== 'usda-sr28') return weigh();
+  let weighed = weighings.get(reading);
+  if (!weighed) {
+    weighed = weigh();
+    Object.freeze(weighed.warnings);
+    weighings.set(reading, Object.freeze(weighed));
+  }
+  return weighed;
 }
 
 function read(engine: Pick<FoodEngine<CatalogueFood>, 'matcher'>, input: string): LineReading {

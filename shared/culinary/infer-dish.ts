@@ -20,6 +20,7 @@ const GREASE_WORDS = /\b(for (the )?(pan|griddle|skillet|greasing|frying)|to gre
 const COATING_WORDS = /\b(for (dredging|coating|dusting|breading)|dredg|dust(ing)?)\b/i;
 const BAKE_TYPES: readonly DishType[] = ['leavened-bake', 'batter', 'dough'];
 const MIXED_TYPES: readonly DishType[] = ['assembled-bake', 'stovetop-sauce', 'simmered-dish', 'griddle-saute'];
+const PASTA_WORDS = /\b(pasta|spaghetti|macaroni|noodles?|linguine|fettuccine|penne|rigatoni|bucatini|tagliatelle)\b/i;
 /** the protein is the portion: a burger in a bun, a patty, a cutlet */
 const PORTION_WORDS = /\b(buns?|rolls?|patt(y|ies)|burgers?|cutlets?)\b/i;
 
@@ -84,7 +85,7 @@ function roleOf(
   line: CulinaryLine,
   kind: LineKind,
   dish: DishType,
-  ctx: { hasRoux: boolean; kinds: readonly LineKind[]; sugarIsStructure: boolean; rouxFat: number },
+  ctx: { hasRoux: boolean; kinds: readonly LineKind[]; sugarIsStructure: boolean; rouxFat: number; riceNotPasta: boolean },
   index: number,
 ): LineFunction {
   const note = `${line.comment ?? ''}`;
@@ -124,7 +125,8 @@ function roleOf(
       if (dish === 'assembled-bake' && has('fresh-cheese')) return 'binder';
       // eggs set with milk in the oven: a strata, quiche or breakfast casserole
       if (dish === 'assembled-bake' && has('milk', 'cream')) return 'custard';
-      if (dish === 'stovetop-sauce' && has('starch') && !has('milk', 'cream')) return 'sauce';
+      // eggs tossed with hot pasta make its sauce (carbonara); stirred into rice they are scrambled (fried rice)
+      if (dish === 'stovetop-sauce' && has('starch') && !has('milk', 'cream')) return ctx.riceNotPasta ? 'main-protein' : 'sauce';
       if (COATING_WORDS.test(note) || has('crumbs')) return 'coating';
       return 'main-protein';
     case 'sugar':
@@ -221,7 +223,9 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
   const rouxFat = fats.find((i) => /^butter\b/i.test(lines[i].food?.name ?? '')) ?? fats[0] ?? -1;
   // sugar is structure where it outweighs the flour (brownies, pound cake) or melts into chocolate
   const sugarIsStructure = kinds.includes('chocolate') || g('sugar') >= flourGrams;
-  const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat };
+  const starchNames = lines.filter((_, i) => kinds[i] === 'starch').map((l) => `${l.phrase} ${l.food?.name ?? ''}`);
+  const riceNotPasta = starchNames.some((n) => /\brice\b/i.test(n)) && !starchNames.some((n) => PASTA_WORDS.test(n));
+  const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat, riceNotPasta };
   // mince bound with crumbs and egg (a loaf, meatballs) or a breaded piece is shaped into the portion
   const shaped = kinds.includes('meat') && kinds.includes('crumbs') && kinds.includes('egg');
   const portion = lines.some((l) => PORTION_WORDS.test(`${l.phrase} ${l.comment ?? ''}`));

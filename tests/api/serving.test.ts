@@ -94,4 +94,27 @@ describe('serving the client', () => {
     const small = await request(t.app).get('/api/health').set('Accept-Encoding', 'gzip').expect(200);
     expect(small.headers['content-encoding']).toBeUndefined();
   });
+
+  it('compresses an analysis in one piece: gzip or brotli as offered, the same JSON as sent plain, and plain when nothing is offered', async () => {
+    const recipe = {
+      text: ['12 oz elbow macaroni', '2 cups shredded sharp cheddar', '2 1/2 cups whole milk', '3 tbsp butter', '1 lb ground beef'].join('\n'),
+      servings: 4,
+    };
+    const plain = await request(t.app).post('/api/analyze').set('Accept-Encoding', 'identity').send(recipe).expect(200);
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    const length = Number(plain.headers['content-length']);
+    expect(length).toBeGreaterThan(1024);
+    for (const offered of ['gzip, deflate', 'br', 'gzip, deflate, br']) {
+      const res = await request(t.app).post('/api/analyze').set('Accept-Encoding', offered).send(recipe).expect(200);
+      expect(res.headers['content-encoding'], offered).toBe(offered === 'br' ? 'br' : 'gzip');
+      expect(res.headers['content-type']).toBe('application/json; charset=utf-8');
+      expect(res.headers.vary).toMatch(/Accept-Encoding/);
+      // a length, not a chunked stream: compressed in one call, and well under the plain answer
+      expect(Number(res.headers['content-length'])).toBeLessThan(length / 2);
+      expect(res.body).toEqual(plain.body); // supertest decodes it
+    }
+    const none = await request(t.app).post('/api/analyze').unset('Accept-Encoding').send(recipe).expect(200);
+    expect(none.headers['content-encoding']).toBeUndefined();
+    expect(none.body).toEqual(plain.body);
+  });
 });

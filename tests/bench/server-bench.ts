@@ -49,11 +49,16 @@ async function time(fn: () => Promise<unknown> | unknown) {
   return performance.now() - t0;
 }
 
+/**
+ * Targets the culinary rules can reach for RECIPE_20 (816 kcal and 36 g protein per serving as written): the sour
+ * cream is stirred into the roux sauce, where Greek yogurt would split, and pasta, milk and mince keep ±10 % bands,
+ * so the closest plan reaching 45 g protein has 556 kcal; 520 kcal answered 422 (infeasible) every time.
+ */
+export const BURST_TARGETS = { proteinMinG: 45, kcalMax: 600 };
+
 async function burst(app: Express) {
   const rewrites = Array.from({ length: 8 }, () =>
-    request(app)
-      .post('/api/rewrite')
-      .send({ text: RECIPE_20, servings: 8, targets: { proteinMinG: 45, kcalMax: 520 }, objective: 'closest' }),
+    request(app).post('/api/rewrite').send({ text: RECIPE_20, servings: 8, targets: BURST_TARGETS, objective: 'closest' }),
   );
   const during: { health: number[]; login: number[]; analyze: number[] } = { health: [], login: [], analyze: [] };
   const probes = (async () => {
@@ -119,7 +124,9 @@ export async function runServerBench(databaseUrl: string) {
   const idle = { health: [] as number[] };
   for (let i = 0; i < 10; i++) idle.health.push(await time(() => request(app).get('/api/health')));
   const b = await burst(app);
-  console.log(`burst of 8 concurrent 20-line rewrites: ${b.burstMs.toFixed(0)} ms in all, statuses ${[...new Set(b.statuses)].join('/')}`);
+  console.log(`burst of 8 concurrent 20-line rewrites: ${b.burstMs.toFixed(0)} ms in all, statuses ${b.statuses.join(' ')}`);
+  if (b.statuses.some((s) => s !== 200))
+    console.log(`  not every rewrite yielded a plan: the burst measures less solver work than it should (see BURST_TARGETS)`);
   console.log(`  health idle ${fmt(idle.health)}; during the burst ${fmt(b.during.health)}`);
   console.log(`  sign-in during the burst ${fmt(b.during.login)} (one bcrypt hash at cost 11 is most of it)`);
   console.log(`  analyze during the burst ${fmt(b.during.analyze)}`);

@@ -70,6 +70,14 @@ const halfAsApplesauce = swap('^Applesauce, canned, unsweetened', [0.5, 1.3], 0.
 const halfAsYogurt = { ...plainYogurt, maxShare: 0.5 };
 /** label rule (tests/panel/README.md): a batter's milk or buttermilk accepts up to half as plain Greek yogurt or low-fat cottage cheese, blended */
 const halfOfBatterMilk = [swap('^Yogurt, Greek, plain, (nonfat|lowfat)', [0.75, 1.3], 0.5), swap('^Cheese, cottage, (lowfat|nonfat)', [0.75, 1.3], 0.5)];
+/**
+ * label rule (tests/panel/README.md, round 5): the milk of a baked cheese sauce accepts up to half its weight as
+ * blended low-fat cottage cheese or plain nonfat Greek yogurt, stirred in off the heat before it bakes
+ */
+const halfOfBakedCheeseSauceMilk = [
+  swap('^Cheese, cottage, (lowfat|nonfat)', [0.75, 1.3], 0.5),
+  swap('^Yogurt, Greek, plain, (nonfat|lowfat)', [0.75, 1.3], 0.5),
+];
 const chickenBreastCooked = swap(
   '^(Chicken, broilers or fryers, breast, meat only, cooked, (roasted|stewed)|Turkey, .*breast, meat only, cooked, roasted)',
   [0.8, 1.25],
@@ -116,7 +124,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
       { text: '1 lb elbow macaroni', swaps: betterPasta },
       { text: '4 tablespoons butter', keep: 'roux: needs real fat', scale: LESS(0.6) },
       { text: '1/4 cup all-purpose flour', keep: 'roux: thickens the sauce' },
-      { text: '3 cups whole milk', swaps: [lighterMilk, evaporatedSkim] },
+      { text: '3 cups whole milk', swaps: [lighterMilk, evaporatedSkim, ...halfOfBakedCheeseSauceMilk] },
       { text: '1 teaspoon dry mustard', keep: keepSeasoning },
       { text: '1 teaspoon salt', keep: keepSeasoning },
       { text: '1/2 teaspoon black pepper', keep: keepSeasoning },

@@ -44,6 +44,19 @@ describe('remembered line readings', () => {
     for (const input of lines) expect(analyzeLine(engine, { input })).toEqual(analyzeLine(fresh, { input }));
   });
 
+  it('weighs a pinned food for itself, not as the remembered weighing of the matched food', () => {
+    const engine = engineFromFoods(foods);
+    const fresh = engineFromFoods(foods);
+    const input = '1 cup shredded mozzarella';
+    const matched = analyzeLine(engine, { input });
+    const parmesan = foods.find((f) => f.sourceId === '01032')!; // Cheese, parmesan, grated (USDA SR28 NDB 01032)
+    const pinned = analyzeLine(engine, { input, foodId: parmesan.id });
+    expect(pinned.food?.id).toBe(parmesan.id);
+    expect(pinned).toEqual(analyzeLine(fresh, { input, foodId: parmesan.id }));
+    expect(pinned.grams).not.toBe(matched.grams);
+    expect(analyzeLine(engine, { input })).toEqual(matched);
+  });
+
   it('keeps each engine its own readings and refuses changes to a shared one', () => {
     const a = engineFromFoods(foods);
     const b = engineFromFoods(foods);

@@ -65,6 +65,21 @@ const NAMED_OTHERWISE: Record<string, string> = {
   'brioche buns': 'an enriched burger bun, nearest SR28 food is the hamburger roll',
   'brioche bun': 'as brioche buns',
   'italian seasoning': 'a blend of dried herbs led by oregano (common practice); weighed as dried oregano and flagged for checking',
+  'dried nori': 'as nori: nori is sold dried, in sheets',
+  'nori sheets': 'as nori',
+  'roasted nori': 'as nori',
+  baguette: 'a long French loaf, SR28 "bread, french or vienna"',
+  baguettes: 'as baguette',
+  kabocha: 'a Japanese winter squash (common practice), SR28 "squash, winter, all varieties"',
+  pimiento: 'SR28 spells it "pimento"',
+  pimientos: 'as pimiento',
+  sherry: 'a fortified wine; cooks mean dry sherry (common practice), SR28 "wine, dessert, dry"',
+  'cooking sherry': 'as sherry',
+  chicharrones: 'fried pork skin (common practice), SR28 "pork skins"',
+  'urad dal': 'split black gram (common practice), SR28 "mungo beans"',
+  'moong dal': 'split mung beans (common practice)',
+  'chana dal': 'split chickpeas (common practice)',
+  passata: 'sieved tomato purée (common practice)',
 };
 
 function keyWords(text: string): Set<string> {

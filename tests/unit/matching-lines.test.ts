@@ -85,13 +85,169 @@ describe('cans and jars', () => {
         sr28('16146', /^can drained solids$/) / sr28('16347', /total can contents/)) /
       3;
     expect(line('1 (15 oz) can black beans, drained').grams).toBeCloseTo(15 * OZ * beanShare, 0);
-    const undrained = line('1 (15 oz) can black beans');
+    const undrained = line('1 (15 oz) can black beans, undrained');
     expect(undrained.grams).toBeCloseTo(15 * OZ, 6);
+    expect(line('1 (15 oz) can black beans').grams).toBeCloseTo(15 * OZ * beanShare, 0);
     // USDA SR28 WEIGHT.txt 15121 "can (12.5 oz), drained" (315 g) of a 12.5 oz can (NIST)
     const tunaShare = sr28('15121', /12\.5 oz/) / (12.5 * OZ);
     const tuna = line('2 (5 oz) cans tuna, drained');
     expect(tuna.food?.name).toMatch(/tuna/i);
     expect(tuna.grams).toBeCloseTo(10 * OZ * tunaShare, 0);
+  });
+});
+
+describe('canned beans are drained unless the line keeps their liquid (*common practice*)', () => {
+  it('"2 cans chickpeas" is two SR28 drained cans of the drained-solids food, and says so', () => {
+    const l = line('2 cans chickpeas (or 3 cups freshly cooked chickpeas)');
+    expect(l.food?.sourceId).toBe('16358');
+    // USDA SR28 WEIGHT.txt 16358 "can drained" (253 g)
+    expect(l.grams).toBeCloseTo(2 * sr28('16358', /^can drained$/), 6);
+    expect(l.warnings.join(' ')).toMatch(/Weighed drained/);
+  });
+
+  it('the whole can, liquid and all, is the "solids and liquids" food at its SR28 can weight', () => {
+    for (const input of ['2 cans chickpeas, undrained', '2 cans chickpeas with their liquid']) {
+      const l = line(input);
+      expect(l.food?.sourceId, input).toBe('16058');
+      // USDA SR28 WEIGHT.txt 16058 "can (total can contents)" (448 g)
+      expect(l.grams, input).toBeCloseTo(2 * sr28('16058', /total can contents/), 6);
+      expect(l.warnings.join(' '), input).not.toMatch(/Weighed drained/);
+    }
+  });
+
+  it('a drained-solids food weighed by its can size keeps the drained share, never the whole can', () => {
+    // USDA SR28 WEIGHT.txt 16358 "can drained" ÷ 16058 "can (total can contents)"; 15 oz by NIST Handbook 44
+    const share = sr28('16358', /^can drained$/) / sr28('16058', /total can contents/);
+    for (const input of ['1 15-ounce can unsalted chickpeas', '1 (15 oz) can chickpeas']) {
+      const l = line(input);
+      expect(l.food?.sourceId, input).toBe('16358');
+      expect(l.grams, input).toBeCloseTo(15 * OZ * share, 0);
+    }
+  });
+
+  it('pinto and kidney beans by the can are their SR28 drained-solids foods and "1 can drained solids" portions', () => {
+    // USDA SR28 WEIGHT.txt 16146 and 16145 "can drained solids" (277 g, 266 g)
+    expect(line('1 can pinto beans').food?.sourceId).toBe('16146');
+    expect(line('1 can pinto beans').grams).toBeCloseTo(sr28('16146', /^can drained solids$/), 6);
+    expect(line('1 can kidney beans').food?.sourceId).toBe('16145');
+    expect(line('1 can kidney beans').grams).toBeCloseTo(sr28('16145', /^can drained solids$/), 6);
+  });
+
+  it("canned lentils, which SR28 lacks, are cooked lentils at the can's drained share", () => {
+    // data/drained-shares.json "lentil" (the mean of three USDA SR28 bean pairs); 5 oz by NIST Handbook 44
+    const l = line('2 5-ounce cans green or Puy lentils, drained (or 9 ounces home-cooked)');
+    expect(l.food?.sourceId).toBe('16070');
+    expect(l.grams).toBeCloseTo(10 * OZ * 0.6005, 0);
+    expect(line('1 lb lentils').food?.sourceId).toBe('16069');
+  });
+
+  it('baked and refried beans are eaten with their sauce: the whole can', () => {
+    expect(line('1 (15 oz) can refried beans').grams).toBeCloseTo(15 * OZ, 6); // NIST Handbook 44
+    expect(line('1 (15 oz) can refried beans').warnings.join(' ')).not.toMatch(/Weighed drained/);
+  });
+});
+
+describe('bunches, sprigs and other pieces SR28 does not weigh get an honest weight, never 0 g', () => {
+  it('"1 bunch cilantro", "1 bunch green onions", "2 sprigs thyme" weigh their sourced curated rows', () => {
+    // data/curated-portions.json: *common practice* rows built on USDA SR28 11165 "9 sprigs",
+    // 11291 "1 medium", 02049 "0.5 tsp" (each row names its source)
+    expect(line('1 bunch cilantro').grams).toBeCloseTo(curatedGrams('11165', 'bunch'), 6);
+    expect(line('1 bunch green onions').food?.sourceId).toBe('11291');
+    expect(line('1 bunch green onions').grams).toBeCloseTo(curatedGrams('11291', 'bunch'), 6);
+    expect(curatedGrams('11291', 'bunch')).toBeCloseTo(7 * sr28('11291', /^medium/), 6);
+    expect(line('2 sprigs thyme').grams).toBeCloseTo(2 * curatedGrams('02049', 'sprig'), 6);
+    expect(curatedGrams('02049', 'sprig')).toBeCloseTo(sr28('02049', /^tsp$/) / 2, 6);
+    expect(line('3 sprigs rosemary, chopped').grams).toBeCloseTo(3 * sr28('02063', /^tsp$/), 6);
+  });
+
+  it('leaves from sprigs and kernels from ears weigh the sprigs and ears', () => {
+    // data/curated-portions.json 02065 "sprig" (*common practice*); USDA SR28 11167 "ear, medium … yields" 102 g
+    expect(line('leaves from 2 sprigs spearmint').grams).toBeCloseTo(2 * curatedGrams('02065', 'sprig'), 6);
+    expect(line('Kernels cut from 2 ears of corn').grams).toBeCloseTo(2 * sr28('11167', /^ear, medium/), 6);
+  });
+
+  it('SR28\'s own sprigs are used where it has them: parsley "10 sprigs", cilantro "9 sprigs"', () => {
+    // USDA SR28 WEIGHT.txt 11297 "10 sprigs" 10 g; 11165 "9 sprigs" 20 g
+    expect(line('5 sprigs parsley').grams).toBeCloseTo(5 * sr28('11297', /^sprigs$/), 6);
+    expect(line('3 sprigs cilantro').grams).toBeCloseTo(3 * sr28('11165', /^sprigs$/), 6);
+  });
+
+  it('the zest of a lemon weighs its curated row, about 1 tbsp of peel, however the count is written', () => {
+    // data/curated-portions.json 09156: *common practice* on USDA SR28 09156 "1 tbsp" 6 g
+    expect(line('zest of 1 lemon').grams).toBeCloseTo(curatedGrams('09156', 'lemon, zest of'), 6);
+    expect(curatedGrams('09156', 'lemon, zest of')).toBeCloseTo(sr28('09156', /^tbsp$/), 6);
+    expect(line('Zest of 2 lemons, finely chopped').grams).toBeCloseTo(2 * curatedGrams('09156', 'lemon, zest of'), 6);
+    expect(line('Zest of two lemons').grams).toBeCloseTo(2 * curatedGrams('09156', 'lemon, zest of'), 6);
+    expect(line('grated zest of ½ orange').grams).toBeCloseTo(curatedGrams('09216', 'orange, zest of') / 2, 6);
+    // USDA SR28 09152 "1 lemon yields" 48 g of juice
+    expect(line('juice of ½ lemon').grams).toBeCloseTo(sr28('09152', /^lemon yields$/) / 2, 6);
+  });
+
+  it('the zest of a lime (SR28 has no lime peel) is a teaspoon, flagged, never the whole fruit', () => {
+    // data/curated-portions.json 09159 "lime, zest of" (*common practice*, on USDA SR28 09156 "1 tsp" 2 g)
+    const zest = line('zest of 1 lime');
+    expect(zest.grams).toBeCloseTo(curatedGrams('09159', 'lime, zest of'), 6);
+    expect(zest.checkMatch).toBe(true);
+    // USDA SR28 09159 "1 fruit (2" dia)" 67 g
+    expect(line('2 limes').grams).toBeCloseTo(2 * sr28('09159', /^fruit/), 6);
+  });
+
+  it('a count of pieces SR28 gives per ounce: "12 pecan halves" are 12 of the 19 halves in an ounce', () => {
+    // USDA SR28 WEIGHT.txt 12142 "oz (19 halves)" 28.35 g
+    const l = line('12 pecan halves');
+    expect(l.food?.sourceId).toBe('12142');
+    expect(l.grams).toBeCloseTo((12 * sr28('12142', /19 halves/)) / 19, 6);
+  });
+
+  it('a label serving that states its volume is a volume portion: ice cream by the cup and the scoop', () => {
+    // USDA SR28 WEIGHT.txt 19095 "serving 1/2 cup" 66 g; a scoop is ½ cup (*common practice*, from memory)
+    const half = sr28('19095', /^serving 1\/2 cup$/);
+    expect(line('1 cup vanilla ice cream').grams).toBeCloseTo(2 * half, 6);
+    const scoops = line('2 scoops vanilla ice cream');
+    expect(scoops.grams).toBeCloseTo(2 * half, 6);
+    expect(scoops.warnings.join(' ')).toMatch(/½ cup/);
+  });
+
+  it('a handful is a loose cup of leaves and ¼ cup of anything denser, and says so (*common practice*)', () => {
+    // USDA SR28 WEIGHT.txt 11959 arugula "1 cup" 20 g (the leaf row aside); 12151 pistachios "1 cup" 123 g
+    const arugula = line('2 large handfuls of arugula');
+    expect(arugula.grams).toBeCloseTo(2 * sr28('11959', /^cup$/), 6);
+    expect(arugula.warnings.join(' ')).toMatch(/handful/);
+    expect(line('a handful of pistachios').grams).toBeCloseTo(sr28('12151', /^cup$/) / 4, 6);
+  });
+
+  it('a whole squash, a head of savoy or radicchio and a loaf of French bread weigh their sourced rows', () => {
+    // USDA SR28 11641 summer squash "1 medium" 196 g, borrowed for crookneck; the rest data/curated-portions.json
+    expect(line('1 md yellow squash, thinly sliced').grams).toBeCloseTo(sr28('11641', /^medium$/), 6);
+    expect(line('1 small butternut squash').grams).toBeCloseTo(curatedGrams('11485', 'small'), 6);
+    expect(line('1 head Savoy cabbage, shredded').grams).toBeCloseTo(sr28('11109', /^head, medium/), 6);
+    expect(line('1 head of radicchio').grams).toBeCloseTo(curatedGrams('11952', 'head'), 6);
+    expect(line('1 loaf French bread').grams).toBeCloseTo(16 * OZ, 1); // NIST Handbook 44: 1 lb
+  });
+
+  it('a weight the line writes after a comma beats every portion (NIST Handbook 44)', () => {
+    expect(line('4 pieces rutabaga, 150 grams each').grams).toBeCloseTo(600, 6);
+    expect(line('4 chicken breast halves, with skin and bone, about 8 ounces each').grams).toBeCloseTo(32 * OZ, 6);
+    expect(line('2 heads Treviso radicchio, about 7 ounces').grams).toBeCloseTo(7 * OZ, 6);
+    expect(line('1 4–5 lb chicken').grams).toBeCloseTo(4.5 * 16 * OZ, 6);
+  });
+
+  it('butter by the stick: "plus 2 tablespoons" adds to the stick, a parenthetical after two sticks is their total', () => {
+    // USDA SR28 WEIGHT.txt 01145 "tbsp" (14.2 g) and "stick" (113 g); a stick is 8 tbsp (*common practice*)
+    expect(line('1 stick plus 2 tablespoons butter').grams).toBeCloseTo(10 * sr28('01001', /^tbsp$/), 6);
+    expect(line('1 stick plus 2 tablespoons unsalted butter (5 oz / 142g), chilled').grams).toBeCloseTo(5 * OZ, 6); // NIST Handbook 44
+    expect(line('2 sticks (16 tablespoons) cold unsalted butter').grams).toBeCloseTo(16 * sr28('01145', /^tbsp$/), 6);
+    expect(line('2 sticks (8oz or 228g) unsalted butter').grams).toBeCloseTo(8 * OZ, 6); // NIST Handbook 44
+    // a can's size stays each can's: 2 × 15 oz (NIST Handbook 44) × the chickpea drained share (USDA SR28 16358 ÷ 16058)
+    const share = sr28('16358', /^can drained$/) / sr28('16058', /total can contents/);
+    expect(line('2 cans (15 oz) chickpeas').grams).toBeCloseTo(30 * OZ * share, 0);
+  });
+
+  it('every line that still weighs 0 g says why', () => {
+    for (const input of ['1 bunch dandelion greens', '1 loaf French bread', 'a splash of milk', '2 heads radicchio', 'salt']) {
+      const l = line(input);
+      if (l.grams === 0) expect(l.warnings.length, input).toBeGreaterThan(0);
+    }
   });
 });
 
@@ -170,6 +326,14 @@ describe("airy foods weigh by their own or a near food's cup, not a role default
   it("shredded part-skim mozzarella (no cup of its own) takes a near mozzarella's shredded cup", () => {
     // USDA SR28 WEIGHT.txt 01029 "cup, shredded" (113 g): the part-skim mozzarella nearest by name
     expect(line('2 cups shredded reduced-fat mozzarella').grams).toBeCloseTo(2 * sr28('01029', /^cup, shredded$/), 6);
+  });
+
+  it("raw cashews (weighed by SR28 only by the ounce) take other cashews' cups, never a spoon of coconut cream", () => {
+    // USDA SR28 WEIGHT.txt 12086 oil-roasted cashews "cup, whole" (129 g); 12085 dry-roasted "tbsp" (8.6 g)
+    expect(line('1 cup raw cashews').grams).toBeCloseTo(sr28('12086', /^cup, whole$/), 6);
+    const spoons = line('2 tbsp cashews, broken into large pieces');
+    expect(spoons.portionUsed).toMatch(/Cashew/);
+    expect(Math.abs(spoons.grams - 2 * sr28('12085', /^tbsp$/))).toBeLessThan(0.15 * 2 * sr28('12085', /^tbsp$/));
   });
 });
 
@@ -272,12 +436,12 @@ describe('the hand-labelled lines (tests/reference/labelled-lines)', () => {
   it('hold their measured accuracy (acceptable food and grams within 15 %), minus noise', () => {
     const [first, second] = HAND_LABELLED_BATCHES;
     expect(readHandLabelledLines(first.file).length + readHandLabelledLines(second.file).length).toBeGreaterThanOrEqual(500);
-    // npm run bench prints each figure. Batch 1 measured 99.4 % tune, 87.6 % held-out (a line is 0.6 %
-    // of a half); batch 2 measured 98.0 % tune, 86.0 % held-out (a line is 1 % of a half).
-    expect(both(first.file, 'tune').share).toBeGreaterThanOrEqual(0.98);
-    expect(both(first.file, 'held-out').share).toBeGreaterThanOrEqual(0.86);
-    expect(both(second.file, 'tune').share).toBeGreaterThanOrEqual(0.96);
-    expect(both(second.file, 'held-out').share).toBeGreaterThanOrEqual(0.84);
+    // npm run bench prints each figure. Batch 1 measured 100 % tune, 90.0 % held-out (a line is 0.6 %
+    // of a half); batch 2 measured 99.0 % tune, 87.0 % held-out (a line is 1 % of a half).
+    expect(both(first.file, 'tune').share).toBeGreaterThanOrEqual(0.99);
+    expect(both(first.file, 'held-out').share).toBeGreaterThanOrEqual(0.88);
+    expect(both(second.file, 'tune').share).toBeGreaterThanOrEqual(0.97);
+    expect(both(second.file, 'held-out').share).toBeGreaterThanOrEqual(0.85);
   });
 
   it('took no fallback while weighing all of the above', () => {

