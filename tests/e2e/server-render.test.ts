@@ -111,6 +111,32 @@ describe('pages drawn on the server', () => {
     await context.close();
   });
 
+  it('keeps what the cook typed before the page’s code ran, and analyses it', { timeout: 120_000 }, async () => {
+    const context = await live.browser.newContext({ viewport: { width: 390, height: 844 } });
+    const page = await context.newPage();
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    await page.route(/\/assets\/index-[^/]+\.js$/, async (route) => {
+      await held;
+      await route.continue();
+    });
+    await page.goto(`${live.server.url}/`, { waitUntil: 'commit' });
+    const box = page.getByRole('textbox', { name: /ingredients/i });
+    await box.waitFor();
+    await box.fill('8 oz elbow macaroni\n2 cups shredded sharp cheddar\n2 cups whole milk');
+    await page.getByLabel('Servings').first().fill('3');
+    release();
+    await page.waitForFunction(() => Object.keys(document.querySelector('textarea') ?? {}).some((k) => k.startsWith('__reactFiber')), undefined, {
+      timeout: 30_000,
+    });
+    await page.waitForLoadState('networkidle');
+    expect(await box.inputValue()).toContain('elbow macaroni');
+    await page.getByRole('button', { name: /analyse/i }).click();
+    await expect.poll(() => page.getByText('Energy per serving').first().isVisible(), { timeout: 30_000 }).toBe(true);
+    expect(await page.getByText('3 lines. Change a food or a weight and the numbers follow.').isVisible()).toBe(true);
+    await context.close();
+  });
+
   it('draws the demo cook’s recipe book with its recipes and hydrates it without asking for them again', { timeout: 120_000 }, async () => {
     const context = await signedInContext({ viewport: { width: 390, height: 844 } });
     const html = await (await context.request.get(`${live.server.url}/recipes`)).text();

@@ -63,9 +63,14 @@ export function RecipeInputForm({
   const submit = async (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
     setChecking(true);
+    // Read the fields themselves: text typed or pasted before the page finished loading is in them
+    // (the fields are uncontrolled so that hydration never resets what the cook already wrote).
+    const typed = { text: textRef.current?.value ?? text, servings: servingsRef.current?.value ?? servings };
+    setText(typed.text);
+    setServings(typed.servings);
     try {
       check.current ??= await loadChecks();
-      const values = { text, servings: servingsNumber(servings) };
+      const values = { text: typed.text, servings: servingsNumber(typed.servings) };
       const found = check.current(values);
       setErrors(found ?? {});
       if (found) {
@@ -89,7 +94,7 @@ export function RecipeInputForm({
         error={errors.text}
         name="text"
         ref={textRef}
-        value={text}
+        defaultValue={defaultText}
         onChange={(event) => {
           setText(event.target.value);
           recheck({ text: event.target.value, servings });
@@ -113,7 +118,7 @@ export function RecipeInputForm({
           error={errors.servings}
           name="servings"
           ref={servingsRef}
-          value={servings}
+          defaultValue={String(defaultServings)}
           onChange={(event) => {
             setServings(event.target.value);
             recheck({ text, servings: event.target.value });
