@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { screenshot } from '../helpers/browser';
 import { useLiveBrowser } from '../helpers/e2e-harness';
 import { uniqueEmail } from '../helpers/test-app';
+import { signUpCook } from '../helpers/e2e-session';
 
 const live = useLiveBrowser();
 
@@ -98,15 +99,7 @@ describe('paste, rewrite, save, compare', () => {
 
   it('reads a whole pasted recipe page: only its ingredients are weighed, its servings offered, its title and method kept', async () => {
     const page = await live.browser.newPage({ viewport: { width: 390, height: 844 } });
-    await page.goto(`${live.server.url}/sign-up`);
-    await page.getByRole('textbox', { name: 'Display name' }).fill('Odile Fenn');
-    await page.getByRole('textbox', { name: 'E-mail' }).fill(uniqueEmail('e2e-page-paste'));
-    await page.getByLabel('Password', { exact: true }).fill('a sturdy kitchen password');
-    await page.getByText('I cook for myself or my household').click();
-    await page.getByRole('button', { name: /create/i }).click();
-    // at phone width the account menu sits behind "Menu": ask the server whether the cook is signed in
-    const signedIn = async () => Boolean(((await (await page.request.get(`${live.server.url}/api/auth/session`)).json()) as { user?: unknown }).user);
-    await expect.poll(signedIn, { timeout: 15_000 }).toBe(true);
+    await signUpCook(page, live.server.url, 'Odile Fenn', uniqueEmail('e2e-page-paste'));
 
     const recipePage = ['Sunday lasagna', 'Serves 8', '', 'Ingredients', LASAGNA, '', 'Method', '1. Brown the beef.', '2. Layer and bake 45 minutes.'].join(
       '\n',
