@@ -3,8 +3,7 @@ import type { Sequelize } from 'sequelize';
 import { analyzeRequestSchema } from '../../shared/schemas/analyze';
 import { parse } from '../middleware/validate';
 import { getFoodEngine } from '../services/food-engine';
-import { analyzeLines, requestLines, toAnalyzeResponse } from '../services/analysis';
-import { readRecipeText } from '../../shared/recipe-text';
+import { analyzeLines, readRequest, toAnalyzeResponse } from '../services/analysis';
 import { canSeeFood, ownFoodsFor } from '../services/custom-foods';
 import type { StoredFood } from '../services/catalogue';
 
@@ -15,12 +14,9 @@ export function analyzeRouter(sequelize: Sequelize, limit: RequestHandler) {
     const engine = await getFoodEngine(sequelize);
     const viewer = req.user ?? null;
     const canUse = (food: StoredFood) => canSeeFood(food, viewer);
-    const response = toAnalyzeResponse(analyzeLines(engine, requestLines(input), input.servings, (f) => canUse(f as StoredFood), ownFoodsFor(engine, viewer)));
-    if (input.lines === undefined && input.text !== undefined) {
-      const { title, servings, method, setAside } = readRecipeText(input.text);
-      response.fromText = { title, servings, method, setAside };
-    }
-    res.json(response);
+    const { lines, fromText } = readRequest(input);
+    const response = toAnalyzeResponse(analyzeLines(engine, lines, input.servings, (f) => canUse(f as StoredFood), ownFoodsFor(engine, viewer)));
+    res.json(fromText ? { ...response, fromText } : response);
   });
   return router;
 }

@@ -20,17 +20,28 @@ export function textToLines(text: string): LineInput[] {
   return readRecipeText(text).ingredients.map((input) => ({ input }));
 }
 
-export function requestLines(request: Pick<AnalyzeRequest, 'text' | 'lines'>): LineInput[] {
-  const lines = request.lines ?? textToLines(request.text ?? '');
-  if (request.lines === undefined && lines.length === 0) {
-    throw badRequest('The text has no ingredient lines: paste them one per line, under an "Ingredients" heading if the recipe has one.', {
-      fieldErrors: { text: ['No ingredient lines found.'] },
-    });
+/** The request's lines, and for pasted text what was read around them (title, servings, method). */
+export function readRequest(request: Pick<AnalyzeRequest, 'text' | 'lines'>): { lines: LineInput[]; fromText?: AnalyzeResponse['fromText'] } {
+  let lines = request.lines;
+  let fromText: AnalyzeResponse['fromText'];
+  if (lines === undefined) {
+    const { ingredients, title, servings, method, setAside } = readRecipeText(request.text ?? '');
+    lines = ingredients.map((input) => ({ input }));
+    fromText = { title, servings, method, setAside };
+    if (lines.length === 0) {
+      throw badRequest('The text has no ingredient lines: paste them one per line, under an "Ingredients" heading if the recipe has one.', {
+        fieldErrors: { text: ['No ingredient lines found.'] },
+      });
+    }
   }
   if (lines.length > MAX_LINES) {
     throw badRequest(`A recipe has at most ${MAX_LINES} ingredient lines.`, { fieldErrors: { text: [`At most ${MAX_LINES} lines.`] } });
   }
-  return lines;
+  return { lines, fromText };
+}
+
+export function requestLines(request: Pick<AnalyzeRequest, 'text' | 'lines'>): LineInput[] {
+  return readRequest(request).lines;
 }
 
 export interface AnalyzedLineWithFood extends AnalyzedLine {
