@@ -1,7 +1,6 @@
 import express from 'express';
 import session from 'express-session';
 import cookieParser from 'cookie-parser';
-import connectPgSimple from 'connect-pg-simple';
 import helmet from 'helmet';
 import compression from 'compression';
 import expressStaticGzip from 'express-static-gzip';
@@ -13,6 +12,7 @@ import type { AppConfig } from './config';
 import { initModels } from './models';
 import { configurePassport } from './middleware/auth';
 import { createRateLimits } from './middleware/rate-limits';
+import { SessionStore } from './middleware/session-store';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { authRouter } from './routes/auth';
 import { healthRouter } from './routes/health';
@@ -85,12 +85,11 @@ export function createApp(context: AppContext) {
 
   // signed cookies (the known-browser cookie of sign-in limits) use the session secret
   app.use(cookieParser(config.sessionSecret));
-  const PgStore = connectPgSimple(session);
   app.use(
     session({
       name: 'hearthswap.sid',
       secret: config.sessionSecret,
-      store: new PgStore({ pool: sessionPool, tableName: 'session', createTableIfMissing: false }),
+      store: new SessionStore({ pool: sessionPool, tableName: 'session', createTableIfMissing: false }),
       resave: false,
       saveUninitialized: false,
       rolling: true,
