@@ -9,7 +9,7 @@ import path from 'node:path';
 import type { Sequelize } from 'sequelize';
 import pg from 'pg';
 import type { AppConfig } from './config';
-import { initModels } from './models';
+import { initModels, User } from './models';
 import { configurePassport } from './middleware/auth';
 import { createRateLimits } from './middleware/rate-limits';
 import { SessionStore } from './middleware/session-store';
@@ -89,7 +89,7 @@ export function createApp(context: AppContext) {
     session({
       name: 'hearthswap.sid',
       secret: config.sessionSecret,
-      store: new SessionStore({ pool: sessionPool, tableName: 'session', createTableIfMissing: false }),
+      store: new SessionStore({ pool: sessionPool, tableName: 'session', usersTable: User.getTableName() as string, createTableIfMissing: false }),
       resave: false,
       saveUninitialized: false,
       rolling: true,

@@ -1,10 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { inject } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it, vi } from 'vitest';
 import { randomUUID } from 'node:crypto';
 import pg from 'pg';
 import request from 'supertest';
 import type { SessionData } from 'express-session';
-import { SessionStore } from '../../server/middleware/session-store';
+import { SessionStore, userRowReadWithSession } from '../../server/middleware/session-store';
+import { userFromRow } from '../../server/middleware/auth';
+import { User } from '../../server/models';
 import { createTestApp, signUp, type TestApp } from '../helpers/test-app';
 import { RECIPE_20 } from '../bench/server-bench';
 
@@ -23,8 +24,8 @@ afterAll(async () => {
 });
 
 /** A store on the test database with a clock the test moves. */
-function storeAt(clock: { ms: number }) {
-  return new SessionStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: false }, TEN_MINUTES, () => clock.ms);
+function storeAt(clock: { ms: number }, usersTable?: string) {
+  return new SessionStore({ pool, tableName: 'session', usersTable, createTableIfMissing: false, pruneSessionInterval: false }, TEN_MINUTES, () => clock.ms);
 }
 
 function sessionExpiring(at: number): SessionData {
@@ -107,5 +108,50 @@ describe('the session store writes a session in use at most once per ten minutes
   it('an anonymous analysis neither stores a session nor sets its cookie', async () => {
     const res = await request(t.app).post('/api/analyze').send({ text: RECIPE_20, servings: 8 }).expect(200);
     expect(String(res.headers['set-cookie'] ?? '')).not.toContain('hearthswap.sid');
+  });
+});
+
+describe('a signed-in session is read with its user in one query', () => {
+  it('gives the users row findByPk would: same values, an unchanged saved instance', async () => {
+    const cook = await signUp(t.app);
+    const store = storeAt({ ms: Date.now() }, 'users');
+    const sid = `test-${randomUUID()}`;
+    await call((cb) => store.set(sid, { ...sessionExpiring(Date.now() + DAY), passport: { user: cook.user.id } } as SessionData, cb));
+    const sess = await call<SessionData | null>((cb) => store.get(sid, cb));
+    const row = userRowReadWithSession(sess, cook.user.id);
+    expect(row).toBeDefined();
+    const user = userFromRow(row!);
+    const found = (await User.findByPk(cook.user.id))!;
+    expect(user.get({ plain: true })).toEqual(found.get({ plain: true }));
+    expect(user.get({ plain: true })).toMatchObject({ id: cook.user.id, email: cook.email, role: 'cook' });
+    expect(user.createdAt).toBeInstanceOf(Date);
+    expect(user.isNewRecord).toBe(false);
+    expect(user.changed()).toBe(false);
+    // another id than the session names gets nothing
+    expect(userRowReadWithSession(sess, cook.user.id + 1)).toBeUndefined();
+    await call((cb) => store.destroy(sid, cb));
+  });
+
+  it('a session naming no user, an unknown one or a malformed id reads as the session alone', async () => {
+    const store = storeAt({ ms: Date.now() }, 'users');
+    for (const passport of [undefined, { user: 2_000_000_000 }, { user: 'not-a-number' }, { user: '12; DROP TABLE users' }]) {
+      const sid = `test-${randomUUID()}`;
+      await call((cb) => store.set(sid, { ...sessionExpiring(Date.now() + DAY), ...(passport ? { passport } : {}) } as SessionData, cb));
+      const sess = await call<SessionData | null>((cb) => store.get(sid, cb));
+      expect(sess).toMatchObject(passport ? { passport } : { cookie: { originalMaxAge: 30 * DAY } });
+      expect(userRowReadWithSession(sess, passport?.user)).toBeUndefined();
+      await call((cb) => store.destroy(sid, cb));
+    }
+  });
+
+  it('through the app: a signed-in request finds its user without a separate users query', async () => {
+    const cook = await signUp(t.app);
+    const findByPk = vi.spyOn(User, 'findByPk');
+    try {
+      expect((await cook.agent.get('/api/auth/me').expect(200)).body).toMatchObject({ id: cook.user.id, email: cook.email });
+      expect(findByPk).not.toHaveBeenCalled();
+    } finally {
+      findByPk.mockRestore();
+    }
   });
 });
