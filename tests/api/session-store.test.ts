@@ -6,6 +6,7 @@ import type { SessionData } from 'express-session';
 import { SessionStore, userRowReadWithSession } from '../../server/middleware/session-store';
 import { userFromRow } from '../../server/middleware/auth';
 import { User } from '../../server/models';
+import { SESSION_POOL_OPTIONS } from '../../server/boot';
 import { createTestApp, signUp, type TestApp } from '../helpers/test-app';
 import { RECIPE_20 } from '../bench/server-bench';
 
@@ -152,6 +153,24 @@ describe('a signed-in session is read with its user in one query', () => {
       expect(findByPk).not.toHaveBeenCalled();
     } finally {
       findByPk.mockRestore();
+    }
+  });
+});
+
+describe('the session pool', () => {
+  it('keeps two connections open through an idle spell and closes the rest', async () => {
+    // pg-pool's idle timeout shortened from 10 s so the test need not wait for it
+    const idle = new pg.Pool({ connectionString: inject('databaseUrl'), ...SESSION_POOL_OPTIONS, idleTimeoutMillis: 50 });
+    try {
+      const clients = await Promise.all([idle.connect(), idle.connect(), idle.connect()]);
+      for (const client of clients) client.release();
+      expect(idle.totalCount).toBe(3);
+      await new Promise((resolve) => setTimeout(resolve, 500));
+      expect(idle.totalCount).toBe(2);
+      expect((await idle.query<{ one: number }>('SELECT 1 AS one')).rows[0].one).toBe(1);
+      expect(idle.totalCount).toBe(2);
+    } finally {
+      await idle.end();
     }
   });
 });
