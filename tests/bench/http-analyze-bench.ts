@@ -112,8 +112,28 @@ export function printAnalyze(f: HttpAnalyzeFigures) {
   );
 }
 
+/**
+ * A cook who stops to read the answer: `rounds` times, a pause longer than the pools' 10 s idle
+ * timeout and the server's 5 s keep-alive, then one request on a new connection.
+ */
+export async function measureAfterPause(baseUrl: string, headers: Record<string, string>, rounds: number, pauseMs = 12_000): Promise<number[]> {
+  const samples: number[] = [];
+  for (let i = 0; i < rounds; i++) {
+    await new Promise((resolve) => setTimeout(resolve, pauseMs));
+    samples.push((await measureAnalyze(baseUrl, 'after a pause', { headers, n: 1, warmUp: 0 })).samples[0]);
+  }
+  return samples;
+}
+
 /** Anonymous (no cookie, as a first visit) and a signed-in cook (session cookie: the session store is read). */
 export async function runHttpAnalyzeBench(baseUrl: string, signedInCookie: string, pid?: number) {
   printAnalyze(await measureAnalyze(baseUrl, 'anonymous', { pid }));
   printAnalyze(await measureAnalyze(baseUrl, 'signed-in cook', { headers: { Cookie: signedInCookie }, pid }));
+  const rounds = Number(process.env.BENCH_PAUSE_ROUNDS ?? 5);
+  if (rounds > 0) {
+    const paused = await measureAfterPause(baseUrl, { Cookie: signedInCookie }, rounds);
+    console.log(
+      `  signed-in cook's first analysis after a 12 s pause, on a new connection: ${paused.map((ms) => ms.toFixed(1)).join(', ')} ms (BENCH_PAUSE_ROUNDS=${rounds}; ${machineLoad()})`,
+    );
+  }
 }
