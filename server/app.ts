@@ -30,7 +30,7 @@ import { commentsRouter, unreadCommentsRouter } from './routes/comments';
 import { outboxRouter } from './routes/outbox';
 import { prepRouter, shoppingListsRouter } from './routes/prep';
 import { rejectUnsafeText } from './middleware/text-safety';
-import { createCsrf } from './middleware/csrf';
+import { createCsrf, isComputeRoute, readCookie } from './middleware/csrf';
 import { compressJsonAnswers } from './middleware/compress-json';
 import { HttpError } from './lib/http-error';
 import type { Mailer, StoredMail } from './mail';
@@ -54,6 +54,8 @@ const NO_MAILER: Mailer = {
     throw new HttpError(503, 'mail_unavailable', 'E-mail is not configured on this server (set SMTP_HOST and SMTP_PORT).');
   },
 };
+
+const SESSION_COOKIE = 'hearthswap.sid';
 
 export function createApp(context: AppContext) {
   const { config, sequelize, sessionPool } = context;
@@ -85,25 +87,26 @@ export function createApp(context: AppContext) {
 
   // signed cookies (the known-browser cookie of sign-in limits) use the session secret
   app.use(cookieParser(config.sessionSecret));
-  app.use(
-    session({
-      name: 'hearthswap.sid',
-      secret: config.sessionSecret,
-      store: new SessionStore({ pool: sessionPool, tableName: 'session', usersTable: User.getTableName() as string, createTableIfMissing: false }),
-      resave: false,
-      saveUninitialized: false,
-      rolling: true,
-      proxy: config.trustProxy !== false,
-      cookie: {
-        httpOnly: true,
-        sameSite: 'lax',
-        secure: config.secureCookies,
-        maxAge: 30 * 24 * 60 * 60 * 1000,
-      },
-    }),
-  );
-  app.use(passport.initialize());
-  app.use(passport.session());
+  const sessions = session({
+    name: SESSION_COOKIE,
+    secret: config.sessionSecret,
+    store: new SessionStore({ pool: sessionPool, tableName: 'session', usersTable: User.getTableName() as string, createTableIfMissing: false }),
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    proxy: config.trustProxy !== false,
+    cookie: {
+      httpOnly: true,
+      sameSite: 'lax',
+      secure: config.secureCookies,
+      maxAge: 30 * 24 * 60 * 60 * 1000,
+    },
+  });
+  const signedIn = [sessions, passport.initialize(), passport.session()];
+  // An anonymous call of a compute route (no session cookie) has no one to find and starts no
+  // session: express-session would make one only to drop it unsaved, and passport would find no user.
+  const anonymousCompute = (req: express.Request) => isComputeRoute(req) && readCookie(req, SESSION_COOKIE) === undefined;
+  for (const handler of signedIn) app.use((req, res, next) => (anonymousCompute(req) ? next() : handler(req, res, next)));
 
   const csrf = createCsrf(config);
 

@@ -5,10 +5,14 @@ import type { AppConfig } from '../config';
 
 export const CSRF_COOKIE = 'hearthswap.csrf';
 
-/** Routes that compute and change nothing: callable without a CSRF token (anonymous API use). */
-const CSRF_EXEMPT = new Set(['/api/analyze', '/api/rewrite', '/api/targets/estimate']);
+/** Routes that compute and change nothing: callable without a CSRF token (anonymous API use), and anonymously without a session. */
+const COMPUTE_ROUTES = new Set(['/api/analyze', '/api/rewrite', '/api/targets/estimate']);
 
-function readCookie(req: Request, name: string): string | undefined {
+export function isComputeRoute(req: Request): boolean {
+  return COMPUTE_ROUTES.has(req.originalUrl.split('?')[0]);
+}
+
+export function readCookie(req: Request, name: string): string | undefined {
   for (const part of (req.headers.cookie ?? '').split(';')) {
     const eq = part.indexOf('=');
     if (eq > 0 && part.slice(0, eq).trim() === name) return decodeURIComponent(part.slice(eq + 1).trim());
@@ -52,7 +56,7 @@ export function createCsrf(config: AppConfig) {
     },
   });
 
-  const protect: RequestHandler = (req, res, next) => (CSRF_EXEMPT.has(req.originalUrl.split('?')[0]) ? next() : csrfSynchronisedProtection(req, res, next));
+  const protect: RequestHandler = (req, res, next) => (isComputeRoute(req) ? next() : csrfSynchronisedProtection(req, res, next));
 
   return {
     protect,

@@ -106,9 +106,25 @@ describe('the session store writes a session in use at most once per ten minutes
     await request(t.app).get('/api/auth/me').set('Cookie', sidCookie).expect(401);
   });
 
-  it('an anonymous analysis neither stores a session nor sets its cookie', async () => {
+  it('an anonymous analysis neither stores a session nor sets its cookie, and counts against the anonymous limit', async () => {
     const res = await request(t.app).post('/api/analyze').send({ text: RECIPE_20, servings: 8 }).expect(200);
     expect(String(res.headers['set-cookie'] ?? '')).not.toContain('hearthswap.sid');
+    expect(res.headers['ratelimit-limit']).toBe(String(t.config.limits.anonymousComputePerMin));
+    // a cookie naming no stored session is anonymous too
+    const stale = await request(t.app)
+      .post('/api/analyze')
+      .set('Cookie', 'hearthswap.sid=s%3Anot-a-session.x')
+      .send({ text: RECIPE_20, servings: 8 })
+      .expect(200);
+    expect(stale.headers['ratelimit-limit']).toBe(String(t.config.limits.anonymousComputePerMin));
+  });
+
+  it('a signed-in cook computing is known: the signed-in limit, their session rolled', async () => {
+    expect(t.config.limits.userComputePerMin).not.toBe(t.config.limits.anonymousComputePerMin);
+    const cook = await signUp(t.app);
+    const res = await cook.agent.post('/api/analyze').send({ text: RECIPE_20, servings: 8 }).expect(200);
+    expect(String(res.headers['set-cookie'] ?? '')).toContain('hearthswap.sid');
+    expect(res.headers['ratelimit-limit']).toBe(String(t.config.limits.userComputePerMin));
   });
 });
 
