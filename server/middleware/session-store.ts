@@ -35,8 +35,8 @@ const quoted = (name: string) => `"${name.replace(/"/g, '""')}"`;
 
 /**
  * The PostgreSQL session store (connect-pg-simple, table "session") that reads a session's user with
- * it (see `usersTable`) and moves a session's expiry
- * on at most once per `touchEveryMs` per process rather than on every request. express-session
+ * it (see `usersTable`) and moves a session's expiry on at most once per `touchEveryMs` per process
+ * rather than on every request. express-session
  * holds back an answer's last byte until the store's touch has been written, so a signed-in cook's
  * every request waited for an UPDATE and its commit. The price: the stored expiry may lag the
  * cookie's by up to `touchEveryMs`, so a session left unused for its whole 30 days ends up to that
@@ -67,19 +67,25 @@ export class SessionStore extends PgStore {
   /** As connect-pg-simple's get (a session past its stored expiry is none; an unreadable one is destroyed), with its user's row when `usersTable` is set. */
   override get(sid: string, callback: (err: unknown, session?: session.SessionData | null) => void): void {
     if (!this.readQuery) return super.get(sid, callback);
-    this.options.pool.query<Record<string, unknown>>(this.readQuery, [sid, Math.ceil(this.now() / 1000)]).then(({ rows }) => {
-      if (!rows[0]) return callback(null, null);
-      const { 'session.sess': stored, ...user } = rows[0];
-      let sess: session.SessionData;
-      try {
-        sess = (typeof stored === 'string' ? JSON.parse(stored) : stored) as session.SessionData;
-      } catch {
-        return this.destroy(sid, (err) => callback(err ?? null, null));
-      }
-      const passport = (sess as { passport?: unknown }).passport;
-      if (user.id !== null && user.id !== undefined && passport && typeof passport === 'object') usersReadWithSessions.set(passport, user);
-      callback(null, sess);
-    }, callback);
+    // as connect-pg-simple does, the answer leaves the promise chain: what express-session does next is not this query's rejection
+    this.options.pool.query<Record<string, unknown>>(this.readQuery, [sid, Math.ceil(this.now() / 1000)]).then(
+      ({ rows }) => process.nextTick(() => this.answerRead(sid, rows[0], callback)),
+      (err: unknown) => process.nextTick(callback, err),
+    );
+  }
+
+  private answerRead(sid: string, row: Record<string, unknown> | undefined, callback: (err: unknown, session?: session.SessionData | null) => void) {
+    if (!row) return callback(null, null);
+    const { 'session.sess': stored, ...user } = row;
+    let sess: session.SessionData;
+    try {
+      sess = (typeof stored === 'string' ? JSON.parse(stored) : stored) as session.SessionData;
+    } catch {
+      return this.destroy(sid, (err) => callback(err ?? null, null));
+    }
+    const passport = (sess as { passport?: unknown }).passport;
+    if (user.id !== null && user.id !== undefined && passport && typeof passport === 'object') usersReadWithSessions.set(passport, user);
+    callback(null, sess);
   }
 
   override set(sid: string, sess: session.SessionData, callback?: (err?: unknown) => void): void {
