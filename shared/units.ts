@@ -134,6 +134,7 @@ export const UNITS: readonly UnitDef[] = [
   count('piece', ['piece', 'pieces', 'pc', 'pcs', 'chunk', 'chunks']),
   count('sheet', ['sheet', 'sheets']),
   count('handful', ['handful', 'handfuls']),
+  count('splash', ['splash', 'splashes']),
   count('bulb', ['bulb', 'bulbs']),
   count('loaf', ['loaf', 'loaves']),
   count('scoop', ['scoop', 'scoops']),

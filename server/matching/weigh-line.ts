@@ -251,6 +251,8 @@ function scoreCountPortions(
       else if ((PIECE_EQUIVALENTS[ask.piece] ?? []).some((p) => pieces.includes(p))) score += 3;
       else if (ask.piece === 'piece' || ask.piece === 'serving') score += 0;
       else continue;
+      // "12 baguette slices": the piece of the item the line names ("slice, baguette"), not of a loaf.
+      if (pieces.some((p) => p !== ask.piece && named(p, nameWords))) score += 2;
     } else if (pieces.some((p) => SUB_PIECES.has(p))) {
       if (pieces.includes('piece') && pieces.length === 1) score -= 0.5;
       else score -= 3;
@@ -291,6 +293,24 @@ function scoreCountPortions(
 
 function named(piece: string, nameWords: Set<string>): boolean {
   return nameWords.has(piece) || (NAME_PIECE_SYNONYMS[piece] !== undefined && nameWords.has(NAME_PIECE_SYNONYMS[piece]));
+}
+
+/** Pieces whose written inches are a length along a root or bark: "1 2-inch piece ginger", "1 (3-inch) cinnamon stick". */
+const LENGTH_PIECES = new Set(['piece', 'knob', 'stick']);
+
+/** A piece of stated length, weighed by the food's "1 inch" portion; null when either is missing. */
+function lengthPiece(
+  all: ReadPortion[],
+  ask: CountAsk,
+  nameWords: Set<string>,
+): { r: ReadPortion; inches: number; gramsPerInch: number; guessed: boolean } | null {
+  if (!(ask.piece ? LENGTH_PIECES.has(ask.piece) : [...LENGTH_PIECES].some((p) => nameWords.has(p)))) return null;
+  const inch = all.find((r) => r.info.kind === 'count' && r.info.pieces.length === 1 && r.info.pieces[0] === 'inch');
+  if (!inch) return null;
+  const gramsPerInch = inch.portion.grams / inch.portion.amount;
+  if (ask.diameter !== null && ask.diameter > 0) return { r: inch, inches: ask.diameter, gramsPerInch, guessed: false };
+  // "1 piece fresh ginger": a piece of no stated length is taken as an inch, and the cook told.
+  return ask.piece === 'piece' ? { r: inch, inches: 1, gramsPerInch, guessed: true } : null;
 }
 
 /** Grams per mL for a food's volume, preparation considered; null when nothing gives one. */
@@ -335,7 +355,7 @@ const LEAFY_G_PER_ML = 0.3;
 /**
  * Household measures a recipe counts that have no legal size and no SR28 portion for the food, as
  * volumes (*common practice*, from memory): a handful is a loose cup of leaves or herbs and ¼ cup of
- * anything denser (a handful of nuts is about 1 oz); a scoop is ½ cup (the #8 disher); a shot of
+ * anything denser (a handful of nuts is about 1 oz); a splash is ¼ fl oz (½ tbsp); a scoop is ½ cup (the #8 disher); a shot of
  * espresso 1 fl oz, of anything else a 1½ fl oz jigger.
  */
 function householdVolume(piece: string, food: CatalogueFood, density: () => number | null): { ml: number; as: string; why: string } | null {
@@ -346,6 +366,7 @@ function householdVolume(piece: string, food: CatalogueFood, density: () => numb
       ? { ml: ML_PER_CUP, as: '1 loose cup', why: 'a handful of leaves, common practice' }
       : { ml: ML_PER_CUP / 4, as: '¼ cup', why: 'a handful, common practice' };
   }
+  if (piece === 'splash') return { ml: ML_PER_FL_OZ / 4, as: '½ tbsp', why: 'a splash, common practice' };
   if (piece === 'scoop') return { ml: ML_PER_CUP / 2, as: '½ cup', why: 'a #8 scoop, common practice' };
   if (piece === 'shot') {
     return /\b(?:espresso|coffee)\b/i.test(food.name)
@@ -445,7 +466,15 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
   if (!food) return result(0, null, null, [WARNING_NO_FOOD]);
 
   const ask = countAsk(parsed);
-  const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, new Set(words(parsed.name ?? '').map(singular)));
+  const nameWords = new Set(words(parsed.name ?? '').map(singular));
+  const byLength = lengthPiece(all, ask, nameWords);
+  if (byLength) {
+    const grams = quantity * byLength.inches * byLength.gramsPerInch;
+    if (byLength.guessed) warnings.push(`No length given: weighed as a 1-inch piece (${gramsText(byLength.gramsPerInch)} each).`);
+    const d = density();
+    return result(grams, d ? grams / d : null, byLength.r.portion.label, warnings);
+  }
+  const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, nameWords);
   // A canned food, or one standing for a can's drained contents ("1 can lentils" → cooked lentils).
   if (!chosen && ask.piece === 'can' && (/\bcanned\b/i.test(food.name) || opts.drained)) {
     const grams = drainedGrams(quantity * USUAL_CAN_GRAMS, opts, warnings);

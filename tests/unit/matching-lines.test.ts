@@ -420,6 +420,58 @@ describe('pieces, spices and words a cook writes (classes found in the unlabelle
   });
 });
 
+describe('pieces of another size, leaves, lengths and splashes (weighing, issue #11)', () => {
+  it("a slice of French bread is a slice of a medium loaf, a baguette slice a baguette's, never SR28's 139 g slice", () => {
+    // USDA SR28 WEIGHT.txt 18029 "slice" is 139 g (a slice of a large loaf); the sourced curated row
+    // that replaces it is SR28 18030 (the same bread toasted) "slice, medium" with its water put back.
+    expect(sr28('18029', /^slice$/)).toBe(139);
+    const toastedMedium = sr28('18030', /^slice, medium$/);
+    // USDA SR28 water: 33 g/100 g in 18029, 20.61 g/100 g in 18030
+    expect(curatedGrams('18029', 'slice')).toBeCloseTo((toastedMedium * (100 - 20.61)) / (100 - 33), 0);
+    expect(line('2 slices sourdough bread').grams).toBeCloseTo(2 * curatedGrams('18029', 'slice'), 6);
+    // *common practice* (from memory): a baguette slice is about 10 g; the line's "baguette" picks that piece
+    for (const input of ['12 baguette slices', '12 slices baguette']) {
+      const l = line(input);
+      expect(l.food?.sourceId, input).toBe('18029');
+      expect(l.grams, input).toBeCloseTo(12 * curatedGrams('18029', 'slice, baguette'), 6);
+      expect(l.grams, input).toBeLessThan(12 * 20);
+    }
+    expect(line('1 baguette').grams).toBeCloseTo(curatedGrams('18029', 'baguette'), 6);
+  });
+
+  it('bay leaves, a kabocha squash and a head of napa cabbage weigh sourced rows, never 0 g', () => {
+    // *common practice* rows of data/curated-portions.json: a bay leaf next to SR28 02004 "1 tsp, crumbled";
+    // a winter squash by the butternut sizes (SR28 11485 rows); napa by SR28 11109's medium head
+    const bay = line('2 bay leaves');
+    expect(bay.food?.sourceId).toBe('02004');
+    expect(bay.grams).toBeCloseTo(2 * curatedGrams('02004', 'leaf'), 6);
+    const kabocha = line('½ kabocha squash');
+    expect(kabocha.grams).toBeCloseTo(0.5 * curatedGrams('11643', 'medium'), 6);
+    expect(kabocha.warnings.join(' ')).toMatch(/No size given/);
+    expect(line('0.5 head napa cabbage, cut into quarters').grams).toBeCloseTo(0.5 * curatedGrams('11119', 'head'), 6);
+  });
+
+  it('a piece of stated length weighs its inches: "1 4-inch piece ginger", "1 (3-inch) cinnamon stick"', () => {
+    // *common practice* "1 inch" rows of data/curated-portions.json, built on USDA SR28 11216 slices and 02010 "1 tsp"
+    expect(line('1 4-inch piece fresh ginger, peeled').grams).toBeCloseTo(4 * curatedGrams('11216', 'inch'), 6);
+    expect(line('1 1-inch piece fresh ginger, peeled and minced').grams).toBeCloseTo(curatedGrams('11216', 'inch'), 6);
+    expect(line('1 3-inch piece Mexican cinnamon').grams).toBeCloseTo(3 * curatedGrams('02010', 'inch'), 6);
+    expect(line('1 (3-inch) cinnamon stick').grams).toBeCloseTo(3 * curatedGrams('02010', 'inch'), 6);
+    // a piece of no stated length is an inch, and the cook is told
+    const piece = line('1 piece fresh ginger, peeled');
+    expect(piece.grams).toBeCloseTo(curatedGrams('11216', 'inch'), 6);
+    expect(piece.warnings.join(' ')).toMatch(/No length given/);
+  });
+
+  it('a splash is ½ tbsp (¼ fl oz, *common practice*, from memory), said in a warning, never 0 g', () => {
+    // USDA SR28 WEIGHT.txt 04053 olive oil "tablespoon" 13.5 g
+    const oil = line('a splash of extra-virgin olive oil');
+    expect(oil.food?.sourceId).toBe('04053');
+    expect(oil.grams).toBeCloseTo(sr28('04053', /^tablespoon$/) / 2, 1);
+    expect(oil.warnings.join(' ')).toMatch(/splash/);
+  });
+});
+
 describe('the hand-labelled lines (tests/reference/labelled-lines)', () => {
   const answer = (input: string) => {
     const l = line(input);
