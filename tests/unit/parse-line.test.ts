@@ -52,6 +52,18 @@ describe('parseLine: quantities', () => {
     expect(parseLine('2-3 tbsp oil').size).toBeNull();
   });
 
+  it('reads a weight range in parentheses as the size of each piece: "1 (3- to 4-pound) whole red snapper"', () => {
+    const snapper = parseLine('1 (3- to 4-pound) whole red snapper, scaled and cleaned');
+    expect(snapper.quantity).toBe(1);
+    expect(snapper.size).toEqual({ quantity: 3.5, unit: 'lb' });
+    expect(snapper.name).toBe('whole red snapper');
+    const chickens = parseLine('2 (2- to 3-pound) chickens');
+    expect(chickens.quantity).toBe(2);
+    expect(chickens.size).toEqual({ quantity: 2.5, unit: 'lb' });
+    // a range of lengths is no weight
+    expect(parseLine('1 (2- to 3-inch) piece ginger').size).toBeNull();
+  });
+
   it('reads a range whose unit is written last: "2 to 3 cups"', () => {
     expect(pick(parseLine('2 to 3 cups'))).toMatchObject({ quantity: 2.5, unit: 'cup' });
   });
