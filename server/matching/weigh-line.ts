@@ -195,6 +195,30 @@ const SIZE_PREFERENCE: Record<SizeWord, number> = {
   'extra-small': -0.2,
 };
 
+/** Cuts and small parts of a food that a sized count ("1 md kohlrabi") never means, unless it names them. */
+const CUT_PIECES = new Set([
+  'slice',
+  'strip',
+  'ring',
+  'rings',
+  'wedge',
+  'cube',
+  'cubic',
+  'spear',
+  'floret',
+  'floweret',
+  'leaf',
+  'sprig',
+  'pat',
+  'dash',
+  'inch',
+  'section',
+  'segment',
+]);
+
+/** Words for a smaller kind of a food, each weighed by its own portion: "baby bok choy", "fingerling potatoes", "baguette slices". */
+const SMALLER_KINDS = new Set(['baby', 'fingerling', 'baguette']);
+
 /** Piece words that mean the food itself when a recipe counts it: "1 fruit" is one lemon. */
 const WHOLE_PIECES = new Set(['whole', 'fruit', 'each', 'item', 'medium', 'large', 'small']);
 
@@ -207,6 +231,9 @@ const PIECE_EQUIVALENTS: Record<string, string[]> = {
   piece: ['each'],
   ball: ['piece'],
   square: ['piece'],
+  // "4 stems mint", "3 stalks fresh mint": an herb's stem is a sprig (*common practice*).
+  stem: ['sprig'],
+  stalk: ['sprig'],
 };
 
 /** Pieces a line may name that SR28 names otherwise: "4 hamburger buns" → "1 roll". */
@@ -246,15 +273,19 @@ function scoreCountPortions(
     }
     const pieces = r.info.pieces.map(pieceId);
     let score = 0;
+    // A smaller kind of the food ("1 head, baby" of bok choy) fits only a line that names it, and then best.
+    const kind = pieces.find((p) => SMALLER_KINDS.has(p));
+    if (kind !== undefined && !nameWords.has(kind)) continue;
+    if (kind !== undefined) score += 5;
     if (ask.piece) {
       if (pieces.includes(ask.piece)) score += 4;
       else if ((PIECE_EQUIVALENTS[ask.piece] ?? []).some((p) => pieces.includes(p))) score += 3;
       else if (ask.piece === 'piece' || ask.piece === 'serving') score += 0;
       else continue;
-      // "12 baguette slices": the piece of the item the line names ("slice, baguette"), not of a loaf.
-      if (pieces.some((p) => p !== ask.piece && named(p, nameWords))) score += 2;
-    } else if (pieces.some((p) => SUB_PIECES.has(p))) {
-      if (pieces.includes('piece') && pieces.length === 1) score -= 0.5;
+    } else if (kind === undefined && pieces.some((p) => SUB_PIECES.has(p))) {
+      if (pieces.includes('piece') && pieces.every((p) => p === 'piece' || WHOLE_PIECES.has(p))) score -= 0.5;
+      // "1 md kohlrabi": a size word is the whole food's, never one slice of it.
+      else if (ask.size && pieces.some((p) => CUT_PIECES.has(p)) && !pieces.some((p) => named(p, nameWords))) continue;
       else score -= 3;
     }
     if (ask.size) {
@@ -355,7 +386,7 @@ const LEAFY_G_PER_ML = 0.3;
 /**
  * Household measures a recipe counts that have no legal size and no SR28 portion for the food, as
  * volumes (*common practice*, from memory): a handful is a loose cup of leaves or herbs and ¼ cup of
- * anything denser (a handful of nuts is about 1 oz); a splash is ¼ fl oz (½ tbsp); a scoop is ½ cup (the #8 disher); a shot of
+ * anything denser (a handful of nuts is about 1 oz); a splash is ¼ fl oz (½ tbsp), a drizzle 1 tbsp; a scoop is ½ cup (the #8 disher); a shot of
  * espresso 1 fl oz, of anything else a 1½ fl oz jigger.
  */
 function householdVolume(piece: string, food: CatalogueFood, density: () => number | null): { ml: number; as: string; why: string } | null {
@@ -366,6 +397,7 @@ function householdVolume(piece: string, food: CatalogueFood, density: () => numb
       ? { ml: ML_PER_CUP, as: '1 loose cup', why: 'a handful of leaves, common practice' }
       : { ml: ML_PER_CUP / 4, as: '¼ cup', why: 'a handful, common practice' };
   }
+  if (piece === 'drizzle') return { ml: ML_PER_FL_OZ / 2, as: '1 tbsp', why: 'a drizzle, common practice' };
   if (piece === 'splash') return { ml: ML_PER_FL_OZ / 4, as: '½ tbsp', why: 'a splash, common practice' };
   if (piece === 'scoop') return { ml: ML_PER_CUP / 2, as: '½ cup', why: 'a #8 scoop, common practice' };
   if (piece === 'shot') {

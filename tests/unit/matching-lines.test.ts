@@ -463,12 +463,48 @@ describe('pieces of another size, leaves, lengths and splashes (weighing, issue 
     expect(piece.warnings.join(' ')).toMatch(/No length given/);
   });
 
+  it('a smaller kind of a food weighs its own piece: baby bok choy, baby and fingerling potatoes', () => {
+    // *common practice* rows of data/curated-portions.json (from memory); USDA SR28 11116 "1 head" (840 g) is a full-grown head
+    const bokChoy = line('4 baby bok choy, split');
+    expect(bokChoy.food?.sourceId).toBe('11116');
+    expect(bokChoy.grams).toBeCloseTo(4 * curatedGrams('11116', 'head, baby'), 6);
+    expect(line('2 heads bok choy').grams).toBeCloseTo(2 * sr28('11116', /^head$/), 6);
+    const fingerlings = line('12 md fingerling potatoes');
+    expect(fingerlings.grams).toBeCloseTo(12 * curatedGrams(fingerlings.food!.sourceId, 'fingerling'), 6);
+    expect(line('12 baby potatoes').grams).toBeCloseTo(12 * curatedGrams('11352', 'baby'), 6);
+    // a line without the word never takes the smaller piece: USDA SR28 11352 "Potato medium"
+    expect(line('3 medium potatoes').grams).toBeCloseTo(3 * sr28('11352', /^Potato medium/), 6);
+  });
+
+  it('a sized count is the whole food, never one slice of it: "1 md kohlrabi"', () => {
+    // USDA SR28 11241 has only "1 cup" and "1 slice" (16 g); the medium bulb is a *common practice* curated row
+    expect(sr28('11241', /^slice$/)).toBe(16);
+    expect(line('1 md kohlrabi').grams).toBeCloseTo(curatedGrams('11241', 'medium'), 6);
+  });
+
+  it('whole spices, a celery root and a rack of ribs weigh sourced rows, never 0 g', () => {
+    // *common practice* rows (from memory) next to USDA SR28 02030 "1 tsp, whole" and 02001 "1 tsp"
+    expect(line('~7 whole black peppercorns').grams).toBeCloseTo(7 * curatedGrams('02030', 'peppercorn'), 6);
+    expect(line('5 allspice berries').grams).toBeCloseTo(5 * curatedGrams('02001', 'berry'), 6);
+    expect(line('½ celery root').grams).toBeCloseTo(0.5 * curatedGrams('11141', 'medium'), 6);
+    expect(line('2 full racks baby back pork ribs').grams).toBeCloseTo(2 * curatedGrams('10192', 'rack'), 6);
+  });
+
+  it('an herb counted by the stem or stalk weighs sprigs; a bundle is a bunch (*common practice*)', () => {
+    expect(line('3 stalks fresh mint, leaves plucked').grams).toBeCloseTo(3 * curatedGrams('02065', 'sprig'), 6);
+    expect(line('1 bundle asparagus (10-15 spears), chopped').grams).toBeCloseTo(curatedGrams('11011', 'bunch'), 6);
+  });
+
   it('a splash is ½ tbsp (¼ fl oz, *common practice*, from memory), said in a warning, never 0 g', () => {
     // USDA SR28 WEIGHT.txt 04053 olive oil "tablespoon" 13.5 g
     const oil = line('a splash of extra-virgin olive oil');
     expect(oil.food?.sourceId).toBe('04053');
     expect(oil.grams).toBeCloseTo(sr28('04053', /^tablespoon$/) / 2, 1);
     expect(oil.warnings.join(' ')).toMatch(/splash/);
+    // a drizzle is 1 tbsp (*common practice*, from memory)
+    const drizzle = line('Drizzle of olive oil');
+    expect(drizzle.grams).toBeCloseTo(sr28('04053', /^tablespoon$/), 1);
+    expect(drizzle.warnings.join(' ')).toMatch(/drizzle/);
   });
 });
 
