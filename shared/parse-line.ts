@@ -254,6 +254,18 @@ interface LineState {
   equivalents: Amount[];
 }
 
+/** "Pinch coarse salt", "generous pinch of salt", "small handful of basil": a measure without a number is one of it. */
+const LEADING_MEASURE =
+  /^(?:an?\s+)?(?:(small|sm|tiny|little|scant|large|lg|big|generous|good|healthy|hefty|heaping|heaped)\s+)?(pinch|dash|handful|splash|drizzle)(?:\s+of)?\s+(?=\S)/i;
+const SMALL_WORDS = new Set(['small', 'sm', 'tiny', 'little', 'scant']);
+
+function leadingHouseholdMeasure(text: string): string {
+  const m = LEADING_MEASURE.exec(text);
+  if (!m) return text;
+  const size = m[1] ? (SMALL_WORDS.has(m[1].toLowerCase()) ? 'sm ' : 'lg ') : '';
+  return `1 ${size}${m[2].toLowerCase()} ${text.slice(m[0].length)}`;
+}
+
 /**
  * One line read in named passes over one state: the package's reading first (below), then each pass
  * takes from the description what the package left there (sizes, ranges, equivalents, notes).
@@ -264,7 +276,7 @@ function parseCleanLine(input: string): ParsedLine {
   if (cleaned.truncated) flags.push('truncated');
   if (cleaned.text === '') return emptyResult(input, [...flags, 'empty']);
 
-  let text = cleaned.text.replace(/(\d)\s*#(?=\s|$)/g, '$1 lb');
+  let text = leadingHouseholdMeasure(cleaned.text.replace(/(\d)\s*#(?=\s|$)/g, '$1 lb'));
   text = wordsToDigits(text).text;
   if (/^(?:about|approximately|approx\.?|around|roughly|~)\s/i.test(text)) flags.push('approximate');
 

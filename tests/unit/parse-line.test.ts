@@ -64,6 +64,24 @@ describe('parseLine: quantities', () => {
     expect(parseLine('1 (2- to 3-inch) piece ginger').size).toBeNull();
   });
 
+  it('reads a pinch, dash or handful written without a number as one of it: "Pinch coarse salt", "generous pinch of salt"', () => {
+    for (const [input, unit, name] of [
+      ['Pinch coarse or flaky salt', 'pinch', 'coarse or flaky salt'],
+      ['generous pinch of salt', 'pinch', 'salt'],
+      ['Tiny pinch sea salt', 'pinch', 'sea salt'],
+      ['handful of almonds', 'handful', 'almonds'],
+      ['small handful of basil leaves, finely chopped', 'handful', 'basil leaves'],
+    ] as const) {
+      const p = parseLine(input);
+      expect(p.quantity, input).toBe(1);
+      expect(p.unit, input).toBe(unit);
+      expect(p.name, input).toBe(name);
+      expect(p.needsAmount, input).toBe(false);
+    }
+    // a word that only begins like one is no measure
+    expect(parseLine('pinched dumplings').unit).toBeNull();
+  });
+
   it('reads a range whose unit is written last: "2 to 3 cups"', () => {
     expect(pick(parseLine('2 to 3 cups'))).toMatchObject({ quantity: 2.5, unit: 'cup' });
   });
