@@ -495,6 +495,16 @@ describe('pieces of another size, leaves, lengths and splashes (weighing, issue 
     expect(line('1 bundle asparagus (10-15 spears), chopped').grams).toBeCloseTo(curatedGrams('11011', 'bunch'), 6);
   });
 
+  it('powders and seeds SR28 weighs only by the ounce or envelope take a sourced spoon, not a role density', () => {
+    // USDA SR28 19177 "envelope (1 tbsp)" 7 g; chia and vital wheat gluten: *common practice* rows (from memory)
+    expect(sr28('19177', /^envelope \(1 tbsp\)$/)).toBe(7);
+    const gelatin = line('2 ½ tsp gelatin');
+    expect(gelatin.grams).toBeCloseTo((2.5 / 3) * curatedGrams('19177', 'tbsp'), 6); // 3 tsp = 1 tbsp (NIST Handbook 44)
+    expect(gelatin.warnings.join(' ')).not.toMatch(/usual density/);
+    expect(line('2 tbsp chia seeds').grams).toBeCloseTo(2 * curatedGrams('12006', 'tbsp'), 6);
+    expect(line('3 c vital wheat gluten').grams).toBeCloseTo(3 * curatedGrams('48052', 'cup'), 6);
+  });
+
   it('a splash is ½ tbsp (¼ fl oz, *common practice*, from memory), said in a warning, never 0 g', () => {
     // USDA SR28 WEIGHT.txt 04053 olive oil "tablespoon" 13.5 g
     const oil = line('a splash of extra-virgin olive oil');
