@@ -335,10 +335,13 @@ function lengthPiece(
   ask: CountAsk,
   nameWords: Set<string>,
 ): { r: ReadPortion; inches: number; gramsPerInch: number; guessed: boolean } | null {
-  if (!(ask.piece ? LENGTH_PIECES.has(ask.piece) : [...LENGTH_PIECES].some((p) => nameWords.has(p)))) return null;
+  const byInch = ask.piece === 'inch';
+  if (!byInch && !(ask.piece ? LENGTH_PIECES.has(ask.piece) : [...LENGTH_PIECES].some((p) => nameWords.has(p)))) return null;
   const inch = all.find((r) => r.info.kind === 'count' && r.info.pieces.length === 1 && r.info.pieces[0] === 'inch');
   if (!inch) return null;
   const gramsPerInch = inch.portion.grams / inch.portion.amount;
+  // "2 inches ginger", "2-inch piece of ginger" (read as two inches): the count is the length.
+  if (byInch) return { r: inch, inches: 1, gramsPerInch, guessed: false };
   if (ask.diameter !== null && ask.diameter > 0) return { r: inch, inches: ask.diameter, gramsPerInch, guessed: false };
   // "1 piece fresh ginger": a piece of no stated length is taken as an inch, and the cook told.
   return ask.piece === 'piece' ? { r: inch, inches: 1, gramsPerInch, guessed: true } : null;

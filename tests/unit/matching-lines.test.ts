@@ -457,6 +457,9 @@ describe('pieces of another size, leaves, lengths and splashes (weighing, issue 
     expect(line('1 1-inch piece fresh ginger, peeled and minced').grams).toBeCloseTo(curatedGrams('11216', 'inch'), 6);
     expect(line('1 3-inch piece Mexican cinnamon').grams).toBeCloseTo(3 * curatedGrams('02010', 'inch'), 6);
     expect(line('1 (3-inch) cinnamon stick').grams).toBeCloseTo(3 * curatedGrams('02010', 'inch'), 6);
+    const twoInches = line('2-inch piece of ginger, peeled and minced');
+    expect(twoInches.grams).toBeCloseTo(2 * curatedGrams('11216', 'inch'), 6);
+    expect(twoInches.warnings.join(' ')).not.toMatch(/inch weight/);
     // a piece of no stated length is an inch, and the cook is told
     const piece = line('1 piece fresh ginger, peeled');
     expect(piece.grams).toBeCloseTo(curatedGrams('11216', 'inch'), 6);
