@@ -328,6 +328,16 @@ describe("airy foods weigh by their own or a near food's cup, not a role default
     expect(line('2 cups shredded reduced-fat mozzarella').grams).toBeCloseTo(2 * sr28('01029', /^cup, shredded$/), 6);
   });
 
+  it('a dry mix or powder never borrows the cup of the same food made up with milk or water', () => {
+    // USDA SR28 19203 (instant vanilla pudding prepared with whole milk) ".5 cup" 142 g is ~1.2 g/mL; the dry mix is
+    // not that food: it keeps its role density and says so
+    const mix = line('3 tbsp instant vanilla pudding mix');
+    expect(mix.food?.sourceId).toBe('19202');
+    expect(mix.portionUsed ?? '').not.toMatch(/prepared/);
+    expect(mix.grams).toBeLessThan((3 / 16) * sr28('19203', /^cup$/) * 0.9); // 3 tbsp = 3/16 cup (NIST Handbook 44)
+    expect(mix.warnings.join(' ')).toMatch(/usual density/);
+  });
+
   it("raw cashews (weighed by SR28 only by the ounce) take other cashews' cups, never a spoon of coconut cream", () => {
     // USDA SR28 WEIGHT.txt 12086 oil-roasted cashews "cup, whole" (129 g); 12085 dry-roasted "tbsp" (8.6 g)
     expect(line('1 cup raw cashews').grams).toBeCloseTo(sr28('12086', /^cup, whole$/), 6);
