@@ -536,6 +536,9 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
   if (chosen.guessed) {
     const asked = ask.size ? `No "${ask.size}" weight` : ask.diameter !== null ? `No ${ask.diameter}-inch weight` : 'No size given';
     warnings.push(`${asked}: weighed as ${chosen.r.portion.label} (${gramsText(each)} each).`);
+  } else if (ask.piece && PACKAGE_PIECES.has(ask.piece)) {
+    // "1 can diced tomatoes": cans and jars come in many sizes; the one weighed is said.
+    warnings.push(`No ${ask.piece} size given: weighed as ${chosen.r.portion.label} (${gramsText(each)} each). Give the size on the label for exact figures.`);
   }
   const d = density();
   return result(grams, d ? grams / d : null, chosen.r.portion.label, warnings);

@@ -508,6 +508,22 @@ describe('pieces of another size, leaves, lengths and splashes (weighing, issue 
     expect(line('1 bundle asparagus (10-15 spears), chopped').grams).toBeCloseTo(curatedGrams('11011', 'bunch'), 6);
   });
 
+  it('a can of no stated size is the usual can, and the cook is told its size: "1 can diced tomatoes"', () => {
+    // USDA SR28 11531 "can" is 190 g; the curated row replacing it is the 14.5 oz can (NIST Handbook 44, *common practice*)
+    expect(sr28('11531', /^can$/)).toBe(190);
+    const tomatoes = line('1 can diced tomatoes');
+    expect(tomatoes.food?.sourceId).toBe('11531');
+    expect(tomatoes.grams).toBeCloseTo(curatedGrams('11531', 'can'), 6);
+    expect(curatedGrams('11531', 'can')).toBeCloseTo(14.5 * OZ, 0);
+    expect(tomatoes.warnings.join(' ')).toMatch(/No can size given/);
+    // a size in the line is the can's, with nothing to tell (NIST Handbook 44)
+    const sized = line('1 (14.5 oz) can diced tomatoes');
+    expect(sized.grams).toBeCloseTo(14.5 * OZ, 6);
+    expect(sized.warnings.join(' ')).not.toMatch(/size given/);
+    // USDA SR28 11546 "can (6 oz)" 170 g: the can weighed is named
+    expect(line('1 can tomato paste').warnings.join(' ')).toMatch(/weighed as 1 can \(6 oz\)/);
+  });
+
   it('powders and seeds SR28 weighs only by the ounce or envelope take a sourced spoon, not a role density', () => {
     // USDA SR28 19177 "envelope (1 tbsp)" 7 g; chia and vital wheat gluten: *common practice* rows (from memory)
     expect(sr28('19177', /^envelope \(1 tbsp\)$/)).toBe(7);
