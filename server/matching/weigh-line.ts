@@ -517,10 +517,12 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
     const d = density();
     return result(grams, d ? grams / d : null, null, warnings);
   }
-  const household = !chosen && ask.piece ? householdVolume(ask.piece, food, density) : null;
+  // A handful is taken before the food is cut: "a handful of basil, chopped" is a loose cup of whole leaves.
+  const uncut = () => densityFor(all, { ...parsed, preparation: null, comment: null }, food, opts.nearPortions ?? []);
+  const household = !chosen && ask.piece ? householdVolume(ask.piece, food, uncut) : null;
   if (household) {
     const ml = quantity * household.ml;
-    const d = density();
+    const d = uncut();
     if (d) {
       warnings.push(`No household weight for "${parsed.unitText ?? ask.piece}" of this food: weighed as ${household.as} (${household.why}).`);
       return result(ml * d, ml, null, warnings);

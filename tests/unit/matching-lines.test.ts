@@ -214,6 +214,8 @@ describe('bunches, sprigs and other pieces SR28 does not weigh get an honest wei
     expect(arugula.grams).toBeCloseTo(2 * sr28('11959', /^cup$/), 6);
     expect(arugula.warnings.join(' ')).toMatch(/handful/);
     expect(line('a handful of pistachios').grams).toBeCloseTo(sr28('12151', /^cup$/) / 4, 6);
+    // taken before it is cut: a loose cup of whole leaves, USDA SR28 02044 basil "0.25 cup leaves, whole" 6 g, never its chopped cup
+    expect(line('small handful of basil leaves, finely chopped').grams).toBeCloseTo(sr28('02044', /^cup leaves, whole$/), 6);
   });
 
   it('a whole squash, a head of savoy or radicchio and a loaf of French bread weigh their sourced rows', () => {
