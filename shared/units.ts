@@ -136,6 +136,7 @@ export const UNITS: readonly UnitDef[] = [
   count('handful', ['handful', 'handfuls']),
   count('splash', ['splash', 'splashes']),
   count('drizzle', ['drizzle', 'drizzles']),
+  count('block', ['block', 'blocks']),
   count('bulb', ['bulb', 'bulbs']),
   count('loaf', ['loaf', 'loaves']),
   count('scoop', ['scoop', 'scoops']),

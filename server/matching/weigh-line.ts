@@ -231,6 +231,7 @@ const PIECE_EQUIVALENTS: Record<string, string[]> = {
   piece: ['each'],
   ball: ['piece'],
   square: ['piece'],
+  block: ['package'],
   // "4 stems mint", "3 stalks fresh mint": an herb's stem is a sprig (*common practice*).
   stem: ['sprig'],
   stalk: ['sprig'],
@@ -356,7 +357,7 @@ function densityFor(all: ReadPortion[], parsed: ParsedLine, food: CatalogueFood 
 }
 
 /** Packages whose stated size is each one's ("2 cans (15 oz)"), whatever SR28 weighs one at. */
-const PACKAGE_PIECES = new Set(['can', 'jar', 'package', 'box', 'bag', 'bottle', 'container', 'envelope']);
+const PACKAGE_PIECES = new Set(['can', 'jar', 'package', 'box', 'bag', 'bottle', 'container', 'envelope', 'block']);
 
 /**
  * "2 sticks (16 tablespoons) butter", "2 sticks (8 oz)": a size after a counted piece that is the

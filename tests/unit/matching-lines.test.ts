@@ -522,6 +522,16 @@ describe('pieces of another size, leaves, lengths and splashes (weighing, issue 
     const sized = line('1 (14.5 oz) can diced tomatoes');
     expect(sized.grams).toBeCloseTo(14.5 * OZ, 6);
     expect(sized.warnings.join(' ')).not.toMatch(/size given/);
+    // cream cheese by the package or block is the 8 oz brick (curated, *common practice*), not SR28 01017's small 3 oz package
+    expect(sr28('01017', /^package, small/)).toBe(85);
+    for (const input of ['1 package cream cheese', '1 block cream cheese']) {
+      const l = line(input);
+      expect(l.grams, input).toBeCloseTo(8 * OZ, 1);
+      expect(l.warnings.join(' '), input).toMatch(/size given/);
+    }
+    expect(line('1 (8 oz.) block cream cheese, softened').grams).toBeCloseTo(8 * OZ, 6);
+    // USDA SR28 16426 firm tofu "0.25 block" 81 g
+    expect(line('1 block firm tofu').grams).toBeCloseTo(sr28('16426', /^block$/), 6);
     // USDA SR28 11546 "can (6 oz)" 170 g: the can weighed is named
     expect(line('1 can tomato paste').warnings.join(' ')).toMatch(/weighed as 1 can \(6 oz\)/);
   });
