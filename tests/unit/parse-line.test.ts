@@ -37,30 +37,24 @@ describe('parseLine: quantities', () => {
     expect(parseLine('½-¾ cup milk').quantity).toBe(0.625);
   });
 
-  it('reads a weight range before the food as the size of each piece: "1 3-4 ounce tomato", "2 6- to 8-ounce salmon fillets"', () => {
-    const tomato = parseLine('1 3-4 ounce tomato, coarsely grated');
-    expect(tomato.quantity).toBe(1);
-    expect(tomato.size).toEqual({ quantity: 3.5, unit: 'oz' });
-    expect(tomato.name).toBe('tomato');
-    const salmon = parseLine('2 6- to 8-ounce salmon fillets');
-    expect(salmon.quantity).toBe(2);
-    expect(salmon.size).toEqual({ quantity: 7, unit: 'oz' });
-    expect(salmon.name).toBe('salmon fillets');
+  it.each([
+    ['1 3-4 ounce tomato, coarsely grated', 1, 3.5, 'oz', 'tomato'],
+    ['2 6- to 8-ounce salmon fillets', 2, 7, 'oz', 'salmon fillets'],
+    // in parentheses too
+    ['1 (3- to 4-pound) whole red snapper, scaled and cleaned', 1, 3.5, 'lb', 'whole red snapper'],
+    ['2 (2- to 3-pound) chickens', 2, 2.5, 'lb', 'chickens'],
+  ] as const)('reads a weight range before the food as the size of each piece: "%s"', (input, quantity, size, unit, name) => {
+    const p = parseLine(input);
+    expect(p.quantity).toBe(quantity);
+    expect(p.size).toEqual({ quantity: size, unit });
+    expect(p.name).toBe(name);
+  });
+
+  it('weighs a range of pounds exactly and never reads a spoon or length range as a size', () => {
     // NIST Handbook 44 Appendix C: 1 lb = 453.59237 g
     const rabbit = parseLine('1 3- to 4-lb rabbit, cut into 6-8 pieces');
     expect(massToGrams(rabbit.size!.quantity, rabbit.size!.unit)).toBeCloseTo(3.5 * 453.59237, 3);
     expect(parseLine('2-3 tbsp oil').size).toBeNull();
-  });
-
-  it('reads a weight range in parentheses as the size of each piece: "1 (3- to 4-pound) whole red snapper"', () => {
-    const snapper = parseLine('1 (3- to 4-pound) whole red snapper, scaled and cleaned');
-    expect(snapper.quantity).toBe(1);
-    expect(snapper.size).toEqual({ quantity: 3.5, unit: 'lb' });
-    expect(snapper.name).toBe('whole red snapper');
-    const chickens = parseLine('2 (2- to 3-pound) chickens');
-    expect(chickens.quantity).toBe(2);
-    expect(chickens.size).toEqual({ quantity: 2.5, unit: 'lb' });
-    // a range of lengths is no weight
     expect(parseLine('1 (2- to 3-inch) piece ginger').size).toBeNull();
   });
 
