@@ -344,8 +344,10 @@ function lengthPiece(
   // "2 inches ginger", "2-inch piece of ginger" (read as two inches): the count is the length.
   if (byInch) return { r: inch, inches: 1, gramsPerInch, guessed: false };
   if (ask.diameter !== null && ask.diameter > 0) return { r: inch, inches: ask.diameter, gramsPerInch, guessed: false };
-  // "1 piece fresh ginger": a piece of no stated length is taken as an inch, and the cook told.
-  return ask.piece === 'piece' ? { r: inch, inches: 1, gramsPerInch, guessed: true } : null;
+  // "1 piece fresh ginger": a piece of no stated length is taken as an inch, and the cook told; a piece of
+  // a food sold by the stick ("1 piece cassia") is a stick.
+  const bySticks = all.some((r) => r.info.kind === 'count' && r.info.pieces.includes('stick'));
+  return ask.piece === 'piece' && !bySticks ? { r: inch, inches: 1, gramsPerInch, guessed: true } : null;
 }
 
 /** Grams per mL for a food's volume, preparation considered; null when nothing gives one. */

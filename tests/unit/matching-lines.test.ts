@@ -476,6 +476,9 @@ describe('pieces of another size, leaves, lengths and splashes (weighing, issue 
     const piece = line('1 piece fresh ginger, peeled');
     expect(piece.grams).toBeCloseTo(curatedGrams('11216', 'inch'), 6);
     expect(piece.warnings.join(' ')).toMatch(/No length given/);
+    // a piece of a food sold by the stick is a stick (curated 02010 "stick", *common practice*)
+    expect(line('1 piece cassia').grams).toBeCloseTo(curatedGrams('02010', 'stick'), 6);
+    expect(line('½ piece cinnamon stick (optional)').grams).toBeCloseTo(curatedGrams('02010', 'stick') / 2, 6);
   });
 
   it('a smaller kind of a food weighs its own piece: baby bok choy, baby and fingerling potatoes', () => {
