@@ -166,6 +166,9 @@ const MAX_CHOICES = 4;
 const JUICED = /^\s*juiced\b|^[^,]*\band juiced\b/i;
 const CITRUS = /^(?:lemons?|limes?|oranges?|grapefruits?)$/i;
 
+/** A note that the skin is kept: "with skin and bone", "skin on". */
+const SKIN_ON = /\bskin[- ]on\b|\bwith (?:the |its |their )?skins?\b/i;
+
 /** How garlic is cut, never the spice: "2 cloves, minced". */
 const GARLIC_CUTS = /\b(?:minced|crushed|smashed|peeled|grated|sliced|chopped|pressed)\b/i;
 
@@ -201,7 +204,9 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
   const packageFirst = /^(?:cans?|tins?)\s+(?:of\s+)?(?=\S)/i.exec(parsed.name);
   const named = unnamedCloves(parsed) ?? (packageFirst ? parsed.name.slice(packageFirst[0].length) : parsed.name || input);
   // "2 lemons, juiced": the juice is the food, weighed by what one fruit yields.
-  const phrase = JUICED.test(`${parsed.preparation ?? ''}`) && CITRUS.test(named) && !/\bjuice\b/i.test(named) ? `${named} juice` : named;
+  const juiced = JUICED.test(`${parsed.preparation ?? ''}`) && CITRUS.test(named) && !/\bjuice\b/i.test(named) ? `${named} juice` : named;
+  // "4 chicken breast halves, with skin and bone": SR28's "meat and skin" food, not the skinless one.
+  const phrase = SKIN_ON.test(`${parsed.preparation ?? ''} ${parsed.comment ?? ''}`) && !/\bskin/i.test(juiced) ? `skin-on ${juiced}` : juiced;
   // "oat or almond milk": the cook's first choice the catalogue has; else the phrase as a whole
   // when it has a food; else the first choice with a food to check.
   const choices = byChoices && phrase.length <= LONGEST_CHOICE_PHRASE ? orChoices(phrase).slice(0, MAX_CHOICES) : [];

@@ -283,6 +283,8 @@ export const PIECE_WORDS = new Set([
   'sprig',
   'crumble',
   'crown',
+  // "cobs of corn", "corn on the cob": an ear of fresh corn, not SR28's frozen "kernels on cob".
+  'cob',
 ]);
 
 /** Filler words with no meaning for matching. */
@@ -434,6 +436,9 @@ export const SYNONYMS: Record<string, string[]> = {
   lowfat: ['light', 'reduced', 'part'],
   dried: ['dry', 'dehydrated', 'mature'],
   dry: ['dried', 'mature'],
+  // "chocolate-covered raisins" are SR28's "milk chocolate coated raisins".
+  covered: ['coated'],
+  dipped: ['coated'],
 };
 
 /**

@@ -80,6 +80,9 @@ const NAMED_OTHERWISE: Record<string, string> = {
   'moong dal': 'split mung beans (common practice)',
   'chana dal': 'split chickpeas (common practice)',
   passata: 'sieved tomato purée (common practice)',
+  cornichons: 'small sour pickled gherkins (common practice), SR28 "pickles, cucumber, sour"',
+  mutton: 'meat of a grown sheep; SR28 has it only roasted (Navajo), so raw lamb stands in, flagged',
+  prosciutto: 'dry-cured ham; nearest SR28 food is sliced ham, flagged',
 };
 
 function keyWords(text: string): Set<string> {

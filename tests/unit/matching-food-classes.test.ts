@@ -81,6 +81,23 @@ describe('foods recipes name otherwise (data/aliases.json)', () => {
     ['1 lb goat meat, cubed', '17168', /^Goat, raw$/],
     ['2 Vidalia onions', '11294', /^Onions, sweet, raw$/],
     ['2 cups shredded roast chicken', '05013', /^Chicken, broilers or fryers, meat only, roasted$/],
+    // halibut without a place is the common Atlantic and Pacific fish, not the Greenland one
+    ['4 (5 oz) halibut fillets', '15036', /^Fish, halibut, Atlantic and Pacific, raw$/],
+    // sticky rice is glutinous rice (common practice)
+    ['4 cups cooked white sticky rice', '20055', /^Rice, white, glutinous, unenriched, cooked$/],
+    ['2 cups sticky rice', '20054', /^Rice, white, glutinous, unenriched, uncooked$/],
+    // snow and sugar snap peas are eaten pod and all: SR28's edible-podded peas, not shelled green peas
+    ['2 large handfuls snow peas, trimmed', '11300', /^Peas, edible-podded, raw$/],
+    ['8 oz sugar snap peas', '11300', /^Peas, edible-podded, raw$/],
+    // the New York strip is the top loin steak (common practice)
+    [
+      '2 boneless New York strip steaks (about 2 pounds total)',
+      '23388',
+      /^Beef, loin, top loin steak, boneless, lip-on, separable lean and fat, trimmed to 1\/8" fat, all grades, raw$/,
+    ],
+    // pudding rice is a short, round grain (common practice), not a rice pudding
+    ['100 g pudding rice', '20052', /^Rice, white, short-grain, enriched, uncooked$/],
+    ['3 tbsp cornichons', '11941', /^Pickles, cucumber, sour$/],
   ])('%s → SR28 %s', (input, ndb, sr28) => {
     const l = expectFood(input, ndb, sr28);
     expect(l.checkMatch).toBe(false);
@@ -163,6 +180,49 @@ describe('a state written once belongs to every "or" choice', () => {
   });
 });
 
+describe('a kept form written once belongs to every "or" choice', () => {
+  it('"dried barberries or currants" are dried currants when SR28 has no barberries, never fresh red currants', () => {
+    expect(orChoices('dried barberries or currants').map((w) => w[0])).toEqual(['dried barberries', 'dried currants']);
+    expectFood('¼ cup dried barberries or currants', '09085', /^Currants, zante, dried$/);
+    // two forms offered, or each choice with its own form: nothing is carried over
+    expect(orChoices('dried apricots or fresh figs').map((w) => w[0])).toEqual(['dried apricots', 'fresh figs']);
+    expect(orChoices('fresh or dried curry leaves').flat()).not.toContain('fresh dried curry leaves');
+  });
+});
+
+describe('the skin a line keeps chooses the food', () => {
+  it('"skin-on, bone-in chicken thighs" are thighs with their skin, not SR28\'s chicken skin alone', () => {
+    expect(longDesc.get('05015')).toBe('Chicken, broilers or fryers, skin only, raw');
+    const l = expectFood('8 skin-on, bone-in chicken thighs', '05091', /^Chicken, broilers or fryers, thigh, meat and skin, raw$/);
+    // USDA SR28 05091 "1 thigh with skin" 193 g
+    expect(l.grams).toBeCloseTo(8 * 193, 0);
+  });
+
+  it('"with skin and bone" after the comma asks for the meat-and-skin breast, not the skinless one', () => {
+    expectFood('4 chicken breast halves, with skin and bone, about 8 ounces each', '05057', /^Chicken, broilers or fryers, breast, meat and skin, raw$/);
+    // without it, a chicken breast is the skinless, boneless one recipes mean
+    expectFood('4 chicken breast halves', '05062', /^Chicken, broiler or fryers, breast, skinless, boneless, meat only, raw$/);
+  });
+});
+
+describe('a piece word says how a food comes, not which food it is', () => {
+  it('"cobs of corn" and "corn on the cob" are fresh sweet corn, not SR28\'s frozen "kernels on cob"', () => {
+    expect(longDesc.get('11180')).toBe('Corn, sweet, yellow, frozen, kernels on cob, unprepared');
+    const l = expectFood('2 cobs of corn, sliced into 1-inch rounds', '11167', /^Corn, sweet, yellow, raw$/);
+    // USDA SR28 11167 "1 ear, medium (6-3/4" to 7-1/2" long)" 102 g
+    expect(l.grams).toBeCloseTo(204, 0);
+    expectFood('4 corn on the cob', '11167', /^Corn, sweet, yellow, raw$/);
+  });
+});
+
+describe('a coating named otherwise', () => {
+  it('"chocolate-covered raisins" are SR28\'s chocolate coated raisins, not plain raisins', () => {
+    const l = expectFood('2 cups chocolate-covered raisins, roughly chopped', '19127', /^Candies, milk chocolate coated raisins$/);
+    // USDA SR28 19127 "1 cup" 180 g
+    expect(l.grams).toBeCloseTo(360, 0);
+  });
+});
+
 describe('a packing medium is not a food', () => {
   it('"crushed pineapple with juice" is the canned fruit, not pineapple juice', () => {
     expect(longDesc.get('09354')).toBe('Pineapple, canned, juice pack, drained');
@@ -186,6 +246,14 @@ describe('foods SR28 lacks, weighed as their nearest food and flagged', () => {
     ['½ cup crème fraîche', 'creme fraiche', '01056', /^Cream, sour, cultured$/],
     ['½ cup Mexican crema', 'mexican crema', '01056', /^Cream, sour, cultured$/],
     ['4 brioche buns', 'brioche buns', '18350', /^Rolls, hamburger or hotdog, plain$/],
+    // SR28's one mutton food is roasted (35141, Navajo): raw lamb is the nearest raw meat of a sheep
+    [
+      '3 lb mutton, trimmed and cut in small pieces',
+      'mutton',
+      '17001',
+      /^Lamb, domestic, composite of trimmed retail cuts, separable lean and fat, trimmed to 1\/4" fat, choice, raw$/,
+    ],
+    ['3 oz prosciutto, thinly sliced', 'prosciutto', '07029', /^Ham, sliced, regular \(approximately 11% fat\)$/],
   ])('%s → SR28 %s, "check this match"', (input, phrase, ndb, sr28) => {
     const l = expectFood(input, ndb, sr28);
     expect(l.checkMatch).toBe(true);
