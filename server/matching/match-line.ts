@@ -199,7 +199,29 @@ function nearestWithout(matcher: FoodMatcher, phrase: string, unknown: readonly 
   return null;
 }
 
+/** "(or substitute light brown sugar)", "(optional, or lemon zest)": the cook's other choice, in a note. */
+const NOTED_CHOICE = /(?:^|[,;]\s*)or\s+(?:substitute\s+|use\s+|sub\s+)?(?:with\s+)?([^,;]+)/i;
+
+/** The food of a note's other choice ("jaggery (or light brown sugar)") when the line's own phrase has none. */
+function notedChoice(matcher: FoodMatcher, parsed: ParsedLine, input: string): LineMatch | null {
+  const way = NOTED_CHOICE.exec(parsed.comment ?? '')?.[1]
+    ?.replace(/\s+(?:such as|like|e\.g\.|if|to|for)\b.*$/i, '')
+    .trim();
+  if (!way || way.length > LONGEST_CHOICE_PHRASE) return null;
+  const chosen = matchLine(matcher, { ...parsed, name: way, comment: null }, input, true);
+  if (!chosen.food) return null;
+  // The cook's first choice is not in the catalogue: the note's is weighed, and the line asks to be checked.
+  const warning = `The catalogue has no “${parsed.name}”: weighed as the other choice the line names, ${chosen.food.name}. Check this match.`;
+  return { ...chosen, checkMatch: true, confidence: Math.min(chosen.confidence, MISSING_MODIFIER_CONFIDENCE), warnings: [...chosen.warnings, warning] };
+}
+
 export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string, byChoices = true): LineMatch {
+  const own = matchPhrase(matcher, parsed, input, byChoices);
+  if (own.food || !byChoices) return own;
+  return notedChoice(matcher, parsed, input) ?? own;
+}
+
+function matchPhrase(matcher: FoodMatcher, parsed: ParsedLine, input: string, byChoices: boolean): LineMatch {
   // "28 oz can whole peeled tomatoes": the package word read as the start of the food's name.
   const packageFirst = /^(?:cans?|tins?)\s+(?:of\s+)?(?=\S)/i.exec(parsed.name);
   const named = unnamedCloves(parsed) ?? (packageFirst ? parsed.name.slice(packageFirst[0].length) : parsed.name || input);
@@ -217,8 +239,8 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
         const chosen = matchLine(matcher, { ...parsed, name: way }, input, false);
         if (!chosen.food) continue;
         if (!chosen.checkMatch) return chosen;
+        // "dried adzuki" asks to be checked, "dried adzuki beans" does not: the choice's next way is tried.
         firstToCheck ??= chosen;
-        break;
       }
     const whole = matchLine(matcher, parsed, input, false);
     return whole.food ? whole : (firstToCheck ?? whole);

@@ -83,6 +83,8 @@ const NAMED_OTHERWISE: Record<string, string> = {
   cornichons: 'small sour pickled gherkins (common practice), SR28 "pickles, cucumber, sour"',
   mutton: 'meat of a grown sheep; SR28 has it only roasted (Navajo), so raw lamb stands in, flagged',
   prosciutto: 'dry-cured ham; nearest SR28 food is sliced ham, flagged',
+  savoiardi: 'Italian for ladyfingers',
+  poblano: 'as poblano pepper',
 };
 
 function keyWords(text: string): Set<string> {

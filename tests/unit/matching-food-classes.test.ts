@@ -98,6 +98,11 @@ describe('foods recipes name otherwise (data/aliases.json)', () => {
     // pudding rice is a short, round grain (common practice), not a rice pudding
     ['100 g pudding rice', '20052', /^Rice, white, short-grain, enriched, uncooked$/],
     ['3 tbsp cornichons', '11941', /^Pickles, cucumber, sour$/],
+    // Chinese "light" soy sauce is the thin, regular one (common practice), not a reduced-sodium sauce
+    ['1 tbsp light soy sauce', '16123', /^Soy sauce made from soy and wheat \(shoyu\)$/],
+    ['12 packaged ladyfingers (also called savoiardi)', '18423', /^Cookies, ladyfingers, without lemon juice and rind$/],
+    // a ground vegetable is its powder, as a ground herb is the dried one
+    ['2 tsp ground onion', '02026', /^Spices, onion powder$/],
   ])('%s → SR28 %s', (input, ndb, sr28) => {
     const l = expectFood(input, ndb, sr28);
     expect(l.checkMatch).toBe(false);
@@ -187,6 +192,38 @@ describe('a kept form written once belongs to every "or" choice', () => {
     // two forms offered, or each choice with its own form: nothing is carried over
     expect(orChoices('dried apricots or fresh figs').map((w) => w[0])).toEqual(['dried apricots', 'fresh figs']);
     expect(orChoices('fresh or dried curry leaves').flat()).not.toContain('fresh dried curry leaves');
+  });
+});
+
+describe('a preserved form is not the fresh food a bare name means', () => {
+  it('"mackerel fillets" are fresh Atlantic mackerel, not SR28\'s salted mackerel; "salted mackerel" still is', () => {
+    expect(longDesc.get('83110')).toBe('Fish, mackerel, salted');
+    expectFood('2 mackerel fillets', '15046', /^Fish, mackerel, Atlantic, raw$/);
+    expectFood('180 g fresh skin-on mackerel fillets', '15046', /^Fish, mackerel, Atlantic, raw$/);
+    expectFood('2 salted mackerel', '83110', /^Fish, mackerel, salted$/);
+  });
+});
+
+describe('each way of a choice is tried before the next choice', () => {
+  it('"dried adzuki and/or kidney beans" are adzuki beans: "dried adzuki" asks to be checked, "dried adzuki beans" does not', () => {
+    expectFood('¼ cup dried adzuki and/or kidney beans', '16001', /^Beans, adzuki, mature seeds, raw$/);
+  });
+});
+
+describe("a note's other choice, when the catalogue lacks the line's own", () => {
+  it.each([
+    ['2 tbsp jaggery (or substitute light brown sugar)', 'jaggery', '19334', /^Sugars, brown$/],
+    ['2 tbsp colatura di alici (or fish sauce, such as Red Boat)', 'colatura di alici', '06179', /^Sauce, fish, ready-to-serve$/],
+  ])('%s → SR28 %s, flagged', (input, own, ndb, sr28) => {
+    const l = expectFood(input, ndb, sr28);
+    expect(l.grams).toBeGreaterThan(0);
+    expect(l.checkMatch).toBe(true);
+    expect(l.warnings.join(' ')).toContain(`“${own}”`);
+  });
+
+  it("a line whose own food the catalogue has keeps it, unflagged: sour cream is not its note's ricotta", () => {
+    const l = expectFood('1 cup sour cream (or ricotta)', '01056', /^Cream, sour, cultured$/);
+    expect(l.checkMatch).toBe(false);
   });
 });
 
