@@ -215,10 +215,28 @@ function notedChoice(matcher: FoodMatcher, parsed: ParsedLine, input: string): L
   return { ...chosen, checkMatch: true, confidence: Math.min(chosen.confidence, MISSING_MODIFIER_CONFIDENCE), warnings: [...chosen.warnings, warning] };
 }
 
+/** "plus 1 tablespoon all-purpose flour": a note that adds an amount of a named food. */
+const ADDED_AMOUNT = /^(?:plus|and)\s+[\d¼½¾⅓⅔⅛⅜⅝⅞.\/\s-]+(?:[a-z]+\.?\s+)?(?:of\s+)?(.+)$/i;
+
+/**
+ * "2 ⅓ c scooped and leveled, plus 1 tablespoon all-purpose flour": a food phrase with no food word
+ * leaves the food to the note; the first note that names one without doubt is the line's food.
+ */
+function foodInNote(matcher: FoodMatcher, parsed: ParsedLine, input: string): LineMatch | null {
+  if (foodWordsOf(parsed.name).length > 0) return null;
+  for (const segment of (parsed.comment ?? '').split(/[,;]/)) {
+    const way = ADDED_AMOUNT.exec(segment.trim())?.[1]?.trim();
+    if (!way || way.length > LONGEST_CHOICE_PHRASE || foodWordsOf(way).length === 0) continue;
+    const chosen = matchLine(matcher, { ...parsed, name: way, comment: null }, input, true);
+    if (chosen.food && !chosen.checkMatch) return chosen;
+  }
+  return null;
+}
+
 export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string, byChoices = true): LineMatch {
   const own = matchPhrase(matcher, parsed, input, byChoices);
   if (own.food || !byChoices) return own;
-  return notedChoice(matcher, parsed, input) ?? own;
+  return foodInNote(matcher, parsed, input) ?? notedChoice(matcher, parsed, input) ?? own;
 }
 
 function matchPhrase(matcher: FoodMatcher, parsed: ParsedLine, input: string, byChoices: boolean): LineMatch {

@@ -463,6 +463,8 @@ export const CONTRADICTIONS: Record<string, string[]> = {
   fresh: ['canned', 'frozen', 'dried'],
   boneless: ['bone'],
   sweet: ['sour', 'hot'],
+  // a chile is a hot pepper: "dried red chile peppers" are not SR28's freeze-dried sweet red peppers
+  chili: ['sweet'],
   hot: ['sweet', 'mild'],
   mild: ['hot'],
 };

@@ -84,7 +84,9 @@ const NAMED_OTHERWISE: Record<string, string> = {
   mutton: 'meat of a grown sheep; SR28 has it only roasted (Navajo), so raw lamb stands in, flagged',
   prosciutto: 'dry-cured ham; nearest SR28 food is sliced ham, flagged',
   savoiardi: 'Italian for ladyfingers',
-  poblano: 'as poblano pepper',
+  'sparkling water': 'carbonated water, SR28 "club soda"',
+  seltzer: 'as sparkling water',
+  poblano: 'a mild green chile (common practice), SR28 "peppers, hot chili, green"',
 };
 
 function keyWords(text: string): Set<string> {

@@ -103,6 +103,7 @@ describe('foods recipes name otherwise (data/aliases.json)', () => {
     ['12 packaged ladyfingers (also called savoiardi)', '18423', /^Cookies, ladyfingers, without lemon juice and rind$/],
     // a ground vegetable is its powder, as a ground herb is the dried one
     ['2 tsp ground onion', '02026', /^Spices, onion powder$/],
+    ['3 oz soda water', '14121', /^Beverages, carbonated, club soda$/],
   ])('%s → SR28 %s', (input, ndb, sr28) => {
     const l = expectFood(input, ndb, sr28);
     expect(l.checkMatch).toBe(false);
@@ -201,6 +202,38 @@ describe('a preserved form is not the fresh food a bare name means', () => {
     expectFood('2 mackerel fillets', '15046', /^Fish, mackerel, Atlantic, raw$/);
     expectFood('180 g fresh skin-on mackerel fillets', '15046', /^Fish, mackerel, Atlantic, raw$/);
     expectFood('2 salted mackerel', '83110', /^Fish, mackerel, salted$/);
+  });
+});
+
+describe('a chile is a hot pepper', () => {
+  it('"dried red chile peppers" are SR28\'s sun-dried hot chiles, not its freeze-dried sweet red peppers', () => {
+    expect(longDesc.get('11931')).toBe('Peppers, sweet, red, freeze-dried');
+    expectFood('10 dried red chile peppers', '11962', /^Peppers, hot chile, sun-dried$/);
+    expectFood('1 medium chile poblano, stemmed and seeded', '11670', /^Peppers, hot chili, green, raw$/);
+    // a sweet pepper is still one
+    expectFood('1 red bell pepper', '11821', /^Peppers, sweet, red, raw$/);
+  });
+});
+
+describe('the fruit a food is made from is never dropped silently', () => {
+  it('"pomegranate molasses" is no cane molasses: weighed as molasses, flagged, the word named', () => {
+    expect(longDesc.get('19304')).toBe('Molasses');
+    const l = line('1 tsp pomegranate molasses');
+    expect(l.checkMatch).toBe(true);
+    expect(l.warnings.join(' ')).toMatch(/pomegranate/);
+    // the fruit itself is honoured
+    expectFood('¼ cup pomegranate seeds', '09286', /^Pomegranates, raw$/);
+  });
+});
+
+describe('a food phrase with no food word leaves the food to the note', () => {
+  it('"2 ⅓ c scooped and leveled, plus 1 tablespoon all-purpose flour" is all-purpose flour', () => {
+    const l = expectFood(
+      '2 ⅓ c scooped and leveled, plus 1 tablespoon all-purpose flour, plus more for kneading',
+      '20081',
+      /^Wheat flour, white, all-purpose, enriched, bleached$/,
+    );
+    expect(l.checkMatch).toBe(false);
   });
 });
 
