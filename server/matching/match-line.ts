@@ -216,7 +216,7 @@ function notedChoice(matcher: FoodMatcher, parsed: ParsedLine, input: string): L
 }
 
 /** "plus 1 tablespoon all-purpose flour": a note that adds an amount of a named food. */
-const ADDED_AMOUNT = /^(?:plus|and)\s+[\d¼½¾⅓⅔⅛⅜⅝⅞.\/\s-]+(?:[a-z]+\.?\s+)?(?:of\s+)?(.+)$/i;
+const ADDED_AMOUNT = /^(?:plus|and)\s+[\d¼½¾⅓⅔⅛⅜⅝⅞./\s-]+(?:[a-z]+\.?\s+)?(?:of\s+)?(.+)$/i;
 
 /**
  * "2 ⅓ c scooped and leveled, plus 1 tablespoon all-purpose flour": a food phrase with no food word
