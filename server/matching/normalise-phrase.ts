@@ -285,6 +285,8 @@ export const PIECE_WORDS = new Set([
   'crown',
   // "cobs of corn", "corn on the cob": an ear of fresh corn, not SR28's frozen "kernels on cob".
   'cob',
+  // "racks of baby back ribs", "rack of lamb": how the meat is sold, not which meat.
+  'rack',
 ]);
 
 /** Filler words with no meaning for matching. */

@@ -104,6 +104,12 @@ describe('foods recipes name otherwise (data/aliases.json)', () => {
     // a ground vegetable is its powder, as a ground herb is the dried one
     ['2 tsp ground onion', '02026', /^Spices, onion powder$/],
     ['3 oz soda water', '14121', /^Beverages, carbonated, club soda$/],
+    // dried minced garlic and onion are SR28's garlic powder and dehydrated onion flakes
+    ['¼ cup dried minced garlic', '02020', /^Spices, garlic powder$/],
+    ['1 tbsp dried minced onion', '11284', /^Onions, dehydrated flakes$/],
+    // a rack is how ribs are sold: "racks of baby back ribs" are SR28's pork backribs
+    ['3 racks of baby back ribs (about 2 pounds each)', '10192', /^Pork, fresh, backribs, separable lean and fat, raw$/],
+    ['3 lb pork spareribs', '10088', /^Pork, fresh, spareribs, separable lean and fat, raw$/],
   ])('%s → SR28 %s', (input, ndb, sr28) => {
     const l = expectFood(input, ndb, sr28);
     expect(l.checkMatch).toBe(false);
