@@ -166,6 +166,9 @@ const MAX_CHOICES = 4;
 const JUICED = /^\s*juiced\b|^[^,]*\band juiced\b/i;
 const CITRUS = /^(?:lemons?|limes?|oranges?|grapefruits?)$/i;
 
+/** "2 c minced pork": a meat named alone and minced is the ground meat (the butcher's mince). */
+const MINCED_MEAT = /^\s*(?:beef|pork|lamb|chicken|turkey|veal|goat)\s*$/i;
+
 /** A note that the skin is kept: "with skin and bone", "skin on". */
 const SKIN_ON = /\bskin[- ]on\b|\bwith (?:the |its |their )?skins?\b/i;
 
@@ -244,7 +247,8 @@ function matchPhrase(matcher: FoodMatcher, parsed: ParsedLine, input: string, by
   const packageFirst = /^(?:cans?|tins?)\s+(?:of\s+)?(?=\S)/i.exec(parsed.name);
   const named = unnamedCloves(parsed) ?? (packageFirst ? parsed.name.slice(packageFirst[0].length) : parsed.name || input);
   // "2 lemons, juiced": the juice is the food, weighed by what one fruit yields.
-  const juiced = JUICED.test(`${parsed.preparation ?? ''}`) && CITRUS.test(named) && !/\bjuice\b/i.test(named) ? `${named} juice` : named;
+  const cut = MINCED_MEAT.test(named) && /\b(?:minced|ground)\b/i.test(parsed.preparation ?? '') ? `ground ${named.trim()}` : named;
+  const juiced = JUICED.test(`${parsed.preparation ?? ''}`) && CITRUS.test(named) && !/\bjuice\b/i.test(named) ? `${named} juice` : cut;
   // "4 chicken breast halves, with skin and bone": SR28's "meat and skin" food, not the skinless one.
   const phrase = SKIN_ON.test(`${parsed.preparation ?? ''} ${parsed.comment ?? ''}`) && !/\bskin/i.test(juiced) ? `skin-on ${juiced}` : juiced;
   // "oat or almond milk": the cook's first choice the catalogue has; else the phrase as a whole

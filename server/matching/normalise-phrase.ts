@@ -37,6 +37,8 @@ const TEXT_REWRITES: [RegExp, string][] = [
   [/\bwithout (?:the )?bones?\b/g, ' boneless '],
   // "bone-in" is one word: its "in" does not start a packing medium.
   [/\bbone[- ]in\b/g, ' bonein '],
+  // "lamb shoulder on the bone" is bone-in lamb, not "Salmon, …, with bone".
+  [/\bon the bones?\b/g, ' bonein '],
   // SR28 yogurts carry their label protein in the name: "8 grams protein per 8 ounce".
   [/\b\d+ grams? protein per \d+ ounces?\b/g, ' '],
   [/\bw\/\s*/g, 'with '],

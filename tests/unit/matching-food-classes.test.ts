@@ -211,6 +211,19 @@ describe('a preserved form is not the fresh food a bare name means', () => {
   });
 });
 
+describe('a meat named alone and minced is the ground meat', () => {
+  it('"2 c minced pork" is SR28\'s ground pork, never "Bologna, pork"', () => {
+    expect(longDesc.get('07010')).toBe('Bologna, pork');
+    expectFood('2 cups minced pork', '10219', /^Pork, fresh, ground, raw$/);
+    expectFood('1 lb beef, minced', '23572', /^Beef, ground, 80% lean meat \/ 20% fat, raw$/);
+  });
+
+  it('"on the bone" is bone-in meat, not a fish canned "with bone"', () => {
+    const l = line('1 lamb shoulder on the bone (about 4 1/2 pounds)');
+    expect(l.food?.name).toMatch(/^Lamb, /);
+  });
+});
+
 describe('a chile is a hot pepper', () => {
   it('"dried red chile peppers" are SR28\'s sun-dried hot chiles, not its freeze-dried sweet red peppers', () => {
     expect(longDesc.get('11931')).toBe('Peppers, sweet, red, freeze-dried');
