@@ -228,7 +228,8 @@ const ADDED_AMOUNT = /^(?:plus|and)\s+[\d¼½¾⅓⅔⅛⅜⅝⅞./\s-]+(?:[a-z]
 function foodInNote(matcher: FoodMatcher, parsed: ParsedLine, input: string): LineMatch | null {
   if (foodWordsOf(parsed.name).length > 0) return null;
   for (const segment of (parsed.comment ?? '').split(/[,;]/)) {
-    const way = ADDED_AMOUNT.exec(segment.trim())?.[1]?.trim();
+    // "grated, not shredded, parmesan cheese": the food may follow the notes that describe it.
+    const way = (ADDED_AMOUNT.exec(segment.trim())?.[1] ?? segment).trim();
     if (!way || way.length > LONGEST_CHOICE_PHRASE || foodWordsOf(way).length === 0) continue;
     const chosen = matchLine(matcher, { ...parsed, name: way, comment: null }, input, true);
     if (chosen.food && !chosen.checkMatch) return chosen;

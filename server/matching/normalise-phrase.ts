@@ -321,6 +321,8 @@ export const STOP_WORDS = new Set([
   'type',
   'kind',
   'style',
+  // "grated, not shredded, parmesan": a negation names no food (SR28's "not canned" is no match for it).
+  'not',
 ]);
 
 /** Recipe abbreviations and shorthands, expanded in a phrase before matching. */

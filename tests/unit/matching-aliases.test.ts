@@ -86,6 +86,7 @@ const NAMED_OTHERWISE: Record<string, string> = {
   savoiardi: 'Italian for ladyfingers',
   'sparkling water': 'carbonated water, SR28 "club soda"',
   seltzer: 'as sparkling water',
+  ale: 'a top-fermented beer, SR28 "beer, regular"',
   poblano: 'a mild green chile (common practice), SR28 "peppers, hot chili, green"',
 };
 

@@ -110,6 +110,10 @@ describe('foods recipes name otherwise (data/aliases.json)', () => {
     // a rack is how ribs are sold: "racks of baby back ribs" are SR28's pork backribs
     ['3 racks of baby back ribs (about 2 pounds each)', '10192', /^Pork, fresh, backribs, separable lean and fat, raw$/],
     ['3 lb pork spareribs', '10088', /^Pork, fresh, spareribs, separable lean and fat, raw$/],
+    // SR28 has short ribs boneless only; bone-in ones are still short ribs, not a T-bone steak
+    ['4 lb bone-in beef short ribs, cut crosswise', '23128', /^Beef, chuck, short ribs, boneless, separable lean and fat, trimmed to 0" fat, all grades, raw$/],
+    ['1 lb broccoli rabe, trimmed', '11096', /^Broccoli raab, raw$/],
+    ['½ cup ale', '14003', /^Alcoholic beverage, beer, regular, all$/],
   ])('%s → SR28 %s', (input, ndb, sr28) => {
     const l = expectFood(input, ndb, sr28);
     expect(l.checkMatch).toBe(false);
@@ -246,6 +250,11 @@ describe('the fruit a food is made from is never dropped silently', () => {
 });
 
 describe('a food phrase with no food word leaves the food to the note', () => {
+  it('"1 c grated, not shredded, parmesan cheese" is parmesan, never "Ham, chopped, not canned"', () => {
+    expect(longDesc.get('07027')).toBe('Ham, chopped, not canned');
+    expectFood('1 cup grated, not shredded, parmesan cheese', '01032', /^Cheese, parmesan, grated$/);
+  });
+
   it('"2 ⅓ c scooped and leveled, plus 1 tablespoon all-purpose flour" is all-purpose flour', () => {
     const l = expectFood(
       '2 ⅓ c scooped and leveled, plus 1 tablespoon all-purpose flour, plus more for kneading',
