@@ -316,6 +316,7 @@ describe('parseLine: food phrase, preparation and notes', () => {
 
   it('joins comma-separated adjectives and food lists, and moves notes out', () => {
     expect(parseLine('2 lb boneless, skinless chicken thighs').name).toBe('boneless skinless chicken thighs');
+    expect(parseLine('8 skin-on, bone-in chicken thighs').name).toBe('skin-on bone-in chicken thighs');
     expect(parseLine('3 oz Gruyère, Comté, or Swiss cheese, grated').name).toBe('Gruyère, Comté, or Swiss cheese');
     expect(parseLine('2 c blackberries, fresh or frozen').name).toBe('blackberries');
     const optional = parseLine('2 tbsp Greek yogurt or sour cream (optional)');
