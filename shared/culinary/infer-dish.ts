@@ -272,8 +272,9 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
   const rouxFlour = lines.some((l, i) => kinds[i] === 'flour' && !SLURRY_STARCH.test(`${l.food?.name ?? ''} ${l.phrase}`));
   const hasRoux = !BAKE_TYPES.includes(dishType) && rouxFlour && fats.length > 0 && dairyForSauce;
   const rouxFat = fats.find((i) => /^butter\b/i.test(lines[i].food?.name ?? '')) ?? fats[0] ?? -1;
-  // sugar is structure where it outweighs the flour (brownies, pound cake) or melts into chocolate
-  const sugarIsStructure = kinds.includes('chocolate') || g('sugar') >= flourGrams;
+  // sugar is structure where it far outweighs the flour (brownies, angel food) or melts into chocolate;
+  // a cookie's or pound cake's sugar, about the flour's weight, only sweetens: a quarter less still bakes
+  const sugarIsStructure = kinds.includes('chocolate') || g('sugar') >= 1.5 * flourGrams;
   const starchNames = lines.filter((_, i) => kinds[i] === 'starch').map((l) => `${l.phrase} ${l.food?.name ?? ''}`);
   const riceNotPasta = starchNames.some((n) => /\brice\b/i.test(n)) && !starchNames.some((n) => PASTA_WORDS.test(n));
   const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat, riceNotPasta, enrichment };
