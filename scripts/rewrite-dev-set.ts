@@ -28,7 +28,11 @@ let rewrites = 0;
 const refusedRecipes: string[] = [];
 for (const recipe of COMFORT_DEV_SET.filter((r) => !only || r.id.includes(only))) {
   const text = recipe.lines.join('\n');
-  const analysis = analyzeLines(engine, recipe.lines.map((input) => ({ input })), recipe.servings);
+  const analysis = analyzeLines(
+    engine,
+    recipe.lines.map((input) => ({ input })),
+    recipe.servings,
+  );
   const reading = readDish(analysis.lines.map(culinaryLineOf));
   const per = analysis.perServing;
   const targets = { proteinMinG: per.proteinG * 1.3, kcalMax: per.kcal * 0.8 };

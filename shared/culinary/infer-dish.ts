@@ -42,7 +42,20 @@ function mashedPotatoLine(lines: readonly CulinaryLine[], kinds: readonly LineKi
 }
 
 /** Kinds that need a fat to cook in (browned, sautéed or scrambled): where none is in the dish, butter is only stirred in. */
-const COOKED_IN_FAT: readonly LineKind[] = ['meat', 'cured-meat', 'fish', 'egg', 'aromatic', 'vegetable', 'legume', 'tomato', 'sauce', 'condensed-soup', 'wrap', 'flour'];
+const COOKED_IN_FAT: readonly LineKind[] = [
+  'meat',
+  'cured-meat',
+  'fish',
+  'egg',
+  'aromatic',
+  'vegetable',
+  'legume',
+  'tomato',
+  'sauce',
+  'condensed-soup',
+  'wrap',
+  'flour',
+];
 
 /**
  * Lines stirred into a cooked starch for richness: the butter, milk, cream or sour cream of a mashed-potato
@@ -283,7 +296,8 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
   const words = lines.map((l) => `${l.phrase} ${l.comment ?? ''}`);
   const portion = words.some((w) => PORTION_WORDS.test(w)) || (dishType !== 'simmered-dish' && words.some((w) => BUN_WORDS.test(w)));
   const mixedDish = MIXED_TYPES.includes(dishType) && !shaped && !portion;
-  const browsMeat = !BAKE_TYPES.includes(dishType) && lines.some((l, i) => (kinds[i] === 'meat' || kinds[i] === 'fish') && /\b(raw|unprepared)\b/i.test(l.food?.name ?? ''));
+  const browsMeat =
+    !BAKE_TYPES.includes(dishType) && lines.some((l, i) => (kinds[i] === 'meat' || kinds[i] === 'fish') && /\b(raw|unprepared)\b/i.test(l.food?.name ?? ''));
   const mashPotato = dishType === 'assembled-bake' && enrichment.size > 0 ? mashedPotatoLine(lines, kinds) : -1;
   const out = lines.map((line, i) => {
     const role = overrides[i] ?? roleOf(line, kinds[i], dishType, ctx, i);

@@ -401,7 +401,9 @@ describe('issue 10 round 6: slurries, sloppy joes, quick-bread batters, mashes a
   it('a pancake batter pours with about twice the flour in liquid; a cornbread batter (less liquid) is a quick bread', () => {
     expect(inferDishType(recipe(FLOUR, MILK(490), EGGS, SUGAR(25), POWDER, SALT))).toBe('batter');
     const cornmeal: Spec = ['yellow cornmeal', 157, 'Cornmeal, degermed, enriched, yellow', '20', ['flour'], undefined, '20022'];
-    expect(inferDishType(recipe(cornmeal, ['all-purpose flour', 125, FLOUR[2], '20', ['flour']], SUGAR(50), POWDER, MILK(245), BUTTER(76), EGGS))).toBe('leavened-bake');
+    expect(inferDishType(recipe(cornmeal, ['all-purpose flour', 125, FLOUR[2], '20', ['flour']], SUGAR(50), POWDER, MILK(245), BUTTER(76), EGGS))).toBe(
+      'leavened-bake',
+    );
   });
 
   it("a mash's butter and milk are stirred in (not a roux), and so are the butter and cream of grits; a stew's fat still browns", () => {
@@ -421,7 +423,9 @@ describe('issue 10 round 6: slurries, sloppy joes, quick-bread batters, mashes a
 
   it('raw sausage sold "unprepared" is browned in the pan', () => {
     const sausage: Spec = ['pork breakfast sausage', 454, 'Pork sausage, link/patty, unprepared', '07', ['sausage'], undefined, '07063', 25];
-    expect(readDish(recipe(sausage, EGGS, ['large flour tortillas', 288, 'Tortillas, ready-to-bake or -fry, flour', '18', ['flatbread-wrap']], CHEDDAR())).browsMeat).toBe(true);
+    expect(
+      readDish(recipe(sausage, EGGS, ['large flour tortillas', 288, 'Tortillas, ready-to-bake or -fry, flour', '18', ['flatbread-wrap']], CHEDDAR())).browsMeat,
+    ).toBe(true);
   });
 
   it("a cookie's sugar, about the flour's weight, only sweetens; it is structure where it is one and a half times the flour or more", () => {

@@ -382,9 +382,9 @@ describe('issue 10 round 6: lean cuts, a lamb pie and its mash, cookie dough, qu
     expect(lean[0].per100g.fatG).toBeLessThan(0.25 * byNdb.get('13809')!.per100g.fatG);
     expect(lean[0].per100g.proteinG).toBeGreaterThan(byNdb.get('13809')!.per100g.proteinG);
     // an already lean cut is not "trimmed" again
-    expect(recipeCandidates(engine, [at('23603', 'lean chuck', 907), at('06008', 'beef broth', 960)], none()).lines[0].candidates.map((c) => c.rule?.id)).not.toContain(
-      'chuck-to-trimmed-lean',
-    );
+    expect(
+      recipeCandidates(engine, [at('23603', 'lean chuck', 907), at('06008', 'beef broth', 960)], none()).lines[0].candidates.map((c) => c.rule?.id),
+    ).not.toContain('chuck-to-trimmed-lean');
   });
 
   it("a lamb shepherd's pie: lean lamb leg or half lean beef for the mince; the mash's butter to half, its milk lighter, up to half its potatoes as cauliflower", () => {
@@ -452,8 +452,17 @@ describe('issue 10 round 6: lean cuts, a lamb pie and its mash, cookie dough, qu
     ];
     const r = recipeCandidates(engine, cornbread, none());
     expect(r.dishType).toBe('leavened-bake');
-    expect(byRule(r.lines[4], 'quick-bread-milk-to-greek-yogurt')[0]).toMatchObject({ name: 'Yogurt, Greek, plain, nonfat', massRatio: 1, maxShare: 0.5, band: [0.9, 1.1] });
-    const pancakes = recipeCandidates(engine, [at('20081', 'flour', 250), at('01088', 'buttermilk', 490), at('01123', 'eggs', 100), at('19335', 'sugar', 25)], none());
+    expect(byRule(r.lines[4], 'quick-bread-milk-to-greek-yogurt')[0]).toMatchObject({
+      name: 'Yogurt, Greek, plain, nonfat',
+      massRatio: 1,
+      maxShare: 0.5,
+      band: [0.9, 1.1],
+    });
+    const pancakes = recipeCandidates(
+      engine,
+      [at('20081', 'flour', 250), at('01088', 'buttermilk', 490), at('01123', 'eggs', 100), at('19335', 'sugar', 25)],
+      none(),
+    );
     expect(pancakes.dishType).toBe('batter');
     expect(byRule(pancakes.lines[1], 'quick-bread-milk-to-greek-yogurt')).toEqual([]);
   });
