@@ -31,6 +31,8 @@ const at = (ndb: string, phrase: string, grams: number, comment?: string): Candi
   comment: comment ?? null,
 });
 const none = (): CandidateOptions => ({ diet: [], excludedFoodIds: new Set(), approved: [] });
+/** a line's candidates offered by one rule */
+const byRule = (line: LineCandidates, id: string) => line.candidates.filter((c) => c.rule?.id === id);
 
 /** An invented baked macaroni and cheese. */
 const macAndCheese = () => [
@@ -287,8 +289,6 @@ describe('more of a lean main protein, baked custards, oven-frying, tight 1:1 ba
 });
 
 describe('issue 10 round 5: a baked cheese sauce, half-cauliflower fried rice (invented recipes)', () => {
-  const byRule = (line: LineCandidates, id: string) => line.candidates.filter((c) => c.rule?.id === id);
-
   it('the milk of a baked cheese sauce: up to half as blended 1 % cottage cheese or nonfat Greek yogurt, 1:1 by weight within ±10 %', () => {
     const r = recipeCandidates(engine, macAndCheese(), none());
     expect(r.dishType).toBe('assembled-bake');
@@ -362,8 +362,6 @@ describe('issue 10 round 5: a baked cheese sauce, half-cauliflower fried rice (i
 });
 
 describe('issue 10 round 6: lean cuts, a lamb pie and its mash, cookie dough, quick breads, syrup at the table (invented recipes)', () => {
-  const byRule = (l: LineCandidates, id: string) => l.candidates.filter((c) => c.rule?.id === id);
-
   it('stewing chuck trimmed of its fat, 1:1 by weight of meat (USDA SR28 separable lean 23603 against lean and fat 13809), up to ×1.5 in a stew', () => {
     const stew = [
       at('13809', 'beef chuck, cut into cubes', 907),
