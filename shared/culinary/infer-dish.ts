@@ -17,6 +17,8 @@ export interface DishReading {
 
 const TOPPING_WORDS = /\b(for (the )?(top|topping|serving|garnish|sprinkling)|to (serve|garnish|sprinkle|top)|on top|topping|garnish|sprinkle|dollop)\b/i;
 const GREASE_WORDS = /\b(for (the )?(pan|griddle|skillet|greasing|frying)|to grease|greasing|for the dish)\b/i;
+/** a fat that fries in a pan or on a griddle (not one that greases a baking dish) */
+const PAN_WORDS = /\bfor (the )?(pan|griddle|skillet|frying)\b/i;
 const COATING_WORDS = /\b(for (dredging|coating|dusting|breading)|dredg|dust(ing)?)\b/i;
 const BAKE_TYPES: readonly DishType[] = ['leavened-bake', 'batter', 'dough'];
 const MIXED_TYPES: readonly DishType[] = ['assembled-bake', 'stovetop-sauce', 'simmered-dish', 'griddle-saute'];
@@ -114,6 +116,9 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
   const mashedTop = mashedPotatoLine(lines, kinds) >= 0;
   // eggs set with milk around bread or fillings in the oven: a strata, quiche or breakfast casserole
   const custard = has('egg') && has('milk', 'cream') && !has('flour') && g('egg', 'milk', 'cream') >= 0.3 * total;
+  // bread dipped in eggs and milk and fried in a buttered pan (French toast) is a griddle dish, not a baked custard
+  const panFried = lines.some((l, i) => kinds[i] === 'butter-oil' && PAN_WORDS.test(l.comment ?? ''));
+  if (custard && panFried && !pieCrust && !layered && !has('meat', 'cured-meat', 'fish')) return 'griddle-saute';
   if (
     custard ||
     pieCrust ||

@@ -421,6 +421,18 @@ describe('issue 10 round 6: slurries, sloppy joes, quick-bread batters, mashes a
     expect(readDish(recipe(water, grits, ONION, BUTTER(28))).lines[3].role).toBe('cooking-fat');
   });
 
+  it('bread dipped in eggs and milk and fried in a buttered pan (French toast) is a griddle dish; baked in a greased dish it is a custard', () => {
+    const bread: Spec = ['slices white bread', 232, 'Bread, white, commercially prepared', '18', ['bread'], undefined, '18069'];
+    const frenchToast = readDish(
+      recipe(bread, ['large eggs', 200, EGGS[2], '01', ['egg'], undefined, '01123'], MILK(244), SUGAR(25), BUTTER(28, 'for the pan')),
+    );
+    expect(frenchToast.dishType).toBe('griddle-saute');
+    expect(frenchToast.lines[1].role).toBe('main-protein');
+    const strata = readDish(recipe(bread, ['large eggs', 200, EGGS[2], '01', ['egg'], undefined, '01123'], MILK(244), CHEDDAR(), BUTTER(14, 'for the dish')));
+    expect(strata.dishType).toBe('assembled-bake');
+    expect(strata.lines[1].role).toBe('custard');
+  });
+
   it('raw sausage sold "unprepared" is browned in the pan', () => {
     const sausage: Spec = ['pork breakfast sausage', 454, 'Pork sausage, link/patty, unprepared', '07', ['sausage'], undefined, '07063', 25];
     expect(
