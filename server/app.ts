@@ -78,6 +78,27 @@ export function createApp(context: AppContext) {
   );
   // gzip, or brotli when the browser offers it; small answers (< 1 KB) go as they are
   app.use(compression({ threshold: 1024 }));
+
+  const clientDir = config.clientDir && existsSync(path.join(config.clientDir, 'index.html')) ? config.clientDir : null;
+  if (clientDir) {
+    // Before the body parsers and the session: a page's scripts, style sheets and fonts need neither,
+    // and a signed-in visit would otherwise read (and, rolling, rewrite) its session once per file.
+    // Vite names every file under assets/ by its content hash: a changed file gets a new name. The
+    // build leaves .br and .gz copies beside them (vite.config.ts); those go out as they are.
+    app.use(
+      '/assets',
+      expressStaticGzip(path.join(clientDir, 'assets'), {
+        enableBrotli: true,
+        orderPreference: ['br', 'gz'],
+        serveStatic: { index: false, immutable: true, maxAge: '1y' },
+      }),
+    );
+    // a chunk an old page asks for after a deploy: a 404, not index.html served as JavaScript
+    app.use('/assets', (_req, res) => {
+      res.status(404).type('text/plain').send('Not found');
+    });
+  }
+
   app.use(compressJsonAnswers());
   app.use(express.json({ limit: '1mb' }));
   app.use(rejectUnsafeText);
@@ -132,23 +153,8 @@ export function createApp(context: AppContext) {
   api.use(apiNotFound);
   app.use('/api', api);
 
-  if (config.clientDir && existsSync(path.join(config.clientDir, 'index.html'))) {
-    const clientDir = config.clientDir;
+  if (clientDir) {
     const shell = createClientShell(clientDir);
-    // Vite names every file under assets/ by its content hash: a changed file gets a new name. The
-    // build leaves .br and .gz copies beside them (vite.config.ts); those go out as they are.
-    app.use(
-      '/assets',
-      expressStaticGzip(path.join(clientDir, 'assets'), {
-        enableBrotli: true,
-        orderPreference: ['br', 'gz'],
-        serveStatic: { index: false, immutable: true, maxAge: '1y' },
-      }),
-    );
-    // a chunk an old page asks for after a deploy: a 404, not index.html served as JavaScript
-    app.use('/assets', (_req, res) => {
-      res.status(404).type('text/plain').send('Not found');
-    });
     app.use(express.static(clientDir, { index: false, setHeaders: (res) => res.setHeader('Cache-Control', 'no-cache') }));
     const pages = createPageRenderer(config.renderDir);
     const logError = context.logError ?? ((error: unknown) => console.error(error));

@@ -254,6 +254,18 @@ interface LineState {
   equivalents: Amount[];
 }
 
+/** "Pinch coarse salt", "generous pinch of salt", "small handful of basil": a measure without a number is one of it. */
+const LEADING_MEASURE =
+  /^(?:an?\s+)?(?:(small|sm|tiny|little|scant|large|lg|big|generous|good|healthy|hefty|heaping|heaped)\s+)?(pinch|dash|handful|splash|drizzle)(?:\s+of)?\s+(?=\S)/i;
+const SMALL_WORDS = new Set(['small', 'sm', 'tiny', 'little', 'scant']);
+
+function leadingHouseholdMeasure(text: string): string {
+  const m = LEADING_MEASURE.exec(text);
+  if (!m) return text;
+  const size = m[1] ? (SMALL_WORDS.has(m[1].toLowerCase()) ? 'sm ' : 'lg ') : '';
+  return `1 ${size}${m[2].toLowerCase()} ${text.slice(m[0].length)}`;
+}
+
 /**
  * One line read in named passes over one state: the package's reading first (below), then each pass
  * takes from the description what the package left there (sizes, ranges, equivalents, notes).
@@ -264,7 +276,7 @@ function parseCleanLine(input: string): ParsedLine {
   if (cleaned.truncated) flags.push('truncated');
   if (cleaned.text === '') return emptyResult(input, [...flags, 'empty']);
 
-  let text = cleaned.text.replace(/(\d)\s*#(?=\s|$)/g, '$1 lb');
+  let text = leadingHouseholdMeasure(cleaned.text.replace(/(\d)\s*#(?=\s|$)/g, '$1 lb'));
   text = wordsToDigits(text).text;
   if (/^(?:about|approximately|approx\.?|around|roughly|~)\s/i.test(text)) flags.push('approximate');
 
@@ -356,16 +368,23 @@ const SIZE_RANGE = new RegExp(`^(${QUANTITY_SOURCE})\\s*-?\\s*(?:-|–|—|to)\\
 /** "1 3-4 ounce tomato", "2 6- to 8-ounce salmon fillets": each piece weighs the middle of the range. */
 function sizeRangeAfterCount(s: LineState): void {
   if (s.quantity === null || s.unit !== null) return;
-  const m = s.description.match(SIZE_RANGE);
-  if (!m) return;
+  const range = massRange(s.description);
+  if (!range) return;
+  s.size = range.size;
+  s.sizeText = range.text;
+  s.description = s.description.slice(range.length).trim();
+  s.quantity2 = null;
+}
+
+/** A range of weights at the start of `text` ("3- to 4-pound"), as its middle. */
+function massRange(text: string): { size: Amount; text: string; length: number } | null {
+  const m = text.match(SIZE_RANGE);
+  if (!m) return null;
   const unit = normaliseUnit(m[3]);
   const lo = quantityValue(m[1]);
   const hi = quantityValue(m[2]);
-  if (!unit || unitKind(unit) !== 'mass' || lo === null || hi === null || !(hi >= lo)) return;
-  s.size = { quantity: (lo + hi) / 2, unit };
-  s.sizeText = m[0].trim().replace(/-$/, '');
-  s.description = s.description.slice(m[0].length).trim();
-  s.quantity2 = null;
+  if (!unit || unitKind(unit) !== 'mass' || lo === null || hi === null || !(hi >= lo)) return null;
+  return { size: { quantity: (lo + hi) / 2, unit }, text: m[0].trim().replace(/-$/, ''), length: m[0].length };
 }
 
 /** "1½-inch piece ginger", "15-ounce can tomatoes": the package read a size as the quantity. */
@@ -441,6 +460,7 @@ function parenthesisAfterAmount(s: LineState): void {
     const amounts = readAmounts(inner);
     const kind = unitKind(s.unit);
     let sized: ReturnType<typeof sizeBeforeUnit> = null;
+    let range: ReturnType<typeof massRange> = null;
     if (kind === 'mass' || kind === 'volume') {
       if (amounts.length) {
         s.equivalents.push(...amounts);
@@ -451,6 +471,11 @@ function parenthesisAfterAmount(s: LineState): void {
       s.size = sized.size;
       s.sizeText = `${inner} ${sized.unitText}`;
       s.description = sized.rest;
+    } else if (amounts.length === 0 && (range = massRange(`${inner} `)) && range.length >= inner.length) {
+      // "1 (3- to 4-pound) whole red snapper": each weighs the middle of the range.
+      s.size = range.size;
+      s.sizeText = inner;
+      s.description = after;
     } else if (amounts.length || isDescriptiveSize(inner)) {
       if (amounts.length) s.size = amounts[0];
       s.sizeText = inner;

@@ -1,8 +1,10 @@
-import '@fontsource/nunito/400.css';
-import '@fontsource/nunito/600.css';
-import '@fontsource/nunito/700.css';
-import '@fontsource/nunito/800.css';
-import '@fontsource/nunito/900.css';
+// Latin faces only, the five weights the interface uses: one @font-face each, no unicode-range
+// (a letter outside Latin falls back to the system font, letter by letter)
+import '@fontsource/nunito/latin-400.css';
+import '@fontsource/nunito/latin-600.css';
+import '@fontsource/nunito/latin-700.css';
+import '@fontsource/nunito/latin-800.css';
+import '@fontsource/nunito/latin-900.css';
 import './styles/index.css';
 
 import { readPageState } from './app/page-state';

@@ -105,7 +105,8 @@ export function createAliasResolver(aliases: AliasIndex, index: FoodIndex, ranke
       );
       for (const t of q.terms) {
         const inFood = t.alternatives.some((a) => f.tokens.has(a.id));
-        if (aliasWords.has(t.word)) covered += t.weight;
+        // "cobs of corn", "basil leaves": a piece word the alias lacks says how the food comes, not which food.
+        if (aliasWords.has(t.word) || (PIECE_WORDS.has(t.word) && !inFood)) covered += t.weight;
         else if (t.word === 'raw' && !inFood && (f.flags & UNPROCESSED) === 0) continue;
         else if (MODIFIER_WORDS.has(t.word) && !inFood) unmet.push(t);
         else if (t.alternatives.length && contradicted.has(t.alternatives[0].id)) unmet.push(t);

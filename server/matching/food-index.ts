@@ -178,6 +178,8 @@ export const FLAG_REGIONAL = 64;
 export const FLAG_BRANDED = 128;
 export const FLAG_DRIED = 256;
 export const FLAG_SNACK = 512;
+/** Salted, smoked or cured: a preserved form ("Mackerel, salted"), not the fresh food a bare name means. */
+export const FLAG_CURED = 1024;
 
 export interface IndexedFood {
   food: CatalogueFood;
@@ -278,6 +280,7 @@ function flagsOf(food: CatalogueFood, tokens: string[]): number {
   if (has('canned')) flags |= FLAG_CANNED;
   if (has('frozen')) flags |= FLAG_FROZEN;
   if (has('dried') || has('dehydrated')) flags |= FLAG_DRIED;
+  if (has('salted') || has('smoked') || has('cured')) flags |= FLAG_CURED;
   const group = food.foodGroup.slice(0, 2);
   if (group === '03' || has('babyfood') || has('infant') || has('toddler')) flags |= FLAG_BABY;
   if (group === '22') flags |= FLAG_MIXED_DISH;

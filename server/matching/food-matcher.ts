@@ -306,13 +306,19 @@ export function choicesIn(text: string, splitAnd = true): string[] {
  */
 export function leadingState(parts: string[]): { parts: string[]; withState: (way: string) => string } {
   const state = parts.length > 1 ? words(parts[0])[0] : undefined;
-  if (state === undefined || !STATE_WORDS.has(state)) return { parts, withState: (way) => way };
-  const first = parts[0].replace(/^\W*\S+\s*/, '');
+  const first = parts[0]?.replace(/^\W*\S+\s*/, '') ?? '';
+  // "dried barberries or currants": a kept form written before a named first choice is every choice's
+  // (but "fresh or dried curry leaves" offers two forms, and "dried apricots or fresh figs" says each).
+  const form = state !== undefined && FORM_WORDS.has(state) && first !== '';
+  if (state === undefined || !(STATE_WORDS.has(state) || form)) return { parts, withState: (way) => way };
   return {
     parts: first ? [first, ...parts.slice(1)] : parts.slice(1),
-    withState: (way) => (words(way).includes(state) ? way : `${state} ${way}`),
+    withState: (way) => (words(way).some((w) => w === state || (form && FORM_WORDS.has(w))) ? way : `${state} ${way}`),
   };
 }
+
+/** Forms a food is kept in, each another SR28 food: "Currants, zante, dried" beside "Currants, red and white, raw". */
+const FORM_WORDS = new Set(['dried', 'fresh', 'frozen', 'canned', 'smoked']);
 
 function copyOf(m: FoodMatch): FoodMatch {
   return { ...m, alternatives: [...m.alternatives], unknownWords: [...m.unknownWords], corrected: [...m.corrected] };

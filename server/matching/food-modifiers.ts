@@ -92,6 +92,9 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   { label: 'macadamia', asks: ['macadamia'] },
   { label: 'peanut', asks: ['peanut'], honouredBy: [['peanuts']] },
   { label: 'sunflower', asks: ['sunflower'] },
+  // "pomegranate molasses" is no cane molasses, "mango chutney" no plain chutney: the fruit a food is made from.
+  { label: 'pomegranate', asks: ['pomegranate'] },
+  { label: 'mango', asks: ['mango'] },
   // "candied ginger" is no raw ginger root.
   { label: 'candied', asks: ['candied'], honouredBy: [['candies'], ['candy'], ['candied'], ['glazed']] },
   // "sherry vinegar" is no distilled vinegar: SR28 has none made from sherry.

@@ -166,6 +166,12 @@ const MAX_CHOICES = 4;
 const JUICED = /^\s*juiced\b|^[^,]*\band juiced\b/i;
 const CITRUS = /^(?:lemons?|limes?|oranges?|grapefruits?)$/i;
 
+/** "2 c minced pork": a meat named alone and minced is the ground meat (the butcher's mince). */
+const MINCED_MEAT = /^\s*(?:beef|pork|lamb|chicken|turkey|veal|goat)\s*$/i;
+
+/** A note that the skin is kept: "with skin and bone", "skin on". */
+const SKIN_ON = /\bskin[- ]on\b|\bwith (?:the |its |their )?skins?\b/i;
+
 /** How garlic is cut, never the spice: "2 cloves, minced". */
 const GARLIC_CUTS = /\b(?:minced|crushed|smashed|peeled|grated|sliced|chopped|pressed)\b/i;
 
@@ -196,12 +202,56 @@ function nearestWithout(matcher: FoodMatcher, phrase: string, unknown: readonly 
   return null;
 }
 
+/** "(or substitute light brown sugar)", "(optional, or lemon zest)": the cook's other choice, in a note. */
+const NOTED_CHOICE = /(?:^|[,;]\s*)or\s+(?:substitute\s+|use\s+|sub\s+)?(?:with\s+)?([^,;]+)/i;
+
+/** The food of a note's other choice ("jaggery (or light brown sugar)") when the line's own phrase has none. */
+function notedChoice(matcher: FoodMatcher, parsed: ParsedLine, input: string): LineMatch | null {
+  const way = NOTED_CHOICE.exec(parsed.comment ?? '')?.[1]
+    ?.replace(/\s+(?:such as|like|e\.g\.|if|to|for)\b.*$/i, '')
+    .trim();
+  if (!way || way.length > LONGEST_CHOICE_PHRASE) return null;
+  const chosen = matchLine(matcher, { ...parsed, name: way, comment: null }, input, true);
+  if (!chosen.food) return null;
+  // The cook's first choice is not in the catalogue: the note's is weighed, and the line asks to be checked.
+  const warning = `The catalogue has no “${parsed.name}”: weighed as the other choice the line names, ${chosen.food.name}. Check this match.`;
+  return { ...chosen, checkMatch: true, confidence: Math.min(chosen.confidence, MISSING_MODIFIER_CONFIDENCE), warnings: [...chosen.warnings, warning] };
+}
+
+/** "plus 1 tablespoon all-purpose flour": a note that adds an amount of a named food. */
+const ADDED_AMOUNT = /^(?:plus|and)\s+[\d¼½¾⅓⅔⅛⅜⅝⅞./\s-]+(?:[a-z]+\.?\s+)?(?:of\s+)?(.+)$/i;
+
+/**
+ * "2 ⅓ c scooped and leveled, plus 1 tablespoon all-purpose flour": a food phrase with no food word
+ * leaves the food to the note; the first note that names one without doubt is the line's food.
+ */
+function foodInNote(matcher: FoodMatcher, parsed: ParsedLine, input: string): LineMatch | null {
+  if (foodWordsOf(parsed.name).length > 0) return null;
+  for (const segment of (parsed.comment ?? '').split(/[,;]/)) {
+    // "grated, not shredded, parmesan cheese": the food may follow the notes that describe it.
+    const way = (ADDED_AMOUNT.exec(segment.trim())?.[1] ?? segment).trim();
+    if (!way || way.length > LONGEST_CHOICE_PHRASE || foodWordsOf(way).length === 0) continue;
+    const chosen = matchLine(matcher, { ...parsed, name: way, comment: null }, input, true);
+    if (chosen.food && !chosen.checkMatch) return chosen;
+  }
+  return null;
+}
+
 export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string, byChoices = true): LineMatch {
+  const own = matchPhrase(matcher, parsed, input, byChoices);
+  if (own.food || !byChoices) return own;
+  return foodInNote(matcher, parsed, input) ?? notedChoice(matcher, parsed, input) ?? own;
+}
+
+function matchPhrase(matcher: FoodMatcher, parsed: ParsedLine, input: string, byChoices: boolean): LineMatch {
   // "28 oz can whole peeled tomatoes": the package word read as the start of the food's name.
   const packageFirst = /^(?:cans?|tins?)\s+(?:of\s+)?(?=\S)/i.exec(parsed.name);
   const named = unnamedCloves(parsed) ?? (packageFirst ? parsed.name.slice(packageFirst[0].length) : parsed.name || input);
   // "2 lemons, juiced": the juice is the food, weighed by what one fruit yields.
-  const phrase = JUICED.test(`${parsed.preparation ?? ''}`) && CITRUS.test(named) && !/\bjuice\b/i.test(named) ? `${named} juice` : named;
+  const cut = MINCED_MEAT.test(named) && /\b(?:minced|ground)\b/i.test(parsed.preparation ?? '') ? `ground ${named.trim()}` : named;
+  const juiced = JUICED.test(`${parsed.preparation ?? ''}`) && CITRUS.test(named) && !/\bjuice\b/i.test(named) ? `${named} juice` : cut;
+  // "4 chicken breast halves, with skin and bone": SR28's "meat and skin" food, not the skinless one.
+  const phrase = SKIN_ON.test(`${parsed.preparation ?? ''} ${parsed.comment ?? ''}`) && !/\bskin/i.test(juiced) ? `skin-on ${juiced}` : juiced;
   // "oat or almond milk": the cook's first choice the catalogue has; else the phrase as a whole
   // when it has a food; else the first choice with a food to check.
   const choices = byChoices && phrase.length <= LONGEST_CHOICE_PHRASE ? orChoices(phrase).slice(0, MAX_CHOICES) : [];
@@ -212,8 +262,8 @@ export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: strin
         const chosen = matchLine(matcher, { ...parsed, name: way }, input, false);
         if (!chosen.food) continue;
         if (!chosen.checkMatch) return chosen;
+        // "dried adzuki" asks to be checked, "dried adzuki beans" does not: the choice's next way is tried.
         firstToCheck ??= chosen;
-        break;
       }
     const whole = matchLine(matcher, parsed, input, false);
     return whole.food ? whole : (firstToCheck ?? whole);

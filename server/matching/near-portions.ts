@@ -33,6 +33,10 @@ function nameWords(food: CatalogueFood): string[] {
     .filter((w) => w.length > 2);
 }
 
+/** A food sold dry ("Puddings, vanilla, dry mix", "bouillon, powder, dry"), and a near food made up from one. */
+const DRY = /\b(?:dry|unprepared|powder|powdered)\b/i;
+const MADE_UP = /(?<!un)\bprepared\b|\breconstituted\b/i;
+
 /** Per food without a volume portion: the volume portions of its near foods, labelled with their food. */
 export function nearVolumePortions(foods: readonly CatalogueFood[]): Map<number, Portion[]> {
   const withVolume = foods.filter((f) => f.source === 'usda-sr28' && hasVolume(f.portions));
@@ -53,7 +57,9 @@ export function nearVolumePortions(foods: readonly CatalogueFood[]): Map<number,
     // "Nuts, cashew nuts, raw" borrows from other cashews before "Nuts, coconut cream".
     const own = new Set(nameWords(food));
     const shared = (f: CatalogueFood) => nameWords(f).filter((w) => own.has(w)).length;
-    const sorted = [...near].sort((a, b) => Number(a.branded) - Number(b.branded) || shared(b) - shared(a));
+    // A dry mix or powder never borrows the cup of the same food made up with water or milk.
+    const kin = DRY.test(food.name) ? near.filter((f) => !MADE_UP.test(f.name)) : near;
+    const sorted = [...kin].sort((a, b) => Number(a.branded) - Number(b.branded) || shared(b) - shared(a));
     // Only the nearest: a tablespoon of coconut cream is no measure of cashews when other cashews have cups.
     const most = sorted.length ? shared(sorted[0]) : 0;
     const ranked = sorted.filter((f) => shared(f) === most).slice(0, MAX_NEAR_FOODS);

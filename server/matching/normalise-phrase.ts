@@ -37,6 +37,8 @@ const TEXT_REWRITES: [RegExp, string][] = [
   [/\bwithout (?:the )?bones?\b/g, ' boneless '],
   // "bone-in" is one word: its "in" does not start a packing medium.
   [/\bbone[- ]in\b/g, ' bonein '],
+  // "lamb shoulder on the bone" is bone-in lamb, not "Salmon, …, with bone".
+  [/\bon the bones?\b/g, ' bonein '],
   // SR28 yogurts carry their label protein in the name: "8 grams protein per 8 ounce".
   [/\b\d+ grams? protein per \d+ ounces?\b/g, ' '],
   [/\bw\/\s*/g, 'with '],
@@ -283,6 +285,10 @@ export const PIECE_WORDS = new Set([
   'sprig',
   'crumble',
   'crown',
+  // "cobs of corn", "corn on the cob": an ear of fresh corn, not SR28's frozen "kernels on cob".
+  'cob',
+  // "racks of baby back ribs", "rack of lamb": how the meat is sold, not which meat.
+  'rack',
 ]);
 
 /** Filler words with no meaning for matching. */
@@ -315,6 +321,8 @@ export const STOP_WORDS = new Set([
   'type',
   'kind',
   'style',
+  // "grated, not shredded, parmesan": a negation names no food (SR28's "not canned" is no match for it).
+  'not',
 ]);
 
 /** Recipe abbreviations and shorthands, expanded in a phrase before matching. */
@@ -434,6 +442,9 @@ export const SYNONYMS: Record<string, string[]> = {
   lowfat: ['light', 'reduced', 'part'],
   dried: ['dry', 'dehydrated', 'mature'],
   dry: ['dried', 'mature'],
+  // "chocolate-covered raisins" are SR28's "milk chocolate coated raisins".
+  covered: ['coated'],
+  dipped: ['coated'],
 };
 
 /**
@@ -458,6 +469,8 @@ export const CONTRADICTIONS: Record<string, string[]> = {
   fresh: ['canned', 'frozen', 'dried'],
   boneless: ['bone'],
   sweet: ['sour', 'hot'],
+  // a chile is a hot pepper: "dried red chile peppers" are not SR28's freeze-dried sweet red peppers
+  chili: ['sweet'],
   hot: ['sweet', 'mild'],
   mild: ['hot'],
 };

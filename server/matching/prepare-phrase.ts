@@ -39,7 +39,7 @@ export interface PreparedQuery {
   contradictions: { own: number | undefined; against: number[] }[];
   /** word id → bits of the terms it satisfies */
   termBits: Map<number, number>;
-  asks: { canned: boolean; frozen: boolean; dried: boolean; baby: boolean };
+  asks: { canned: boolean; frozen: boolean; dried: boolean; cured: boolean; baby: boolean };
   /** words read as another catalogue word ("mascarpone → macaroni"), with the least closeness among them */
   corrected: string[];
   closeness: number;
@@ -168,6 +168,7 @@ export function createPhrasePreparer(index: FoodIndex, speller: SpellingCorrecto
       canned: wordSet.has('canned'),
       frozen: wordSet.has('frozen'),
       dried: wordSet.has('dried') || wordSet.has('dry'),
+      cured: wordSet.has('salted') || wordSet.has('smoked') || wordSet.has('cured') || wordSet.has('salt'),
       baby: wordSet.has('babyfood') || wordSet.has('infant'),
     };
     const leastCloseness = closeness.reduce((m, c) => Math.min(m, c), 1);

@@ -9,6 +9,7 @@ import {
   FLAG_BABY,
   FLAG_BRANDED,
   FLAG_CANNED,
+  FLAG_CURED,
   FLAG_DRIED,
   FLAG_FROZEN,
   FLAG_MIXED_DISH,
@@ -91,6 +92,7 @@ export function createFoodRanker(index: FoodIndex): FoodRanker {
     if (flags & FLAG_CANNED && !q.asks.canned) s *= 0.93;
     if (flags & FLAG_FROZEN && !q.asks.frozen) s *= 0.93;
     if (flags & FLAG_DRIED && !q.asks.dried) s *= 0.95;
+    if (flags & FLAG_CURED && !q.asks.cured) s *= 0.93;
     if (flags & FLAG_BABY && !q.asks.baby) s *= 0.4;
     if (flags & FLAG_MIXED_DISH) s *= 0.85;
     if (flags & FLAG_REGIONAL) s *= 0.75;

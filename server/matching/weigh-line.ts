@@ -195,6 +195,30 @@ const SIZE_PREFERENCE: Record<SizeWord, number> = {
   'extra-small': -0.2,
 };
 
+/** Cuts and small parts of a food that a sized count ("1 md kohlrabi") never means, unless it names them. */
+const CUT_PIECES = new Set([
+  'slice',
+  'strip',
+  'ring',
+  'rings',
+  'wedge',
+  'cube',
+  'cubic',
+  'spear',
+  'floret',
+  'floweret',
+  'leaf',
+  'sprig',
+  'pat',
+  'dash',
+  'inch',
+  'section',
+  'segment',
+]);
+
+/** Words for a smaller kind of a food, each weighed by its own portion: "baby bok choy", "fingerling potatoes", "baguette slices". */
+const SMALLER_KINDS = new Set(['baby', 'fingerling', 'baguette']);
+
 /** Piece words that mean the food itself when a recipe counts it: "1 fruit" is one lemon. */
 const WHOLE_PIECES = new Set(['whole', 'fruit', 'each', 'item', 'medium', 'large', 'small']);
 
@@ -207,6 +231,10 @@ const PIECE_EQUIVALENTS: Record<string, string[]> = {
   piece: ['each'],
   ball: ['piece'],
   square: ['piece'],
+  block: ['package'],
+  // "4 stems mint", "3 stalks fresh mint": an herb's stem is a sprig (*common practice*).
+  stem: ['sprig'],
+  stalk: ['sprig'],
 };
 
 /** Pieces a line may name that SR28 names otherwise: "4 hamburger buns" → "1 roll". */
@@ -246,13 +274,19 @@ function scoreCountPortions(
     }
     const pieces = r.info.pieces.map(pieceId);
     let score = 0;
+    // A smaller kind of the food ("1 head, baby" of bok choy) fits only a line that names it, and then best.
+    const kind = pieces.find((p) => SMALLER_KINDS.has(p));
+    if (kind !== undefined && !nameWords.has(kind)) continue;
+    if (kind !== undefined) score += 5;
     if (ask.piece) {
       if (pieces.includes(ask.piece)) score += 4;
       else if ((PIECE_EQUIVALENTS[ask.piece] ?? []).some((p) => pieces.includes(p))) score += 3;
       else if (ask.piece === 'piece' || ask.piece === 'serving') score += 0;
       else continue;
-    } else if (pieces.some((p) => SUB_PIECES.has(p))) {
-      if (pieces.includes('piece') && pieces.length === 1) score -= 0.5;
+    } else if (kind === undefined && pieces.some((p) => SUB_PIECES.has(p))) {
+      if (pieces.includes('piece') && pieces.every((p) => p === 'piece' || WHOLE_PIECES.has(p))) score -= 0.5;
+      // "1 md kohlrabi": a size word is the whole food's, never one slice of it.
+      else if (ask.size && pieces.some((p) => CUT_PIECES.has(p)) && !pieces.some((p) => named(p, nameWords))) continue;
       else score -= 3;
     }
     if (ask.size) {
@@ -293,6 +327,29 @@ function named(piece: string, nameWords: Set<string>): boolean {
   return nameWords.has(piece) || (NAME_PIECE_SYNONYMS[piece] !== undefined && nameWords.has(NAME_PIECE_SYNONYMS[piece]));
 }
 
+/** Pieces whose written inches are a length along a root or bark: "1 2-inch piece ginger", "1 (3-inch) cinnamon stick". */
+const LENGTH_PIECES = new Set(['piece', 'knob', 'stick']);
+
+/** A piece of stated length, weighed by the food's "1 inch" portion; null when either is missing. */
+function lengthPiece(
+  all: ReadPortion[],
+  ask: CountAsk,
+  nameWords: Set<string>,
+): { r: ReadPortion; inches: number; gramsPerInch: number; guessed: boolean } | null {
+  const byInch = ask.piece === 'inch';
+  if (!byInch && !(ask.piece ? LENGTH_PIECES.has(ask.piece) : [...LENGTH_PIECES].some((p) => nameWords.has(p)))) return null;
+  const inch = all.find((r) => r.info.kind === 'count' && r.info.pieces.length === 1 && r.info.pieces[0] === 'inch');
+  if (!inch) return null;
+  const gramsPerInch = inch.portion.grams / inch.portion.amount;
+  // "2 inches ginger", "2-inch piece of ginger" (read as two inches): the count is the length.
+  if (byInch) return { r: inch, inches: 1, gramsPerInch, guessed: false };
+  if (ask.diameter !== null && ask.diameter > 0) return { r: inch, inches: ask.diameter, gramsPerInch, guessed: false };
+  // "1 piece fresh ginger": a piece of no stated length is taken as an inch, and the cook told; a piece of
+  // a food sold by the stick ("1 piece cassia") is a stick.
+  const bySticks = all.some((r) => r.info.kind === 'count' && r.info.pieces.includes('stick'));
+  return ask.piece === 'piece' && !bySticks ? { r: inch, inches: 1, gramsPerInch, guessed: true } : null;
+}
+
 /** Grams per mL for a food's volume, preparation considered; null when nothing gives one. */
 function densityFor(all: ReadPortion[], parsed: ParsedLine, food: CatalogueFood | null, near: Portion[]): number | null {
   const v = bestVolumePortion(all, parsed, null, food) ?? bestVolumePortion(read(near), parsed, null, food);
@@ -302,7 +359,7 @@ function densityFor(all: ReadPortion[], parsed: ParsedLine, food: CatalogueFood 
 }
 
 /** Packages whose stated size is each one's ("2 cans (15 oz)"), whatever SR28 weighs one at. */
-const PACKAGE_PIECES = new Set(['can', 'jar', 'package', 'box', 'bag', 'bottle', 'container', 'envelope']);
+const PACKAGE_PIECES = new Set(['can', 'jar', 'package', 'box', 'bag', 'bottle', 'container', 'envelope', 'block']);
 
 /**
  * "2 sticks (16 tablespoons) butter", "2 sticks (8 oz)": a size after a counted piece that is the
@@ -335,7 +392,7 @@ const LEAFY_G_PER_ML = 0.3;
 /**
  * Household measures a recipe counts that have no legal size and no SR28 portion for the food, as
  * volumes (*common practice*, from memory): a handful is a loose cup of leaves or herbs and ¼ cup of
- * anything denser (a handful of nuts is about 1 oz); a scoop is ½ cup (the #8 disher); a shot of
+ * anything denser (a handful of nuts is about 1 oz); a splash is ¼ fl oz (½ tbsp), a drizzle 1 tbsp; a scoop is ½ cup (the #8 disher); a shot of
  * espresso 1 fl oz, of anything else a 1½ fl oz jigger.
  */
 function householdVolume(piece: string, food: CatalogueFood, density: () => number | null): { ml: number; as: string; why: string } | null {
@@ -346,6 +403,8 @@ function householdVolume(piece: string, food: CatalogueFood, density: () => numb
       ? { ml: ML_PER_CUP, as: '1 loose cup', why: 'a handful of leaves, common practice' }
       : { ml: ML_PER_CUP / 4, as: '¼ cup', why: 'a handful, common practice' };
   }
+  if (piece === 'drizzle') return { ml: ML_PER_FL_OZ / 2, as: '1 tbsp', why: 'a drizzle, common practice' };
+  if (piece === 'splash') return { ml: ML_PER_FL_OZ / 4, as: '½ tbsp', why: 'a splash, common practice' };
   if (piece === 'scoop') return { ml: ML_PER_CUP / 2, as: '½ cup', why: 'a #8 scoop, common practice' };
   if (piece === 'shot') {
     return /\b(?:espresso|coffee)\b/i.test(food.name)
@@ -445,7 +504,15 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
   if (!food) return result(0, null, null, [WARNING_NO_FOOD]);
 
   const ask = countAsk(parsed);
-  const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, new Set(words(parsed.name ?? '').map(singular)));
+  const nameWords = new Set(words(parsed.name ?? '').map(singular));
+  const byLength = lengthPiece(all, ask, nameWords);
+  if (byLength) {
+    const grams = quantity * byLength.inches * byLength.gramsPerInch;
+    if (byLength.guessed) warnings.push(`No length given: weighed as a 1-inch piece (${gramsText(byLength.gramsPerInch)} each).`);
+    const d = density();
+    return result(grams, d ? grams / d : null, byLength.r.portion.label, warnings);
+  }
+  const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, nameWords);
   // A canned food, or one standing for a can's drained contents ("1 can lentils" → cooked lentils).
   if (!chosen && ask.piece === 'can' && (/\bcanned\b/i.test(food.name) || opts.drained)) {
     const grams = drainedGrams(quantity * USUAL_CAN_GRAMS, opts, warnings);
@@ -453,10 +520,12 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
     const d = density();
     return result(grams, d ? grams / d : null, null, warnings);
   }
-  const household = !chosen && ask.piece ? householdVolume(ask.piece, food, density) : null;
+  // A handful is taken before the food is cut: "a handful of basil, chopped" is a loose cup of whole leaves.
+  const uncut = () => densityFor(all, { ...parsed, preparation: null, comment: null }, food, opts.nearPortions ?? []);
+  const household = !chosen && ask.piece ? householdVolume(ask.piece, food, uncut) : null;
   if (household) {
     const ml = quantity * household.ml;
-    const d = density();
+    const d = uncut();
     if (d) {
       warnings.push(`No household weight for "${parsed.unitText ?? ask.piece}" of this food: weighed as ${household.as} (${household.why}).`);
       return result(ml * d, ml, null, warnings);
@@ -472,6 +541,9 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
   if (chosen.guessed) {
     const asked = ask.size ? `No "${ask.size}" weight` : ask.diameter !== null ? `No ${ask.diameter}-inch weight` : 'No size given';
     warnings.push(`${asked}: weighed as ${chosen.r.portion.label} (${gramsText(each)} each).`);
+  } else if (ask.piece && PACKAGE_PIECES.has(ask.piece)) {
+    // "1 can diced tomatoes": cans and jars come in many sizes; the one weighed is said.
+    warnings.push(`No ${ask.piece} size given: weighed as ${chosen.r.portion.label} (${gramsText(each)} each). Give the size on the label for exact figures.`);
   }
   const d = density();
   return result(grams, d ? grams / d : null, chosen.r.portion.label, warnings);

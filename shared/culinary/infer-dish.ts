@@ -17,12 +17,71 @@ export interface DishReading {
 
 const TOPPING_WORDS = /\b(for (the )?(top|topping|serving|garnish|sprinkling)|to (serve|garnish|sprinkle|top)|on top|topping|garnish|sprinkle|dollop)\b/i;
 const GREASE_WORDS = /\b(for (the )?(pan|griddle|skillet|greasing|frying)|to grease|greasing|for the dish)\b/i;
+/** a fat that fries in a pan or on a griddle (not one that greases a baking dish) */
+const PAN_WORDS = /\bfor (the )?(pan|griddle|skillet|frying)\b/i;
 const COATING_WORDS = /\b(for (dredging|coating|dusting|breading)|dredg|dust(ing)?)\b/i;
 const BAKE_TYPES: readonly DishType[] = ['leavened-bake', 'batter', 'dough'];
 const MIXED_TYPES: readonly DishType[] = ['assembled-bake', 'stovetop-sauce', 'simmered-dish', 'griddle-saute'];
 const PASTA_WORDS = /\b(pasta|spaghetti|macaroni|noodles?|linguine|fettuccine|penne|rigatoni|bucatini|tagliatelle)\b/i;
-/** the protein is the portion: a burger in a bun, a patty, a cutlet */
-const PORTION_WORDS = /\b(buns?|rolls?|patt(y|ies)|burgers?|cutlets?)\b/i;
+/** the protein is the portion: a patty, a burger, a cutlet */
+const PORTION_WORDS = /\b(patt(y|ies)|burgers?|cutlets?)\b/i;
+/** served in a bun or roll: the portion too, unless the meat is simmered in a sauce spooned onto it (sloppy joes) */
+const BUN_WORDS = /\b(buns?|rolls?)\b/i;
+/** starches that thicken as a slurry, with no fat: they make no roux */
+const SLURRY_STARCH = /\b(cornstarch|corn starch|arrowroot|potato starch|tapioca)\b/i;
+
+const POTATO = /^potato/i;
+
+/**
+ * The potato line of a mashed-potato top over a meat filling (a cottage or shepherd's pie), or -1;
+ * potatoes in a quarter or more of liquid are a stew's.
+ */
+function mashedPotatoLine(lines: readonly CulinaryLine[], kinds: readonly LineKind[]): number {
+  const total = lines.reduce((s, l) => s + Math.max(0, l.grams), 0) || 1;
+  const wet = gramsBy(lines, kinds, ['liquid', 'tomato', 'sauce']);
+  if (!kinds.includes('meat') || kinds.includes('wrap') || wet >= 0.25 * total) return -1;
+  return lines.findIndex((l, i) => kinds[i] === 'starch' && POTATO.test(l.food?.name ?? ''));
+}
+
+/** Kinds that need a fat to cook in (browned, sautéed or scrambled): where none is in the dish, butter is only stirred in. */
+const COOKED_IN_FAT: readonly LineKind[] = [
+  'meat',
+  'cured-meat',
+  'fish',
+  'egg',
+  'aromatic',
+  'vegetable',
+  'legume',
+  'tomato',
+  'sauce',
+  'condensed-soup',
+  'wrap',
+  'flour',
+];
+
+/**
+ * Lines stirred into a cooked starch for richness: the butter, milk, cream or sour cream of a mashed-potato
+ * top (written after its potatoes), or the butter, cream or sour cream of grits or a mash on their own.
+ */
+function enrichmentLines(lines: readonly CulinaryLine[], kinds: readonly LineKind[], dish: DishType): Set<number> {
+  const out = new Set<number>();
+  if (BAKE_TYPES.includes(dish)) return out;
+  const stirredIn = (i: number) => !GREASE_WORDS.test(`${lines[i].comment ?? ''}`) && !TOPPING_WORDS.test(`${lines[i].comment ?? ''} ${lines[i].phrase}`);
+  const potato = dish === 'assembled-bake' ? mashedPotatoLine(lines, kinds) : -1;
+  if (potato >= 0) {
+    kinds.forEach((k, i) => {
+      if (i > potato && (k === 'butter-oil' || k === 'milk' || k === 'cream' || k === 'cultured') && stirredIn(i)) out.add(i);
+    });
+    return out;
+  }
+  const porridge = kinds.includes('starch') && kinds.some((k) => k === 'milk' || k === 'liquid') && !kinds.some((k) => COOKED_IN_FAT.includes(k));
+  if (porridge) {
+    kinds.forEach((k, i) => {
+      if ((k === 'butter-oil' || k === 'cream' || k === 'cultured') && stirredIn(i)) out.add(i);
+    });
+  }
+  return out;
+}
 
 function gramsBy(lines: readonly CulinaryLine[], kinds: readonly LineKind[], of: readonly LineKind[]) {
   return lines.reduce((s, l, i) => (of.includes(kinds[i]) ? s + Math.max(0, l.grams) : s), 0);
@@ -41,7 +100,9 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
   const bakeCore = flour + g('sugar', 'chocolate');
   if (flour > 0 && !savouryMain && bakeCore >= 0.25 * total) {
     const liquid = g('milk', 'liquid', 'cultured');
-    if (liquid >= 0.8 * flour && g('sugar') < 0.5 * flour) return 'batter';
+    // a pancake, waffle or crêpe batter pours thin: about twice the flour's weight in liquid; a quick bread's
+    // batter (cornbread, muffins, cakes) is thicker and bakes in a pan, as a leavened bake
+    if (liquid >= 1.4 * flour && g('sugar') < 0.5 * flour) return 'batter';
     // rich and dry (cookies, shortbread, pastry): the fat is the dough's structure
     const moisture = liquid + g('fruit', 'vegetable', 'legume');
     if (g('butter-oil') >= 0.5 * flour && moisture < 0.25 * flour) return 'dough';
@@ -52,10 +113,12 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
   const layered = /\b(layer|lasagna|casserole|baked|gratin)\b/i.test(comments);
   const cheese = has('melting-cheese', 'fresh-cheese', 'hard-cheese');
   const wet = g('liquid', 'tomato', 'sauce');
-  // potatoes over a meat filling (a cottage or shepherd's pie); potatoes in a quarter or more of liquid are a stew's
-  const mashedTop = lines.some((l, i) => kinds[i] === 'starch' && /\bpotato/i.test(l.food?.name ?? '')) && has('meat') && wet < 0.25 * total;
+  const mashedTop = mashedPotatoLine(lines, kinds) >= 0;
   // eggs set with milk around bread or fillings in the oven: a strata, quiche or breakfast casserole
   const custard = has('egg') && has('milk', 'cream') && !has('flour') && g('egg', 'milk', 'cream') >= 0.3 * total;
+  // bread dipped in eggs and milk and fried in a buttered pan (French toast) is a griddle dish, not a baked custard
+  const panFried = lines.some((l, i) => kinds[i] === 'butter-oil' && PAN_WORDS.test(l.comment ?? ''));
+  if (custard && panFried && !pieCrust && !layered && !has('meat', 'cured-meat', 'fish')) return 'griddle-saute';
   if (
     custard ||
     pieCrust ||
@@ -85,9 +148,10 @@ function roleOf(
   line: CulinaryLine,
   kind: LineKind,
   dish: DishType,
-  ctx: { hasRoux: boolean; kinds: readonly LineKind[]; sugarIsStructure: boolean; rouxFat: number; riceNotPasta: boolean },
+  ctx: { hasRoux: boolean; kinds: readonly LineKind[]; sugarIsStructure: boolean; rouxFat: number; riceNotPasta: boolean; enrichment: ReadonlySet<number> },
   index: number,
 ): LineFunction {
+  if (ctx.enrichment.has(index)) return 'enrichment';
   const note = `${line.comment ?? ''}`;
   const topping = TOPPING_WORDS.test(note) || TOPPING_WORDS.test(line.phrase);
   const bake = BAKE_TYPES.includes(dish);
@@ -183,6 +247,8 @@ function roleOf(
 
 /** Where the line's food is cooked, from its function, the dish type and the cook's note. */
 export function contextOf(role: LineFunction, dish: DishType, hasRoux: boolean, comment?: string | null): DishContext {
+  // stirred into the hot starch off the boil
+  if (role === 'enrichment') return 'filling';
   if (role === 'topping' || role === 'coating' || TOPPING_WORDS.test(comment ?? '')) return 'topping';
   if (role === 'cooking-fat') return 'griddle-saute';
   if (role === 'fat-for-roux' || role === 'thickener') return 'roux-white-sauce';
@@ -216,24 +282,33 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
   const dishType = inferDishType(lines, kinds);
   const g = (k: LineKind) => gramsBy(lines, kinds, [k]);
   const flourGrams = g('flour');
-  const dairyForSauce = kinds.some((k) => k === 'milk' || k === 'cream' || k === 'liquid');
-  const hasRoux = !BAKE_TYPES.includes(dishType) && flourGrams > 0 && kinds.includes('butter-oil') && dairyForSauce;
-  // the roux fat: butter when there is some, else the first fat
-  const fats = kinds.map((k, i) => (k === 'butter-oil' ? i : -1)).filter((i) => i >= 0);
+  const enrichment = enrichmentLines(lines, kinds, dishType);
+  const dairyForSauce = kinds.some((k, i) => (k === 'milk' || k === 'cream' || k === 'liquid') && !enrichment.has(i));
+  // the roux fat: butter when there is some, else the first fat (not one stirred into a mash)
+  const fats = kinds.map((k, i) => (k === 'butter-oil' && !enrichment.has(i) ? i : -1)).filter((i) => i >= 0);
+  // a roux is wheat flour cooked in fat; cornstarch and the like thicken as a slurry
+  const rouxFlour = lines.some((l, i) => kinds[i] === 'flour' && !SLURRY_STARCH.test(`${l.food?.name ?? ''} ${l.phrase}`));
+  const hasRoux = !BAKE_TYPES.includes(dishType) && rouxFlour && fats.length > 0 && dairyForSauce;
   const rouxFat = fats.find((i) => /^butter\b/i.test(lines[i].food?.name ?? '')) ?? fats[0] ?? -1;
-  // sugar is structure where it outweighs the flour (brownies, pound cake) or melts into chocolate
-  const sugarIsStructure = kinds.includes('chocolate') || g('sugar') >= flourGrams;
+  // sugar is structure where it far outweighs the flour (brownies, angel food) or melts into chocolate;
+  // a cookie's or pound cake's sugar, about the flour's weight, only sweetens: a quarter less still bakes
+  const sugarIsStructure = kinds.includes('chocolate') || g('sugar') >= 1.5 * flourGrams;
   const starchNames = lines.filter((_, i) => kinds[i] === 'starch').map((l) => `${l.phrase} ${l.food?.name ?? ''}`);
   const riceNotPasta = starchNames.some((n) => /\brice\b/i.test(n)) && !starchNames.some((n) => PASTA_WORDS.test(n));
-  const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat, riceNotPasta };
+  const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat, riceNotPasta, enrichment };
   // mince bound with crumbs and egg (a loaf, meatballs) or a breaded piece is shaped into the portion
   const shaped = kinds.includes('meat') && kinds.includes('crumbs') && kinds.includes('egg');
-  const portion = lines.some((l) => PORTION_WORDS.test(`${l.phrase} ${l.comment ?? ''}`));
+  const words = lines.map((l) => `${l.phrase} ${l.comment ?? ''}`);
+  const portion = words.some((w) => PORTION_WORDS.test(w)) || (dishType !== 'simmered-dish' && words.some((w) => BUN_WORDS.test(w)));
   const mixedDish = MIXED_TYPES.includes(dishType) && !shaped && !portion;
-  const browsMeat = !BAKE_TYPES.includes(dishType) && lines.some((l, i) => (kinds[i] === 'meat' || kinds[i] === 'fish') && /\braw\b/i.test(l.food?.name ?? ''));
+  const browsMeat =
+    !BAKE_TYPES.includes(dishType) && lines.some((l, i) => (kinds[i] === 'meat' || kinds[i] === 'fish') && /\b(raw|unprepared)\b/i.test(l.food?.name ?? ''));
+  const mashPotato = dishType === 'assembled-bake' && enrichment.size > 0 ? mashedPotatoLine(lines, kinds) : -1;
   const out = lines.map((line, i) => {
     const role = overrides[i] ?? roleOf(line, kinds[i], dishType, ctx, i);
-    return { kind: kinds[i], role, context: contextOf(role, dishType, hasRoux, line.comment) };
+    // the potatoes of a mashed top are mashed and spread over the filling
+    const context = i === mashPotato && role === 'starch' ? 'topping' : contextOf(role, dishType, hasRoux, line.comment);
+    return { kind: kinds[i], role, context };
   });
   return { dishType, hasRoux, mixedDish, browsMeat, lines: out };
 }
@@ -273,6 +348,7 @@ export const LINE_FUNCTION_WORDS: Record<LineFunction, string> = {
   'fat-for-roux': 'fat for the roux',
   'cooking-fat': 'fat for the pan',
   'baking-fat': 'fat in the bake',
+  enrichment: 'stirred in for richness (a mash, grits)',
   sweetener: 'sweetener',
   starch: 'starch (pasta, bread, potato)',
   vegetable: 'vegetable',

@@ -39,6 +39,7 @@ export function ruleHoldsIn(
   if (rule.functions && !rule.functions.includes(role)) return false;
   if (rule.browning !== undefined && rule.browning !== browsMeat) return false;
   if (rule.recipeHas && !rule.recipeHas.every((k) => recipeKinds.has(k))) return false;
+  if (rule.recipeLacks && rule.recipeLacks.some((k) => recipeKinds.has(k))) return false;
   if (rule.mixedDishOnly && !(mixedDish && role === 'main-protein')) return false;
   if (rule.dishTypes && !rule.dishTypes.includes(dishType)) return false;
   if (rule.contexts.fails?.includes(context)) return false;

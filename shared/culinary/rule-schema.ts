@@ -87,6 +87,8 @@ export const substitutionRuleSchema = z
     functions: z.array(functionEnum).min(1).optional(),
     /** kinds of line the recipe must have, all of them ("crumbs", "egg", "meat": a breaded cutlet) */
     recipeHas: z.array(z.enum(LINE_KINDS)).min(1).optional(),
+    /** kinds of line the recipe must not have ("yeast": oat flour has no gluten to raise a bread) */
+    recipeLacks: z.array(z.enum(LINE_KINDS)).min(1).optional(),
     /**
      * whether the recipe browns raw meat or fish in its pan (DishReading.browsMeat): false — the rule
      * does not hold then (brushing a griddle is too little fat to brown mince); true — only then

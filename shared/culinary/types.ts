@@ -24,6 +24,7 @@ export type LineFunction =
   | 'fat-for-roux'
   | 'cooking-fat'
   | 'baking-fat'
+  | 'enrichment'
   | 'sweetener'
   | 'starch'
   | 'vegetable'
@@ -56,6 +57,7 @@ export const LINE_FUNCTIONS: readonly LineFunction[] = [
   'baking-fat',
   'fat-for-roux',
   'cooking-fat',
+  'enrichment',
   'aromatic',
   'seasoning',
   'salt',

@@ -174,6 +174,8 @@ const GROUND_AFTER = new Set(['freshly', 'finely', 'coarsely']);
 const LEADING_ADJECTIVES = new Set([
   'boneless',
   'skinless',
+  'skin-on',
+  'bone-in',
   'soft',
   'dark',
   'thick',

@@ -175,6 +175,10 @@ export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: 
     if (isFixed(line)) return { line, position, original, fixed: true, slots: [], pruned: [] };
     const G = line.grams;
     const rho = G / line.volumeMl;
+    // A substitute with the very density the catalogue gives the written food (both a role's default,
+    // say, like two cuts of beef) is measured as the line measures its food: it takes the line's own
+    // density (a near food's cup of cubed beef), so a 1:1 swap between them keeps the line's volume.
+    const sameDensity = (c: Candidate) => c.densityGPerMl === original.densityGPerMl;
     const [lo, hi] = keepScaleOf(line);
     const all = line.candidates.flatMap((candidate, j): CandidateSlot[] => {
       if (!usable(candidate)) return [];
@@ -210,7 +214,7 @@ export function lineSlots(lines: RewriteLine[], options: ResolvedOptions, rows: 
           share,
           y: `y_${position}_${key}`,
           above: bandHi > bandLo ? `z_${position}_${key}` : undefined,
-          densityGPerMl: candidate.densityGPerMl,
+          densityGPerMl: sameDensity(candidate) ? rho : candidate.densityGPerMl,
           ratio,
           centreGrams: ratio * share * G,
           lowGrams: bandLo * ratio * share * G,

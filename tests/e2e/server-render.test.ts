@@ -27,6 +27,7 @@ async function signedInContext(options: Parameters<typeof live.browser.newContex
 function watch(page: Page) {
   const consoleLines: string[] = [];
   const api: string[] = [];
+  const styleSheets: string[] = [];
   page.on('console', (m: ConsoleMessage) => {
     if (m.type() === 'error' || m.type() === 'warning') consoleLines.push(`${m.type()}: ${m.text()}`);
   });
@@ -34,8 +35,9 @@ function watch(page: Page) {
   page.on('request', (r) => {
     const url = new URL(r.url());
     if (url.pathname.startsWith('/api/')) api.push(`${r.method()} ${url.pathname}`);
+    if (url.pathname.endsWith('.css')) styleSheets.push(url.pathname);
   });
-  return { consoleLines, api };
+  return { consoleLines, api, styleSheets };
 }
 
 /**
@@ -100,6 +102,9 @@ describe('pages drawn on the server', () => {
     await page.getByRole('button', { name: /analyse/i }).click();
     await expect.poll(() => page.getByText('Energy per serving').first().isVisible(), { timeout: 30_000 }).toBe(true);
     expect(seen.consoleLines).toEqual([]);
+    // the style sheet came in the HTML; the lazy rewrite panel did not fetch it again
+    expect(seen.styleSheets).toEqual([]);
+    expect(await page.locator('link[rel="stylesheet"]').count()).toBe(0);
 
     // A reload brings the recipe back from this tab's storage, which the server cannot know: the
     // browser draws the page over the server's HTML instead of hydrating it, still quietly.

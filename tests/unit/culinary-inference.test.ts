@@ -371,3 +371,80 @@ describe('issue 10 round 3: browning, batter fat, a phyllo lid, corn tortillas o
     expect(inFoodClass(sausage.from, sweet, 'sweet Italian sausage')).toBe(true);
   });
 });
+
+describe('issue 10 round 6: slurries, sloppy joes, quick-bread batters, mashes and grits, sugar that only sweetens', () => {
+  const OIL: Spec = ['vegetable oil', 41, 'Oil, soybean, salad or cooking', '04', ['cooking-fat'], undefined, '04044', 100];
+  const BROTH: Spec = ['beef broth', 120, 'Soup, beef broth or bouillon canned, ready-to-serve', '06', ['broth-stock'], undefined, '06008'];
+  const POTATOES: Spec = ['russet potatoes, peeled', 907, 'Potatoes, russet, flesh and skin, raw', '11', ['potato'], undefined, '11353'];
+  const BUNS: Spec = ['hamburger buns', 264, 'Rolls, hamburger or hotdog, plain', '18', ['bread'], undefined, '18350'];
+  const TOMATO_SAUCE: Spec = ['tomato sauce', 227, 'Tomato products, canned, sauce', '11', ['tomato-sauce']];
+
+  it('cornstarch thickens a stir-fry as a slurry: no roux, so its oil is fat for the pan', () => {
+    const flank: Spec = ['flank steak', 454, 'Beef, flank, steak, lean only, trimmed to 0" fat, choice, raw', '13', ['red-meat'], undefined, '13066', 7];
+    const cornstarch: Spec = ['cornstarch', 16, 'Cornstarch', '20', ['flour'], undefined, '20027'];
+    const broccoli: Spec = ['broccoli florets', 364, 'Broccoli, raw', '11', ['vegetable']];
+    const dish = readDish(recipe(flank, cornstarch, OIL, broccoli, BROTH));
+    expect(dish.hasRoux).toBe(false);
+    expect(dish.lines[2].role).toBe('cooking-fat');
+    // wheat flour with the same fat and broth is a roux
+    expect(readDish(recipe(flank, ['all-purpose flour', 16, FLOUR[2], '20', ['flour']], OIL, broccoli, BROTH)).hasRoux).toBe(true);
+  });
+
+  it('mince simmered in a sauce and spooned onto buns (sloppy joes) is a mixed dish; a burger in a bun is the portion', () => {
+    const joes = readDish(recipe(BEEF, ONION, TOMATO_SAUCE, ['ketchup', 180, 'Catsup', '11', ['condiment']], BUNS));
+    expect(joes.dishType).toBe('simmered-dish');
+    expect(joes.mixedDish).toBe(true);
+    const burgers = readDish(recipe(BEEF, BUNS, CHEDDAR(), SALT));
+    expect(burgers.mixedDish).toBe(false);
+  });
+
+  it('a pancake batter pours with about twice the flour in liquid; a cornbread batter (less liquid) is a quick bread', () => {
+    expect(inferDishType(recipe(FLOUR, MILK(490), EGGS, SUGAR(25), POWDER, SALT))).toBe('batter');
+    const cornmeal: Spec = ['yellow cornmeal', 157, 'Cornmeal, degermed, enriched, yellow', '20', ['flour'], undefined, '20022'];
+    expect(inferDishType(recipe(cornmeal, ['all-purpose flour', 125, FLOUR[2], '20', ['flour']], SUGAR(50), POWDER, MILK(245), BUTTER(76), EGGS))).toBe(
+      'leavened-bake',
+    );
+  });
+
+  it("a mash's butter and milk are stirred in (not a roux), and so are the butter and cream of grits; a stew's fat still browns", () => {
+    const pie = readDish(recipe(BEEF, ONION, ['all-purpose flour', 16, FLOUR[2], '20', ['flour']], BROTH, POTATOES, BUTTER(57), MILK(122), SALT));
+    expect(pie.dishType).toBe('assembled-bake');
+    expect(pie.hasRoux).toBe(false);
+    expect(pie.lines.map((l) => l.role).slice(4, 7)).toEqual(['starch', 'enrichment', 'enrichment']);
+    expect(pie.lines[4].context).toBe('topping');
+    expect(pie.lines[5].context).toBe('filling');
+    const water: Spec = ['water', 947, 'Beverages, water, tap, drinking', '14', ['other']];
+    const grits: Spec = ['quick-cooking grits', 156, 'Cereals, corn grits, white, regular and quick, enriched, dry', '08', ['rice-grain']];
+    const cheeseGrits = readDish(recipe(water, MILK(244), grits, SALT, BUTTER(57), CHEDDAR()));
+    expect(cheeseGrits.lines[4].role).toBe('enrichment');
+    // butter that browns an onion is for the pan, even beside a starch
+    expect(readDish(recipe(water, grits, ONION, BUTTER(28))).lines[3].role).toBe('cooking-fat');
+  });
+
+  it('bread dipped in eggs and milk and fried in a buttered pan (French toast) is a griddle dish; baked in a greased dish it is a custard', () => {
+    const bread: Spec = ['slices white bread', 232, 'Bread, white, commercially prepared', '18', ['bread'], undefined, '18069'];
+    const frenchToast = readDish(
+      recipe(bread, ['large eggs', 200, EGGS[2], '01', ['egg'], undefined, '01123'], MILK(244), SUGAR(25), BUTTER(28, 'for the pan')),
+    );
+    expect(frenchToast.dishType).toBe('griddle-saute');
+    expect(frenchToast.lines[1].role).toBe('main-protein');
+    const strata = readDish(recipe(bread, ['large eggs', 200, EGGS[2], '01', ['egg'], undefined, '01123'], MILK(244), CHEDDAR(), BUTTER(14, 'for the dish')));
+    expect(strata.dishType).toBe('assembled-bake');
+    expect(strata.lines[1].role).toBe('custard');
+  });
+
+  it('raw sausage sold "unprepared" is browned in the pan', () => {
+    const sausage: Spec = ['pork breakfast sausage', 454, 'Pork sausage, link/patty, unprepared', '07', ['sausage'], undefined, '07063', 25];
+    expect(
+      readDish(recipe(sausage, EGGS, ['large flour tortillas', 288, 'Tortillas, ready-to-bake or -fry, flour', '18', ['flatbread-wrap']], CHEDDAR())).browsMeat,
+    ).toBe(true);
+  });
+
+  it("a cookie's sugar, about the flour's weight, only sweetens; it is structure where it is one and a half times the flour or more", () => {
+    const cookies = readDish(recipe(['all-purpose flour', 281, FLOUR[2], '20', ['flour']], BUTTER(227), SUGAR(315), EGGS, SODA, SALT));
+    expect(cookies.dishType).toBe('dough');
+    expect(cookies.lines[2].role).toBe('sweetener');
+    const sugarHeavyCake = readDish(recipe(['all-purpose flour', 200, FLOUR[2], '20', ['flour']], BUTTER(227), SUGAR(300), EGGS, SALT));
+    expect(sugarHeavyCake.lines[2].role).toBe('structure');
+  });
+});

@@ -80,6 +80,14 @@ const NAMED_OTHERWISE: Record<string, string> = {
   'moong dal': 'split mung beans (common practice)',
   'chana dal': 'split chickpeas (common practice)',
   passata: 'sieved tomato purée (common practice)',
+  cornichons: 'small sour pickled gherkins (common practice), SR28 "pickles, cucumber, sour"',
+  mutton: 'meat of a grown sheep; SR28 has it only roasted (Navajo), so raw lamb stands in, flagged',
+  prosciutto: 'dry-cured ham; nearest SR28 food is sliced ham, flagged',
+  savoiardi: 'Italian for ladyfingers',
+  'sparkling water': 'carbonated water, SR28 "club soda"',
+  seltzer: 'as sparkling water',
+  ale: 'a top-fermented beer, SR28 "beer, regular"',
+  poblano: 'a mild green chile (common practice), SR28 "peppers, hot chili, green"',
 };
 
 function keyWords(text: string): Set<string> {

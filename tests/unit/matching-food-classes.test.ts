@@ -81,6 +81,39 @@ describe('foods recipes name otherwise (data/aliases.json)', () => {
     ['1 lb goat meat, cubed', '17168', /^Goat, raw$/],
     ['2 Vidalia onions', '11294', /^Onions, sweet, raw$/],
     ['2 cups shredded roast chicken', '05013', /^Chicken, broilers or fryers, meat only, roasted$/],
+    // halibut without a place is the common Atlantic and Pacific fish, not the Greenland one
+    ['4 (5 oz) halibut fillets', '15036', /^Fish, halibut, Atlantic and Pacific, raw$/],
+    // sticky rice is glutinous rice (common practice)
+    ['4 cups cooked white sticky rice', '20055', /^Rice, white, glutinous, unenriched, cooked$/],
+    ['2 cups sticky rice', '20054', /^Rice, white, glutinous, unenriched, uncooked$/],
+    // snow and sugar snap peas are eaten pod and all: SR28's edible-podded peas, not shelled green peas
+    ['2 large handfuls snow peas, trimmed', '11300', /^Peas, edible-podded, raw$/],
+    ['8 oz sugar snap peas', '11300', /^Peas, edible-podded, raw$/],
+    // the New York strip is the top loin steak (common practice)
+    [
+      '2 boneless New York strip steaks (about 2 pounds total)',
+      '23388',
+      /^Beef, loin, top loin steak, boneless, lip-on, separable lean and fat, trimmed to 1\/8" fat, all grades, raw$/,
+    ],
+    // pudding rice is a short, round grain (common practice), not a rice pudding
+    ['100 g pudding rice', '20052', /^Rice, white, short-grain, enriched, uncooked$/],
+    ['3 tbsp cornichons', '11941', /^Pickles, cucumber, sour$/],
+    // Chinese "light" soy sauce is the thin, regular one (common practice), not a reduced-sodium sauce
+    ['1 tbsp light soy sauce', '16123', /^Soy sauce made from soy and wheat \(shoyu\)$/],
+    ['12 packaged ladyfingers (also called savoiardi)', '18423', /^Cookies, ladyfingers, without lemon juice and rind$/],
+    // a ground vegetable is its powder, as a ground herb is the dried one
+    ['2 tsp ground onion', '02026', /^Spices, onion powder$/],
+    ['3 oz soda water', '14121', /^Beverages, carbonated, club soda$/],
+    // dried minced garlic and onion are SR28's garlic powder and dehydrated onion flakes
+    ['¼ cup dried minced garlic', '02020', /^Spices, garlic powder$/],
+    ['1 tbsp dried minced onion', '11284', /^Onions, dehydrated flakes$/],
+    // a rack is how ribs are sold: "racks of baby back ribs" are SR28's pork backribs
+    ['3 racks of baby back ribs (about 2 pounds each)', '10192', /^Pork, fresh, backribs, separable lean and fat, raw$/],
+    ['3 lb pork spareribs', '10088', /^Pork, fresh, spareribs, separable lean and fat, raw$/],
+    // SR28 has short ribs boneless only; bone-in ones are still short ribs, not a T-bone steak
+    ['4 lb bone-in beef short ribs, cut crosswise', '23128', /^Beef, chuck, short ribs, boneless, separable lean and fat, trimmed to 0" fat, all grades, raw$/],
+    ['1 lb broccoli rabe, trimmed', '11096', /^Broccoli raab, raw$/],
+    ['½ cup ale', '14003', /^Alcoholic beverage, beer, regular, all$/],
   ])('%s → SR28 %s', (input, ndb, sr28) => {
     const l = expectFood(input, ndb, sr28);
     expect(l.checkMatch).toBe(false);
@@ -163,6 +196,131 @@ describe('a state written once belongs to every "or" choice', () => {
   });
 });
 
+describe('a kept form written once belongs to every "or" choice', () => {
+  it('"dried barberries or currants" are dried currants when SR28 has no barberries, never fresh red currants', () => {
+    expect(orChoices('dried barberries or currants').map((w) => w[0])).toEqual(['dried barberries', 'dried currants']);
+    expectFood('¼ cup dried barberries or currants', '09085', /^Currants, zante, dried$/);
+    // two forms offered, or each choice with its own form: nothing is carried over
+    expect(orChoices('dried apricots or fresh figs').map((w) => w[0])).toEqual(['dried apricots', 'fresh figs']);
+    expect(orChoices('fresh or dried curry leaves').flat()).not.toContain('fresh dried curry leaves');
+  });
+});
+
+describe('a preserved form is not the fresh food a bare name means', () => {
+  it('"mackerel fillets" are fresh Atlantic mackerel, not SR28\'s salted mackerel; "salted mackerel" still is', () => {
+    expect(longDesc.get('83110')).toBe('Fish, mackerel, salted');
+    expectFood('2 mackerel fillets', '15046', /^Fish, mackerel, Atlantic, raw$/);
+    expectFood('180 g fresh skin-on mackerel fillets', '15046', /^Fish, mackerel, Atlantic, raw$/);
+    expectFood('2 salted mackerel', '83110', /^Fish, mackerel, salted$/);
+  });
+});
+
+describe('a meat named alone and minced is the ground meat', () => {
+  it('"2 c minced pork" is SR28\'s ground pork, never "Bologna, pork"', () => {
+    expect(longDesc.get('07010')).toBe('Bologna, pork');
+    expectFood('2 cups minced pork', '10219', /^Pork, fresh, ground, raw$/);
+    expectFood('1 lb beef, minced', '23572', /^Beef, ground, 80% lean meat \/ 20% fat, raw$/);
+  });
+
+  it('"on the bone" is bone-in meat, not a fish canned "with bone"', () => {
+    const l = line('1 lamb shoulder on the bone (about 4 1/2 pounds)');
+    expect(l.food?.name).toMatch(/^Lamb, /);
+  });
+});
+
+describe('a chile is a hot pepper', () => {
+  it('"dried red chile peppers" are SR28\'s sun-dried hot chiles, not its freeze-dried sweet red peppers', () => {
+    expect(longDesc.get('11931')).toBe('Peppers, sweet, red, freeze-dried');
+    expectFood('10 dried red chile peppers', '11962', /^Peppers, hot chile, sun-dried$/);
+    expectFood('1 medium chile poblano, stemmed and seeded', '11670', /^Peppers, hot chili, green, raw$/);
+    // a sweet pepper is still one
+    expectFood('1 red bell pepper', '11821', /^Peppers, sweet, red, raw$/);
+  });
+});
+
+describe('the fruit a food is made from is never dropped silently', () => {
+  it('"pomegranate molasses" is no cane molasses: weighed as molasses, flagged, the word named', () => {
+    expect(longDesc.get('19304')).toBe('Molasses');
+    const l = line('1 tsp pomegranate molasses');
+    expect(l.checkMatch).toBe(true);
+    expect(l.warnings.join(' ')).toMatch(/pomegranate/);
+    // the fruit itself is honoured
+    expectFood('¼ cup pomegranate seeds', '09286', /^Pomegranates, raw$/);
+  });
+});
+
+describe('a food phrase with no food word leaves the food to the note', () => {
+  it('"1 c grated, not shredded, parmesan cheese" is parmesan, never "Ham, chopped, not canned"', () => {
+    expect(longDesc.get('07027')).toBe('Ham, chopped, not canned');
+    expectFood('1 cup grated, not shredded, parmesan cheese', '01032', /^Cheese, parmesan, grated$/);
+  });
+
+  it('"2 ⅓ c scooped and leveled, plus 1 tablespoon all-purpose flour" is all-purpose flour', () => {
+    const l = expectFood(
+      '2 ⅓ c scooped and leveled, plus 1 tablespoon all-purpose flour, plus more for kneading',
+      '20081',
+      /^Wheat flour, white, all-purpose, enriched, bleached$/,
+    );
+    expect(l.checkMatch).toBe(false);
+  });
+});
+
+describe('each way of a choice is tried before the next choice', () => {
+  it('"dried adzuki and/or kidney beans" are adzuki beans: "dried adzuki" asks to be checked, "dried adzuki beans" does not', () => {
+    expectFood('¼ cup dried adzuki and/or kidney beans', '16001', /^Beans, adzuki, mature seeds, raw$/);
+  });
+});
+
+describe("a note's other choice, when the catalogue lacks the line's own", () => {
+  it.each([
+    ['2 tbsp jaggery (or substitute light brown sugar)', 'jaggery', '19334', /^Sugars, brown$/],
+    ['2 tbsp colatura di alici (or fish sauce, such as Red Boat)', 'colatura di alici', '06179', /^Sauce, fish, ready-to-serve$/],
+  ])('%s → SR28 %s, flagged', (input, own, ndb, sr28) => {
+    const l = expectFood(input, ndb, sr28);
+    expect(l.grams).toBeGreaterThan(0);
+    expect(l.checkMatch).toBe(true);
+    expect(l.warnings.join(' ')).toContain(`“${own}”`);
+  });
+
+  it("a line whose own food the catalogue has keeps it, unflagged: sour cream is not its note's ricotta", () => {
+    const l = expectFood('1 cup sour cream (or ricotta)', '01056', /^Cream, sour, cultured$/);
+    expect(l.checkMatch).toBe(false);
+  });
+});
+
+describe('the skin a line keeps chooses the food', () => {
+  it('"skin-on, bone-in chicken thighs" are thighs with their skin, not SR28\'s chicken skin alone', () => {
+    expect(longDesc.get('05015')).toBe('Chicken, broilers or fryers, skin only, raw');
+    const l = expectFood('8 skin-on, bone-in chicken thighs', '05091', /^Chicken, broilers or fryers, thigh, meat and skin, raw$/);
+    // USDA SR28 05091 "1 thigh with skin" 193 g
+    expect(l.grams).toBeCloseTo(8 * 193, 0);
+  });
+
+  it('"with skin and bone" after the comma asks for the meat-and-skin breast, not the skinless one', () => {
+    expectFood('4 chicken breast halves, with skin and bone, about 8 ounces each', '05057', /^Chicken, broilers or fryers, breast, meat and skin, raw$/);
+    // without it, a chicken breast is the skinless, boneless one recipes mean
+    expectFood('4 chicken breast halves', '05062', /^Chicken, broiler or fryers, breast, skinless, boneless, meat only, raw$/);
+  });
+});
+
+describe('a piece word says how a food comes, not which food it is', () => {
+  it('"cobs of corn" and "corn on the cob" are fresh sweet corn, not SR28\'s frozen "kernels on cob"', () => {
+    expect(longDesc.get('11180')).toBe('Corn, sweet, yellow, frozen, kernels on cob, unprepared');
+    const l = expectFood('2 cobs of corn, sliced into 1-inch rounds', '11167', /^Corn, sweet, yellow, raw$/);
+    // USDA SR28 11167 "1 ear, medium (6-3/4" to 7-1/2" long)" 102 g
+    expect(l.grams).toBeCloseTo(204, 0);
+    expectFood('4 corn on the cob', '11167', /^Corn, sweet, yellow, raw$/);
+  });
+});
+
+describe('a coating named otherwise', () => {
+  it('"chocolate-covered raisins" are SR28\'s chocolate coated raisins, not plain raisins', () => {
+    const l = expectFood('2 cups chocolate-covered raisins, roughly chopped', '19127', /^Candies, milk chocolate coated raisins$/);
+    // USDA SR28 19127 "1 cup" 180 g
+    expect(l.grams).toBeCloseTo(360, 0);
+  });
+});
+
 describe('a packing medium is not a food', () => {
   it('"crushed pineapple with juice" is the canned fruit, not pineapple juice', () => {
     expect(longDesc.get('09354')).toBe('Pineapple, canned, juice pack, drained');
@@ -186,6 +344,14 @@ describe('foods SR28 lacks, weighed as their nearest food and flagged', () => {
     ['½ cup crème fraîche', 'creme fraiche', '01056', /^Cream, sour, cultured$/],
     ['½ cup Mexican crema', 'mexican crema', '01056', /^Cream, sour, cultured$/],
     ['4 brioche buns', 'brioche buns', '18350', /^Rolls, hamburger or hotdog, plain$/],
+    // SR28's one mutton food is roasted (35141, Navajo): raw lamb is the nearest raw meat of a sheep
+    [
+      '3 lb mutton, trimmed and cut in small pieces',
+      'mutton',
+      '17001',
+      /^Lamb, domestic, composite of trimmed retail cuts, separable lean and fat, trimmed to 1\/4" fat, choice, raw$/,
+    ],
+    ['3 oz prosciutto, thinly sliced', 'prosciutto', '07029', /^Ham, sliced, regular \(approximately 11% fat\)$/],
   ])('%s → SR28 %s, "check this match"', (input, phrase, ndb, sr28) => {
     const l = expectFood(input, ndb, sr28);
     expect(l.checkMatch).toBe(true);

@@ -214,6 +214,8 @@ describe('bunches, sprigs and other pieces SR28 does not weigh get an honest wei
     expect(arugula.grams).toBeCloseTo(2 * sr28('11959', /^cup$/), 6);
     expect(arugula.warnings.join(' ')).toMatch(/handful/);
     expect(line('a handful of pistachios').grams).toBeCloseTo(sr28('12151', /^cup$/) / 4, 6);
+    // taken before it is cut: a loose cup of whole leaves, USDA SR28 02044 basil "0.25 cup leaves, whole" 6 g, never its chopped cup
+    expect(line('small handful of basil leaves, finely chopped').grams).toBeCloseTo(sr28('02044', /^cup leaves, whole$/), 6);
   });
 
   it('a whole squash, a head of savoy or radicchio and a loaf of French bread weigh their sourced rows', () => {
@@ -328,6 +330,16 @@ describe("airy foods weigh by their own or a near food's cup, not a role default
     expect(line('2 cups shredded reduced-fat mozzarella').grams).toBeCloseTo(2 * sr28('01029', /^cup, shredded$/), 6);
   });
 
+  it('a dry mix or powder never borrows the cup of the same food made up with milk or water', () => {
+    // USDA SR28 19203 (instant vanilla pudding prepared with whole milk) ".5 cup" 142 g is ~1.2 g/mL; the dry mix is
+    // not that food: it keeps its role density and says so
+    const mix = line('3 tbsp instant vanilla pudding mix');
+    expect(mix.food?.sourceId).toBe('19202');
+    expect(mix.portionUsed ?? '').not.toMatch(/prepared/);
+    expect(mix.grams).toBeLessThan((3 / 16) * sr28('19203', /^cup$/) * 0.9); // 3 tbsp = 3/16 cup (NIST Handbook 44)
+    expect(mix.warnings.join(' ')).toMatch(/usual density/);
+  });
+
   it("raw cashews (weighed by SR28 only by the ounce) take other cashews' cups, never a spoon of coconut cream", () => {
     // USDA SR28 WEIGHT.txt 12086 oil-roasted cashews "cup, whole" (129 g); 12085 dry-roasted "tbsp" (8.6 g)
     expect(line('1 cup raw cashews').grams).toBeCloseTo(sr28('12086', /^cup, whole$/), 6);
@@ -420,6 +432,136 @@ describe('pieces, spices and words a cook writes (classes found in the unlabelle
   });
 });
 
+describe('pieces of another size, leaves, lengths and splashes (weighing, issue #11)', () => {
+  it("a slice of French bread is a slice of a medium loaf, a baguette slice a baguette's, never SR28's 139 g slice", () => {
+    // USDA SR28 WEIGHT.txt 18029 "slice" is 139 g (a slice of a large loaf); the sourced curated row
+    // that replaces it is SR28 18030 (the same bread toasted) "slice, medium" with its water put back.
+    expect(sr28('18029', /^slice$/)).toBe(139);
+    const toastedMedium = sr28('18030', /^slice, medium$/);
+    // USDA SR28 water: 33 g/100 g in 18029, 20.61 g/100 g in 18030
+    expect(curatedGrams('18029', 'slice')).toBeCloseTo((toastedMedium * (100 - 20.61)) / (100 - 33), 0);
+    expect(line('2 slices sourdough bread').grams).toBeCloseTo(2 * curatedGrams('18029', 'slice'), 6);
+    // *common practice* (from memory): a baguette slice is about 10 g; the line's "baguette" picks that piece
+    for (const input of ['12 baguette slices', '12 slices baguette']) {
+      const l = line(input);
+      expect(l.food?.sourceId, input).toBe('18029');
+      expect(l.grams, input).toBeCloseTo(12 * curatedGrams('18029', 'slice, baguette'), 6);
+      expect(l.grams, input).toBeLessThan(12 * 20);
+    }
+    expect(line('1 baguette').grams).toBeCloseTo(curatedGrams('18029', 'baguette'), 6);
+  });
+
+  it('bay leaves, a kabocha squash and a head of napa cabbage weigh sourced rows, never 0 g', () => {
+    // *common practice* rows of data/curated-portions.json: a bay leaf next to SR28 02004 "1 tsp, crumbled";
+    // a winter squash by the butternut sizes (SR28 11485 rows); napa by SR28 11109's medium head
+    const bay = line('2 bay leaves');
+    expect(bay.food?.sourceId).toBe('02004');
+    expect(bay.grams).toBeCloseTo(2 * curatedGrams('02004', 'leaf'), 6);
+    const kabocha = line('½ kabocha squash');
+    expect(kabocha.grams).toBeCloseTo(0.5 * curatedGrams('11643', 'medium'), 6);
+    expect(kabocha.warnings.join(' ')).toMatch(/No size given/);
+    expect(line('0.5 head napa cabbage, cut into quarters').grams).toBeCloseTo(0.5 * curatedGrams('11119', 'head'), 6);
+  });
+
+  it('a piece of stated length weighs its inches: "1 4-inch piece ginger", "1 (3-inch) cinnamon stick"', () => {
+    // *common practice* "1 inch" rows of data/curated-portions.json, built on USDA SR28 11216 slices and 02010 "1 tsp"
+    expect(line('1 4-inch piece fresh ginger, peeled').grams).toBeCloseTo(4 * curatedGrams('11216', 'inch'), 6);
+    expect(line('1 1-inch piece fresh ginger, peeled and minced').grams).toBeCloseTo(curatedGrams('11216', 'inch'), 6);
+    expect(line('1 3-inch piece Mexican cinnamon').grams).toBeCloseTo(3 * curatedGrams('02010', 'inch'), 6);
+    expect(line('1 (3-inch) cinnamon stick').grams).toBeCloseTo(3 * curatedGrams('02010', 'inch'), 6);
+    const twoInches = line('2-inch piece of ginger, peeled and minced');
+    expect(twoInches.grams).toBeCloseTo(2 * curatedGrams('11216', 'inch'), 6);
+    expect(twoInches.warnings.join(' ')).not.toMatch(/inch weight/);
+    // a piece of no stated length is an inch, and the cook is told
+    const piece = line('1 piece fresh ginger, peeled');
+    expect(piece.grams).toBeCloseTo(curatedGrams('11216', 'inch'), 6);
+    expect(piece.warnings.join(' ')).toMatch(/No length given/);
+    // a piece of a food sold by the stick is a stick (curated 02010 "stick", *common practice*)
+    expect(line('1 piece cassia').grams).toBeCloseTo(curatedGrams('02010', 'stick'), 6);
+    expect(line('½ piece cinnamon stick (optional)').grams).toBeCloseTo(curatedGrams('02010', 'stick') / 2, 6);
+  });
+
+  it('a smaller kind of a food weighs its own piece: baby bok choy, baby and fingerling potatoes', () => {
+    // *common practice* rows of data/curated-portions.json (from memory); USDA SR28 11116 "1 head" (840 g) is a full-grown head
+    const bokChoy = line('4 baby bok choy, split');
+    expect(bokChoy.food?.sourceId).toBe('11116');
+    expect(bokChoy.grams).toBeCloseTo(4 * curatedGrams('11116', 'head, baby'), 6);
+    expect(line('2 heads bok choy').grams).toBeCloseTo(2 * sr28('11116', /^head$/), 6);
+    const fingerlings = line('12 md fingerling potatoes');
+    expect(fingerlings.grams).toBeCloseTo(12 * curatedGrams(fingerlings.food!.sourceId, 'fingerling'), 6);
+    expect(line('12 baby potatoes').grams).toBeCloseTo(12 * curatedGrams('11352', 'baby'), 6);
+    // a line without the word never takes the smaller piece: USDA SR28 11352 "Potato medium"
+    expect(line('3 medium potatoes').grams).toBeCloseTo(3 * sr28('11352', /^Potato medium/), 6);
+  });
+
+  it('a sized count is the whole food, never one slice of it: "1 md kohlrabi"', () => {
+    // USDA SR28 11241 has only "1 cup" and "1 slice" (16 g); the medium bulb is a *common practice* curated row
+    expect(sr28('11241', /^slice$/)).toBe(16);
+    expect(line('1 md kohlrabi').grams).toBeCloseTo(curatedGrams('11241', 'medium'), 6);
+  });
+
+  it('whole spices, a celery root and a rack of ribs weigh sourced rows, never 0 g', () => {
+    // *common practice* rows (from memory) next to USDA SR28 02030 "1 tsp, whole" and 02001 "1 tsp"
+    expect(line('~7 whole black peppercorns').grams).toBeCloseTo(7 * curatedGrams('02030', 'peppercorn'), 6);
+    expect(line('5 allspice berries').grams).toBeCloseTo(5 * curatedGrams('02001', 'berry'), 6);
+    expect(line('½ celery root').grams).toBeCloseTo(0.5 * curatedGrams('11141', 'medium'), 6);
+    expect(line('2 full racks baby back pork ribs').grams).toBeCloseTo(2 * curatedGrams('10192', 'rack'), 6);
+  });
+
+  it('an herb counted by the stem or stalk weighs sprigs; a bundle is a bunch (*common practice*)', () => {
+    expect(line('3 stalks fresh mint, leaves plucked').grams).toBeCloseTo(3 * curatedGrams('02065', 'sprig'), 6);
+    expect(line('1 bundle asparagus (10-15 spears), chopped').grams).toBeCloseTo(curatedGrams('11011', 'bunch'), 6);
+  });
+
+  it('a can of no stated size is the usual can, and the cook is told its size: "1 can diced tomatoes"', () => {
+    // USDA SR28 11531 "can" is 190 g; the curated row replacing it is the 14.5 oz can (NIST Handbook 44, *common practice*)
+    expect(sr28('11531', /^can$/)).toBe(190);
+    const tomatoes = line('1 can diced tomatoes');
+    expect(tomatoes.food?.sourceId).toBe('11531');
+    expect(tomatoes.grams).toBeCloseTo(curatedGrams('11531', 'can'), 6);
+    expect(curatedGrams('11531', 'can')).toBeCloseTo(14.5 * OZ, 0);
+    expect(tomatoes.warnings.join(' ')).toMatch(/No can size given/);
+    // a size in the line is the can's, with nothing to tell (NIST Handbook 44)
+    const sized = line('1 (14.5 oz) can diced tomatoes');
+    expect(sized.grams).toBeCloseTo(14.5 * OZ, 6);
+    expect(sized.warnings.join(' ')).not.toMatch(/size given/);
+    // cream cheese by the package or block is the 8 oz brick (curated, *common practice*), not SR28 01017's small 3 oz package
+    expect(sr28('01017', /^package, small/)).toBe(85);
+    for (const input of ['1 package cream cheese', '1 block cream cheese']) {
+      const l = line(input);
+      expect(l.grams, input).toBeCloseTo(8 * OZ, 1);
+      expect(l.warnings.join(' '), input).toMatch(/size given/);
+    }
+    expect(line('1 (8 oz.) block cream cheese, softened').grams).toBeCloseTo(8 * OZ, 6);
+    // USDA SR28 16426 firm tofu "0.25 block" 81 g
+    expect(line('1 block firm tofu').grams).toBeCloseTo(sr28('16426', /^block$/), 6);
+    // USDA SR28 11546 "can (6 oz)" 170 g: the can weighed is named
+    expect(line('1 can tomato paste').warnings.join(' ')).toMatch(/weighed as 1 can \(6 oz\)/);
+  });
+
+  it('powders and seeds SR28 weighs only by the ounce or envelope take a sourced spoon, not a role density', () => {
+    // USDA SR28 19177 "envelope (1 tbsp)" 7 g; chia and vital wheat gluten: *common practice* rows (from memory)
+    expect(sr28('19177', /^envelope \(1 tbsp\)$/)).toBe(7);
+    const gelatin = line('2 ½ tsp gelatin');
+    expect(gelatin.grams).toBeCloseTo((2.5 / 3) * curatedGrams('19177', 'tbsp'), 6); // 3 tsp = 1 tbsp (NIST Handbook 44)
+    expect(gelatin.warnings.join(' ')).not.toMatch(/usual density/);
+    expect(line('2 tbsp chia seeds').grams).toBeCloseTo(2 * curatedGrams('12006', 'tbsp'), 6);
+    expect(line('3 c vital wheat gluten').grams).toBeCloseTo(3 * curatedGrams('48052', 'cup'), 6);
+  });
+
+  it('a splash is ½ tbsp (¼ fl oz, *common practice*, from memory), said in a warning, never 0 g', () => {
+    // USDA SR28 WEIGHT.txt 04053 olive oil "tablespoon" 13.5 g
+    const oil = line('a splash of extra-virgin olive oil');
+    expect(oil.food?.sourceId).toBe('04053');
+    expect(oil.grams).toBeCloseTo(sr28('04053', /^tablespoon$/) / 2, 1);
+    expect(oil.warnings.join(' ')).toMatch(/splash/);
+    // a drizzle is 1 tbsp (*common practice*, from memory)
+    const drizzle = line('Drizzle of olive oil');
+    expect(drizzle.grams).toBeCloseTo(sr28('04053', /^tablespoon$/), 1);
+    expect(drizzle.warnings.join(' ')).toMatch(/drizzle/);
+  });
+});
+
 describe('the hand-labelled lines (tests/reference/labelled-lines)', () => {
   const answer = (input: string) => {
     const l = line(input);
@@ -434,14 +576,18 @@ describe('the hand-labelled lines (tests/reference/labelled-lines)', () => {
   };
 
   it('hold their measured accuracy (acceptable food and grams within 15 %), minus noise', () => {
-    const [first, second] = HAND_LABELLED_BATCHES;
+    const [first, second, third] = HAND_LABELLED_BATCHES;
     expect(readHandLabelledLines(first.file).length + readHandLabelledLines(second.file).length).toBeGreaterThanOrEqual(500);
+    expect(readHandLabelledLines(third.file).length).toBe(160);
     // npm run bench prints each figure. Batch 1 measured 100 % tune, 90.0 % held-out (a line is 0.6 %
-    // of a half); batch 2 measured 99.0 % tune, 87.0 % held-out (a line is 1 % of a half).
+    // of a half); batch 2 measured 99.0 % tune, 87.0 % held-out (a line is 1 % of a half); batch 3
+    // measured 96.3 % tune, 87.5 % held-out (a line is 1.25 % of a half).
     expect(both(first.file, 'tune').share).toBeGreaterThanOrEqual(0.99);
     expect(both(first.file, 'held-out').share).toBeGreaterThanOrEqual(0.88);
     expect(both(second.file, 'tune').share).toBeGreaterThanOrEqual(0.97);
     expect(both(second.file, 'held-out').share).toBeGreaterThanOrEqual(0.85);
+    expect(both(third.file, 'tune').share).toBeGreaterThanOrEqual(0.93);
+    expect(both(third.file, 'held-out').share).toBeGreaterThanOrEqual(0.85);
   });
 
   it('took no fallback while weighing all of the above', () => {

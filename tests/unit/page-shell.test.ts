@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { createClientShell, fillShell, stylesFirst } from '../../server/lib/client-shell';
+import { createClientShell, fillShell, inlineStyles, preloadFonts, stylesFirst } from '../../server/lib/client-shell';
 import { PAGE_STATE_ID } from '../../shared/page-render';
 
 const BUILT = `<!doctype html>
@@ -28,6 +28,41 @@ describe('the page shell', () => {
     expect(sheet).toBeLessThan(html.indexOf('<script type="module"'));
     expect(sheet).toBeLessThan(html.indexOf('modulepreload'));
     expect(html.match(/rel="stylesheet"/g)).toHaveLength(1);
+  });
+
+  it('writes the entry’s style sheet into the head, ahead of the scripts, and leaves a sheet it cannot find as a link', () => {
+    const dir = mkdtempSync(path.join(tmpdir(), 'client-shell-'));
+    mkdirSync(path.join(dir, 'assets'));
+    writeFileSync(path.join(dir, 'assets', 'index-C3.css'), 'body{color:red}');
+    const html = inlineStyles(stylesFirst(BUILT), dir);
+    expect(html).toContain('<style>body{color:red}</style>');
+    expect(html).not.toContain('index-C3.css');
+    expect(html.indexOf('<style>')).toBeLessThan(html.indexOf('<script type="module"'));
+    const missing = inlineStyles(BUILT, mkdtempSync(path.join(tmpdir(), 'client-shell-')));
+    expect(missing).toContain('<link rel="stylesheet" crossorigin href="/assets/index-C3.css">');
+  });
+
+  it('keeps a sheet that holds "</style" as a link (it would end the element early)', () => {
+    const dir = mkdtempSync(path.join(tmpdir(), 'client-shell-'));
+    mkdirSync(path.join(dir, 'assets'));
+    writeFileSync(path.join(dir, 'assets', 'index-C3.css'), 'a::after{content:"</style>"}');
+    expect(inlineStyles(BUILT, dir)).toContain('href="/assets/index-C3.css"');
+  });
+
+  it('preloads the woff2 face of each weight asked for, once, and no other', () => {
+    const faces =
+      '<meta charset="UTF-8" /><style>' +
+      '@font-face{font-family:Nunito;font-weight:400;src:url(/assets/n-400-A.woff2)format("woff2"),url(/assets/n-400-A.woff)format("woff")}' +
+      '@font-face{font-family:Nunito;font-weight:600;src:url(/assets/n-600-B.woff2)format("woff2")}' +
+      '@font-face{font-family:Nunito;font-weight:800;src:url(/assets/n-800-C.woff2)format("woff2")}</style>';
+    const html = preloadFonts(faces, [400, 800]);
+    const links = html.match(/<link rel="preload" as="font" type="font\/woff2" crossorigin href="[^"]+">/g);
+    expect(links).toEqual([
+      '<link rel="preload" as="font" type="font/woff2" crossorigin href="/assets/n-400-A.woff2">',
+      '<link rel="preload" as="font" type="font/woff2" crossorigin href="/assets/n-800-C.woff2">',
+    ]);
+    expect(html.indexOf('rel="preload"')).toBeLessThan(html.indexOf('<style>'));
+    expect(preloadFonts(BUILT, [400])).toBe(BUILT);
   });
 
   it('preloads a page’s own chunks once and never repeats the entry’s style sheet or scripts', () => {

