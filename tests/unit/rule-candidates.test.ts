@@ -482,4 +482,25 @@ describe('issue 10 round 6: lean cuts, a lamb pie and its mash, cookie dough, qu
     );
     expect(byRule(casserole.lines[2], 'cream-of-chicken-to-reduced-sodium')[0].band).toEqual([1, 1]);
   });
+  it('flour tortillas go to corn on the griddle in a quesadilla, but not round scrambled eggs: a breakfast burrito is rolled, and a large corn tortilla cracks', () => {
+    const quesadillas = [
+      at('18364', 'large flour tortillas', 288),
+      at('05114', 'shredded cooked chicken', 280),
+      at('01009', 'shredded cheddar cheese', 226),
+      at('04053', 'olive oil', 14),
+    ];
+    const q = recipeCandidates(engine, quesadillas, none());
+    expect(q.dishType).toBe('griddle-saute');
+    expect(byRule(q.lines[0], 'flour-tortillas-to-corn-on-griddle').map((c) => c.name)).toEqual(['Tortillas, ready-to-bake or -fry, corn']);
+    const burritos = [
+      at('07065', 'pork breakfast sausage', 454),
+      at('01123', 'large eggs', 400),
+      at('01001', 'butter', 14),
+      at('01009', 'shredded cheddar cheese', 170),
+      at('18364', 'large flour tortillas', 432),
+    ];
+    const b = recipeCandidates(engine, burritos, none());
+    expect(b.dishType).toBe('griddle-saute');
+    expect(byRule(b.lines[4], 'flour-tortillas-to-corn-on-griddle')).toEqual([]);
+  });
 });
