@@ -503,16 +503,19 @@ function secondAmount(s: LineState): void {
     const nextKind = next.kind;
     const consumedLength = s.description.length - s.description.replace(/^(?:plus|\+|and)\s+/i, '').length + next.text.length;
     // "1 stick plus 2 tablespoons butter": a stick of butter is 8 tbsp (½ cup, *common practice*).
-    const stickPlus = s.unit === 'stick' && /^(?:plus|\+|and)\s+/i.test(s.description) && nextKind === 'volume';
+    const connected = /^(?:plus|\+|and)\s+/i.test(s.description);
+    const stickPlus = s.unit === 'stick' && connected && nextKind === 'volume';
     if ((((kind === 'mass' || kind === 'volume') && nextKind === kind && s.unit) || stickPlus) && s.quantity2 === null) {
       const first = stickPlus ? { quantity: s.quantity * TBSP_PER_STICK, unit: 'tbsp' } : { quantity: s.quantity, unit: s.unit! };
-      const sum = addAmounts(first, next.amount);
+      // "1 tbsp 1 tablespoon whiskey": the same amount written twice, once abbreviated, is one amount.
+      const restated = !connected && next.amount.unit === first.unit && Math.abs(next.amount.quantity - first.quantity) < 1e-9;
+      const sum = restated ? first : addAmounts(first, next.amount);
       if (sum) {
         s.quantity = sum.quantity;
         s.unit = sum.unit;
         s.unitText = `${s.unitText} ${s.description.slice(0, consumedLength).trim()}`;
         s.description = s.description.slice(consumedLength).trim();
-        s.flags.push('compound');
+        if (!restated) s.flags.push('compound');
       }
     } else if (s.unit === null || kind === 'count') {
       if (nextKind === 'mass' || nextKind === 'volume') {

@@ -18,6 +18,7 @@ import { inchesOf, parseMeasure, sizeWordOf, stem, type MeasureInfo, type SizeWo
 import { words } from './normalise-phrase';
 import { singular } from './singular';
 import { isDrainedSolids } from './drained-share';
+import { orChoices } from './or-choices';
 
 export interface WeighedLine {
   grams: number;
@@ -51,6 +52,8 @@ const NEUTRAL_UNLESS_SPICE = new Set([...NEUTRAL_QUALIFIERS].filter((q) => q !==
 const SPICE_GROUP = '02';
 /** Qualifiers whose cut sizes pack alike in a cup. */
 const CUT_SMALL = new Set(['chop', 'dice', 'mince', 'cube']);
+/** Grated and shredded are one cut in a cook's cup: the box grater's coarse holes (*common practice*). */
+const GRATED = new Set(['grate', 'shred']);
 /** Pieces of a food, never what a bare count ("2 onions") means. */
 const SUB_PIECES = new Set([
   'slice',
@@ -149,6 +152,7 @@ function bestVolumePortion(all: ReadPortion[], parsed: ParsedLine, unit: string 
   // A spice is measured ground ("1 tsp, ground"); nuts ground are a preparation the line must ask for.
   const neutral = !food || food.foodGroup === SPICE_GROUP ? NEUTRAL_QUALIFIERS : NEUTRAL_UNLESS_SPICE;
   const prepCut = [...prep].some((s) => CUT_SMALL.has(s));
+  const prepGrated = [...prep, ...name].some((s) => GRATED.has(s));
   let best: { r: ReadPortion; gPerMl: number; score: number } | null = null;
   for (const r of all) {
     const ml = portionMl(r);
@@ -159,6 +163,7 @@ function bestVolumePortion(all: ReadPortion[], parsed: ParsedLine, unit: string 
     for (const q of r.info.qualifiers) {
       if (prep.has(q)) fit = Math.max(fit, 2);
       else if (prepCut && CUT_SMALL.has(q)) fit = Math.max(fit, 1.5);
+      else if (prepGrated && GRATED.has(q)) fit = Math.max(fit, 1.5);
       else if (name.has(q)) fit = Math.max(fit, 1);
       else if (neutral.has(q)) continue;
       else misfit += q === 'pack' ? 0.2 : 0.5;
@@ -176,14 +181,50 @@ interface CountAsk {
   size: SizeWord | null;
   piece: string | null;
   diameter: number | null;
+  /** "3 thin slices of tomato": the thickness a counted slice asks for */
+  thickness: 'thin' | 'thick' | null;
+  /** the words of the choice the food was matched from, when the line names several ("bird's eye chile or serrano chile") */
+  choiceWords: Set<string> | null;
 }
 
-function countAsk(parsed: ParsedLine): CountAsk {
+/** "3 thin slices", "1 thick slice", "2 thinly cut slices": the thickness written before the slices. */
+const SLICE_THICKNESS = /\b(thin|thick)(?:ly)?(?:\s+(?:cut|sliced))?\s+(?:slices?|rounds?)\b/i;
+
+const THICKNESS_WORD = { thin: /\bthin\b/i, thick: /\bthick\b/i } as const;
+const THICKNESS_SIZE = { thin: 'small', thick: 'large' } as const;
+
+/**
+ * How well a slice portion fits a thin or thick slice: SR28 names the thickness ("slice, thin/small",
+ * "slice, thick/large (1/2" thick)"), or gives slices of stated thickness by size ("slice, large (1/4" thick)").
+ */
+function thicknessFit(r: ReadPortion, thickness: 'thin' | 'thick'): number {
+  const measure = r.portion.measure;
+  if (THICKNESS_WORD[thickness].test(measure.replace(/\([^)]*\)?/g, ' '))) return 2.5;
+  return /"\s*thick\b/i.test(measure) && r.info.size === THICKNESS_SIZE[thickness] ? 2 : 0;
+}
+
+/** The words of the line's choice that names the food best: a kind of another choice is not this food's piece. */
+function matchedChoiceWords(parsed: ParsedLine, food: CatalogueFood | null): Set<string> | null {
+  const choices = food && parsed.name ? orChoices(parsed.name) : [];
+  if (!food || choices.length < 2) return null;
+  const foodWords = new Set(words(food.name).map(singular));
+  let best: { words: string[]; shared: number } | null = null;
+  for (const ways of choices) {
+    const ws = words(ways[0]).map(singular);
+    const shared = ws.filter((w) => foodWords.has(w)).length;
+    if (!best || shared > best.shared) best = { words: ws, shared };
+  }
+  return best ? new Set(best.words) : null;
+}
+
+function countAsk(parsed: ParsedLine, food: CatalogueFood | null): CountAsk {
   const unit = parsed.unit;
   const size = (unit && SIZE_UNITS.has(unit) ? sizeWordOf(unit) : null) ?? sizeWordOf(parsed.sizeText);
   const piece = unit && !SIZE_UNITS.has(unit) && unitKind(unit) === 'count' ? unit : null;
   const diameter = inchesOf(parsed.sizeText);
-  return { size, piece, diameter };
+  const thick = piece === 'slice' ? SLICE_THICKNESS.exec(parsed.input) : null;
+  const thickness = thick ? (thick[1].toLowerCase() as 'thin' | 'thick') : null;
+  return { size, piece, diameter, thickness, choiceWords: matchedChoiceWords(parsed, food) };
 }
 
 const SIZE_PREFERENCE: Record<SizeWord, number> = {
@@ -206,7 +247,6 @@ const CUT_PIECES = new Set([
   'cubic',
   'spear',
   'floret',
-  'floweret',
   'leaf',
   'sprig',
   'pat',
@@ -216,8 +256,11 @@ const CUT_PIECES = new Set([
   'segment',
 ]);
 
-/** Words for a smaller kind of a food, each weighed by its own portion: "baby bok choy", "fingerling potatoes", "baguette slices". */
-const SMALLER_KINDS = new Set(['baby', 'fingerling', 'baguette']);
+/**
+ * Words for a kind of a food with its own piece, weighed by that portion only when the line names it:
+ * "baby bok choy", "fingerling potatoes", "baguette slices", "romaine hearts", "habanero", "Thai chiles".
+ */
+const SMALLER_KINDS = new Set(['baby', 'fingerling', 'baguette', 'heart', 'habanero', 'bonnet', 'fresno', 'thai', 'bird']);
 
 /** Piece words that mean the food itself when a recipe counts it: "1 fruit" is one lemon. */
 const WHOLE_PIECES = new Set(['whole', 'fruit', 'each', 'item', 'medium', 'large', 'small']);
@@ -243,8 +286,12 @@ const NAME_PIECE_SYNONYMS: Record<string, string> = { bun: 'roll', roll: 'bun' }
 /** A counted unit SR28 may not name, weighed as the whole food when no portion names it: "4 stalks scallions". */
 const WHOLE_FOOD_UNITS = new Set(['stalk', 'ear', 'whole']);
 
+/** SR28's other spellings of a piece: "1 floweret" of cauliflower is a floret. */
+const PIECE_SPELLINGS: Record<string, string> = { floweret: 'floret' };
+
 /** A piece word as units.ts spells it: "packet" → "package", "ribs" → "stalk". */
 function pieceId(word: string): string {
+  if (PIECE_SPELLINGS[word]) return PIECE_SPELLINGS[word];
   const unit = normaliseUnit(word);
   return unit && unitKind(unit) === 'count' ? unit : word;
 }
@@ -276,7 +323,7 @@ function scoreCountPortions(
     let score = 0;
     // A smaller kind of the food ("1 head, baby" of bok choy) fits only a line that names it, and then best.
     const kind = pieces.find((p) => SMALLER_KINDS.has(p));
-    if (kind !== undefined && !nameWords.has(kind)) continue;
+    if (kind !== undefined && !(ask.choiceWords ?? nameWords).has(kind)) continue;
     if (kind !== undefined) score += 5;
     if (ask.piece) {
       if (pieces.includes(ask.piece)) score += 4;
@@ -287,7 +334,8 @@ function scoreCountPortions(
       if (pieces.includes('piece') && pieces.every((p) => p === 'piece' || WHOLE_PIECES.has(p))) score -= 0.5;
       // "1 md kohlrabi": a size word is the whole food's, never one slice of it.
       else if (ask.size && pieces.some((p) => CUT_PIECES.has(p)) && !pieces.some((p) => named(p, nameWords))) continue;
-      else score -= 3;
+      // "2 romaine lettuce": a head is the whole food, its leaves the least likely piece.
+      else score -= pieces.includes('leaf') ? 3.5 : 3;
     }
     if (ask.size) {
       if (r.info.size === ask.size) score += 3;
@@ -297,6 +345,7 @@ function scoreCountPortions(
     else if (r.info.size) score += SIZE_PREFERENCE[r.info.size];
     // USDA's unsized piece named like the food ("1 tortilla") is its usual one.
     else score += pieces.length > 0 && pieces.every((p) => named(p, nameWords)) ? 1.6 : 1;
+    if (ask.thickness) score += thicknessFit(r, ask.thickness);
     if (ask.diameter !== null) {
       const d = r.info.diameter;
       if (d) {
@@ -313,12 +362,14 @@ function scoreCountPortions(
   else if (ask.diameter !== null) {
     const d = chosen.info.diameter;
     guessed = !d || ask.diameter < d.lo - 0.5 || ask.diameter > d.hi + 0.5;
-  } else if (ask.piece !== null) guessed = chosen.info.size !== null;
+  } else if (ask.piece !== null) guessed = chosen.info.size !== null && !(ask.thickness && thicknessFit(chosen, ask.thickness) > 0);
   else {
     // "2 chicken breasts" weighed as "1 piece": a portion the line did not name.
-    const isNamed = chosen.info.pieces.every((p) => WHOLE_PIECES.has(p) || named(p, nameWords));
+    const isNamed = chosen.info.pieces.map(pieceId).every((p) => WHOLE_PIECES.has(p) || named(p, nameWords));
     guessed = chosen.info.size !== null || !isNamed || chosen.info.serving;
   }
+  // A kind the line named ("2 habanero chiles") is the size it asked for.
+  if (ask.size === null && chosen.info.pieces.some((p) => SMALLER_KINDS.has(p))) guessed = false;
   if (chosen.info.serving) guessed = true;
   return { r: chosen, guessed };
 }
@@ -368,7 +419,7 @@ const PACKAGE_PIECES = new Set(['can', 'jar', 'package', 'box', 'bag', 'bottle',
 function sizeIsTotal(parsed: ParsedLine, food: CatalogueFood | null, all: ReadPortion[], opts: WeighOptions, sizeGrams: number): boolean {
   const quantity = parsed.quantity ?? 0;
   if (!food || quantity <= 1 || !(sizeGrams > 0)) return false;
-  const ask = countAsk(parsed);
+  const ask = countAsk(parsed, food);
   if (!ask.piece || PACKAGE_PIECES.has(ask.piece)) return false;
   const chosen = bestCountPortion(all, ask, opts.countDefault ?? null, new Set(words(parsed.name ?? '').map(singular)));
   if (!chosen || chosen.guessed) return false;
@@ -503,7 +554,7 @@ function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion
   }
   if (!food) return result(0, null, null, [WARNING_NO_FOOD]);
 
-  const ask = countAsk(parsed);
+  const ask = countAsk(parsed, food);
   const nameWords = new Set(words(parsed.name ?? '').map(singular));
   const byLength = lengthPiece(all, ask, nameWords);
   if (byLength) {
