@@ -49,6 +49,8 @@ export interface ParsedLine {
   sizeText: string | null;
   /** the same amount restated in other units: "10 tbsp (140 g) butter" → [140 g] */
   equivalents: Amount[];
+  /** an amount of the same kind added after a comma: "1 c sugar, plus 1 tablespoon" → 1 tbsp (weighed with the line's amount) */
+  plus?: Amount | null;
   /** true when the line has no usable quantity ("salt to taste") and the cook must give one */
   needsAmount: boolean;
   flags: ParseFlag[];
@@ -229,6 +231,7 @@ function sanitise(line: ParsedLine): ParsedLine {
   if (line.range && !(isFiniteNonNegative(line.range.min) && isFiniteNonNegative(line.range.max))) line.range = null;
   if (line.size && !isFiniteNonNegative(line.size.quantity)) line.size = null;
   line.equivalents = line.equivalents.filter((e) => isFiniteNonNegative(e.quantity));
+  if (line.plus && !isFiniteNonNegative(line.plus.quantity)) delete line.plus;
   const isHeader = line.flags.includes('group-header');
   line.needsAmount = line.quantity === null && !isHeader && line.name !== '';
   if (line.needsAmount && !line.flags.includes('needs-amount')) line.flags.push('needs-amount');
@@ -252,6 +255,7 @@ interface LineState {
   size: Amount | null;
   sizeText: string | null;
   equivalents: Amount[];
+  plus?: Amount;
 }
 
 /** "Pinch coarse salt", "generous pinch of salt", "small handful of basil": a measure without a number is one of it. */
@@ -328,6 +332,7 @@ const PASSES: readonly ((s: LineState) => void)[] = [
   partOfCountedFruit,
   amountInNote,
   weightInNote,
+  plusAfterComma,
   dozens,
 ];
 
@@ -631,6 +636,27 @@ function weightInNote(s: LineState): void {
   }
 }
 
+/** What may follow the added amount of ", plus 1 tablespoon …": nothing, or what it is for, never another food. */
+const PLUS_REST = /^(?:$|[,;(]|(?:for|to|at|if|in|as|of it|more|reserved|divided|melted|softened|sliced|chopped|extra)\b)/i;
+
+/**
+ * "1 c sugar, plus 1 tablespoon", "¾ c butter, plus 3 tablespoons for the pan": an amount of the same
+ * kind added after a comma is weighed with the line's amount (the labelled sets sum "A plus B"); the
+ * line's own quantity stays the one written first.
+ */
+function plusAfterComma(s: LineState): void {
+  const kind = unitKind(s.unit);
+  if (s.quantity === null || s.quantity2 !== null || !s.unit || (kind !== 'mass' && kind !== 'volume') || s.equivalents.length > 0) return;
+  for (const segment of takeParentheticals(s.description).rest.split(',').slice(1)) {
+    const plus = /^\s*(?:plus|\+)\s+(.*)$/i.exec(segment);
+    if (!plus) continue;
+    const next = readAmount(plus[1]);
+    if (!next?.amount || next.kind !== kind || !PLUS_REST.test(plus[1].trim().slice(next.text.length).trim())) return;
+    s.plus = next.amount;
+    return;
+  }
+}
+
 /** "3½ to 4½ pounds", "2-3 lb": the middle of a range of weights, or null. */
 function massRangeMidpoint(note: string): Amount | null {
   const m = /^(?:about\s+|around\s+|roughly\s+)?([\d½¼¾⅓⅔⅛./ ]+?)\s*(?:to|-|–)\s*([\d½¼¾⅓⅔⅛./ ]+[^\d\s].*)$/i.exec(note.trim());
@@ -688,6 +714,7 @@ function finish(s: LineState): ParsedLine {
     size: s.size,
     sizeText: s.sizeText,
     equivalents: s.equivalents,
+    ...(s.plus && s.quantity !== null && !range ? { plus: s.plus } : {}),
     needsAmount: s.quantity === null,
     flags: s.flags,
   };

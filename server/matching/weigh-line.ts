@@ -480,8 +480,20 @@ export function weighLine(parsed: ParsedLine, food: CatalogueFood | null, portio
   }
 }
 
-function weigh(parsed: ParsedLine, food: CatalogueFood | null, portions: Portion[], opts: WeighOptions): WeighedLine {
+/** "1 c sugar, plus 1 tablespoon": the added amount in the line's own unit, so one portion weighs both. */
+function withPlus(parsed: ParsedLine): ParsedLine {
+  const plus = parsed.plus;
+  if (!plus || parsed.quantity === null || !parsed.unit) return parsed;
+  const kind = unitKind(parsed.unit);
+  const perUnit = kind === 'volume' ? volumeToMl(1, parsed.unit) : kind === 'mass' ? massToGrams(1, parsed.unit) : null;
+  const added = kind === 'volume' ? volumeToMl(plus.quantity, plus.unit) : kind === 'mass' ? massToGrams(plus.quantity, plus.unit) : null;
+  if (!perUnit || added === null || unitKind(plus.unit) !== kind) return parsed;
+  return { ...parsed, quantity: parsed.quantity + added / perUnit };
+}
+
+function weigh(written: ParsedLine, food: CatalogueFood | null, portions: Portion[], opts: WeighOptions): WeighedLine {
   const warnings: string[] = [];
+  const parsed = withPlus(written);
   const quantity = parsed.quantity;
   // "½ cup sugar, or more to taste" weighs its half cup; only a line without an amount waits for one.
   if (quantity === null || !Number.isFinite(quantity) || quantity <= 0) {
