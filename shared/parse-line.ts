@@ -618,6 +618,8 @@ function weightAfterComma(description: string, count: number): Amount | null {
   return null;
 }
 
+const APPROXIMATE_NOTE = /^(?:about|approx\.?|approximately|around|roughly|~)\s/i;
+
 /** "9 lasagna noodles (about 8 oz)", "6 tbsp lard (about 2 ounces)": the line's weight in a note. */
 function weightInNote(s: LineState): void {
   if (s.quantity !== null && s.equivalents.length === 0 && s.size === null) {
@@ -627,7 +629,15 @@ function weightInNote(s: LineState): void {
       const before = s.description.slice(0, Math.max(0, s.description.indexOf(note))).replace(/[([]\s*$/, '');
       if (/[\d½¼¾⅓⅔⅛]\s*$/.test(before) && !/^(?:about|approx|approximately|around|roughly|~)/i.test(note)) continue;
       const mass = massRangeMidpoint(note) ?? readAmounts(note).find((a) => unitKind(a.unit) === 'mass');
-      if (!mass) continue;
+      if (!mass) {
+        // "Juice of 1 lime (about 1 tablespoon)": the volume a counted line yields, kept beside the count.
+        const volume =
+          (s.unit === null || unitKind(s.unit) === 'count') && APPROXIMATE_NOTE.test(note)
+            ? readAmounts(note).find((a) => unitKind(a.unit) === 'volume')
+            : undefined;
+        if (volume && !s.equivalents.length) s.equivalents.push(volume);
+        continue;
+      }
       s.equivalents.push(/\beach\b|\bapiece\b/i.test(note) ? { quantity: mass.quantity * s.quantity, unit: mass.unit } : mass);
       return;
     }

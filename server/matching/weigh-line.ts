@@ -437,6 +437,8 @@ function drainedGrams(grams: number, opts: WeighOptions, warnings: string[]): nu
   return grams * opts.drained.share;
 }
 
+const JUICE = /\bjuice\b/i;
+
 /** Leafy foods and herbs pack under this many grams per mL: a handful of them is a loose cup. */
 const LEAFY_G_PER_ML = 0.3;
 
@@ -565,6 +567,13 @@ function weigh(written: ParsedLine, food: CatalogueFood | null, portions: Portio
     return result(grams, d ? grams / d : null, null, food ? warnings : [WARNING_NO_FOOD]);
   }
   if (!food) return result(0, null, null, [WARNING_NO_FOOD]);
+  // "Juice of 1 lime (about 1 tablespoon)": the juice the cook measured, not the fruit's usual yield.
+  const statedVolume = parsed.equivalents?.find((e) => unitKind(e.unit) === 'volume');
+  if (statedVolume && JUICE.test(food.name)) {
+    const ml = volumeToMl(statedVolume.quantity, statedVolume.unit) ?? 0;
+    const v = bestVolumePortion(all, parsed, statedVolume.unit, food);
+    if (v) return result(ml * v.gPerMl, ml, v.r.portion.label, warnings);
+  }
 
   const ask = countAsk(parsed, food);
   const nameWords = new Set(words(parsed.name ?? '').map(singular));
