@@ -147,10 +147,14 @@ function foodWords(food: { name: string }): string[] {
   return ws;
 }
 
-/** True when a food's name carries the modifier (or, for "fresh", does not contradict it). */
+/**
+ * True when a food's name carries the modifier (or, for "fresh", does not contradict it). A name that
+ * says the asked word itself honours it even beside a contrary one: "red currants" are SR28's
+ * "Currants, red and white, raw".
+ */
 export function honours(food: { name: string }, m: FoodModifier): boolean {
   const ws = foodWords(food);
-  if (m.brokenBy) return !m.brokenBy.some((seq) => hasSequence(ws, seq));
+  if (m.brokenBy) return hasSequence(ws, m.asks) || !m.brokenBy.some((seq) => hasSequence(ws, seq));
   return hasSequence(ws, m.asks) || (m.honouredBy ?? []).some((seq) => hasSequence(ws, seq));
 }
 

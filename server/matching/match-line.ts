@@ -237,6 +237,23 @@ function foodInNote(matcher: FoodMatcher, parsed: ParsedLine, input: string): Li
   return null;
 }
 
+/** Measures a drink is poured or sold in. */
+const DRINK_MEASURES = new Set(['cup', 'fl-oz', 'pint', 'quart', 'gallon', 'ml', 'cl', 'dl', 'l', 'can', 'bottle']);
+/** "soda" that is no soft drink: these have foods of their own. */
+const SODA_NOT_POP = /\b(?:baking|bicarbonate|bicarb|washing|caustic|club|water|cream|bread|crackers?)\b/i;
+
+/**
+ * "2-3 c Moxie soda", "1 bottle soda": soda poured by the cup or sold by the can is a soft drink, not
+ * baking soda (a baking recipe's "1 tsp soda" still is, *common practice*). The phrase is read as
+ * "soda pop", a stand-in the cook is asked to check.
+ */
+function sodaPop(matcher: FoodMatcher, parsed: ParsedLine, phrase: string, match: FoodMatch): FoodMatch | null {
+  if (!/\bsoda\b/i.test(phrase) || SODA_NOT_POP.test(phrase) || !DRINK_MEASURES.has(parsed.unit ?? '')) return null;
+  if (match.food && !/\bbaking soda\b/i.test(match.food.name)) return null;
+  const pop = matcher.match(phrase.replace(/\bsoda\b/i, 'soda pop'));
+  return pop.food ? pop : null;
+}
+
 export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string, byChoices = true): LineMatch {
   const own = matchPhrase(matcher, parsed, input, byChoices);
   if (own.food || !byChoices) return own;
@@ -272,6 +289,7 @@ function matchPhrase(matcher: FoodMatcher, parsed: ParsedLine, input: string, by
   const asked = modifiersAskedBy(phrase);
   if (FRESH && !asked.includes(FRESH) && asksFresh(parsed, phrase)) asked.push(FRESH);
   let match: FoodMatch = matcher.match(phrase);
+  match = sodaPop(matcher, parsed, phrase, match) ?? match;
   // "low carb whole wheat tortillas": when nothing has every word, the food without the modifiers
   // is the nearest one (and the line says which word it could not honour).
   if (!match.food && asked.length > 0) {

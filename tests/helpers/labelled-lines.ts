@@ -29,6 +29,7 @@ export const HAND_LABELLED_BATCHES = [
   { name: 'batch 1 (rows 1-340)', file: 'labelled-lines/tastecooking-labelled.json' },
   { name: 'batch 2 (rows 341-540)', file: 'labelled-lines/tastecooking-labelled-2.json' },
   { name: 'batch 3 (rows 541-700)', file: 'labelled-lines/tastecooking-labelled-3.json' },
+  { name: 'batch 4 (rows 701-900)', file: 'labelled-lines/tastecooking-labelled-4.json' },
 ] as const;
 export const HAND_LABELLED_FILE = HAND_LABELLED_BATCHES[0].file;
 export const GRAMS_TOLERANCE = 0.15;

@@ -88,6 +88,19 @@ const NAMED_OTHERWISE: Record<string, string> = {
   seltzer: 'as sparkling water',
   ale: 'a top-fermented beer, SR28 "beer, regular"',
   poblano: 'a mild green chile (common practice), SR28 "peppers, hot chili, green"',
+  'grana padano': 'a hard grating cheese of the parmesan kind (common practice); grated parmesan stands in, flagged',
+  grana: 'as grana padano',
+  manchego: "a firm sheep's-milk cheese; SR28 has none, its romano (a firm sheep's-milk cheese) stands in, flagged",
+  burrata: 'fresh mozzarella filled with cream (common practice); whole-milk mozzarella stands in, flagged',
+  glucose: 'glucose syrup for baking (common practice); light corn syrup, a glucose syrup, stands in, flagged',
+  'liquid glucose': 'as glucose',
+  sambal: 'a chile paste (common practice); SR28 has none, its sriracha (a chile sauce) stands in, flagged',
+  'sambal oelek': 'as sambal',
+  carnaroli: 'an Italian medium-grain risotto rice (common practice), SR28 "rice, white, medium-grain"',
+  'vialone nano': 'as carnaroli',
+  bicarb: 'bicarbonate of soda, SR28 "baking soda"',
+  'soda pop': 'a soft drink; cola, the commonest, stands in, flagged',
+  'soft drink': 'as soda pop',
 };
 
 function keyWords(text: string): Set<string> {

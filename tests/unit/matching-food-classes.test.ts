@@ -365,3 +365,50 @@ describe('foods SR28 lacks, weighed as their nearest food and flagged', () => {
     expect(bacon.checkMatch).toBe(false);
   });
 });
+
+describe('classes found in batch 4 (tuning half) and the unlabelled lines', () => {
+  it('plain "currants" in a recipe are the dried Zante currants; fresh, red or black ones are the fruit (*common practice*)', () => {
+    expectFood('½ c currants', '09085', /^Currants, zante, dried$/);
+    expectFood('1 c fresh currants', '09084', /^Currants, red and white, raw$/);
+    expectFood('1 c black currants', '09083', /^Currants, european black, raw$/);
+  });
+
+  it('a colour the food\'s name says is honoured even beside another colour: "red currants" are "Currants, red and white"', () => {
+    const red = expectFood('1 c red currants', '09084', /^Currants, red and white, raw$/);
+    expect(red.checkMatch).toBe(false);
+    expect(red.missingModifier).toBeNull();
+    // …while a colour the name lacks, beside another, is still reported: black rice is no white rice.
+    expect(line('1 c black rice').missingModifier).toBe('black');
+  });
+
+  it.each([
+    ['¼ c grana cheese, grated', 'grana cheese', '01032', /^Cheese, parmesan, grated$/],
+    ['0.5 c Manchego cheese', 'manchego cheese', '01038', /^Cheese, romano$/],
+    ['1 ball burrata', 'burrata', '01026', /^Cheese, mozzarella, whole milk$/],
+    ['1 ¾ oz peeled black garlic cloves', 'black garlic', '11215', /^Garlic, raw$/],
+    ['⅔ c glucose', 'glucose', '19350', /^Syrups, corn, light$/],
+    ['7 tbsp sambal, more or less to taste', 'sambal', '06631', /^Sauce, hot chile, sriracha$/],
+  ])('specialty food %s → its nearest SR28 food, flagged "check this match"', (input, phrase, ndb, sr28) => {
+    const l = expectFood(input, ndb, sr28);
+    expect(l.checkMatch).toBe(true);
+    expect(l.warnings.join(' ')).toContain(`“${phrase}”`);
+  });
+
+  it.each([
+    ['1 c Spanish Calasparra rice', '20050', /^Rice, white, medium-grain, raw, enriched$/],
+    ['1 c carnaroli rice', '20050', /^Rice, white, medium-grain, raw, enriched$/],
+    ['2 tbsp grated pecorino', '01038', /^Cheese, romano$/],
+    ['2 tbsp tamarind paste', '09322', /^Tamarinds, raw$/],
+    ['½ tsp bicarbonate of soda', '18372', /^Leavening agents, baking soda$/],
+  ])('a name SR28 writes otherwise: %s', (input, ndb, sr28) => {
+    expect(expectFood(input, ndb, sr28).checkMatch).toBe(false);
+  });
+
+  it('soda poured by the cup or sold by the can is a soft drink, flagged; by the teaspoon it is baking soda', () => {
+    const moxie = expectFood('2-3 c Moxie soda (substitute Dr Pepper if necessary)', '14148', /^Beverages, carbonated, cola, regular$/);
+    expect(moxie.checkMatch).toBe(true);
+    expectFood('1 can orange soda', '14150', /^Beverages, carbonated, orange$/);
+    expectFood('1 tsp soda', '18372', /^Leavening agents, baking soda$/);
+    expect(line('1 c club soda').food?.sourceId).toBe('14121');
+  });
+});
