@@ -260,7 +260,7 @@ const CUT_PIECES = new Set([
  * Words for a kind of a food with its own piece, weighed by that portion only when the line names it:
  * "baby bok choy", "fingerling potatoes", "baguette slices", "romaine hearts", "habanero", "Thai chiles".
  */
-const SMALLER_KINDS = new Set(['baby', 'fingerling', 'baguette', 'heart', 'habanero', 'bonnet', 'fresno', 'thai', 'bird']);
+const SMALLER_KINDS = new Set(['baby', 'fingerling', 'baguette', 'heart', 'habanero', 'bonnet', 'fresno', 'thai', 'bird', 'guajillo', 'pasilla', 'cascabel']);
 
 /** Piece words that mean the food itself when a recipe counts it: "1 fruit" is one lemon. */
 const WHOLE_PIECES = new Set(['whole', 'fruit', 'each', 'item', 'medium', 'large', 'small']);
