@@ -562,6 +562,99 @@ describe('pieces of another size, leaves, lengths and splashes (weighing, issue 
   });
 });
 
+describe('grams a cook weighs: classes found reading unlabelled reference lines (issue #11, the grams side)', () => {
+  /** NIST Handbook 44, Appendix C: 1 cup = 16 tbsp = 48 tsp; 1 tbsp = ½ fl oz. */
+  const TBSP_PER_CUP = 16;
+
+  it('"1 tbsp 1 tablespoon whiskey": one amount written twice is one tablespoon, never two', () => {
+    const l = line('1 tbsp 1 tablespoon whiskey');
+    expect(l.food?.sourceId).toBe('14052');
+    // USDA SR28 WEIGHT.txt 14052 "fl oz" 27.8 g; NIST Handbook 44: 1 tbsp = ½ fl oz
+    expect(l.grams).toBeCloseTo(sr28('14052', /^fl oz$/) / 2, 6);
+    // "½ c 1 tablespoon" still adds two different amounts: ½ cup + 1 tbsp = 9 tbsp (NIST Handbook 44)
+    expect(line('½ c 1 tablespoon water').parsed.quantity).toBe(9);
+  });
+
+  it('thin and thick slices take the SR28 slice of that thickness; a plain slice stays the medium one', () => {
+    // USDA SR28 WEIGHT.txt 11529 "slice, thin/small" 15 g, "slice, medium (1/4" thick)" 20 g, "slice, thick/large (1/2" thick)" 27 g
+    expect(line('3 thin slices of tomato').grams).toBeCloseTo(3 * sr28('11529', /^slice, thin\/small/), 6);
+    expect(line('4 slices of fresh tomato').grams).toBeCloseTo(4 * sr28('11529', /^slice, medium/), 6);
+    expect(line('2 thick slices tomato').grams).toBeCloseTo(2 * sr28('11529', /^slice, thick\/large/), 6);
+    // USDA SR28 WEIGHT.txt 11282 "slice, thin" 9 g; "slice, large (1/4" thick)" 38 g
+    const thin = line('3 thin slices of white onion');
+    expect(thin.grams).toBeCloseTo(3 * sr28('11282', /^slice, thin$/), 6);
+    expect(thin.warnings).toEqual([]);
+    expect(line('1 thick slice white onion').grams).toBeCloseTo(sr28('11282', /^slice, large/), 6);
+  });
+
+  it("a tablespoon of cornmeal is a sixteenth of a cook's cup, never SR28's densely filled one", () => {
+    const l = line('1 tbsp cornmeal');
+    expect(l.food?.sourceId).toBe('20022');
+    // data/curated-portions.json 20022 "cup" 138 g (*common practice*, from memory); NIST Handbook 44: 16 tbsp in a cup
+    expect(l.grams).toBeCloseTo(curatedGrams('20022', 'cup') / TBSP_PER_CUP, 6);
+    expect(curatedGrams('20022', 'cup')).toBeLessThan(sr28('20022', /^cup$/));
+    expect(curatedGrams('20022', 'cup')).toBeGreaterThan(sr28('20020', /^cup$/));
+  });
+
+  it('grated cheese by the cup is shredded cheese, never diced', () => {
+    // USDA SR28 WEIGHT.txt 01009 "cup, shredded" 113 g (not "cup, diced" 132 g); 01025 "cup, shredded" 113 g
+    expect(line('0.5 c finely grated cheddar cheese').grams).toBeCloseTo(0.5 * sr28('01009', /^cup, shredded/), 6);
+    expect(line('⅓ c freshly grated Monterey Jack cheese').grams).toBeCloseTo(sr28('01025', /^cup, shredded/) / 3, 6);
+    // and the other way: shredded carrots take SR28's grated cup (11124 "cup grated" 110 g)
+    expect(line('2 c shredded carrots').grams).toBeCloseTo(2 * sr28('11124', /^cup grated/), 6);
+  });
+
+  it('romaine hearts are hearts, a head of romaine a head, and a bare count of a lettuce or cauliflower a head', () => {
+    // data/curated-portions.json 11251 "heart" (*common practice*, from memory); USDA SR28 WEIGHT.txt 11251 "head" 626 g
+    expect(line('3 romaine hearts or one large head of escarole').grams).toBeCloseTo(3 * curatedGrams('11251', 'heart'), 6);
+    expect(line('1 head romaine lettuce').grams).toBeCloseTo(sr28('11251', /^head$/), 6);
+    expect(line('2 romaine lettuce').grams).toBeCloseTo(2 * sr28('11251', /^head$/), 6);
+    // USDA SR28 WEIGHT.txt 11135 "head medium (5-6" dia.)" 588 g; "floweret" 13 g
+    expect(line('1 cauliflower, cut into florets').grams).toBeCloseTo(sr28('11135', /^head medium/), 6);
+    const florets = line('10 cauliflower florets');
+    expect(florets.grams).toBeCloseTo(10 * sr28('11135', /^floweret/), 6);
+    expect(florets.warnings).toEqual([]);
+  });
+
+  it('a chile the line names weighs its own piece: habanero, Scotch bonnet, Thai, Fresno, guajillo', () => {
+    // data/curated-portions.json 11819 "habanero", "scotch bonnet" (from memory), not SR28 11819 "pepper" 45 g
+    expect(line('2 habanero chiles, stemmed and seeded').grams).toBeCloseTo(2 * curatedGrams('11819', 'habanero'), 6);
+    expect(line('1 Scotch bonnet pepper, minced').grams).toBeCloseTo(curatedGrams('11819', 'scotch bonnet'), 6);
+    expect(line('1 red chile').grams).toBeCloseTo(sr28('11819', /^pepper$/), 6);
+    // data/curated-portions.json 11977 "thai chili", "bird chili" (from memory)
+    expect(line('10 Thai chiles').grams).toBeCloseTo(10 * curatedGrams('11977', 'thai chili'), 6);
+    expect(line('2 bird’s eye chillies, chopped').grams).toBeCloseTo(2 * curatedGrams('11977', 'bird chili'), 6);
+    // the serrano the line also names is the food matched, so its own piece: USDA SR28 11977 "pepper" 6.1 g
+    expect(line('1 sm bird’s eye chile or serrano chile, thinly sliced').grams).toBeCloseTo(sr28('11977', /^pepper$/), 6);
+    // data/curated-portions.json "fresno" (as USDA SR28 11979 jalapeño "pepper" 14 g, *common practice*)
+    expect(line('2 Fresno chiles, seeded').grams).toBeCloseTo(2 * sr28('11979', /^pepper$/), 6);
+    // data/curated-portions.json 11962 "guajillo" (from memory), not SR28 11962 "pepper" 0.5 g
+    expect(line('1 dried guajillo chile, stemmed and seeded').grams).toBeCloseTo(curatedGrams('11962', 'guajillo'), 6);
+  });
+
+  it('a ball of fresh mozzarella is the 8 oz ball it is sold as', () => {
+    // data/curated-portions.json 01026 "ball" (*common practice*): 8 oz (NIST Handbook 44)
+    expect(line('2 fist-sized balls of fresh mozzarella, sliced into 1/4-inch rounds').grams).toBeCloseTo(2 * 8 * OZ, 1);
+  });
+
+  it('", plus 1 tablespoon" after a comma adds to the amount; another food or "more" never does', () => {
+    // USDA SR28 WEIGHT.txt 19335 "cup" 200 g; NIST Handbook 44: 1 tbsp = 1/16 cup
+    expect(line('1 c sugar, plus 1 tablespoon').grams).toBeCloseTo(sr28('19335', /^cup$/) * (1 + 1 / TBSP_PER_CUP), 6);
+    expect(line('⅓ c granulated sugar, plus 1/4 cup').grams).toBeCloseTo(sr28('19335', /^cup$/) * (1 / 3 + 1 / 4), 6);
+    // USDA SR28 WEIGHT.txt 04053 "tablespoon" 13.5 g
+    expect(line('2 tbsp olive oil, plus 2 tbsp butter').grams).toBeCloseTo(2 * sr28('04053', /^tablespoon$/), 6);
+    // USDA SR28 WEIGHT.txt 20081 "cup" 125 g
+    expect(line('1 c flour, plus more for dusting').grams).toBeCloseTo(sr28('20081', /^cup$/), 6);
+  });
+
+  it("the juice of a fruit with its measure in a note weighs that measure, else the fruit's SR28 yield", () => {
+    // USDA SR28 WEIGHT.txt 09160 "cup" 242 g; NIST Handbook 44: 1 tbsp = 1/16 cup
+    expect(line('Juice of 1 lime (about 1 tablespoon)').grams).toBeCloseTo(sr28('09160', /^cup$/) / TBSP_PER_CUP, 6);
+    // USDA SR28 WEIGHT.txt 09160 "lime yields" 44 g
+    expect(line('juice of 1 lime').grams).toBeCloseTo(sr28('09160', /^lime yields/), 6);
+  });
+});
+
 describe('the hand-labelled lines (tests/reference/labelled-lines)', () => {
   const answer = (input: string) => {
     const l = line(input);
@@ -582,13 +675,13 @@ describe('the hand-labelled lines (tests/reference/labelled-lines)', () => {
     expect(readHandLabelledLines(fourth.file).length).toBe(200);
     // npm run bench prints each figure. Batch 1 measured 100 % tune, 90.0 % held-out (a line is 0.6 %
     // of a half); batch 2 measured 99.0 % tune, 87.0 % held-out (a line is 1 % of a half); batch 3
-    // measured 96.3 % tune, 87.5 % held-out (a line is 1.25 % of a half); batch 4 measured 95.0 % tune,
+    // measured 96.3 % tune, 87.5 % held-out (a line is 1.25 % of a half), 100 % tune after its three grams misses were mended as classes; batch 4 measured 95.0 % tune,
     // 94.0 % held-out before it was tuned on, 99.0 % tune after (a line is 1 % of a half).
     expect(both(first.file, 'tune').share).toBeGreaterThanOrEqual(0.99);
     expect(both(first.file, 'held-out').share).toBeGreaterThanOrEqual(0.88);
     expect(both(second.file, 'tune').share).toBeGreaterThanOrEqual(0.97);
     expect(both(second.file, 'held-out').share).toBeGreaterThanOrEqual(0.85);
-    expect(both(third.file, 'tune').share).toBeGreaterThanOrEqual(0.93);
+    expect(both(third.file, 'tune').share).toBeGreaterThanOrEqual(0.97);
     expect(both(third.file, 'held-out').share).toBeGreaterThanOrEqual(0.85);
     expect(both(fourth.file, 'tune').share).toBeGreaterThanOrEqual(0.97);
     expect(both(fourth.file, 'held-out').share).toBeGreaterThanOrEqual(0.91);
