@@ -187,6 +187,34 @@ describe('parseLine: sizes and compound amounts', () => {
     expect(volumeToMl(line.quantity!, line.unit!)).toBeCloseTo(266.161766063, 8);
   });
 
+  it('"1 tbsp 1 tablespoon whiskey": the same amount written twice is one amount, not a sum', () => {
+    const line = parseLine('1 tbsp 1 tablespoon whiskey');
+    expect(pick(line)).toEqual({ quantity: 1, unit: 'tbsp', name: 'whiskey' });
+    expect(line.flags).not.toContain('compound');
+    expect(pick(parseLine('2 tbsp 2 tablespoons oil'))).toEqual({ quantity: 2, unit: 'tbsp', name: 'oil' });
+    // a second amount with "plus" is still added: 1 cup + 1 cup
+    expect(pick(parseLine('1 cup plus 1 cup flour'))).toEqual({ quantity: 2, unit: 'cup', name: 'flour' });
+  });
+
+  it('", plus 1 tablespoon" after a comma is kept as the amount added, the written quantity unchanged', () => {
+    const line = parseLine('1 c sugar, plus 1 tablespoon');
+    expect(pick(line)).toEqual({ quantity: 1, unit: 'cup', name: 'sugar' });
+    expect(line.plus).toEqual({ quantity: 1, unit: 'tbsp' });
+    expect(parseLine('1 ½ tbsp unsalted butter, plus 1 tablespoon at room temperature').plus).toEqual({ quantity: 1, unit: 'tbsp' });
+    // another food, "more", or another kind of amount is no addition
+    expect(parseLine('2 tbsp olive oil, plus 2 tbsp butter').plus).toBeUndefined();
+    expect(parseLine('1 c flour, plus more for dusting').plus).toBeUndefined();
+    expect(parseLine('1.5 c vanilla ice cream, plus 2 scoops for garnish').plus).toBeUndefined();
+  });
+
+  it('"Juice of 1 lime (about 1 tablespoon)": a counted line keeps the volume its note gives', () => {
+    const line = parseLine('Juice of 1 lime (about 1 tablespoon)');
+    expect(line.quantity).toBe(1);
+    expect(line.equivalents).toEqual([{ quantity: 1, unit: 'tbsp' }]);
+    // a volume line's note is no restatement of a count
+    expect(parseLine('2 c chopped onion (about 2 onions)').equivalents).toEqual([]);
+  });
+
   it('keeps metric restatements as equivalents: "10 tbsp (140 grams) unsalted butter"', () => {
     const line = parseLine('10 tbsp (140 grams) unsalted butter');
     expect(pick(line)).toEqual({ quantity: 10, unit: 'tbsp', name: 'unsalted butter' });
