@@ -320,6 +320,7 @@ function parseCleanLine(input: string): ParsedLine {
 
 /** The passes, in order: each reads what the package left in the description. */
 const PASSES: readonly ((s: LineState) => void)[] = [
+  countBeforeFractionOfAnInch,
   sizeRangeAfterCount,
   sizeGluedToQuantity,
   sizeWordBeforeCountedUnit,
@@ -369,6 +370,25 @@ function partOfCountedFruit(s: LineState): void {
 
 /** "3-4 ounce", "6- to 8-ounce", "2-to 3-pound": a range of weights written before the food. */
 const SIZE_RANGE = new RegExp(`^(${QUANTITY_SOURCE})\\s*-?\\s*(?:-|–|—|to)\\s*(${QUANTITY_SOURCE})[-\\s]*([a-z]+)\\.?(?=[\\s-])[-\\s]*`, 'i');
+
+const COUNT_THEN_FRACTION_INCH = /^(\d+)\s+(\d+\/\d+)-(?:inch(?:es)?|in\.?)[-\s]+(?:thick\s+)?([a-z]+s)\b\s*(.*)$/i;
+
+/**
+ * "8 1/2-inch slices baguette", "10 1/2-inch cubes cheese": a count of pieces a fraction of an inch in
+ * size, not 8½ inches (one "1 1/2-inch piece of ginger", a singular piece, stays a length).
+ */
+function countBeforeFractionOfAnInch(s: LineState): void {
+  const m = COUNT_THEN_FRACTION_INCH.exec(s.text);
+  const count = m ? Number(m[1]) : 0;
+  const unit = m ? normaliseUnit(m[3]) : null;
+  if (!m || count < 2 || !unit || unitKind(unit) !== 'count' || unit === 'inch') return;
+  s.quantity = count;
+  s.quantity2 = null;
+  s.unit = unit;
+  s.unitText = m[3];
+  s.sizeText = `${m[2]}-inch`;
+  s.description = m[4];
+}
 
 /** "1 3-4 ounce tomato", "2 6- to 8-ounce salmon fillets": each piece weighs the middle of the range. */
 function sizeRangeAfterCount(s: LineState): void {

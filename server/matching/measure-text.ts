@@ -121,6 +121,9 @@ export function sizeWordOf(text: string | null | undefined): SizeWord | null {
 /** Inches in a written size: "8-inch", "8 inch", '8"', "20 cm". */
 export function inchesOf(text: string | null | undefined): number | null {
   if (!text) return null;
+  // "1/2-inch", "1 1/2-inch": a fraction of an inch, never the "2" of its denominator.
+  const frac = /(?:(\d+)\s+)?(\d+)\/(\d+)\s*-?\s*(?:inch(?:es)?|in\b|")/i.exec(text);
+  if (frac && Number(frac[3]) > 0) return Number(frac[1] ?? 0) + Number(frac[2]) / Number(frac[3]);
   const m = /(\d+(?:\.\d+)?)\s*-?\s*(inch(?:es)?|in\b|"|cm|centimet(?:er|re)s?)/i.exec(text);
   if (!m) return null;
   const n = Number(m[1]);

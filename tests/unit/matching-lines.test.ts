@@ -632,6 +632,13 @@ describe('grams a cook weighs: classes found reading unlabelled reference lines 
     expect(line('1 dried guajillo chile, stemmed and seeded').grams).toBeCloseTo(curatedGrams('11962', 'guajillo'), 6);
   });
 
+  it('"8 1/2-inch slices baguette" weigh eight baguette slices; "2 1/2-inch pieces ginger" two half inches', () => {
+    // data/curated-portions.json 18029 "slice, baguette" (its source named in the row)
+    expect(line('8 1/2-inch slices baguette, lightly brushed with olive oil').grams).toBeCloseTo(8 * curatedGrams('18029', 'slice, baguette'), 6);
+    const inch = line('1 4-inch piece ginger').grams / 4;
+    expect(line('2 1/2-inch pieces ginger').grams).toBeCloseTo(2 * 0.5 * inch, 6);
+  });
+
   it('a ball of fresh mozzarella is the 8 oz ball it is sold as', () => {
     // data/curated-portions.json 01026 "ball" (*common practice*): 8 oz (NIST Handbook 44)
     expect(line('2 fist-sized balls of fresh mozzarella, sliced into 1/4-inch rounds').grams).toBeCloseTo(2 * 8 * OZ, 1);

@@ -207,6 +207,13 @@ describe('parseLine: sizes and compound amounts', () => {
     expect(parseLine('1.5 c vanilla ice cream, plus 2 scoops for garnish').plus).toBeUndefined();
   });
 
+  it('"8 1/2-inch slices baguette" is eight half-inch slices; "1 1/2-inch piece of ginger" stays 1½ inches', () => {
+    const slices = parseLine('8 1/2-inch slices baguette, lightly brushed with olive oil');
+    expect(pick(slices)).toEqual({ quantity: 8, unit: 'slice', name: 'baguette' });
+    expect(slices.sizeText).toBe('1/2-inch');
+    expect(pick(parseLine('1 1/2-inch piece of ginger'))).toEqual({ quantity: 1.5, unit: 'inch', name: 'ginger' });
+  });
+
   it('"Juice of 1 lime (about 1 tablespoon)": a counted line keeps the volume its note gives', () => {
     const line = parseLine('Juice of 1 lime (about 1 tablespoon)');
     expect(line.quantity).toBe(1);
