@@ -639,6 +639,13 @@ describe('grams a cook weighs: classes found reading unlabelled reference lines 
     expect(line('2 1/2-inch pieces ginger').grams).toBeCloseTo(2 * 0.5 * inch, 6);
   });
 
+  it('a bunch of broccoli raab or dandelion greens weighs its sourced curated row, never 0 g', () => {
+    // data/curated-portions.json 11096 "bunch" (*common practice*: 1 lb, NIST Handbook 44); 11207 "bunch" (as SR28 11457's bunch)
+    expect(line('2 bunches broccoli rabe').grams).toBeCloseTo(2 * curatedGrams('11096', 'bunch'), 6);
+    expect(line('1 lg bunch dandelion greens').grams).toBeCloseTo(curatedGrams('11207', 'bunch'), 6);
+    expect(curatedGrams('11207', 'bunch')).toBe(sr28('11457', /^bunch$/));
+  });
+
   it('a ball of fresh mozzarella is the 8 oz ball it is sold as', () => {
     // data/curated-portions.json 01026 "ball" (*common practice*): 8 oz (NIST Handbook 44)
     expect(line('2 fist-sized balls of fresh mozzarella, sliced into 1/4-inch rounds').grams).toBeCloseTo(2 * 8 * OZ, 1);
