@@ -688,7 +688,9 @@ function plusAfterComma(s: LineState): void {
 }
 
 /** "3½ to 4½ pounds", "2-3 lb": the middle of a range of weights, or null. */
-function massRangeMidpoint(note: string): Amount | null {
+function massRangeMidpoint(written: string): Amount | null {
+  // "2 to 2-1/2 pounds": a hyphenated mixed number is one number, not a second range.
+  const note = written.replace(/(?<![\d/.])(\d+)-(\d+\/\d+)\b/g, '$1 $2');
   const m = /^(?:about\s+|around\s+|roughly\s+)?([\d½¼¾⅓⅔⅛./ ]+?)\s*(?:to|-|–)\s*([\d½¼¾⅓⅔⅛./ ]+[^\d\s].*)$/i.exec(note.trim());
   if (!m) return null;
   const hi = readAmounts(m[2]).find((a) => unitKind(a.unit) === 'mass');

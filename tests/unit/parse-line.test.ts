@@ -214,6 +214,11 @@ describe('parseLine: sizes and compound amounts', () => {
     expect(pick(parseLine('1 1/2-inch piece of ginger'))).toEqual({ quantity: 1.5, unit: 'inch', name: 'ginger' });
   });
 
+  it('a range of weights with a hyphenated mixed number: "1 head of cabbage, 2 to 2-1/2 pounds" is 2¼ lb', () => {
+    expect(parseLine('1 md head of cabbage, 2 to 2-1/2 pounds').equivalents).toEqual([{ quantity: 2.25, unit: 'lb' }]);
+    expect(parseLine('1 head cabbage (2 to 2-1/2 pounds)').equivalents).toEqual([{ quantity: 2.25, unit: 'lb' }]);
+  });
+
   it('"Juice of 1 lime (about 1 tablespoon)": a counted line keeps the volume its note gives', () => {
     const line = parseLine('Juice of 1 lime (about 1 tablespoon)');
     expect(line.quantity).toBe(1);
