@@ -361,6 +361,95 @@ describe('issue 10 round 5: a baked cheese sauce, half-cauliflower fried rice (i
   });
 });
 
+describe('issue 10 round 7 (savoury mains): lean pork shoulder, smoked turkey sausage, lo mein eggs, a creamy pan sauce (invented recipes)', () => {
+  it('braising pork shoulder trimmed of its fat, 1:1 by weight of meat (USDA SR28 separable lean 10072 against lean and fat 10070), up to ×1.5 in a braise', () => {
+    const paprikash = [
+      at('10070', 'pork shoulder, cut into cubes', 907),
+      at('04044', 'vegetable oil', 27),
+      at('11282', 'onions, chopped', 220),
+      at('02028', 'sweet paprika', 14),
+      at('20081', 'all-purpose flour', 16),
+      at('06194', 'chicken broth', 374),
+      at('01056', 'sour cream', 230),
+      at('20109', 'egg noodles', 340),
+    ];
+    const r = recipeCandidates(engine, paprikash, none());
+    const lean = byRule(r.lines[0], 'pork-shoulder-to-trimmed-lean');
+    expect(lean.map((c) => c.name)).toEqual(['Pork, fresh, shoulder, whole, lean only, raw']);
+    expect(lean[0]).toMatchObject({ massRatio: 1, band: [0.9, 1.5] });
+    // the separable lean (USDA SR28) has under half the untrimmed cut's fat and more protein per gram
+    expect(lean[0].per100g.fatG).toBeLessThan(0.5 * byNdb.get('10070')!.per100g.fatG);
+    expect(lean[0].per100g.proteinG).toBeGreaterThan(byNdb.get('10070')!.per100g.proteinG);
+    // an already lean shoulder is not "trimmed" again
+    const trimmed = recipeCandidates(engine, [at('10072', 'lean pork shoulder', 907), at('06194', 'chicken broth', 960)], none());
+    expect(trimmed.lines[0].candidates.map((c) => c.rule?.id)).not.toContain('pork-shoulder-to-trimmed-lean');
+  });
+
+  it('smoked pork sausage or kielbasa: smoked turkey sausage, 1:1 by weight within ±10 %, or half of it kept; never offered for a turkey sausage', () => {
+    const jambalaya = [
+      at('05096', 'boneless skinless chicken thighs, cubed', 454),
+      at('07074', 'smoked sausage, sliced', 340),
+      at('04044', 'vegetable oil', 27),
+      at('11282', 'onion, chopped', 110),
+      at('20044', 'long-grain white rice', 278),
+      at('11531', 'diced tomatoes', 411),
+      at('06194', 'chicken broth', 747),
+    ];
+    const r = recipeCandidates(engine, jambalaya, none());
+    const turkey = byRule(r.lines[1], 'smoked-sausage-to-turkey-smoked-sausage');
+    expect(turkey.map((c) => c.name)).toEqual(['Sausage Italian turkey smoked', 'Kielbasa, Polish, turkey and beef, smoked']);
+    for (const c of turkey) {
+      expect(c).toMatchObject({ massRatio: 1, band: [0.9, 1.1], partial: true });
+      // USDA SR28: at most two thirds of the pork link's fat, at least as much protein
+      expect(c.per100g.fatG).toBeLessThan((2 / 3) * byNdb.get('07074')!.per100g.fatG);
+      expect(c.per100g.proteinG).toBeGreaterThanOrEqual(byNdb.get('07074')!.per100g.proteinG);
+    }
+    // the cured-meat rule still lets the cook use half of the pork links instead
+    expect(r.lines[1].keepScale).toEqual([0.5, 1]);
+    const already = recipeCandidates(engine, [at('07934', 'turkey kielbasa', 340), at('06194', 'chicken broth', 747)], none());
+    expect(already.lines[0].candidates.map((c) => c.rule?.id)).not.toContain('smoked-sausage-to-turkey-smoked-sausage');
+  });
+
+  it('lo mein: eggs stirred into noodles with soy sauce are scrambled (whites for all of them); a carbonara without soy keeps them as its sauce', () => {
+    const loMein = [
+      at('20109', 'lo mein egg noodles', 227),
+      at('05096', 'boneless skinless chicken thighs, thinly sliced', 454),
+      at('04044', 'vegetable oil', 41),
+      at('01123', 'large eggs, beaten', 100),
+      at('11109', 'shredded cabbage', 140),
+      at('16124', 'soy sauce', 64),
+    ];
+    const r = recipeCandidates(engine, loMein, none());
+    expect(r.dishType).toBe('stovetop-sauce');
+    expect(r.lines[3].role).toBe('main-protein');
+    const whites = byRule(r.lines[3], 'egg-to-whites');
+    expect(whites[0]).toMatchObject({ name: 'Egg, white, raw, fresh', maxShare: 1 });
+    expect(whites[0].massRatio).toBeCloseTo(1.32, 9);
+    const noSoy = recipeCandidates(engine, loMein.slice(0, 5), none());
+    expect(noSoy.lines[3].role).toBe('sauce');
+  });
+
+  it('a creamy skillet chicken: cream poured over the browned meat simmers into a pan sauce, so it may be half-and-half or evaporated skim milk, 1:1 within ±10 %', () => {
+    const skillet = [
+      at('05062', 'boneless skinless chicken breasts', 680),
+      at('04053', 'olive oil', 27),
+      at('06194', 'chicken broth', 249),
+      at('01053', 'heavy cream', 238),
+      at('01032', 'grated Parmesan cheese', 50),
+    ];
+    const r = recipeCandidates(engine, skillet, none());
+    expect(r.dishType).toBe('griddle-saute');
+    expect(r.lines[3]).toMatchObject({ role: 'cream', context: 'boiled-sauce' });
+    const lighter = byRule(r.lines[3], 'cream-to-half-and-half-or-evaporated-skim');
+    expect(lighter.map((c) => c.name)).toEqual(['Cream, fluid, half and half', 'Milk, canned, evaporated, nonfat, with added vitamin A and vitamin D']);
+    expect(lighter[0]).toMatchObject({ massRatio: 1, band: [0.9, 1.1] });
+    // never yogurt or cottage cheese, which split in a simmered sauce
+    expect(r.lines[3].candidates.map((c) => c.name)).not.toEqual(expect.arrayContaining([expect.stringMatching(/yogurt|cottage/i)]));
+    // the oil stays the pan's
+    expect(r.lines[1].context).toBe('griddle-saute');
+  });
+});
+
 describe('issue 10 round 6: lean cuts, a lamb pie and its mash, cookie dough, quick breads, syrup at the table (invented recipes)', () => {
   it('stewing chuck trimmed of its fat, 1:1 by weight of meat (USDA SR28 separable lean 23603 against lean and fat 13809), up to ×1.5 in a stew', () => {
     const stew = [
