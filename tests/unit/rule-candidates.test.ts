@@ -410,6 +410,32 @@ describe('issue 10 round 7 (savoury mains): lean pork shoulder, smoked turkey sa
     expect(already.lines[0].candidates.map((c) => c.rule?.id)).not.toContain('smoked-sausage-to-turkey-smoked-sausage');
   });
 
+  it('calzone fillings: 96 % fat-free deli ham for regular sliced ham and turkey salami for hard salami, 1:1 by weight within ±10 % (USDA SR28)', () => {
+    const calzones = [
+      at('20081', 'all-purpose flour', 375),
+      at('18375', 'instant yeast', 9),
+      at('14411', 'warm water', 237),
+      at('04053', 'olive oil', 27),
+      at('07029', 'sliced deli ham', 227),
+      at('07071', 'sliced salami', 113),
+      at('01026', 'shredded mozzarella cheese', 168),
+    ];
+    const r = recipeCandidates(engine, calzones, none());
+    const ham = byRule(r.lines[4], 'deli-ham-to-extra-lean');
+    expect(ham.map((c) => c.name)).toEqual(['Ham, sliced, pre-packaged, deli meat (96% fat free, water added)']);
+    expect(ham[0]).toMatchObject({ massRatio: 1, band: [0.9, 1.1] });
+    // USDA SR28: half the fat or less, at least the protein of the regular slices
+    expect(ham[0].per100g.fatG).toBeLessThan(0.5 * byNdb.get('07029')!.per100g.fatG);
+    expect(ham[0].per100g.proteinG).toBeGreaterThanOrEqual(byNdb.get('07029')!.per100g.proteinG);
+    const salami = byRule(r.lines[5], 'hard-salami-to-turkey-salami');
+    expect(salami.map((c) => c.name)).toEqual(['Salami, cooked, turkey']);
+    expect(salami[0]).toMatchObject({ massRatio: 1, band: [0.9, 1.1], partial: true });
+    expect(salami[0].per100g.kcal).toBeLessThan(0.5 * byNdb.get('07071')!.per100g.kcal);
+    // a turkey salami is not offered turkey salami again
+    const turkey = recipeCandidates(engine, [at('07070', 'turkey salami', 113), at('01026', 'mozzarella', 168)], none());
+    expect(turkey.lines[0].candidates.map((c) => c.rule?.id)).not.toContain('hard-salami-to-turkey-salami');
+  });
+
   it('lo mein: eggs stirred into noodles with soy sauce are scrambled (whites for all of them); a carbonara without soy keeps them as its sauce', () => {
     const loMein = [
       at('20109', 'lo mein egg noodles', 227),
