@@ -20,6 +20,10 @@ const GREASE_WORDS = /\b(for (the )?(pan|griddle|skillet|greasing|frying)|to gre
 /** a fat that fries in a pan or on a griddle (not one that greases a baking dish) */
 const PAN_WORDS = /\bfor (the )?(pan|griddle|skillet|frying)\b/i;
 const COATING_WORDS = /\b(for (dredging|coating|dusting|breading)|dredg|dust(ing)?)\b/i;
+// an egg beaten to brush a crust or a calzone is a wash, not the dough's structure
+const WASH_WORDS = /\b(for (brushing|the egg wash|glazing)|egg wash|to brush)\b/i;
+// crumbs and egg bind mince (a meatloaf, meatballs); around a whole cut (a cutlet, a chop) they are its breading
+const MINCE_WORDS = /\b(ground|minced?|sausage)\b/i;
 const BAKE_TYPES: readonly DishType[] = ['leavened-bake', 'batter', 'dough'];
 const MIXED_TYPES: readonly DishType[] = ['assembled-bake', 'stovetop-sauce', 'simmered-dish', 'griddle-saute'];
 const PASTA_WORDS = /\b(pasta|spaghetti|macaroni|noodles?|linguine|fettuccine|penne|rigatoni|bucatini|tagliatelle)\b/i;
@@ -157,6 +161,8 @@ function roleOf(
     rouxFat: number;
     riceNotPasta: boolean;
     wokSauce: boolean;
+    /** crumbs, egg and flour coat whole pieces of meat (no mince in the recipe) */
+    breaded: boolean;
     enrichment: ReadonlySet<number>;
   },
   index: number,
@@ -184,18 +190,20 @@ function roleOf(
     case 'liquid':
       return bake ? 'structure' : 'cooking-liquid';
     case 'flour':
-      if (COATING_WORDS.test(note)) return 'coating';
+      if (COATING_WORDS.test(note) || (ctx.breaded && !bake)) return 'coating';
       return bake ? 'structure' : 'thickener';
     case 'starch':
     case 'wrap':
       return bake ? 'structure' : 'starch';
     case 'crumbs':
       if (topping) return 'topping';
+      if (ctx.breaded) return 'coating';
       if (has('meat') && has('egg') && !COATING_WORDS.test(note)) return 'binder';
       return dish === 'assembled-bake' ? 'topping' : 'coating';
     case 'egg':
+      if (WASH_WORDS.test(`${note} ${line.phrase}`)) return 'coating';
       if (bake) return 'structure';
-      if (has('meat') && has('crumbs')) return 'binder';
+      if (has('meat') && has('crumbs')) return ctx.breaded ? 'coating' : 'binder';
       if (dish === 'assembled-bake' && has('fresh-cheese')) return 'binder';
       // eggs set with milk in the oven: a strata, quiche or breakfast casserole
       if (dish === 'assembled-bake' && has('milk', 'cream')) return 'custard';
@@ -307,7 +315,10 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
   const starchNames = lines.filter((_, i) => kinds[i] === 'starch').map((l) => `${l.phrase} ${l.food?.name ?? ''}`);
   const riceNotPasta = starchNames.some((n) => /\brice\b/i.test(n)) && !starchNames.some((n) => PASTA_WORDS.test(n));
   const wokSauce = lines.some((l) => WOK_SAUCE_WORDS.test(`${l.phrase} ${l.food?.name ?? ''}`));
-  const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat, riceNotPasta, wokSauce, enrichment };
+  const meatLines = lines.filter((_, i) => kinds[i] === 'meat');
+  const breaded =
+    meatLines.length > 0 && kinds.includes('crumbs') && kinds.includes('egg') && !meatLines.some((l) => MINCE_WORDS.test(`${l.phrase} ${l.food?.name ?? ''}`));
+  const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat, riceNotPasta, wokSauce, breaded, enrichment };
   // mince bound with crumbs and egg (a loaf, meatballs) or a breaded piece is shaped into the portion
   const shaped = kinds.includes('meat') && kinds.includes('crumbs') && kinds.includes('egg');
   const words = lines.map((l) => `${l.phrase} ${l.comment ?? ''}`);
