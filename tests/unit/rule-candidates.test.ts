@@ -362,56 +362,85 @@ describe('issue 10 round 5: a baked cheese sauce, half-cauliflower fried rice (i
 });
 
 describe('issue 10 round 7 (savoury mains): lean pork shoulder, smoked turkey sausage, lo mein eggs, a creamy pan sauce (invented recipes)', () => {
-  it('braising pork shoulder trimmed of its fat, 1:1 by weight of meat (USDA SR28 separable lean 10072 against lean and fat 10070), up to ×1.5 in a braise', () => {
-    const paprikash = [
-      at('10070', 'pork shoulder, cut into cubes', 907),
-      at('04044', 'vegetable oil', 27),
-      at('11282', 'onions, chopped', 220),
-      at('02028', 'sweet paprika', 14),
-      at('20081', 'all-purpose flour', 16),
-      at('06194', 'chicken broth', 374),
-      at('01056', 'sour cream', 230),
-      at('20109', 'egg noodles', 340),
-    ];
-    const r = recipeCandidates(engine, paprikash, none());
-    const lean = byRule(r.lines[0], 'pork-shoulder-to-trimmed-lean');
-    expect(lean.map((c) => c.name)).toEqual(['Pork, fresh, shoulder, whole, lean only, raw']);
-    expect(lean[0]).toMatchObject({ massRatio: 1, band: [0.9, 1.5] });
-    // the separable lean (USDA SR28) has under half the untrimmed cut's fat and more protein per gram
-    expect(lean[0].per100g.fatG).toBeLessThan(0.5 * byNdb.get('10070')!.per100g.fatG);
-    expect(lean[0].per100g.proteinG).toBeGreaterThan(byNdb.get('10070')!.per100g.proteinG);
-    // an already lean shoulder is not "trimmed" again
-    const trimmed = recipeCandidates(engine, [at('10072', 'lean pork shoulder', 907), at('06194', 'chicken broth', 960)], none());
-    expect(trimmed.lines[0].candidates.map((c) => c.rule?.id)).not.toContain('pork-shoulder-to-trimmed-lean');
-  });
-
-  it('smoked pork sausage or kielbasa: smoked turkey sausage, 1:1 by weight within ±10 %, or half of it kept; never offered for a turkey sausage', () => {
-    const jambalaya = [
-      at('05096', 'boneless skinless chicken thighs, cubed', 454),
-      at('07074', 'smoked sausage, sliced', 340),
-      at('04044', 'vegetable oil', 27),
-      at('11282', 'onion, chopped', 110),
-      at('20044', 'long-grain white rice', 278),
-      at('11531', 'diced tomatoes', 411),
-      at('06194', 'chicken broth', 747),
-    ];
-    const r = recipeCandidates(engine, jambalaya, none());
-    const turkey = byRule(r.lines[1], 'smoked-sausage-to-turkey-smoked-sausage');
-    expect(turkey.map((c) => c.name)).toEqual(['Sausage Italian turkey smoked', 'Kielbasa, Polish, turkey and beef, smoked']);
-    for (const c of turkey) {
-      expect(c).toMatchObject({ massRatio: 1, band: [0.9, 1.1], partial: true });
-      // USDA SR28: at most two thirds of the pork link's fat, at least as much protein
-      expect(c.per100g.fatG).toBeLessThan((2 / 3) * byNdb.get('07074')!.per100g.fatG);
-      expect(c.per100g.proteinG).toBeGreaterThanOrEqual(byNdb.get('07074')!.per100g.proteinG);
-    }
-    // the cured-meat rule still lets the cook use half of the pork links instead
-    expect(r.lines[1].keepScale).toEqual([0.5, 1]);
-    const already = recipeCandidates(engine, [at('07934', 'turkey kielbasa', 340), at('06194', 'chicken broth', 747)], none());
-    expect(already.lines[0].candidates.map((c) => c.rule?.id)).not.toContain('smoked-sausage-to-turkey-smoked-sausage');
-  });
-
-  it('calzone fillings: 96 % fat-free deli ham for regular sliced ham and turkey salami for hard salami, 1:1 by weight within ±10 % (USDA SR28)', () => {
-    const calzones = [
+  /**
+   * Leaner forms of a written food (USDA SR28), each in an invented recipe: the rule offers exactly these foods with
+   * this quantity on the line, each with under `fatShare` of the written food's fat and, where `sameProtein`, at least
+   * its protein; and never offers them again for a food already in the lean form.
+   */
+  const LEANER_FORMS: {
+    title: string;
+    recipe: () => CandidateLine[];
+    line: number;
+    rule: string;
+    names: string[];
+    quantity: Record<string, unknown>;
+    fatShare: number;
+    sameProtein: boolean;
+    alreadyLean: () => CandidateLine;
+  }[] = [
+    {
+      title: 'braising pork shoulder trimmed of its fat (separable lean 10072 for lean and fat 10070), 1:1 by weight of meat, up to ×1.5 in a paprikash',
+      recipe: () => [
+        at('10070', 'pork shoulder, cut into cubes', 907),
+        at('04044', 'vegetable oil', 27),
+        at('11282', 'onions, chopped', 220),
+        at('02028', 'sweet paprika', 14),
+        at('20081', 'all-purpose flour', 16),
+        at('06194', 'chicken broth', 374),
+        at('01056', 'sour cream', 230),
+        at('20109', 'egg noodles', 340),
+      ],
+      line: 0,
+      rule: 'pork-shoulder-to-trimmed-lean',
+      names: ['Pork, fresh, shoulder, whole, lean only, raw'],
+      quantity: { massRatio: 1, band: [0.9, 1.5] },
+      fatShare: 0.5,
+      sameProtein: true,
+      alreadyLean: () => at('10072', 'lean pork shoulder', 907),
+    },
+    {
+      title: 'smoked turkey sausage for smoked pork links in a jambalaya, 1:1 by weight within ±10 %, or for half',
+      recipe: () => [
+        at('05096', 'boneless skinless chicken thighs, cubed', 454),
+        at('07074', 'smoked sausage, sliced', 340),
+        at('04044', 'vegetable oil', 27),
+        at('20044', 'long-grain white rice', 278),
+        at('11531', 'diced tomatoes', 411),
+        at('06194', 'chicken broth', 747),
+      ],
+      line: 1,
+      rule: 'smoked-sausage-to-turkey-smoked-sausage',
+      names: ['Sausage Italian turkey smoked', 'Kielbasa, Polish, turkey and beef, smoked'],
+      quantity: { massRatio: 1, band: [0.9, 1.1], partial: true },
+      fatShare: 2 / 3,
+      sameProtein: true,
+      alreadyLean: () => at('07934', 'turkey kielbasa', 340),
+    },
+    {
+      title: "96 % fat-free deli ham for a calzone's regular sliced ham, 1:1 by weight within ±10 %",
+      recipe: () => calzones(),
+      line: 4,
+      rule: 'deli-ham-to-extra-lean',
+      names: ['Ham, sliced, pre-packaged, deli meat (96% fat free, water added)'],
+      quantity: { massRatio: 1, band: [0.9, 1.1] },
+      fatShare: 0.5,
+      sameProtein: true,
+      alreadyLean: () => at('07028', 'extra-lean deli ham', 227),
+    },
+    {
+      title: "turkey salami for a calzone's hard salami, 1:1 by weight within ±10 %, or for half (most of its protein)",
+      recipe: () => calzones(),
+      line: 5,
+      rule: 'hard-salami-to-turkey-salami',
+      names: ['Salami, cooked, turkey'],
+      quantity: { massRatio: 1, band: [0.9, 1.1], partial: true },
+      fatShare: 1 / 3,
+      sameProtein: false,
+      alreadyLean: () => at('07070', 'turkey salami', 113),
+    },
+  ];
+  function calzones() {
+    return [
       at('20081', 'all-purpose flour', 375),
       at('18375', 'instant yeast', 9),
       at('14411', 'warm water', 237),
@@ -420,20 +449,27 @@ describe('issue 10 round 7 (savoury mains): lean pork shoulder, smoked turkey sa
       at('07071', 'sliced salami', 113),
       at('01026', 'shredded mozzarella cheese', 168),
     ];
-    const r = recipeCandidates(engine, calzones, none());
-    const ham = byRule(r.lines[4], 'deli-ham-to-extra-lean');
-    expect(ham.map((c) => c.name)).toEqual(['Ham, sliced, pre-packaged, deli meat (96% fat free, water added)']);
-    expect(ham[0]).toMatchObject({ massRatio: 1, band: [0.9, 1.1] });
-    // USDA SR28: half the fat or less, at least the protein of the regular slices
-    expect(ham[0].per100g.fatG).toBeLessThan(0.5 * byNdb.get('07029')!.per100g.fatG);
-    expect(ham[0].per100g.proteinG).toBeGreaterThanOrEqual(byNdb.get('07029')!.per100g.proteinG);
-    const salami = byRule(r.lines[5], 'hard-salami-to-turkey-salami');
-    expect(salami.map((c) => c.name)).toEqual(['Salami, cooked, turkey']);
-    expect(salami[0]).toMatchObject({ massRatio: 1, band: [0.9, 1.1], partial: true });
-    expect(salami[0].per100g.kcal).toBeLessThan(0.5 * byNdb.get('07071')!.per100g.kcal);
-    // a turkey salami is not offered turkey salami again
-    const turkey = recipeCandidates(engine, [at('07070', 'turkey salami', 113), at('01026', 'mozzarella', 168)], none());
-    expect(turkey.lines[0].candidates.map((c) => c.rule?.id)).not.toContain('hard-salami-to-turkey-salami');
+  }
+
+  it.each(LEANER_FORMS)('$title', (c) => {
+    const r = recipeCandidates(engine, c.recipe(), none());
+    const offers = byRule(r.lines[c.line], c.rule);
+    expect(offers.map((o) => o.name)).toEqual(c.names);
+    expect(r.lines[c.line].candidates[0].original).toBe(true);
+    const written = r.lines[c.line].candidates[0].per100g;
+    for (const o of offers) {
+      expect(o).toMatchObject(c.quantity);
+      expect(o.per100g.fatG).toBeLessThan(c.fatShare * written.fatG);
+      if (c.sameProtein) expect(o.per100g.proteinG).toBeGreaterThanOrEqual(written.proteinG);
+      else expect(o.per100g.kcal).toBeLessThan(0.5 * written.kcal);
+    }
+    const lean = recipeCandidates(engine, [c.alreadyLean(), at('06194', 'chicken broth', 747)], none());
+    expect(lean.lines[0].candidates.map((o) => o.rule?.id)).not.toContain(c.rule);
+  });
+
+  it('the cured-meat rule still lets the cook use half of the smoked pork links instead', () => {
+    const r = recipeCandidates(engine, LEANER_FORMS[1].recipe(), none());
+    expect(r.lines[1].keepScale).toEqual([0.5, 1]);
   });
 
   it('lo mein: eggs stirred into noodles with soy sauce are scrambled (whites for all of them); a carbonara without soy keeps them as its sauce', () => {
