@@ -104,6 +104,8 @@ function isCanned(food: CatalogueFood | null): boolean {
 /** "undrained", "with their liquid": the can is used whole. */
 const SAYS_UNDRAINED =
   /\bundrained\b|\bnot drained\b|\bdo(?:n['’]t| not) drain\b|\bwith (?:its|their|the) (?:liquid|juices?|brine)\b|\band (?:its|their) liquid\b/i;
+/** SR28's "Vegetables and Vegetable Products". */
+const VEGETABLE_GROUP = '11';
 /** SR28's "Legumes and Legume Products". */
 const LEGUME_GROUP = '16';
 /** Canned legumes eaten in their sauce, never drained. */
@@ -340,11 +342,21 @@ function matchPhrase(matcher: FoodMatcher, parsed: ParsedLine, input: string, by
       const enough = saysCanned ? MATCH_CONFIDENCE_FLOOR : VARIANT_SHARE * match.confidence;
       // "1 can coconut cream" is not the sweetened cream of coconut: a can adds no sugar the line did not ask for.
       const addsSugar = /\bsweetened\b/i.test(canned.food?.name ?? '') && !/\bsweet/i.test(phrase);
-      if (isCanned(canned.food) && canned.confidence >= enough && !addsSugar) {
+      // "canned sweet potato puree" is no canned tomato puree: the canned food keeps the food's kind.
+      const otherFood = match.food !== null && canned.food !== null && !sameKind(canned.food, match.food, 1);
+      if (isCanned(canned.food) && canned.confidence >= enough && !addsSugar && !otherFood) {
         match = canned;
         break;
       }
     }
+  }
+
+  // "1 green chili, finely chopped": a vegetable counted in pieces, not by the can, is the fresh one
+  // even where recipes by the cup mean the canned food ("½ cup green chiles").
+  if (!byCan && parsed.unit === null && parsed.quantity !== null && FRESH && isCanned(match.food) && match.food?.foodGroup === VEGETABLE_GROUP) {
+    const fresh = honouringFood([...match.alternatives, ...matcher.search(phrase, 25).map((h) => h.food)], [FRESH], match.food, phrase);
+    if (fresh && /\braw\b/i.test(fresh.name))
+      match = { ...match, food: fresh, alternatives: [match.food, ...match.alternatives.filter((f) => f.id !== fresh.id)] };
   }
 
   // "1 can lentils", "2 (5 oz) cans lentils": SR28 has no canned lentils; their drained seeds are the

@@ -101,6 +101,12 @@ const NAMED_OTHERWISE: Record<string, string> = {
   bicarb: 'bicarbonate of soda, SR28 "baking soda"',
   'soda pop': 'a soft drink; cola, the commonest, stands in, flagged',
   'soft drink': 'as soda pop',
+  marsala: 'a fortified wine from Sicily, cooked as dry sherry is (common practice), SR28 "wine, dessert, dry"',
+  mesclun: 'a mix of young salad leaves (common practice); green leaf lettuce stands in, flagged',
+  'spring mix': 'as mesclun',
+  gochugaru: 'Korean red chile flakes (common practice); red pepper (cayenne) stands in, flagged',
+  champagne: 'a sparkling white wine; white table wine stands in, flagged',
+  prosecco: 'as champagne',
 };
 
 function keyWords(text: string): Set<string> {
