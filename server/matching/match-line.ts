@@ -13,6 +13,7 @@ import { FOOD_MODIFIERS, modifiersAskedBy, positivelyHonours, unmetModifiers, ty
 import { PREPARATION_WORDS, STOP_WORDS, words } from './normalise-phrase';
 import { orChoices } from './or-choices';
 import { isDrainedSolids } from './drained-share';
+import { STATE_WORDS } from './food-index';
 
 /** Under this confidence a match is shown as "check this match". */
 export const CHECK_MATCH_BELOW = 0.6;
@@ -155,6 +156,9 @@ function honouringFood(candidates: readonly CatalogueFood[], asked: readonly Foo
   for (const f of candidates) {
     if (f.id === matched.id || f.branded || !asked.every((m) => positivelyHonours(f, m))) continue;
     if (sameHead !== null && words(f.name)[0] !== sameHead) continue;
+    // Another version of the same food, of its SR28 group or its name's head: "coconut sugar" is no
+    // "Sauce, peanut, made from coconut, water, sugar, peanuts" (a sauce that lists both words).
+    if (f.foodGroup !== matched.foodGroup && words(f.name)[0] !== words(matched.name)[0]) continue;
     const fw = new Set(words(f.name));
     if (kept.every((w) => fw.has(w) || asked.some((m) => m.asks.includes(w)))) return f;
   }
@@ -256,6 +260,17 @@ function sodaPop(matcher: FoodMatcher, parsed: ParsedLine, phrase: string, match
   return pop.food ? pop : null;
 }
 
+/** "toasted and ground cumin seeds": two words that say how the food is, joined by "and". */
+const JOINED_STATES = /^\s*([a-z]+)\s+and\s+([a-z]+)\s+(?=\S)/i;
+const HOW_A_FOOD_IS = (w: string) => STATE_WORDS.has(w) || PREPARATION_WORDS.has(w) || w === 'ground' || w === 'dried';
+
+/** The joined states read as one description of the food ("toasted ground cumin seeds"), not a food "toasted" and another. */
+function statesJoined(phrase: string): string {
+  const m = JOINED_STATES.exec(phrase);
+  if (!m || !HOW_A_FOOD_IS(m[1].toLowerCase()) || !HOW_A_FOOD_IS(m[2].toLowerCase())) return phrase;
+  return `${m[1]} ${m[2]} ${phrase.slice(m[0].length)}`;
+}
+
 export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string, byChoices = true): LineMatch {
   const own = matchPhrase(matcher, parsed, input, byChoices);
   if (own.food || !byChoices) return own;
@@ -270,7 +285,8 @@ function matchPhrase(matcher: FoodMatcher, parsed: ParsedLine, input: string, by
   const cut = MINCED_MEAT.test(named) && /\b(?:minced|ground)\b/i.test(parsed.preparation ?? '') ? `ground ${named.trim()}` : named;
   const juiced = JUICED.test(`${parsed.preparation ?? ''}`) && CITRUS.test(named) && !/\bjuice\b/i.test(named) ? `${named} juice` : cut;
   // "4 chicken breast halves, with skin and bone": SR28's "meat and skin" food, not the skinless one.
-  const phrase = SKIN_ON.test(`${parsed.preparation ?? ''} ${parsed.comment ?? ''}`) && !/\bskin/i.test(juiced) ? `skin-on ${juiced}` : juiced;
+  const skinOn = SKIN_ON.test(`${parsed.preparation ?? ''} ${parsed.comment ?? ''}`) && !/\bskin/i.test(juiced) ? `skin-on ${juiced}` : juiced;
+  const phrase = statesJoined(skinOn);
   // "oat or almond milk": the cook's first choice the catalogue has; else the phrase as a whole
   // when it has a food; else the first choice with a food to check.
   const choices = byChoices && phrase.length <= LONGEST_CHOICE_PHRASE ? orChoices(phrase).slice(0, MAX_CHOICES) : [];

@@ -455,4 +455,15 @@ describe('classes found in batch 4 (tuning half) and the unlabelled lines', () =
   ])('%s → SR28 %s (flagged: %s)', (input, ndb, sr28, flagged) => {
     expect(expectFood(input, ndb, sr28).checkMatch).toBe(flagged);
   });
+
+  it('"toasted and ground cumin seeds": states joined by "and" describe the food, they name none', () => {
+    expectFood('½ tsp toasted and ground cumin seeds', '02014', /^Spices, cumin seed$/);
+    expectFood('1 tsp toasted and ground coriander seeds', '02013', /^Spices, coriander seed$/);
+  });
+
+  it('a version honouring a modifier is the same food, never another food that lists the words: coconut sugar is no peanut sauce', () => {
+    const l = expectFood('1 tbsp coconut sugar', '19335', /^Sugars, granulated$/);
+    expect(l.missingModifier).toBe('coconut');
+    expect(l.checkMatch).toBe(true);
+  });
 });
