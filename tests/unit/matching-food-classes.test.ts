@@ -452,6 +452,7 @@ describe('classes found in batch 4 (tuning half) and the unlabelled lines', () =
     ['8 oz mixed greens (any combination of mesclun, arugula, sorrel, etc.)', '11253', /^Lettuce, green leaf, raw$/, true],
     ['⅓ c gochugaru', '02031', /^Spices, pepper, red or cayenne$/, true],
     ['5 oz chilled Champagne', '14106', /^Alcoholic beverage, wine, table, white$/, true],
+    ['1 ½ c lingonberry preserves', '19297', /^Jams and preserves$/, true],
   ])('%s → SR28 %s (flagged: %s)', (input, ndb, sr28, flagged) => {
     expect(expectFood(input, ndb, sr28).checkMatch).toBe(flagged);
   });
