@@ -73,7 +73,29 @@ const GENERIC_WORDS = new Set([
 ]);
 /** …except these, which recipes use for one plain food (all-purpose flour, granulated sugar, table salt, black pepper, whole milk). */
 const PLAIN_DEFAULTS = new Set(['flour', 'sugar', 'salt', 'pepper', 'milk']);
-const GENERIC_ADJECTIVES = new Set(['neutral', 'cooking', 'mixed', 'assorted', 'favorite', 'favourite', 'any', 'other', 'your', 'plain', 'some', 'kind']);
+const GENERIC_ADJECTIVES = new Set([
+  'neutral',
+  'cooking',
+  'mixed',
+  'assorted',
+  'favorite',
+  'favourite',
+  'any',
+  'other',
+  'your',
+  'plain',
+  'some',
+  'kind',
+  // "2 whole fish (such as branzino)", "semisoft cheese such as Fontina": a form or texture names no one food.
+  'whole',
+  'fresh',
+  'firm',
+  'semisoft',
+  'soft',
+  'hard',
+  'aged',
+  'melting',
+]);
 
 /** Pieces only a fresh plant has: "3 sprigs tarragon", "a bunch of mint", "¼ cup tarragon leaves". */
 const FRESH_PIECES = /\b(?:leaf|leaves|sprigs?|bunch(?:es)?|handfuls?|stems?)\b/i;

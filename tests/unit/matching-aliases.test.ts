@@ -107,6 +107,9 @@ const NAMED_OTHERWISE: Record<string, string> = {
   gochugaru: 'Korean red chile flakes (common practice); red pepper (cayenne) stands in, flagged',
   champagne: 'a sparkling white wine; white table wine stands in, flagged',
   prosecco: 'as champagne',
+  aleppo: 'Aleppo pepper, a Syrian red chile flake (common practice); red pepper (cayenne) stands in, flagged',
+  'urfa biber': 'a Turkish dried red chile flake (common practice); red pepper (cayenne) stands in, flagged',
+  galangal: 'a rhizome of the ginger family (common practice); ginger root stands in, flagged',
 };
 
 function keyWords(text: string): Set<string> {

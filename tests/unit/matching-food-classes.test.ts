@@ -467,4 +467,25 @@ describe('classes found in batch 4 (tuning half) and the unlabelled lines', () =
     expect(l.missingModifier).toBe('coconut');
     expect(l.checkMatch).toBe(true);
   });
+
+  it.each([
+    ['2 1½-pound whole fish (such as branzino), gutted and cleaned', 'whole fish'],
+    ['3 ½ oz semisoft cheese such as Fontina or Taleggio, cut into pieces', 'semisoft cheese'],
+  ])('a form or texture before a generic word names no one food: %s asks to be checked', (input, phrase) => {
+    const l = line(input);
+    expect(l.checkMatch).toBe(true);
+    expect(l.warnings.join(' ')).toContain(`“${phrase}” could be many foods`);
+  });
+
+  it.each([
+    ['¼ tsp grated lime zest (from 1 lime)', 'lime zest', '09156', /^Lemon peel, raw$/],
+    ['¼ tsp grapefruit zest', 'grapefruit zest', '09216', /^Orange peel, raw$/],
+    ['½ tsp Aleppo pepper or Chile-Spice Mix', 'aleppo pepper', '02031', /^Spices, pepper, red or cayenne$/],
+    ['1 tsp ground galangal', 'ground galangal', '02021', /^Spices, ginger, ground$/],
+  ])('%s: a citrus zest, chile or rhizome SR28 lacks stands in for its nearest food, flagged, never 0 g', (input, phrase, ndb, sr28) => {
+    const l = expectFood(input, ndb, sr28);
+    expect(l.checkMatch).toBe(true);
+    expect(l.grams).toBeGreaterThan(0);
+    expect(l.warnings.join(' ')).toContain(`“${phrase}”`);
+  });
 });
