@@ -95,6 +95,12 @@ export const FOOD_MODIFIERS: FoodModifier[] = [
   // "pomegranate molasses" is no cane molasses, "mango chutney" no plain chutney: the fruit a food is made from.
   { label: 'pomegranate', asks: ['pomegranate'] },
   { label: 'mango', asks: ['mango'] },
+  // "rye flour" is no wheat flour, "spelt flour" no all-purpose: the grain a flour or bread is milled from.
+  { label: 'rye', asks: ['rye'], neutralFor: ['whiskey', 'whisky'] },
+  { label: 'spelt', asks: ['spelt'] },
+  { label: 'buckwheat', asks: ['buckwheat'] },
+  // "fermented black beans" are salted fermented soybeans, not canned black beans.
+  { label: 'fermented', asks: ['fermented'] },
   // "candied ginger" is no raw ginger root.
   { label: 'candied', asks: ['candied'], honouredBy: [['candies'], ['candy'], ['candied'], ['glazed']] },
   // "sherry vinegar" is no distilled vinegar: SR28 has none made from sherry.

@@ -13,6 +13,7 @@ import { FOOD_MODIFIERS, modifiersAskedBy, positivelyHonours, unmetModifiers, ty
 import { PREPARATION_WORDS, STOP_WORDS, words } from './normalise-phrase';
 import { orChoices } from './or-choices';
 import { isDrainedSolids } from './drained-share';
+import { STATE_WORDS } from './food-index';
 
 /** Under this confidence a match is shown as "check this match". */
 export const CHECK_MATCH_BELOW = 0.6;
@@ -72,7 +73,29 @@ const GENERIC_WORDS = new Set([
 ]);
 /** …except these, which recipes use for one plain food (all-purpose flour, granulated sugar, table salt, black pepper, whole milk). */
 const PLAIN_DEFAULTS = new Set(['flour', 'sugar', 'salt', 'pepper', 'milk']);
-const GENERIC_ADJECTIVES = new Set(['neutral', 'cooking', 'mixed', 'assorted', 'favorite', 'favourite', 'any', 'other', 'your', 'plain', 'some', 'kind']);
+const GENERIC_ADJECTIVES = new Set([
+  'neutral',
+  'cooking',
+  'mixed',
+  'assorted',
+  'favorite',
+  'favourite',
+  'any',
+  'other',
+  'your',
+  'plain',
+  'some',
+  'kind',
+  // "2 whole fish (such as branzino)", "semisoft cheese such as Fontina": a form or texture names no one food.
+  'whole',
+  'fresh',
+  'firm',
+  'semisoft',
+  'soft',
+  'hard',
+  'aged',
+  'melting',
+]);
 
 /** Pieces only a fresh plant has: "3 sprigs tarragon", "a bunch of mint", "¼ cup tarragon leaves". */
 const FRESH_PIECES = /\b(?:leaf|leaves|sprigs?|bunch(?:es)?|handfuls?|stems?)\b/i;
@@ -104,6 +127,8 @@ function isCanned(food: CatalogueFood | null): boolean {
 /** "undrained", "with their liquid": the can is used whole. */
 const SAYS_UNDRAINED =
   /\bundrained\b|\bnot drained\b|\bdo(?:n['’]t| not) drain\b|\bwith (?:its|their|the) (?:liquid|juices?|brine)\b|\band (?:its|their) liquid\b/i;
+/** SR28's "Vegetables and Vegetable Products". */
+const VEGETABLE_GROUP = '11';
 /** SR28's "Legumes and Legume Products". */
 const LEGUME_GROUP = '16';
 /** Canned legumes eaten in their sauce, never drained. */
@@ -153,6 +178,9 @@ function honouringFood(candidates: readonly CatalogueFood[], asked: readonly Foo
   for (const f of candidates) {
     if (f.id === matched.id || f.branded || !asked.every((m) => positivelyHonours(f, m))) continue;
     if (sameHead !== null && words(f.name)[0] !== sameHead) continue;
+    // Another version of the same food, of its SR28 group or its name's head: "coconut sugar" is no
+    // "Sauce, peanut, made from coconut, water, sugar, peanuts" (a sauce that lists both words).
+    if (f.foodGroup !== matched.foodGroup && words(f.name)[0] !== words(matched.name)[0]) continue;
     const fw = new Set(words(f.name));
     if (kept.every((w) => fw.has(w) || asked.some((m) => m.asks.includes(w)))) return f;
   }
@@ -254,6 +282,17 @@ function sodaPop(matcher: FoodMatcher, parsed: ParsedLine, phrase: string, match
   return pop.food ? pop : null;
 }
 
+/** "toasted and ground cumin seeds": two words that say how the food is, joined by "and". */
+const JOINED_STATES = /^\s*([a-z]+)\s+and\s+([a-z]+)\s+(?=\S)/i;
+const HOW_A_FOOD_IS = (w: string) => STATE_WORDS.has(w) || PREPARATION_WORDS.has(w) || w === 'ground' || w === 'dried';
+
+/** The joined states read as one description of the food ("toasted ground cumin seeds"), not a food "toasted" and another. */
+function statesJoined(phrase: string): string {
+  const m = JOINED_STATES.exec(phrase);
+  if (!m || !HOW_A_FOOD_IS(m[1].toLowerCase()) || !HOW_A_FOOD_IS(m[2].toLowerCase())) return phrase;
+  return `${m[1]} ${m[2]} ${phrase.slice(m[0].length)}`;
+}
+
 export function matchLine(matcher: FoodMatcher, parsed: ParsedLine, input: string, byChoices = true): LineMatch {
   const own = matchPhrase(matcher, parsed, input, byChoices);
   if (own.food || !byChoices) return own;
@@ -268,7 +307,8 @@ function matchPhrase(matcher: FoodMatcher, parsed: ParsedLine, input: string, by
   const cut = MINCED_MEAT.test(named) && /\b(?:minced|ground)\b/i.test(parsed.preparation ?? '') ? `ground ${named.trim()}` : named;
   const juiced = JUICED.test(`${parsed.preparation ?? ''}`) && CITRUS.test(named) && !/\bjuice\b/i.test(named) ? `${named} juice` : cut;
   // "4 chicken breast halves, with skin and bone": SR28's "meat and skin" food, not the skinless one.
-  const phrase = SKIN_ON.test(`${parsed.preparation ?? ''} ${parsed.comment ?? ''}`) && !/\bskin/i.test(juiced) ? `skin-on ${juiced}` : juiced;
+  const skinOn = SKIN_ON.test(`${parsed.preparation ?? ''} ${parsed.comment ?? ''}`) && !/\bskin/i.test(juiced) ? `skin-on ${juiced}` : juiced;
+  const phrase = statesJoined(skinOn);
   // "oat or almond milk": the cook's first choice the catalogue has; else the phrase as a whole
   // when it has a food; else the first choice with a food to check.
   const choices = byChoices && phrase.length <= LONGEST_CHOICE_PHRASE ? orChoices(phrase).slice(0, MAX_CHOICES) : [];
@@ -340,11 +380,21 @@ function matchPhrase(matcher: FoodMatcher, parsed: ParsedLine, input: string, by
       const enough = saysCanned ? MATCH_CONFIDENCE_FLOOR : VARIANT_SHARE * match.confidence;
       // "1 can coconut cream" is not the sweetened cream of coconut: a can adds no sugar the line did not ask for.
       const addsSugar = /\bsweetened\b/i.test(canned.food?.name ?? '') && !/\bsweet/i.test(phrase);
-      if (isCanned(canned.food) && canned.confidence >= enough && !addsSugar) {
+      // "canned sweet potato puree" is no canned tomato puree: the canned food keeps the food's kind.
+      const otherFood = match.food !== null && canned.food !== null && !sameKind(canned.food, match.food, 1);
+      if (isCanned(canned.food) && canned.confidence >= enough && !addsSugar && !otherFood) {
         match = canned;
         break;
       }
     }
+  }
+
+  // "1 green chili, finely chopped": a vegetable counted in pieces, not by the can, is the fresh one
+  // even where recipes by the cup mean the canned food ("½ cup green chiles").
+  if (!byCan && parsed.unit === null && parsed.quantity !== null && FRESH && isCanned(match.food) && match.food?.foodGroup === VEGETABLE_GROUP) {
+    const fresh = honouringFood([...match.alternatives, ...matcher.search(phrase, 25).map((h) => h.food)], [FRESH], match.food, phrase);
+    if (fresh && /\braw\b/i.test(fresh.name))
+      match = { ...match, food: fresh, alternatives: [match.food, ...match.alternatives.filter((f) => f.id !== fresh.id)] };
   }
 
   // "1 can lentils", "2 (5 oz) cans lentils": SR28 has no canned lentils; their drained seeds are the

@@ -72,6 +72,8 @@ const PRODUCT_HEADS = new Set([
   'jelly',
   'preserves',
   'butter',
+  'fat',
+  'grease',
 ]);
 /** Foods cooks offer whole against another's product: "butter or olive oil", "honey or maple syrup". */
 const STANDS_ALONE = new Set(['butter', 'ghee', 'lard', 'shortening', 'margarine', 'sugar', 'honey', 'water', 'salt', 'mayonnaise', 'yogurt', 'tamari']);

@@ -102,6 +102,15 @@ const NAMED_OTHERWISE: Record<string, string> = {
   bicarb: 'bicarbonate of soda, SR28 "baking soda"',
   'soda pop': 'a soft drink; cola, the commonest, stands in, flagged',
   'soft drink': 'as soda pop',
+  marsala: 'a fortified wine from Sicily, cooked as dry sherry is (common practice), SR28 "wine, dessert, dry"',
+  mesclun: 'a mix of young salad leaves (common practice); green leaf lettuce stands in, flagged',
+  'spring mix': 'as mesclun',
+  gochugaru: 'Korean red chile flakes (common practice); red pepper (cayenne) stands in, flagged',
+  champagne: 'a sparkling white wine; white table wine stands in, flagged',
+  prosecco: 'as champagne',
+  aleppo: 'Aleppo pepper, a Syrian red chile flake (common practice); red pepper (cayenne) stands in, flagged',
+  'urfa biber': 'a Turkish dried red chile flake (common practice); red pepper (cayenne) stands in, flagged',
+  galangal: 'a rhizome of the ginger family (common practice); ginger root stands in, flagged',
 };
 
 function keyWords(text: string): Set<string> {

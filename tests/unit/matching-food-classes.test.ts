@@ -411,4 +411,81 @@ describe('classes found in batch 4 (tuning half) and the unlabelled lines', () =
     expectFood('1 tsp soda', '18372', /^Leavening agents, baking soda$/);
     expect(line('1 c club soda').food?.sourceId).toBe('14121');
   });
+
+  it('"bacon or duck fat": a fat is the product of each choice, the rendered fat, not raw bacon', () => {
+    expectFood('1 tbsp bacon or duck fat, melted', '04609', /^Animal fat, bacon grease$/);
+    expectFood('2 tbsp duck fat', '04574', /^Fat, duck$/);
+  });
+
+  it('the grain a flour or bread is milled from names another food: rye, spelt', () => {
+    expectFood('1 c rye flour', '20063', /^Rye flour, dark$/);
+    // whole-grain rye flour is dark rye flour (*common practice*)
+    expectFood('106 g Whole-grain rye flour (30%)', '20063', /^Rye flour, dark$/);
+    expectFood('6 slices rye bread', '18060', /^Bread, rye$/);
+    const spelt = line('1 c spelt flour');
+    expect(spelt.missingModifier).toBe('spelt');
+    expect(spelt.checkMatch).toBe(true);
+    // rye whiskey is whiskey: the word changes nothing there
+    expect(expectFood('2 oz rye whiskey', '14052', /^Alcoholic beverage, distilled, whiskey/).checkMatch).toBe(false);
+  });
+
+  it('"fermented black beans" are no canned black beans: the line asks to be checked', () => {
+    const l = line('2 tbsp fermented black beans, minced');
+    expect(l.missingModifier).toBe('fermented');
+    expect(l.checkMatch).toBe(true);
+  });
+
+  it('a vegetable counted in pieces is the fresh one, though by the cup or can the recipe means it canned', () => {
+    expectFood('1 green chili, finely chopped', '11670', /^Peppers, hot chili, green, raw$/);
+    expectFood('½ c green chiles', '11329', /^Peppers, hot chili, green, canned/);
+    expectFood('1 (4 oz) can green chiles', '11329', /^Peppers, hot chili, green, canned/);
+  });
+
+  it("a canned food keeps the food's kind: canned sweet potato purée is not canned tomato purée", () => {
+    expectFood('½ c canned sweet potato puree (at room temperature)', '11514', /^Sweet potato, canned, mashed$/);
+    expectFood('1 (28 oz) can crushed tomatoes', '11693', /^Tomatoes, crushed, canned$/);
+  });
+
+  it.each([
+    ['2 tbsp marsala wine or apple juice', '14536', /^Alcoholic beverage, wine, dessert, dry$/, false],
+    ['2 blood oranges', '09200', /^Oranges, raw, all commercial varieties$/, false],
+    ['8 oz mixed greens (any combination of mesclun, arugula, sorrel, etc.)', '11253', /^Lettuce, green leaf, raw$/, true],
+    ['⅓ c gochugaru', '02031', /^Spices, pepper, red or cayenne$/, true],
+    ['5 oz chilled Champagne', '14106', /^Alcoholic beverage, wine, table, white$/, true],
+    ['1 ½ c lingonberry preserves', '19297', /^Jams and preserves$/, true],
+  ])('%s → SR28 %s (flagged: %s)', (input, ndb, sr28, flagged) => {
+    expect(expectFood(input, ndb, sr28).checkMatch).toBe(flagged);
+  });
+
+  it('"toasted and ground cumin seeds": states joined by "and" describe the food, they name none', () => {
+    expectFood('½ tsp toasted and ground cumin seeds', '02014', /^Spices, cumin seed$/);
+    expectFood('1 tsp toasted and ground coriander seeds', '02013', /^Spices, coriander seed$/);
+  });
+
+  it('a version honouring a modifier is the same food, never another food that lists the words: coconut sugar is no peanut sauce', () => {
+    const l = expectFood('1 tbsp coconut sugar', '19335', /^Sugars, granulated$/);
+    expect(l.missingModifier).toBe('coconut');
+    expect(l.checkMatch).toBe(true);
+  });
+
+  it.each([
+    ['2 1½-pound whole fish (such as branzino), gutted and cleaned', 'whole fish'],
+    ['3 ½ oz semisoft cheese such as Fontina or Taleggio, cut into pieces', 'semisoft cheese'],
+  ])('a form or texture before a generic word names no one food: %s asks to be checked', (input, phrase) => {
+    const l = line(input);
+    expect(l.checkMatch).toBe(true);
+    expect(l.warnings.join(' ')).toContain(`“${phrase}” could be many foods`);
+  });
+
+  it.each([
+    ['¼ tsp grated lime zest (from 1 lime)', 'lime zest', '09156', /^Lemon peel, raw$/],
+    ['¼ tsp grapefruit zest', 'grapefruit zest', '09216', /^Orange peel, raw$/],
+    ['½ tsp Aleppo pepper or Chile-Spice Mix', 'aleppo pepper', '02031', /^Spices, pepper, red or cayenne$/],
+    ['1 tsp ground galangal', 'ground galangal', '02021', /^Spices, ginger, ground$/],
+  ])('%s: a citrus zest, chile or rhizome SR28 lacks stands in for its nearest food, flagged, never 0 g', (input, phrase, ndb, sr28) => {
+    const l = expectFood(input, ndb, sr28);
+    expect(l.checkMatch).toBe(true);
+    expect(l.grams).toBeGreaterThan(0);
+    expect(l.warnings.join(' ')).toContain(`“${phrase}”`);
+  });
 });
