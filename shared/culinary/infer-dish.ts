@@ -123,6 +123,16 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
   // bread dipped in eggs and milk and fried in a buttered pan (French toast) is a griddle dish, not a baked custard
   const panFried = lines.some((l, i) => kinds[i] === 'butter-oil' && PAN_WORDS.test(l.comment ?? ''));
   if (custard && panFried && !pieCrust && !layered && !has('meat', 'cured-meat', 'fish')) return 'griddle-saute';
+  // raw potatoes sliced into a flour-thickened milk sauce with little broth bake as a gratin (scalloped potatoes);
+  // in a quarter or more of liquid they are a soup
+  const slicedPotatoGratin =
+    lines.some(
+      (l, i) =>
+        kinds[i] === 'starch' && POTATO.test(l.food?.name ?? '') && /\braw\b/i.test(l.food?.name ?? '') && /\bslic/i.test(`${l.phrase} ${l.comment ?? ''}`),
+    ) &&
+    has('flour') &&
+    has('milk', 'cream') &&
+    wet < 0.25 * total;
   if (
     custard ||
     pieCrust ||
@@ -130,7 +140,8 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
     layered ||
     (has('fresh-cheese') && has('starch') && has('melting-cheese')) ||
     (has('crumbs') && has('starch') && cheese) ||
-    (mashedTop && !has('wrap'))
+    (mashedTop && !has('wrap')) ||
+    slicedPotatoGratin
   ) {
     return 'assembled-bake';
   }

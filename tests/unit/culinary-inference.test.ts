@@ -502,4 +502,52 @@ describe('issue 10 round 7: sandwiches, cheesecake, packages and slices', () => 
     expect(rule('american-to-low-fat').quantity).toEqual({ massRatio: 1 });
     expect(bandFor(rule('american-to-low-fat'), { role: 'melting-cheese', mixedDish: true })).toEqual([0.9, 1.1]);
   });
+
+  it('raw potatoes sliced into a flour-thickened milk sauce bake as a gratin (scalloped potatoes); in a quarter of broth they are a soup', () => {
+    const sliced: Spec = ['russet potatoes, thinly sliced', 1361, 'Potatoes, russet, flesh and skin, raw', '11', ['potato'], undefined, '11353'];
+    const flour: Spec = ['all-purpose flour', 31, FLOUR[2], '20', ['flour']];
+    const scalloped = readDish(recipe(sliced, ONION, BUTTER(57), flour, MILK(610), CHEDDAR(), SALT));
+    expect(scalloped.dishType).toBe('assembled-bake');
+    expect(scalloped.hasRoux).toBe(true);
+    expect(scalloped.lines[4].context).toBe('roux-white-sauce');
+    const broth: Spec = ['chicken broth', 960, 'Soup, chicken broth, ready-to-serve', '06', ['broth-stock']];
+    expect(inferDishType(recipe(sliced, ONION, BUTTER(57), flour, MILK(610), broth, CHEDDAR(), SALT))).toBe('simmered-dish');
+  });
+
+  it('flour tortillas may be whole-wheat tortillas of the same size, tortilla for tortilla (1:1 by weight, within a tenth), in any dish', () => {
+    const ww = rule('flour-tortillas-to-whole-wheat');
+    expect(ww.quantity).toEqual({ massRatio: 1 });
+    expect(bandFor(ww, { role: 'starch', mixedDish: true })).toEqual([0.9, 1.1]);
+    expect(ww.targets?.map((t) => ('ndb' in t ? t.ndb : t.ownFoodRole))).toEqual(['28295']);
+    const flourTortilla = {
+      name: 'Tortillas, ready-to-bake or -fry, flour, refrigerated',
+      foodGroup: '18',
+      sourceId: '18364',
+      roles: ['flatbread-wrap'],
+      per100g: { fatG: 8 },
+    };
+    expect(inFoodClass(ww.from, flourTortilla, 'large flour tortillas')).toBe(true);
+    const corn = { ...flourTortilla, name: 'Tortillas, ready-to-bake or -fry, corn', sourceId: '18363' };
+    expect(inFoodClass(ww.from, corn, 'corn tortillas')).toBe(false);
+    expect(ruleHoldsIn(ww, 'starch', 'griddle-saute', 'griddle-saute')).toBe(true);
+    expect(ruleHoldsIn(ww, 'starch', 'assembled-bake', 'filling')).toBe(true);
+  });
+
+  it('the butter stirred into cheese grits may go down to a quarter; a plain mash or a meat pie keeps half', () => {
+    const butter = { name: 'Butter, with salt', foodGroup: '01', sourceId: '01001', roles: ['cooking-fat'], per100g: { fatG: 81 } };
+    const range = (kinds: LineKind[]) =>
+      keepScaleOf(
+        rulesForLine(rules, {
+          food: butter,
+          phrase: 'butter',
+          role: 'enrichment',
+          dishType: 'simmered-dish',
+          context: 'filling',
+          recipeKinds: new Set(kinds),
+        }),
+      )?.range;
+    expect(range(['liquid', 'milk', 'starch', 'salt', 'butter-oil', 'melting-cheese'])).toEqual([0.25, 1]);
+    expect(range(['starch', 'butter-oil', 'milk', 'salt'])).toEqual([0.5, 1]);
+    expect(range(['meat', 'starch', 'butter-oil', 'milk', 'melting-cheese'])).toEqual([0.5, 1]);
+  });
 });
