@@ -519,13 +519,16 @@ describe('issue 10 round 7: sandwiches, cheesecake, packages and slices', () => 
     expect(ww.quantity).toEqual({ massRatio: 1 });
     expect(bandFor(ww, { role: 'starch', mixedDish: true })).toEqual([0.9, 1.1]);
     expect(ww.targets?.map((t) => ('ndb' in t ? t.ndb : t.ownFoodRole))).toEqual(['28295']);
-    const flourTortilla = {
-      name: 'Tortillas, ready-to-bake or -fry, flour, refrigerated',
-      foodGroup: '18',
-      sourceId: '18364',
-      roles: ['flatbread-wrap'],
-      per100g: { fatG: 8 },
-    };
+    const flourTortilla = line([
+      'large flour tortillas',
+      288,
+      'Tortillas, ready-to-bake or -fry, flour, refrigerated',
+      '18',
+      ['flatbread-wrap'],
+      undefined,
+      '18364',
+      8,
+    ]).food!;
     expect(inFoodClass(ww.from, flourTortilla, 'large flour tortillas')).toBe(true);
     const corn = { ...flourTortilla, name: 'Tortillas, ready-to-bake or -fry, corn', sourceId: '18363' };
     expect(inFoodClass(ww.from, corn, 'corn tortillas')).toBe(false);
