@@ -20,9 +20,15 @@ const GREASE_WORDS = /\b(for (the )?(pan|griddle|skillet|greasing|frying)|to gre
 /** a fat that fries in a pan or on a griddle (not one that greases a baking dish) */
 const PAN_WORDS = /\bfor (the )?(pan|griddle|skillet|frying)\b/i;
 const COATING_WORDS = /\b(for (dredging|coating|dusting|breading)|dredg|dust(ing)?)\b/i;
+// an egg beaten to brush a crust or a calzone is a wash, not the dough's structure
+const WASH_WORDS = /\b(for (brushing|the egg wash|glazing)|egg wash|to brush)\b/i;
+// crumbs and egg bind mince (a meatloaf, meatballs); around a whole cut (a cutlet, a chop) they are its breading
+const MINCE_WORDS = /\b(ground|minced?|sausage)\b/i;
 const BAKE_TYPES: readonly DishType[] = ['leavened-bake', 'batter', 'dough'];
 const MIXED_TYPES: readonly DishType[] = ['assembled-bake', 'stovetop-sauce', 'simmered-dish', 'griddle-saute'];
 const PASTA_WORDS = /\b(pasta|spaghetti|macaroni|noodles?|linguine|fettuccine|penne|rigatoni|bucatini|tagliatelle)\b/i;
+// the sauces of a wok: noodles tossed with them are stir-fried (lo mein), and eggs go in scrambled
+const WOK_SAUCE_WORDS = /\b(soy sauce|oyster sauce|fish sauce|hoisin|tamari|shoyu)\b/i;
 /** the protein is the portion: a patty, a burger, a cutlet */
 const PORTION_WORDS = /\b(patt(y|ies)|burgers?|cutlets?)\b/i;
 /** served in a bun or roll: the portion too, unless the meat is simmered in a sauce spooned onto it (sloppy joes) */
@@ -166,7 +172,17 @@ function roleOf(
   line: CulinaryLine,
   kind: LineKind,
   dish: DishType,
-  ctx: { hasRoux: boolean; kinds: readonly LineKind[]; sugarIsStructure: boolean; rouxFat: number; riceNotPasta: boolean; enrichment: ReadonlySet<number> },
+  ctx: {
+    hasRoux: boolean;
+    kinds: readonly LineKind[];
+    sugarIsStructure: boolean;
+    rouxFat: number;
+    riceNotPasta: boolean;
+    wokSauce: boolean;
+    /** crumbs, egg and flour coat whole pieces of meat (no mince in the recipe) */
+    breaded: boolean;
+    enrichment: ReadonlySet<number>;
+  },
   index: number,
 ): LineFunction {
   if (ctx.enrichment.has(index)) return 'enrichment';
@@ -192,23 +208,26 @@ function roleOf(
     case 'liquid':
       return bake ? 'structure' : 'cooking-liquid';
     case 'flour':
-      if (COATING_WORDS.test(note)) return 'coating';
+      if (COATING_WORDS.test(note) || (ctx.breaded && !bake)) return 'coating';
       return bake ? 'structure' : 'thickener';
     case 'starch':
     case 'wrap':
       return bake ? 'structure' : 'starch';
     case 'crumbs':
       if (topping) return 'topping';
+      if (ctx.breaded) return 'coating';
       if (has('meat') && has('egg') && !COATING_WORDS.test(note)) return 'binder';
       return dish === 'assembled-bake' ? 'topping' : 'coating';
     case 'egg':
+      if (WASH_WORDS.test(`${note} ${line.phrase}`)) return 'coating';
       if (bake) return 'structure';
-      if (has('meat') && has('crumbs')) return 'binder';
+      if (has('meat') && has('crumbs')) return ctx.breaded ? 'coating' : 'binder';
       if (dish === 'assembled-bake' && has('fresh-cheese')) return 'binder';
       // eggs set with milk in the oven: a strata, quiche or breakfast casserole
       if (dish === 'assembled-bake' && has('milk', 'cream')) return 'custard';
-      // eggs tossed with hot pasta make its sauce (carbonara); stirred into rice they are scrambled (fried rice)
-      if (dish === 'stovetop-sauce' && has('starch') && !has('milk', 'cream')) return ctx.riceNotPasta ? 'main-protein' : 'sauce';
+      // eggs tossed with hot pasta make its sauce (carbonara); stirred into rice (fried rice) or into noodles
+      // stir-fried with soy or oyster sauce (lo mein) they are scrambled
+      if (dish === 'stovetop-sauce' && has('starch') && !has('milk', 'cream')) return ctx.riceNotPasta || ctx.wokSauce ? 'main-protein' : 'sauce';
       if (COATING_WORDS.test(note) || has('crumbs')) return 'coating';
       return 'main-protein';
     case 'sugar':
@@ -313,7 +332,11 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
   const sugarIsStructure = kinds.includes('chocolate') || g('sugar') >= 1.5 * flourGrams;
   const starchNames = lines.filter((_, i) => kinds[i] === 'starch').map((l) => `${l.phrase} ${l.food?.name ?? ''}`);
   const riceNotPasta = starchNames.some((n) => /\brice\b/i.test(n)) && !starchNames.some((n) => PASTA_WORDS.test(n));
-  const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat, riceNotPasta, enrichment };
+  const wokSauce = lines.some((l) => WOK_SAUCE_WORDS.test(`${l.phrase} ${l.food?.name ?? ''}`));
+  const meatLines = lines.filter((_, i) => kinds[i] === 'meat');
+  const breaded =
+    meatLines.length > 0 && kinds.includes('crumbs') && kinds.includes('egg') && !meatLines.some((l) => MINCE_WORDS.test(`${l.phrase} ${l.food?.name ?? ''}`));
+  const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat, riceNotPasta, wokSauce, breaded, enrichment };
   // mince bound with crumbs and egg (a loaf, meatballs) or a breaded piece is shaped into the portion
   const shaped = kinds.includes('meat') && kinds.includes('crumbs') && kinds.includes('egg');
   const words = lines.map((l) => `${l.phrase} ${l.comment ?? ''}`);
@@ -321,11 +344,14 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
   const mixedDish = MIXED_TYPES.includes(dishType) && !shaped && !portion;
   const browsMeat =
     !BAKE_TYPES.includes(dishType) && lines.some((l, i) => (kinds[i] === 'meat' || kinds[i] === 'fish') && /\b(raw|unprepared)\b/i.test(l.food?.name ?? ''));
+  const panSauced = kinds.includes('meat') || kinds.includes('fish');
   const mashPotato = dishType === 'assembled-bake' && enrichment.size > 0 ? mashedPotatoLine(lines, kinds) : -1;
   const out = lines.map((line, i) => {
     const role = overrides[i] ?? roleOf(line, kinds[i], dishType, ctx, i);
     // the potatoes of a mashed top are mashed and spread over the filling
-    const context = i === mashPotato && role === 'starch' ? 'topping' : contextOf(role, dishType, hasRoux, line.comment);
+    let context = i === mashPotato && role === 'starch' ? 'topping' : contextOf(role, dishType, hasRoux, line.comment);
+    // cream or milk poured into the pan over browned meat (a creamy skillet chicken) simmers into its sauce
+    if (dishType === 'griddle-saute' && context === 'griddle-saute' && (role === 'cream' || role === 'dairy-liquid') && panSauced) context = 'boiled-sauce';
     return { kind: kinds[i], role, context };
   });
   return { dishType, hasRoux, mixedDish, browsMeat, lines: out };

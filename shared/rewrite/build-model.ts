@@ -1,5 +1,5 @@
 import { nutrientsForGrams, sumNutrients, zeroNutrients, type NutrientKey, type Nutrients } from '../nutrition';
-import { closestWeights, lineSlots, type ClosestWeights, type LineSlot } from './line-slots';
+import { closestWeights, lineSlots, type CandidateSlot, type ClosestWeights, type LineSlot } from './line-slots';
 import { toLpFormat } from './lp-format';
 import { FEASIBILITY_TOLERANCE, type LpModel } from './lp-model';
 import { resolveOptions, type ResolvedOptions } from './rewrite-options';
@@ -45,6 +45,8 @@ export interface RewriteModelMeta {
   originalVolumeMl: number;
   /** mL the keepScale rules let lines give up at most; the volume floor leaves it out */
   permittedCutMl: number;
+  /** mL the rules let lines add at most (more vegetables, more of a lean main protein); the ceiling leaves it out */
+  permittedAddMl: number;
   volumeRangeMl: [number, number];
   weights: ClosestWeights;
   /** slack per elastic target */
@@ -95,6 +97,17 @@ function objectiveScale(
  * A row no free variable enters (every line fixed) is a constant 0 against its bounds: dropped when
  * 0 meets them, kept when not, so that both solvers see the same infeasible row.
  */
+/**
+ * mL a rule lets this choice add above the written line: a keepScale's (hi − 1)·G (more vegetables), or
+ * a swap band's top above its centre where the band reaches past 1 + t (a mixed dish's lean protein up to
+ * ×1.5); a ±10 % band of a 1:1 swap adds nothing the dish's own tolerance does not already hold.
+ */
+function ruleAdditionMl(slot: CandidateSlot, t: number): number {
+  if (slot.kind === 'original') return slot.keepAbove / slot.densityGPerMl;
+  const top = slot.lowGrams + slot.widthGrams;
+  return top > (1 + t) * slot.centreGrams + 1e-9 ? (top - slot.centreGrams) / slot.densityGPerMl : 0;
+}
+
 function dropEmptyRows(constraints: LpModel['constraints'], variables: LpModel['variables']): void {
   const used = new Set<string>();
   for (const column of Object.values(variables)) for (const row of Object.keys(column)) used.add(row);
@@ -123,8 +136,9 @@ function add(column: Record<string, number>, row: string, value: number): void {
  *    maxShare): lo_c·r_c·s·G_i·y_ics ≤ x_ics ≤ hi_c·r_c·s·G_i·y_ics, the written food keeping (1−s)·G_i
  *    ([lo_c, hi_c] the candidate's rule band, else [1−a, 1+a]);
  *  - unswapped, the written food at exactly G_i, or within keepScale_i·G_i where a rule allows;
- * dish volume Σ x/ρ within (1 − t)·ΣV − Σ (1−lo_i)·V_i … (1 + t)·ΣV (a sanity bound whose floor leaves
- * out what keepScale rules let lines give up), per-serving targets, Σ y ≤ M, and for
+ * dish volume Σ x/ρ within (1 − t)·ΣV − Σ (1−lo_i)·V_i … (1 + t)·ΣV + Σ_i A_i (a sanity bound that leaves
+ * out what rules let lines give up or add: A_i the most line i may add by a rule, (hi_i − 1)·V_i for a
+ * keepScale, or a swap band's top above 1 + t times its centre), per-serving targets, Σ y ≤ M, and for
  * 'closest' each line's mL away from its centre (r_c·s·G_i, or G_i) plus the mL of written food a
  * swap gives up (s·G_i/ρ_orig). Here it is the same model after exact substitutions:
  *  - y_i,orig = 1 − Σ y_ics, so Σ y_ics ≤ 1 (row pick_i);
@@ -170,7 +184,10 @@ export function buildModel(
   // What a rule itself lets a line give up (keepScale: half the oil, a third less cheese on top) is
   // taken out by design, so the floor does not make other lines put it back as filler.
   const permittedCutMl = slots.reduce((s, l) => (l.fixed ? s : s + l.slots[0].keepBelow / l.slots[0].densityGPerMl), 0);
-  const volumeRangeMl: [number, number] = [(1 - t) * originalVolumeMl - permittedCutMl, (1 + t) * originalVolumeMl];
+  // Likewise what a rule lets a line add (half again the vegetables, up to ×1.5 of a mixed dish's lean
+  // protein) is added by design: the ceiling would otherwise cap "×1.5" at whatever the rest of the dish leaves.
+  const permittedAddMl = slots.reduce((s, l) => (l.fixed ? s : s + Math.max(0, ...l.slots.map((slot) => ruleAdditionMl(slot, t)))), 0);
+  const volumeRangeMl: [number, number] = [(1 - t) * originalVolumeMl - permittedCutMl, (1 + t) * originalVolumeMl + permittedAddMl];
 
   const constraints: LpModel['constraints'] = {};
   const variables: LpModel['variables'] = {};
@@ -261,8 +278,8 @@ export function buildModel(
   if (free.length) {
     // Dish volume as a change from the written ΣV.
     if (objective.kind === 'dish-volume') {
-      constraints.vol_over = { max: 0 };
-      // a change within the cuts the rules permit is no deviation (the floor leaves them out)
+      constraints.vol_over = { max: permittedAddMl };
+      // a change within the cuts and additions the rules permit is no deviation (the bound leaves them out)
       constraints.vol_under = { min: -permittedCutMl };
       variables.dish_dev = { vol_over: -1, vol_under: 1, [OBJ]: 1 };
     } else {
@@ -313,7 +330,7 @@ export function buildModel(
   const model: LpModel = { optimize: OBJ, opType: maximise ? 'max' : 'min', constraints, variables, ints };
   return {
     model,
-    variables: { lines: slots, originalVolumeMl, permittedCutMl, volumeRangeMl, weights, slack, objectiveConstant },
+    variables: { lines: slots, originalVolumeMl, permittedCutMl, permittedAddMl, volumeRangeMl, weights, slack, objectiveConstant },
   };
 }
 

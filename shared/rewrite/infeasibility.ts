@@ -105,8 +105,9 @@ export function analyseInfeasible(
   const written = elastic.built.variables.originalVolumeMl;
   if (volume && written > 0) {
     const changed = planOf(solvedChoices(volume.built.variables, volume.solution.values), servings).volumeMl;
-    // beyond the floor's permitted cuts below, beyond the written volume above
-    const outside = Math.max(0, changed - written, written - volume.built.variables.permittedCutMl - changed);
+    // beyond the permitted cuts below and the permitted additions above
+    const { permittedCutMl, permittedAddMl } = volume.built.variables;
+    const outside = Math.max(0, changed - written - permittedAddMl, written - permittedCutMl - changed);
     const pct = Math.ceil(snap((100 * outside) / written));
     if (pct > options.volumeTolerance * 100 + 1e-9) {
       suggestions.push({ kind: 'volume-tolerance', value: pct, message: `let the dish's volume change by up to ${pct} %` });

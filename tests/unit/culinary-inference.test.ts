@@ -132,6 +132,51 @@ describe('line function', () => {
     expect(readDish(recipe(FLOUR, MILK(480), EGGS, POWDER)).lines[2].role).toBe('structure');
   });
 
+  it('crumbs, egg and flour around a whole cut are its breading (a schnitzel), around mince its binder; an egg "for brushing" is a wash, not structure', () => {
+    const chops: Spec = [
+      'boneless pork loin chops, pounded thin',
+      680,
+      'Pork, fresh, loin, top loin (chops), boneless, lean only, raw',
+      '10',
+      ['pork'],
+      undefined,
+      '10200',
+      5,
+    ];
+    const crumbs: Spec = ['dry bread crumbs', 162, 'Bread crumbs, dry, grated, plain', '18', ['breadcrumb-coating'], undefined, '18079', 5.3];
+    const oil: Spec = ['vegetable oil', 109, 'Oil, soybean, salad or cooking', '04', ['cooking-fat'], 'for frying', '04044', 100];
+    const schnitzel = readDish(recipe(chops, ['all-purpose flour', 62, FLOUR[2], '20', ['flour'], undefined, '20081'], EGGS, crumbs, oil, SALT));
+    expect(schnitzel.lines.slice(1, 4).map((l) => [l.role, l.context])).toEqual([
+      ['coating', 'topping'],
+      ['coating', 'topping'],
+      ['coating', 'topping'],
+    ]);
+    // the breaded chop is still the portion, not one part of a mixed dish
+    expect(schnitzel.mixedDish).toBe(false);
+    // ground meat with the same crumbs and egg is a meatloaf: they bind it
+    const loaf = readDish(recipe(BEEF, crumbs, EGGS, SALT));
+    expect(loaf.lines.slice(1, 3).map((l) => l.role)).toEqual(['binder', 'binder']);
+    const yeast: Spec = ['instant yeast', 9, "Leavening agents, yeast, baker's, active dry", '18', ['baking-leavener']];
+    const water: Spec = ['warm water', 237, 'Water, tap, municipal', '14', ['other']];
+    const wash: Spec = ['large egg, beaten', 50, 'Egg, whole, raw, fresh', '01', ['egg'], 'for brushing', '01123', 9.5];
+    const dough = readDish(recipe(['all-purpose flour', 375, FLOUR[2], '20', ['flour'], undefined, '20081'], yeast, water, SALT, wash));
+    expect(dough.dishType).toBe('dough');
+    expect(dough.lines[4]).toMatchObject({ role: 'coating', context: 'topping' });
+    const enriched = readDish(
+      recipe(['all-purpose flour', 375, FLOUR[2], '20', ['flour'], undefined, '20081'], yeast, water, SALT, [
+        'large egg',
+        50,
+        'Egg, whole, raw, fresh',
+        '01',
+        ['egg'],
+        undefined,
+        '01123',
+        9.5,
+      ]),
+    );
+    expect(enriched.lines[4]).toMatchObject({ role: 'structure', context: 'baked-batter-dough' });
+  });
+
   it('a cheese "for the top" is a topping; oil "for the pan" is fat for the pan', () => {
     const read = readDish(recipe(PASTA, CHEDDAR('for the top'), ['olive oil', 14, 'Oil, olive, salad or cooking', '04', ['cooking-fat'], 'for the pan']));
     expect(read.lines[1]).toMatchObject({ role: 'topping', context: 'topping' });

@@ -41,6 +41,7 @@ const NAMED_OTHERWISE: Record<string, string> = {
   'cassia bark': 'as cassia',
   'celery root': 'the root of celeriac',
   panko: 'Japanese-style dry bread crumbs',
+  'jumbo shells': 'large pasta shells for stuffing, SR28 "pasta, dry" (common practice)',
   chevre: 'French for goat cheese',
   mint: 'garden mint is spearmint (common practice)',
   'hot dogs': 'SR28 "frankfurter"',

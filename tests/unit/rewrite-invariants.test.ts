@@ -40,7 +40,23 @@ function checkOptimal(p: RandomProblem, r: OptimalRewrite): void {
     const free = !(l.locked || l.heldReason || !(l.grams > 0) || !(l.volumeMl > 0));
     return free && l.keepScale ? s + (1 - l.keepScale[0]) * l.volumeMl : s;
   }, 0);
-  expect(within(r.after.volumeMl, (1 - t) * writtenVolume - permittedCut, (1 + t) * writtenVolume)).toBe(true);
+  // …and the ceiling what a rule lets it add: a keepScale's (hi − 1)·V, or a swap band's top above its centre
+  // where the band reaches past 1 + t (a coach's swap keeps the line tolerance)
+  const permittedAdd = p.lines.reduce((s, l) => {
+    const free = !(l.locked || l.heldReason || !(l.grams > 0) || !(l.volumeMl > 0));
+    if (!free) return s;
+    const orig = original(l);
+    const adds = l.candidates
+      .filter((c) => !c.original)
+      .map((c) => {
+        const [, hi] = c.approved || !c.band ? [1 - a, 1 + a] : c.band;
+        if (hi <= 1 + t + 1e-12) return 0;
+        const rho = c.densityGPerMl === orig.densityGPerMl ? l.grams / l.volumeMl : c.densityGPerMl;
+        return ((hi - 1) * expectedRatio(l, c) * Math.min(1, c.maxShare ?? 1) * l.grams) / rho;
+      });
+    return s + Math.max(0, l.keepScale ? (l.keepScale[1] - 1) * l.volumeMl : 0, ...adds);
+  }, 0);
+  expect(within(r.after.volumeMl, (1 - t) * writtenVolume - permittedCut, (1 + t) * writtenVolume + permittedAdd)).toBe(true);
   expect(r.after.lines.map((l) => l.index)).toEqual([...r.after.lines.map((l) => l.index)].sort((x, y) => x - y));
   let swaps = 0;
   for (const line of p.lines) {

@@ -6,6 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { solveRewrite } from '../../shared/rewrite/solve-rewrite';
+import { buildRewriteModel } from '../../shared/rewrite/build-model';
 import { bandOf, lineSlots } from '../../shared/rewrite/line-slots';
 import { resolveOptions } from '../../shared/rewrite/rewrite-options';
 import type { Candidate, OptimalRewrite, RewriteLine } from '../../shared/rewrite/types';
@@ -44,6 +45,20 @@ describe('rule bands on a substitute', () => {
     expect(swap.lowGrams).toBeCloseTo(360, 9);
     expect(swap.widthGrams).toBeCloseTo(240, 9);
     expect(swap.centreGrams).toBeCloseTo(400, 9);
+  });
+
+  it('the dish-volume ceiling leaves out what the rule lets the line add: ×1.5 of a lean protein is not capped at +10 % of the dish', () => {
+    // the chicken is 667 mL of a 1,167 mL dish; ×1.5 adds 333 mL (29 %), beyond a ±10 % bound on the dish as written
+    const sauce: Candidate = { foodId: 5, name: 'tomato sauce', densityGPerMl: 1, per100g: nutrients(30, 1.5, 0.2), original: true };
+    const dish = [line(BREAST), { index: 1, foodId: 5, grams: 500, volumeMl: 500, locked: false, candidates: [sauce] }];
+    const r = solveRewrite(dish, { proteinMinG: 100, kcalMax: 2000 }, 1, { objective: 'max-protein' }) as OptimalRewrite;
+    expect(r.status).toBe('optimal');
+    expect(r.after.lines[0].grams).toBeCloseTo(600, 6);
+    // the model's ceiling leaves out (1.5 − 1) × 400 g ÷ 0.6 g/mL = 333 mL; a ±10 % band adds nothing beyond the dish's own ±10 %
+    const meta = (breast: Candidate) => buildRewriteModel([line(breast), dish[1]], { proteinMinG: 100, kcalMax: 2000 }, 1, {}).variables;
+    expect(meta(BREAST).permittedAddMl).toBeCloseTo(1000 / 3, 6);
+    expect(meta(BREAST).volumeRangeMl[1]).toBeCloseTo(1.1 * (400 / 0.6 + 500) + 1000 / 3, 6);
+    expect(meta({ ...BREAST, band: [0.9, 1.1] }).permittedAddMl).toBe(0);
   });
 
   it('most protein goes to the top of the rule band (×1.5), and the explanation says how far it went', () => {

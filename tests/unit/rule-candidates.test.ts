@@ -361,6 +361,157 @@ describe('issue 10 round 5: a baked cheese sauce, half-cauliflower fried rice (i
   });
 });
 
+describe('issue 10 round 7 (savoury mains): lean pork shoulder, smoked turkey sausage, lo mein eggs, a creamy pan sauce (invented recipes)', () => {
+  /**
+   * Leaner forms of a written food (USDA SR28), each in an invented recipe: the rule offers exactly these foods with
+   * this quantity on the line, each with under `fatShare` of the written food's fat and, where `sameProtein`, at least
+   * its protein; and never offers them again for a food already in the lean form.
+   */
+  const LEANER_FORMS: {
+    title: string;
+    recipe: () => CandidateLine[];
+    line: number;
+    rule: string;
+    names: string[];
+    quantity: Record<string, unknown>;
+    fatShare: number;
+    sameProtein: boolean;
+    alreadyLean: () => CandidateLine;
+  }[] = [
+    {
+      title: 'braising pork shoulder trimmed of its fat (separable lean 10072 for lean and fat 10070), 1:1 by weight of meat, up to ×1.5 in a paprikash',
+      recipe: () => [
+        at('10070', 'pork shoulder, cut into cubes', 907),
+        at('04044', 'vegetable oil', 27),
+        at('11282', 'onions, chopped', 220),
+        at('02028', 'sweet paprika', 14),
+        at('20081', 'all-purpose flour', 16),
+        at('06194', 'chicken broth', 374),
+        at('01056', 'sour cream', 230),
+        at('20109', 'egg noodles', 340),
+      ],
+      line: 0,
+      rule: 'pork-shoulder-to-trimmed-lean',
+      names: ['Pork, fresh, shoulder, whole, lean only, raw'],
+      quantity: { massRatio: 1, band: [0.9, 1.5] },
+      fatShare: 0.5,
+      sameProtein: true,
+      alreadyLean: () => at('10072', 'lean pork shoulder', 907),
+    },
+    {
+      title: 'smoked turkey sausage for smoked pork links in a jambalaya, 1:1 by weight within ±10 %, or for half',
+      recipe: () => [
+        at('05096', 'boneless skinless chicken thighs, cubed', 454),
+        at('07074', 'smoked sausage, sliced', 340),
+        at('04044', 'vegetable oil', 27),
+        at('20044', 'long-grain white rice', 278),
+        at('11531', 'diced tomatoes', 411),
+        at('06194', 'chicken broth', 747),
+      ],
+      line: 1,
+      rule: 'smoked-sausage-to-turkey-smoked-sausage',
+      names: ['Sausage Italian turkey smoked', 'Kielbasa, Polish, turkey and beef, smoked'],
+      quantity: { massRatio: 1, band: [0.9, 1.1], partial: true },
+      fatShare: 2 / 3,
+      sameProtein: true,
+      alreadyLean: () => at('07934', 'turkey kielbasa', 340),
+    },
+    {
+      title: "96 % fat-free deli ham for a calzone's regular sliced ham, 1:1 by weight within ±10 %",
+      recipe: () => calzones(),
+      line: 4,
+      rule: 'deli-ham-to-extra-lean',
+      names: ['Ham, sliced, pre-packaged, deli meat (96% fat free, water added)'],
+      quantity: { massRatio: 1, band: [0.9, 1.1] },
+      fatShare: 0.5,
+      sameProtein: true,
+      alreadyLean: () => at('07028', 'extra-lean deli ham', 227),
+    },
+    {
+      title: "turkey salami for a calzone's hard salami, 1:1 by weight within ±10 %, or for half (most of its protein)",
+      recipe: () => calzones(),
+      line: 5,
+      rule: 'hard-salami-to-turkey-salami',
+      names: ['Salami, cooked, turkey'],
+      quantity: { massRatio: 1, band: [0.9, 1.1], partial: true },
+      fatShare: 1 / 3,
+      sameProtein: false,
+      alreadyLean: () => at('07070', 'turkey salami', 113),
+    },
+  ];
+  function calzones() {
+    return [
+      at('20081', 'all-purpose flour', 375),
+      at('18375', 'instant yeast', 9),
+      at('14411', 'warm water', 237),
+      at('04053', 'olive oil', 27),
+      at('07029', 'sliced deli ham', 227),
+      at('07071', 'sliced salami', 113),
+      at('01026', 'shredded mozzarella cheese', 168),
+    ];
+  }
+
+  it.each(LEANER_FORMS)('$title', (c) => {
+    const r = recipeCandidates(engine, c.recipe(), none());
+    const offers = byRule(r.lines[c.line], c.rule);
+    expect(offers.map((o) => o.name)).toEqual(c.names);
+    expect(r.lines[c.line].candidates[0].original).toBe(true);
+    const written = r.lines[c.line].candidates[0].per100g;
+    for (const o of offers) {
+      expect(o).toMatchObject(c.quantity);
+      expect(o.per100g.fatG).toBeLessThan(c.fatShare * written.fatG);
+      if (c.sameProtein) expect(o.per100g.proteinG).toBeGreaterThanOrEqual(written.proteinG);
+      else expect(o.per100g.kcal).toBeLessThan(0.5 * written.kcal);
+    }
+    const lean = recipeCandidates(engine, [c.alreadyLean(), at('06194', 'chicken broth', 747)], none());
+    expect(lean.lines[0].candidates.map((o) => o.rule?.id)).not.toContain(c.rule);
+  });
+
+  it('the cured-meat rule still lets the cook use half of the smoked pork links instead', () => {
+    const r = recipeCandidates(engine, LEANER_FORMS[1].recipe(), none());
+    expect(r.lines[1].keepScale).toEqual([0.5, 1]);
+  });
+
+  it('lo mein: eggs stirred into noodles with soy sauce are scrambled (whites for all of them); a carbonara without soy keeps them as its sauce', () => {
+    const loMein = [
+      at('20109', 'lo mein egg noodles', 227),
+      at('05096', 'boneless skinless chicken thighs, thinly sliced', 454),
+      at('04044', 'vegetable oil', 41),
+      at('01123', 'large eggs, beaten', 100),
+      at('11109', 'shredded cabbage', 140),
+      at('16124', 'soy sauce', 64),
+    ];
+    const r = recipeCandidates(engine, loMein, none());
+    expect(r.dishType).toBe('stovetop-sauce');
+    expect(r.lines[3].role).toBe('main-protein');
+    const whites = byRule(r.lines[3], 'egg-to-whites');
+    expect(whites[0]).toMatchObject({ name: 'Egg, white, raw, fresh', maxShare: 1 });
+    expect(whites[0].massRatio).toBeCloseTo(1.32, 9);
+    const noSoy = recipeCandidates(engine, loMein.slice(0, 5), none());
+    expect(noSoy.lines[3].role).toBe('sauce');
+  });
+
+  it('a creamy skillet chicken: cream poured over the browned meat simmers into a pan sauce, so it may be half-and-half or evaporated skim milk, 1:1 within ±10 %', () => {
+    const skillet = [
+      at('05062', 'boneless skinless chicken breasts', 680),
+      at('04053', 'olive oil', 27),
+      at('06194', 'chicken broth', 249),
+      at('01053', 'heavy cream', 238),
+      at('01032', 'grated Parmesan cheese', 50),
+    ];
+    const r = recipeCandidates(engine, skillet, none());
+    expect(r.dishType).toBe('griddle-saute');
+    expect(r.lines[3]).toMatchObject({ role: 'cream', context: 'boiled-sauce' });
+    const lighter = byRule(r.lines[3], 'cream-to-half-and-half-or-evaporated-skim');
+    expect(lighter.map((c) => c.name)).toEqual(['Cream, fluid, half and half', 'Milk, canned, evaporated, nonfat, with added vitamin A and vitamin D']);
+    expect(lighter[0]).toMatchObject({ massRatio: 1, band: [0.9, 1.1] });
+    // never yogurt or cottage cheese, which split in a simmered sauce
+    expect(r.lines[3].candidates.map((c) => c.name)).not.toEqual(expect.arrayContaining([expect.stringMatching(/yogurt|cottage/i)]));
+    // the oil stays the pan's
+    expect(r.lines[1].context).toBe('griddle-saute');
+  });
+});
+
 describe('issue 10 round 6: lean cuts, a lamb pie and its mash, cookie dough, quick breads, syrup at the table (invented recipes)', () => {
   it('stewing chuck trimmed of its fat, 1:1 by weight of meat (USDA SR28 separable lean 23603 against lean and fat 13809), up to ×1.5 in a stew', () => {
     const stew = [
