@@ -37,6 +37,8 @@ const BUN_WORDS = /\b(buns?|rolls?)\b/i;
 const SLURRY_STARCH = /\b(cornstarch|corn starch|arrowroot|potato starch|tapioca)\b/i;
 
 const POTATO = /^potato/i;
+/** breads eaten as they are (a sandwich's muffin, a roll, toast): no sauce is tossed with them */
+const BREAD_NAME = /^(bread|english muffins?|rolls?|bagels?|croissants?|biscuits?)\b/i;
 
 /**
  * The potato line of a mashed-potato top over a meat filling (a cottage or shepherd's pie), or -1;
@@ -114,6 +116,8 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
     if (g('butter-oil') >= 0.5 * flour && moisture < 0.25 * flour) return 'dough';
     return 'leavened-bake';
   }
+  // cream cheese beaten with sugar and eggs and baked (a cheesecake) is a bake: its eggs, cheese and sugar are structure
+  if (!savouryMain && has('egg') && g('fresh-cheese') >= 0.25 * total && g('sugar') >= 0.1 * total) return 'leavened-bake';
   if (g('dressing') >= 0.08 * total && !has('condensed-soup', 'flour')) return 'cold-dish';
   const pieCrust = lines.some((l) => /\b(pie crust|pastry|biscuit dough|puff pastry)\b/i.test(`${l.phrase} ${l.food?.name ?? ''}`));
   const layered = /\b(layer|lasagna|casserole|baked|gratin)\b/i.test(comments);
@@ -125,6 +129,16 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
   // bread dipped in eggs and milk and fried in a buttered pan (French toast) is a griddle dish, not a baked custard
   const panFried = lines.some((l, i) => kinds[i] === 'butter-oil' && PAN_WORDS.test(l.comment ?? ''));
   if (custard && panFried && !pieCrust && !layered && !has('meat', 'cured-meat', 'fish')) return 'griddle-saute';
+  // raw potatoes sliced into a flour-thickened milk sauce with little broth bake as a gratin (scalloped potatoes);
+  // in a quarter or more of liquid they are a soup
+  const slicedPotatoGratin =
+    lines.some(
+      (l, i) =>
+        kinds[i] === 'starch' && POTATO.test(l.food?.name ?? '') && /\braw\b/i.test(l.food?.name ?? '') && /\bslic/i.test(`${l.phrase} ${l.comment ?? ''}`),
+    ) &&
+    has('flour') &&
+    has('milk', 'cream') &&
+    wet < 0.25 * total;
   if (
     custard ||
     pieCrust ||
@@ -132,7 +146,8 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
     layered ||
     (has('fresh-cheese') && has('starch') && has('melting-cheese')) ||
     (has('crumbs') && has('starch') && cheese) ||
-    (mashedTop && !has('wrap'))
+    (mashedTop && !has('wrap')) ||
+    slicedPotatoGratin
   ) {
     return 'assembled-bake';
   }
@@ -144,9 +159,12 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
   if (has('wrap') && cheese) return bakedSauce >= 0.1 * total || has('fresh-cheese') ? 'assembled-bake' : 'griddle-saute';
   // a loaf or meatballs: mince held together by crumbs and egg
   if (has('meat') && has('crumbs') && has('egg') && !has('starch', 'wrap')) return 'assembled-bake';
-  if (has('starch') && has('cream', 'milk', 'melting-cheese', 'hard-cheese', 'egg') && wet < 0.25 * total) return 'stovetop-sauce';
+  // a sandwich's bread is not tossed with its eggs and cheese: a breakfast sandwich is a griddle dish
+  const sauceStarch = lines.some((l, i) => kinds[i] === 'starch' && !BREAD_NAME.test(l.food?.name ?? ''));
+  if (sauceStarch && has('cream', 'milk', 'melting-cheese', 'hard-cheese', 'egg') && wet < 0.25 * total) return 'stovetop-sauce';
   if (wet >= 0.25 * total || (has('legume') && has('tomato'))) return 'simmered-dish';
-  if (has('meat', 'fish', 'wrap')) return 'griddle-saute';
+  // a sandwich: bread around eggs or bacon cooked in the pan
+  if (has('meat', 'fish', 'wrap') || (has('starch') && !sauceStarch && has('egg', 'cured-meat'))) return 'griddle-saute';
   return 'other';
 }
 

@@ -92,6 +92,8 @@ const phylloLid = swap('^Phyllo dough', [0.35, 0.7]);
 
 /** label rule (tests/panel/README.md): a flour tortilla on the griddle accepts corn tortillas by weight */
 const cornOnGriddle = swap('^Tortillas, ready-to-bake or -fry, corn', [0.85, 1.2]);
+/** label rule (tests/panel/README.md, round 7): a flour tortilla accepts a whole-wheat tortilla of the same size, tortilla for tortilla */
+const wholeWheatTortilla = swap('^Tortillas, ready-to-bake or -fry, whole wheat', [0.85, 1.15]);
 
 const LESS = (lo = 0.5): [number, number] => [lo, 1];
 const MORE: [number, number] = [1, 1.5];
@@ -298,7 +300,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
     servings: 4,
     half: 'tune',
     lines: [
-      { text: '4 large flour tortillas', keep: 'the wrap', swaps: [cornOnGriddle] },
+      { text: '4 large flour tortillas', keep: 'the wrap', swaps: [cornOnGriddle, wholeWheatTortilla] },
       { text: '2 cups shredded cooked chicken', swaps: moreOfLean([chickenBreastCooked]), scale: MORE_LEAN },
       { text: '2 cups shredded Monterey Jack cheese', swaps: [lowFatMonterey, partSkimMozzarella], scale: LESS(0.6) },
       { text: '1 tablespoon vegetable oil', keep: 'griddle fat', scale: LESS(0.3) },
@@ -437,7 +439,7 @@ export const COMFORT_PANEL: PanelRecipe[] = [
       { text: '8 oz cream cheese, softened', swaps: [lighterCreamCheese] },
       { text: '1 cup sour cream', swaps: [plainYogurt, lighterSourCream] },
       { text: '2 cups shredded Monterey Jack cheese', swaps: [lowFatMonterey, partSkimMozzarella], scale: LESS() },
-      { text: '10 (8 inch) flour tortillas', keep: 'the wrap', swaps: [swap('^Tortillas, ready-to-bake or -fry, corn', [0.4, 1.3])] },
+      { text: '10 (8 inch) flour tortillas', keep: 'the wrap', swaps: [swap('^Tortillas, ready-to-bake or -fry, corn', [0.4, 1.3]), wholeWheatTortilla] },
       { text: '1 (10 oz) can enchilada sauce', keep: 'sauce' },
       { text: '1 (4 oz) can diced green chiles', keep: 'flavour' },
       { text: '1 teaspoon ground cumin', keep: keepSeasoning },

@@ -8,6 +8,7 @@ import { contextOf, heldReasonFor, inferDishType, readDish } from '../../shared/
 import { bandFor, inFoodClass, keepScaleOf, ruleHoldsIn, rulesForLine } from '../../shared/culinary/match-rules';
 import { parseRuleFile } from '../../shared/culinary/rule-schema';
 import type { CulinaryLine } from '../../shared/culinary/types';
+import type { LineKind } from '../../shared/culinary/line-kind';
 import ruleFile from '../../data/substitution-rules.json';
 
 type Spec = [phrase: string, grams: number, name: string, group: string, roles: string[], comment?: string, ndb?: string, fatG?: number];
@@ -491,5 +492,110 @@ describe('issue 10 round 6: slurries, sloppy joes, quick-bread batters, mashes a
     expect(cookies.lines[2].role).toBe('sweetener');
     const sugarHeavyCake = readDish(recipe(['all-purpose flour', 200, FLOUR[2], '20', ['flour']], BUTTER(227), SUGAR(300), EGGS, SALT));
     expect(sugarHeavyCake.lines[2].role).toBe('structure');
+  });
+});
+
+describe('issue 10 round 7: sandwiches, cheesecake, packages and slices', () => {
+  const rules = parseRuleFile(ruleFile);
+  const rule = (id: string) => rules.find((r) => r.id === id)!;
+  const MUFFINS: Spec = ['English muffins, split and toasted', 228, 'English muffin, plain, enriched', '18', ['bread'], undefined, '18258'];
+  const BACON: Spec = ['slices bacon', 224, 'Pork, cured, bacon, unprepared', '10', ['cured-meat-topping'], undefined, '10123', 42];
+  const AMERICAN: Spec = [
+    'slices American cheese',
+    112,
+    'Cheese, pasteurized process, American, fortified with vitamin D',
+    '01',
+    ['melting-cheese'],
+    undefined,
+    '01042',
+    31,
+  ];
+  const CREAM_CHEESE: Spec = ['cream cheese, softened', 680, 'Cheese, cream', '01', ['soft-cheese'], undefined, '01017', 34];
+  const GRAHAM: Spec = ['graham cracker crumbs', 126, 'Cookies, graham crackers, plain or honey', '18', ['breadcrumb-coating'], undefined, '18173'];
+
+  it('a breakfast sandwich (bread, eggs, bacon, cheese) is a griddle dish whose eggs are its protein, not a pasta tossed with eggs', () => {
+    const sandwich = readDish(recipe(MUFFINS, BACON, EGGS, BUTTER(14), AMERICAN, SALT));
+    expect(sandwich.dishType).toBe('griddle-saute');
+    expect(sandwich.lines[2].role).toBe('main-protein');
+    expect(sandwich.lines[4].context).toBe('griddle-saute');
+    // pasta with eggs and cheese is still a carbonara's sauce
+    expect(readDish(recipe(PASTA, BACON, EGGS, ['grated Parmesan', 50, 'Cheese, parmesan, grated', '01', ['hard-cheese']])).lines[2].role).toBe('sauce');
+  });
+
+  it('cream cheese beaten with sugar and eggs (a cheesecake) is a bake: its eggs are structure and fat-free cream cheese stays out', () => {
+    const sour: Spec = ['sour cream', 230, 'Cream, sour, cultured', '01', ['sour-cream-yogurt'], undefined, '01056', 19];
+    const cheesecake = readDish(recipe(GRAHAM, BUTTER(76, 'melted'), SUGAR(50), CREAM_CHEESE, SUGAR(200), sour, EGGS, VANILLA));
+    expect(cheesecake.dishType).toBe('leavened-bake');
+    expect(cheesecake.lines[6].role).toBe('structure');
+    expect(cheesecake.lines[3].context).toBe('baked-batter-dough');
+    expect(ruleHoldsIn(rule('cream-cheese-to-fat-free-in-fillings'), 'fresh-cheese', 'leavened-bake', 'baked-batter-dough')).toBe(false);
+    expect(ruleHoldsIn(rule('cream-cheese-to-neufchatel'), 'fresh-cheese', 'leavened-bake', 'baked-batter-dough')).toBe(true);
+    // cream cheese in a savoury dip or filling is not a bake
+    expect(inferDishType(recipe(CREAM_CHEESE, ONION, SALT))).not.toBe('leavened-bake');
+  });
+
+  it("the butter of a crumb crust takes no quick bread's yogurt or applesauce", () => {
+    const holds = (id: string, kinds: LineKind[]) => ruleHoldsIn(rule(id), 'baking-fat', 'leavened-bake', 'baked-batter-dough', false, new Set(kinds));
+    expect(holds('quick-bread-fat-to-greek-yogurt', ['flour', 'sugar', 'egg', 'butter-oil'])).toBe(true);
+    expect(holds('quick-bread-fat-to-greek-yogurt', ['crumbs', 'fresh-cheese', 'sugar', 'egg', 'butter-oil'])).toBe(false);
+    expect(holds('quick-bread-fat-to-applesauce', ['crumbs', 'fresh-cheese', 'sugar', 'egg', 'butter-oil'])).toBe(false);
+  });
+
+  it('light cream cheese goes package for package and low-fat American cheese slice for slice (within a tenth of 1:1)', () => {
+    expect(rule('cream-cheese-to-neufchatel').quantity).toEqual({ massRatio: 1 });
+    expect(bandFor(rule('cream-cheese-to-neufchatel'), { role: 'fresh-cheese', mixedDish: false })).toEqual([0.9, 1.1]);
+    expect(rule('american-to-low-fat').quantity).toEqual({ massRatio: 1 });
+    expect(bandFor(rule('american-to-low-fat'), { role: 'melting-cheese', mixedDish: true })).toEqual([0.9, 1.1]);
+  });
+
+  it('raw potatoes sliced into a flour-thickened milk sauce bake as a gratin (scalloped potatoes); in a quarter of broth they are a soup', () => {
+    const sliced: Spec = ['russet potatoes, thinly sliced', 1361, 'Potatoes, russet, flesh and skin, raw', '11', ['potato'], undefined, '11353'];
+    const flour: Spec = ['all-purpose flour', 31, FLOUR[2], '20', ['flour']];
+    const scalloped = readDish(recipe(sliced, ONION, BUTTER(57), flour, MILK(610), CHEDDAR(), SALT));
+    expect(scalloped.dishType).toBe('assembled-bake');
+    expect(scalloped.hasRoux).toBe(true);
+    expect(scalloped.lines[4].context).toBe('roux-white-sauce');
+    const broth: Spec = ['chicken broth', 960, 'Soup, chicken broth, ready-to-serve', '06', ['broth-stock']];
+    expect(inferDishType(recipe(sliced, ONION, BUTTER(57), flour, MILK(610), broth, CHEDDAR(), SALT))).toBe('simmered-dish');
+  });
+
+  it('flour tortillas may be whole-wheat tortillas of the same size, tortilla for tortilla (1:1 by weight, within a tenth), in any dish', () => {
+    const ww = rule('flour-tortillas-to-whole-wheat');
+    expect(ww.quantity).toEqual({ massRatio: 1 });
+    expect(bandFor(ww, { role: 'starch', mixedDish: true })).toEqual([0.9, 1.1]);
+    expect(ww.targets?.map((t) => ('ndb' in t ? t.ndb : t.ownFoodRole))).toEqual(['28295']);
+    const flourTortilla = line([
+      'large flour tortillas',
+      288,
+      'Tortillas, ready-to-bake or -fry, flour, refrigerated',
+      '18',
+      ['flatbread-wrap'],
+      undefined,
+      '18364',
+      8,
+    ]).food!;
+    expect(inFoodClass(ww.from, flourTortilla, 'large flour tortillas')).toBe(true);
+    const corn = { ...flourTortilla, name: 'Tortillas, ready-to-bake or -fry, corn', sourceId: '18363' };
+    expect(inFoodClass(ww.from, corn, 'corn tortillas')).toBe(false);
+    expect(ruleHoldsIn(ww, 'starch', 'griddle-saute', 'griddle-saute')).toBe(true);
+    expect(ruleHoldsIn(ww, 'starch', 'assembled-bake', 'filling')).toBe(true);
+  });
+
+  it('the butter stirred into cheese grits may go down to a quarter; a plain mash or a meat pie keeps half', () => {
+    const butter = { name: 'Butter, with salt', foodGroup: '01', sourceId: '01001', roles: ['cooking-fat'], per100g: { fatG: 81 } };
+    const range = (kinds: LineKind[]) =>
+      keepScaleOf(
+        rulesForLine(rules, {
+          food: butter,
+          phrase: 'butter',
+          role: 'enrichment',
+          dishType: 'simmered-dish',
+          context: 'filling',
+          recipeKinds: new Set(kinds),
+        }),
+      )?.range;
+    expect(range(['liquid', 'milk', 'starch', 'salt', 'butter-oil', 'melting-cheese'])).toEqual([0.25, 1]);
+    expect(range(['starch', 'butter-oil', 'milk', 'salt'])).toEqual([0.5, 1]);
+    expect(range(['meat', 'starch', 'butter-oil', 'milk', 'melting-cheese'])).toEqual([0.5, 1]);
   });
 });
