@@ -19,6 +19,7 @@ export async function runLabelledLinesBench(showFailures = process.argv.includes
     return { food: line.food, grams: line.grams, checkMatch: line.checkMatch };
   };
   console.log('labelled lines (acceptable food AND grams within 15 %; goal ≥ 92 % held-out)');
+  const totals = { tune: { lines: 0, both: 0 }, 'held-out': { lines: 0, both: 0 } };
   for (const batch of HAND_LABELLED_BATCHES) {
     const labels = readHandLabelledLines(batch.file);
     console.log(` ${batch.name}`);
@@ -27,6 +28,8 @@ export async function runLabelledLinesBench(showFailures = process.argv.includes
         labels.filter((l) => l.half === half),
         answer,
       );
+      totals[half].lines += s.lines;
+      totals[half].both += s.both;
       console.log(`  ${half.padEnd(8)} ${s.lines} lines: both ${pct(s.both, s.lines)}, food ${pct(s.food, s.lines)}, grams ${pct(s.grams, s.lines)}`);
       console.log(`           failures by kind: ${FAILURE_KINDS.map((k) => `${k} ${s.kinds[k]}`).join(', ')}`);
       if (showFailures && half === 'tune') {
@@ -38,6 +41,8 @@ export async function runLabelledLinesBench(showFailures = process.argv.includes
       }
     }
   }
+  for (const half of ['tune', 'held-out'] as const)
+    console.log(` all batches ${half}: ${totals[half].both}/${totals[half].lines} lines both right (${pct(totals[half].both, totals[half].lines)})`);
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
