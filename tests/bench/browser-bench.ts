@@ -18,6 +18,13 @@
  * `responseEnd` but the renderer creates the document only later (`documentMs`, when scripts added
  * before the page run). That wait is the browser's own start-up, which no page can shorten; "page"
  * figures leave it out (content − max(0, document − responseEnd)), "full" figures keep it.
+ *
+ * The "floor" row is the same visit of a static page holding only the heading (no style sheet, font or
+ * script, from a bare node:http server): what the harness and the browser cost before any page work.
+ * Each new context is a new desktop window, whose omnibox popup Chromium builds as a WebUI page in a
+ * renderer of its own (about as much CPU as the visited page, at the same moment; no phone browser
+ * does this): it is turned off (WINDOW_UI_FEATURES) unless BROWSER_UI=1. Figures from before that
+ * change (issue 14's first ones) include it. tests/bench/first-visit-trace.ts breaks one visit down.
  */
 import { createServer } from 'node:http';
 import type { AddressInfo } from 'node:net';
