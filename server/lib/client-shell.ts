@@ -138,7 +138,9 @@ export function preloadFonts(html: string, weights: readonly number[]): string {
  * the scripts run only after that paint anyway (src/main.tsx).
  */
 export function scriptsAfterFonts(html: string): string {
-  return html.replace(/<script type="module" crossorigin/g, '<script type="module" fetchpriority="low" crossorigin').replace(/<link rel="modulepreload"/g, '<link rel="modulepreload" fetchpriority="low"');
+  return html
+    .replace(/<script type="module" crossorigin/g, '<script type="module" fetchpriority="low" crossorigin')
+    .replace(/<link rel="modulepreload"/g, '<link rel="modulepreload" fetchpriority="low"');
 }
 
 /**

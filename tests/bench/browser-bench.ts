@@ -192,7 +192,12 @@ export async function runBrowserBench(baseUrl: string, rounds = Number(process.e
   };
   const recipeTitle = 'Weeknight baked ziti';
   const pages: [string, string, ContentMark, (page: Page) => Promise<void>, ((c: BrowserContext) => Promise<void>)?][] = [
-    ['floor (static heading, no CSS/font/JS)', floor.url, { selector: 'h1', text: 'Kitchen' }, (page) => page.getByRole('heading', { name: 'Kitchen', level: 1 }).waitFor()],
+    [
+      'floor (static heading, no CSS/font/JS)',
+      floor.url,
+      { selector: 'h1', text: 'Kitchen' },
+      (page) => page.getByRole('heading', { name: 'Kitchen', level: 1 }).waitFor(),
+    ],
     ['Kitchen (signed out)', '/', { selector: 'h1', text: 'Kitchen' }, (page) => page.getByRole('heading', { name: 'Kitchen', level: 1 }).waitFor()],
     [
       'Recipe book (demo cook)',

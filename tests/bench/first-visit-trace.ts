@@ -87,7 +87,9 @@ const t0 = navStart.ts;
 const ms = (ts: number) => ((ts - t0) / 1000).toFixed(1).padStart(7);
 const main = events.filter((e) => e.pid === fcp.pid && e.tid === navStart.tid);
 
-console.log(`${url} at DPR ${dpr}: HTML ${nav.bytes} B on the wire (${nav.decoded} B), responseStart ${nav.responseStart.toFixed(1)}, responseEnd ${nav.responseEnd.toFixed(1)}`);
+console.log(
+  `${url} at DPR ${dpr}: HTML ${nav.bytes} B on the wire (${nav.decoded} B), responseStart ${nav.responseStart.toFixed(1)}, responseEnd ${nav.responseEnd.toFixed(1)}`,
+);
 console.log(`domInteractive ${nav.domInteractive.toFixed(1)}, DOMContentLoaded ${nav.domContentLoaded.toFixed(1)}, load ${nav.load.toFixed(1)}`);
 console.log(`paint entries: ${JSON.stringify(nav.paints)}`);
 console.log('resources (start / responseStart / end, ms from navigation start):');
@@ -147,5 +149,9 @@ console.log('\nmarks:');
 for (const e of events.filter((e) => e.pid === fcp.pid && marks.includes(e.name) && e.ts >= t0).slice(0, 30)) console.log(`  ${ms(e.ts)} ${e.name}`);
 console.log('\ntotals before first contentful paint:', Object.fromEntries(Object.entries(kinds).map(([k, v]) => [k, Number(v.toFixed(1))])));
 // browser-side: when the renderer process for the page started
-for (const e of events.filter((e) => /RenderProcessHost|ProcessLaunch|ChildProcessLauncher|RendererMain|NavigationRequest|CommitNavigation|DidCommit/.test(e.name) && e.ts >= t0 - 50_000).slice(0, 40))
+for (const e of events
+  .filter(
+    (e) => /RenderProcessHost|ProcessLaunch|ChildProcessLauncher|RendererMain|NavigationRequest|CommitNavigation|DidCommit/.test(e.name) && e.ts >= t0 - 50_000,
+  )
+  .slice(0, 40))
   console.log(`  ${ms(e.ts)} ${((e.dur ?? 0) / 1000).toFixed(1).padStart(6)} ${e.ph} ${e.name} pid ${e.pid}`);
