@@ -100,8 +100,19 @@ export function inlineStyles(html: string, clientDir: string): string {
   });
 }
 
-/** Font weights drawn on the first screen of the Kitchen and the recipe book (headings, body, buttons). */
+/** Font weights drawn on the first screen of a page (headings, body, buttons), unless FIRST_SCREEN_WEIGHTS_OF lists the page. */
 export const FIRST_SCREEN_WEIGHTS = [400, 700, 800, 900];
+
+/**
+ * Pages whose first screen draws other weights: the book's column heads and sort labels are semibold
+ * (600) and nothing on it is 800. A face the first screen draws but the page did not preload is drawn
+ * in Chromium's fallback face until it arrives, and every fallback size and weight costs the renderer a
+ * synchronous round trip to the browser for the system font's settings (about 10 ms each on a loaded
+ * machine: the largest part of a fresh visit's first layout, tests/bench/first-visit-trace.ts).
+ */
+export const FIRST_SCREEN_WEIGHTS_OF: Readonly<Record<string, readonly number[]>> = {
+  'recipe-book': [400, 600, 700, 900],
+};
 
 /**
  * `<link rel="preload">` for the woff2 faces of `weights` named in the style sheets of `html`: the
@@ -121,11 +132,23 @@ export function preloadFonts(html: string, weights: readonly number[]): string {
 }
 
 /**
+ * The app's scripts fetched after the first screen's fonts: `fetchpriority="low"` on the entry and its
+ * module preloads. Chromium holds low-priority requests back while the page's high-priority ones (the
+ * preloaded faces) are in flight, so the faces reach the first layout rather than the fallback face;
+ * the scripts run only after that paint anyway (src/main.tsx).
+ */
+export function scriptsAfterFonts(html: string): string {
+  return html
+    .replace(/<script type="module" crossorigin/g, '<script type="module" fetchpriority="low" crossorigin')
+    .replace(/<link rel="modulepreload"/g, '<link rel="modulepreload" fetchpriority="low"');
+}
+
+/**
  * The built index.html with per-page preloads: the page's route module with its imports, less what
  * the entry already loads. Without Vite's manifest (an older build) every page gets the plain index.html.
  */
 export function createClientShell(clientDir: string) {
-  const indexHtml = preloadFonts(inlineStyles(stylesFirst(readFileSync(path.join(clientDir, 'index.html'), 'utf8')), clientDir), FIRST_SCREEN_WEIGHTS);
+  const styledHtml = scriptsAfterFonts(inlineStyles(stylesFirst(readFileSync(path.join(clientDir, 'index.html'), 'utf8')), clientDir));
   const manifestFile = path.join(clientDir, '.vite', 'manifest.json');
   const manifest: Manifest | null = existsSync(manifestFile) ? (JSON.parse(readFileSync(manifestFile, 'utf8')) as Manifest) : null;
   const entryKey = manifest ? Object.keys(manifest).find((k) => manifest[k].isEntry) : undefined;
@@ -141,8 +164,9 @@ export function createClientShell(clientDir: string) {
     const preloads = [...new Set(js)].filter((f) => !inEntry.has(f));
     const links = [
       ...[...new Set(css)].filter((f) => !inEntry.has(f)).map((f) => `<link rel="stylesheet" crossorigin href="/${f}">`),
-      ...preloads.map((f) => `<link rel="modulepreload" crossorigin href="/${f}">`),
+      ...preloads.map((f) => `<link rel="modulepreload" fetchpriority="low" crossorigin href="/${f}">`),
     ];
+    const indexHtml = preloadFonts(styledHtml, (module ? FIRST_SCREEN_WEIGHTS_OF[module] : undefined) ?? FIRST_SCREEN_WEIGHTS);
     const page = { html: links.length ? indexHtml.replace('</head>', `    ${links.join('\n    ')}\n  </head>`) : indexHtml, preloads };
     pages.set(module, page);
     return page;

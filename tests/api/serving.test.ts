@@ -76,8 +76,8 @@ describe('serving the client', () => {
     const book = await request(t.app).get('/recipes').expect(200);
     expect(book.headers['cache-control']).toBe('private, no-cache');
     expect(book.headers['content-type']).toMatch(/text\/html/);
-    expect(book.text).toContain(`<link rel="modulepreload" crossorigin href="/${PAGE}">`);
-    expect(book.text).toContain(`<link rel="modulepreload" crossorigin href="/${SHARED}">`);
+    expect(book.text).toContain(`<link rel="modulepreload" fetchpriority="low" crossorigin href="/${PAGE}">`);
+    expect(book.text).toContain(`<link rel="modulepreload" fetchpriority="low" crossorigin href="/${SHARED}">`);
     const unknown = await request(t.app).get('/no-such-page').expect(200);
     expect(unknown.headers['cache-control']).toBe('private, no-cache');
     expect(unknown.text).not.toContain('modulepreload');

@@ -18,7 +18,16 @@
  * `responseEnd` but the renderer creates the document only later (`documentMs`, when scripts added
  * before the page run). That wait is the browser's own start-up, which no page can shorten; "page"
  * figures leave it out (content − max(0, document − responseEnd)), "full" figures keep it.
+ *
+ * The "floor" row is the same visit of a static page holding only the heading (no style sheet, font or
+ * script, from a bare node:http server): what the harness and the browser cost before any page work.
+ * Each new context is a new desktop window, whose omnibox popup Chromium builds as a WebUI page in a
+ * renderer of its own (about as much CPU as the visited page, at the same moment; no phone browser
+ * does this): it is turned off (WINDOW_UI_FEATURES) unless BROWSER_UI=1. Figures from before that
+ * change (issue 14's first ones) include it. tests/bench/first-visit-trace.ts breaks one visit down.
  */
+import { createServer } from 'node:http';
+import type { AddressInfo } from 'node:net';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { launchBrowser } from '../helpers/browser';
 import { DEMO_ACCOUNTS } from '../../server/seeders/demo-accounts';
@@ -145,12 +154,33 @@ async function firstVisit(
   }
 }
 
+/**
+ * Desktop Chromium builds the omnibox popup of every new window as a WebUI page in a renderer of its
+ * own: ~170 modules, as much CPU as the visited page, at the same moment (a phone's browser has no such
+ * window). Every visit here opens a new window, so it is turned off unless BROWSER_UI=1.
+ */
+export const WINDOW_UI_FEATURES = ['WebUIOmniboxPopup', 'WebUIOmniboxAimPopup', 'WebUIOmniboxFullPopup', 'WebUIOmniboxFrame'];
+
+/**
+ * The floor: a static page with only the heading, no style sheet, font or script, from a bare
+ * node:http server. Its first paint is what the harness and the browser cost on their own.
+ */
+export const FLOOR_HTML =
+  '<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>Floor</title></head><body><h1>Kitchen</h1></body></html>';
+
+async function startFloorServer() {
+  const server = createServer((_req, res) => res.writeHead(200, { 'Content-Type': 'text/html; charset=utf-8' }).end(FLOOR_HTML));
+  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+  return { url: `http://127.0.0.1:${(server.address() as AddressInfo).port}/`, close: () => new Promise<void>((resolve) => server.close(() => resolve())) };
+}
+
 function figures(values: number[]) {
   return `p50 ${percentile(values, 50).toFixed(0)} ms, p95 ${percentile(values, 95).toFixed(0)} ms`;
 }
 
 export async function runBrowserBench(baseUrl: string, rounds = Number(process.env.BROWSER_ROUNDS ?? 9)) {
-  const browser = await launchBrowser();
+  const browser = await launchBrowser({ disableFeatures: process.env.BROWSER_UI ? [] : WINDOW_UI_FEATURES });
+  const floor = await startFloorServer();
   const cook = DEMO_ACCOUNTS.find((a) => a.role === 'cook')!;
   const signIn = async (context: BrowserContext) => {
     const csrf = (await (await context.request.get(`${baseUrl}/api/auth/csrf`)).json()) as { token: string };
@@ -162,6 +192,12 @@ export async function runBrowserBench(baseUrl: string, rounds = Number(process.e
   };
   const recipeTitle = 'Weeknight baked ziti';
   const pages: [string, string, ContentMark, (page: Page) => Promise<void>, ((c: BrowserContext) => Promise<void>)?][] = [
+    [
+      'floor (static heading, no CSS/font/JS)',
+      floor.url,
+      { selector: 'h1', text: 'Kitchen' },
+      (page) => page.getByRole('heading', { name: 'Kitchen', level: 1 }).waitFor(),
+    ],
     ['Kitchen (signed out)', '/', { selector: 'h1', text: 'Kitchen' }, (page) => page.getByRole('heading', { name: 'Kitchen', level: 1 }).waitFor()],
     [
       'Recipe book (demo cook)',
@@ -174,18 +210,19 @@ export async function runBrowserBench(baseUrl: string, rounds = Number(process.e
   // BROWSER_DPR: the device pixel ratios to visit at, e.g. "3" (the phone's own) or "3,1"
   const ratios = (process.env.BROWSER_DPR ?? '3,1').split(',').map(Number);
   try {
-    await firstVisit(browser, 3, `${baseUrl}/`, pages[0][2], pages[0][3]); // warm the server, not the browser
+    await firstVisit(browser, 3, `${baseUrl}/`, pages[1][2], pages[1][3]); // warm the server, not the browser
     for (const dpr of ratios) {
       // the pages take turns, so a change in the machine's load falls on both alike
       const visits: Visit[][] = pages.map(() => []);
       for (let i = 0; i < rounds; i++) {
         for (const [p, [, path, content, ready, prepare]] of pages.entries())
-          visits[p].push(await firstVisit(browser, dpr, `${baseUrl}${path}`, content, ready, prepare));
+          visits[p].push(await firstVisit(browser, dpr, path.startsWith('http') ? path : `${baseUrl}${path}`, content, ready, prepare));
       }
       for (const [p, [name]] of pages.entries()) report(`${name}, 390×844 at DPR ${dpr}`, visits[p]);
     }
   } finally {
     await browser.close();
+    await floor.close();
   }
 }
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { createClientShell, fillShell, inlineStyles, preloadFonts, stylesFirst } from '../../server/lib/client-shell';
+import { createClientShell, fillShell, inlineStyles, preloadFonts, scriptsAfterFonts, stylesFirst } from '../../server/lib/client-shell';
 import { PAGE_STATE_ID } from '../../shared/page-render';
 
 const BUILT = `<!doctype html>
@@ -65,6 +65,26 @@ describe('the page shell', () => {
     expect(preloadFonts(BUILT, [400])).toBe(BUILT);
   });
 
+  it('preloads the faces each page’s first screen draws: the book’s semibold, the Kitchen’s extra-bold', () => {
+    const dir = mkdtempSync(path.join(tmpdir(), 'client-shell-'));
+    mkdirSync(path.join(dir, 'assets'));
+    writeFileSync(path.join(dir, 'index.html'), BUILT);
+    const face = (w: number) => `@font-face{font-family:Nunito;font-weight:${w};src:url(/assets/n-${w}.woff2)format("woff2")}`;
+    writeFileSync(path.join(dir, 'assets', 'index-C3.css'), [400, 600, 700, 800, 900].map(face).join(''));
+    const shell = createClientShell(dir);
+    const preloaded = (p: string) => [...shell.html(p).matchAll(/rel="preload" as="font"[^>]*href="\/assets\/n-(\d+)\.woff2"/g)].map((m) => Number(m[1]));
+    expect(preloaded('/recipes')).toEqual([400, 600, 700, 900]);
+    expect(preloaded('/')).toEqual([400, 700, 800, 900]);
+  });
+
+  it('asks for the scripts at low priority, after the preloaded faces, and every one of them', () => {
+    const html = scriptsAfterFonts(BUILT);
+    expect(html).toContain('<script type="module" fetchpriority="low" crossorigin src="/assets/index-A1.js">');
+    expect(html).toContain('<link rel="modulepreload" fetchpriority="low" crossorigin href="/assets/page-state-B2.js">');
+    expect(html.match(/<script type="module"|<link rel="modulepreload"/g)).toHaveLength(2);
+    expect(html.match(/fetchpriority="low"/g)).toHaveLength(2);
+  });
+
   it('preloads a page’s own chunks once and never repeats the entry’s style sheet or scripts', () => {
     const dir = mkdtempSync(path.join(tmpdir(), 'client-shell-'));
     mkdirSync(path.join(dir, '.vite'));
@@ -82,6 +102,7 @@ describe('the page shell', () => {
     expect(html.match(/rel="stylesheet"/g)).toHaveLength(1);
     expect(shell.preloads('/')).toEqual(['assets/kitchen-D4.js', 'assets/card-E5.js']);
     expect(html.match(/page-state-B2\.js/g)).toHaveLength(1);
+    expect(html).toContain('<link rel="modulepreload" fetchpriority="low" crossorigin href="/assets/kitchen-D4.js">');
   });
 
   it('puts a drawn page in #root, its title in the head and its state in a JSON script', () => {
