@@ -54,11 +54,12 @@ const SPICE_GROUP = '02';
 const CUT_SMALL = new Set(['chop', 'dice', 'mince', 'cube']);
 /** Grated and shredded are one cut in a cook's cup: the box grater's coarse holes (*common practice*). */
 const GRATED = new Set(['grate', 'shred']);
-/** Pieces of a food, never what a bare count ("2 onions") means. */
-const SUB_PIECES = new Set([
+/** Cuts and small parts of a food that a sized count ("1 md kohlrabi") never means, unless it names them. */
+const CUT_PIECES = new Set([
   'slice',
   'strip',
   'ring',
+  'rings',
   'wedge',
   'cube',
   'cubic',
@@ -66,9 +67,16 @@ const SUB_PIECES = new Set([
   'floret',
   'leaf',
   'sprig',
-  'stalk',
   'pat',
   'dash',
+  'inch',
+  'section',
+  'segment',
+]);
+/** Pieces of a food, never what a bare count ("2 onions") means: its cuts, and the containers and measures it comes in. */
+const SUB_PIECES = new Set([
+  ...CUT_PIECES,
+  'stalk',
   'packet',
   'package',
   'container',
@@ -77,8 +85,6 @@ const SUB_PIECES = new Set([
   'head',
   'pinch',
   'piece',
-  'rings',
-  'inch',
   'cup',
   'tbsp',
   'tsp',
@@ -89,8 +95,6 @@ const SUB_PIECES = new Set([
   'bag',
   'envelope',
   'sheet',
-  'section',
-  'segment',
   'enchilada',
   'serving',
   'pint',
@@ -235,26 +239,6 @@ const SIZE_PREFERENCE: Record<SizeWord, number> = {
   jumbo: 0,
   'extra-small': -0.2,
 };
-
-/** Cuts and small parts of a food that a sized count ("1 md kohlrabi") never means, unless it names them. */
-const CUT_PIECES = new Set([
-  'slice',
-  'strip',
-  'ring',
-  'rings',
-  'wedge',
-  'cube',
-  'cubic',
-  'spear',
-  'floret',
-  'leaf',
-  'sprig',
-  'pat',
-  'dash',
-  'inch',
-  'section',
-  'segment',
-]);
 
 /**
  * Words for a kind of a food with its own piece, weighed by that portion only when the line names it:
