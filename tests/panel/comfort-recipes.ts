@@ -40,63 +40,63 @@ export interface PanelRecipe {
   lines: PanelLine[];
 }
 
-const NOT_COOKED = '^(?!.*\\b(cooked|broiled|pan-browned|pan-broiled|baked|roasted|fried|crumbles)\\b)';
-const BY_WEIGHT: [number, number] = [0.75, 1.3];
+export const NOT_COOKED = '^(?!.*\\b(cooked|broiled|pan-browned|pan-broiled|baked|roasted|fried|crumbles)\\b)';
+export const BY_WEIGHT: [number, number] = [0.75, 1.3];
 
-const swap = (to: string, ratio: [number, number] = BY_WEIGHT, maxShare = 1): PanelSwap => ({ to, ratio, maxShare });
+export const swap = (to: string, ratio: [number, number] = BY_WEIGHT, maxShare = 1): PanelSwap => ({ to, ratio, maxShare });
 
 // Substitutes a cook reaches for, by class (*common practice* unless said otherwise).
-const leanGroundBeef = swap(`${NOT_COOKED}Beef, ground, 9\\d% lean`);
-const groundTurkey = swap(`${NOT_COOKED}Ground turkey`);
-const groundChicken = swap(`${NOT_COOKED}Chicken, ground`);
-const leanerMince = [leanGroundBeef, groundTurkey, groundChicken];
-const lighterMilk = swap('^Milk, (reduced fat|lowfat|nonfat), fluid', [0.8, 1.25]);
-const evaporatedSkim = swap('^Milk, canned, evaporated, nonfat', [0.6, 1.25]);
-const lighterCream = [swap('^Cream, (fluid, half and half|half and half, (lowfat|fat free)|fluid, light \\(coffee)', [0.8, 1.25]), evaporatedSkim];
-const plainYogurt = swap('^Yogurt, (Greek, plain, (nonfat|lowfat)|plain, (low fat|skim milk))', [0.7, 1.3]);
-const lighterSourCream = swap('^(Sour cream, (reduced fat|light|fat free)|Cream, sour, reduced fat)', [0.75, 1.3]);
-const reducedFatCheddar = swap('^(Cheese, cheddar, reduced fat|Cheese, low fat, cheddar|USDA commodity, cheese, cheddar, reduced fat)');
-const partSkimMozzarella = swap('^Cheese, mozzarella, .*part.skim');
-const lowFatMonterey = swap('^Cheese, monterey, low fat');
-const partSkimRicotta = swap('^Cheese, ricotta, part skim');
-const lowFatCottage = swap('^Cheese, cottage, (lowfat|nonfat)');
-const lighterCreamCheese = swap('^Cheese, (neufchatel|cream, low fat|cream, fat free)');
-const wholeGrainPasta = swap('^Pasta, (whole-wheat|whole grain).*dry');
-const proteinPasta = swap('^(Spaghetti|Macaroni), protein-fortified, dry');
-const betterPasta = [wholeGrainPasta, proteinPasta];
-const halfWholeWheatFlour = swap('^Wheat flour, whole-grain', [0.85, 1.15], 0.5);
-const eggWhites = (maxShare = 1) => [swap('^Egg, white, raw', [1.0, 1.75], maxShare), swap('^Egg substitute, liquid', [0.9, 1.75], maxShare)];
-const halfAsApplesauce = swap('^Applesauce, canned, unsweetened', [0.5, 1.3], 0.5);
-const halfAsYogurt = { ...plainYogurt, maxShare: 0.5 };
+export const leanGroundBeef = swap(`${NOT_COOKED}Beef, ground, 9\\d% lean`);
+export const groundTurkey = swap(`${NOT_COOKED}Ground turkey`);
+export const groundChicken = swap(`${NOT_COOKED}Chicken, ground`);
+export const leanerMince = [leanGroundBeef, groundTurkey, groundChicken];
+export const lighterMilk = swap('^Milk, (reduced fat|lowfat|nonfat), fluid', [0.8, 1.25]);
+export const evaporatedSkim = swap('^Milk, canned, evaporated, nonfat', [0.6, 1.25]);
+export const lighterCream = [swap('^Cream, (fluid, half and half|half and half, (lowfat|fat free)|fluid, light \\(coffee)', [0.8, 1.25]), evaporatedSkim];
+export const plainYogurt = swap('^Yogurt, (Greek, plain, (nonfat|lowfat)|plain, (low fat|skim milk))', [0.7, 1.3]);
+export const lighterSourCream = swap('^(Sour cream, (reduced fat|light|fat free)|Cream, sour, reduced fat)', [0.75, 1.3]);
+export const reducedFatCheddar = swap('^(Cheese, cheddar, reduced fat|Cheese, low fat, cheddar|USDA commodity, cheese, cheddar, reduced fat)');
+export const partSkimMozzarella = swap('^Cheese, mozzarella, .*part.skim');
+export const lowFatMonterey = swap('^Cheese, monterey, low fat');
+export const partSkimRicotta = swap('^Cheese, ricotta, part skim');
+export const lowFatCottage = swap('^Cheese, cottage, (lowfat|nonfat)');
+export const lighterCreamCheese = swap('^Cheese, (neufchatel|cream, low fat|cream, fat free)');
+export const wholeGrainPasta = swap('^Pasta, (whole-wheat|whole grain).*dry');
+export const proteinPasta = swap('^(Spaghetti|Macaroni), protein-fortified, dry');
+export const betterPasta = [wholeGrainPasta, proteinPasta];
+export const halfWholeWheatFlour = swap('^Wheat flour, whole-grain', [0.85, 1.15], 0.5);
+export const eggWhites = (maxShare = 1) => [swap('^Egg, white, raw', [1.0, 1.75], maxShare), swap('^Egg substitute, liquid', [0.9, 1.75], maxShare)];
+export const halfAsApplesauce = swap('^Applesauce, canned, unsweetened', [0.5, 1.3], 0.5);
+export const halfAsYogurt = { ...plainYogurt, maxShare: 0.5 };
 /** label rule (tests/panel/README.md): a batter's milk or buttermilk accepts up to half as plain Greek yogurt or low-fat cottage cheese, blended */
-const halfOfBatterMilk = [swap('^Yogurt, Greek, plain, (nonfat|lowfat)', [0.75, 1.3], 0.5), swap('^Cheese, cottage, (lowfat|nonfat)', [0.75, 1.3], 0.5)];
+export const halfOfBatterMilk = [swap('^Yogurt, Greek, plain, (nonfat|lowfat)', [0.75, 1.3], 0.5), swap('^Cheese, cottage, (lowfat|nonfat)', [0.75, 1.3], 0.5)];
 /**
  * label rule (tests/panel/README.md, round 5): the milk of a baked cheese sauce accepts up to half its weight as
  * blended low-fat cottage cheese or plain nonfat Greek yogurt, stirred in off the heat before it bakes
  */
-const halfOfBakedCheeseSauceMilk = [
+export const halfOfBakedCheeseSauceMilk = [
   swap('^Cheese, cottage, (lowfat|nonfat)', [0.75, 1.3], 0.5),
   swap('^Yogurt, Greek, plain, (nonfat|lowfat)', [0.75, 1.3], 0.5),
 ];
-const chickenBreastCooked = swap(
+export const chickenBreastCooked = swap(
   '^(Chicken, broilers or fryers, breast, meat only, cooked, (roasted|stewed)|Turkey, .*breast, meat only, cooked, roasted)',
   [0.8, 1.25],
 );
-const chickenBreastRaw = swap('^Chicken, broilers or fryers, breast, (skinless, boneless, )?meat only.*raw', [0.8, 1.25]);
-const turkeySausage = swap(`${NOT_COOKED}(Turkey sausage|Sausage,? .*turkey)`);
-const leanPorkSausage = swap(`${NOT_COOKED}Pork sausage, link/patty, reduced fat`);
-const leanHam = swap('^(Ham, (sliced, pre-packaged|smoked, extra lean)|Canadian bacon, unprepared|Pork, cured, ham.*lean only)', [0.6, 1.3]);
+export const chickenBreastRaw = swap('^Chicken, broilers or fryers, breast, (skinless, boneless, )?meat only.*raw', [0.8, 1.25]);
+export const turkeySausage = swap(`${NOT_COOKED}(Turkey sausage|Sausage,? .*turkey)`);
+export const leanPorkSausage = swap(`${NOT_COOKED}Pork sausage, link/patty, reduced fat`);
+export const leanHam = swap('^(Ham, (sliced, pre-packaged|smoked, extra lean)|Canadian bacon, unprepared|Pork, cured, ham.*lean only)', [0.6, 1.3]);
 
 /** label rule (tests/panel/README.md): a pastry lid may be phyllo sheets misted with oil, about half the pastry's weight */
-const phylloLid = swap('^Phyllo dough', [0.35, 0.7]);
+export const phylloLid = swap('^Phyllo dough', [0.35, 0.7]);
 
 /** label rule (tests/panel/README.md): a flour tortilla on the griddle accepts corn tortillas by weight */
-const cornOnGriddle = swap('^Tortillas, ready-to-bake or -fry, corn', [0.85, 1.2]);
+export const cornOnGriddle = swap('^Tortillas, ready-to-bake or -fry, corn', [0.85, 1.2]);
 /** label rule (tests/panel/README.md, round 7): a flour tortilla accepts a whole-wheat tortilla of the same size, tortilla for tortilla */
-const wholeWheatTortilla = swap('^Tortillas, ready-to-bake or -fry, whole wheat', [0.85, 1.15]);
+export const wholeWheatTortilla = swap('^Tortillas, ready-to-bake or -fry, whole wheat', [0.85, 1.15]);
 
-const LESS = (lo = 0.5): [number, number] => [lo, 1];
-const MORE: [number, number] = [1, 1.5];
+export const LESS = (lo = 0.5): [number, number] => [lo, 1];
+export const MORE: [number, number] = [1, 1.5];
 
 /**
  * The main protein of a mixed dish (a casserole, layered bake, pie filling, pasta or rice dish, chili,
@@ -107,14 +107,14 @@ const MORE: [number, number] = [1, 1.5];
  * by weight, and a written protein that is already lean (under 10 g fat per 100 g, FDA 21 CFR
  * 101.62(e)(2): skinless poultry meat, sirloin, canned tuna) may take ×1–1.5 as it is.
  */
-const MORE_LEAN_MAIN = 1.5;
-const moreOfLean = (swaps: PanelSwap[]): PanelSwap[] => swaps.map((s) => ({ ...s, ratio: [s.ratio[0], Math.max(s.ratio[1], MORE_LEAN_MAIN)] }));
-const MORE_LEAN: [number, number] = [1, MORE_LEAN_MAIN];
+export const MORE_LEAN_MAIN = 1.5;
+export const moreOfLean = (swaps: PanelSwap[]): PanelSwap[] => swaps.map((s) => ({ ...s, ratio: [s.ratio[0], Math.max(s.ratio[1], MORE_LEAN_MAIN)] }));
+export const MORE_LEAN: [number, number] = [1, MORE_LEAN_MAIN];
 
-const keepSeasoning = 'seasoning: kept as written';
-const keepLeavener = 'leavener: kept as written';
-const keepAromatic = 'aromatic: kept as written';
-const keepLiquid = 'cooking liquid: kept as written';
+export const keepSeasoning = 'seasoning: kept as written';
+export const keepLeavener = 'leavener: kept as written';
+export const keepAromatic = 'aromatic: kept as written';
+export const keepLiquid = 'cooking liquid: kept as written';
 
 export const COMFORT_PANEL: PanelRecipe[] = [
   {
