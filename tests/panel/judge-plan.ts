@@ -3,6 +3,7 @@
  * a line that is unchanged is fine; a changed line must be one of the swaps or the scaling its label
  * accepts. A partly swapped line (the original food keeps part of the grams) must keep the original
  * food, stay within the swap's share, and the substitute's grams per gram replaced must be in the band.
+ * The development set's labels (tests/dev-set/comfort-dev-labels.ts) are judged the same way.
  */
 import type { PanelLine, PanelRecipe, PanelSwap } from './comfort-recipes';
 
@@ -27,6 +28,10 @@ export interface LineVerdict {
 
 const SAME_GRAMS = 0.005;
 
+/** a rewrite answer's plan lines (`before.lines`, `after.lines`) as the judge reads them */
+export const toJudgedLines = (lines: { index: number; food: { id: number; name: string }; grams: number }[]): JudgedPlanLine[] =>
+  lines.map((l) => ({ index: l.index, food: { id: l.food.id, name: l.food.name }, grams: l.grams }));
+
 function within(value: number, [lo, hi]: [number, number], slack = 1e-6) {
   return value >= lo - slack && value <= hi + slack;
 }
@@ -39,8 +44,8 @@ function matchingSwap(label: PanelLine, foodName: string): PanelSwap[] {
   return (label.swaps ?? []).filter((s) => new RegExp(s.to, 'i').test(foodName));
 }
 
-/** Every recipe line's verdict; `before` and `after` are the plan lines of one rewrite answer. */
-export function judgePlan(recipe: PanelRecipe, before: JudgedPlanLine[], after: JudgedPlanLine[]): LineVerdict[] {
+/** Every recipe line's verdict; `before` and `after` are the plan lines of one rewrite answer. A panel recipe or any labelled recipe (the development set's). */
+export function judgePlan(recipe: Pick<PanelRecipe, 'id' | 'lines'>, before: JudgedPlanLine[], after: JudgedPlanLine[]): LineVerdict[] {
   const verdicts: LineVerdict[] = [];
   for (const written of before) {
     const label = recipe.lines[written.index];
