@@ -97,6 +97,8 @@ export function lineKind(line: CulinaryLine): LineKind {
   if (has(roles, 'cream') || /^cream\b|half and half/i.test(name)) return 'cream';
   if (has(roles, 'dairy-milk') || /^milk\b|buttermilk/i.test(name)) return 'milk';
   if (/^milk, canned, evaporated/i.test(name)) return 'milk';
+  // a spoonful of sesame oil is stirred in for its toasted flavour, a seasoning; more than a tablespoon is the cooking oil
+  if (/^oil, sesame\b/i.test(name) && line.grams <= 15) return 'seasoning';
   if (has(roles, 'cooking-fat') || /^(butter|oil|margarine|shortening|lard)\b/i.test(name)) return 'butter-oil';
   if (has(roles, 'cured-meat-topping')) return 'cured-meat';
   if (has(roles, 'ground-meat', 'poultry', 'red-meat', 'pork', 'sausage', 'plant-protein')) return 'meat';
