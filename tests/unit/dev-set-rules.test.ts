@@ -1,7 +1,12 @@
 /**
- * Riced cauliflower for up to half the cooked rice of a baked rice casserole (data/substitution-rules.json,
- * `rice-casserole-half-cauliflower`, *common practice*): 1:1 by weight within ±10 %, never more than half the rice,
- * and not in a rice soup. Foods are USDA SR28 entries named by NDB number; the recipes are invented.
+ * Substitution rules added while measuring the labelled development set (tests/dev-set/, issue 10 round 8), each
+ * *common practice* (data/substitution-rules.json):
+ * - `rice-casserole-half-cauliflower`: riced cauliflower for up to half the cooked rice of a baked rice casserole, 1:1
+ *   by weight within ±10 %; not in a rice soup;
+ * - `coated-pieces-oven-fry`: pieces dipped in egg and dredged in flour or cornstarch, then shallow-fried (sesame
+ *   chicken, fried chicken), oven- or air-fried with a quarter of the frying oil, as a breaded cutlet is
+ *   (`frying-oil-oven-fry`); without a coating the pan's oil only halves.
+ * Foods are USDA SR28 entries named by NDB number; the recipes are invented.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { CatalogueFood } from '../../shared/food';
@@ -22,7 +27,7 @@ beforeAll(() => {
 
 const at = (ndb: string, phrase: string, grams: number): CandidateLine => ({ food: byNdb.get(ndb)!, phrase, grams, comment: null });
 const none = () => ({ diet: [], excludedFoodIds: new Set<number>(), approved: [] });
-const RULE = 'rice-casserole-half-cauliflower';
+const RICE_RULE = 'rice-casserole-half-cauliflower';
 
 describe('a baked rice casserole: half its cooked rice as riced cauliflower', () => {
   it('offers raw cauliflower for up to half the rice, 1:1 by weight within ±10 %', () => {
@@ -37,7 +42,7 @@ describe('a baked rice casserole: half its cooked rice as riced cauliflower', ()
     ];
     const r = recipeCandidates(engine, casserole, none());
     expect(r.dishType).toBe('assembled-bake');
-    const offers = r.lines[0].candidates.filter((c) => c.rule?.id === RULE);
+    const offers = r.lines[0].candidates.filter((c) => c.rule?.id === RICE_RULE);
     expect(offers.map((c) => c.name)).toEqual(['Cauliflower, raw']);
     expect(offers[0]).toMatchObject({ massRatio: 1, maxShare: 0.5, partial: true, band: [0.9, 1.1] });
   });
@@ -51,6 +56,33 @@ describe('a baked rice casserole: half its cooked rice as riced cauliflower', ()
       at('11143', 'celery, diced', 80),
     ];
     const r = recipeCandidates(engine, soup, none());
-    expect(r.lines[0].candidates.filter((c) => c.rule?.id === RULE)).toEqual([]);
+    expect(r.lines[0].candidates.filter((c) => c.rule?.id === RICE_RULE)).toEqual([]);
+  });
+});
+
+describe('egg- and starch-coated pieces: oven-fried with a quarter of the frying oil', () => {
+  it('lets the frying oil of cornstarch-coated chicken go down to a quarter', () => {
+    const glazed = [
+      at('05096', 'boneless skinless chicken thighs, cut into pieces', 680),
+      at('01123', 'large egg', 50),
+      at('20027', 'cornstarch', 64),
+      at('04044', 'vegetable oil', 73),
+      at('16124', 'soy sauce', 64),
+      at('19296', 'honey', 85),
+    ];
+    const r = recipeCandidates(engine, glazed, none());
+    expect(r.lines[3].keepScale).toEqual([0.25, 1]);
+    expect(r.lines[3].candidates[0].rule?.id).toBe('coated-pieces-oven-fry');
+  });
+
+  it('a stir-fry with cornstarch but no egg coating keeps the sautéing half', () => {
+    const stirFry = [
+      at('13971', 'flank steak, thinly sliced', 454),
+      at('20027', 'cornstarch', 16),
+      at('04044', 'vegetable oil', 41),
+      at('11090', 'broccoli florets', 364),
+    ];
+    const r = recipeCandidates(engine, stirFry, none());
+    expect(r.lines[2].keepScale).toEqual([0.5, 1]);
   });
 });
