@@ -12,6 +12,8 @@ export interface DishReading {
   mixedDish: boolean;
   /** raw meat or fish is browned in the dish's pan (ground beef for tacos), outside a bake */
   browsMeat: boolean;
+  /** seasoned with soy, oyster or fish sauce: its noodles or rice are stir-fried (lo mein, pad thai, fried rice) */
+  wokSauce: boolean;
   lines: { kind: LineKind; role: LineFunction; context: DishContext }[];
 }
 
@@ -420,7 +422,7 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
     if (dishType === 'griddle-saute' && context === 'griddle-saute' && (role === 'cream' || role === 'dairy-liquid') && panSauced) context = 'boiled-sauce';
     return { kind: kinds[i], role, context };
   });
-  return { dishType, hasRoux, mixedDish, browsMeat, lines: out };
+  return { dishType, hasRoux, mixedDish, browsMeat, wokSauce, lines: out };
 }
 
 /** Functions that keep a line exactly as written unless the cook unlocks it (PRODUCT.md step 5). */
