@@ -70,7 +70,8 @@ export interface LineSituation {
 export function rulesForLine(rules: readonly SubstitutionRule[], line: LineSituation): SubstitutionRule[] {
   return rules.filter(
     (r) =>
-      inFoodClass(r.from, line.food, line.phrase) && ruleHoldsIn(r, line.role, line.dishType, line.context, line.mixedDish, line.recipeKinds, line.browsMeat, line.wokSauce),
+      inFoodClass(r.from, line.food, line.phrase) &&
+      ruleHoldsIn(r, line.role, line.dishType, line.context, line.mixedDish, line.recipeKinds, line.browsMeat, line.wokSauce),
   );
 }
 
