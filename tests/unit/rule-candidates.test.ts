@@ -738,4 +738,33 @@ describe('issue 10 round 6: lean cuts, a lamb pie and its mash, cookie dough, qu
     const fatFree = byRule(bake.lines[0], 'cream-cheese-to-fat-free-in-fillings');
     expect(fatFree.map((c) => [c.massRatio, c.band])).toEqual([[1, [0.9, 1.1]]]);
   });
+
+  it('a cheesy rice casserole: riced cauliflower for up to half its cooked rice, 1:1 by weight within ±10 %; not a rice pudding, nor a bake with no cheese', () => {
+    const casserole = [
+      at('20045', 'cooked white rice', 474),
+      at('11093', 'frozen chopped broccoli', 454),
+      at('06043', 'condensed cream of mushroom soup', 298),
+      at('01077', 'whole milk', 122),
+      at('01009', 'shredded cheddar cheese', 170),
+    ];
+    const r = recipeCandidates(engine, casserole, none());
+    expect(r.dishType).toBe('assembled-bake');
+    expect(byRule(r.lines[0], 'casserole-rice-half-cauliflower').map((c) => [c.name, c.massRatio, c.maxShare, c.band])).toEqual([
+      ['Cauliflower, raw', 1, 0.5, [0.9, 1.1]],
+    ]);
+    const noCheese = recipeCandidates(engine, casserole.slice(0, 4), none());
+    expect(byRule(noCheese.lines[0], 'casserole-rice-half-cauliflower')).toEqual([]);
+    const pudding = recipeCandidates(
+      engine,
+      [
+        ...casserole.slice(0, 1),
+        at('01077', 'whole milk', 732),
+        at('19335', 'sugar', 100),
+        at('01009', 'cheddar', 20),
+        at('18079', 'crumbs', 30, 'for the top'),
+      ],
+      none(),
+    );
+    expect(byRule(pudding.lines[0], 'casserole-rice-half-cauliflower')).toEqual([]);
+  });
 });
