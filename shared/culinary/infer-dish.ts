@@ -232,6 +232,8 @@ function roleOf(
     dipMilk: (index: number) => boolean;
     /** fruit baked under a crumble: its flour, oats and butter are the topping */
     crumble: boolean;
+    /** crumbs are written "for the top" */
+    crumbTopping: boolean;
   },
   index: number,
 ): LineFunction {
@@ -298,6 +300,8 @@ function roleOf(
     case 'butter-oil':
       if (ctx.crumble) return 'topping';
       if (GREASE_WORDS.test(note)) return 'cooking-fat';
+      // melted butter beside a crumb topping on a casserole is tossed with the crumbs, not a pan's fat
+      if (dish === 'assembled-bake' && ctx.crumbTopping && /\bmelted\b/i.test(`${note} ${line.phrase}`)) return 'topping';
       if (bake) return 'baking-fat';
       if (ctx.hasRoux && index === ctx.rouxFat) return 'fat-for-roux';
       return 'cooking-fat';
@@ -404,7 +408,8 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
   // the milk beaten with the breading's eggs (written next to them) is its dip
   const dipMilk = (i: number) => breaded && (kinds[i - 1] === 'egg' || kinds[i + 1] === 'egg');
   const crumble = dishType === 'assembled-bake' && fruitUnderCrumble(lines, kinds);
-  const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat, riceNotPasta, wokSauce, breaded, enrichment, dredgeFlour, dipMilk, crumble };
+  const crumbTopping = lines.some((l, i) => kinds[i] === 'crumbs' && TOPPING_WORDS.test(`${l.comment ?? ''} ${l.phrase}`));
+  const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat, riceNotPasta, wokSauce, breaded, enrichment, dredgeFlour, dipMilk, crumble, crumbTopping };
   // mince bound with crumbs and egg (a loaf, meatballs) or a breaded piece is shaped into the portion; a dredged
   // cutlet or steak is the portion too, unless it is cut into bite-size pieces tossed in a sauce (sesame chicken)
   const bitePieces = lines.some((l, i) => kinds[i] === 'meat' && BITE_PIECE_WORDS.test(`${l.phrase} ${l.comment ?? ''}`));

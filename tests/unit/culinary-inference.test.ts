@@ -729,4 +729,26 @@ describe('issue 10 round 8: breaded and braised mains, bars and crisps, pizza to
       readDish(recipe(FLOUR, SUGAR(100), ['sugar', 12, 'Sugars, granulated', '19', ['sweetener'], 'for sprinkling on top'], MILK(400))).lines[2].role,
     ).toBe('sweetener');
   });
+
+  it('melted butter beside a crumb topping on a casserole is tossed with the crumbs: a topping that may halve, not a pan fat', () => {
+    const rules = parseRuleFile(ruleFile);
+    const chicken: Spec = ['shredded cooked chicken', 418, 'Chicken, broilers or fryers, meat only, roasted', '05', ['poultry'], undefined, '05013', 7];
+    const soup: Spec = ['condensed cream of chicken soup', 298, 'Soup, cream of chicken, canned, condensed', '06', ['condensed-soup']];
+    const crumbs: Spec = ['dry bread crumbs', 54, 'Bread crumbs, dry, grated, plain', '18', ['breadcrumb-coating'], 'for the top', '18079', 5.3];
+    const divan = readDish(recipe(chicken, soup, CHEDDAR(), crumbs, BUTTER(28, 'melted')));
+    expect(divan.dishType).toBe('assembled-bake');
+    expect(divan.lines[4]).toMatchObject({ role: 'topping', context: 'topping' });
+    const butter = line(BUTTER(28, 'melted')).food!;
+    const applicable = rulesForLine(rules, {
+      food: butter,
+      phrase: 'butter',
+      role: 'topping',
+      dishType: 'assembled-bake',
+      context: 'topping',
+      recipeKinds: new Set<LineKind>(['meat', 'condensed-soup', 'melting-cheese', 'crumbs', 'butter-oil']),
+    });
+    expect(keepScaleOf(applicable)).toMatchObject({ range: [0.5, 1], rule: { id: 'crumb-topping-butter-half' } });
+    // butter that sautés the onions of the same casserole stays a pan fat
+    expect(readDish(recipe(chicken, soup, CHEDDAR(), crumbs, BUTTER(28), ONION)).lines[4].role).toBe('cooking-fat');
+  });
 });
