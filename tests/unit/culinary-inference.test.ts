@@ -34,6 +34,16 @@ const PASTA: Spec = ['elbow macaroni', 454, 'Pasta, dry, enriched', '20', ['past
 const CHEDDAR = (comment?: string): Spec => ['sharp cheddar cheese', 226, 'Cheese, cheddar', '01', ['melting-cheese'], comment, '01009', 33];
 const ONION: Spec = ['onion', 110, 'Onions, raw', '11', ['vegetable']];
 const BEEF: Spec = ['ground beef', 454, 'Beef, ground, 80% lean meat / 20% fat, raw', '13', ['ground-meat', 'red-meat'], undefined, '23572', 20];
+const PORK_CHOPS: Spec = [
+  'boneless pork loin chops, pounded thin',
+  680,
+  'Pork, fresh, loin, top loin (chops), boneless, lean only, raw',
+  '10',
+  ['pork'],
+  undefined,
+  '10200',
+  5,
+];
 
 describe('dish type from the whole recipe', () => {
   it('reads pancakes as a batter: as much milk as flour, little sugar, a leavener', () => {
@@ -133,16 +143,7 @@ describe('line function', () => {
   });
 
   it('crumbs, egg and flour around a whole cut are its breading (a schnitzel), around mince its binder; an egg "for brushing" is a wash, not structure', () => {
-    const chops: Spec = [
-      'boneless pork loin chops, pounded thin',
-      680,
-      'Pork, fresh, loin, top loin (chops), boneless, lean only, raw',
-      '10',
-      ['pork'],
-      undefined,
-      '10200',
-      5,
-    ];
+    const chops = PORK_CHOPS;
     const crumbs: Spec = ['dry bread crumbs', 162, 'Bread crumbs, dry, grated, plain', '18', ['breadcrumb-coating'], undefined, '18079', 5.3];
     const oil: Spec = ['vegetable oil', 109, 'Oil, soybean, salad or cooking', '04', ['cooking-fat'], 'for frying', '04044', 100];
     const schnitzel = readDish(recipe(chops, ['all-purpose flour', 62, FLOUR[2], '20', ['flour'], undefined, '20081'], EGGS, crumbs, oil, SALT));
@@ -606,16 +607,6 @@ describe('issue 10 round 7: sandwiches, cheesecake, packages and slices', () => 
 });
 
 describe('issue 10 round 8: breaded and braised mains, bars and crisps, pizza toppings, a spoonful of sugar', () => {
-  const CHOPS: Spec = [
-    'boneless pork loin chops, pounded thin',
-    680,
-    'Pork, fresh, loin, top loin (chops), boneless, lean only, raw',
-    '10',
-    ['pork'],
-    undefined,
-    '10200',
-    5,
-  ];
   const CRUMBS: Spec = ['dry bread crumbs', 162, 'Bread crumbs, dry, grated, plain', '18', ['breadcrumb-coating'], undefined, '18079', 5.3];
   const FRYING_OIL: Spec = ['vegetable oil', 109, 'Oil, soybean, salad or cooking', '04', ['cooking-fat'], 'for frying', '04044', 100];
   const OIL: Spec = ['vegetable oil', 27, 'Oil, soybean, salad or cooking', '04', ['cooking-fat'], undefined, '04044', 100];
@@ -625,7 +616,7 @@ describe('issue 10 round 8: breaded and braised mains, bars and crisps, pizza to
   const BROWN_SUGAR = (g: number): Spec => ['packed brown sugar', g, 'Sugars, brown', '19', ['sweetener'], undefined, '19334'];
 
   it('a breaded cutlet (crumbs, egg and flour around a chop, fried in oil) is pan-fried, not an assembled bake, and it is the portion', () => {
-    const schnitzel = readDish(recipe(CHOPS, flour(62), EGGS, CRUMBS, FRYING_OIL, SALT));
+    const schnitzel = readDish(recipe(PORK_CHOPS, flour(62), EGGS, CRUMBS, FRYING_OIL, SALT));
     expect(schnitzel.dishType).toBe('griddle-saute');
     expect(schnitzel.mixedDish).toBe(false);
     expect(schnitzel.lines.slice(1, 4).map((l) => l.role)).toEqual(['coating', 'coating', 'coating']);
