@@ -482,7 +482,7 @@ export const DISH_TYPE_WORDS: Record<DishType, string> = {
   'stovetop-sauce': 'a stovetop sauce dish',
   'simmered-dish': 'a simmered dish',
   'assembled-bake': 'an assembled or layered bake',
-  'griddle-saute': 'a griddle or sauté dish',
+  'griddle-saute': 'a griddle, sauté or pan- or oven-fried dish',
   'cold-dish': 'a cold dish',
   other: 'a dish',
 };
