@@ -10,7 +10,13 @@ import { normaliseUnit, unitKind } from './units';
 
 /** Parts of an SR28 name that say how the food is sold or kept, not what it is. */
 const STATE_PARTS =
-  /^(raw|cooked|boiled|dry|unprepared|prepared|fresh|frozen|canned|regular|plain|fluid|commercial|commercially prepared|ready-to-serve|ready-to-eat|enriched|unenriched|without salt|with salt|solids and liquids|drained solids|nfs|includes .*|with added .*|without added .*|year round average)$/i;
+  /^(raw|cooked|boiled|dry|unprepared|prepared|fresh|frozen|canned|regular|plain|fluid|commercial|commercially prepared|ready-to-serve|ready-to-eat|enriched|unenriched|without salt|with salt|solids and liquids|drained solids|nfs|includes .*|with added .*|without added .*|year round average|salad or cooking)$/i;
+
+/** SR28 heads that name a catalogue shelf, not the food: the next part is the food ("Spices, oregano" → oregano). */
+const SHELF_HEADS = /^(spices|nuts|seeds|sweeteners|leavening agents)$/i;
+
+/** SR28 heads in the plural where a cook says the singular. */
+const SINGULAR_HEADS: Record<string, string> = { sugars: 'sugar' };
 
 /** Rule labels that describe an amount ("a third less cheese", "half the oil") rather than a food. */
 const AMOUNT_LABEL = /^(?:a |an |half|up to|two thirds|one third|\d+ )/i;
@@ -41,11 +47,16 @@ export function commonFoodName(food: { name: string; source: 'usda-sr28' | 'cust
     .map((p) => p.split('/')[0].trim())
     .filter((p) => p && !STATE_PARTS.test(p));
   if (parts.length === 0) return food.name;
-  const [head, ...qualifiers] = parts;
+  let [head, ...qualifiers] = parts;
+  if (SHELF_HEADS.test(head) && qualifiers.length > 0) [head, ...qualifiers] = qualifiers;
+  head = SINGULAR_HEADS[head.toLowerCase()] ?? head;
   const percent = qualifiers.find((q) => /%/.test(q));
   // "95% lean" says enough about fat: a second percentage ("5% fat") would only repeat it
   const kept = percent ? [percent, ...qualifiers.filter((q) => !/%/.test(q)).slice(0, 1)] : qualifiers.slice(0, 2).reverse();
-  let name = [...kept, head.charAt(0).toLowerCase() + head.slice(1)].join(' ');
+  // a part that already ends in the head says it: "buttermilk" is milk, "cornbread" is bread
+  const headWord = head.toLowerCase();
+  const saysHead = kept.some((q) => q.length > headWord.length && q.toLowerCase().endsWith(headWord));
+  let name = [...kept, ...(saysHead ? [] : [head.charAt(0).toLowerCase() + head.slice(1)])].join(' ');
   for (const [pattern, replacement] of HYPHENATED) name = name.replace(pattern, replacement);
   return name.replace(/\s+/g, ' ').trim();
 }

@@ -7,6 +7,7 @@ import type { LineFunction } from '../../shared/culinary/types';
 import { analyzeLines, culinaryLineOf, requestLines, type FoodVisibility } from './analysis';
 import { recipeCandidates, type ApprovedSwap } from './candidates';
 import { foodSummary } from './foods';
+import { writtenFoodName } from '../../shared/rewritten-line-text';
 import { runRewrite, SOLVER_TIMEOUT_MS } from './solver-pool';
 import { HttpError, badRequest } from '../lib/http-error';
 
@@ -65,6 +66,7 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
     if (!line.matchedFood) return skippedLines.push({ line: index, input: line.input, reason: 'no food matched' });
     if (line.grams <= 0) return skippedLines.push({ line: index, input: line.input, reason: 'no amount' });
     const c = culinary.lines[index];
+    const written = writtenFoodName(line.input);
     const isLocked = locked.has(index);
     modelLines.push({
       index,
@@ -75,6 +77,7 @@ export async function rewriteRecipe(engine: FoodEngine, input: RewriteRequest, v
       role: c.role,
       candidates: isLocked ? c.candidates.filter((x) => x.original) : c.candidates,
       ...(c.heldReason ? { heldReason: c.heldReason } : {}),
+      ...(written ? { writtenName: written } : {}),
       ...(c.keepScale && !isLocked ? { keepScale: c.keepScale } : {}),
     });
   });

@@ -112,7 +112,7 @@ export function explainChanges(
     const keepsVolume = (atCeiling && volumeDelta <= -0.5) || (atFloor && volumeDelta >= 0.5);
     if (keepsVolume || (serves.length === 0 && Math.abs(volumeDelta) >= 0.5)) serves.push('volume');
     if (serves.length === 0) serves.push('objective');
-    const from = cookName(was.food);
+    const from = choice.line.line.writtenName ?? cookName(was.food);
     const to = cookName(added.food, swap?.candidate.rule?.label);
     let what: string;
     if (!swap) {

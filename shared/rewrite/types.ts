@@ -72,6 +72,8 @@ export interface RewriteLine {
   keepScale?: [number, number];
   /** why the line is held as written; a held line keeps its original food and grams */
   heldReason?: string;
+  /** the food as the cook's line names it ("pancetta"), for the explanation; absent = the food's common name */
+  writtenName?: string;
 }
 
 /** Per-serving targets. */

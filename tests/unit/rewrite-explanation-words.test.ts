@@ -40,8 +40,16 @@ const WHOLE_WHEAT: Candidate = {
   rule: RULE,
 };
 
-function explain(original: Candidate, substitute: Candidate): string {
-  const line: RewriteLine = { index: 0, foodId: original.foodId, grams: 227, volumeMl: 227 / 0.45, locked: false, candidates: [original, substitute] };
+function explain(original: Candidate, substitute: Candidate, writtenName?: string): string {
+  const line: RewriteLine = {
+    index: 0,
+    foodId: original.foodId,
+    grams: 227,
+    volumeMl: 227 / 0.45,
+    locked: false,
+    candidates: [original, substitute],
+    ...(writtenName ? { writtenName } : {}),
+  };
   const r = solveRewrite([line], { proteinMinG: 31, kcalMax: 850 }, 1, { objective: 'closest', volumeTolerancePct: 20 }) as OptimalRewrite;
   expect(r.status).toBe('optimal');
   expect(r.changes).toHaveLength(1);
@@ -54,6 +62,10 @@ describe('the explanation of a change, in the cook’s words', () => {
     expect(reason).toMatch(/^Swap 227 g pasta for 2\d\d g whole-wheat pasta — whole-wheat pasta for white pasta, 1:1 by weight/);
     expect(reason).not.toContain('Pasta, dry, enriched');
     expect(reason).not.toContain('Pasta, whole-wheat, dry');
+  });
+
+  it('names the written food as the cook’s line named it, when the line says', () => {
+    expect(explain(PASTA, WHOLE_WHEAT, 'elbow macaroni')).toMatch(/^Swap 227 g elbow macaroni for 2\d\d g whole-wheat pasta — /);
   });
 
   it('turns a catalogue name around when the rule’s label names no single food', () => {

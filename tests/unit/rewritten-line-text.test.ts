@@ -22,6 +22,14 @@ describe('the words of a rewritten line', () => {
     expect(commonFoodName({ name: 'Cloudmeadow carb-smart tortilla', source: 'custom' }, 'x for y')).toBe('Cloudmeadow carb-smart tortilla');
   });
 
+  it('says the food, not the catalogue shelf it sits on, nor its head twice', () => {
+    expect(commonFoodName(sr28('Sugars, granulated'))).toBe('granulated sugar');
+    expect(commonFoodName(sr28('Spices, oregano, dried'))).toBe('dried oregano');
+    expect(commonFoodName(sr28('Milk, buttermilk, fluid, cultured, lowfat'))).toBe('cultured buttermilk');
+    expect(commonFoodName(sr28('Oil, olive, salad or cooking'))).toBe('olive oil');
+    expect(commonFoodName(sr28('Cheese, cottage, lowfat, 1% milkfat'))).toBe('1% cottage cheese');
+  });
+
   it('measures as a cook does (common practice: quarters and thirds of a cup)', () => {
     expect([kitchenNumber(1.5), kitchenNumber(0.33), kitchenNumber(2), kitchenNumber(0.76), kitchenNumber(1.97)]).toEqual(['1 1/2', '1/3', '2', '3/4', '2']);
   });
