@@ -31,7 +31,7 @@ import { outboxRouter } from './routes/outbox';
 import { prepRouter, shoppingListsRouter } from './routes/prep';
 import { rejectUnsafeText } from './middleware/text-safety';
 import { createCsrf, isComputeRoute, readCookie } from './middleware/csrf';
-import { compressAnswers } from './middleware/compress-answers';
+import { compressJsonAnswers } from './middleware/compress-json';
 import { HttpError } from './lib/http-error';
 import type { Mailer, StoredMail } from './mail';
 import { createClientShell, fillShell } from './lib/client-shell';
@@ -99,7 +99,7 @@ export function createApp(context: AppContext) {
     });
   }
 
-  app.use(compressAnswers());
+  app.use(compressJsonAnswers());
   app.use(express.json({ limit: '1mb' }));
   app.use(rejectUnsafeText);
   // Before the session: a probe never needs one, and must answer { db: 'down' } even when the
