@@ -93,13 +93,17 @@ function ruleCandidates(
   filters: Filters,
   canUse: ((f: CatalogueFood) => boolean) | undefined,
   band: [number, number] | undefined,
+  lineGrams: number,
 ): Candidate[] {
   const out: Candidate[] = [];
+  // a line of one piece (1 egg) is swapped whole or not at all: no cook keeps half an egg
+  const onePiece = rule.pieceGrams !== undefined && lineGrams < 1.5 * rule.pieceGrams;
+  if (onePiece && rule.rule.maxShare < 1) return out;
   const ref = (): RuleRef => ({ ...rule.ref, ...(rule.ref.cautions ? { cautions: [...rule.ref.cautions] } : {}) });
   const extra = (massRatio: number): Partial<Candidate> => ({
     massRatio,
     maxShare: rule.rule.maxShare,
-    ...(rule.rule.partial ? { partial: true } : {}),
+    ...(rule.rule.partial && !onePiece ? { partial: true } : {}),
     ...(band ? { band: [band[0], band[1]] as [number, number] } : {}),
     rule: ref(),
   });
@@ -188,6 +192,7 @@ export function recipeCandidates(
       mixedDish: reading.mixedDish,
       recipeKinds,
       browsMeat: reading.browsMeat,
+      wokSauce: reading.wokSauce,
     };
     const applicable = rulesForLine(rules, situation);
     const seen = new Map<number, Candidate>();
@@ -211,7 +216,7 @@ export function recipeCandidates(
     }
     for (const rule of applicable) {
       const r = byRule.get(rule)!;
-      for (const c of ruleCandidates(engine, r, filters, options.canUse, bandFor(rule, situation))) {
+      for (const c of ruleCandidates(engine, r, filters, options.canUse, bandFor(rule, situation), line.grams)) {
         if (seen.has(c.foodId)) continue;
         seen.set(c.foodId, c);
         candidates.push(c);

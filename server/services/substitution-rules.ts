@@ -10,6 +10,8 @@ export interface ResolvedRule {
   rule: SubstitutionRule;
   targets: ResolvedTarget[];
   ref: RuleRef;
+  /** grams of one piece of the written food, for a per-piece rule (one large egg: 50 g) */
+  pieceGrams?: number;
 }
 
 let parsed: SubstitutionRule[] | null = null;
@@ -79,7 +81,10 @@ export function resolveRules(bySourceId: ReadonlyMap<string, CatalogueFood>, rul
     const ref: RuleRef = { id: rule.id, label: rule.label, why: rule.why };
     if (rule.note) ref.note = rule.note;
     if (rule.cautions?.length) ref.cautions = [...rule.cautions];
-    return { rule, targets, ref };
+    const q = rule.quantity;
+    const reference = q && 'perPiece' in q ? bySourceId.get(q.perPiece.fromNdb) : undefined;
+    const pieceGrams = q && 'perPiece' in q && reference ? gramsPerMeasure(reference, q.perPiece.fromMeasure) : null;
+    return pieceGrams ? { rule, targets, ref, pieceGrams } : { rule, targets, ref };
   });
 }
 

@@ -12,6 +12,8 @@ export interface DishReading {
   mixedDish: boolean;
   /** raw meat or fish is browned in the dish's pan (ground beef for tacos), outside a bake */
   browsMeat: boolean;
+  /** seasoned with soy, oyster or fish sauce: its noodles or rice are stir-fried (lo mein, pad thai, fried rice) */
+  wokSauce: boolean;
   lines: { kind: LineKind; role: LineFunction; context: DishContext }[];
 }
 
@@ -33,10 +35,18 @@ const WOK_SAUCE_WORDS = /\b(soy sauce|oyster sauce|fish sauce|hoisin|tamari|shoy
 const PORTION_WORDS = /\b(patt(y|ies)|burgers?|cutlets?)\b/i;
 /** served in a bun or roll: the portion too, unless the meat is simmered in a sauce spooned onto it (sloppy joes) */
 const BUN_WORDS = /\b(buns?|rolls?)\b/i;
+/** meat cut small before it is coated and fried, then tossed with rice or a sauce: one part of a mixed dish */
+const BITE_PIECE_WORDS = /\b(pieces|bite[- ]size|cubed|cubes|chunks|strips|nuggets)\b/i;
+/** a grain baked into bars, a crisp or a granola (rolled oats): not a savoury dish's starch */
+const BAKING_GRAIN = /\boats?\b|\boatmeal\b/i;
+/** meat cut to be braised or stewed in liquid (a paprikash, a stew), not sliced for a stir-fry */
+const BRAISE_CUT_WORDS = /\b(cubed|cubes|chunks|stew meat|stewing)\b/i;
 /** starches that thicken as a slurry, with no fat: they make no roux */
 const SLURRY_STARCH = /\b(cornstarch|corn starch|arrowroot|potato starch|tapioca)\b/i;
 
 const POTATO = /^potato/i;
+/** grams of sugar, honey or syrup up to a level tablespoon (12.5 g granulated, about 14 g packed brown): a seasoning */
+export const SEASONING_SUGAR_G = 14;
 /** breads eaten as they are (a sandwich's muffin, a roll, toast): no sauce is tossed with them */
 const BREAD_NAME = /^(bread|english muffins?|rolls?|bagels?|croissants?|biscuits?)\b/i;
 
@@ -49,6 +59,32 @@ function mashedPotatoLine(lines: readonly CulinaryLine[], kinds: readonly LineKi
   const wet = gramsBy(lines, kinds, ['liquid', 'tomato', 'sauce']);
   if (!kinds.includes('meat') || kinds.includes('wrap') || wet >= 0.25 * total) return -1;
   return lines.findIndex((l, i) => kinds[i] === 'starch' && POTATO.test(l.food?.name ?? ''));
+}
+
+/**
+ * Whole cuts of meat (no mince) dipped in egg and rolled in crumbs, or dredged in flour or starch
+ * (a schnitzel, baked tenders, a chicken-fried steak, sesame chicken): the egg and crumbs or flour are the
+ * breading. A dredge without crumbs counts only outside a pie, a dough or a soup.
+ */
+export function breadedPieces(lines: readonly CulinaryLine[], kinds: readonly LineKind[]): boolean {
+  const cuts = lines.filter((_, i) => kinds[i] === 'meat');
+  if (cuts.length === 0 || cuts.some((l) => MINCE_WORDS.test(`${l.phrase} ${l.food?.name ?? ''}`))) return false;
+  if (!kinds.includes('egg')) return false;
+  if (kinds.includes('crumbs')) return true;
+  if (!lines.some((l, i) => kinds[i] === 'egg' && !WASH_WORDS.test(`${l.comment ?? ''} ${l.phrase}`))) return false;
+  const total = lines.reduce((s, l) => s + Math.max(0, l.grams), 0) || 1;
+  const meat = cuts.reduce((s, l) => s + Math.max(0, l.grams), 0);
+  const dredge = gramsBy(lines, kinds, ['flour']);
+  const wet = gramsBy(lines, kinds, ['liquid', 'tomato', 'sauce', 'condensed-soup']);
+  const pie = lines.some((l) => /\b(pie crust|pastry|biscuit dough|dumplings?)\b/i.test(`${l.phrase} ${l.food?.name ?? ''}`));
+  return dredge >= 0.05 * meat && wet < 0.25 * total && !pie && !kinds.includes('yeast') && !kinds.includes('wrap');
+}
+
+/** Fruit baked under a crumble of flour or oats, sugar and butter (an apple crisp, a cobbler): an assembled bake. */
+function fruitUnderCrumble(lines: readonly CulinaryLine[], kinds: readonly LineKind[]): boolean {
+  const total = lines.reduce((s, l) => s + Math.max(0, l.grams), 0) || 1;
+  const crumble = kinds.includes('flour') || lines.some((l, i) => kinds[i] === 'starch' && BAKING_GRAIN.test(`${l.phrase} ${l.food?.name ?? ''}`));
+  return gramsBy(lines, kinds, ['fruit']) >= 0.4 * total && crumble && kinds.includes('sugar') && kinds.includes('butter-oil');
 }
 
 /** Kinds that need a fat to cook in (browned, sautéed or scrambled): where none is in the dish, butter is only stirred in. */
@@ -104,7 +140,9 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
   const comments = lines.map((l) => `${l.phrase} ${l.comment ?? ''}`).join(' ');
 
   if (has('yeast') && flour > 0) return 'dough';
-  const savouryMain = has('meat', 'cured-meat', 'fish', 'starch', 'wrap', 'condensed-soup');
+  // rolled oats in bars or a crisp are a baking grain, not a savoury dish's starch
+  const savouryStarch = lines.some((l, i) => kinds[i] === 'starch' && !BAKING_GRAIN.test(`${l.phrase} ${l.food?.name ?? ''}`));
+  const savouryMain = savouryStarch || has('meat', 'cured-meat', 'fish', 'wrap', 'condensed-soup');
   const bakeCore = flour + g('sugar', 'chocolate');
   if (flour > 0 && !savouryMain && bakeCore >= 0.25 * total) {
     const liquid = g('milk', 'liquid', 'cultured');
@@ -147,7 +185,8 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
     (has('fresh-cheese') && has('starch') && has('melting-cheese')) ||
     (has('crumbs') && has('starch') && cheese) ||
     (mashedTop && !has('wrap')) ||
-    slicedPotatoGratin
+    slicedPotatoGratin ||
+    fruitUnderCrumble(lines, kinds)
   ) {
     return 'assembled-bake';
   }
@@ -157,12 +196,17 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
     0,
   );
   if (has('wrap') && cheese) return bakedSauce >= 0.1 * total || has('fresh-cheese') ? 'assembled-bake' : 'griddle-saute';
+  // breaded cutlets or pieces, pan-fried or oven-fried (a schnitzel, tenders, sesame chicken)
+  if (breadedPieces(lines, kinds)) return 'griddle-saute';
   // a loaf or meatballs: mince held together by crumbs and egg
   if (has('meat') && has('crumbs') && has('egg') && !has('starch', 'wrap')) return 'assembled-bake';
   // a sandwich's bread is not tossed with its eggs and cheese: a breakfast sandwich is a griddle dish
   const sauceStarch = lines.some((l, i) => kinds[i] === 'starch' && !BREAD_NAME.test(l.food?.name ?? ''));
   if (sauceStarch && has('cream', 'milk', 'melting-cheese', 'hard-cheese', 'egg') && wet < 0.25 * total) return 'stovetop-sauce';
   if (wet >= 0.25 * total || (has('legume') && has('tomato'))) return 'simmered-dish';
+  // raw meat in cubes or chunks, browned and then cooked in broth or wine (a paprikash, a goulash): a braise
+  const braised = lines.some((l, i) => kinds[i] === 'meat' && BRAISE_CUT_WORDS.test(`${l.phrase} ${l.comment ?? ''}`) && /\braw\b/i.test(l.food?.name ?? ''));
+  if (braised && has('liquid') && !lines.some((l) => WOK_SAUCE_WORDS.test(`${l.phrase} ${l.food?.name ?? ''}`))) return 'simmered-dish';
   // a sandwich: bread around eggs or bacon cooked in the pan
   if (has('meat', 'fish', 'wrap') || (has('starch') && !sauceStarch && has('egg', 'cured-meat'))) return 'griddle-saute';
   return 'other';
@@ -182,6 +226,14 @@ function roleOf(
     /** crumbs, egg and flour coat whole pieces of meat (no mince in the recipe) */
     breaded: boolean;
     enrichment: ReadonlySet<number>;
+    /** the breading's flour line (the largest), or -1 */
+    dredgeFlour: number;
+    /** whether a milk line is the breading's egg dip */
+    dipMilk: (index: number) => boolean;
+    /** fruit baked under a crumble: its flour, oats and butter are the topping */
+    crumble: boolean;
+    /** crumbs are written "for the top" */
+    crumbTopping: boolean;
   },
   index: number,
 ): LineFunction {
@@ -208,10 +260,12 @@ function roleOf(
     case 'liquid':
       return bake ? 'structure' : 'cooking-liquid';
     case 'flour':
-      if (COATING_WORDS.test(note) || (ctx.breaded && !bake)) return 'coating';
+      if (ctx.crumble) return 'topping';
+      if (COATING_WORDS.test(note) || (ctx.breaded && !bake && (index === ctx.dredgeFlour || !ctx.hasRoux))) return 'coating';
       return bake ? 'structure' : 'thickener';
     case 'starch':
     case 'wrap':
+      if (ctx.crumble && BAKING_GRAIN.test(`${line.phrase} ${line.food?.name ?? ''}`)) return 'topping';
       return bake ? 'structure' : 'starch';
     case 'crumbs':
       if (topping) return 'topping';
@@ -221,7 +275,8 @@ function roleOf(
     case 'egg':
       if (WASH_WORDS.test(`${note} ${line.phrase}`)) return 'coating';
       if (bake) return 'structure';
-      if (has('meat') && has('crumbs')) return ctx.breaded ? 'coating' : 'binder';
+      if (ctx.breaded) return 'coating';
+      if (has('meat') && has('crumbs')) return 'binder';
       if (dish === 'assembled-bake' && has('fresh-cheese')) return 'binder';
       // eggs set with milk in the oven: a strata, quiche or breakfast casserole
       if (dish === 'assembled-bake' && has('milk', 'cream')) return 'custard';
@@ -231,22 +286,29 @@ function roleOf(
       if (COATING_WORDS.test(note) || has('crumbs')) return 'coating';
       return 'main-protein';
     case 'sugar':
+      // a teaspoon or a tablespoon of sugar seasons a sauce or feeds a dough's yeast: kept as written
+      if (line.grams > 0 && line.grams <= SEASONING_SUGAR_G && !topping) return 'seasoning';
       if (bake) return ctx.sugarIsStructure ? 'structure' : 'sweetener';
       return 'sweetener';
     case 'syrup':
-      return topping ? 'topping' : 'sweetener';
+      if (topping) return 'topping';
+      return line.grams > 0 && line.grams <= SEASONING_SUGAR_G ? 'seasoning' : 'sweetener';
     case 'chocolate':
       return bake ? 'structure' : 'other';
     case 'mix-in':
       return topping ? 'topping' : 'other';
     case 'butter-oil':
+      if (ctx.crumble) return 'topping';
       if (GREASE_WORDS.test(note)) return 'cooking-fat';
+      // melted butter beside a crumb topping on a casserole is tossed with the crumbs, not a pan's fat
+      if (dish === 'assembled-bake' && ctx.crumbTopping && /\bmelted\b/i.test(`${note} ${line.phrase}`)) return 'topping';
       if (bake) return 'baking-fat';
       if (ctx.hasRoux && index === ctx.rouxFat) return 'fat-for-roux';
       return 'cooking-fat';
     case 'milk':
       // milk soaking the crumbs of a meatloaf or meatballs (a panade) binds them
-      if (!bake && has('meat') && has('crumbs') && has('egg')) return 'binder';
+      if (!bake && ctx.dipMilk(index)) return 'coating';
+      if (!bake && has('meat') && has('crumbs') && has('egg') && !ctx.breaded) return 'binder';
       return 'dairy-liquid';
     case 'cream':
       return topping ? 'topping' : 'cream';
@@ -267,7 +329,8 @@ function roleOf(
       return topping ? 'topping' : 'main-protein';
     case 'legume':
     case 'vegetable':
-      return bake ? 'other' : 'vegetable';
+      // a yeast dough's vegetables go on top of it or inside it (a pizza, a calzone); a quick bread's grated zucchini is its moisture
+      return bake && !has('yeast') ? 'other' : 'vegetable';
     case 'tomato':
     case 'sauce':
     case 'condensed-soup':
@@ -290,7 +353,8 @@ export function contextOf(role: LineFunction, dish: DishType, hasRoux: boolean, 
   if (role === 'cooking-fat') return 'griddle-saute';
   if (role === 'fat-for-roux' || role === 'thickener') return 'roux-white-sauce';
   if (BAKE_TYPES.includes(dish))
-    return dish === 'dough' && (role === 'melting-cheese' || role === 'hard-cheese' || role === 'main-protein' || role === 'vegetable' || role === 'sauce')
+    return dish === 'dough' &&
+      (role === 'melting-cheese' || role === 'hard-cheese' || role === 'fresh-cheese' || role === 'main-protein' || role === 'vegetable' || role === 'sauce')
       ? 'topping'
       : 'baked-batter-dough';
   const saucy = role === 'dairy-liquid' || role === 'cream' || role === 'melting-cheese' || role === 'hard-cheese' || role === 'sauce';
@@ -320,7 +384,11 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
   const g = (k: LineKind) => gramsBy(lines, kinds, [k]);
   const flourGrams = g('flour');
   const enrichment = enrichmentLines(lines, kinds, dishType);
-  const dairyForSauce = kinds.some((k, i) => (k === 'milk' || k === 'cream' || k === 'liquid') && !enrichment.has(i));
+  const browsMeat =
+    !BAKE_TYPES.includes(dishType) && lines.some((l, i) => (kinds[i] === 'meat' || kinds[i] === 'fish') && /\b(raw|unprepared)\b/i.test(l.food?.name ?? ''));
+  // a roux thickens milk or cream (a white sauce), or a broth where no raw meat browns in the fat first: flour
+  // stirred into the oil that browned a stew's or a paprikash's meat thickens its braise, and the oil browns
+  const dairyForSauce = kinds.some((k, i) => (k === 'milk' || k === 'cream' || (k === 'liquid' && !browsMeat)) && !enrichment.has(i));
   // the roux fat: butter when there is some, else the first fat (not one stirred into a mash)
   const fats = kinds.map((k, i) => (k === 'butter-oil' && !enrichment.has(i) ? i : -1)).filter((i) => i >= 0);
   // a roux is wheat flour cooked in fat; cornstarch and the like thicken as a slurry
@@ -333,17 +401,22 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
   const starchNames = lines.filter((_, i) => kinds[i] === 'starch').map((l) => `${l.phrase} ${l.food?.name ?? ''}`);
   const riceNotPasta = starchNames.some((n) => /\brice\b/i.test(n)) && !starchNames.some((n) => PASTA_WORDS.test(n));
   const wokSauce = lines.some((l) => WOK_SAUCE_WORDS.test(`${l.phrase} ${l.food?.name ?? ''}`));
-  const meatLines = lines.filter((_, i) => kinds[i] === 'meat');
-  const breaded =
-    meatLines.length > 0 && kinds.includes('crumbs') && kinds.includes('egg') && !meatLines.some((l) => MINCE_WORDS.test(`${l.phrase} ${l.food?.name ?? ''}`));
-  const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat, riceNotPasta, wokSauce, breaded, enrichment };
-  // mince bound with crumbs and egg (a loaf, meatballs) or a breaded piece is shaped into the portion
-  const shaped = kinds.includes('meat') && kinds.includes('crumbs') && kinds.includes('egg');
+  const breaded = breadedPieces(lines, kinds);
+  // the breading's flour is the largest flour line; a smaller one beside a milk gravy thickens it (chicken-fried steak)
+  const flourLines = kinds.map((k, i) => (k === 'flour' ? i : -1)).filter((i) => i >= 0);
+  const dredgeFlour = flourLines.reduce((best, i) => (best < 0 || lines[i].grams > lines[best].grams ? i : best), -1);
+  // the milk beaten with the breading's eggs (written next to them) is its dip
+  const dipMilk = (i: number) => breaded && (kinds[i - 1] === 'egg' || kinds[i + 1] === 'egg');
+  const crumble = dishType === 'assembled-bake' && fruitUnderCrumble(lines, kinds);
+  const crumbTopping = lines.some((l, i) => kinds[i] === 'crumbs' && TOPPING_WORDS.test(`${l.comment ?? ''} ${l.phrase}`));
+  const ctx = { hasRoux, kinds, sugarIsStructure, rouxFat, riceNotPasta, wokSauce, breaded, enrichment, dredgeFlour, dipMilk, crumble, crumbTopping };
+  // mince bound with crumbs and egg (a loaf, meatballs) or a breaded piece is shaped into the portion; a dredged
+  // cutlet or steak is the portion too, unless it is cut into bite-size pieces tossed in a sauce (sesame chicken)
+  const bitePieces = lines.some((l, i) => kinds[i] === 'meat' && BITE_PIECE_WORDS.test(`${l.phrase} ${l.comment ?? ''}`));
+  const shaped = (kinds.includes('meat') && kinds.includes('crumbs') && kinds.includes('egg')) || (breaded && !bitePieces);
   const words = lines.map((l) => `${l.phrase} ${l.comment ?? ''}`);
   const portion = words.some((w) => PORTION_WORDS.test(w)) || (dishType !== 'simmered-dish' && words.some((w) => BUN_WORDS.test(w)));
   const mixedDish = MIXED_TYPES.includes(dishType) && !shaped && !portion;
-  const browsMeat =
-    !BAKE_TYPES.includes(dishType) && lines.some((l, i) => (kinds[i] === 'meat' || kinds[i] === 'fish') && /\b(raw|unprepared)\b/i.test(l.food?.name ?? ''));
   const panSauced = kinds.includes('meat') || kinds.includes('fish');
   const mashPotato = dishType === 'assembled-bake' && enrichment.size > 0 ? mashedPotatoLine(lines, kinds) : -1;
   const out = lines.map((line, i) => {
@@ -354,7 +427,7 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
     if (dishType === 'griddle-saute' && context === 'griddle-saute' && (role === 'cream' || role === 'dairy-liquid') && panSauced) context = 'boiled-sauce';
     return { kind: kinds[i], role, context };
   });
-  return { dishType, hasRoux, mixedDish, browsMeat, lines: out };
+  return { dishType, hasRoux, mixedDish, browsMeat, wokSauce, lines: out };
 }
 
 /** Functions that keep a line exactly as written unless the cook unlocks it (PRODUCT.md step 5). */
@@ -409,7 +482,7 @@ export const DISH_TYPE_WORDS: Record<DishType, string> = {
   'stovetop-sauce': 'a stovetop sauce dish',
   'simmered-dish': 'a simmered dish',
   'assembled-bake': 'an assembled or layered bake',
-  'griddle-saute': 'a griddle or sauté dish',
+  'griddle-saute': 'a griddle, sauté or pan- or oven-fried dish',
   'cold-dish': 'a cold dish',
   other: 'a dish',
 };

@@ -35,8 +35,10 @@ export function ruleHoldsIn(
   mixedDish = false,
   recipeKinds: ReadonlySet<LineKind> = new Set(),
   browsMeat = false,
+  wokSauce = false,
 ): boolean {
   if (rule.functions && !rule.functions.includes(role)) return false;
+  if (rule.stirFried && !wokSauce) return false;
   if (rule.browning !== undefined && rule.browning !== browsMeat) return false;
   if (rule.recipeHas && !rule.recipeHas.every((k) => recipeKinds.has(k))) return false;
   if (rule.recipeLacks && rule.recipeLacks.some((k) => recipeKinds.has(k))) return false;
@@ -60,13 +62,16 @@ export interface LineSituation {
   recipeKinds?: ReadonlySet<LineKind>;
   /** raw meat or fish is browned in the dish's pan (DishReading.browsMeat) */
   browsMeat?: boolean;
+  /** the recipe is seasoned with soy, oyster or fish sauce (DishReading.wokSauce) */
+  wokSauce?: boolean;
 }
 
 /** The rules that apply to a line: its food class, function, dish type and context. */
 export function rulesForLine(rules: readonly SubstitutionRule[], line: LineSituation): SubstitutionRule[] {
   return rules.filter(
     (r) =>
-      inFoodClass(r.from, line.food, line.phrase) && ruleHoldsIn(r, line.role, line.dishType, line.context, line.mixedDish, line.recipeKinds, line.browsMeat),
+      inFoodClass(r.from, line.food, line.phrase) &&
+      ruleHoldsIn(r, line.role, line.dishType, line.context, line.mixedDish, line.recipeKinds, line.browsMeat, line.wokSauce),
   );
 }
 

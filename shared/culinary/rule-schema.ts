@@ -94,6 +94,8 @@ export const substitutionRuleSchema = z
      * does not hold then (brushing a griddle is too little fat to brown mince); true — only then
      */
     browning: z.boolean().optional(),
+    /** true: holds only where the recipe's noodles or rice are tossed with soy, oyster or fish sauce (DishReading.wokSauce) */
+    stirFried: z.boolean().optional(),
     /** dish types the rule applies to; any when absent */
     dishTypes: z.array(dishEnum).min(1).optional(),
     contexts: z

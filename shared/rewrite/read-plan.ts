@@ -73,3 +73,15 @@ export function planOf(choices: LineChoice[], servings: number): Plan {
     volumeMl: lines.reduce((s, l) => s + l.volumeMl, 0),
   };
 }
+
+/** Under this many grams a scaled line's move is nothing a cook measures (it shows as "28 g → 28 g"). */
+export const UNMEASURED_MOVE_G = 0.5;
+
+/** The lines (by index) that keep their written food but moved by less than a cook measures. */
+export function unmeasuredMoves(choices: LineChoice[]): number[] {
+  return choices.flatMap((c) => {
+    if (c.swap || c.parts.length !== 1 || c.line.fixed) return [];
+    const move = Math.abs(c.parts[0].grams - Math.max(0, c.line.line.grams));
+    return move > 1e-9 && move < UNMEASURED_MOVE_G ? [c.line.line.index] : [];
+  });
+}

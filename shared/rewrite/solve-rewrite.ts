@@ -3,7 +3,7 @@ import { solveElastic } from './elastic-solve';
 import { explainChanges } from './explain-changes';
 import { analyseInfeasible, formatTargetValue } from './infeasibility';
 import { modelText } from './build-model';
-import { planOf, solvedChoices, writtenChoices } from './read-plan';
+import { planOf, solvedChoices, unmeasuredMoves, writtenChoices } from './read-plan';
 import { RewriteSolverError, SolveLog } from './solve-log';
 import { activeTargets } from './targets';
 import type { Nutrients } from '../nutrition';
@@ -68,6 +68,17 @@ export function solveRewrite(lines: RewriteLine[], targets: Targets, servings: n
     if (!outcome.meetsTargets && outcome.solution.status !== 'optimal') {
       throw new RewriteSolverError('the solver ran out of time before settling whether the targets can be met', 'time-limit');
     }
+  }
+  // A line that moved by less than a cook measures ("28 g → 28 g") is no change a cook can make: solve again
+  // with those lines at their written grams and keep that plan when it still meets the targets.
+  for (let round = 0; round < 2 && outcome.meetsTargets; round++) {
+    const tiny = new Set(unmeasuredMoves(solvedChoices(outcome.built.variables, outcome.solution.values)));
+    if (tiny.size === 0) break;
+    const fixedLines = lines.map((l) => (tiny.has(l.index) ? { ...l, keepScale: undefined } : l));
+    const again = solveElastic(fixedLines, targets, servings, opts, { objective: { kind: objective } }, log);
+    if (!again?.meetsTargets) break;
+    outcome = again;
+    lines = fixedLines;
   }
   const found = outcome;
   const written = writtenChoices(found.built.variables);

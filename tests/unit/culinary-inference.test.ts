@@ -4,11 +4,11 @@
  * what in which dish is *common practice*.
  */
 import { describe, expect, it } from 'vitest';
-import { contextOf, heldReasonFor, inferDishType, readDish } from '../../shared/culinary/infer-dish';
+import { breadedPieces, contextOf, heldReasonFor, inferDishType, readDish } from '../../shared/culinary/infer-dish';
 import { bandFor, inFoodClass, keepScaleOf, ruleHoldsIn, rulesForLine } from '../../shared/culinary/match-rules';
 import { parseRuleFile } from '../../shared/culinary/rule-schema';
 import type { CulinaryLine } from '../../shared/culinary/types';
-import type { LineKind } from '../../shared/culinary/line-kind';
+import { lineKind, type LineKind } from '../../shared/culinary/line-kind';
 import ruleFile from '../../data/substitution-rules.json';
 
 type Spec = [phrase: string, grams: number, name: string, group: string, roles: string[], comment?: string, ndb?: string, fatG?: number];
@@ -34,6 +34,16 @@ const PASTA: Spec = ['elbow macaroni', 454, 'Pasta, dry, enriched', '20', ['past
 const CHEDDAR = (comment?: string): Spec => ['sharp cheddar cheese', 226, 'Cheese, cheddar', '01', ['melting-cheese'], comment, '01009', 33];
 const ONION: Spec = ['onion', 110, 'Onions, raw', '11', ['vegetable']];
 const BEEF: Spec = ['ground beef', 454, 'Beef, ground, 80% lean meat / 20% fat, raw', '13', ['ground-meat', 'red-meat'], undefined, '23572', 20];
+const PORK_CHOPS: Spec = [
+  'boneless pork loin chops, pounded thin',
+  680,
+  'Pork, fresh, loin, top loin (chops), boneless, lean only, raw',
+  '10',
+  ['pork'],
+  undefined,
+  '10200',
+  5,
+];
 
 describe('dish type from the whole recipe', () => {
   it('reads pancakes as a batter: as much milk as flour, little sugar, a leavener', () => {
@@ -133,16 +143,7 @@ describe('line function', () => {
   });
 
   it('crumbs, egg and flour around a whole cut are its breading (a schnitzel), around mince its binder; an egg "for brushing" is a wash, not structure', () => {
-    const chops: Spec = [
-      'boneless pork loin chops, pounded thin',
-      680,
-      'Pork, fresh, loin, top loin (chops), boneless, lean only, raw',
-      '10',
-      ['pork'],
-      undefined,
-      '10200',
-      5,
-    ];
+    const chops = PORK_CHOPS;
     const crumbs: Spec = ['dry bread crumbs', 162, 'Bread crumbs, dry, grated, plain', '18', ['breadcrumb-coating'], undefined, '18079', 5.3];
     const oil: Spec = ['vegetable oil', 109, 'Oil, soybean, salad or cooking', '04', ['cooking-fat'], 'for frying', '04044', 100];
     const schnitzel = readDish(recipe(chops, ['all-purpose flour', 62, FLOUR[2], '20', ['flour'], undefined, '20081'], EGGS, crumbs, oil, SALT));
@@ -432,8 +433,13 @@ describe('issue 10 round 6: slurries, sloppy joes, quick-bread batters, mashes a
     const dish = readDish(recipe(flank, cornstarch, OIL, broccoli, BROTH));
     expect(dish.hasRoux).toBe(false);
     expect(dish.lines[2].role).toBe('cooking-fat');
-    // wheat flour with the same fat and broth is a roux
-    expect(readDish(recipe(flank, ['all-purpose flour', 16, FLOUR[2], '20', ['flour']], OIL, broccoli, BROTH)).hasRoux).toBe(true);
+    // wheat flour with the same fat and broth is a roux where no raw meat browns in the fat first (round 8: over
+    // browned meat the fat browns it, and the flour thickens the braise); with milk it is a white sauce's roux
+    const wheat: Spec = ['all-purpose flour', 16, FLOUR[2], '20', ['flour']];
+    const cooked: Spec = ['shredded cooked chicken', 418, 'Chicken, broilers or fryers, meat only, roasted', '05', ['poultry'], undefined, '05013', 7];
+    expect(readDish(recipe(cooked, wheat, OIL, broccoli, BROTH)).hasRoux).toBe(true);
+    expect(readDish(recipe(flank, wheat, OIL, broccoli, BROTH)).hasRoux).toBe(false);
+    expect(readDish(recipe(flank, wheat, OIL, broccoli, MILK(244))).hasRoux).toBe(true);
   });
 
   it('mince simmered in a sauce and spooned onto buns (sloppy joes) is a mixed dish; a burger in a bun is the portion', () => {
@@ -597,5 +603,143 @@ describe('issue 10 round 7: sandwiches, cheesecake, packages and slices', () => 
     expect(range(['liquid', 'milk', 'starch', 'salt', 'butter-oil', 'melting-cheese'])).toEqual([0.25, 1]);
     expect(range(['starch', 'butter-oil', 'milk', 'salt'])).toEqual([0.5, 1]);
     expect(range(['meat', 'starch', 'butter-oil', 'milk', 'melting-cheese'])).toEqual([0.5, 1]);
+  });
+});
+
+describe('issue 10 round 8: breaded and braised mains, bars and crisps, pizza toppings, a spoonful of sugar', () => {
+  const CRUMBS: Spec = ['dry bread crumbs', 162, 'Bread crumbs, dry, grated, plain', '18', ['breadcrumb-coating'], undefined, '18079', 5.3];
+  const FRYING_OIL: Spec = ['vegetable oil', 109, 'Oil, soybean, salad or cooking', '04', ['cooking-fat'], 'for frying', '04044', 100];
+  const OIL: Spec = ['vegetable oil', 27, 'Oil, soybean, salad or cooking', '04', ['cooking-fat'], undefined, '04044', 100];
+  const BROTH: Spec = ['chicken broth', 374, 'Soup, chicken broth, ready-to-serve', '06', ['broth-stock']];
+  const flour = (g: number, comment?: string): Spec => ['all-purpose flour', g, FLOUR[2], '20', ['flour'], comment, '20081'];
+  const OATS: Spec = ['old-fashioned rolled oats', 162, 'Cereals, oats, regular and quick, not fortified, dry', '08', ['rice-grain'], undefined, '08120', 6.5];
+  const BROWN_SUGAR = (g: number): Spec => ['packed brown sugar', g, 'Sugars, brown', '19', ['sweetener'], undefined, '19334'];
+
+  it('a breaded cutlet (crumbs, egg and flour around a chop, fried in oil) is pan-fried, not an assembled bake, and it is the portion', () => {
+    const schnitzel = readDish(recipe(PORK_CHOPS, flour(62), EGGS, CRUMBS, FRYING_OIL, SALT));
+    expect(schnitzel.dishType).toBe('griddle-saute');
+    expect(schnitzel.mixedDish).toBe(false);
+    expect(schnitzel.lines.slice(1, 4).map((l) => l.role)).toEqual(['coating', 'coating', 'coating']);
+    // mince with the same crumbs and egg is still a meatloaf, baked
+    expect(inferDishType(recipe(BEEF, CRUMBS, EGGS, SALT))).toBe('assembled-bake');
+  });
+
+  it('a steak dredged in flour, dipped in egg and milk and fried, with a milk gravy: the breading, the dip and the gravy each read as what they are', () => {
+    const steak: Spec = ['beef cube steaks', 680, 'Beef, round, top round, steak, lean only, raw', '13', ['red-meat'], undefined, '13461', 4];
+    const dish = readDish(
+      recipe(steak, flour(125), EGGS, MILK(122), SALT, FRYING_OIL, flour(16), ['whole milk', 488, MILK(0)[2], '01', ['dairy-milk'], 'for the gravy']),
+    );
+    expect(dish.dishType).toBe('griddle-saute');
+    expect(dish.mixedDish).toBe(false);
+    expect(dish.lines.map((l) => l.role)).toEqual(['main-protein', 'coating', 'coating', 'coating', 'salt', 'cooking-fat', 'thickener', 'dairy-liquid']);
+    expect(dish.lines[7].context).toBe('roux-white-sauce');
+    // a stew's flour and egg-free dredge is no breading
+    expect(breadedPieces(recipe(steak, flour(30), OIL, BROTH), recipe(steak, flour(30), OIL, BROTH).map(lineKind))).toBe(false);
+  });
+
+  it('chicken pieces tossed in egg and cornstarch and fried (sesame chicken) are coated, and still one part of a rice dish', () => {
+    const thighs: Spec = [
+      'boneless skinless chicken thighs, cut into pieces',
+      680,
+      'Chicken, broilers or fryers, dark meat, thigh, meat only, raw',
+      '05',
+      ['poultry'],
+      undefined,
+      '05096',
+      4,
+    ];
+    const cornstarch: Spec = ['cornstarch', 64, 'Cornstarch', '20', ['flour'], undefined, '20027'];
+    const rice: Spec = ['cooked white rice', 632, 'Rice, white, long-grain, regular, enriched, cooked', '20', ['rice-grain'], undefined, '20045'];
+    const soy: Spec = ['soy sauce', 64, 'Soy sauce made from soy and wheat (shoyu)', '16', ['condiment']];
+    const dish = readDish(recipe(thighs, ['large egg', 50, EGGS[2], '01', ['egg'], undefined, '01123', 9.5], cornstarch, OIL, soy, rice));
+    expect(dish.dishType).toBe('griddle-saute');
+    expect(dish.mixedDish).toBe(true);
+    expect(dish.lines.slice(1, 3).map((l) => l.role)).toEqual(['coating', 'coating']);
+  });
+
+  it('pork cubes browned in oil and braised in broth (a paprikash) are a simmered dish whose oil browns: no roux', () => {
+    const shoulder: Spec = ['pork shoulder, cut into cubes', 907, 'Pork, fresh, shoulder, whole, lean and fat, raw', '10', ['pork'], undefined, '10070', 17];
+    const noodles: Spec = ['egg noodles', 340, 'Noodles, egg, dry, enriched', '20', ['pasta'], undefined, '20109', 4.4];
+    const sour: Spec = ['sour cream', 230, 'Cream, sour, cultured', '01', ['sour-cream-yogurt'], undefined, '01056', 19];
+    const dish = readDish(recipe(shoulder, OIL, ONION, flour(16), BROTH, sour, SALT, noodles));
+    expect(dish.dishType).toBe('simmered-dish');
+    expect(dish.hasRoux).toBe(false);
+    expect(dish.lines[1]).toMatchObject({ role: 'cooking-fat', context: 'griddle-saute' });
+    // butter and flour thickening milk are still a roux
+    expect(readDish(recipe(PASTA, BUTTER(57), flour(23), MILK(488), CHEDDAR())).lines[1].role).toBe('fat-for-roux');
+  });
+
+  it('oats in bars are a baking grain: flour, sugar, butter and oats are a dough, not a pasta sauce', () => {
+    const bars = readDish(recipe(BUTTER(170), BROWN_SUGAR(220), SUGAR(50), EGGS, VANILLA, flour(188), SODA, SALT, OATS));
+    expect(bars.dishType).toBe('dough');
+    expect(bars.lines[3].role).toBe('structure');
+    expect(bars.lines[0].role).toBe('baking-fat');
+  });
+
+  it('fruit under a crumble of oats, flour, sugar and butter (an apple crisp) is an assembled bake whose crumble is its topping', () => {
+    const apples: Spec = ['apples, peeled and sliced', 1092, 'Apples, raw, with skin', '09', ['fruit'], undefined, '09003'];
+    const crisp = readDish(
+      recipe(
+        apples,
+        SUGAR(50),
+        ['old-fashioned rolled oats', 61, OATS[2], '08', ['rice-grain'], undefined, '08120', 6.5],
+        flour(62),
+        BROWN_SUGAR(110),
+        BUTTER(114, 'cold, cubed'),
+        SALT,
+      ),
+    );
+    expect(crisp.dishType).toBe('assembled-bake');
+    expect([crisp.lines[2].role, crisp.lines[3].role, crisp.lines[5].role]).toEqual(['topping', 'topping', 'topping']);
+    expect(crisp.hasRoux).toBe(false);
+  });
+
+  it("a yeast dough's mushrooms and ricotta go on it or in it (topping); a quick bread's zucchini is its moisture", () => {
+    const yeast: Spec = ['instant yeast', 9, "Leavening agents, yeast, baker's, active dry", '18', ['baking-leavener']];
+    const water: Spec = ['warm water', 237, 'Water, tap, municipal', '14', ['other']];
+    const mushrooms: Spec = ['sliced mushrooms', 70, 'Mushrooms, white, raw', '11', ['vegetable'], undefined, '11260'];
+    const ricotta: Spec = ['whole milk ricotta cheese', 246, 'Cheese, ricotta, whole milk', '01', ['soft-cheese'], undefined, '01036', 13];
+    const pizza = readDish(recipe(flour(312), yeast, SUGAR(4), SALT, water, mushrooms, ricotta));
+    expect(pizza.lines[5]).toMatchObject({ role: 'vegetable', context: 'topping' });
+    expect(pizza.lines[6].context).toBe('topping');
+    const zucchini: Spec = ['grated zucchini', 248, 'Squash, summer, zucchini, includes skin, raw', '11', ['vegetable'], undefined, '11477'];
+    expect(readDish(recipe(flour(375), SODA, SALT, EGGS, ['vegetable oil', 218, OIL[2], '04', ['cooking-fat']], SUGAR(300), zucchini)).lines[6].role).toBe(
+      'other',
+    );
+  });
+
+  it('a teaspoon or a tablespoon of sugar seasons (a stir-fry sauce, a yeast dough) and is held; more only sweetens and may drop', () => {
+    const yeast: Spec = ['instant yeast', 9, "Leavening agents, yeast, baker's, active dry", '18', ['baking-leavener']];
+    const dough = readDish(recipe(flour(375), yeast, SUGAR(4.2), SALT));
+    expect(dough.lines[2].role).toBe('seasoning');
+    expect(heldReasonFor(dough.lines[2].role)).toBe('seasoning: kept as written');
+    expect(readDish(recipe(BEEF, ONION, SUGAR(12.6))).lines[2].role).toBe('seasoning');
+    expect(readDish(recipe(BEEF, ONION, BROWN_SUGAR(27.5))).lines[2].role).toBe('sweetener');
+    // a spoonful sprinkled on top is no seasoning of the dish: it may be cut like any sugar
+    expect(
+      readDish(recipe(FLOUR, SUGAR(100), ['sugar', 12, 'Sugars, granulated', '19', ['sweetener'], 'for sprinkling on top'], MILK(400))).lines[2].role,
+    ).toBe('sweetener');
+  });
+
+  it('melted butter beside a crumb topping on a casserole is tossed with the crumbs: a topping that may halve, not a pan fat', () => {
+    const rules = parseRuleFile(ruleFile);
+    const chicken: Spec = ['shredded cooked chicken', 418, 'Chicken, broilers or fryers, meat only, roasted', '05', ['poultry'], undefined, '05013', 7];
+    const soup: Spec = ['condensed cream of chicken soup', 298, 'Soup, cream of chicken, canned, condensed', '06', ['condensed-soup']];
+    const crumbs: Spec = ['dry bread crumbs', 54, 'Bread crumbs, dry, grated, plain', '18', ['breadcrumb-coating'], 'for the top', '18079', 5.3];
+    const divan = readDish(recipe(chicken, soup, CHEDDAR(), crumbs, BUTTER(28, 'melted')));
+    expect(divan.dishType).toBe('assembled-bake');
+    expect(divan.lines[4]).toMatchObject({ role: 'topping', context: 'topping' });
+    const butter = line(BUTTER(28, 'melted')).food!;
+    const applicable = rulesForLine(rules, {
+      food: butter,
+      phrase: 'butter',
+      role: 'topping',
+      dishType: 'assembled-bake',
+      context: 'topping',
+      recipeKinds: new Set<LineKind>(['meat', 'condensed-soup', 'melting-cheese', 'crumbs', 'butter-oil']),
+    });
+    expect(keepScaleOf(applicable)).toMatchObject({ range: [0.5, 1], rule: { id: 'crumb-topping-butter-half' } });
+    // butter that sautés the onions of the same casserole stays a pan fat
+    expect(readDish(recipe(chicken, soup, CHEDDAR(), crumbs, BUTTER(28), ONION)).lines[4].role).toBe('cooking-fat');
   });
 });

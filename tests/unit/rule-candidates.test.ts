@@ -654,4 +654,117 @@ describe('issue 10 round 6: lean cuts, a lamb pie and its mash, cookie dough, qu
     expect(b.dishType).toBe('griddle-saute');
     expect(byRule(b.lines[4], 'flour-tortillas-to-corn-on-griddle')).toEqual([]);
   });
+
+  it('stir-fried noodles: spiralised zucchini for up to half of them, 2½ × the dry weight (what they weigh cooked, USDA SR28 yields); never under a cream sauce or where no soy or fish sauce stir-fries them', () => {
+    const loMein = [
+      at('20109', 'lo mein egg noodles', 227),
+      at('05096', 'boneless skinless chicken thighs, thinly sliced', 454),
+      at('04044', 'vegetable oil', 41),
+      at('01123', 'large eggs, beaten', 100),
+      at('16124', 'soy sauce', 64),
+    ];
+    const zucchini = byRule(recipeCandidates(engine, loMein, none()).lines[0], 'stir-fried-noodles-half-zucchini');
+    expect(zucchini.map((c) => [c.name, c.massRatio, c.maxShare, c.partial])).toEqual([['Squash, summer, zucchini, includes skin, raw', 2.5, 0.5, true]]);
+    // the band holds what dry noodles weigh cooked: egg 2.8×, rice 3.4×, wheat pasta 2.3× (SR28 kcal per 100 g dry ÷ cooked)
+    const [lo, hi] = zucchini[0].band!;
+    for (const [dry, cooked] of [
+      ['20109', '20110'],
+      ['20133', '20134'],
+      ['20120', '20121'],
+    ]) {
+      const yieldRatio = byNdb.get(dry)!.per100g.kcal / byNdb.get(cooked)!.per100g.kcal;
+      expect(yieldRatio).toBeGreaterThanOrEqual(lo * 2.5);
+      expect(yieldRatio).toBeLessThanOrEqual(hi * 2.5);
+    }
+    // cooked noodles: weight for weight
+    const cooked = recipeCandidates(engine, [at('20134', 'cooked rice noodles', 500), ...loMein.slice(1)], none());
+    expect(byRule(cooked.lines[0], 'stir-fried-cooked-noodles-half-zucchini').map((c) => [c.massRatio, c.band])).toEqual([[1, [0.9, 1.1]]]);
+    // no soy sauce: the noodles are not stir-fried, and a creamy pasta keeps its pasta
+    expect(byRule(recipeCandidates(engine, loMein.slice(0, 4), none()).lines[0], 'stir-fried-noodles-half-zucchini')).toEqual([]);
+    const alfredo = recipeCandidates(engine, [at('20120', 'fettuccine', 454), at('01053', 'heavy cream', 476), at('01032', 'grated Parmesan', 100)], none());
+    expect(alfredo.lines[0].candidates.some((c) => c.name.startsWith('Squash'))).toBe(false);
+  });
+
+  it("a quiche's half-and-half may be evaporated skim milk, 1:1 within ±10 % (it sets with the eggs); not without eggs to set it", () => {
+    const quiche = [
+      at('18338', 'unbaked pie crust', 229),
+      at('01123', 'large eggs', 200),
+      at('01049', 'half-and-half', 363),
+      at('01040', 'shredded Swiss cheese', 162),
+      at('02047', 'salt', 3),
+    ];
+    const r = recipeCandidates(engine, quiche, none());
+    expect(r.lines[2]).toMatchObject({ role: 'cream', context: 'filling' });
+    expect(byRule(r.lines[2], 'custard-cream-to-evaporated-skim').map((c) => [c.name.slice(0, 31), c.massRatio, c.band])).toEqual([
+      ['Milk, canned, evaporated, nonfa', 1, [0.9, 1.1]],
+    ]);
+    const noEggs = recipeCandidates(
+      engine,
+      [at('20120', 'penne', 454), at('01049', 'half-and-half', 363), at('01040', 'Swiss cheese', 162), at('18079', 'bread crumbs', 54, 'for the top')],
+      none(),
+    );
+    expect(byRule(noEggs.lines[1], 'custard-cream-to-evaporated-skim')).toEqual([]);
+  });
+
+  it('one egg is swapped whole or not at all: never half an egg kept; two or more may be split', () => {
+    const one = [
+      at('05096', 'boneless skinless chicken thighs, cut into pieces', 680),
+      at('01123', 'large egg', 50),
+      at('20027', 'cornstarch', 64),
+      at('04044', 'vegetable oil', 73),
+    ];
+    const whites = byRule(recipeCandidates(engine, one, none()).lines[1], 'egg-to-whites');
+    expect(whites).toHaveLength(1);
+    expect(whites[0].partial).toBeUndefined();
+    expect(whites[0].maxShare).toBe(1);
+    // a bake's rule allows only half the eggs: with one egg it offers nothing
+    const cake = oilBananaBread().map((l) => (l.food?.sourceId === '01123' ? { ...l, grams: 50 } : l));
+    expect(byRule(recipeCandidates(engine, cake, none()).lines[5], 'egg-in-bake-to-whites')).toEqual([]);
+    expect(byRule(recipeCandidates(engine, oilBananaBread(), none()).lines[5], 'egg-in-bake-to-whites')[0]).toMatchObject({ partial: true, maxShare: 0.5 });
+  });
+
+  it('fat-free cream cheese goes package for package (1:1 within ±10 %)', () => {
+    const bake = recipeCandidates(
+      engine,
+      [
+        at('01017', 'cream cheese, softened', 227),
+        at('11282', 'onion', 110),
+        at('23572', 'ground beef', 680),
+        at('20109', 'egg noodles', 340),
+        at('01009', 'shredded cheddar cheese', 226),
+      ],
+      none(),
+    );
+    const fatFree = byRule(bake.lines[0], 'cream-cheese-to-fat-free-in-fillings');
+    expect(fatFree.map((c) => [c.massRatio, c.band])).toEqual([[1, [0.9, 1.1]]]);
+  });
+
+  it('a cheesy rice casserole: riced cauliflower for up to half its cooked rice, 1:1 by weight within ±10 %; not a rice pudding, nor a bake with no cheese', () => {
+    const casserole = [
+      at('20045', 'cooked white rice', 474),
+      at('11093', 'frozen chopped broccoli', 454),
+      at('06043', 'condensed cream of mushroom soup', 298),
+      at('01077', 'whole milk', 122),
+      at('01009', 'shredded cheddar cheese', 170),
+    ];
+    const r = recipeCandidates(engine, casserole, none());
+    expect(r.dishType).toBe('assembled-bake');
+    expect(byRule(r.lines[0], 'casserole-rice-half-cauliflower').map((c) => [c.name, c.massRatio, c.maxShare, c.band])).toEqual([
+      ['Cauliflower, raw', 1, 0.5, [0.9, 1.1]],
+    ]);
+    const noCheese = recipeCandidates(engine, casserole.slice(0, 4), none());
+    expect(byRule(noCheese.lines[0], 'casserole-rice-half-cauliflower')).toEqual([]);
+    const pudding = recipeCandidates(
+      engine,
+      [
+        ...casserole.slice(0, 1),
+        at('01077', 'whole milk', 732),
+        at('19335', 'sugar', 100),
+        at('01009', 'cheddar', 20),
+        at('18079', 'crumbs', 30, 'for the top'),
+      ],
+      none(),
+    );
+    expect(byRule(pudding.lines[0], 'casserole-rice-half-cauliflower')).toEqual([]);
+  });
 });
