@@ -28,7 +28,7 @@
  */
 import { createServer } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { Browser, BrowserContext, Page, Request } from 'playwright-core';
 import { launchBrowser } from '../helpers/browser';
 import { DEMO_ACCOUNTS } from '../../server/seeders/demo-accounts';
 import { percentile } from './server-bench';
@@ -113,7 +113,7 @@ async function firstVisit(
     const page = await context.newPage();
     await page.addInitScript(markContent, content);
     const scripts: Promise<{ bytes: number; encoding: string }>[] = [];
-    page.on('requestfinished', (request) => {
+    const onFinished = (request: Request) => {
       if (request.resourceType() !== 'script') return;
       scripts.push(
         Promise.all([request.sizes(), request.response()]).then(([sizes, response]) => ({
@@ -121,7 +121,8 @@ async function firstVisit(
           encoding: response?.headers()['content-encoding'] ?? 'identity',
         })),
       );
-    });
+    };
+    page.on('requestfinished', onFinished);
     const t0 = performance.now();
     await page.goto(url, { waitUntil: 'commit' });
     await ready(page);
@@ -138,6 +139,8 @@ async function firstVisit(
       htmlMs: (performance.getEntriesByType('navigation')[0] as PerformanceNavigationTiming).responseEnd,
       documentMs: (window as unknown as { __documentMs: number }).__documentMs,
     }));
+    // counted once the page is idle: a script finishing while the context closes would have no sizes to read
+    page.off('requestfinished', onFinished);
     const done = await Promise.all(scripts);
     return {
       contentMs,
