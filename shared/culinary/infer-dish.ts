@@ -33,6 +33,11 @@ const PASTA_WORDS = /\b(pasta|spaghetti|macaroni|noodles?|linguine|fettuccine|pe
 const WOK_SAUCE_WORDS = /\b(soy sauce|oyster sauce|fish sauce|hoisin|tamari|shoyu)\b/i;
 /** the protein is the portion: a patty, a burger, a cutlet */
 const PORTION_WORDS = /\b(patt(y|ies)|burgers?|cutlets?)\b/i;
+/** fat kept cold to be cut or grated into flour, not melted or creamed into a batter */
+const CUT_IN_FAT = /\b(cold|chilled|frozen|cut in|cut into|grated)\b/i;
+/** a whole cut served as it is (a breast, a chop, a fillet): the portion, unless it is cut up for the dish */
+const WHOLE_CUT_WORDS = /\b(breasts?|chops?|fillets?|filets?|steaks?|thighs?|drumsticks?|tenderloins?)\b/i;
+const CUT_UP_WORDS = /\b(pieces|bite[- ]size|cubed|cubes|chunks|strips|nuggets|sliced|slices|diced|chopped|shredded|cut|ground|minced)\b/i;
 /** served in a bun or roll: the portion too, unless the meat is simmered in a sauce spooned onto it (sloppy joes) */
 const BUN_WORDS = /\b(buns?|rolls?)\b/i;
 /** meat cut small before it is coated and fried, then tossed with rice or a sauce: one part of a mixed dish */
@@ -152,6 +157,8 @@ export function inferDishType(lines: readonly CulinaryLine[], kinds: readonly Li
     // rich and dry (cookies, shortbread, pastry): the fat is the dough's structure
     const moisture = liquid + g('fruit', 'vegetable', 'legume');
     if (g('butter-oil') >= 0.5 * flour && moisture < 0.25 * flour) return 'dough';
+    // cold fat cut into the flour (biscuits, scones, a pie crust) is a dough: its flakes are the fat's own
+    if (lines.some((l, i) => kinds[i] === 'butter-oil' && CUT_IN_FAT.test(`${l.phrase} ${l.comment ?? ''}`))) return 'dough';
     return 'leavened-bake';
   }
   // cream cheese beaten with sugar and eggs and baked (a cheesecake) is a bake: its eggs, cheese and sugar are structure
@@ -415,7 +422,8 @@ export function readDish(lines: readonly CulinaryLine[], overrides: Readonly<Rec
   const bitePieces = lines.some((l, i) => kinds[i] === 'meat' && BITE_PIECE_WORDS.test(`${l.phrase} ${l.comment ?? ''}`));
   const shaped = (kinds.includes('meat') && kinds.includes('crumbs') && kinds.includes('egg')) || (breaded && !bitePieces);
   const words = lines.map((l) => `${l.phrase} ${l.comment ?? ''}`);
-  const portion = words.some((w) => PORTION_WORDS.test(w)) || (dishType !== 'simmered-dish' && words.some((w) => BUN_WORDS.test(w)));
+  const wholeCut = lines.some((l, i) => (kinds[i] === 'meat' || kinds[i] === 'fish') && WHOLE_CUT_WORDS.test(words[i]) && !CUT_UP_WORDS.test(words[i]));
+  const portion = wholeCut || words.some((w) => PORTION_WORDS.test(w)) || (dishType !== 'simmered-dish' && words.some((w) => BUN_WORDS.test(w)));
   const mixedDish = MIXED_TYPES.includes(dishType) && !shaped && !portion;
   const panSauced = kinds.includes('meat') || kinds.includes('fish');
   const mashPotato = dishType === 'assembled-bake' && enrichment.size > 0 ? mashedPotatoLine(lines, kinds) : -1;

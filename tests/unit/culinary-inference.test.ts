@@ -287,6 +287,22 @@ describe('rule matching by food class and dish context', () => {
   });
 });
 
+describe('cold fat cut into flour, and rice cooked in the pot', () => {
+  it('biscuits with cold butter cut in are a dough, where the quick-bread swaps (yogurt for the butter or the buttermilk) do not hold', () => {
+    const cold = (comment?: string): Spec => ['cold butter', 85, 'Butter, with salt', '01', ['cooking-fat'], comment, '01001', 81];
+    const buttermilk: Spec = ['buttermilk', 184, 'Milk, buttermilk, fluid, cultured, lowfat', '01', ['dairy-milk'], undefined, '01088', 0.9];
+    expect(inferDishType(recipe(FLOUR, POWDER, SALT, cold(), buttermilk))).toBe('dough');
+    const melted: Spec = ['butter', 85, 'Butter, with salt', '01', ['cooking-fat'], 'melted', '01001', 81];
+    expect(inferDishType(recipe(FLOUR, POWDER, SALT, melted, buttermilk, SUGAR(100), EGGS))).toBe('leavened-bake');
+  });
+
+  it('raw white rice becomes brown rice only where the rice is not cooked in the dish’s own broth or water (common practice)', () => {
+    const brown = parseRuleFile(ruleFile).find((r) => r.id === 'white-rice-to-brown')!;
+    expect(ruleHoldsIn(brown, 'starch', 'griddle-saute', 'filling', true, new Set<LineKind>(['starch', 'meat']))).toBe(true);
+    expect(ruleHoldsIn(brown, 'starch', 'simmered-dish', 'filling', true, new Set<LineKind>(['starch', 'meat', 'liquid']))).toBe(false);
+  });
+});
+
 describe('mixed dishes and baked custards', () => {
   const rules = parseRuleFile(ruleFile);
   const CHICKEN: Spec = [
@@ -312,6 +328,25 @@ describe('mixed dishes and baked custards', () => {
     expect(readDish(recipe(BEEF, BUNS, CHEDDAR(), SALT)).mixedDish).toBe(false);
     // a bake is never a mixed dish
     expect(readDish(recipe(FLOUR, MILK(480), EGGS, SUGAR(25), POWDER, SALT, BUTTER(40))).mixedDish).toBe(false);
+  });
+
+  it('whole breasts, chops or fillets served as they are are the portion; cut up for the dish, one part of it (common practice)', () => {
+    const breasts: Spec = [
+      'boneless skinless chicken breasts',
+      680,
+      'Chicken, broiler or fryers, breast, skinless, boneless, meat only, raw',
+      '05',
+      ['poultry'],
+      undefined,
+      '05746',
+      2.6,
+    ];
+    const cream: Spec = ['heavy cream', 238, 'Cream, fluid, heavy whipping', '01', ['cream'], undefined, '01053', 37];
+    const oil: Spec = ['olive oil', 27, 'Oil, olive, salad or cooking', '04', ['cooking-fat'], undefined, '04053', 100];
+    expect(readDish(recipe(breasts, oil, BROTH, cream, ONION, SALT)).mixedDish).toBe(false);
+    const cubed: Spec = [...breasts];
+    cubed[5] = 'cut into 1-inch pieces';
+    expect(readDish(recipe(cubed, oil, BROTH, cream, ONION, SALT)).mixedDish).toBe(true);
   });
 
   it('eggs set with milk around bread (a strata, a breakfast casserole) are a custard in an assembled bake', () => {
